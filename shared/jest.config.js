@@ -1,0 +1,7 @@
+module.exports = {
+  testEnvironment: 'node',
+  rootDir: 'src',
+  testRegex: '.*\\.spec\\.ts$',
+  transform: require('../jest.swc.js'),
+  transformIgnorePatterns: ['/node_modules/(?!(@flatten-js)/)'],
+};
