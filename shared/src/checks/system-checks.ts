@@ -1,4 +1,4 @@
 import type { CheckDefinition } from './check-definition';
 
-/** Checks that do not depend on where the engine sits: drivetrain, oiling, management, fuel, cooling, belt, cam. */
+/** Drivetrain, oiling, management, fuel, cooling, belt and cam checks; each says whether it depends on placement. */
 export const SYSTEM_CHECKS: CheckDefinition[] = [];
