@@ -35,6 +35,46 @@ export interface FitSettings {
   /** Rev limit above which a stock crank-driven oil pump is flagged, where the pump gives no limit of its own. */
   stockOilPumpLimitRpm: number;
   oilPumpTightBandRpm: number;
+  /** Maximum U-joint operating angle against driveshaft speed, interpolated between rows. */
+  uJointMaxAngleBySpeed: Array<{ rpm: number; maxDeg: number }>;
+  /** A U-joint figure within this much of a limit is reported `tight`. */
+  uJointTightBandDeg: number;
+  /** A shaft speed within this much of its allowed fraction of critical is reported `tight`. */
+  shaftSpeedTightBandRpm: number;
+  /** Pickup screen height above the sump floor. */
+  pickupScreenMinGapMm: number;
+  pickupScreenMaxGapMm: number;
+  pickupScreenTightBandMm: number;
+  /** The pan floor under the screen counts as the sump floor when within this of it. */
+  pickupSumpToleranceMm: number;
+  /** Fuel and cooling figures within this fraction of their requirement are reported `tight`. */
+  fuelTightBandFraction: number;
+  coolingTightBandFraction: number;
+  /** How far the fuel regulator may sit from the engine's rated fuel pressure. */
+  fuelPressureTolerancePsi: number;
+  /** How far the installed cam timing may sit from the recommended total. */
+  camTimingToleranceDeg: number;
+  /** A stock belt within this much of either end of the tensioner's range is reported `tight`. */
+  beltTightBandMm: number;
+  minPulleyDiameterMm: number;
+  /** Labor for shimming the pinion angle (axle wedges or adjustable arms). */
+  pinionAngleShimHours: number;
+  /** Labor for rerouting crossed coolant hoses. */
+  coolantHoseRerouteHours: number;
+  /** Envelope and mount thresholds of the geometric checks (fit engine, geometry owner). */
+  /** Offset a mount boss may sit from its pad and still bolt up directly (slotted holes, rubber give). */
+  mountDirectFitToleranceMm: number;
+  /** Thickest spacer that may go under a transmission mount before the crossmember must be reworked. */
+  transmissionMountSpacerMaxMm: number;
+  /** Labor hours of the envelope checks' fabrication remedies. */
+  crossmemberFabricationHours: number;
+  steeringLinkageFabricationHours: number;
+  axleBumpStopFabricationHours: number;
+  hoodFabricationHours: number;
+  radiatorSupportFabricationHours: number;
+  firewallFabricationHours: number;
+  tunnelFabricationHours: number;
+  railClearanceFabricationHours: number;
 }
 
 export const DEFAULT_FIT_SETTINGS: FitSettings = {
@@ -83,6 +123,62 @@ export const DEFAULT_FIT_SETTINGS: FitSettings = {
   // Common practice (no published source): a stock pump driven at crank speed is flagged above about 6,000 rpm.
   stockOilPumpLimitRpm: 6000,
   oilPumpTightBandRpm: 250,
+  // Source: published driveline-maker guidance: 5000 rpm 3.2°, 4500 3.7°, 4000 4.2°, 3500 5.0°; the slower rows from memory.
+  uJointMaxAngleBySpeed: [
+    { rpm: 1500, maxDeg: 11.5 },
+    { rpm: 2000, maxDeg: 8.7 },
+    { rpm: 2500, maxDeg: 7.0 },
+    { rpm: 3000, maxDeg: 5.8 },
+    { rpm: 3500, maxDeg: 5.0 },
+    { rpm: 4000, maxDeg: 4.2 },
+    { rpm: 4500, maxDeg: 3.7 },
+    { rpm: 5000, maxDeg: 3.2 },
+  ],
+  // Common practice (no published source): a quarter degree is about what an angle finder reads to.
+  uJointTightBandDeg: 0.25,
+  // Common practice (no published source).
+  shaftSpeedTightBandRpm: 250,
+  // Common practice (no published source): the pickup screen sits 1/4–3/8 in above the sump floor.
+  pickupScreenMinGapMm: 6,
+  pickupScreenMaxGapMm: 10,
+  pickupScreenTightBandMm: 1,
+  // Common practice (no published source).
+  pickupSumpToleranceMm: 5,
+  // Common practice (no published source).
+  fuelTightBandFraction: 0.05,
+  coolingTightBandFraction: 0.05,
+  // Common practice (no published source): regulators are set within a few psi of the rated pressure.
+  fuelPressureTolerancePsi: 3,
+  // Common practice (no published source): a cam is degreed in to within a degree of its card.
+  camTimingToleranceDeg: 1,
+  // Common practice (no published source).
+  beltTightBandMm: 5,
+  // Source: ISO 9981:2020, PK profile pulleys: minimum effective diameter 45 mm.
+  minPulleyDiameterMm: 45,
+  // Common practice (no published source): set the pinion angle with wedge shims or adjustable arms.
+  pinionAngleShimHours: 1.5,
+  // Common practice (no published source): crossover hoses and brackets across the front of the engine.
+  coolantHoseRerouteHours: 1,
+  // Geometric checks (fit engine). Common practice (no published source): slotted mount holes and rubber isolators take up about 3 mm.
+  mountDirectFitToleranceMm: 3,
+  // Common practice (no published source): stacked spacers beyond an inch make a poor mount; rework the crossmember instead.
+  transmissionMountSpacerMaxMm: 25.4,
+  // Common practice (no published source): notch and plate, or cut out and re-weld, the front crossmember.
+  crossmemberFabricationHours: 8,
+  // Common practice (no published source): relocate or re-route the steering linkage, then align.
+  steeringLinkageFabricationHours: 5,
+  // Common practice (no published source): taller bump stops to limit axle up-travel.
+  axleBumpStopFabricationHours: 2,
+  // Common practice (no published source): fit a cowl or scoop hood, or a lower air-cleaner base.
+  hoodFabricationHours: 4,
+  // Common practice (no published source): move the radiator support forward.
+  radiatorSupportFabricationHours: 4,
+  // Common practice (no published source): recess the firewall behind the heads.
+  firewallFabricationHours: 8,
+  // Common practice (no published source): open up and re-skin the transmission tunnel.
+  tunnelFabricationHours: 6,
+  // Common practice (no published source): relieve and plate the frame rail, or re-route the exhaust.
+  railClearanceFabricationHours: 4,
 };
 
 export function resolveFitSettings(overrides: Partial<FitSettings> = {}): FitSettings {

@@ -219,6 +219,10 @@ export interface DriveshaftSpec {
   wallMm: number;
   /** Steel by default; the elastic modulus is only used by the first-principles cross-check. */
   material: 'steel' | 'aluminum';
+  /** An existing shaft to reuse, U-joint centre to centre; absent when a new shaft is cut to length. */
+  lengthMm?: number;
+  /** Growth of the output-to-pinion distance from ride height to full droop, taken by the slip yoke. */
+  suspensionGrowthMm?: number;
 }
 
 export interface MountAdapterSpec {

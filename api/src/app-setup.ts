@@ -1,0 +1,23 @@
+import { INestApplication } from '@nestjs/common';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
+
+export const API_PREFIX = 'api';
+
+/** Everything main.ts and the e2e tests share, so tests run the app exactly as served. */
+export function configureApp(app: INestApplication): INestApplication {
+  app.use(correlationIdMiddleware);
+  app.setGlobalPrefix(API_PREFIX);
+  app.enableShutdownHooks();
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Swapwright API')
+      .setDescription('Plan, check, quote and build engine swaps. Errors share one shape: see ErrorResponseDto.')
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, { jsonDocumentUrl: `${API_PREFIX}/docs-json` });
+  return app;
+}

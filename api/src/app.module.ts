@@ -1,0 +1,66 @@
+import { Module } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import { NoCacheInterceptor } from './common/interceptors/no-cache.interceptor';
+import { createValidationPipe } from './common/pipes/validation.pipe';
+import { AppConfigService } from './config/app-config';
+import { validateEnv } from './config/env.validation';
+import { CustomersModule } from './customers/customers.module';
+import { buildDataSourceOptions } from './database/typeorm-options';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { MembershipsModule } from './memberships/memberships.module';
+import { ProjectsModule } from './projects/projects.module';
+import { ShopsModule } from './shops/shops.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, cache: true, validate: validateEnv }),
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: AppConfigService) => ({
+        ...buildDataSourceOptions({
+          DB_HOST: config.get('DB_HOST', { infer: true }),
+          DB_PORT: config.get('DB_PORT', { infer: true }),
+          DB_USER: config.get('DB_USER', { infer: true }),
+          DB_PASSWORD: config.get('DB_PASSWORD', { infer: true }),
+          DB_NAME: config.get('DB_NAME', { infer: true }),
+        }),
+        retryAttempts: 3,
+        retryDelay: 1000,
+      }),
+    }),
+    ServeStaticModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: AppConfigService) => {
+        const rootPath = config.get('WEB_DIST_DIR', { infer: true });
+        // Every non-/api path gets the web app's index.html (client-side routing).
+        return rootPath ? [{ rootPath, exclude: ['/api', '/api/{*rest}'] }] : [];
+      },
+    }),
+    MailModule,
+    UsersModule,
+    ShopsModule,
+    MembershipsModule,
+    AuthModule,
+    CustomersModule,
+    ProjectsModule,
+    HealthModule,
+  ],
+  providers: [
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+    { provide: APP_PIPE, useFactory: createValidationPipe },
+    // Order matters: authentication first, then the role check.
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+    { provide: APP_INTERCEPTOR, useClass: NoCacheInterceptor },
+  ],
+})
+export class AppModule {}

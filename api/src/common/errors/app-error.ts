@@ -1,0 +1,35 @@
+import { HttpException } from '@nestjs/common';
+
+/**
+ * An error a person can act on: an HTTP status, a stable machine code and a readable sentence.
+ * Each module lists its own in `<feature>.errors.ts`; the global filter turns them into the error body.
+ */
+export class AppError extends HttpException {
+  constructor(
+    status: number,
+    public readonly code: string,
+    message: string,
+    public readonly details: string[] = [],
+  ) {
+    super({ code, message, details }, status);
+  }
+}
+
+export const CommonErrors = {
+  validation: (details: string[]) =>
+    new AppError(400, 'validation_failed', details[0] ?? 'The request is not valid.', details),
+  unauthorized: (message = 'Sign in to continue.') => new AppError(401, 'unauthorized', message),
+  sessionExpired: () => new AppError(401, 'session_expired', 'Your session has expired. Sign in again.'),
+  forbidden: (message = 'Your role does not allow this action in this shop.') => new AppError(403, 'forbidden', message),
+  duplicate: () => new AppError(409, 'duplicate', 'A record with these values already exists.'),
+  badReference: () =>
+    new AppError(400, 'bad_reference', 'The request refers to a record that does not exist in your shop.'),
+  stillReferenced: () =>
+    new AppError(409, 'still_referenced', 'This record is still used by other records; remove those first.'),
+  internal: () =>
+    new AppError(
+      500,
+      'internal_error',
+      'Something went wrong on our side. Try again in a moment; if it keeps happening, quote the correlation id.',
+    ),
+};

@@ -1,0 +1,27 @@
+import { Role } from './role';
+
+/**
+ * Who may do what, inside their own shop. Routes use these groups in `@Roles(...)`;
+ * a route without `@Roles` is open to every signed-in member; `@Public()` routes need no sign-in.
+ *
+ * | route group                          | owner | estimator | fabricator        | counter | customer   |
+ * | ------------------------------------ | ----- | --------- | ----------------- | ------- | ---------- |
+ * | GET /auth/me, GET /shops/current     | yes   | yes       | yes               | yes     | yes        |
+ * | PATCH /shops/current                 | yes   | -         | -                 | -       | -          |
+ * | /memberships, /invitations (manage)  | yes   | -         | -                 | -       | -          |
+ * | GET /customers, /customers/:id       | yes   | yes       | yes               | yes     | -          |
+ * | POST/PATCH/DELETE /customers         | yes   | yes       | -                 | -       | -          |
+ * | GET /projects, /projects/:id         | yes   | yes       | yes               | yes     | own only   |
+ * | POST /projects, DELETE /projects/:id | yes   | yes       | -                 | -       | -          |
+ * | PATCH /projects/:id                  | yes   | yes       | placement, status | -       | -          |
+ */
+export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
+export const SHOP_ADMINS: Role[] = ['owner'];
+export const STAFF: Role[] = ['owner', 'estimator', 'fabricator', 'counter'];
+export const CUSTOMER_READERS: Role[] = STAFF;
+export const CUSTOMER_WRITERS: Role[] = ['owner', 'estimator'];
+export const PROJECT_READERS: Role[] = ALL_ROLES;
+export const PROJECT_WRITERS: Role[] = ['owner', 'estimator'];
+export const PROJECT_EDITORS: Role[] = ['owner', 'estimator', 'fabricator'];
+/** Fields a fabricator may change on a project; the rest of a PATCH is refused for them. */
+export const FABRICATOR_PROJECT_FIELDS = ['placement', 'status'] as const;

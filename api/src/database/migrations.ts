@@ -1,0 +1,16 @@
+import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
+import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
+import { CreateCustomers1796100002000 } from './migrations/1796100002000-create-customers';
+import { CreateMemberships1796100003000 } from './migrations/1796100003000-create-memberships';
+import { CreateAuthTokens1796100004000 } from './migrations/1796100004000-create-auth-tokens';
+import { CreateProjects1796100005000 } from './migrations/1796100005000-create-projects';
+
+/** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
+export const MIGRATIONS = [
+  CreateUsers1796100000000,
+  CreateShops1796100001000,
+  CreateCustomers1796100002000,
+  CreateMemberships1796100003000,
+  CreateAuthTokens1796100004000,
+  CreateProjects1796100005000,
+];

@@ -1,0 +1,45 @@
+import { Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { createTransport, Transporter } from 'nodemailer';
+import { AppConfigService } from '../config/app-config';
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+}
+
+@Injectable()
+export class MailService {
+  private readonly logger = new Logger(MailService.name);
+  private readonly transport: Transporter;
+  private readonly from: string;
+
+  constructor(config: ConfigService) {
+    const typed = config as AppConfigService;
+    this.from = typed.get('MAIL_FROM', { infer: true });
+    this.transport = createTransport({
+      host: typed.get('SMTP_HOST', { infer: true }),
+      port: typed.get('SMTP_PORT', { infer: true }),
+      secure: false,
+      ignoreTLS: true,
+    });
+  }
+
+  async send(mail: OutgoingMail): Promise<void> {
+    await this.transport.sendMail({ from: this.from, ...mail });
+    this.logger.log(`Mail "${mail.subject}" sent`);
+  }
+
+  /** For mails whose failure must not undo the request (the user can ask again); logs instead of throwing. */
+  async sendOrLog(mail: OutgoingMail): Promise<boolean> {
+    try {
+      await this.send(mail);
+      return true;
+    } catch (error) {
+      this.logger.error(`Mail "${mail.subject}" could not be sent: ${error instanceof Error ? error.message : error}`);
+      return false;
+    }
+  }
+}

@@ -1,0 +1,35 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { decimalTransformer } from '../database/column-transformers';
+
+export type UnitSystem = 'in' | 'mm';
+export const UNIT_SYSTEMS: UnitSystem[] = ['in', 'mm'];
+
+@Entity('shops')
+export class Shop {
+  @PrimaryColumn({ type: 'char', length: 36 })
+  id: string;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 2, default: 'in' })
+  unitSystem: UnitSystem;
+
+  @Column({ type: 'decimal', precision: 10, scale: 2, default: 0, transformer: decimalTransformer })
+  laborRatePerHour: number;
+
+  @Column({ type: 'decimal', precision: 5, scale: 2, default: 0, transformer: decimalTransformer })
+  taxRatePercent: number;
+
+  @Column({ type: 'decimal', precision: 5, scale: 2, default: 0, transformer: decimalTransformer })
+  shopSuppliesPercent: number;
+
+  @Column({ type: 'char', length: 3, default: 'USD' })
+  currency: string;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3 })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: 'datetime', precision: 3 })
+  updatedAt: Date;
+}

@@ -1,0 +1,35 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { EntityManager, Repository } from 'typeorm';
+import { User } from './user.entity';
+import { UserErrors } from './users.errors';
+
+export function normalizeEmail(email: string): string {
+  return email.trim().toLowerCase();
+}
+
+@Injectable()
+export class UsersService {
+  constructor(@InjectRepository(User) private readonly users: Repository<User>) {}
+
+  findByEmail(email: string): Promise<User | null> {
+    return this.users.findOne({ where: { email: normalizeEmail(email) } });
+  }
+
+  findById(id: string): Promise<User | null> {
+    return this.users.findOne({ where: { id } });
+  }
+
+  /** Inside the caller's transaction: sign-up and invitation acceptance create more rows with it. */
+  async create(manager: EntityManager, input: { email: string; name: string; passwordHash: string }): Promise<User> {
+    const email = normalizeEmail(input.email);
+    if (await manager.exists(User, { where: { email } })) throw UserErrors.emailTaken();
+    const user = manager.create(User, { id: randomUUID(), email, name: input.name.trim(), passwordHash: input.passwordHash });
+    return manager.save(user);
+  }
+
+  async setPasswordHash(manager: EntityManager, userId: string, passwordHash: string): Promise<void> {
+    await manager.update(User, { id: userId }, { passwordHash });
+  }
+}

@@ -1,0 +1,92 @@
+import { maxOperatingAngleAtSpeed } from '../../driveline/operating-angles';
+import type { Finding, Remedy } from '../../types/finding';
+import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { describeShaftSpeed, drivelineLayout } from './driveline-layout';
+import { degrees } from '../../units/figure-format';
+
+const FIELDS: FindingFields = {
+  checkId: 'drivetrain.u-joint-angles',
+  group: 'drivetrain',
+  title: 'U-joint operating angles',
+  unit: 'deg',
+  limit: 'max',
+  thresholdSource:
+    'Published driveline-maker guidance: each joint at least 1/2°, front and rear within 1°, at most 3° for vibration-free running, and a maximum that falls with shaft speed.',
+};
+
+interface Constraint {
+  name: string;
+  measured: number;
+  required: number;
+  limit: 'min' | 'max';
+  margin: number;
+}
+
+export function checkUJointAngles({ spec, settings }: CheckContext): Finding {
+  const result = drivelineLayout(spec);
+  if (!result.ok) return unknownFinding(FIELDS, result.missing);
+  const { angles, shaftSpeed, transmission } = result.layout;
+  const speedMaxDeg = shaftSpeed
+    ? maxOperatingAngleAtSpeed(shaftSpeed.rpm, settings.uJointMaxAngleBySpeed, settings.uJointMinDeg)
+    : settings.uJointMaxDeg;
+  const largest = Math.max(angles.frontDeg, angles.rearDeg);
+  const smallest = Math.min(angles.frontDeg, angles.rearDeg);
+  const constraints: Constraint[] = [
+    { name: 'largest joint angle', measured: largest, required: speedMaxDeg, limit: 'max', margin: speedMaxDeg - largest },
+    {
+      name: 'front–rear difference',
+      measured: angles.differenceDeg,
+      required: settings.uJointMaxDifferenceDeg,
+      limit: 'max',
+      margin: settings.uJointMaxDifferenceDeg - angles.differenceDeg,
+    },
+    { name: 'smallest joint angle', measured: smallest, required: settings.uJointMinDeg, limit: 'min', margin: smallest - settings.uJointMinDeg },
+  ];
+  const governing = constraints.reduce((worst, c) => (c.margin < worst.margin ? c : worst));
+  let status = statusFromMargin(governing.margin, settings.uJointTightBandDeg);
+  const overSmoothLimit = largest > settings.uJointMaxDeg;
+  if (status === 'ok' && overSmoothLimit) status = 'tight';
+  const speedText = shaftSpeed ? ` (${describeShaftSpeed(shaftSpeed)}, maximum ${degrees(speedMaxDeg, 1)})` : '';
+  const figures = `Front joint ${degrees(angles.frontDeg)}, rear ${degrees(angles.rearDeg)}, difference ${degrees(angles.differenceDeg)}; shaft at ${degrees(angles.shaftDeg)}, transmission ${degrees(angles.transmissionDeg)}, pinion ${degrees(angles.pinionDeg)}${speedText}.`;
+  let verdict: string;
+  if (status === 'fails') {
+    verdict = ` The ${governing.name} is ${degrees(governing.measured)} against a ${governing.limit === 'max' ? 'maximum' : 'minimum'} of ${degrees(governing.required)}.`;
+  } else if (status === 'tight' && governing.margin >= settings.uJointTightBandDeg && overSmoothLimit) {
+    verdict = ` Above ${degrees(settings.uJointMaxDeg, 1)} the joints will not run vibration-free.`;
+  } else if (status === 'tight') {
+    verdict = ` The ${governing.name} is within ${degrees(settings.uJointTightBandDeg)} of its limit of ${degrees(governing.required)}.`;
+  } else {
+    verdict = ' Within the limits.';
+  }
+  return measuredFinding(
+    { ...FIELDS, limit: governing.limit, against: transmission.id },
+    { measured: governing.measured, required: governing.required, margin: governing.margin, status },
+    figures + verdict,
+    uJointRemedies(angles.transmissionDeg, angles.pinionDeg, settings.pinionAngleShimHours),
+  );
+}
+
+function uJointRemedies(transmissionDeg: number, pinionDeg: number, shimHours: number): Remedy[] {
+  return [
+    {
+      kind: 'fabrication',
+      operation: `Set the pinion angle to ${degrees(transmissionDeg, 1)}, parallel to the transmission (now ${degrees(pinionDeg, 1)})`,
+      laborHours: shimHours,
+      note: 'Wedge shims or adjustable arms. Support the axle on stands rated for the load before loosening it; recheck both joint angles at ride height.',
+    },
+    {
+      kind: 'fabrication',
+      operation: 'Raise or lower the transmission crossmember to bring the shaft angle closer to the transmission and pinion',
+      laborHours: 2,
+      note: 'Moving the transmission also changes the installed tilt; rerun the fit check afterwards.',
+    },
+  ];
+}
+
+export const U_JOINT_ANGLES_CHECK: CheckDefinition = {
+  id: FIELDS.checkId,
+  group: FIELDS.group,
+  title: FIELDS.title,
+  dependsOnPlacement: true,
+  run: checkUJointAngles,
+};

@@ -1,0 +1,57 @@
+import { fuelMassFlowLbhFromKw, requiredPumpFlowLph } from '../../fuel/fuel-flow';
+import type { Finding } from '../../types/finding';
+import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
+import { efiFuelSupplyRemedies } from './fuel-pump-flow';
+
+const FIELDS: FindingFields = {
+  checkId: 'fuel.system-pressure',
+  group: 'fuel',
+  title: 'Fuel system pressure',
+  unit: 'psi',
+  limit: 'match',
+  thresholdSource: "The engine's rated fuel pressure; the regulator within a few psi of it (common practice, no published source).",
+};
+
+export function checkFuelSystemPressure({ spec, settings }: CheckContext): Finding {
+  const system = spec.chassis.fuelSystem;
+  const required = spec.engine.fuelPressurePsi;
+  const minFlow = requiredPumpFlowLph(
+    fuelMassFlowLbhFromKw(spec.goals.targetPowerKw, settings.bsfcLbPerHpH),
+    settings.fuelDensityLbPerGal,
+    settings.fuelPumpMargin,
+  );
+  if (system.kind === 'carburetor') {
+    return measuredFinding(
+      FIELDS,
+      { measured: system.regulatorPsi, required, margin: -Math.abs(required - system.regulatorPsi), status: 'fails' },
+      `The chassis has a carburettor fuel system at ${system.regulatorPsi.toFixed(1)} psi; the engine's injection needs ${required.toFixed(1)} psi, so the system needs an injection pump and regulator.`,
+      efiFuelSupplyRemedies(spec, minFlow),
+    );
+  }
+  const difference = system.regulatorPsi - required;
+  const margin = settings.fuelPressureTolerancePsi - Math.abs(difference);
+  const status = difference === 0 ? 'ok' : statusFromMargin(margin, settings.fuelPressureTolerancePsi);
+  return measuredFinding(
+    FIELDS,
+    { measured: system.regulatorPsi, required, margin, status },
+    `The chassis regulator holds ${system.regulatorPsi.toFixed(1)} psi; the engine is rated at ${required.toFixed(1)} psi (${difference >= 0 ? '+' : ''}${difference.toFixed(1)} psi).`,
+    [
+      {
+        kind: 'part',
+        category: 'fuel-regulator',
+        requires: { pressurePsi: required },
+        partIds: [],
+        note: `Set or replace the regulator for ${required.toFixed(1)} psi and check it with a gauge. ${FUEL_SYSTEM_CAUTION}`,
+      },
+    ],
+  );
+}
+
+export const FUEL_SYSTEM_PRESSURE_CHECK: CheckDefinition = {
+  id: FIELDS.checkId,
+  group: FIELDS.group,
+  title: FIELDS.title,
+  dependsOnPlacement: false,
+  run: checkFuelSystemPressure,
+};

@@ -1,0 +1,77 @@
+import { fuelMassFlowLbhFromKw, requiredPumpFlowLph } from '../../fuel/fuel-flow';
+import type { Finding, Remedy } from '../../types/finding';
+import type { FitSpec } from '../../types/fit-spec';
+import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
+
+const FIELDS: FindingFields = {
+  checkId: 'fuel.pump-flow',
+  group: 'fuel',
+  title: 'Fuel pump flow for the target power',
+  unit: 'L/h',
+  limit: 'min',
+  thresholdSource:
+    'Fuel mass flow = HP × BSFC (published EFI sizing); volume flow from gasoline density 6.0 lb/gal (US DOE Alternative Fuels Data Center); 20–30 % pump margin (common practice).',
+};
+
+/** The pump, regulator and safety advice to feed an injected engine. */
+export function efiFuelSupplyRemedies(spec: FitSpec, minFlowLph: number): Remedy[] {
+  const psi = spec.engine.fuelPressurePsi;
+  return [
+    {
+      kind: 'part',
+      category: 'fuel-pump',
+      requires: { minFlowLph: Math.ceil(minFlowLph), minPressurePsi: psi },
+      partIds: [],
+      note: `An in-tank or inline pump that delivers at least ${Math.ceil(minFlowLph)} L/h at ${psi.toFixed(1)} psi, with hose and filter rated for injection pressure. ${FUEL_SYSTEM_CAUTION}`,
+    },
+    {
+      kind: 'part',
+      category: 'fuel-regulator',
+      requires: { pressurePsi: psi },
+      partIds: [],
+      note: `A regulator set to ${psi.toFixed(1)} psi (return or returnless, to suit the tank). ${FUEL_SYSTEM_CAUTION}`,
+    },
+  ];
+}
+
+export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
+  const system = spec.chassis.fuelSystem;
+  const massFlow = fuelMassFlowLbhFromKw(spec.goals.targetPowerKw, settings.bsfcLbPerHpH);
+  const required = requiredPumpFlowLph(massFlow, settings.fuelDensityLbPerGal, settings.fuelPumpMargin);
+  const needPsi = spec.engine.fuelPressurePsi;
+  const remedies = efiFuelSupplyRemedies(spec, required);
+  const need = `The engine burns ${massFlow.toFixed(0)} lb/h at ${spec.goals.targetPowerKw.toFixed(0)} kW, so the pump must deliver ${required.toFixed(0)} L/h at ${needPsi.toFixed(1)} psi (${Math.round(settings.fuelPumpMargin * 100)} % margin)`;
+  if (system.kind === 'carburetor') {
+    return measuredFinding(
+      FIELDS,
+      { measured: 0, required, margin: -required, status: 'fails' },
+      `${need}; the chassis has a carburettor fuel system whose low-pressure pump cannot feed injection.`,
+      remedies,
+    );
+  }
+  if (system.pumpRatedPsi < needPsi) {
+    return measuredFinding(
+      FIELDS,
+      { measured: 0, required, margin: -required, status: 'fails' },
+      `${need}; the chassis pump is rated at only ${system.pumpRatedPsi.toFixed(1)} psi.`,
+      remedies,
+    );
+  }
+  const margin = system.pumpFlowLph - required;
+  const status = statusFromMargin(margin, settings.fuelTightBandFraction * required);
+  return measuredFinding(
+    FIELDS,
+    { measured: system.pumpFlowLph, required, margin, status },
+    `${need}; the chassis pump gives ${system.pumpFlowLph.toFixed(0)} L/h at ${system.pumpRatedPsi.toFixed(1)} psi.`,
+    remedies.slice(0, 1),
+  );
+}
+
+export const FUEL_PUMP_FLOW_CHECK: CheckDefinition = {
+  id: FIELDS.checkId,
+  group: FIELDS.group,
+  title: FIELDS.title,
+  dependsOnPlacement: false,
+  run: checkFuelPumpFlow,
+};

@@ -1,0 +1,92 @@
+import { oilSystemMismatches } from '../../oiling/oil-system';
+import type { Finding, Remedy } from '../../types/finding';
+import type { FitSpec, OilPanSpec, OilPickupSpec, OilPumpSpec } from '../../types/fit-spec';
+import { measuredFinding, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+
+const FIELDS: FindingFields = {
+  checkId: 'oiling.pan-pickup-pump',
+  group: 'oiling',
+  title: 'Oil pan, pickup and pump agree',
+  unit: 'count',
+  limit: 'match',
+  thresholdSource: 'The pan must fit the block rail; the pickup must suit the sump position, the pan\'s pickup mounting and the pump inlet.',
+};
+
+export function missingOilParts(spec: FitSpec, parts: Array<'oilPan' | 'oilPickup' | 'oilPump'>): string[] {
+  return parts.filter((part) => spec[part] === undefined);
+}
+
+export function checkPanPickupPump({ spec }: CheckContext): Finding {
+  const missing = missingOilParts(spec, ['oilPan', 'oilPickup', 'oilPump']);
+  const { oilPan: pan, oilPickup: pickup, oilPump: pump } = spec;
+  if (!pan || !pickup || !pump) return unknownFinding(FIELDS, missing);
+  const mismatches = oilSystemMismatches(spec.engine.panRail.pattern, pan, pickup, pump);
+  const fields = { ...FIELDS, against: pan.id };
+  if (mismatches.length === 0) {
+    return measuredFinding(
+      fields,
+      { measured: 0, required: 0, margin: 0, status: 'ok' },
+      `The ${pan.name}, ${pickup.name} and ${pump.name} agree: ${pan.sumpPosition} sump, ${pan.pickupMount} pickup, ${pump.inlet} pump inlet.`,
+    );
+  }
+  const message = `The oil parts do not agree: ${mismatches.map((m) => m.message).join('; ')}.`;
+  const fields2 = new Set(mismatches.map((m) => m.field));
+  const remedies: Remedy[] = [];
+  if (fields2.has('sumpPosition') || fields2.has('pickupMount') || fields2.has('pumpInlet')) {
+    remedies.push(pickupRemedy(spec, pan, pump));
+  }
+  if (fields2.has('pumpInlet')) remedies.push(pumpRemedy(spec, pickup));
+  if (fields2.has('railPattern') || fields2.has('sumpPosition') || fields2.has('pickupMount')) {
+    remedies.push(panRemedy(spec, pickup, fields2.has('railPattern')));
+  }
+  return measuredFinding(fields, { measured: mismatches.length, required: 0, margin: -1, status: 'fails' }, message, remedies);
+}
+
+function pickupRemedy(spec: FitSpec, pan: OilPanSpec, pump: OilPumpSpec): Remedy {
+  const partIds = (spec.candidates?.oilPickups ?? [])
+    .filter((p) => p.sumpPosition === pan.sumpPosition && p.mount === pan.pickupMount && p.pumpInlet === pump.inlet)
+    .map((p) => p.id);
+  return {
+    kind: 'part',
+    category: 'oil-pickup',
+    requires: { sumpPosition: pan.sumpPosition, mount: pan.pickupMount, pumpInlet: pump.inlet },
+    partIds,
+    note: `A pickup for the ${pan.name}'s ${pan.sumpPosition} sump that fits the ${pump.name}.`,
+  };
+}
+
+function pumpRemedy(spec: FitSpec, pickup: OilPickupSpec): Remedy {
+  const partIds = (spec.candidates?.oilPumps ?? [])
+    .filter((p) => p.inlet === pickup.pumpInlet)
+    .sort((a, b) => b.speedLimitRpm - a.speedLimitRpm)
+    .map((p) => p.id);
+  return {
+    kind: 'part',
+    category: 'oil-pump',
+    requires: { inlet: pickup.pumpInlet },
+    partIds,
+    note: `A pump with the ${pickup.pumpInlet} inlet the pickup fits.`,
+  };
+}
+
+function panRemedy(spec: FitSpec, pickup: OilPickupSpec, railMismatch: boolean): Remedy {
+  const railPattern = spec.engine.panRail.pattern;
+  const partIds = (spec.candidates?.oilPans ?? [])
+    .filter((p) => p.railPattern === railPattern && (railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount)))
+    .map((p) => p.id);
+  return {
+    kind: 'part',
+    category: 'oil-pan',
+    requires: railMismatch ? { railPattern } : { railPattern, sumpPosition: pickup.sumpPosition, pickupMount: pickup.mount },
+    partIds,
+    note: 'A different pan must also clear the crossmember and steering: check the envelope results for it.',
+  };
+}
+
+export const PAN_PICKUP_PUMP_CHECK: CheckDefinition = {
+  id: FIELDS.checkId,
+  group: FIELDS.group,
+  title: FIELDS.title,
+  dependsOnPlacement: false,
+  run: checkPanPickupPump,
+};

@@ -1,0 +1,311 @@
+import type { ChassisPoint } from '../types/fit-spec';
+
+/**
+ * Outline-to-outline gap, the fast hand path used by every envelope check and the fit window.
+ *
+ * Definition (DESIGN.md, "Gap"): when the two outlines do not touch, the smallest distance between them;
+ * when they overlap, the gap is negative and equals minus the smallest vertical lift of the engine outline
+ * (`a`) that separates it from the obstacle (`b`). Touching outlines have a gap of 0.
+ *
+ * `a` may be a closed polygon or an open polyline; `b` is always a closed polygon. `dz` shifts `a` up
+ * without copying it (the fit window evaluates one placed outline at many heights).
+ * Cross-checked in tests against jsts DistanceOp and @flatten-js/core.
+ */
+export interface GapResult {
+  gap: number;
+  overlapping: boolean;
+  /** Witness: the point on `a` (already shifted by dz) and the point on `b` that realise the gap. */
+  from: ChassisPoint;
+  to: ChassisPoint;
+}
+
+const EPS = 1e-9;
+
+interface Best {
+  d2: number;
+  fx: number;
+  fz: number;
+  tx: number;
+  tz: number;
+}
+
+/** Squared distance from p to segment s1–s2, updating `best` (from = on a, to = on b). */
+function pointToSegment(
+  px: number,
+  pz: number,
+  x1: number,
+  z1: number,
+  x2: number,
+  z2: number,
+  best: Best,
+  pointIsOnA: boolean,
+): void {
+  const dx = x2 - x1;
+  const dz = z2 - z1;
+  const len2 = dx * dx + dz * dz;
+  let t = len2 > 0 ? ((px - x1) * dx + (pz - z1) * dz) / len2 : 0;
+  if (t < 0) t = 0;
+  else if (t > 1) t = 1;
+  const qx = x1 + t * dx;
+  const qz = z1 + t * dz;
+  const ex = px - qx;
+  const ez = pz - qz;
+  const d2 = ex * ex + ez * ez;
+  if (d2 < best.d2) {
+    best.d2 = d2;
+    if (pointIsOnA) {
+      best.fx = px;
+      best.fz = pz;
+      best.tx = qx;
+      best.tz = qz;
+    } else {
+      best.fx = qx;
+      best.fz = qz;
+      best.tx = px;
+      best.tz = pz;
+    }
+  }
+}
+
+function orient(ax: number, az: number, bx: number, bz: number, cx: number, cz: number): number {
+  return (bx - ax) * (cz - az) - (bz - az) * (cx - ax);
+}
+
+/** True when the open segments cross at a single interior point (not merely touching). */
+function segmentsCrossProperly(
+  ax: number, az: number, bx: number, bz: number,
+  cx: number, cz: number, dx: number, dz: number,
+): boolean {
+  if (Math.max(ax, bx) < Math.min(cx, dx) || Math.max(cx, dx) < Math.min(ax, bx)) return false;
+  if (Math.max(az, bz) < Math.min(cz, dz) || Math.max(cz, dz) < Math.min(az, bz)) return false;
+  const scale = Math.max(1, Math.abs(bx - ax) + Math.abs(bz - az)) * Math.max(1, Math.abs(dx - cx) + Math.abs(dz - cz));
+  const tol = 1e-12 * scale;
+  const o1 = orient(ax, az, bx, bz, cx, cz);
+  const o2 = orient(ax, az, bx, bz, dx, dz);
+  const o3 = orient(cx, cz, dx, dz, ax, az);
+  const o4 = orient(cx, cz, dx, dz, bx, bz);
+  return ((o1 > tol && o2 < -tol) || (o1 < -tol && o2 > tol)) && ((o3 > tol && o4 < -tol) || (o3 < -tol && o4 > tol));
+}
+
+/** Crossing-number test; points within 1e-7 mm of the boundary count as outside ("strictly inside"). */
+export function pointStrictlyInPolygon(px: number, pz: number, poly: readonly ChassisPoint[], polyDz = 0): boolean {
+  let inside = false;
+  const n = poly.length;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const xi = poly[i].x;
+    const zi = poly[i].z + polyDz;
+    const xj = poly[j].x;
+    const zj = poly[j].z + polyDz;
+    if (zi > pz !== zj > pz && px < ((xj - xi) * (pz - zi)) / (zj - zi) + xi) inside = !inside;
+  }
+  if (!inside) return false;
+  const best: Best = { d2: Infinity, fx: 0, fz: 0, tx: 0, tz: 0 };
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    pointToSegment(px, pz, poly[j].x, poly[j].z + polyDz, poly[i].x, poly[i].z + polyDz, best, true);
+  }
+  return best.d2 > 1e-14;
+}
+
+function edgeCount(points: readonly ChassisPoint[], closed: boolean): number {
+  if (points.length < 2) return 0;
+  return closed ? points.length : points.length - 1;
+}
+
+/** Interiors overlap (touching does not count). `a` shifted up by dz. */
+export function outlinesOverlap(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): boolean {
+  const na = a.length;
+  const nb = b.length;
+  const ea = edgeCount(a, aClosed);
+  for (let i = 0; i < ea; i++) {
+    const p = a[i];
+    const q = a[(i + 1) % na];
+    for (let j = 0; j < nb; j++) {
+      const r = b[j];
+      const s = b[(j + 1) % nb];
+      if (segmentsCrossProperly(p.x, p.z + dz, q.x, q.z + dz, r.x, r.z, s.x, s.z)) return true;
+    }
+  }
+  for (let i = 0; i < na; i++) {
+    if (pointStrictlyInPolygon(a[i].x, a[i].z + dz, b)) return true;
+  }
+  for (let i = 0; i < ea; i++) {
+    const p = a[i];
+    const q = a[(i + 1) % na];
+    if (pointStrictlyInPolygon((p.x + q.x) / 2, (p.z + q.z) / 2 + dz, b)) return true;
+  }
+  if (aClosed && na >= 3) {
+    for (let j = 0; j < nb; j++) {
+      if (pointStrictlyInPolygon(b[j].x, b[j].z, a, dz)) return true;
+      const s = b[(j + 1) % nb];
+      if (pointStrictlyInPolygon((b[j].x + s.x) / 2, (b[j].z + s.z) / 2, a, dz)) return true;
+    }
+  }
+  return false;
+}
+
+/** Smallest distance between the boundaries of `a` (shifted by dz) and `b`; also reports proper crossings. */
+function boundaryDistance(
+  a: readonly ChassisPoint[],
+  aClosed: boolean,
+  b: readonly ChassisPoint[],
+  dz: number,
+): { best: Best; crossing: boolean } {
+  const best: Best = { d2: Infinity, fx: 0, fz: 0, tx: 0, tz: 0 };
+  const na = a.length;
+  const nb = b.length;
+  const ea = edgeCount(a, aClosed);
+  // a's vertices to b's edges
+  for (let i = 0; i < na; i++) {
+    const px = a[i].x;
+    const pz = a[i].z + dz;
+    for (let j = 0; j < nb; j++) {
+      const r = b[j];
+      const s = b[(j + 1) % nb];
+      pointToSegment(px, pz, r.x, r.z, s.x, s.z, best, true);
+    }
+  }
+  // b's vertices to a's edges
+  if (ea === 0) return { best, crossing: false };
+  let crossing = false;
+  for (let j = 0; j < nb; j++) {
+    const qx = b[j].x;
+    const qz = b[j].z;
+    for (let i = 0; i < ea; i++) {
+      const p = a[i];
+      const q = a[(i + 1) % na];
+      pointToSegment(qx, qz, p.x, p.z + dz, q.x, q.z + dz, best, false);
+    }
+  }
+  if (best.d2 > EPS) {
+    outer: for (let i = 0; i < ea; i++) {
+      const p = a[i];
+      const q = a[(i + 1) % na];
+      for (let j = 0; j < nb; j++) {
+        const r = b[j];
+        const s = b[(j + 1) % nb];
+        if (segmentsCrossProperly(p.x, p.z + dz, q.x, q.z + dz, r.x, r.z, s.x, s.z)) {
+          crossing = true;
+          break outer;
+        }
+      }
+    }
+  }
+  return { best, crossing };
+}
+
+interface LiftEvent {
+  t: number;
+  fx: number;
+  fz: number;
+  tx: number;
+  tz: number;
+}
+
+/** z of segment r–s at x (the segment spans x); both ends when the segment is vertical. */
+function pushVerticalEvents(
+  px: number,
+  pz: number,
+  r: ChassisPoint,
+  s: ChassisPoint,
+  rDz: number,
+  sign: 1 | -1,
+  events: LiftEvent[],
+  pointIsOnA: boolean,
+): void {
+  const lo = Math.min(r.x, s.x);
+  const hi = Math.max(r.x, s.x);
+  if (px < lo - 1e-9 || px > hi + 1e-9) return;
+  const zs: number[] = [];
+  if (Math.abs(s.x - r.x) < 1e-12) {
+    zs.push(r.z + rDz, s.z + rDz);
+  } else {
+    zs.push(r.z + rDz + ((px - r.x) * (s.z - r.z)) / (s.x - r.x));
+  }
+  for (const ez of zs) {
+    // sign +1: a's point p rises to meet b's edge (t = edge − p); −1: b's point meets a's rising edge (t = p − edge).
+    const t = sign * (ez - pz);
+    if (t > 0) {
+      if (pointIsOnA) events.push({ t, fx: px, fz: pz, tx: px, tz: ez });
+      else events.push({ t, fx: px, fz: ez, tx: px, tz: pz });
+    }
+  }
+}
+
+/**
+ * Smallest upward shift t ≥ 0 of `a` (already shifted by dz) after which the interiors no longer overlap.
+ * Exact for polygons: the overlap state only changes at lifts where a vertex of one outline is vertically
+ * in line with an edge of the other, so each open interval between those lifts is tested once at its middle.
+ */
+export function verticalSeparationLift(
+  a: readonly ChassisPoint[],
+  aClosed: boolean,
+  b: readonly ChassisPoint[],
+  dz = 0,
+): { lift: number; from: ChassisPoint; to: ChassisPoint } {
+  const events: LiftEvent[] = [];
+  const na = a.length;
+  const nb = b.length;
+  const ea = edgeCount(a, aClosed);
+  for (let i = 0; i < na; i++) {
+    for (let j = 0; j < nb; j++) pushVerticalEvents(a[i].x, a[i].z + dz, b[j], b[(j + 1) % nb], 0, 1, events, true);
+  }
+  for (let j = 0; j < nb; j++) {
+    for (let i = 0; i < ea; i++) pushVerticalEvents(b[j].x, b[j].z, a[i], a[(i + 1) % na], dz, -1, events, false);
+  }
+  let minA = Infinity;
+  let minAx = 0;
+  for (const p of a) {
+    if (p.z + dz < minA) {
+      minA = p.z + dz;
+      minAx = p.x;
+    }
+  }
+  let maxB = -Infinity;
+  for (const q of b) maxB = Math.max(maxB, q.z);
+  const tAbove = Math.max(0, maxB - minA);
+  // Past tAbove the whole of `a` is above the whole of `b`: always separated.
+  events.push({ t: tAbove, fx: minAx, fz: minA, tx: minAx, tz: maxB });
+  events.sort((e1, e2) => e1.t - e2.t);
+  let prevT = 0;
+  let prevEvent: LiftEvent | null = null;
+  for (const e of events) {
+    if (e.t > tAbove + 1e-9) break;
+    if (e.t - prevT <= 1e-9) {
+      if (prevEvent === null && prevT > 0) prevEvent = e;
+      continue;
+    }
+    if (!outlinesOverlap(a, aClosed, b, dz + (prevT + e.t) / 2)) break;
+    prevT = e.t;
+    prevEvent = e;
+  }
+  if (prevEvent === null) return { lift: 0, from: { x: minAx, z: minA }, to: { x: minAx, z: minA } };
+  return { lift: prevT, from: { x: prevEvent.fx, z: prevEvent.fz }, to: { x: prevEvent.tx, z: prevEvent.tz } };
+}
+
+/** The gap of DESIGN.md between engine outline `a` (shifted up by dz) and obstacle polygon `b`. */
+export function outlineGap(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): GapResult {
+  const { best, crossing } = boundaryDistance(a, aClosed, b, dz);
+  let touchingOrInside = crossing || best.d2 <= EPS;
+  if (!touchingOrInside && a.length > 0) {
+    touchingOrInside =
+      pointStrictlyInPolygon(a[0].x, a[0].z + dz, b) || (aClosed && a.length >= 3 && pointStrictlyInPolygon(b[0].x, b[0].z, a, dz));
+  }
+  if (!touchingOrInside) {
+    return {
+      gap: Math.sqrt(best.d2),
+      overlapping: false,
+      from: { x: best.fx, z: best.fz },
+      to: { x: best.tx, z: best.tz },
+    };
+  }
+  const { lift, from, to } = verticalSeparationLift(a, aClosed, b, dz);
+  if (lift <= 0) {
+    return { gap: 0, overlapping: false, from: { x: best.fx, z: best.fz }, to: { x: best.tx, z: best.tz } };
+  }
+  return { gap: -lift, overlapping: true, from, to };
+}
+
+/** Gap only (no witness objects kept): the hot path of the fit window. */
+export function outlineGapValue(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): number {
+  return outlineGap(a, aClosed, b, dz).gap;
+}

@@ -1,0 +1,26 @@
+/** Every route path of the web app. Build links with these, never with string literals. */
+export const paths = {
+  signIn: '/sign-in',
+  signUp: '/sign-up',
+  resetPassword: '/reset-password',
+  acceptInvite: '/accept-invite',
+
+  home: '/',
+  projects: '/projects',
+  projectDetail: '/projects/:projectId',
+  myProjects: '/my-projects',
+  customers: '/customers',
+  workOrders: '/work-orders',
+  partsCounter: '/parts-counter',
+  catalog: '/catalog',
+  members: '/members',
+  shopSettings: '/settings/shop',
+} as const;
+
+export type AppPath = (typeof paths)[keyof typeof paths];
+
+export const toProjectDetail = (projectId: string): string =>
+  paths.projectDetail.replace(':projectId', encodeURIComponent(projectId));
+
+export const toSignIn = (next?: string): string =>
+  next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;

@@ -1,0 +1,25 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Session } from '@/types/api';
+import { useStoreSession } from '../hooks/use-store-session';
+
+export type AcceptInvitationInput = { token: string; name: string; password: string };
+
+export async function acceptInvitation(input: AcceptInvitationInput): Promise<Session> {
+  const { data } = await apiClient.post<Session>('/invitations/accept', input, {
+    skipAuthRefresh: true,
+    skipErrorNotification: true,
+  });
+  return data;
+}
+
+export function useAcceptInvitation({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {
+  const storeSession = useStoreSession();
+  return useMutation({
+    mutationFn: acceptInvitation,
+    onSuccess: (session) => {
+      storeSession(session);
+      onSuccess?.(session);
+    },
+  });
+}

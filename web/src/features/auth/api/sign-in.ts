@@ -1,0 +1,27 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Session } from '@/types/api';
+import { useStoreSession } from '../hooks/use-store-session';
+
+export type SignInInput = { email: string; password: string };
+
+export async function signIn(input: SignInInput): Promise<Session> {
+  const { data } = await apiClient.post<Session>('/auth/sign-in', input, {
+    skipAuthRefresh: true,
+    skipErrorNotification: true,
+  });
+  return data;
+}
+
+export type UseSignInOptions = { onSuccess?: (session: Session) => void };
+
+export function useSignIn({ onSuccess }: UseSignInOptions = {}) {
+  const storeSession = useStoreSession();
+  return useMutation({
+    mutationFn: signIn,
+    onSuccess: (session) => {
+      storeSession(session);
+      onSuccess?.(session);
+    },
+  });
+}

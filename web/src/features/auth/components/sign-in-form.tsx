@@ -1,0 +1,41 @@
+import { Button, Form, Input } from 'antd';
+import type { Session } from '@/types/api';
+import { FormErrorAlert } from '@/components/form-error-alert';
+import { useSignIn, type SignInInput } from '../api/sign-in';
+import { emailRules } from './password-rules';
+
+export type SignInFormProps = {
+  onSignedIn?: (session: Session) => void;
+  initialEmail?: string;
+};
+
+export function SignInForm({ onSignedIn, initialEmail }: SignInFormProps) {
+  const [form] = Form.useForm<SignInInput>();
+  const signIn = useSignIn({ onSuccess: onSignedIn });
+
+  return (
+    <Form<SignInInput>
+      form={form}
+      layout="vertical"
+      requiredMark={false}
+      initialValues={{ email: initialEmail ?? '' }}
+      onFinish={(values) => signIn.mutate({ email: values.email.trim(), password: values.password })}
+      aria-label="Sign in"
+      data-testid="sign-in-form"
+    >
+      <FormErrorAlert
+        error={signIn.error}
+        messages={{ invalid_credentials: 'That email and password do not match an account. Check both and try again.' }}
+      />
+      <Form.Item label="Email" name="email" rules={emailRules}>
+        <Input type="email" autoComplete="email" autoFocus placeholder="you@yourshop.example" />
+      </Form.Item>
+      <Form.Item label="Password" name="password" rules={[{ required: true, message: 'Enter your password' }]}>
+        <Input.Password autoComplete="current-password" />
+      </Form.Item>
+      <Button type="primary" htmlType="submit" block loading={signIn.isPending}>
+        Sign in
+      </Button>
+    </Form>
+  );
+}

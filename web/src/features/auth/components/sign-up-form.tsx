@@ -1,0 +1,49 @@
+import { Button, Form, Input } from 'antd';
+import type { Session } from '@/types/api';
+import { FormErrorAlert } from '@/components/form-error-alert';
+import { useSignUp } from '../api/sign-up';
+import { confirmPasswordRules, emailRules, passwordRules } from './password-rules';
+
+export type SignUpFormProps = { onSignedUp?: (session: Session) => void };
+
+type SignUpValues = { name: string; shopName: string; email: string; password: string; confirm: string };
+
+export function SignUpForm({ onSignedUp }: SignUpFormProps) {
+  const signUp = useSignUp({ onSuccess: onSignedUp });
+
+  return (
+    <Form<SignUpValues>
+      layout="vertical"
+      requiredMark={false}
+      aria-label="Create your shop"
+      onFinish={({ name, shopName, email, password }) =>
+        signUp.mutate({ name: name.trim(), shopName: shopName.trim(), email: email.trim(), password })
+      }
+    >
+      <FormErrorAlert error={signUp.error} messages={{ email_taken: 'An account with that email already exists. Sign in instead, or reset the password.' }} />
+      <Form.Item label="Your name" name="name" rules={[{ required: true, whitespace: true, message: 'Enter your name' }, { max: 120 }]}>
+        <Input autoComplete="name" placeholder="Dana Whitlock" />
+      </Form.Item>
+      <Form.Item
+        label="Shop or garage name"
+        name="shopName"
+        extra="Building your own truck? Name your garage; you can invite helpers later."
+        rules={[{ required: true, whitespace: true, message: 'Name your shop or garage' }, { max: 120 }]}
+      >
+        <Input autoComplete="organization" placeholder="Ironbark Swap Works" />
+      </Form.Item>
+      <Form.Item label="Email" name="email" rules={emailRules}>
+        <Input type="email" autoComplete="email" />
+      </Form.Item>
+      <Form.Item label="Password" name="password" rules={passwordRules} hasFeedback>
+        <Input.Password autoComplete="new-password" />
+      </Form.Item>
+      <Form.Item label="Repeat password" name="confirm" dependencies={['password']} rules={confirmPasswordRules()} hasFeedback>
+        <Input.Password autoComplete="new-password" />
+      </Form.Item>
+      <Button type="primary" htmlType="submit" block loading={signUp.isPending}>
+        Create shop
+      </Button>
+    </Form>
+  );
+}

@@ -1,0 +1,21 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Page } from '@/types/api';
+import type { Customer, CustomerListQuery } from '../types';
+import { customerKeys } from './customer-keys';
+
+export async function getCustomers(query: CustomerListQuery, signal?: AbortSignal): Promise<Page<Customer>> {
+  const { data } = await apiClient.get<Page<Customer>>('/customers', { params: query, signal });
+  return data;
+}
+
+export const customersQueryOptions = (query: CustomerListQuery) =>
+  queryOptions({
+    queryKey: customerKeys.list(query),
+    queryFn: ({ signal }) => getCustomers(query, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export function useCustomers(query: CustomerListQuery, { enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({ ...customersQueryOptions(query), enabled });
+}

@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import { memberKeys } from './member-keys';
+
+export async function deleteMembership(id: string): Promise<void> {
+  await apiClient.delete(`/memberships/${encodeURIComponent(id)}`);
+}
+
+export function useDeleteMembership() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteMembership,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: memberKeys.memberships() }),
+  });
+}

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Role } from '@/types/api';
+import type { Membership } from '../types';
+import { memberKeys } from './member-keys';
+
+export type UpdateMembershipInput = { id: string; role: Role };
+
+export async function updateMembership({ id, role }: UpdateMembershipInput): Promise<Membership> {
+  const { data } = await apiClient.patch<Membership>(`/memberships/${encodeURIComponent(id)}`, { role });
+  return data;
+}
+
+export function useUpdateMembership() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateMembership,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: memberKeys.memberships() }),
+  });
+}

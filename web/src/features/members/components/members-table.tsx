@@ -1,0 +1,82 @@
+import { Button, Popconfirm, Select, Table, Tag, Typography } from 'antd';
+import type { ColumnsType } from 'antd/es/table';
+import { EmptyState, QueryState } from '@/components/query-state';
+import { formatDate } from '@/lib/table';
+import { roles, type Role } from '@/types/api';
+import { useDeleteMembership } from '../api/delete-membership';
+import { useMemberships } from '../api/get-memberships';
+import { useUpdateMembership } from '../api/update-membership';
+import { roleHints, roleLabels, type Membership } from '../types';
+
+export type MembersTableProps = { currentUserId: string };
+
+export function MembersTable({ currentUserId }: MembersTableProps) {
+  const members = useMemberships();
+  const updateRole = useUpdateMembership();
+  const remove = useDeleteMembership();
+
+  const columns: ColumnsType<Membership> = [
+    {
+      title: 'Name',
+      dataIndex: 'name',
+      key: 'name',
+      render: (name: string, m) => (
+        <>
+          <Typography.Text strong>{name}</Typography.Text>
+          {m.userId === currentUserId && <Tag style={{ marginInlineStart: 8 }}>you</Tag>}
+        </>
+      ),
+    },
+    { title: 'Email', dataIndex: 'email', key: 'email' },
+    {
+      title: 'Role',
+      key: 'role',
+      render: (_, m) =>
+        m.userId === currentUserId || m.role === 'customer' ? (
+          roleLabels[m.role]
+        ) : (
+          <Select<Role>
+            size="small"
+            value={m.role}
+            style={{ minWidth: 150 }}
+            aria-label={`Role of ${m.name}`}
+            loading={updateRole.isPending && updateRole.variables?.id === m.id}
+            onChange={(role) => updateRole.mutate({ id: m.id, role })}
+            options={roles
+              .filter((r) => r !== 'customer')
+              .map((r) => ({ value: r, label: roleLabels[r], title: roleHints[r] }))}
+          />
+        ),
+    },
+    { title: 'Joined', dataIndex: 'createdAt', key: 'createdAt', render: formatDate, responsive: ['md'] },
+    {
+      title: <span className="sr-only">Actions</span>,
+      key: 'actions',
+      align: 'right',
+      render: (_, m) =>
+        m.userId === currentUserId ? null : (
+          <Popconfirm
+            title={`Remove ${m.name} from the shop?`}
+            description="They lose access at once. Their past work stays on the projects."
+            okText="Remove"
+            okButtonProps={{ danger: true }}
+            onConfirm={() => remove.mutateAsync(m.id)}
+          >
+            <Button size="small" type="text" danger aria-label={`Remove ${m.name}`}>
+              Remove
+            </Button>
+          </Popconfirm>
+        ),
+    },
+  ];
+
+  return (
+    <QueryState
+      query={members}
+      isEmpty={(list) => list.length === 0}
+      empty={<EmptyState description="Only you so far. Invite the people who work with you." />}
+    >
+      {(list) => <Table<Membership> aria-label="Members" rowKey="id" columns={columns} dataSource={list} pagination={false} />}
+    </QueryState>
+  );
+}

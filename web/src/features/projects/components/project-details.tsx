@@ -1,0 +1,89 @@
+import { Alert, Card, Descriptions, Typography } from 'antd';
+import { useUnits } from '@/hooks/use-units';
+import { formatMoneyCents, formatPower } from '@/lib/units';
+import { useLabels } from '../project-labels';
+import type { Project } from '../types';
+
+export type ProjectGoalsCardProps = { project: Project; currency?: string };
+
+export function ProjectGoalsCard({ project, currency = 'USD' }: ProjectGoalsCardProps) {
+  const { system } = useUnits();
+  const g = project.goals;
+  return (
+    <Card title="Goals" data-testid="project-goals">
+      <Descriptions
+        column={{ xs: 1, sm: 2 }}
+        items={[
+          { key: 'use', label: 'Main use', children: g?.use ? useLabels[g.use] : '—' },
+          { key: 'power', label: 'Target power', children: formatPower(g?.targetPowerKw, system) },
+          {
+            key: 'rev',
+            label: 'Planned rev limit',
+            children: g?.revLimitRpm ? `${g.revLimitRpm.toLocaleString('en-US')} rpm` : '—',
+          },
+          { key: 'budget', label: 'Budget', children: formatMoneyCents(g?.budgetCents, currency) },
+        ]}
+      />
+    </Card>
+  );
+}
+
+export type ProjectSelectionsCardProps = { project: Project };
+
+export function ProjectSelectionsCard({ project }: ProjectSelectionsCardProps) {
+  const slot = (id: string | null, what: string) =>
+    id ? (
+      <Typography.Text code>{id}</Typography.Text>
+    ) : (
+      <Typography.Text type="secondary">No {what} chosen yet</Typography.Text>
+    );
+  return (
+    <Card title="Chassis, engine and transmission" data-testid="project-selections">
+      <Descriptions
+        column={1}
+        items={[
+          { key: 'vehicle', label: 'Vehicle as described', children: project.vehicleDescription || '—' },
+          { key: 'chassis', label: 'Chassis model', children: slot(project.chassisModelId, 'chassis model') },
+          { key: 'engine', label: 'Engine', children: slot(project.engineProfileId, 'engine') },
+          { key: 'trans', label: 'Transmission', children: slot(project.transmissionId, 'transmission') },
+        ]}
+      />
+      <Typography.Paragraph type="secondary" style={{ margin: '8px 0 0', fontSize: 13 }}>
+        Picking from the shop catalog arrives with the catalog. Until then, describe the combination in the project
+        title and vehicle.
+      </Typography.Paragraph>
+    </Card>
+  );
+}
+
+export type ProjectPlacementCardProps = { project: Project };
+
+export function ProjectPlacementCard({ project }: ProjectPlacementCardProps) {
+  const { formatLength } = useUnits();
+  const p = project.placement;
+  return (
+    <Card title="Engine placement" data-testid="project-placement">
+      {p ? (
+        <Descriptions
+          column={{ xs: 1, sm: 3 }}
+          items={[
+            { key: 'setback', label: 'Setback from front axle', children: formatLength(p.setbackMm) },
+            { key: 'height', label: 'Crank centerline height', children: formatLength(p.heightMm) },
+            { key: 'tilt', label: 'Tilt', children: `${p.tiltDeg.toFixed(1)}°` },
+          ]}
+        />
+      ) : (
+        <Typography.Paragraph type="secondary" style={{ margin: 0 }}>
+          Not placed yet. The placement is set once the chassis is measured and a fit check has run.
+        </Typography.Paragraph>
+      )}
+      <Alert
+        style={{ marginTop: 12 }}
+        type="warning"
+        showIcon
+        title="Planning figures only"
+        description="Confirm clearances on the vehicle before cutting or welding. Support the vehicle on rated stands and the engine on a rated hoist whenever anyone works under or around it."
+      />
+    </Card>
+  );
+}

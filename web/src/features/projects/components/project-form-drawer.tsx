@@ -1,0 +1,210 @@
+import { Button, Col, Drawer, Flex, Form, Input, InputNumber, Radio, Row, Select } from 'antd';
+import { useEffect } from 'react';
+import { FormErrorAlert } from '@/components/form-error-alert';
+import { notifySuccess } from '@/lib/notifier';
+import { hpToKw, kwToHp } from '@/lib/units';
+import type { UnitSystem } from '@/types/api';
+import { useCreateProject } from '../api/create-project';
+import { useUpdateProject } from '../api/update-project';
+import { statusLabels, useLabels } from '../project-labels';
+import { projectStatuses, projectUses, type Project, type ProjectGoals, type ProjectStatus, type ProjectUse } from '../types';
+
+export type CustomerOption = { value: string; label: string };
+
+export type ProjectFormDrawerProps = {
+  open: boolean;
+  project?: Project | null;
+  onClose: () => void;
+  onSaved?: (project: Project) => void;
+  /** Customers to choose from; the route supplies them (projects do not load customers themselves). */
+  customerOptions: CustomerOption[];
+  customersLoading?: boolean;
+  onCustomerSearch?: (text: string) => void;
+  onAddCustomer?: () => void;
+  unitSystem?: UnitSystem;
+  currency?: string;
+  /** Prefill the customer when opened from a customer. */
+  defaultCustomerId?: string;
+};
+
+type ProjectFormValues = {
+  title: string;
+  customerId: string;
+  vehicleDescription: string;
+  use: ProjectUse;
+  targetPower?: number | null;
+  revLimitRpm?: number | null;
+  budget?: number | null;
+  status?: ProjectStatus;
+};
+
+export function ProjectFormDrawer({
+  open,
+  project,
+  onClose,
+  onSaved,
+  customerOptions,
+  customersLoading,
+  onCustomerSearch,
+  onAddCustomer,
+  unitSystem = 'in',
+  currency = 'USD',
+  defaultCustomerId,
+}: ProjectFormDrawerProps) {
+  const [form] = Form.useForm<ProjectFormValues>();
+  const isEdit = Boolean(project);
+  const powerUnit = unitSystem === 'in' ? 'hp' : 'kW';
+  const done = (saved: Project) => {
+    notifySuccess({ title: isEdit ? 'Project saved' : 'Project opened', description: saved.title });
+    onSaved?.(saved);
+    onClose();
+  };
+  const create = useCreateProject({ onSuccess: done });
+  const update = useUpdateProject({ onSuccess: done });
+  const mutation = isEdit ? update : create;
+
+  useEffect(() => {
+    if (!open) return;
+    create.reset();
+    update.reset();
+    const g = project?.goals;
+    form.setFieldsValue({
+      title: project?.title ?? '',
+      customerId: project?.customerId ?? defaultCustomerId,
+      vehicleDescription: project?.vehicleDescription ?? '',
+      use: g?.use ?? 'street',
+      targetPower: g?.targetPowerKw != null ? Math.round(unitSystem === 'in' ? kwToHp(g.targetPowerKw) : g.targetPowerKw) : null,
+      revLimitRpm: g?.revLimitRpm ?? null,
+      budget: g?.budgetCents != null ? g.budgetCents / 100 : null,
+      status: project?.status,
+    });
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [open, project]);
+
+  const submit = (v: ProjectFormValues) => {
+    const goals: ProjectGoals = {
+      use: v.use,
+      targetPowerKw:
+        v.targetPower != null ? Math.round((unitSystem === 'in' ? hpToKw(v.targetPower) : v.targetPower) * 10) / 10 : null,
+      revLimitRpm: v.revLimitRpm ?? null,
+      budgetCents: v.budget != null ? Math.round(v.budget * 100) : null,
+    };
+    const base = {
+      title: v.title.trim(),
+      customerId: v.customerId,
+      vehicleDescription: v.vehicleDescription.trim(),
+      goals,
+    };
+    if (project) update.mutate({ id: project.id, changes: { ...base, status: v.status } });
+    else create.mutate(base);
+  };
+
+  // Keep the current customer selectable even when the search result does not include it.
+  const options =
+    project && !customerOptions.some((o) => o.value === project.customerId)
+      ? [{ value: project.customerId, label: project.customer.name }, ...customerOptions]
+      : customerOptions;
+
+  return (
+    <Drawer
+      open={open}
+      onClose={onClose}
+      title={isEdit ? `Edit ${project?.title}` : 'New project'}
+      size={520}
+      destroyOnHidden
+      footer={
+        <Flex justify="flex-end" gap={8}>
+          <Button onClick={onClose}>Cancel</Button>
+          <Button type="primary" loading={mutation.isPending} onClick={() => form.submit()}>
+            {isEdit ? 'Save project' : 'Open project'}
+          </Button>
+        </Flex>
+      }
+    >
+      <Form<ProjectFormValues> form={form} layout="vertical" onFinish={submit} aria-label="Project" requiredMark="optional">
+        <FormErrorAlert error={mutation.error} />
+        <Form.Item
+          label="Project title"
+          name="title"
+          rules={[
+            { required: true, whitespace: true, message: 'Give the project a title' },
+            { max: 160, message: 'Keep the title under 160 characters' },
+          ]}
+        >
+          <Input placeholder="Ridgeback V8 tow build" autoFocus />
+        </Form.Item>
+        <Form.Item
+          label="Customer"
+          name="customerId"
+          rules={[{ required: true, message: 'Choose the customer this swap is for' }]}
+          extra={
+            onAddCustomer ? (
+              <Button type="link" size="small" style={{ padding: 0 }} onClick={onAddCustomer}>
+                Customer not listed? Add one
+              </Button>
+            ) : undefined
+          }
+        >
+          <Select
+            showSearch={{ filterOption: false, onSearch: onCustomerSearch }}
+            options={options}
+            loading={customersLoading}
+            placeholder="Search customers"
+            notFoundContent={customersLoading ? 'Looking…' : 'No customer found'}
+            aria-label="Customer"
+          />
+        </Form.Item>
+        <Form.Item
+          label="Vehicle"
+          name="vehicleDescription"
+          extra="Year, make, model and body as the customer describes it."
+          rules={[
+            { required: true, whitespace: true, message: 'Describe the vehicle (the chassis getting the engine)' },
+            { max: 200, message: 'Keep the description under 200 characters' },
+          ]}
+        >
+          <Input placeholder="1978 Harlan Ridgeback half-ton" />
+        </Form.Item>
+        <Form.Item label="Main use" name="use" rules={[{ required: true, message: 'Choose how the vehicle will be used' }]}>
+          <Radio.Group optionType="button" buttonStyle="solid" options={projectUses.map((u) => ({ value: u, label: useLabels[u] }))} />
+        </Form.Item>
+        <Row gutter={12}>
+          <Col span={12}>
+            <Form.Item
+              label={`Target power (${powerUnit})`}
+              name="targetPower"
+              rules={[{ type: 'number', min: 1, max: unitSystem === 'in' ? 3000 : 2200, message: 'Enter a realistic figure' }]}
+            >
+              <InputNumber style={{ width: '100%' }} min={0} precision={0} suffix={powerUnit} aria-label="Target power" />
+            </Form.Item>
+          </Col>
+          <Col span={12}>
+            <Form.Item
+              label="Planned rev limit"
+              name="revLimitRpm"
+              rules={[{ type: 'number', min: 1000, max: 12000, message: 'Between 1,000 and 12,000 rpm' }]}
+            >
+              <InputNumber style={{ width: '100%' }} min={0} step={100} precision={0} suffix="rpm" aria-label="Planned rev limit" />
+            </Form.Item>
+          </Col>
+        </Row>
+        <Form.Item label="Budget" name="budget" rules={[{ type: 'number', min: 0, message: 'The budget cannot be negative' }]}>
+          <InputNumber
+            style={{ width: '100%' }}
+            min={0}
+            step={500}
+            precision={2}
+            prefix={currency === 'USD' ? '$' : undefined}
+            suffix={currency !== 'USD' ? currency : undefined}
+            aria-label="Budget"
+          />
+        </Form.Item>
+        {isEdit && (
+          <Form.Item label="Stage" name="status">
+            <Select options={projectStatuses.map((s) => ({ value: s, label: statusLabels[s] }))} aria-label="Stage" />
+          </Form.Item>
+        )}
+      </Form>
+    </Drawer>
+  );
+}

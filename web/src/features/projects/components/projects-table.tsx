@@ -1,0 +1,156 @@
+import { Button, Flex, Input, Table, Typography } from 'antd';
+import type { ColumnsType, TableProps } from 'antd/es/table';
+import { Link } from 'react-router-dom';
+import { toProjectDetail } from '@/config/paths';
+import { EmptyState, ErrorState } from '@/components/query-state';
+import { PAGE_SIZES } from '@/hooks/use-list-search-params';
+import { formatDate, sorterToParams, sortOrderFor } from '@/lib/table';
+import { useProjects } from '../api/get-projects';
+import { statusLabels, useLabels } from '../project-labels';
+import { projectSortFields, projectStatuses, type Project, type ProjectListQuery, type ProjectStatus } from '../types';
+import { ProjectStatusTag } from './project-status-tag';
+
+export type ProjectsTableProps = {
+  query: ProjectListQuery;
+  onQueryChange: (patch: Partial<ProjectListQuery>) => void;
+  showCustomer?: boolean;
+  onCreate?: () => void;
+  /** Text for the empty state when nothing exists yet. */
+  emptyText?: string;
+};
+
+export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCreate, emptyText }: ProjectsTableProps) {
+  const projects = useProjects(query);
+
+  const columns: ColumnsType<Project> = [
+    {
+      title: 'Project',
+      dataIndex: 'title',
+      key: 'title',
+      sorter: true,
+      sortOrder: sortOrderFor('title', query.sort, query.order),
+      render: (title: string, p) => (
+        <Flex vertical>
+          <Link to={toProjectDetail(p.id)} style={{ fontWeight: 600 }}>
+            {title}
+          </Link>
+          <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+            {p.vehicleDescription}
+          </Typography.Text>
+        </Flex>
+      ),
+    },
+    ...(showCustomer
+      ? ([{ title: 'Customer', key: 'customer', render: (_: unknown, p: Project) => p.customer?.name ?? '—' }] as ColumnsType<Project>)
+      : []),
+    {
+      title: 'Use',
+      key: 'use',
+      responsive: ['lg'],
+      render: (_, p) => (p.goals?.use ? useLabels[p.goals.use] : '—'),
+    },
+    {
+      title: 'Stage',
+      dataIndex: 'status',
+      key: 'status',
+      sorter: true,
+      sortOrder: sortOrderFor('status', query.sort, query.order),
+      filters: projectStatuses.map((s) => ({ text: statusLabels[s], value: s })),
+      filterMultiple: false,
+      filteredValue: query.status ? [query.status] : null,
+      render: (status: ProjectStatus) => <ProjectStatusTag status={status} />,
+    },
+    {
+      title: 'Opened',
+      dataIndex: 'createdAt',
+      key: 'createdAt',
+      sorter: true,
+      sortOrder: sortOrderFor('createdAt', query.sort, query.order),
+      render: formatDate,
+      responsive: ['md'],
+    },
+    {
+      title: 'Last change',
+      dataIndex: 'updatedAt',
+      key: 'updatedAt',
+      sorter: true,
+      sortOrder: sortOrderFor('updatedAt', query.sort, query.order),
+      render: formatDate,
+    },
+  ];
+
+  const onChange: TableProps<Project>['onChange'] = (pagination, filters, sorter, extra) => {
+    if (extra.action === 'sort') {
+      onQueryChange({ ...sorterToParams(sorter, projectSortFields), page: 1 });
+    } else if (extra.action === 'filter') {
+      const status = filters.status?.[0] as ProjectStatus | undefined;
+      onQueryChange({ status, page: 1 });
+    } else if (extra.action === 'paginate') {
+      const pageSize = pagination.pageSize ?? query.pageSize;
+      onQueryChange({ page: pageSize !== query.pageSize ? 1 : (pagination.current ?? 1), pageSize });
+    }
+  };
+
+  if (projects.isError && !projects.data) {
+    return <ErrorState error={projects.error} onRetry={() => void projects.refetch()} />;
+  }
+
+  const page = projects.data;
+  const filtered = Boolean(query.search || query.status || query.customerId);
+
+  return (
+    <Flex vertical gap={12}>
+      <Input.Search
+        allowClear
+        placeholder="Search by project or vehicle"
+        aria-label="Search projects"
+        defaultValue={query.search}
+        onSearch={(value) => onQueryChange({ search: value.trim() || undefined, page: 1 })}
+        style={{ maxWidth: 360 }}
+      />
+      <Table<Project>
+        aria-label="Projects"
+        data-testid="projects-table"
+        rowKey="id"
+        columns={columns}
+        dataSource={page?.items ?? []}
+        loading={projects.isFetching}
+        onChange={onChange}
+        sortDirections={['ascend', 'descend', 'ascend']}
+        pagination={{
+          current: query.page,
+          pageSize: query.pageSize,
+          total: page?.total ?? 0,
+          showSizeChanger: true,
+          pageSizeOptions: PAGE_SIZES.map(String),
+          showTotal: (total, [from, to]) => `${from}–${to} of ${total}`,
+        }}
+        locale={{
+          emptyText: projects.isPending ? (
+            ' '
+          ) : filtered ? (
+            <EmptyState
+              description="No project matches these filters."
+              action={
+                <Button onClick={() => onQueryChange({ search: undefined, status: undefined, customerId: undefined, page: 1 })}>
+                  Clear filters
+                </Button>
+              }
+            />
+          ) : (
+            <EmptyState
+              description={emptyText ?? 'No projects yet. Open one when a vehicle comes in for a swap.'}
+              action={
+                onCreate ? (
+                  <Button type="primary" onClick={onCreate}>
+                    Open a project
+                  </Button>
+                ) : undefined
+              }
+            />
+          ),
+        }}
+      />
+    </Flex>
+  );
+}

@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Shop } from '../types';
+import { shopKeys } from './shop-keys';
+
+export async function getShop(signal?: AbortSignal): Promise<Shop> {
+  const { data } = await apiClient.get<Shop>('/shops/current', { signal });
+  return data;
+}
+
+export const shopQueryOptions = () =>
+  queryOptions({ queryKey: shopKeys.current(), queryFn: ({ signal }) => getShop(signal), staleTime: 5 * 60_000 });
+
+export function useShop({ enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({ ...shopQueryOptions(), enabled });
+}

@@ -1,0 +1,4 @@
+export const shopKeys = {
+  all: ['shop'] as const,
+  current: () => [...shopKeys.all, 'current'] as const,
+};

@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Shop, UpdateShopInput } from '../types';
+import { shopKeys } from './shop-keys';
+
+export async function updateShop(changes: UpdateShopInput): Promise<Shop> {
+  const { data } = await apiClient.patch<Shop>('/shops/current', changes, { skipErrorNotification: true });
+  return data;
+}
+
+export function useUpdateShop({ onSuccess }: { onSuccess?: (shop: Shop) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateShop,
+    onSuccess: (shop) => {
+      queryClient.setQueryData(shopKeys.current(), shop);
+      // the signed-in user's copy of shop name and units is stale now
+      void queryClient.invalidateQueries({ queryKey: ['auth'] });
+      onSuccess?.(shop);
+    },
+  });
+}

@@ -1,0 +1,128 @@
+import { Button, Card, Col, Form, Input, InputNumber, Radio, Row, Typography } from 'antd';
+import { useEffect } from 'react';
+import { FormErrorAlert } from '@/components/form-error-alert';
+import { notifySuccess } from '@/lib/notifier';
+import { useUpdateShop } from '../api/update-shop';
+import type { Shop, UpdateShopInput } from '../types';
+
+export type ShopSettingsFormProps = { shop: Shop; canEdit: boolean };
+
+type ShopSettingsValues = Required<Omit<UpdateShopInput, 'currency'>>;
+
+export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
+  const [form] = Form.useForm<ShopSettingsValues>();
+  const update = useUpdateShop({ onSuccess: () => notifySuccess({ title: 'Shop settings saved' }) });
+
+  useEffect(() => {
+    form.setFieldsValue({
+      name: shop.name,
+      unitSystem: shop.unitSystem,
+      laborRatePerHour: shop.laborRatePerHour,
+      taxRatePercent: shop.taxRatePercent,
+      shopSuppliesPercent: shop.shopSuppliesPercent,
+    });
+  }, [shop, form]);
+
+  const submit = (v: ShopSettingsValues) => {
+    const changes: UpdateShopInput = {};
+    (Object.keys(v) as (keyof ShopSettingsValues)[]).forEach((k) => {
+      const value = k === 'name' ? v.name.trim() : v[k];
+      if (value !== shop[k]) (changes as Record<string, unknown>)[k] = value;
+    });
+    if (Object.keys(changes).length === 0) {
+      notifySuccess({ title: 'Nothing changed' });
+      return;
+    }
+    update.mutate(changes);
+  };
+
+  const money = shop.currency === 'USD' ? { prefix: '$' } : { suffix: shop.currency };
+
+  return (
+    <Form<ShopSettingsValues>
+      form={form}
+      layout="vertical"
+      onFinish={submit}
+      disabled={!canEdit}
+      aria-label="Shop settings"
+      style={{ maxWidth: 720 }}
+    >
+      <FormErrorAlert error={update.error} />
+      <Card title="Shop" style={{ marginBottom: 16 }}>
+        <Form.Item
+          label="Shop name"
+          name="name"
+          rules={[
+            { required: true, whitespace: true, message: 'The shop needs a name' },
+            { max: 120, message: 'Keep the name under 120 characters' },
+          ]}
+        >
+          <Input />
+        </Form.Item>
+        <Form.Item
+          label="Units"
+          name="unitSystem"
+          extra="How lengths show for everyone in the shop. Each person can switch for themselves in the top bar; figures are always stored in millimetres."
+        >
+          <Radio.Group
+            optionType="button"
+            buttonStyle="solid"
+            options={[
+              { value: 'in', label: 'Inches' },
+              { value: 'mm', label: 'Millimetres' },
+            ]}
+          />
+        </Form.Item>
+      </Card>
+      <Card title="Rates for quotes" style={{ marginBottom: 16 }}>
+        <Row gutter={16}>
+          <Col xs={24} sm={8}>
+            <Form.Item
+              label="Labor rate per hour"
+              name="laborRatePerHour"
+              rules={[
+                { required: true, message: 'Enter the labor rate' },
+                { type: 'number', min: 0, max: 10000, message: 'Between 0 and 10,000' },
+              ]}
+            >
+              <InputNumber style={{ width: '100%' }} min={0} precision={2} step={5} {...money} aria-label="Labor rate per hour" />
+            </Form.Item>
+          </Col>
+          <Col xs={24} sm={8}>
+            <Form.Item
+              label="Sales tax"
+              name="taxRatePercent"
+              rules={[
+                { required: true, message: 'Enter the tax rate (0 if none)' },
+                { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
+              ]}
+            >
+              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={3} step={0.25} suffix="%" aria-label="Sales tax" />
+            </Form.Item>
+          </Col>
+          <Col xs={24} sm={8}>
+            <Form.Item
+              label="Shop supplies"
+              name="shopSuppliesPercent"
+              extra="Added to quotes for consumables."
+              rules={[
+                { required: true, message: 'Enter the shop supplies share (0 if none)' },
+                { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
+              ]}
+            >
+              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={2} step={0.5} suffix="%" aria-label="Shop supplies" />
+            </Form.Item>
+          </Col>
+        </Row>
+        <Typography.Text type="secondary">
+          Currency: {shop.currency}. Check the tax rate against your local rules; quotes use it as entered.
+        </Typography.Text>
+      </Card>
+      {canEdit && (
+        <Button type="primary" htmlType="submit" loading={update.isPending}>
+          Save settings
+        </Button>
+      )}
+    </Form>
+  );
+}

@@ -1,0 +1,30 @@
+import type { SorterResult } from 'antd/es/table/interface';
+import type { SortOrder } from '@/types/api';
+
+export type TableSort<TSort extends string> = { sort?: TSort; order?: SortOrder };
+
+/** antd's sorter → our `sort` / `order` query params. */
+export function sorterToParams<TRecord, TSort extends string>(
+  sorter: SorterResult<TRecord> | SorterResult<TRecord>[],
+  allowed: readonly TSort[],
+): TableSort<TSort> {
+  const s = Array.isArray(sorter) ? sorter[0] : sorter;
+  const field = (s?.columnKey ?? s?.field) as string | undefined;
+  if (!s?.order || !field) return { sort: undefined, order: undefined };
+  const sort = allowed.find((a) => a === field);
+  if (!sort) return { sort: undefined, order: undefined };
+  return { sort, order: s.order === 'descend' ? 'desc' : 'asc' };
+}
+
+/** Our params → antd's controlled `sortOrder` for one column. */
+export function sortOrderFor(column: string, sort?: string, order?: SortOrder): 'ascend' | 'descend' | null {
+  if (sort !== column) return null;
+  return order === 'desc' ? 'descend' : 'ascend';
+}
+
+export function formatDate(iso: string | null | undefined): string {
+  if (!iso) return '—';
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return '—';
+  return new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric' }).format(d);
+}

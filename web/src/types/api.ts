@@ -1,0 +1,41 @@
+/** Shapes from the HTTP API contract that more than one feature needs. */
+
+export type Role = 'owner' | 'estimator' | 'fabricator' | 'counter' | 'customer';
+
+export const roles: readonly Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
+
+export type UnitSystem = 'in' | 'mm';
+
+export type CurrentUser = {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  shop: { id: string; name: string; unitSystem: UnitSystem };
+  customerId: string | null;
+};
+
+export type Session = {
+  accessToken: string;
+  refreshToken: string;
+  expiresIn: number;
+  user: CurrentUser;
+};
+
+export type Page<T> = {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+};
+
+export type SortOrder = 'asc' | 'desc';
+
+export type ApiErrorBody = {
+  statusCode: number;
+  error: string;
+  code: string;
+  message: string;
+  details?: string[];
+  correlationId?: string;
+};

@@ -1,0 +1,24 @@
+import { fileURLToPath, URL } from 'node:url';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vite';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: {
+    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+  },
+  server: {
+    host: '127.0.0.1',
+    proxy: { '/api': 'http://127.0.0.1:3000' },
+  },
+  preview: {
+    host: '127.0.0.1',
+    proxy: { '/api': 'http://127.0.0.1:3000' },
+  },
+  build: {
+    outDir: 'dist',
+    emptyOutDir: true,
+    // antd alone is larger than the default 500 kB warning threshold; routes are split with React.lazy.
+    chunkSizeWarningLimit: 900,
+  },
+});
