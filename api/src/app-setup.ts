@@ -1,12 +1,14 @@
 import { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
+import { createJsonBodyMiddleware } from './common/middleware/json-body.middleware';
 
 export const API_PREFIX = 'api';
 
 /** Everything main.ts and the e2e tests share, so tests run the app exactly as served. */
 export function configureApp(app: INestApplication): INestApplication {
   app.use(correlationIdMiddleware);
+  app.use(createJsonBodyMiddleware());
   app.setGlobalPrefix(API_PREFIX);
   app.enableShutdownHooks();
   const document = SwaggerModule.createDocument(

@@ -14,6 +14,7 @@ import { validateEnv } from './config/env.validation';
 import { CustomersModule } from './customers/customers.module';
 import { buildDataSourceOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
+import { InvitationsModule } from './invitations/invitations.module';
 import { MailModule } from './mail/mail.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
@@ -50,6 +51,7 @@ import { UsersModule } from './users/users.module';
     ShopsModule,
     MembershipsModule,
     AuthModule,
+    InvitationsModule,
     CustomersModule,
     ProjectsModule,
     HealthModule,

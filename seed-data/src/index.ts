@@ -1,1 +1,4 @@
 export const SEED_VERSION = 1;
+export * from './demo-shop';
+export * from './demo-customers';
+export * from './demo-projects';

@@ -1,7 +1,7 @@
 import { RefreshToken } from '../auth/refresh-token.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { Customer } from '../customers/customer.entity';
-import { Invitation } from '../memberships/invitation.entity';
+import { Invitation } from '../invitations/invitation.entity';
 import { Membership } from '../memberships/membership.entity';
 import { Project } from '../projects/project.entity';
 import { Shop } from '../shops/shop.entity';

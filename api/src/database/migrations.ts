@@ -2,6 +2,7 @@ import { CreateUsers1796100000000 } from './migrations/1796100000000-create-user
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
 import { CreateCustomers1796100002000 } from './migrations/1796100002000-create-customers';
 import { CreateMemberships1796100003000 } from './migrations/1796100003000-create-memberships';
+import { CreateInvitations1796100003500 } from './migrations/1796100003500-create-invitations';
 import { CreateAuthTokens1796100004000 } from './migrations/1796100004000-create-auth-tokens';
 import { CreateProjects1796100005000 } from './migrations/1796100005000-create-projects';
 
@@ -11,6 +12,7 @@ export const MIGRATIONS = [
   CreateShops1796100001000,
   CreateCustomers1796100002000,
   CreateMemberships1796100003000,
+  CreateInvitations1796100003500,
   CreateAuthTokens1796100004000,
   CreateProjects1796100005000,
 ];

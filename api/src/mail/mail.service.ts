@@ -1,7 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { EnvironmentVariables } from '../config/env.validation';
 import { createTransport, Transporter } from 'nodemailer';
-import { AppConfigService } from '../config/app-config';
 
 export interface OutgoingMail {
   to: string;
@@ -16,8 +16,8 @@ export class MailService {
   private readonly transport: Transporter;
   private readonly from: string;
 
-  constructor(config: ConfigService) {
-    const typed = config as AppConfigService;
+  constructor(config: ConfigService<EnvironmentVariables, true>) {
+    const typed = config;
     this.from = typed.get('MAIL_FROM', { infer: true });
     this.transport = createTransport({
       host: typed.get('SMTP_HOST', { infer: true }),

@@ -309,3 +309,40 @@ export function outlineGap(a: readonly ChassisPoint[], aClosed: boolean, b: read
 export function outlineGapValue(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): number {
   return outlineGap(a, aClosed, b, dz).gap;
 }
+
+/** The way the engine would move to clear an obstacle; DESIGN.md's gap uses `up` (a vertical lift). */
+export type SeparationDirection = 'up' | 'down' | 'forward' | 'rearward';
+
+/**
+ * The gap with the overlap measured along another direction: `down` for obstacles above the engine (the
+ * transmission tunnel), `forward` for the firewall behind it. When the outlines do not touch it is the same
+ * smallest distance as outlineGap. The direction is turned onto +z by a rotation or a mirror, which keeps
+ * distances, and turned back for the witness points.
+ */
+export function outlineGapToward(
+  a: readonly ChassisPoint[],
+  aClosed: boolean,
+  b: readonly ChassisPoint[],
+  dz = 0,
+  direction: SeparationDirection = 'up',
+): GapResult {
+  if (direction === 'up') return outlineGap(a, aClosed, b, dz);
+  const to = (p: ChassisPoint, shift: number): ChassisPoint => {
+    const z = p.z + shift;
+    if (direction === 'down') return { x: p.x, z: -z };
+    if (direction === 'forward') return { x: z, z: -p.x };
+    return { x: -z, z: p.x };
+  };
+  const back = (p: ChassisPoint): ChassisPoint => {
+    if (direction === 'down') return { x: p.x, z: -p.z };
+    if (direction === 'forward') return { x: -p.z, z: p.x };
+    return { x: p.z, z: -p.x };
+  };
+  const r = outlineGap(
+    a.map((p) => to(p, dz)),
+    aClosed,
+    b.map((p) => to(p, 0)),
+    0,
+  );
+  return { ...r, from: back(r.from), to: back(r.to) };
+}

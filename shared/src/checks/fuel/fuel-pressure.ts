@@ -25,7 +25,7 @@ export function checkFuelSystemPressure({ spec, settings }: CheckContext): Findi
     return measuredFinding(
       FIELDS,
       { measured: system.regulatorPsi, required, margin: -Math.abs(required - system.regulatorPsi), status: 'fails' },
-      `The chassis has a carburettor fuel system at ${system.regulatorPsi.toFixed(1)} psi; the engine's injection needs ${required.toFixed(1)} psi, so the system needs an injection pump and regulator.`,
+      `The chassis has a carburetor fuel system at ${system.regulatorPsi.toFixed(1)} psi; the engine's injection needs ${required.toFixed(1)} psi, so the system needs an injection pump and regulator.`,
       efiFuelSupplyRemedies(spec, minFlow),
     );
   }

@@ -46,7 +46,7 @@ export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
     return measuredFinding(
       FIELDS,
       { measured: 0, required, margin: -required, status: 'fails' },
-      `${need}; the chassis has a carburettor fuel system whose low-pressure pump cannot feed injection.`,
+      `${need}; the chassis has a carburetor fuel system whose low-pressure pump cannot feed injection.`,
       remedies,
     );
   }

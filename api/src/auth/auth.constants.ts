@@ -1,0 +1,10 @@
+export const ACCESS_TOKEN_TTL_SECONDS = 15 * 60;
+export const REFRESH_TOKEN_TTL_MS = 30 * 24 * 60 * 60 * 1000;
+export const PASSWORD_RESET_TTL_MS = 30 * 60 * 1000;
+export const BCRYPT_ROUNDS = 10;
+
+export interface AccessTokenPayload {
+  sub: string;
+  /** membership id: the shop and role this token acts in */
+  mid: string;
+}

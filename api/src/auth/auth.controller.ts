@@ -1,0 +1,90 @@
+import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import {
+  ApiAcceptedResponse,
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import { ErrorResponseDto } from '../common/errors/error-response.dto';
+import { AuthUser } from '../common/tenant/auth-user';
+import { AuthService } from './auth.service';
+import { PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password-reset.dto';
+import { RefreshTokenDto } from './dto/refresh-token.dto';
+import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
+import { SignInDto } from './dto/sign-in.dto';
+import { SignUpDto } from './dto/sign-up.dto';
+import { PasswordResetService } from './password-reset.service';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly auth: AuthService,
+    private readonly passwordReset: PasswordResetService,
+  ) {}
+
+  @Public()
+  @Post('sign-up')
+  @ApiCreatedResponse({ type: SessionResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  signUp(@Body() body: SignUpDto): Promise<SessionResponseDto> {
+    return this.auth.signUp(body);
+  }
+
+  @Public()
+  @Post('sign-in')
+  @HttpCode(200)
+  @ApiOkResponse({ type: SessionResponseDto })
+  @ApiUnauthorizedResponse({ type: ErrorResponseDto })
+  signIn(@Body() body: SignInDto): Promise<SessionResponseDto> {
+    return this.auth.signIn(body);
+  }
+
+  @Public()
+  @Post('refresh')
+  @HttpCode(200)
+  @ApiOkResponse({ type: SessionResponseDto })
+  @ApiUnauthorizedResponse({ type: ErrorResponseDto })
+  refresh(@Body() body: RefreshTokenDto): Promise<SessionResponseDto> {
+    return this.auth.refresh(body.refreshToken);
+  }
+
+  // Public so a client whose access token has lapsed can still end its session.
+  @Public()
+  @Post('sign-out')
+  @HttpCode(204)
+  @ApiNoContentResponse()
+  async signOut(@Body() body: RefreshTokenDto): Promise<void> {
+    await this.auth.signOut(body.refreshToken);
+  }
+
+  @Get('me')
+  @ApiBearerAuth()
+  @ApiOkResponse({ type: CurrentUserResponseDto })
+  me(@CurrentUser() user: AuthUser): Promise<CurrentUserResponseDto> {
+    return this.auth.me(user);
+  }
+
+  @Public()
+  @Post('password-reset/request')
+  @HttpCode(202)
+  @ApiAcceptedResponse({ description: 'Always; a link valid 30 minutes is mailed when the account exists' })
+  async requestPasswordReset(@Body() body: PasswordResetRequestDto): Promise<void> {
+    await this.passwordReset.request(body.email);
+  }
+
+  @Public()
+  @Post('password-reset/confirm')
+  @HttpCode(204)
+  @ApiNoContentResponse()
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  async confirmPasswordReset(@Body() body: PasswordResetConfirmDto): Promise<void> {
+    await this.passwordReset.confirm(body.token, body.password);
+  }
+}

@@ -1,0 +1,31 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { IsEmail, IsNotEmpty, IsString, MaxLength, MinLength } from 'class-validator';
+
+export const PASSWORD_MIN = 8;
+// bcrypt reads at most 72 bytes.
+export const PASSWORD_MAX = 72;
+
+export class SignUpDto {
+  @ApiProperty({ example: 'builder@example.test', maxLength: 254 })
+  @IsEmail({}, { message: 'email must be an e-mail address' })
+  @MaxLength(254)
+  email: string;
+
+  @ApiProperty({ minLength: PASSWORD_MIN, maxLength: PASSWORD_MAX })
+  @IsString()
+  @MinLength(PASSWORD_MIN, { message: `password must be at least ${PASSWORD_MIN} characters long` })
+  @MaxLength(PASSWORD_MAX)
+  password: string;
+
+  @ApiProperty({ maxLength: 120 })
+  @IsString()
+  @IsNotEmpty({ message: 'name must not be empty' })
+  @MaxLength(120)
+  name: string;
+
+  @ApiProperty({ maxLength: 120, example: 'Back Forty Garage' })
+  @IsString()
+  @IsNotEmpty({ message: 'shopName must not be empty' })
+  @MaxLength(120)
+  shopName: string;
+}

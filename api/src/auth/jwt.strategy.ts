@@ -1,0 +1,31 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { EnvironmentVariables } from '../config/env.validation';
+import { PassportStrategy } from '@nestjs/passport';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import { AuthUser } from '../common/tenant/auth-user';
+import { AccessTokenPayload } from './auth.constants';
+import { AuthErrors } from './auth.errors';
+import { MemberResolverService } from './member-resolver.service';
+
+/** Verifies the access token, then reloads the membership so a removed member or changed role counts at once. */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
+  constructor(
+    config: ConfigService<EnvironmentVariables, true>,
+    private readonly members: MemberResolverService,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      ignoreExpiration: false,
+      secretOrKey: config.get('JWT_SECRET', { infer: true }),
+      algorithms: ['HS256'],
+    });
+  }
+
+  async validate(payload: AccessTokenPayload): Promise<AuthUser> {
+    const user = typeof payload.mid === 'string' ? await this.members.resolve(payload.mid) : null;
+    if (!user || user.userId !== payload.sub) throw AuthErrors.memberGone();
+    return user;
+  }
+}

@@ -1,0 +1,79 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { EnvironmentVariables } from '../config/env.validation';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, IsNull, MoreThan } from 'typeorm';
+import { MailService } from '../mail/mail.service';
+import { UsersService } from '../users/users.service';
+import { PASSWORD_RESET_TTL_MS } from './auth.constants';
+import { AuthErrors } from './auth.errors';
+import { hashPassword } from './auth.service';
+import { PasswordResetToken } from './password-reset-token.entity';
+import { SessionsService } from './sessions.service';
+import { hashToken, newOpaqueToken } from './token-hash';
+
+@Injectable()
+export class PasswordResetService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly users: UsersService,
+    private readonly mail: MailService,
+    private readonly sessions: SessionsService,
+    private readonly config: ConfigService<EnvironmentVariables, true>,
+  ) {}
+
+  /** Always succeeds from the caller's point of view, so nobody can probe which e-mails have accounts. */
+  async request(email: string): Promise<void> {
+    const user = await this.users.findByEmail(email);
+    if (!user) return;
+    const { token, hash } = newOpaqueToken();
+    await this.dataSource.transaction(async (manager) => {
+      // Only the newest link works.
+      await manager.update(PasswordResetToken, { userId: user.id, usedAt: IsNull() }, { usedAt: new Date() });
+      await manager.insert(PasswordResetToken, {
+        id: randomUUID(),
+        userId: user.id,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MS),
+        usedAt: null,
+      });
+    });
+    const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
+    const link = `${appUrl}/reset-password?token=${encodeURIComponent(token)}`;
+    await this.mail.sendOrLog({
+      to: user.email,
+      subject: 'Reset your Swapwright password',
+      text:
+        `Hello ${user.name},\n\nSomeone (hopefully you) asked to reset the password of your Swapwright account.\n` +
+        `Open this link within 30 minutes to choose a new one; it works once:\n\n${link}\n\n` +
+        `If you did not ask for this, ignore this e-mail: your password stays as it is.\n`,
+      html:
+        `<p>Hello ${escapeHtml(user.name)},</p><p>Someone (hopefully you) asked to reset the password of your Swapwright account.</p>` +
+        `<p><a href="${link}">Choose a new password</a> within 30 minutes; the link works once.</p>` +
+        `<p>If you did not ask for this, ignore this e-mail: your password stays as it is.</p>`,
+    });
+  }
+
+  async confirm(token: string, password: string): Promise<void> {
+    const passwordHash = await hashPassword(password);
+    await this.dataSource.transaction(async (manager) => {
+      const stored = await manager.findOne(PasswordResetToken, { where: { tokenHash: hashToken(token) } });
+      if (!stored) throw AuthErrors.resetTokenInvalid();
+      const now = new Date();
+      const used = await manager.update(
+        PasswordResetToken,
+        { id: stored.id, usedAt: IsNull(), expiresAt: MoreThan(now) },
+        { usedAt: now },
+      );
+      if (used.affected !== 1) throw AuthErrors.resetTokenInvalid();
+      await this.users.setPasswordHash(manager, stored.userId, passwordHash);
+      // A new password ends every open session.
+      await this.sessions.revokeAllForUser(stored.userId, manager);
+    });
+  }
+}
+
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (char) => `&#${char.charCodeAt(0)};`);
+}

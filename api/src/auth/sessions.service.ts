@@ -1,0 +1,78 @@
+import { Injectable } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager, IsNull } from 'typeorm';
+import { Shop } from '../shops/shop.entity';
+import { ACCESS_TOKEN_TTL_SECONDS, AccessTokenPayload, REFRESH_TOKEN_TTL_MS } from './auth.constants';
+import { AuthErrors } from './auth.errors';
+import { mapCurrentUser } from './current-user.mapper';
+import { SessionResponseDto } from './dto/session-response.dto';
+import { MemberResolverService } from './member-resolver.service';
+import { RefreshToken } from './refresh-token.entity';
+import { hashToken, newOpaqueToken } from './token-hash';
+
+@Injectable()
+export class SessionsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly jwt: JwtService,
+    private readonly members: MemberResolverService,
+  ) {}
+
+  /** A new access token and refresh token for the membership; pass the manager of an open transaction. */
+  async issue(membershipId: string, manager: EntityManager = this.dataSource.manager): Promise<SessionResponseDto> {
+    const user = await this.members.resolve(membershipId, manager);
+    if (!user) throw AuthErrors.memberGone();
+    const shop = await manager.findOneOrFail(Shop, { where: { id: user.shopId } });
+    const refresh = newOpaqueToken();
+    await manager.insert(RefreshToken, {
+      id: randomUUID(),
+      userId: user.userId,
+      membershipId: user.membershipId,
+      tokenHash: refresh.hash,
+      expiresAt: new Date(Date.now() + REFRESH_TOKEN_TTL_MS),
+      revokedAt: null,
+      replacedById: null,
+    });
+    const payload: AccessTokenPayload = { sub: user.userId, mid: user.membershipId };
+    const accessToken = await this.jwt.signAsync(payload, { expiresIn: ACCESS_TOKEN_TTL_SECONDS });
+    return { accessToken, refreshToken: refresh.token, expiresIn: ACCESS_TOKEN_TTL_SECONDS, user: mapCurrentUser(user, shop) };
+  }
+
+  /** Exchanges a refresh token for a new session; the presented token stops working. */
+  async rotate(refreshToken: string): Promise<SessionResponseDto> {
+    const stored = await this.dataSource.manager.findOne(RefreshToken, { where: { tokenHash: hashToken(refreshToken) } });
+    if (!stored) throw AuthErrors.refreshTokenInvalid();
+    if (stored.revokedAt) {
+      // A rotated token coming back means it was copied: end every session of that user.
+      if (stored.replacedById) await this.revokeAllForUser(stored.userId);
+      throw AuthErrors.refreshTokenInvalid();
+    }
+    if (stored.expiresAt.getTime() <= Date.now()) throw AuthErrors.refreshTokenInvalid();
+    return this.dataSource.transaction(async (manager) => {
+      const session = await this.issue(stored.membershipId, manager);
+      const replacement = await manager.findOneOrFail(RefreshToken, { where: { tokenHash: hashToken(session.refreshToken) } });
+      const result = await manager.update(
+        RefreshToken,
+        { id: stored.id, revokedAt: IsNull() },
+        { revokedAt: new Date(), replacedById: replacement.id },
+      );
+      // Two refreshes racing with one token: only the first wins.
+      if (result.affected !== 1) throw AuthErrors.refreshTokenInvalid();
+      return session;
+    });
+  }
+
+  async revoke(refreshToken: string): Promise<void> {
+    await this.dataSource.manager.update(
+      RefreshToken,
+      { tokenHash: hashToken(refreshToken), revokedAt: IsNull() },
+      { revokedAt: new Date() },
+    );
+  }
+
+  async revokeAllForUser(userId: string, manager: EntityManager = this.dataSource.manager): Promise<void> {
+    await manager.update(RefreshToken, { userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+  }
+}

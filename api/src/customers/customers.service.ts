@@ -1,0 +1,94 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, Repository } from 'typeorm';
+import { CommonErrors } from '../common/errors/app-error';
+import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
+import { AuthUser } from '../common/tenant/auth-user';
+import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
+import { Project } from '../projects/project.entity';
+import { Customer } from './customer.entity';
+import { CustomerErrors } from './customers.errors';
+import { CreateCustomerDto } from './dto/create-customer.dto';
+import { ListCustomersQueryDto } from './dto/list-customers-query.dto';
+import { UpdateCustomerDto } from './dto/update-customer.dto';
+
+function clean(value: string | null | undefined): string | null | undefined {
+  if (value === undefined || value === null) return value;
+  const trimmed = value.trim();
+  return trimmed === '' ? null : trimmed;
+}
+
+@Injectable()
+export class CustomersService {
+  private readonly scoped: TenantRepository<Customer>;
+
+  constructor(
+    @InjectRepository(Customer) customers: Repository<Customer>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {
+    this.scoped = new TenantRepository(customers);
+  }
+
+  async list(user: AuthUser, query: ListCustomersQueryDto): Promise<Page<Customer>> {
+    const sort = query.sort ?? 'name';
+    const order = (query.order ?? (sort === 'name' || sort === 'email' ? 'asc' : 'desc')).toUpperCase() as 'ASC' | 'DESC';
+    const builder = this.scoped.query(user, 'customer');
+    if (query.search?.trim()) {
+      builder.andWhere('(customer.name LIKE :search OR customer.email LIKE :search OR customer.phone LIKE :search)', {
+        search: likeContains(query.search.trim()),
+      });
+    }
+    const [items, total] = await builder
+      .orderBy(`customer.${sort}`, order)
+      .addOrderBy('customer.id', 'ASC')
+      .skip(skipOf(query))
+      .take(query.pageSize)
+      .getManyAndCount();
+    return toPage(items, total, query);
+  }
+
+  async get(user: AuthUser, id: string): Promise<Customer> {
+    const customer = await this.scoped.findById(user, id);
+    if (!customer) throw CustomerErrors.notFound();
+    return customer;
+  }
+
+  async create(user: AuthUser, input: CreateCustomerDto): Promise<Customer> {
+    const customer = this.scoped.repository.create({
+      id: randomUUID(),
+      shopId: user.shopId,
+      name: input.name.trim(),
+      email: clean(input.email) ?? null,
+      phone: clean(input.phone) ?? null,
+      notes: clean(input.notes) ?? null,
+      userId: null,
+    });
+    await this.scoped.repository.insert(customer);
+    return this.get(user, customer.id);
+  }
+
+  async update(user: AuthUser, id: string, input: UpdateCustomerDto): Promise<Customer> {
+    const customer = await this.get(user, id);
+    if (input.name === null) throw CommonErrors.validation(['name must not be empty']);
+    if (input.name !== undefined) customer.name = input.name.trim();
+    if (input.email !== undefined) customer.email = clean(input.email) ?? null;
+    if (input.phone !== undefined) customer.phone = clean(input.phone) ?? null;
+    if (input.notes !== undefined) customer.notes = clean(input.notes) ?? null;
+    await this.scoped.repository.save(customer);
+    return this.get(user, id);
+  }
+
+  async remove(user: AuthUser, id: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const customer = await manager.findOne(Customer, {
+        where: { id, shopId: user.shopId },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!customer) throw CustomerErrors.notFound();
+      const projects = await manager.count(Project, { where: { customerId: id, shopId: user.shopId } });
+      if (projects > 0) throw CustomerErrors.hasProjects(projects);
+      await manager.delete(Customer, { id, shopId: user.shopId });
+    });
+  }
+}

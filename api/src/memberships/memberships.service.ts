@@ -1,0 +1,88 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager, Repository } from 'typeorm';
+import { Role } from '../common/roles/role';
+import { AuthUser } from '../common/tenant/auth-user';
+import { TenantRepository } from '../common/tenant/tenant-repository';
+import { Customer } from '../customers/customer.entity';
+import { Membership } from './membership.entity';
+import { MembershipErrors } from './memberships.errors';
+
+@Injectable()
+export class MembershipsService {
+  private readonly scoped: TenantRepository<Membership>;
+
+  constructor(
+    @InjectRepository(Membership) private readonly memberships: Repository<Membership>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {
+    this.scoped = new TenantRepository(memberships);
+  }
+
+  list(user: AuthUser): Promise<Membership[]> {
+    return this.scoped.query(user, 'membership').leftJoinAndSelect('membership.user', 'user').orderBy('membership.createdAt', 'ASC').getMany();
+  }
+
+  async updateRole(user: AuthUser, id: string, role: Role): Promise<Membership> {
+    return this.dataSource.transaction(async (manager) => {
+      const membership = await this.lockInShop(manager, user, id);
+      if (membership.role === 'owner' && role !== 'owner') await this.assertAnotherOwner(manager, user, id);
+      membership.role = role;
+      await manager.save(membership);
+      return membership;
+    });
+  }
+
+  async remove(user: AuthUser, id: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const membership = await this.lockInShop(manager, user, id);
+      if (membership.role === 'owner') await this.assertAnotherOwner(manager, user, id);
+      await manager.update(Customer, { shopId: user.shopId, userId: membership.userId }, { userId: null });
+      // Refresh tokens of this membership go with it (ON DELETE CASCADE); access tokens stop at the next request.
+      await manager.delete(Membership, { id: membership.id, shopId: user.shopId });
+    });
+  }
+
+  /** Inside the sign-up or invitation transaction. */
+  create(manager: EntityManager, input: { shopId: string; userId: string; role: Role }): Promise<Membership> {
+    return manager.save(manager.create(Membership, { id: randomUUID(), ...input }));
+  }
+
+  /** The membership a sign-in lands in: the oldest one of the user. */
+  firstForUser(userId: string): Promise<Membership | null> {
+    return this.memberships.findOne({ where: { userId }, order: { createdAt: 'ASC' } });
+  }
+
+  isMember(shopId: string, email: string): Promise<boolean> {
+    return this.memberships
+      .createQueryBuilder('membership')
+      .innerJoin('membership.user', 'user')
+      .where('membership.shopId = :shopId AND user.email = :email', { shopId, email })
+      .getExists();
+  }
+
+  private async lockInShop(manager: EntityManager, user: AuthUser, id: string): Promise<Membership> {
+    const membership = await manager
+      .createQueryBuilder(Membership, 'membership')
+      .setLock('pessimistic_write')
+      .leftJoinAndSelect('membership.user', 'user')
+      .where('membership.id = :id AND membership.shopId = :shopId', { id, shopId: user.shopId })
+      .getOne();
+    if (!membership) throw MembershipErrors.notFound();
+    return membership;
+  }
+
+  private async assertAnotherOwner(manager: EntityManager, user: AuthUser, exceptId: string): Promise<void> {
+    const others = await manager
+      .createQueryBuilder(Membership, 'membership')
+      .setLock('pessimistic_write')
+      .where('membership.shopId = :shopId AND membership.role = :role AND membership.id <> :exceptId', {
+        shopId: user.shopId,
+        role: 'owner',
+        exceptId,
+      })
+      .getCount();
+    if (others === 0) throw MembershipErrors.lastOwner();
+  }
+}

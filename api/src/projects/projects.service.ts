@@ -1,0 +1,138 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { Repository, SelectQueryBuilder } from 'typeorm';
+import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
+import { FABRICATOR_PROJECT_FIELDS } from '../common/roles/role-matrix';
+import { AuthUser } from '../common/tenant/auth-user';
+import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
+import { Customer } from '../customers/customer.entity';
+import { CreateProjectDto, ProjectPlacementDto } from './dto/create-project.dto';
+import { ListProjectsQueryDto } from './dto/list-projects-query.dto';
+import { UpdateProjectDto } from './dto/update-project.dto';
+import { Project } from './project.entity';
+import { ProjectErrors } from './projects.errors';
+
+/** A fabricator may move the engine and the project along, nothing else. */
+export function assertFieldsAllowed(user: Pick<AuthUser, 'role'>, changes: object): void {
+  if (user.role !== 'fabricator') return;
+  const allowed: readonly string[] = FABRICATOR_PROJECT_FIELDS;
+  const refused = Object.keys(changes).filter((key) => (changes as Record<string, unknown>)[key] !== undefined && !allowed.includes(key));
+  if (refused.length > 0) throw ProjectErrors.fieldsForbidden(refused);
+}
+
+function placementColumns(placement: ProjectPlacementDto | null | undefined): Partial<Project> {
+  if (placement === undefined) return {};
+  return {
+    placementSetbackMm: placement?.setbackMm ?? null,
+    placementHeightMm: placement?.heightMm ?? null,
+    placementTiltDeg: placement?.tiltDeg ?? null,
+  };
+}
+
+@Injectable()
+export class ProjectsService {
+  private readonly scoped: TenantRepository<Project>;
+
+  constructor(
+    @InjectRepository(Project) projects: Repository<Project>,
+    @InjectRepository(Customer) private readonly customers: Repository<Customer>,
+  ) {
+    this.scoped = new TenantRepository(projects);
+  }
+
+  /** Shop scope for everyone; a customer additionally sees only the projects of their own customer record. */
+  private visible(user: AuthUser): SelectQueryBuilder<Project> {
+    const builder = this.scoped.query(user, 'project').innerJoinAndSelect('project.customer', 'customer');
+    if (user.role === 'customer') builder.andWhere('customer.userId = :ownUserId', { ownUserId: user.userId });
+    return builder;
+  }
+
+  async list(user: AuthUser, query: ListProjectsQueryDto): Promise<Page<Project>> {
+    const sort = query.sort ?? 'updatedAt';
+    const order = (query.order ?? (sort === 'title' || sort === 'status' ? 'asc' : 'desc')).toUpperCase() as 'ASC' | 'DESC';
+    const builder = this.visible(user);
+    if (query.status) builder.andWhere('project.status = :status', { status: query.status });
+    if (query.customerId) builder.andWhere('project.customerId = :customerId', { customerId: query.customerId });
+    if (query.search?.trim()) {
+      builder.andWhere('(project.title LIKE :search OR project.vehicleDescription LIKE :search OR customer.name LIKE :search)', {
+        search: likeContains(query.search.trim()),
+      });
+    }
+    const [items, total] = await builder
+      .orderBy(`project.${sort}`, order)
+      .addOrderBy('project.id', 'ASC')
+      .skip(skipOf(query))
+      .take(query.pageSize)
+      .getManyAndCount();
+    return toPage(items, total, query);
+  }
+
+  async get(user: AuthUser, id: string): Promise<Project> {
+    const project = await this.visible(user).andWhere('project.id = :id', { id }).getOne();
+    if (!project) throw ProjectErrors.notFound();
+    return project;
+  }
+
+  async create(user: AuthUser, input: CreateProjectDto): Promise<Project> {
+    await this.assertCustomerInShop(user, input.customerId);
+    const project = this.scoped.repository.create({
+      id: randomUUID(),
+      shopId: user.shopId,
+      customerId: input.customerId,
+      title: input.title.trim(),
+      status: input.status ?? 'intake',
+      vehicleDescription: input.vehicleDescription?.trim() ?? '',
+      chassisModelId: input.chassisModelId ?? null,
+      engineProfileId: input.engineProfileId ?? null,
+      transmissionId: input.transmissionId ?? null,
+      goalUse: input.goals?.use ?? 'street',
+      goalTargetPowerKw: input.goals?.targetPowerKw ?? null,
+      goalRevLimitRpm: input.goals?.revLimitRpm ?? null,
+      goalBudgetCents: input.goals?.budgetCents ?? null,
+      ...placementColumns(input.placement ?? null),
+    });
+    await this.scoped.repository.insert(project);
+    return this.get(user, project.id);
+  }
+
+  async update(user: AuthUser, id: string, input: UpdateProjectDto): Promise<Project> {
+    assertFieldsAllowed(user, input);
+    for (const field of ['customerId', 'title', 'status', 'vehicleDescription'] as const) {
+      if (input[field] === null) throw ProjectErrors.notNullable(field);
+    }
+    if (input.goals && input.goals.use === null) throw ProjectErrors.notNullable('goals.use');
+    const project = await this.get(user, id);
+    if (input.customerId !== undefined && input.customerId !== project.customerId) {
+      await this.assertCustomerInShop(user, input.customerId);
+    }
+    const changes: Partial<Project> = {
+      ...(input.customerId !== undefined && { customerId: input.customerId }),
+      ...(input.title !== undefined && { title: input.title.trim() }),
+      ...(input.status !== undefined && { status: input.status }),
+      ...(input.vehicleDescription !== undefined && { vehicleDescription: input.vehicleDescription.trim() }),
+      ...(input.chassisModelId !== undefined && { chassisModelId: input.chassisModelId }),
+      ...(input.engineProfileId !== undefined && { engineProfileId: input.engineProfileId }),
+      ...(input.transmissionId !== undefined && { transmissionId: input.transmissionId }),
+      ...(input.goals?.use !== undefined && { goalUse: input.goals.use }),
+      ...(input.goals?.targetPowerKw !== undefined && { goalTargetPowerKw: input.goals.targetPowerKw }),
+      ...(input.goals?.revLimitRpm !== undefined && { goalRevLimitRpm: input.goals.revLimitRpm }),
+      ...(input.goals?.budgetCents !== undefined && { goalBudgetCents: input.goals.budgetCents }),
+      ...placementColumns(input.placement),
+    };
+    if (Object.keys(changes).length > 0) {
+      await this.scoped.repository.update({ id: project.id, shopId: user.shopId }, changes);
+    }
+    return this.get(user, id);
+  }
+
+  async remove(user: AuthUser, id: string): Promise<void> {
+    const project = await this.get(user, id);
+    await this.scoped.repository.delete({ id: project.id, shopId: user.shopId });
+  }
+
+  private async assertCustomerInShop(user: AuthUser, customerId: string): Promise<void> {
+    const exists = await this.customers.exists({ where: { id: customerId, shopId: user.shopId } });
+    if (!exists) throw ProjectErrors.customerNotFound();
+  }
+}

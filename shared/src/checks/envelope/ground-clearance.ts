@@ -1,0 +1,65 @@
+import type { Finding, Remedy } from '../../types/finding';
+import type { ChassisPoint } from '../../types/fit-spec';
+import type { CheckContext, CheckDefinition } from '../check-definition';
+import { measuredFinding, unknownFinding } from '../check-definition';
+import { COMMON_PRACTICE, figures, mm, placementRemedy } from './envelope-common';
+import { evaluateCandidatePans } from './pan-clearance';
+import { placedForSpec, type PlacedEngine } from './placed-engine';
+
+export const GROUND_CLEARANCE_ID = 'envelope.ground-clearance';
+
+/** The lowest point of the placed engine and pan (the ground is z = 0 at ride height). */
+export function lowestPoint(placed: PlacedEngine, dz = 0): { point: ChassisPoint; part: 'oil pan' | 'engine' } | null {
+  let best: { point: ChassisPoint; part: 'oil pan' | 'engine' } | null = null;
+  const visit = (points: readonly ChassisPoint[] | null, part: 'oil pan' | 'engine'): void => {
+    for (const p of points ?? []) {
+      if (best === null || p.z + dz < best.point.z) best = { point: { x: p.x, z: p.z + dz }, part };
+    }
+  };
+  visit(placed.pan, 'oil pan');
+  visit(placed.topProfile, 'engine');
+  visit(placed.rearProfile, 'engine');
+  return best;
+}
+
+export function runGroundClearance({ spec, settings }: CheckContext): Finding {
+  const fields = {
+    checkId: GROUND_CLEARANCE_ID,
+    group: 'envelope' as const,
+    title: 'Ground clearance under the engine',
+    unit: 'mm' as const,
+    thresholdSource: `${COMMON_PRACTICE}: about 4 in under the lowest point of a street truck (setting minGroundClearanceMm).`,
+    against: 'ground',
+  };
+  if (!spec.oilPan || spec.oilPan.bottomProfile.length < 3) return unknownFinding(fields, ['oilPan.bottomProfile']);
+  const low = lowestPoint(placedForSpec(spec));
+  if (!low) return unknownFinding(fields, ['oilPan.bottomProfile']);
+  const fig = figures(low.point.z, settings.minGroundClearanceMm, settings);
+  const message = `The lowest point (${low.part}, ${mm(low.point.x)} behind the front axle line) is ${mm(low.point.z)} above the ground at ride height; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`;
+  const remedies: Remedy[] = [];
+  if (fig.status !== 'ok') {
+    const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
+    const shallow = evaluateCandidatePans(spec, settings, []).filter(
+      (c) => c.smallestMargin >= (fig.status === 'fails' ? 0 : settings.tightBandMm),
+    );
+    remedies.push({
+      kind: 'part',
+      category: 'oil-pan',
+      requires: { railPattern: spec.engine.panRail.pattern, maxDepthBelowRailMm: Math.max(0, Math.round((-(spec.oilPan.sumpFloorW - spec.engine.panRail.w) + fig.margin - target) * 10) / 10) },
+      partIds: shallow.map((c) => c.pan.id),
+      note: shallow.length ? 'A shallower pan from the candidates keeps the clearance in this placement.' : 'No candidate pan is shallow enough; look for a shallower pan for this rail.',
+    });
+    // Ground clearance rises one for one with the engine.
+    const raise = target - fig.margin;
+    remedies.push(placementRemedy('height', raise, `Raise the engine ${mm(raise)}; the hood clearance drops by the same amount.`));
+  }
+  return measuredFinding(fields, fig, message, remedies);
+}
+
+export const GROUND_CLEARANCE_CHECK: CheckDefinition = {
+  id: GROUND_CLEARANCE_ID,
+  group: 'envelope',
+  title: 'Ground clearance under the engine',
+  dependsOnPlacement: true,
+  run: runGroundClearance,
+};

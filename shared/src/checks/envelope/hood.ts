@@ -1,0 +1,59 @@
+import { verticalClearance, type VerticalClearance } from '../../geometry/vertical-clearance';
+import type { Finding, Remedy } from '../../types/finding';
+import type { CheckContext, CheckDefinition } from '../check-definition';
+import { measuredFinding, unknownFinding } from '../check-definition';
+import { COMMON_PRACTICE, figures, mm, placementRemedy } from './envelope-common';
+import { placedForSpec, type PlacedEngine } from './placed-engine';
+
+export const HOOD_ID = 'envelope.hood';
+
+/** Vertical clearance from the placed top profile to the underside of the hood; null when they share no x. */
+export function measureHood(placed: PlacedEngine, hoodLine: readonly { x: number; z: number }[] | undefined, dz = 0): VerticalClearance | null {
+  if (!hoodLine || hoodLine.length < 2 || placed.topProfile.length === 0) return null;
+  return verticalClearance(placed.topProfile, hoodLine, dz);
+}
+
+export function runHood({ spec, settings }: CheckContext): Finding {
+  const fields = {
+    checkId: HOOD_ID,
+    group: 'envelope' as const,
+    title: 'Hood to top of engine',
+    unit: 'mm' as const,
+    thresholdSource: `${COMMON_PRACTICE}: half an inch for hood flex and engine rock (setting minHoodGapMm).`,
+    against: 'hood',
+  };
+  const missing: string[] = [];
+  if (!spec.engine.topProfile || spec.engine.topProfile.length === 0) missing.push('engine.topProfile');
+  if (!spec.chassis.hoodLine || spec.chassis.hoodLine.length < 2) missing.push('chassis.hoodLine');
+  if (missing.length) return unknownFinding(fields, missing);
+  const c = measureHood(placedForSpec(spec), spec.chassis.hoodLine);
+  if (!c) {
+    return unknownFinding(fields, ['chassis.hoodLine'], 'Cannot check the hood: the hood line does not reach over the top of the engine; extend the hood line measurement.');
+  }
+  const fig = figures(c.clearance, settings.minHoodGapMm, settings);
+  const message =
+    c.clearance >= 0
+      ? `The top of the engine is ${mm(c.clearance)} under the hood at ${mm(c.from.x)} behind the axle line; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
+      : `The top of the engine stands ${mm(-c.clearance)} above the underside of the hood at ${mm(c.from.x)} behind the axle line; it needs ${mm(-fig.margin)} more room.`;
+  const remedies: Remedy[] = [];
+  if (fig.status !== 'ok') {
+    const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
+    const drop = target - fig.margin;
+    remedies.push(placementRemedy('height', -drop, `Lower the engine ${mm(drop)} (hood clearance changes one for one); recheck the pan and ground clearance.`));
+    remedies.push({
+      kind: 'fabrication',
+      operation: 'Fit a cowl or scoop hood, or a lower air-cleaner base',
+      laborHours: settings.hoodFabricationHours,
+      note: `The top of the engine needs ${mm(drop)} more room.`,
+    });
+  }
+  return measuredFinding(fields, fig, message, remedies);
+}
+
+export const HOOD_CHECK: CheckDefinition = {
+  id: HOOD_ID,
+  group: 'envelope',
+  title: 'Hood to top of engine',
+  dependsOnPlacement: true,
+  run: runHood,
+};

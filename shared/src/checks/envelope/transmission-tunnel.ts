@@ -1,0 +1,59 @@
+import type { Finding, Remedy } from '../../types/finding';
+import type { Placement } from '../../types/fit-spec';
+import type { CheckContext, CheckDefinition } from '../check-definition';
+import { measuredFinding, unknownFinding } from '../check-definition';
+import { COMMON_PRACTICE, figures, mm, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
+import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
+
+export const TRANSMISSION_TUNNEL_ID = 'envelope.transmission-tunnel';
+export const TUNNEL_KINDS = ['tunnel'] as const;
+
+/**
+ * Bellhousing and transmission side profile against the tunnel (in the side view the case sits in the
+ * tunnel opening of the firewall, so the tunnel outline carries the firewall's lower edge). The tunnel is
+ * above the case: an overlap is measured as the drop that clears it.
+ */
+export function runTransmissionTunnel({ spec, settings }: CheckContext): Finding {
+  const fields = {
+    checkId: TRANSMISSION_TUNNEL_ID,
+    group: 'envelope' as const,
+    title: 'Bellhousing and transmission to tunnel',
+    unit: 'mm' as const,
+    thresholdSource: `${COMMON_PRACTICE} (setting minFirewallGapMm).`,
+  };
+  const missing: string[] = [];
+  if (!spec.transmission || spec.transmission.sideProfile.length < 3) missing.push('transmission.sideProfile');
+  const tunnels = obstaclesOfKinds(spec, [...TUNNEL_KINDS]);
+  if (tunnels.length === 0) missing.push('chassis.obstacles (kind tunnel)');
+  if (missing.length) return unknownFinding(fields, missing);
+  const worst = worstGap(placedForSpec(spec).transmission!, true, tunnels, 0, 'down')!;
+  const gap = worst.result.gap;
+  const fig = figures(gap, settings.minFirewallGapMm, settings);
+  const message =
+    gap >= 0
+      ? `The bellhousing and transmission clear the tunnel (${worst.obstacle.name}) by ${mm(gap)}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
+      : `The transmission runs ${mm(-gap)} into the tunnel (${worst.obstacle.name}); it needs ${mm(-fig.margin)} more room.`;
+  const remedies: Remedy[] = [];
+  if (fig.status !== 'ok') {
+    const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
+    const marginAt = (p: Placement): number =>
+      worstGap(placeEngine(spec, p).transmission!, true, [worst.obstacle], 0, 'down')!.result.gap - fig.required - target;
+    const drop = solvePlacementChange(spec.placement, 'height', -1, marginAt, 300);
+    if (drop !== null) remedies.push(placementRemedy('height', drop, `Lower the engine ${mm(-drop)}; recheck the pan and ground clearance.`));
+    remedies.push({
+      kind: 'fabrication',
+      operation: 'Open up and re-skin the transmission tunnel',
+      laborHours: settings.tunnelFabricationHours,
+      note: 'Cut and weld away from fuel and brake lines; seal the tunnel against exhaust fumes.',
+    });
+  }
+  return measuredFinding({ ...fields, against: worst.obstacle.id }, fig, message, remedies);
+}
+
+export const TRANSMISSION_TUNNEL_CHECK: CheckDefinition = {
+  id: TRANSMISSION_TUNNEL_ID,
+  group: 'envelope',
+  title: 'Bellhousing and transmission to tunnel',
+  dependsOnPlacement: true,
+  run: runTransmissionTunnel,
+};

@@ -1,0 +1,111 @@
+import { placeEnginePoint } from '../../geometry/placement';
+import type { Finding, Remedy } from '../../types/finding';
+import type { ChassisPoint3, FitSpec, MountAdapterSpec, SideName } from '../../types/fit-spec';
+import type { CheckContext, CheckDefinition } from '../check-definition';
+import { measuredFinding, unknownFinding } from '../check-definition';
+import { COMMON_PRACTICE, mm } from '../envelope/envelope-common';
+
+export interface MountOffset {
+  side: SideName;
+  boss: ChassisPoint3;
+  pad: ChassisPoint3;
+  /** pad − placed boss, chassis frame. */
+  dx: number;
+  dy: number;
+  dz: number;
+  /** Straight-line offset. */
+  distance: number;
+}
+
+/** The engine's mount boss on one side after placement (y = v: the engine sits on the vehicle centreline). */
+export function mountOffset(spec: FitSpec, side: SideName): MountOffset {
+  const b = spec.engine.mountBosses[side];
+  const p = placeEnginePoint({ u: b.u, w: b.w }, spec.placement);
+  const boss = { x: p.x, y: b.v, z: p.z };
+  const pad = spec.chassis.mountPads[side];
+  const dx = pad.x - boss.x;
+  const dy = pad.y - boss.y;
+  const dz = pad.z - boss.z;
+  return { side, boss, pad, dx, dy, dz, distance: Math.hypot(dx, dy, dz) };
+}
+
+export function adapterCovers(adapter: MountAdapterSpec, o: Pick<MountOffset, 'dx' | 'dy' | 'dz'>): boolean {
+  return Math.abs(o.dx) <= adapter.maxDxMm && Math.abs(o.dy) <= adapter.maxDyMm && Math.abs(o.dz) <= adapter.maxDzMm;
+}
+
+/** Adapters that bridge the offset, cheapest first, then the smallest (the closest fit). */
+export function coveringAdapters(spec: FitSpec, o: MountOffset): MountAdapterSpec[] {
+  return (spec.candidates?.mountAdapters ?? [])
+    .filter((a) => adapterCovers(a, o))
+    .sort((a, b) => (a.price ?? Infinity) - (b.price ?? Infinity) || a.maxDxMm + a.maxDyMm + a.maxDzMm - (b.maxDxMm + b.maxDyMm + b.maxDzMm));
+}
+
+function describe(o: MountOffset): string {
+  const part = (v: number, plus: string, minus: string): string => `${mm(Math.abs(v))} ${v >= 0 ? plus : minus}`;
+  return `${part(o.dx, 'rearward', 'forward')}, ${part(o.dz, 'up', 'down')}, ${part(o.dy, 'to the right', 'to the left')}`;
+}
+
+export function runEngineMount({ spec, settings }: CheckContext, side: SideName): Finding {
+  const fields = {
+    checkId: `mounts.engine-mount-${side}`,
+    group: 'mounts' as const,
+    title: `Engine mount, ${side} side`,
+    unit: 'mm' as const,
+    limit: 'max' as const,
+    thresholdSource: `${COMMON_PRACTICE}: slotted holes and rubber isolators take up about 3 mm (setting mountDirectFitToleranceMm).`,
+    against: `mount-pad-${side}`,
+  };
+  const missing: string[] = [];
+  if (!spec.engine.mountBosses?.[side]) missing.push(`engine.mountBosses.${side}`);
+  if (!spec.chassis.mountPads?.[side]) missing.push(`chassis.mountPads.${side}`);
+  if (missing.length) return unknownFinding(fields, missing);
+  const o = mountOffset(spec, side);
+  const required = settings.mountDirectFitToleranceMm;
+  const margin = required - o.distance;
+  const status = margin >= 0 ? 'ok' : 'fails';
+  const remedies: Remedy[] = [];
+  let message: string;
+  if (status === 'ok') {
+    message = `The ${side} engine mount boss lands ${mm(o.distance)} from the chassis pad (${describe(o)}); it bolts up directly (up to ${mm(required)}).`;
+  } else {
+    const adapters = coveringAdapters(spec, o);
+    const need = { maxDxMm: Math.ceil(Math.abs(o.dx)), maxDzMm: Math.ceil(Math.abs(o.dz)), maxDyMm: Math.ceil(Math.abs(o.dy)) };
+    message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss (${mm(o.distance)} in all); ${
+      adapters.length ? `the ${adapters[0].name} bridges it.` : 'no listed adapter bridges it, so the mounts must be fabricated.'
+    }`;
+    if (adapters.length) {
+      remedies.push({
+        kind: 'part',
+        category: 'mount-adapter',
+        requires: need,
+        partIds: adapters.map((a) => a.id),
+        note: `Bridges ${describe(o)}.`,
+      });
+    }
+    remedies.push({
+      kind: 'fabrication',
+      operation: `Fabricate and weld ${side} engine mount brackets`,
+      laborHours: settings.mountFabricationHours,
+      note: 'Support the engine on a hoist or stand while fitting, never work under a hanging engine, and have frame welding done by a qualified welder.',
+    });
+  }
+  return measuredFinding(fields, { measured: o.distance, required, margin, status }, message, remedies);
+}
+
+export const ENGINE_MOUNT_LEFT_CHECK: CheckDefinition = {
+  id: 'mounts.engine-mount-left',
+  group: 'mounts',
+  title: 'Engine mount, left side',
+  dependsOnPlacement: true,
+  run: (c) => runEngineMount(c, 'left'),
+};
+
+export const ENGINE_MOUNT_RIGHT_CHECK: CheckDefinition = {
+  id: 'mounts.engine-mount-right',
+  group: 'mounts',
+  title: 'Engine mount, right side',
+  dependsOnPlacement: true,
+  run: (c) => runEngineMount(c, 'right'),
+};
+
+export const MOUNT_CHECKS: CheckDefinition[] = [ENGINE_MOUNT_LEFT_CHECK, ENGINE_MOUNT_RIGHT_CHECK];

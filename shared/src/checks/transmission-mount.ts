@@ -1,0 +1,120 @@
+import { placeEnginePoint } from '../geometry/placement';
+import type { Finding, Remedy } from '../types/finding';
+import type { ChassisPoint, FitSpec } from '../types/fit-spec';
+import type { CheckContext, CheckDefinition } from './check-definition';
+import { measuredFinding, statusFromMargin, unknownFinding } from './check-definition';
+import { COMMON_PRACTICE, mm } from './envelope/envelope-common';
+
+export const TRANSMISSION_MOUNT_POSITION_ID = 'drivetrain.transmission-mount-position';
+export const TRANSMISSION_MOUNT_HEIGHT_ID = 'drivetrain.transmission-mount-height';
+
+/** The transmission mount pad after placement and its offset from the crossmember (mount − crossmember). */
+export function transmissionMountOffset(spec: FitSpec): { mount: ChassisPoint; dx: number; dz: number } | null {
+  if (!spec.transmission) return null;
+  const mount = placeEnginePoint(spec.transmission.mountPoint, spec.placement);
+  const xm = spec.chassis.transmissionCrossmember;
+  return { mount, dx: mount.x - xm.x, dz: mount.z - xm.z };
+}
+
+/**
+ * Fore-aft: the mount must land within the crossmember's adjustable range (± adjustableXMm about its x).
+ */
+export function runTransmissionMountPosition({ spec, settings }: CheckContext): Finding {
+  const fields = {
+    checkId: TRANSMISSION_MOUNT_POSITION_ID,
+    group: 'drivetrain' as const,
+    title: 'Transmission mount over the crossmember (fore-aft)',
+    unit: 'mm' as const,
+    limit: 'max' as const,
+    thresholdSource: 'The crossmember\'s own adjustable range (chassis.transmissionCrossmember.adjustableXMm, measured).',
+    against: 'transmission-crossmember',
+  };
+  if (!spec.transmission) return unknownFinding(fields, ['transmission']);
+  if (!spec.chassis.transmissionCrossmember) return unknownFinding(fields, ['chassis.transmissionCrossmember']);
+  const o = transmissionMountOffset(spec)!;
+  const range = spec.chassis.transmissionCrossmember.adjustableXMm;
+  const measured = Math.abs(o.dx);
+  const margin = range - measured;
+  const status = statusFromMargin(margin, Math.min(settings.tightBandMm, range / 2));
+  const dir = o.dx >= 0 ? 'behind' : 'ahead of';
+  const message =
+    margin >= 0
+      ? `The transmission mount lands ${mm(measured)} ${dir} the crossmember, inside its ±${mm(range)} adjustment (margin ${mm(margin)}).`
+      : `The transmission mount lands ${mm(measured)} ${dir} the crossmember, ${mm(-margin)} past its ±${mm(range)} adjustment.`;
+  const remedies: Remedy[] = [];
+  if (status !== 'ok') {
+    remedies.push({
+      kind: 'fabrication',
+      operation: `Relocate the transmission crossmember ${mm(measured)} ${o.dx >= 0 ? 'rearward' : 'forward'}`,
+      laborHours: settings.transmissionCrossmemberFabricationHours,
+      note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
+    });
+    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { offsetXMm: Math.round(o.dx) }, partIds: [], note: 'An offset transmission mount can take up the difference when one is made for this crossmember.' });
+  }
+  return measuredFinding(fields, { measured, required: range, margin, status }, message, remedies);
+}
+
+/**
+ * Height: the mount pad sits `dz` above the crossmember. Within the direct-fit tolerance it bolts down;
+ * above it, a spacer up to transmissionMountSpacerMaxMm closes the gap; below the crossmember, or past
+ * the spacer limit, the crossmember is reworked.
+ */
+export function runTransmissionMountHeight({ spec, settings }: CheckContext): Finding {
+  const fields = {
+    checkId: TRANSMISSION_MOUNT_HEIGHT_ID,
+    group: 'drivetrain' as const,
+    title: 'Transmission mount to crossmember height',
+    unit: 'mm' as const,
+    limit: 'max' as const,
+    thresholdSource: `${COMMON_PRACTICE}: about 3 mm bolts down directly (mountDirectFitToleranceMm); spacers up to an inch (transmissionMountSpacerMaxMm).`,
+    against: 'transmission-crossmember',
+  };
+  if (!spec.transmission) return unknownFinding(fields, ['transmission']);
+  if (!spec.chassis.transmissionCrossmember) return unknownFinding(fields, ['chassis.transmissionCrossmember']);
+  const { dz } = transmissionMountOffset(spec)!;
+  const tol = settings.mountDirectFitToleranceMm;
+  const spacerMax = settings.transmissionMountSpacerMaxMm;
+  const measured = dz;
+  const required = tol;
+  const margin = tol - Math.abs(dz);
+  const remedies: Remedy[] = [];
+  let message: string;
+  const status = margin >= 0 ? 'ok' : 'fails';
+  if (status === 'ok') {
+    message = `The transmission mount sits ${mm(Math.abs(dz))} ${dz >= 0 ? 'above' : 'below'} the crossmember pad and bolts down directly (up to ${mm(tol)}).`;
+  } else if (dz > 0 && dz <= spacerMax) {
+    message = `The transmission mount sits ${mm(dz)} above the crossmember pad: a ${mm(dz)} spacer closes it.`;
+    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mm(dz)} spacer under the mount (at most ${mm(spacerMax)}).` });
+    remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, note: 'Support the transmission with a jack and the vehicle on stands.' });
+  } else {
+    message =
+      dz > 0
+        ? `The transmission mount sits ${mm(dz)} above the crossmember pad, more than the ${mm(spacerMax)} a spacer should take: the crossmember must be raised.`
+        : `The transmission mount sits ${mm(-dz)} below the crossmember pad: the crossmember must be dropped or replaced.`;
+    remedies.push({
+      kind: 'fabrication',
+      operation: dz > 0 ? `Raise the crossmember pad ${mm(dz)}` : `Drop the crossmember ${mm(-dz)} or fit a drop crossmember`,
+      laborHours: settings.transmissionCrossmemberFabricationHours,
+      note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
+    });
+  }
+  return measuredFinding(fields, { measured, required, margin, status }, message, remedies);
+}
+
+export const TRANSMISSION_MOUNT_POSITION_CHECK: CheckDefinition = {
+  id: TRANSMISSION_MOUNT_POSITION_ID,
+  group: 'drivetrain',
+  title: 'Transmission mount over the crossmember (fore-aft)',
+  dependsOnPlacement: true,
+  run: runTransmissionMountPosition,
+};
+
+export const TRANSMISSION_MOUNT_HEIGHT_CHECK: CheckDefinition = {
+  id: TRANSMISSION_MOUNT_HEIGHT_ID,
+  group: 'drivetrain',
+  title: 'Transmission mount to crossmember height',
+  dependsOnPlacement: true,
+  run: runTransmissionMountHeight,
+};
+
+export const TRANSMISSION_MOUNT_CHECKS: CheckDefinition[] = [TRANSMISSION_MOUNT_POSITION_CHECK, TRANSMISSION_MOUNT_HEIGHT_CHECK];

@@ -1,0 +1,67 @@
+import { paths } from '@/config/paths';
+import type { Role } from '@/types/api';
+
+export type NavItem = {
+  key: string;
+  label: string;
+  to: string;
+  /** Paths that mark this item as the current one. */
+  match: string[];
+  group: 'work' | 'shop';
+};
+
+type NavDefinition = Omit<NavItem, 'to'> & { roles: readonly Role[]; to: string | ((role: Role) => string) };
+
+const navDefinitions: readonly NavDefinition[] = [
+  { key: 'home', label: 'Home', to: paths.home, match: [paths.home], roles: ['owner', 'estimator', 'fabricator', 'counter'], group: 'work' },
+  { key: 'my-projects', label: 'My projects', to: paths.myProjects, match: [paths.myProjects, paths.projects], roles: ['customer'], group: 'work' },
+  {
+    key: 'projects',
+    label: 'Projects',
+    // the fabricator's list opens on what is waiting to be measured
+    to: (role) => (role === 'fabricator' ? `${paths.projects}?status=measuring` : paths.projects),
+    match: [paths.projects],
+    roles: ['owner', 'estimator', 'fabricator'],
+    group: 'work',
+  },
+  { key: 'customers', label: 'Customers', to: paths.customers, match: [paths.customers], roles: ['owner', 'estimator'], group: 'work' },
+  { key: 'work-orders', label: 'Work orders', to: paths.workOrders, match: [paths.workOrders], roles: ['owner', 'fabricator'], group: 'work' },
+  { key: 'parts-counter', label: 'Parts counter', to: paths.partsCounter, match: [paths.partsCounter], roles: ['owner', 'counter'], group: 'work' },
+  { key: 'catalog', label: 'Catalog', to: paths.catalog, match: [paths.catalog], roles: ['owner', 'counter'], group: 'work' },
+  { key: 'members', label: 'Members', to: paths.members, match: [paths.members], roles: ['owner'], group: 'shop' },
+  { key: 'shop-settings', label: 'Shop settings', to: paths.shopSettings, match: [paths.shopSettings], roles: ['owner'], group: 'shop' },
+];
+
+export function navItemsFor(role: Role): NavItem[] {
+  return navDefinitions
+    .filter((d) => d.roles.includes(role))
+    .map(({ roles: _roles, to, ...rest }) => ({ ...rest, to: typeof to === 'function' ? to(role) : to }));
+}
+
+/** Which nav item the current path belongs to (longest match wins, "/" only exactly). */
+export function activeNavKey(items: NavItem[], pathname: string): string | undefined {
+  let best: { key: string; length: number } | undefined;
+  for (const item of items) {
+    for (const m of item.match) {
+      const hit = m === '/' ? pathname === '/' : pathname === m || pathname.startsWith(`${m}/`);
+      if (hit && (!best || m.length > best.length)) best = { key: item.key, length: m.length };
+    }
+  }
+  return best?.key;
+}
+
+/** Roles allowed on each guarded section; the API enforces the same rules. */
+export const sectionRoles = {
+  projects: ['owner', 'estimator', 'fabricator', 'counter'],
+  projectDetail: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
+  myProjects: ['customer'],
+  customers: ['owner', 'estimator', 'fabricator', 'counter'],
+  workOrders: ['owner', 'fabricator'],
+  partsCounter: ['owner', 'counter'],
+  catalog: ['owner', 'counter'],
+  members: ['owner'],
+  shopSettings: ['owner'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';
+export const canEditProjects = (role: Role): boolean => role === 'owner' || role === 'estimator';

@@ -1,0 +1,115 @@
+import { lazy, Suspense, type ComponentType, type ReactNode } from 'react';
+import { createBrowserRouter, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
+import { paths, toSignIn } from '@/config/paths';
+import { setUnauthorizedHandler } from '@/lib/api-client';
+import type { Role } from '@/types/api';
+import { RequireAuth, RequireRole } from './guards';
+import { sectionRoles } from './navigation';
+import { FullPageSplash } from './splash';
+
+/** React.lazy for a named export. */
+function lazyNamed<M extends Record<string, unknown>, K extends keyof M>(load: () => Promise<M>, name: K) {
+  return lazy(() => load().then((m) => ({ default: m[name] as ComponentType })));
+}
+
+const AuthLayout = lazyNamed(() => import('./routes/auth/auth-layout'), 'AuthLayout');
+const AppLayout = lazyNamed(() => import('./routes/app/app-layout'), 'AppLayout');
+const SignInPage = lazyNamed(() => import('./routes/auth/sign-in-page'), 'SignInPage');
+const SignUpPage = lazyNamed(() => import('./routes/auth/sign-up-page'), 'SignUpPage');
+const ResetPasswordPage = lazyNamed(() => import('./routes/auth/reset-password-page'), 'ResetPasswordPage');
+const AcceptInvitePage = lazyNamed(() => import('./routes/auth/accept-invite-page'), 'AcceptInvitePage');
+const HomePage = lazyNamed(() => import('./routes/home/home-page'), 'HomePage');
+const ProjectsPage = lazyNamed(() => import('./routes/projects/projects-page'), 'ProjectsPage');
+const ProjectDetailPage = lazyNamed(() => import('./routes/projects/project-detail-page'), 'ProjectDetailPage');
+const MyProjectsPage = lazyNamed(() => import('./routes/projects/my-projects-page'), 'MyProjectsPage');
+const CustomersPage = lazyNamed(() => import('./routes/customers/customers-page'), 'CustomersPage');
+const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'MembersPage');
+const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings-page'), 'ShopSettingsPage');
+const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'WorkOrdersPage');
+const PartsCounterPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'PartsCounterPage');
+const CatalogPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'CatalogPage');
+const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');
+const RouteErrorBoundary = lazy(() =>
+  import('@/components/route-error-boundary').then((m) => ({ default: m.RouteErrorBoundary })),
+);
+
+function SectionError({ section }: { section?: string }) {
+  return (
+    <Suspense fallback={null}>
+      <RouteErrorBoundary section={section} />
+    </Suspense>
+  );
+}
+
+function TopSuspense({ children }: { children: ReactNode }) {
+  return <Suspense fallback={<FullPageSplash />}>{children}</Suspense>;
+}
+
+/** A guarded section of the app with its own error boundary. */
+function section(path: string, roles: readonly Role[], name: string, Page: ComponentType): RouteObject {
+  return {
+    path,
+    errorElement: <SectionError section={name} />,
+    element: (
+      <RequireRole roles={roles}>
+        <Page />
+      </RequireRole>
+    ),
+  };
+}
+
+export const routes: RouteObject[] = [
+  {
+    element: <Outlet />,
+    errorElement: <SectionError />,
+    children: [
+      {
+        element: (
+          <TopSuspense>
+            <AuthLayout />
+          </TopSuspense>
+        ),
+        errorElement: <SectionError section="sign-in" />,
+        children: [
+          { path: paths.signIn, element: <SignInPage /> },
+          { path: paths.signUp, element: <SignUpPage /> },
+          { path: paths.resetPassword, element: <ResetPasswordPage /> },
+          { path: paths.acceptInvite, element: <AcceptInvitePage /> },
+        ],
+      },
+      {
+        element: (
+          <RequireAuth>
+            <TopSuspense>
+              <AppLayout />
+            </TopSuspense>
+          </RequireAuth>
+        ),
+        errorElement: <SectionError />,
+        children: [
+          { index: true, element: <HomePage />, errorElement: <SectionError section="Home" /> },
+          section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage),
+          section(paths.projectDetail, sectionRoles.projectDetail, 'the project', ProjectDetailPage),
+          section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
+          section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
+          section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),
+          section(paths.partsCounter, sectionRoles.partsCounter, 'Parts counter', PartsCounterPage),
+          section(paths.catalog, sectionRoles.catalog, 'Catalog', CatalogPage),
+          section(paths.members, sectionRoles.members, 'Members', MembersPage),
+          section(paths.shopSettings, sectionRoles.shopSettings, 'Shop settings', ShopSettingsPage),
+          { path: '*', element: <NotFoundPage /> },
+        ],
+      },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);
+
+setUnauthorizedHandler((next) => {
+  void router.navigate(toSignIn(next), { replace: true });
+});
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,21 @@
+import { Segmented, Tooltip } from 'antd';
+import { useUnits } from '@/hooks/use-units';
+import type { UnitSystem } from '@/types/api';
+
+export function UnitSwitch() {
+  const { system, shopSystem, setOverride } = useUnits();
+  return (
+    <Tooltip title={`Lengths show in this unit for you. Shop default: ${shopSystem === 'in' ? 'inches' : 'millimetres'}.`}>
+      <Segmented<UnitSystem>
+        size="small"
+        aria-label="Length unit"
+        value={system}
+        onChange={(v) => setOverride(v === shopSystem ? null : v)}
+        options={[
+          { value: 'in', label: 'in' },
+          { value: 'mm', label: 'mm' },
+        ]}
+      />
+    </Tooltip>
+  );
+}

@@ -1,0 +1,26 @@
+import { Divider, Typography } from 'antd';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { SignInForm } from '@/features/auth/components/sign-in-form';
+import { RedirectIfSignedIn } from '../../guards';
+import { AuthHeading } from './auth-heading';
+import { safeNext } from './safe-next';
+
+export function SignInPage() {
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const next = safeNext(params.get('next'));
+  return (
+    <RedirectIfSignedIn>
+      <AuthHeading title="Sign in" subtitle="Welcome back to the shop." />
+      <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
+      <Typography.Paragraph style={{ marginTop: 12, textAlign: 'center' }}>
+        <Link to={paths.resetPassword}>Forgot your password?</Link>
+      </Typography.Paragraph>
+      <Divider plain>New here?</Divider>
+      <Typography.Paragraph style={{ textAlign: 'center', margin: 0 }}>
+        <Link to={paths.signUp}>Create a shop</Link> — free for a one-person garage.
+      </Typography.Paragraph>
+    </RedirectIfSignedIn>
+  );
+}

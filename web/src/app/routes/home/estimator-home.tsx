@@ -1,0 +1,58 @@
+import { Button, Card, Col, Row } from 'antd';
+import { Link, useNavigate } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { PageHeader } from '@/components/page-header';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { RecentCustomers } from '@/features/customers/components/recent-customers';
+import { ProjectsPanel } from '@/features/projects/components/projects-panel';
+import { greeting } from './greeting';
+
+export function EstimatorHome() {
+  const user = useSignedInUser();
+  const navigate = useNavigate();
+  return (
+    <>
+      <PageHeader
+        eyebrow={user.shop.name}
+        title={greeting(user.name)}
+        subtitle="Quotes to write and fit reports to review."
+        extra={
+          <Button type="primary" onClick={() => navigate(`${paths.projects}?new=1`)}>
+            New project
+          </Button>
+        }
+      />
+      <Row gutter={[16, 16]}>
+        <Col xs={24} xl={14}>
+          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=quoting`}>All</Link>} style={{ marginBottom: 16 }}>
+            <ProjectsPanel
+              label="Projects needing a quote"
+              status="quoting"
+              emptyText="No project is waiting for a quote."
+              moreTo={`${paths.projects}?status=quoting`}
+            />
+          </Card>
+          <Card title="Fit check under way" extra={<Link to={`${paths.projects}?status=checking`}>All</Link>}>
+            <ProjectsPanel
+              label="Projects in fit check"
+              status="checking"
+              emptyText="No fit check in progress."
+              moreTo={`${paths.projects}?status=checking`}
+            />
+          </Card>
+        </Col>
+        <Col xs={24} xl={10}>
+          <Card title="Recent customers" extra={<Link to={paths.customers}>All</Link>}>
+            <RecentCustomers
+              emptyAction={
+                <Button type="primary" onClick={() => navigate(`${paths.customers}?new=1`)}>
+                  Add a customer
+                </Button>
+              }
+            />
+          </Card>
+        </Col>
+      </Row>
+    </>
+  );
+}

@@ -1,0 +1,37 @@
+import { Alert, Card, Col, Row } from 'antd';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { PageHeader } from '@/components/page-header';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { ProjectsPanel } from '@/features/projects/components/projects-panel';
+import { greeting } from './greeting';
+
+export function FabricatorHome() {
+  const user = useSignedInUser();
+  return (
+    <>
+      <PageHeader eyebrow={user.shop.name} title={greeting(user.name)} subtitle="Chassis waiting for the tape and the camera." />
+      <Row gutter={[16, 16]}>
+        <Col xs={24} xl={16}>
+          <Card title="Waiting to be measured" extra={<Link to={`${paths.projects}?status=measuring`}>All</Link>}>
+            <ProjectsPanel
+              label="Projects in measuring"
+              status="measuring"
+              limit={10}
+              emptyText="No chassis is waiting to be measured."
+              moreTo={`${paths.projects}?status=measuring`}
+            />
+          </Card>
+        </Col>
+        <Col xs={24} xl={8}>
+          <Alert
+            type="warning"
+            showIcon
+            title="Before you get under a vehicle"
+            description="Use rated jack stands on solid ground, chock the wheels and never work under a vehicle held only by a jack. Measure at ride height as the sheet asks."
+          />
+        </Col>
+      </Row>
+    </>
+  );
+}

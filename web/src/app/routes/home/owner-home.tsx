@@ -1,0 +1,61 @@
+import { Button, Card, Col, Flex, Row, Typography } from 'antd';
+import { Link, useNavigate } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { PageHeader } from '@/components/page-header';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { RecentCustomers } from '@/features/customers/components/recent-customers';
+import { ProjectsPanel } from '@/features/projects/components/projects-panel';
+import { greeting } from './greeting';
+
+export function OwnerHome() {
+  const user = useSignedInUser();
+  const navigate = useNavigate();
+  return (
+    <>
+      <PageHeader
+        eyebrow={user.shop.name}
+        title={greeting(user.name)}
+        subtitle="Where every job in the shop stands."
+        extra={
+          <Button type="primary" onClick={() => navigate(`${paths.projects}?new=1`)}>
+            New project
+          </Button>
+        }
+      />
+      <Row gutter={[16, 16]}>
+        <Col xs={24} xl={12}>
+          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=quoting`}>All</Link>}>
+            <ProjectsPanel label="Projects needing a quote" status="quoting" limit={5} emptyText="Nothing waiting for a quote." moreTo={`${paths.projects}?status=quoting`} />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card title="On the measuring stand" extra={<Link to={`${paths.projects}?status=measuring`}>All</Link>}>
+            <ProjectsPanel label="Projects in measuring" status="measuring" limit={5} emptyText="No chassis waiting to be measured." moreTo={`${paths.projects}?status=measuring`} />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card title="Latest activity">
+            <ProjectsPanel label="Recently changed projects" limit={6} emptyText="No projects yet." moreTo={paths.projects} />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card title="New customers" extra={<Link to={paths.customers}>All</Link>}>
+            <RecentCustomers />
+          </Card>
+        </Col>
+        <Col xs={24}>
+          <Card title="Shop setup">
+            <Flex gap={24} wrap>
+              <Typography.Text>
+                <Link to={paths.shopSettings}>Shop settings</Link> — units, labor rate, tax and shop supplies used on quotes.
+              </Typography.Text>
+              <Typography.Text>
+                <Link to={paths.members}>Members</Link> — invite estimators, fabricators, the parts counter and customers.
+              </Typography.Text>
+            </Flex>
+          </Card>
+        </Col>
+      </Row>
+    </>
+  );
+}

@@ -1,0 +1,100 @@
+import { Button, Col, Flex, Popconfirm, Row, Space, Card, Typography } from 'antd';
+import { useState } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { PageHeader } from '@/components/page-header';
+import { ErrorState, LoadingState } from '@/components/query-state';
+import { useUnits } from '@/hooks/use-units';
+import { formatDate } from '@/lib/table';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { useDeleteProject } from '@/features/projects/api/delete-project';
+import { useProject } from '@/features/projects/api/get-project';
+import { ProjectGoalsCard, ProjectPlacementCard, ProjectSelectionsCard } from '@/features/projects/components/project-details';
+import { ProjectFormDrawer } from '@/features/projects/components/project-form-drawer';
+import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
+import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
+import { useShop } from '@/features/shop/api/get-shop';
+import { canEditProjects } from '../../navigation';
+import { useCustomerOptions } from '../shared/use-customer-options';
+
+export function ProjectDetailPage() {
+  const { projectId = '' } = useParams();
+  const user = useSignedInUser();
+  const canEdit = canEditProjects(user.role);
+  const navigate = useNavigate();
+  const { system } = useUnits();
+  const project = useProject(projectId);
+  const shop = useShop();
+  const [editing, setEditing] = useState(false);
+  const customers = useCustomerOptions({ enabled: editing });
+  const remove = useDeleteProject({ onSuccess: () => navigate(paths.projects, { replace: true }) });
+  const backTo = user.role === 'customer' ? paths.myProjects : paths.projects;
+
+  if (project.isPending) return <LoadingState rows={10} />;
+  if (project.isError) return <ErrorState error={project.error} onRetry={() => void project.refetch()} />;
+
+  const p = project.data;
+  const currency = shop.data?.currency;
+
+  return (
+    <>
+      <Typography.Text>
+        <Link to={backTo}>← {user.role === 'customer' ? 'My projects' : 'Projects'}</Link>
+      </Typography.Text>
+      <PageHeader
+        eyebrow={user.role === 'customer' ? user.shop.name : p.customer?.name}
+        title={
+          <Flex align="center" gap={12} wrap>
+            <span>{p.title}</span>
+            <ProjectStatusTag status={p.status} />
+          </Flex>
+        }
+        subtitle={`${p.vehicleDescription} · opened ${formatDate(p.createdAt)} · last change ${formatDate(p.updatedAt)}`}
+        extra={
+          canEdit && (
+            <Space>
+              <Button type="primary" onClick={() => setEditing(true)}>
+                Edit project
+              </Button>
+              <Popconfirm
+                title="Delete this project?"
+                description="Its measurements, reports and quotes go with it. This cannot be undone."
+                okText="Delete"
+                okButtonProps={{ danger: true, loading: remove.isPending }}
+                onConfirm={() => remove.mutateAsync(p.id)}
+              >
+                <Button danger>Delete</Button>
+              </Popconfirm>
+            </Space>
+          )
+        }
+      />
+      <Card style={{ marginBottom: 16 }} title="Stage">
+        <ProjectStageSteps status={p.status} />
+      </Card>
+      <Row gutter={[16, 16]}>
+        <Col xs={24} xl={12}>
+          <ProjectGoalsCard project={p} currency={currency} />
+        </Col>
+        <Col xs={24} xl={12}>
+          <ProjectSelectionsCard project={p} />
+        </Col>
+        <Col xs={24}>
+          <ProjectPlacementCard project={p} />
+        </Col>
+      </Row>
+      {canEdit && (
+        <ProjectFormDrawer
+          open={editing}
+          project={p}
+          onClose={() => setEditing(false)}
+          customerOptions={customers.options}
+          customersLoading={customers.loading}
+          onCustomerSearch={customers.onSearch}
+          unitSystem={system}
+          currency={currency}
+        />
+      )}
+    </>
+  );
+}

@@ -1,0 +1,76 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { useListSearchParams } from '@/hooks/use-list-search-params';
+import { apiClient } from '@/lib/api-client';
+import { customerStubs, pageOf } from '@/test/fixtures';
+import { renderWithApp } from '@/test/render';
+import { customerSortFields } from '../../types';
+import { CustomersTable } from '../customers-table';
+
+function CustomersTableInUrl() {
+  const [params, setParams] = useListSearchParams({ sortFields: customerSortFields });
+  return (
+    <CustomersTable
+      query={{ page: params.page, pageSize: params.pageSize, sort: params.sort, order: params.order, search: params.search }}
+      onQueryChange={setParams}
+      canEdit
+    />
+  );
+}
+
+function mockCustomersApi() {
+  return vi.spyOn(apiClient, 'get').mockImplementation(async () => ({ data: pageOf(customerStubs, 1, 20, 42) }));
+}
+
+describe('CustomersTable', () => {
+  it('renders the rows the query returns', async () => {
+    const get = mockCustomersApi();
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers' });
+
+    const table = await screen.findByRole('table', { name: 'Customers' });
+    expect(await within(table).findByText('Marlo Penhallow')).toBeTruthy();
+    expect(within(table).getByText('Tove Quillfeather')).toBeTruthy();
+    expect(within(table).getByText('marlo@example.com')).toBeTruthy();
+    expect(screen.getByText('1–20 of 42')).toBeTruthy();
+    expect(get).toHaveBeenCalledWith('/customers', expect.objectContaining({ params: { page: 1, pageSize: 20 } }));
+  });
+
+  it('a click on a column header sorts on the server and keeps the sort in the URL', async () => {
+    const get = mockCustomersApi();
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers?page=2' });
+    await screen.findByText('Marlo Penhallow');
+
+    await userEvent.click(screen.getByRole('columnheader', { name: /Name/ }));
+
+    await waitFor(() =>
+      expect(get).toHaveBeenLastCalledWith(
+        '/customers',
+        expect.objectContaining({ params: expect.objectContaining({ sort: 'name', order: 'asc', page: 1 }) }),
+      ),
+    );
+    expect(screen.getByTestId('location').textContent).toBe('/customers?sort=name&order=asc');
+
+    await userEvent.click(screen.getByRole('columnheader', { name: /Name/ }));
+    await waitFor(() => expect(screen.getByTestId('location').textContent).toBe('/customers?sort=name&order=desc'));
+    expect(get).toHaveBeenLastCalledWith('/customers', expect.objectContaining({ params: expect.objectContaining({ sort: 'name', order: 'desc' }) }));
+  });
+
+  it('reads sort, page and search from the URL on first load', async () => {
+    const get = mockCustomersApi();
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers?sort=createdAt&order=desc&page=3&search=marlo' });
+    await screen.findByText('Marlo Penhallow');
+    expect(get).toHaveBeenCalledWith(
+      '/customers',
+      expect.objectContaining({ params: { page: 3, pageSize: 20, sort: 'createdAt', order: 'desc', search: 'marlo' } }),
+    );
+  });
+
+  it('offers to add the first customer when there are none', async () => {
+    vi.spyOn(apiClient, 'get').mockResolvedValue({ data: pageOf([], 1, 20, 0) });
+    const onCreate = vi.fn();
+    renderWithApp(<CustomersTable query={{ page: 1, pageSize: 20 }} onQueryChange={vi.fn()} canEdit onCreate={onCreate} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Add a customer' }));
+    expect(onCreate).toHaveBeenCalled();
+  });
+});

@@ -1,0 +1,49 @@
+import type { CurrentUser, Page, Role, Session } from '@/types/api';
+import type { Customer } from '@/features/customers/types';
+
+export const shopStub = { id: 'shop-ironbark', name: 'Ironbark Swap Works', unitSystem: 'in' as const };
+
+export function userStub(role: Role = 'owner'): CurrentUser {
+  return {
+    id: `user-${role}`,
+    email: `${role}@ironbark.example`,
+    name: 'Dana Whitlock',
+    role,
+    shop: shopStub,
+    customerId: role === 'customer' ? 'cust-1' : null,
+  };
+}
+
+export const sessionStub: Session = {
+  accessToken: 'access-token-1',
+  refreshToken: 'refresh-token-1',
+  expiresIn: 900,
+  user: userStub('owner'),
+};
+
+export const customerStubs: Customer[] = [
+  {
+    id: 'cust-1',
+    name: 'Marlo Penhallow',
+    email: 'marlo@example.com',
+    phone: '555-0142',
+    notes: null,
+    userId: null,
+    createdAt: '2026-10-02T09:00:00.000Z',
+    updatedAt: '2026-11-20T15:30:00.000Z',
+  },
+  {
+    id: 'cust-2',
+    name: 'Tove Quillfeather',
+    email: null,
+    phone: '555-0199',
+    notes: 'Prefers text messages',
+    userId: 'user-77',
+    createdAt: '2026-09-14T12:00:00.000Z',
+    updatedAt: '2026-11-01T08:10:00.000Z',
+  },
+];
+
+export function pageOf<T>(items: T[], page = 1, pageSize = 20, total = items.length): Page<T> {
+  return { items, total, page, pageSize };
+}
