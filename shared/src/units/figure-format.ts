@@ -5,6 +5,6 @@ export function mmWithInches(mm: number): string {
   return `${formatLength(mm, { unit: 'mm' })} (${formatLength(mm, { unit: 'in', style: 'fraction' })})`;
 }
 
-export function degrees(value: number, decimals = 2): string {
+export function formatDegrees(value: number, decimals = 2): string {
   return `${value.toFixed(decimals)}°`;
 }

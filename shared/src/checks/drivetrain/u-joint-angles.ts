@@ -2,7 +2,7 @@ import { maxOperatingAngleAtSpeed } from '../../driveline/operating-angles';
 import type { Finding, Remedy } from '../../types/finding';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { describeShaftSpeed, drivelineLayout } from './driveline-layout';
-import { degrees } from '../../units/figure-format';
+import { formatDegrees } from '../../units/figure-format';
 
 const FIELDS: FindingFields = {
   checkId: 'drivetrain.u-joint-angles',
@@ -46,15 +46,15 @@ export function checkUJointAngles({ spec, settings }: CheckContext): Finding {
   let status = statusFromMargin(governing.margin, settings.uJointTightBandDeg);
   const overSmoothLimit = largest > settings.uJointMaxDeg;
   if (status === 'ok' && overSmoothLimit) status = 'tight';
-  const speedText = shaftSpeed ? ` (${describeShaftSpeed(shaftSpeed)}, maximum ${degrees(speedMaxDeg, 1)})` : '';
-  const figures = `Front joint ${degrees(angles.frontDeg)}, rear ${degrees(angles.rearDeg)}, difference ${degrees(angles.differenceDeg)}; shaft at ${degrees(angles.shaftDeg)}, transmission ${degrees(angles.transmissionDeg)}, pinion ${degrees(angles.pinionDeg)}${speedText}.`;
+  const speedText = shaftSpeed ? ` (${describeShaftSpeed(shaftSpeed)}, maximum ${formatDegrees(speedMaxDeg, 1)})` : '';
+  const figures = `Front joint ${formatDegrees(angles.frontDeg)}, rear ${formatDegrees(angles.rearDeg)}, difference ${formatDegrees(angles.differenceDeg)}; shaft at ${formatDegrees(angles.shaftDeg)}, transmission ${formatDegrees(angles.transmissionDeg)}, pinion ${formatDegrees(angles.pinionDeg)}${speedText}.`;
   let verdict: string;
   if (status === 'fails') {
-    verdict = ` The ${governing.name} is ${degrees(governing.measured)} against a ${governing.limit === 'max' ? 'maximum' : 'minimum'} of ${degrees(governing.required)}.`;
+    verdict = ` The ${governing.name} is ${formatDegrees(governing.measured)} against a ${governing.limit === 'max' ? 'maximum' : 'minimum'} of ${formatDegrees(governing.required)}.`;
   } else if (status === 'tight' && governing.margin >= settings.uJointTightBandDeg && overSmoothLimit) {
-    verdict = ` Above ${degrees(settings.uJointMaxDeg, 1)} the joints will not run vibration-free.`;
+    verdict = ` Above ${formatDegrees(settings.uJointMaxDeg, 1)} the joints will not run vibration-free.`;
   } else if (status === 'tight') {
-    verdict = ` The ${governing.name} is within ${degrees(settings.uJointTightBandDeg)} of its limit of ${degrees(governing.required)}.`;
+    verdict = ` The ${governing.name} is within ${formatDegrees(settings.uJointTightBandDeg)} of its limit of ${formatDegrees(governing.required)}.`;
   } else {
     verdict = ' Within the limits.';
   }
@@ -70,7 +70,7 @@ function uJointRemedies(transmissionDeg: number, pinionDeg: number, shimHours: n
   return [
     {
       kind: 'fabrication',
-      operation: `Set the pinion angle to ${degrees(transmissionDeg, 1)}, parallel to the transmission (now ${degrees(pinionDeg, 1)})`,
+      operation: `Set the pinion angle to ${formatDegrees(transmissionDeg, 1)}, parallel to the transmission (now ${formatDegrees(pinionDeg, 1)})`,
       laborHours: shimHours,
       note: 'Wedge shims or adjustable arms. Support the axle on stands rated for the load before loosening it; recheck both joint angles at ride height.',
     },
