@@ -99,7 +99,8 @@ export class ConfigValidationError extends Error {
 }
 
 function flatten(errors: ValidationError[]): string[] {
-  return errors.flatMap((error) => Object.values(error.constraints ?? {}));
+  // One message per variable is enough to act on.
+  return errors.map((error) => Object.values(error.constraints ?? {}).at(-1) ?? `${error.property} is not valid`);
 }
 
 function validateAs<T extends object>(cls: new () => T, raw: Record<string, unknown>): T {

@@ -1,9 +1,9 @@
 import { degToRad } from '../units/angle';
 
 /**
- * Single Cardan (Hooke's) joint at operating angle β. Source: standard theory-of-machines texts; the same form
- * is in MathWorks Simscape Driveline, "Universal Joint": ω₂/ω₁ = cos β / (1 − sin²β·cos²θ), θ the input shaft's
- * rotation from the position where the input yoke lies in the plane of the two shafts.
+ * Single Cardan joint at operating angle β. Source: standard theory-of-machines texts (Hooke's joint):
+ * ω₂/ω₁ = cos β / (1 − sin²β·cos²θ), θ the input shaft's rotation from the position where the input yoke lies in
+ * the plane of the two shafts.
  */
 export function cardanSpeedRatio(operatingAngleDeg: number, inputRotationDeg: number): number {
   const beta = degToRad(operatingAngleDeg);

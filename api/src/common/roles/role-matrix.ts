@@ -14,6 +14,15 @@ import { Role } from './role';
  * | GET /projects, /projects/:id         | yes   | yes       | yes               | yes     | own only   |
  * | POST /projects, DELETE /projects/:id | yes   | yes       | -                 | -       | -          |
  * | PATCH /projects/:id                  | yes   | yes       | placement, status | -       | -          |
+ * | GET /catalog/<kind>[/:id]            | yes   | yes       | yes               | yes     | -          |
+ * | POST/PATCH/DELETE /catalog/<kind>    | yes   | yes       | -                 | yes     | -          |
+ * | GET /projects/:id/fit-selections     | yes   | yes       | yes               | yes     | -          |
+ * | PUT /projects/:id/fit-selections     | yes   | yes       | yes               | -       | -          |
+ * | POST /projects/:id/fit-reports       | yes   | yes       | yes               | -       | -          |
+ * | GET fit reports (list, one, compare) | yes   | yes       | yes               | yes     | own only   |
+ * | POST /fit-reports/what-if            | yes   | yes       | yes               | yes     | -          |
+ * | GET /fit-settings                    | yes   | yes       | yes               | yes     | -          |
+ * | PUT /fit-settings                    | yes   | -         | -                 | -       | -          |
  */
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];
@@ -25,3 +34,13 @@ export const PROJECT_WRITERS: Role[] = ['owner', 'estimator'];
 export const PROJECT_EDITORS: Role[] = ['owner', 'estimator', 'fabricator'];
 /** Fields a fabricator may change on a project; the rest of a PATCH is refused for them. */
 export const FABRICATOR_PROJECT_FIELDS = ['placement', 'status'] as const;
+export const CATALOG_READERS: Role[] = STAFF;
+export const CATALOG_WRITERS: Role[] = ['owner', 'estimator', 'counter'];
+export const FIT_SELECTION_READERS: Role[] = STAFF;
+export const FIT_SELECTION_WRITERS: Role[] = ['owner', 'estimator', 'fabricator'];
+export const FIT_REPORT_RUNNERS: Role[] = ['owner', 'estimator', 'fabricator'];
+/** Customers read the reports of their own projects only (the service scopes them). */
+export const FIT_REPORT_READERS: Role[] = ALL_ROLES;
+export const FIT_WHAT_IF_USERS: Role[] = STAFF;
+export const FIT_SETTINGS_READERS: Role[] = STAFF;
+export const FIT_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;

@@ -18,7 +18,7 @@ export function AppLayout() {
   const [navOpen, setNavOpen] = useState(false);
 
   const brand = (
-    <Link to={paths.home} aria-label="Swapwright home" style={{ display: 'block', padding: `${spacing.md}px ${spacing.lg}px ${spacing.sm}px` }}>
+    <Link to={paths.home} aria-label="Swapwright" style={{ display: 'block', padding: `${spacing.md}px ${spacing.lg}px ${spacing.sm}px` }}>
       <Logo tone="light" size={28} />
     </Link>
   );
@@ -65,7 +65,7 @@ export function AppLayout() {
             )}
             {isNarrow && <Logo size={24} />}
           </Flex>
-          <Flex align="center" gap={16}>
+          <Flex align="center" gap={16} style={{ marginInlineStart: 'auto' }}>
             <UnitSwitch />
             <UserMenu user={user} />
           </Flex>

@@ -1,0 +1,75 @@
+import { INestApplication } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import { Test } from '@nestjs/testing';
+import { DEMO_PASSWORD, DEMO_SIGN_INS, DemoRole } from '@swapwright/seed-data';
+import request from 'supertest';
+import { DataSource } from 'typeorm';
+import { configureApp } from '../../src/app-setup';
+import { AppModule } from '../../src/app.module';
+import { seedDemo } from '../../src/database/seed/seed-demo';
+import { loadOtherShop } from '../fixtures/other-shop.fixture';
+
+export interface TestApp {
+  app: INestApplication;
+  http: ReturnType<typeof request>;
+  dataSource: DataSource;
+  jwt: JwtService;
+  close: () => Promise<void>;
+}
+
+export interface Session {
+  accessToken: string;
+  refreshToken: string;
+  expiresIn: number;
+  user: { id: string; email: string; name: string; role: DemoRole; shop: { id: string; name: string; unitSystem: string }; customerId: string | null };
+}
+
+export async function createTestApp(): Promise<TestApp> {
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+  const app = moduleRef.createNestApplication({ logger: ['error', 'warn'] });
+  configureApp(app);
+  await app.init();
+  const dataSource = app.get(DataSource);
+  return {
+    app,
+    http: request(app.getHttpServer()),
+    dataSource,
+    jwt: app.get(JwtService, { strict: false }),
+    close: () => app.close(),
+  };
+}
+
+/** Empties every table (the schema stays), then loads the demo shop and the second test shop. */
+export async function resetData(dataSource: DataSource): Promise<void> {
+  const runner = dataSource.createQueryRunner();
+  try {
+    await runner.query('SET FOREIGN_KEY_CHECKS = 0');
+    for (const { tableName } of dataSource.entityMetadatas) await runner.query(`DELETE FROM \`${tableName}\``);
+    await runner.query('SET FOREIGN_KEY_CHECKS = 1');
+  } finally {
+    await runner.release();
+  }
+  await seedDemo(dataSource);
+  await loadOtherShop(dataSource);
+}
+
+export async function signIn(http: TestApp['http'], email: string, password: string = DEMO_PASSWORD): Promise<Session> {
+  const response = await http.post('/api/auth/sign-in').send({ email, password });
+  if (response.status !== 200) throw new Error(`sign-in of ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
+  return response.body as Session;
+}
+
+export async function signInAllRoles(http: TestApp['http']): Promise<Record<DemoRole, Session>> {
+  const sessions = {} as Record<DemoRole, Session>;
+  for (const demo of DEMO_SIGN_INS) sessions[demo.role] = await signIn(http, demo.email, demo.password);
+  return sessions;
+}
+
+export function bearer(session: Pick<Session, 'accessToken'>): [string, string] {
+  return ['Authorization', `Bearer ${session.accessToken}`];
+}
+
+export async function countRows(dataSource: DataSource, table: string): Promise<number> {
+  const [row] = await dataSource.query(`SELECT COUNT(*) AS n FROM \`${table}\``);
+  return Number(row.n);
+}

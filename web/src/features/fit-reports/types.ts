@@ -1,0 +1,62 @@
+import type { CheckStatus, FitSettings, FitSpec, Finding, Placement } from '@swapwright/shared';
+
+/** Counts of checks by status. */
+export type FitSummary = Partial<Record<CheckStatus, number>> & { total?: number };
+
+/** What the fit engine returns for one placement (shared `runFitCheck`). */
+export type FitReport = {
+  engineVersion: string;
+  placement: Placement;
+  findings: Finding[];
+  /** The checks that are `tight` or `fails`, worst first. */
+  shortfalls: Finding[];
+  summary: FitSummary;
+  caution: string;
+};
+
+export type FitInputsSnapshot = { spec: FitSpec; settings?: Partial<FitSettings> };
+
+/** A stored report: one row of the history. */
+export type FitReportListItem = {
+  id: string;
+  projectId: string;
+  createdAt: string;
+  createdBy?: { id: string; name: string } | null;
+  engineVersion?: string;
+  placement?: Placement | null;
+  summary?: FitSummary;
+};
+
+/** A stored report in full: results plus the inputs it was built on. */
+export type StoredFitReport = FitReportListItem & {
+  results: FitReport;
+  inputsSnapshot: FitInputsSnapshot;
+};
+
+/** The parts the project picked for the fit check, besides engine, chassis and transmission. */
+export type FitSelections = {
+  oilPanId: string | null;
+  oilPickupId: string | null;
+  oilPumpId: string | null;
+  controllerId: string | null;
+  accessoryDriveId: string | null;
+  timingSetAdvanceDeg?: number | null;
+  [key: string]: unknown;
+};
+
+export type FitSelectionKey = 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId' | 'accessoryDriveId';
+
+/** One check's change between two reports. */
+export type FindingChange = {
+  checkId: string;
+  title: string;
+  group?: string;
+  before: Pick<Finding, 'status' | 'measured' | 'unit'> | null;
+  after: Pick<Finding, 'status' | 'measured' | 'unit'> | null;
+};
+
+export type FitReportComparison = {
+  a: FitReportListItem;
+  b: FitReportListItem;
+  changes: FindingChange[];
+};
