@@ -40,3 +40,6 @@ export * from './checks/cooling/radiator-capacity';
 export * from './checks/cooling/hose-sides';
 export * from './checks/belt/serpentine-belt';
 export * from './checks/cam/cam-timing';
+export * from './fit-report/fit-report';
+export * from './fit-window/fit-window';
+export * from './fixtures/demo-fit-spec';

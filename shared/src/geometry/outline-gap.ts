@@ -143,6 +143,9 @@ export function outlinesOverlap(a: readonly ChassisPoint[], aClosed: boolean, b:
   return false;
 }
 
+// Reused by boundaryDistance (synchronous, never re-entered) so the hot path allocates nothing.
+const SCRATCH: Best = { d2: Infinity, fx: 0, fz: 0, tx: 0, tz: 0 };
+
 /** Smallest distance between the boundaries of `a` (shifted by dz) and `b`; also reports proper crossings. */
 function boundaryDistance(
   a: readonly ChassisPoint[],
@@ -150,7 +153,9 @@ function boundaryDistance(
   b: readonly ChassisPoint[],
   dz: number,
 ): { best: Best; crossing: boolean } {
-  const best: Best = { d2: Infinity, fx: 0, fz: 0, tx: 0, tz: 0 };
+  // (returns SCRATCH: callers read it before the next call)
+  const best = SCRATCH;
+  best.d2 = Infinity;
   const na = a.length;
   const nb = b.length;
   const ea = edgeCount(a, aClosed);
@@ -165,7 +170,7 @@ function boundaryDistance(
     }
   }
   // b's vertices to a's edges
-  if (ea === 0) return { best, crossing: false };
+  if (ea === 0) return crossingResult(best, false);
   let crossing = false;
   for (let j = 0; j < nb; j++) {
     const qx = b[j].x;
@@ -190,7 +195,14 @@ function boundaryDistance(
       }
     }
   }
-  return { best, crossing };
+  return crossingResult(best, crossing);
+}
+
+const RESULT = { best: SCRATCH, crossing: false };
+function crossingResult(best: Best, crossing: boolean): { best: Best; crossing: boolean } {
+  RESULT.best = best;
+  RESULT.crossing = crossing;
+  return RESULT;
 }
 
 interface LiftEvent {
@@ -229,6 +241,105 @@ function pushVerticalEvents(
       else events.push({ t, fx: px, fz: ez, tx: px, tz: pz });
     }
   }
+}
+
+/** True when every vertical line meets the outline in one interval (a point for a line): x goes one way, then back. */
+export function isVerticallyConvex(points: readonly ChassisPoint[], closed: boolean): boolean {
+  const n = points.length;
+  if (n < 2) return true;
+  let changes = 0;
+  let lastSign = 0;
+  const edges = closed ? n : n - 1;
+  for (let i = 0; i < edges; i++) {
+    const dx = points[(i + 1) % n].x - points[i].x;
+    if (Math.abs(dx) < 1e-12) continue;
+    const sign = dx > 0 ? 1 : -1;
+    if (lastSign !== 0 && sign !== lastSign) changes++;
+    lastSign = sign;
+  }
+  if (!closed) return changes === 0;
+  // Closing the cycle: compare the last direction with the first.
+  let firstSign = 0;
+  for (let i = 0; i < edges && firstSign === 0; i++) {
+    const dx = points[(i + 1) % n].x - points[i].x;
+    if (Math.abs(dx) >= 1e-12) firstSign = dx > 0 ? 1 : -1;
+  }
+  if (firstSign !== 0 && lastSign !== 0 && firstSign !== lastSign) changes++;
+  return changes <= 2;
+}
+
+/** Lowest (pick −1) or highest (+1) z of the outline's edges at x, or NaN when no edge spans x. */
+function envelopeAt(points: readonly ChassisPoint[], closed: boolean, x: number, dz: number, pick: 1 | -1): number {
+  const n = points.length;
+  const edges = closed ? n : n - 1;
+  let best = NaN;
+  for (let i = 0; i < edges; i++) {
+    const p = points[i];
+    const q = points[(i + 1) % n];
+    const lo = p.x < q.x ? p.x : q.x;
+    const hi = p.x < q.x ? q.x : p.x;
+    if (x < lo - 1e-9 || x > hi + 1e-9) continue;
+    let z: number;
+    if (hi - lo < 1e-12) z = pick === 1 ? Math.max(p.z, q.z) : Math.min(p.z, q.z);
+    else z = p.z + ((x - p.x) * (q.z - p.z)) / (q.x - p.x);
+    z += dz;
+    if (Number.isNaN(best) || (pick === 1 ? z > best : z < best)) best = z;
+  }
+  if (Number.isNaN(best) && n === 1 && Math.abs(points[0].x - x) < 1e-9) best = points[0].z + dz;
+  return best;
+}
+
+/**
+ * Closed form for vertically convex outlines: lifting `a` clears `b` only by passing over it at every x
+ * they share (a section cannot switch from above to below along a connected x range), so the lift is the
+ * largest (top of b − bottom of a) over the shared x range, taken at the vertices of either outline.
+ * Returns null when either outline is not vertically convex.
+ */
+export function verticalLiftConvex(
+  a: readonly ChassisPoint[],
+  aClosed: boolean,
+  b: readonly ChassisPoint[],
+  dz = 0,
+): { lift: number; from: ChassisPoint; to: ChassisPoint } | null {
+  if (!isVerticallyConvex(a, aClosed) || !isVerticallyConvex(b, true)) return null;
+  let aMin = Infinity;
+  let aMax = -Infinity;
+  for (const p of a) {
+    if (p.x < aMin) aMin = p.x;
+    if (p.x > aMax) aMax = p.x;
+  }
+  let bMin = Infinity;
+  let bMax = -Infinity;
+  for (const q of b) {
+    if (q.x < bMin) bMin = q.x;
+    if (q.x > bMax) bMax = q.x;
+  }
+  const lo = Math.max(aMin, bMin);
+  const hi = Math.min(aMax, bMax);
+  const none = { lift: 0, from: { x: lo, z: 0 }, to: { x: lo, z: 0 } };
+  if (hi - lo <= 1e-9) return none;
+  let best = -Infinity;
+  let bestX = lo;
+  let bestA = 0;
+  let bestB = 0;
+  const visit = (x: number): void => {
+    if (x < lo || x > hi) return;
+    const za = envelopeAt(a, aClosed, x, dz, -1);
+    const zb = envelopeAt(b, true, x, 0, 1);
+    if (Number.isNaN(za) || Number.isNaN(zb)) return;
+    if (zb - za > best) {
+      best = zb - za;
+      bestX = x;
+      bestA = za;
+      bestB = zb;
+    }
+  };
+  visit(lo);
+  visit(hi);
+  for (const p of a) visit(p.x);
+  for (const q of b) visit(q.x);
+  if (!(best > 0)) return none;
+  return { lift: best, from: { x: bestX, z: bestA }, to: { x: bestX, z: bestB } };
 }
 
 /**
@@ -298,15 +409,21 @@ export function outlineGap(a: readonly ChassisPoint[], aClosed: boolean, b: read
       to: { x: best.tx, z: best.tz },
     };
   }
-  const { lift, from, to } = verticalSeparationLift(a, aClosed, b, dz);
+  const { lift, from, to } = verticalLiftConvex(a, aClosed, b, dz) ?? verticalSeparationLift(a, aClosed, b, dz);
   if (lift <= 0) {
     return { gap: 0, overlapping: false, from: { x: best.fx, z: best.fz }, to: { x: best.tx, z: best.tz } };
   }
   return { gap: -lift, overlapping: true, from, to };
 }
 
-/** Gap only (no witness objects kept): the hot path of the fit window. */
+/** Gap only, allocating nothing when the outlines are apart: the hot path of the fit window. */
 export function outlineGapValue(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): number {
+  const { best, crossing } = boundaryDistance(a, aClosed, b, dz);
+  if (!crossing && best.d2 > EPS && a.length > 0) {
+    const inside =
+      pointStrictlyInPolygon(a[0].x, a[0].z + dz, b) || (aClosed && a.length >= 3 && pointStrictlyInPolygon(b[0].x, b[0].z, a, dz));
+    if (!inside) return Math.sqrt(best.d2);
+  }
   return outlineGap(a, aClosed, b, dz).gap;
 }
 

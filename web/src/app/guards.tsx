@@ -32,13 +32,20 @@ export function RequireAuth({ children }: RequireAuthProps) {
   return <>{children}</>;
 }
 
-export type RequireRoleProps = { roles: readonly Role[]; children?: ReactNode };
+export type RequireRoleProps = {
+  roles: readonly Role[];
+  /** Send these roles elsewhere instead of refusing (e.g. a customer to their own projects). */
+  redirect?: Partial<Record<Role, string>>;
+  children?: ReactNode;
+};
 
 /** Role-guarded section: shows a clear refusal instead of an empty or broken page. */
-export function RequireRole({ roles, children }: RequireRoleProps) {
+export function RequireRole({ roles, redirect, children }: RequireRoleProps) {
   const { data: user } = useCurrentUser();
   if (!user) return <Navigate to={paths.signIn} replace />;
   if (!roles.includes(user.role)) {
+    const to = redirect?.[user.role];
+    if (to) return <Navigate to={to} replace />;
     return (
       <Suspense fallback={null}>
         <Forbidden />

@@ -46,12 +46,18 @@ function TopSuspense({ children }: { children: ReactNode }) {
 }
 
 /** A guarded section of the app with its own error boundary. */
-function section(path: string, roles: readonly Role[], name: string, Page: ComponentType): RouteObject {
+function section(
+  path: string,
+  roles: readonly Role[],
+  name: string,
+  Page: ComponentType,
+  redirect?: Partial<Record<Role, string>>,
+): RouteObject {
   return {
     path,
     errorElement: <SectionError section={name} />,
     element: (
-      <RequireRole roles={roles}>
+      <RequireRole roles={roles} redirect={redirect}>
         <Page />
       </RequireRole>
     ),
@@ -88,7 +94,7 @@ export const routes: RouteObject[] = [
         errorElement: <SectionError />,
         children: [
           { index: true, element: <HomePage />, errorElement: <SectionError section="Home" /> },
-          section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage),
+          section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage, { customer: paths.myProjects }),
           section(paths.projectDetail, sectionRoles.projectDetail, 'the project', ProjectDetailPage),
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),

@@ -2,10 +2,7 @@ import { palette } from '@/config/theme';
 
 export type LogoMarkProps = { size?: number; tone?: 'light' | 'dark'; title?: string };
 
-/**
- * The Swapwright mark: an engine block (valve cover, block, sump) held in the open ring
- * of a box-end wrench, the ring's gap forming the jaw.
- */
+/** The Swapwright mark: an engine block (valve cover, block, sump) held in the box end of a combination wrench. */
 export function LogoMark({ size = 32, tone = 'dark', title }: LogoMarkProps) {
   const ring = tone === 'light' ? palette.teal100 : palette.teal600;
   const block = tone === 'light' ? palette.white : palette.teal800;
@@ -19,22 +16,21 @@ export function LogoMark({ size = 32, tone = 'dark', title }: LogoMarkProps) {
       aria-label={title}
       focusable="false"
     >
-      {/* wrench ring, open at the upper right like a jaw */}
+      {/* combination wrench: box end with a hex opening, handle to the lower left */}
       <path
-        d="M35.3 9.6 A18 18 0 1 0 40.6 17.8"
-        fill="none"
-        stroke={ring}
-        strokeWidth="4.5"
-        strokeLinecap="round"
+        fillRule="evenodd"
+        fill={ring}
+        d="M11 21 A16 16 0 1 0 43 21 A16 16 0 1 0 11 21 Z M38.5 21 L32.75 30.96 L21.25 30.96 L15.5 21 L21.25 11.04 L32.75 11.04 Z"
       />
-      {/* wrench handle */}
-      <path d="M10.8 37.8 L4.5 44.1" stroke={ring} strokeWidth="5.5" strokeLinecap="round" />
+      <path d="M17 31 L10.5 37.5" stroke={ring} strokeWidth="6.5" strokeLinecap="round" />
+      {/* open-end jaw at the far end of the handle */}
+      <path d="M4.52 39.39 A4.5 4.5 0 1 1 8.61 43.48" fill="none" stroke={ring} strokeWidth="4" />
       {/* valve cover */}
-      <rect x="15" y="13.5" width="18" height="4" rx="1.2" fill={palette.oxide500} />
-      {/* block with exhaust-side ears */}
-      <path d="M13 19 H35 V22 H37.5 V27 H35 V30 H13 V27 H10.5 V22 H13 Z" fill={block} />
+      <rect x="21" y="13.4" width="12" height="3" rx="1" fill={palette.oxide500} />
+      {/* block with manifold ears */}
+      <path d="M20 17.6 H34 V19.2 H35.6 V22.8 H34 V24.4 H20 V22.8 H18.4 V19.2 H20 Z" fill={block} />
       {/* sump */}
-      <path d="M15 31.5 H33 L31 36 H17 Z" fill={block} />
+      <path d="M21.4 25.4 H32.6 L31.2 28.8 H22.8 Z" fill={block} />
     </svg>
   );
 }

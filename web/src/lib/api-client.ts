@@ -44,7 +44,8 @@ export const apiClient: AxiosInstance = axios.create({
 
 apiClient.interceptors.request.use((config) => {
   const token = tokenStorage.getAccessToken();
-  if (token && !config.headers.Authorization) {
+  // Public auth routes (sign-in, refresh…) go without a possibly expired bearer.
+  if (token && !config.skipAuthRefresh && !config.headers.Authorization) {
     config.headers.Authorization = `Bearer ${token}`;
   }
   return config;
@@ -59,7 +60,7 @@ async function refreshAccessToken(): Promise<string> {
   const { data } = await apiClient.post<Session>(
     '/auth/refresh',
     { refreshToken },
-    { skipAuthRefresh: true, skipErrorNotification: true, headers: { Authorization: '' } },
+    { skipAuthRefresh: true, skipErrorNotification: true },
   );
   tokenStorage.set({ accessToken: data.accessToken, refreshToken: data.refreshToken });
   sessionListeners.forEach((listener) => listener(data));

@@ -7,6 +7,10 @@ export type FitSummary = Partial<Record<CheckStatus, number>> & { total?: number
 export type FitReport = {
   engineVersion: string;
   placement: Placement;
+  /** The thresholds the report was computed with. */
+  settings?: FitSettings;
+  /** Work-safety cautions for what the shortfalls lead to. */
+  safety?: string[];
   findings: Finding[];
   /** The checks that are `tight` or `fails`, worst first. */
   shortfalls: Finding[];
@@ -14,7 +18,15 @@ export type FitReport = {
   caution: string;
 };
 
-export type FitInputsSnapshot = { spec: FitSpec; settings?: Partial<FitSettings> };
+export type FitInputsSnapshot = {
+  spec: FitSpec;
+  /** The shop's threshold overrides at the run. */
+  settingsOverrides?: Partial<FitSettings>;
+  settings?: Partial<FitSettings>;
+  placementSource?: 'project' | 'proposed' | 'chassis-default';
+  /** Inputs the server filled in or left out, in words. */
+  notes?: string[];
+};
 
 /** A stored report: one row of the history. */
 export type FitReportListItem = {
@@ -25,6 +37,12 @@ export type FitReportListItem = {
   engineVersion?: string;
   placement?: Placement | null;
   summary?: FitSummary;
+  okCount?: number;
+  tightCount?: number;
+  failsCount?: number;
+  unknownCount?: number;
+  totalCount?: number;
+  worstStatus?: CheckStatus;
 };
 
 /** A stored report in full: results plus the inputs it was built on. */
@@ -60,3 +78,10 @@ export type FitReportComparison = {
   b: FitReportListItem;
   changes: FindingChange[];
 };
+
+/** Counts of a stored report, whichever way the list gives them. */
+export function summaryOf(item: FitReportListItem): FitSummary | undefined {
+  if (item.summary) return item.summary;
+  if (item.okCount === undefined) return undefined;
+  return { ok: item.okCount, tight: item.tightCount, fails: item.failsCount, unknown: item.unknownCount, total: item.totalCount };
+}

@@ -1,0 +1,152 @@
+import { applyDecorators, Type as ClassType } from '@nestjs/common';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsBoolean,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+
+/**
+ * Reusable validation decorators for the part-spec DTOs: each pairs the OpenAPI description with the
+ * class-validator rules, so the documented range is the enforced one.
+ */
+
+const FINITE = { allowNaN: false, allowInfinity: false };
+
+export function NumberIn(min: number, max: number, description?: string) {
+  return applyDecorators(ApiProperty({ minimum: min, maximum: max, description }), IsNumber(FINITE), Min(min), Max(max));
+}
+
+export function OptionalNumberIn(min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ minimum: min, maximum: max, description }),
+    IsOptional(),
+    IsNumber(FINITE),
+    Min(min),
+    Max(max),
+  );
+}
+
+export function IntIn(min: number, max: number, description?: string) {
+  return applyDecorators(ApiProperty({ type: 'integer', minimum: min, maximum: max, description }), IsInt(), Min(min), Max(max));
+}
+
+export function Text(maxLength = 120, description?: string) {
+  return applyDecorators(
+    ApiProperty({ maxLength, description }),
+    IsString(),
+    IsNotEmpty({ message: '$property must not be empty' }),
+    MaxLength(maxLength),
+  );
+}
+
+export function OptionalText(maxLength = 120, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ maxLength, description }),
+    IsOptional(),
+    IsString(),
+    IsNotEmpty({ message: '$property must not be empty' }),
+    MaxLength(maxLength),
+  );
+}
+
+export function Flag(description?: string) {
+  return applyDecorators(ApiProperty({ description }), IsBoolean());
+}
+
+export function OneOf<T extends string>(values: readonly T[], description?: string) {
+  return applyDecorators(
+    ApiProperty({ enum: values, description }),
+    IsIn(values as T[], { message: `$property must be one of: ${values.join(', ')}` }),
+  );
+}
+
+export function ListOf<T extends string>(values: readonly T[], min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiProperty({ enum: values, isArray: true, minItems: min, maxItems: max, description }),
+    IsArray(),
+    ArrayMinSize(min),
+    ArrayMaxSize(max),
+    IsIn(values as T[], { each: true, message: `each of $property must be one of: ${values.join(', ')}` }),
+  );
+}
+
+export function TextList(min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiProperty({ type: [String], minItems: min, maxItems: max, description }),
+    IsArray(),
+    ArrayMinSize(min),
+    ArrayMaxSize(max),
+    IsString({ each: true }),
+    IsNotEmpty({ each: true, message: 'each of $property must not be empty' }),
+    MaxLength(40, { each: true }),
+  );
+}
+
+export function NumberList(min: number, max: number, itemMin: number, itemMax: number, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ type: [Number], minItems: min, maxItems: max, description }),
+    IsOptional(),
+    IsArray(),
+    ArrayMinSize(min),
+    ArrayMaxSize(max),
+    IsNumber(FINITE, { each: true }),
+    Min(itemMin, { each: true }),
+    Max(itemMax, { each: true }),
+  );
+}
+
+export function Nested(type: () => ClassType, description?: string) {
+  return applyDecorators(
+    ApiProperty({ type, description }),
+    IsObject({ message: '$property must be an object' }),
+    ValidateNested(),
+    Type(type),
+  );
+}
+
+export function OptionalNested(type: () => ClassType, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ type, description }),
+    IsOptional(),
+    IsObject({ message: '$property must be an object' }),
+    ValidateNested(),
+    Type(type),
+  );
+}
+
+export function NestedList(type: () => ClassType, min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiProperty({ type, isArray: true, minItems: min, maxItems: max, description }),
+    IsArray(),
+    ArrayMinSize(min, { message: `$property must have at least ${min} item${min === 1 ? '' : 's'}` }),
+    ArrayMaxSize(max),
+    ValidateNested({ each: true }),
+    Type(type),
+  );
+}
+
+export function OptionalNestedList(type: () => ClassType, min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ type, isArray: true, minItems: min, maxItems: max, description }),
+    IsOptional(),
+    IsArray(),
+    ArrayMinSize(min),
+    ArrayMaxSize(max),
+    ValidateNested({ each: true }),
+    Type(type),
+  );
+}

@@ -1,0 +1,41 @@
+import { ConfigValidationError, validateEnv } from './env.validation';
+
+const envStub = {
+  complete: {
+    NODE_ENV: 'test',
+    PORT: '3100',
+    APP_URL: 'http://127.0.0.1:3100',
+    DB_HOST: '127.0.0.1',
+    DB_PORT: '3317',
+    DB_USER: 'swapwright',
+    DB_PASSWORD: 'secret',
+    DB_NAME: 'swapwright_test',
+    JWT_SECRET: 'a-long-enough-secret-value',
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: '2535',
+    MAIL_FROM: 'Swapwright <no-reply@swapwright.test>',
+  },
+};
+
+describe('validateEnv', () => {
+  it('converts ports to numbers', () => {
+    const env = validateEnv(envStub.complete);
+    expect(env.DB_PORT).toBe(3317);
+    expect(env.PORT).toBe(3100);
+  });
+
+  it('names every bad variable once, in a readable list', () => {
+    const { JWT_SECRET: _secret, ...withoutSecret } = envStub.complete;
+    const attempt = () => validateEnv({ ...withoutSecret, DB_PORT: 'abc', NODE_ENV: 'staging' });
+    expect(attempt).toThrow(ConfigValidationError);
+    try {
+      attempt();
+    } catch (error) {
+      const { problems } = error as ConfigValidationError;
+      expect(problems).toHaveLength(3);
+      expect(problems.join('\n')).toMatch(/JWT_SECRET/);
+      expect(problems.join('\n')).toMatch(/DB_PORT must be an integer number/);
+      expect((error as Error).message).toMatch(/^Swapwright cannot start/);
+    }
+  });
+});

@@ -1,0 +1,188 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import type {
+  BellhousingAdapterSpec,
+  ChassisSpec,
+  EngineControllerSpec,
+  EngineSpec,
+  FitSpec,
+  MountAdapterSpec,
+  OilPanSpec,
+  OilPickupSpec,
+  OilPumpSpec,
+  Placement,
+  SwapGoals,
+  TransmissionSpec,
+} from '@swapwright/shared';
+import { Repository } from 'typeorm';
+import { CatalogService } from '../catalog/catalog.service';
+import { chassisDefaultPlacement } from '../catalog/catalog-kinds';
+import { CatalogChassis } from '../catalog/catalog-item.entity';
+import { AuthUser } from '../common/tenant/auth-user';
+import { Project } from '../projects/project.entity';
+import { applyChassisOverrides, ChassisOverrides, NO_CHASSIS_OVERRIDES } from './chassis-overrides';
+import { PlacementSource } from './fit-report-record.entity';
+import { FitReportErrors } from './fit-reports.errors';
+import { ProjectFitSelection } from './project-fit-selection.entity';
+
+export interface BuiltFitSpec {
+  spec: FitSpec;
+  placementSource: PlacementSource;
+  notes: string[];
+}
+
+type Shop = Pick<AuthUser, 'shopId'>;
+
+/**
+ * Turns a project (engine, chassis, transmission, placement, goals), its fit selections and the shop's
+ * catalog into the fit engine's input. Missing parts are left out, so the engine reports `unknown` for the
+ * checks that need them; only an engine, a chassis, a placement and the goals' figures are required.
+ */
+@Injectable()
+export class FitSpecBuilderService {
+  constructor(
+    private readonly catalog: CatalogService,
+    @InjectRepository(ProjectFitSelection) private readonly selections: Repository<ProjectFitSelection>,
+  ) {}
+
+  async build(user: Shop, project: Project): Promise<BuiltFitSpec> {
+    const notes: string[] = [];
+    const [engine, chassisRow, transmission] = await Promise.all([
+      this.catalog.findSpec<EngineSpec>('engines', user, project.engineProfileId),
+      this.catalog.findRow('chassis', user, project.chassisModelId) as Promise<CatalogChassis | null>,
+      this.catalog.findSpec<TransmissionSpec>('transmissions', user, project.transmissionId),
+    ]);
+    const needed: string[] = [];
+    if (!engine) {
+      needed.push(
+        project.engineProfileId
+          ? "select an engine: the project's engine is no longer in the catalog"
+          : 'select an engine for the project (engineProfileId)',
+      );
+    }
+    if (!chassisRow) {
+      needed.push(
+        project.chassisModelId
+          ? "select a chassis: the project's chassis is no longer in the catalog"
+          : 'select a chassis for the project (chassisModelId)',
+      );
+    }
+    if (!engine || !chassisRow) throw FitReportErrors.notReady(needed);
+    if (project.transmissionId && !transmission) notes.push("The project's transmission is no longer in the catalog; drivetrain checks are unknown.");
+    if (!project.transmissionId) notes.push('No transmission selected; drivetrain checks are unknown.');
+
+    const chassis = applyChassisOverrides(chassisRow.spec as ChassisSpec, await this.chassisOverrides(user, project));
+    const selection = await this.selections.findOne({ where: { projectId: project.id, shopId: user.shopId } });
+    const [oilPan, oilPickup, oilPump, controller] = await Promise.all([
+      this.catalog.findSpec<OilPanSpec>('oil-pans', user, selection?.oilPanId),
+      this.catalog.findSpec<OilPickupSpec>('oil-pickups', user, selection?.oilPickupId),
+      this.catalog.findSpec<OilPumpSpec>('oil-pumps', user, selection?.oilPumpId),
+      this.catalog.findSpec<EngineControllerSpec>('controllers', user, selection?.controllerId),
+    ]);
+
+    const goals = this.goals(project, engine, selection, needed, notes);
+    const partial: Omit<FitSpec, 'placement'> = {
+      engine,
+      ...(selection?.accessoryDriveId && { accessoryDriveId: selection.accessoryDriveId }),
+      ...(oilPan && { oilPan }),
+      ...(oilPickup && { oilPickup }),
+      ...(oilPump && { oilPump }),
+      ...(transmission && { transmission }),
+      chassis,
+      ...(controller && { controller }),
+      ...(this.driveshaft(selection) && { driveshaft: this.driveshaft(selection)! }),
+      ...(selection?.timingSetAdvanceDeg !== null && selection?.timingSetAdvanceDeg !== undefined && {
+        timingSetAdvanceDeg: selection.timingSetAdvanceDeg,
+      }),
+      goals: goals ?? ({} as SwapGoals),
+      candidates: await this.candidates(user, engine),
+    };
+    const placed = this.placement(project, partial, chassisRow, needed);
+    if (needed.length > 0 || !goals || !placed) throw FitReportErrors.notReady(needed);
+    return { spec: { ...partial, placement: placed.placement }, placementSource: placed.source, notes };
+  }
+
+  /** The catalog parts the engine may offer as remedies: pans that bolt to this engine, adapters for its bell. */
+  async candidates(user: Shop, engine: EngineSpec): Promise<NonNullable<FitSpec['candidates']>> {
+    const [oilPans, oilPickups, oilPumps, mountAdapters, bellhousingAdapters, controllers] = await Promise.all([
+      this.catalog.candidateSpecs<OilPanSpec>('oil-pans', user, { railPattern: engine.panRail.pattern }),
+      this.catalog.candidateSpecs<OilPickupSpec>('oil-pickups', user),
+      this.catalog.candidateSpecs<OilPumpSpec>('oil-pumps', user),
+      this.catalog.candidateSpecs<MountAdapterSpec>('mount-adapters', user),
+      this.catalog.candidateSpecs<BellhousingAdapterSpec>('bellhousing-adapters', user, { enginePattern: engine.bellPattern }),
+      this.catalog.candidateSpecs<EngineControllerSpec>('controllers', user),
+    ]);
+    return { oilPans, oilPickups, oilPumps, mountAdapters, bellhousingAdapters, controllers };
+  }
+
+  /** Measured chassis values of this project; none until the measurement module provides them. */
+  private async chassisOverrides(_user: Shop, _project: Project): Promise<ChassisOverrides> {
+    return NO_CHASSIS_OVERRIDES;
+  }
+
+  private goals(
+    project: Project,
+    engine: EngineSpec,
+    selection: ProjectFitSelection | null,
+    needed: string[],
+    notes: string[],
+  ): SwapGoals | null {
+    let targetPowerKw = project.goalTargetPowerKw;
+    if (targetPowerKw === null && engine.ratedPowerKw !== undefined) {
+      targetPowerKw = engine.ratedPowerKw;
+      notes.push(`No target power in the project's goals: used the engine's rated ${engine.ratedPowerKw} kW.`);
+    }
+    if (targetPowerKw === null) needed.push("set the target power in the project's goals (the engine has no rated power)");
+    if (project.goalRevLimitRpm === null) needed.push("set the planned rev limit in the project's goals");
+    if (targetPowerKw === null || project.goalRevLimitRpm === null) return null;
+    return {
+      use: project.goalUse,
+      targetPowerKw,
+      revLimitRpm: project.goalRevLimitRpm,
+      ...(selection?.continuousPowerKw != null && { continuousPowerKw: selection.continuousPowerKw }),
+      ...(selection?.topSpeedKph != null && { topSpeedKph: selection.topSpeedKph }),
+      ...(selection?.tireDiameterMm != null && { tireDiameterMm: selection.tireDiameterMm }),
+      ...(selection?.axleRatio != null && { axleRatio: selection.axleRatio }),
+    };
+  }
+
+  private driveshaft(selection: ProjectFitSelection | null): FitSpec['driveshaft'] | null {
+    if (!selection || selection.driveshaftOuterDiameterMm === null || selection.driveshaftWallMm === null) return null;
+    return {
+      outerDiameterMm: selection.driveshaftOuterDiameterMm,
+      wallMm: selection.driveshaftWallMm,
+      material: selection.driveshaftMaterial ?? 'steel',
+      ...(selection.driveshaftLengthMm !== null && { lengthMm: selection.driveshaftLengthMm }),
+      ...(selection.driveshaftSuspensionGrowthMm !== null && { suspensionGrowthMm: selection.driveshaftSuspensionGrowthMm }),
+    };
+  }
+
+  /** The project's placement; else the fit engine's proposal; else where the chassis's stock engine sat. */
+  private placement(
+    project: Project,
+    spec: Omit<FitSpec, 'placement'>,
+    chassisRow: CatalogChassis,
+    needed: string[],
+  ): { placement: Placement; source: PlacementSource } | null {
+    if (project.placementSetbackMm !== null && project.placementHeightMm !== null && project.placementTiltDeg !== null) {
+      return {
+        placement: { setbackMm: project.placementSetbackMm, heightMm: project.placementHeightMm, tiltDeg: project.placementTiltDeg },
+        source: 'project',
+      };
+    }
+    const proposed = proposePlacement(spec);
+    if (proposed) return { placement: proposed, source: 'proposed' };
+    const fallback = chassisDefaultPlacement(chassisRow);
+    if (fallback) return { placement: fallback, source: 'chassis-default' };
+    needed.push("set the engine's placement on the project (the chassis has no default placement)");
+    return null;
+  }
+}
+
+/**
+ * The fit window's best placement for this spec. The shared fit window is not available yet, so this
+ * proposes nothing and the chassis default is used; once shared exports it, call it here.
+ */
+export function proposePlacement(_spec: Omit<FitSpec, 'placement'>): Placement | null {
+  return null;
+}

@@ -1,0 +1,62 @@
+import { Repository } from 'typeorm';
+import { AuthUser } from '../common/tenant/auth-user';
+import { Customer } from '../customers/customer.entity';
+import { Project } from './project.entity';
+import { assertFieldsAllowed, ProjectsService } from './projects.service';
+
+const userStub = {
+  estimator: {
+    userId: 'u-1',
+    email: 'estimator@shop.test',
+    name: 'Esti Mator',
+    membershipId: 'm-1',
+    shopId: 'shop-a',
+    role: 'estimator',
+    customerId: null,
+  } satisfies AuthUser,
+  fabricator: {
+    userId: 'u-2',
+    email: 'fab@shop.test',
+    name: 'Fab Ricator',
+    membershipId: 'm-2',
+    shopId: 'shop-a',
+    role: 'fabricator',
+    customerId: null,
+  } satisfies AuthUser,
+};
+
+function repositoryMock<T extends object>(overrides: Partial<Record<keyof Repository<T>, jest.Mock>> = {}) {
+  return { create: jest.fn((value) => value), insert: jest.fn(), exists: jest.fn(), ...overrides } as unknown as Repository<T>;
+}
+
+describe('assertFieldsAllowed', () => {
+  it('lets a fabricator change placement and status', () => {
+    expect(() => assertFieldsAllowed(userStub.fabricator, { placement: null, status: 'checking' })).not.toThrow();
+  });
+
+  it('refuses any other field for a fabricator, naming it', () => {
+    expect(() => assertFieldsAllowed(userStub.fabricator, { status: 'checking', title: 'x' })).toThrow(/title/);
+  });
+
+  it('ignores fields that are present but undefined', () => {
+    expect(() => assertFieldsAllowed(userStub.fabricator, { title: undefined, status: 'done' })).not.toThrow();
+  });
+
+  it('does not limit an estimator', () => {
+    expect(() => assertFieldsAllowed(userStub.estimator, { title: 'x', goals: { use: 'tow' } })).not.toThrow();
+  });
+});
+
+describe('ProjectsService.create', () => {
+  it("refuses a customer outside the caller's shop before writing", async () => {
+    const projects = repositoryMock<Project>();
+    const customers = repositoryMock<Customer>({ exists: jest.fn().mockResolvedValue(false) });
+    const service = new ProjectsService(projects, customers);
+
+    await expect(service.create(userStub.estimator, { customerId: 'c-other', title: 'Swap' })).rejects.toMatchObject({
+      code: 'customer_not_found',
+    });
+    expect(customers.exists).toHaveBeenCalledWith({ where: { id: 'c-other', shopId: 'shop-a' } });
+    expect(projects.insert).not.toHaveBeenCalled();
+  });
+});

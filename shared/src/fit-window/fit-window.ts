@@ -1,0 +1,458 @@
+import { ENVELOPE_CHECKS } from '../checks/envelope';
+import { FAN_RADIATOR_ID, measureFanGap } from '../checks/envelope/fan-radiator';
+import { GROUND_CLEARANCE_ID, lowestPoint } from '../checks/envelope/ground-clearance';
+import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
+import { HOOD_ID, measureHood } from '../checks/envelope/hood';
+import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
+import { obstaclesOfKinds, placeEngine, type PlacedEngine } from '../checks/envelope/placed-engine';
+import { measureRailWidth, RAIL_WIDTH_ID, railForbiddenBands } from '../checks/envelope/rail-width';
+import { measureSteeringBox, STEERING_BOX_ID, steeringBoxGap } from '../checks/envelope/steering-box';
+import { TRANSMISSION_TUNNEL_ID, TUNNEL_KINDS } from '../checks/envelope/transmission-tunnel';
+import { findBoundary } from '../geometry/lipschitz-solve';
+import { outlineGapValue } from '../geometry/outline-gap';
+import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
+import type { CheckStatus } from '../types/finding';
+import type { FitSpec, Placement } from '../types/fit-spec';
+
+/**
+ * Fit window: for each setback (at one tilt) the crank-centreline heights z_e where every clearance check
+ * (the envelope group) passes. Mounts and the transmission mount are not part of it: they are bridged by
+ * adapters, spacers or brackets rather than bounding where the engine can go.
+ */
+
+export interface FitWindowOptions {
+  setbackFromMm?: number;
+  setbackToMm?: number;
+  stepMm?: number;
+  tiltDeg?: number;
+  /** Heights searched (crank centreline above the ground). */
+  zMinMm?: number;
+  zMaxMm?: number;
+}
+
+/** What sets a bound: a check and the obstacle, or the end of the searched range. */
+export interface WindowBound {
+  checkId: string;
+  against: string;
+}
+
+export interface FitWindowInterval {
+  lowMm: number;
+  highMm: number;
+  lowBoundBy: WindowBound;
+  highBoundBy: WindowBound;
+}
+
+/** One column of the picture: at this setback the engine fits for lowMm ≤ z_e ≤ highMm. */
+export interface FitWindowColumn {
+  setbackMm: number;
+  feasible: boolean;
+  lowMm: number | null;
+  highMm: number | null;
+  lowBoundBy: WindowBound | null;
+  highBoundBy: WindowBound | null;
+  /** All passing intervals, widest first (usually one); low/high above are the widest. */
+  intervals: FitWindowInterval[];
+  /** When infeasible: the check that closes the window here. */
+  blockedBy: WindowBound | null;
+}
+
+export interface WindowMargin {
+  checkId: string;
+  against: string;
+  marginMm: number;
+  status: CheckStatus;
+}
+
+export interface BestPlacement {
+  placement: Placement;
+  smallestMarginMm: number;
+  limitedBy: WindowBound;
+  /** Margins of every envelope check at the proposed placement, from the checks themselves. */
+  margins: WindowMargin[];
+}
+
+export interface FitWindow {
+  tiltDeg: number;
+  stepMm: number;
+  columns: FitWindowColumn[];
+  best: BestPlacement | null;
+  /** Envelope checks that could not bound the window for lack of input. */
+  notChecked: string[];
+}
+
+export const WINDOW_RANGE: WindowBound = { checkId: 'window.range', against: 'searched range' };
+
+interface Constraint {
+  bound: WindowBound;
+  trend: 'rises' | 'falls' | 'any';
+  margin: (z: number) => number;
+  /** Exact: margin = a + slope·z. */
+  linear?: { a: number; slope: 1 | -1 };
+}
+
+interface ColumnModel {
+  constant: Array<{ bound: WindowBound; margin: number }>;
+  constraints: Constraint[];
+  bands: Array<{ from: number; to: number; bound: WindowBound }>;
+  /** Margins of the width checks at a height (for the best placement score). */
+  widthMargins: (z: number) => Array<{ bound: WindowBound; margin: number }>;
+}
+
+function buildColumn(spec: FitSpec, settings: FitSettings, base: PlacedEngine): ColumnModel {
+  const constant: ColumnModel['constant'] = [];
+  const constraints: Constraint[] = [];
+  const bands: ColumnModel['bands'] = [];
+  const chassis = spec.chassis;
+  if (base.pan) {
+    const pan = base.pan;
+    const ids: Array<[string, readonly FitSpec['chassis']['obstacles'][number]['kind'][]]> = [
+      ['envelope.sump-crossmember', PAN_OBSTACLE_KINDS.crossmember],
+      ['envelope.sump-steering-linkage', PAN_OBSTACLE_KINDS.steering],
+      ['envelope.sump-axle', PAN_OBSTACLE_KINDS.axle],
+    ];
+    for (const [checkId, kinds] of ids) {
+      for (const obstacle of obstaclesOfKinds(spec, kinds)) {
+        constraints.push({
+          bound: { checkId, against: obstacle.id },
+          trend: 'rises',
+          margin: (z) => outlineGapValue(pan, true, obstacle.outline, z) - settings.minGapBelowMm,
+        });
+      }
+    }
+    const low = lowestPoint(base);
+    if (low) {
+      const a = low.point.z - settings.minGroundClearanceMm;
+      constraints.push({ bound: { checkId: GROUND_CLEARANCE_ID, against: 'ground' }, trend: 'rises', margin: (z) => a + z, linear: { a, slope: 1 } });
+    }
+  }
+  const hood = measureHood(base, chassis.hoodLine);
+  if (hood) {
+    const a = hood.clearance - settings.minHoodGapMm;
+    constraints.push({ bound: { checkId: HOOD_ID, against: 'hood' }, trend: 'falls', margin: (z) => a - z, linear: { a, slope: -1 } });
+  }
+  if (base.transmission) {
+    // Mirrored in z once: the drop that clears the tunnel is the lift of the mirror image (shifted by −z).
+    const trans = base.transmission.map((p) => ({ x: p.x, z: -p.z }));
+    for (const tunnel of obstaclesOfKinds(spec, [...TUNNEL_KINDS])) {
+      const roof = tunnel.outline.map((p) => ({ x: p.x, z: -p.z }));
+      constraints.push({
+        bound: { checkId: TRANSMISSION_TUNNEL_ID, against: tunnel.id },
+        // The tunnel is above the case: the margin falls as the engine rises; an overlap is the drop that clears it.
+        trend: 'falls',
+        margin: (z) => outlineGapValue(trans, true, roof, -z) - settings.minFirewallGapMm,
+      });
+    }
+  }
+  if (base.rearProfile.length) {
+    const rear = base.rearProfile;
+    for (const wall of obstaclesOfKinds(spec, [...FIREWALL_KINDS])) {
+      constraints.push({
+        bound: { checkId: HEADS_FIREWALL_ID, against: wall.id },
+        trend: 'any',
+        // Scanned upward, so an overlap is measured as the lift that clears it (the passing set is the same in any direction).
+        margin: (z) => outlineGapValue(rear, false, wall.outline, z) - settings.minFirewallGapMm,
+      });
+    }
+  }
+  if (chassis.radiatorCore && Number.isFinite(spec.engine.fanFrontU)) {
+    const fan = measureFanGap(base, chassis.radiatorCore.x);
+    if (fan) constant.push({ bound: { checkId: FAN_RADIATOR_ID, against: 'radiator-core' }, margin: fan.gap - settings.minFanToCoreMm });
+  }
+  const railBound = (side: string): WindowBound => ({ checkId: RAIL_WIDTH_ID, against: `frame-rail-${side}` });
+  if (chassis.railStations?.length && base.widthBoxes.length) {
+    for (const band of railForbiddenBands(base.widthBoxes, chassis.railStations, settings.minRailGapMm)) {
+      const side = band.box.halfWidthLeftMm >= band.box.halfWidthRightMm ? 'left' : 'right';
+      bands.push({ from: band.from, to: band.to, bound: railBound(side) });
+    }
+  }
+  const steering = chassis.steeringBox;
+  if (steering && base.widthBoxes.length) {
+    for (const box of base.widthBoxes) {
+      if (!(box.xMin < steering.xTo && box.xMax > steering.xFrom)) continue;
+      if (steeringBoxGap(box, steering) >= settings.minSteeringBoxGapMm) continue;
+      bands.push({ from: steering.zFrom - box.zMax, to: steering.zTo - box.zMin, bound: { checkId: STEERING_BOX_ID, against: 'steering-box' } });
+    }
+  }
+  const widthMargins = (z: number): Array<{ bound: WindowBound; margin: number }> => {
+    const out: Array<{ bound: WindowBound; margin: number }> = [];
+    if (chassis.railStations?.length) {
+      const c = measureRailWidth(base.widthBoxes, chassis.railStations, z);
+      if (c) out.push({ bound: railBound(c.side), margin: c.gap - settings.minRailGapMm });
+    }
+    if (steering) {
+      const s = measureSteeringBox(base.widthBoxes, steering, z);
+      if (s) out.push({ bound: { checkId: STEERING_BOX_ID, against: 'steering-box' }, margin: s.gap - settings.minSteeringBoxGapMm });
+    }
+    return out;
+  };
+  return { constant, constraints, bands, widthMargins };
+}
+
+/** Boundary of a monotone constraint: the lowest passing z for `rises`, the highest for `falls`; ±Infinity when it never binds in range. */
+function monotoneBound(c: Constraint, z0: number, zMin: number, zMax: number): number {
+  const rises = c.trend === 'rises';
+  if (c.linear) return rises ? -c.linear.a : c.linear.a;
+  const m0 = c.margin(z0);
+  const passing = m0 >= 0;
+  const dir: 1 | -1 = rises ? (passing ? -1 : 1) : passing ? 1 : -1;
+  const travel = dir === 1 ? zMax - z0 : z0 - zMin;
+  const z = findBoundary(c.margin, z0, dir, { maxTravel: Math.max(travel, 0) + 1, tolerance: 1e-4, monotone: true });
+  if (z === null) {
+    // Never met within range: passing all the way (not binding) or failing all the way (closes the column).
+    if (passing) return rises ? -Infinity : Infinity;
+    return rises ? Infinity : -Infinity;
+  }
+  return z;
+}
+
+/** Passing sub-intervals of [lo, hi] for a 1-Lipschitz margin, by stepping |m| at a time. */
+function passingIntervals(m: (z: number) => number, lo: number, hi: number, tol = 1e-4): Array<[number, number]> {
+  const out: Array<[number, number]> = [];
+  let z = lo;
+  let start: number | null = null;
+  let guard = 0;
+  while (z <= hi && guard++ < 10000) {
+    const v = m(z);
+    if (v >= 0) {
+      if (start === null) start = z;
+      const next = z + Math.max(v, tol);
+      if (next > hi) {
+        if (m(hi) >= 0) {
+          out.push([start, hi]);
+          return out;
+        }
+        z = Math.min(next, hi);
+        const end = findBoundary(m, z - Math.max(v, tol), 1, { maxTravel: hi - lo + 1, tolerance: tol });
+        out.push([start, end ?? z]);
+        start = null;
+        z = (end ?? z) + tol;
+        continue;
+      }
+      if (m(next) < 0) {
+        const end = findBoundary(m, z, 1, { maxTravel: hi - lo + 1, tolerance: tol }) ?? z;
+        out.push([start, end]);
+        start = null;
+        z = end + tol;
+        continue;
+      }
+      z = next;
+    } else {
+      z += Math.max(-v, tol);
+    }
+  }
+  if (start !== null) out.push([start, hi]);
+  return out;
+}
+
+function subtractBands(
+  intervals: FitWindowInterval[],
+  bands: ColumnModel['bands'],
+): FitWindowInterval[] {
+  let current = intervals;
+  for (const band of bands) {
+    const next: FitWindowInterval[] = [];
+    for (const iv of current) {
+      if (band.to <= iv.lowMm || band.from >= iv.highMm) {
+        next.push(iv);
+        continue;
+      }
+      if (band.from > iv.lowMm) next.push({ ...iv, highMm: band.from, highBoundBy: band.bound });
+      if (band.to < iv.highMm) next.push({ ...iv, lowMm: band.to, lowBoundBy: band.bound });
+    }
+    current = next;
+  }
+  return current;
+}
+
+export interface WindowContext {
+  spec: FitSpec;
+  settings: FitSettings;
+  tiltDeg: number;
+  zMin: number;
+  zMax: number;
+}
+
+/** One column of the window. `warm` carries each monotone constraint's last bound between columns. */
+export function windowColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, number> = new Map()): FitWindowColumn {
+  return columnWithModel(ctx, setbackMm, warm).column;
+}
+
+function columnWithModel(ctx: WindowContext, setbackMm: number, warm: Map<string, number>): { column: FitWindowColumn; model: ColumnModel } {
+  const column = solveColumn(ctx, setbackMm, warm, buildColumn(ctx.spec, ctx.settings, placeEngine(ctx.spec, { setbackMm, heightMm: 0, tiltDeg: ctx.tiltDeg })));
+  return column;
+}
+
+function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, number>, model: ColumnModel): { column: FitWindowColumn; model: ColumnModel } {
+  const { spec, zMin, zMax } = ctx;
+  const blocked = (bound: WindowBound): { column: FitWindowColumn; model: ColumnModel } => ({ model, column: {
+    setbackMm,
+    feasible: false,
+    lowMm: null,
+    highMm: null,
+    lowBoundBy: null,
+    highBoundBy: null,
+    intervals: [],
+    blockedBy: bound,
+  } });
+  for (const c of model.constant) if (c.margin < 0) return blocked(c.bound);
+  let low = zMin;
+  let lowBy = WINDOW_RANGE;
+  let high = zMax;
+  let highBy = WINDOW_RANGE;
+  const general: Constraint[] = [];
+  for (const c of model.constraints) {
+    if (c.trend === 'any') {
+      general.push(c);
+      continue;
+    }
+    const key = `${c.bound.checkId}|${c.bound.against}`;
+    const z0 = Math.min(zMax, Math.max(zMin, warm.get(key) ?? spec.placement.heightMm));
+    const b = monotoneBound(c, z0, zMin, zMax);
+    if (Number.isFinite(b)) warm.set(key, b);
+    if (c.trend === 'rises' && b > low) {
+      low = b;
+      lowBy = c.bound;
+    }
+    if (c.trend === 'falls' && b < high) {
+      high = b;
+      highBy = c.bound;
+    }
+  }
+  if (low > high) return blocked(low > zMax ? lowBy : high < zMin ? highBy : lowBy);
+  let intervals: FitWindowInterval[] = [{ lowMm: low, highMm: high, lowBoundBy: lowBy, highBoundBy: highBy }];
+  let emptiedBy: WindowBound | null = null;
+  for (const c of general) {
+    const next: FitWindowInterval[] = [];
+    for (const iv of intervals) {
+      for (const [a, b] of passingIntervals(c.margin, iv.lowMm, iv.highMm)) {
+        next.push({
+          lowMm: a,
+          highMm: b,
+          lowBoundBy: a > iv.lowMm + 1e-3 ? c.bound : iv.lowBoundBy,
+          highBoundBy: b < iv.highMm - 1e-3 ? c.bound : iv.highBoundBy,
+        });
+      }
+    }
+    if (next.length === 0 && intervals.length > 0) emptiedBy = c.bound;
+    intervals = next;
+  }
+  intervals = subtractBands(intervals, model.bands).sort((a, b) => b.highMm - b.lowMm - (a.highMm - a.lowMm));
+  if (intervals.length === 0) return blocked(emptiedBy ?? model.bands[0]?.bound ?? lowBy);
+  const w = intervals[0];
+  return {
+    model,
+    column: { setbackMm, feasible: true, lowMm: w.lowMm, highMm: w.highMm, lowBoundBy: w.lowBoundBy, highBoundBy: w.highBoundBy, intervals, blockedBy: null },
+  };
+}
+
+/** Smallest margin over every envelope constraint at a height (the best-placement objective). */
+function scoreAt(model: ColumnModel, z: number): { score: number; by: WindowBound } {
+  let score = Infinity;
+  let by = WINDOW_RANGE;
+  for (const c of model.constant) if (c.margin < score) ({ margin: score, bound: by } = c);
+  for (const c of model.constraints) {
+    const m = c.margin(z);
+    if (m < score) {
+      score = m;
+      by = c.bound;
+    }
+  }
+  for (const c of model.widthMargins(z)) if (c.margin < score) ({ margin: score, bound: by } = c);
+  return { score, by };
+}
+
+function maximiseOnInterval(model: ColumnModel, lo: number, hi: number): { z: number; score: number; by: WindowBound } {
+  // Golden-section search: the objective is a minimum of rising and falling margins, unimodal in practice;
+  // the ends and the middle are kept as fall-backs.
+  const g = (Math.sqrt(5) - 1) / 2;
+  let a = lo;
+  let b = hi;
+  let c = b - g * (b - a);
+  let d = a + g * (b - a);
+  let fc = scoreAt(model, c).score;
+  let fd = scoreAt(model, d).score;
+  for (let i = 0; i < 40 && b - a > 1e-3; i++) {
+    if (fc >= fd) {
+      b = d;
+      d = c;
+      fd = fc;
+      c = b - g * (b - a);
+      fc = scoreAt(model, c).score;
+    } else {
+      a = c;
+      c = d;
+      fc = fd;
+      d = a + g * (b - a);
+      fd = scoreAt(model, d).score;
+    }
+  }
+  let best = { z: (a + b) / 2, ...scoreAt(model, (a + b) / 2) };
+  for (const z of [lo, hi, (lo + hi) / 2]) {
+    const s = scoreAt(model, z);
+    if (s.score > best.score) best = { z, ...s };
+  }
+  return best;
+}
+
+/** Margins of the envelope checks at a placement, from the check functions themselves. */
+export function envelopeMargins(spec: FitSpec, settings: FitSettings, placement: Placement): WindowMargin[] {
+  const placed = { ...spec, placement };
+  return ENVELOPE_CHECKS.map((check) => check.run({ spec: placed, settings }))
+    .filter((f) => f.margin !== null)
+    .map((f) => ({ checkId: f.checkId, against: f.against ?? '', marginMm: f.margin as number, status: f.status }));
+}
+
+export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, settingsOverrides: Partial<FitSettings> = {}): FitWindow {
+  const settings = resolveFitSettings(settingsOverrides);
+  const tiltDeg = options.tiltDeg ?? settings.defaultTiltDeg;
+  const stepMm = options.stepMm ?? 5;
+  const from = options.setbackFromMm ?? spec.placement.setbackMm - 150;
+  const to = options.setbackToMm ?? spec.placement.setbackMm + 150;
+  const ctx: WindowContext = { spec, settings, tiltDeg, zMin: options.zMinMm ?? 0, zMax: options.zMaxMm ?? 2000 };
+  const columns: FitWindowColumn[] = [];
+  const models: ColumnModel[] = [];
+  const warm = new Map<string, number>();
+  const n = Math.max(0, Math.floor((to - from) / stepMm + 1e-9));
+  for (let i = 0; i <= n; i++) {
+    const { column, model } = columnWithModel(ctx, from + i * stepMm, warm);
+    columns.push(column);
+    models.push(model);
+  }
+
+  // Best placement: score the middle of each column's intervals, refine the most promising few.
+  const scored: Array<{ setbackMm: number; lo: number; hi: number; model: ColumnModel; score: number }> = [];
+  for (let i = 0; i < columns.length; i++) {
+    const col = columns[i];
+    if (!col.feasible) continue;
+    const model = models[i];
+    for (const iv of col.intervals) {
+      scored.push({ setbackMm: col.setbackMm, lo: iv.lowMm, hi: iv.highMm, model, score: scoreAt(model, (iv.lowMm + iv.highMm) / 2).score });
+    }
+  }
+  scored.sort((a, b) => b.score - a.score);
+  let best: BestPlacement | null = null;
+  let bestScore = -Infinity;
+  for (const cand of scored.slice(0, 5)) {
+    const r = maximiseOnInterval(cand.model, cand.lo, cand.hi);
+    if (r.score > bestScore) {
+      bestScore = r.score;
+      const placement = { setbackMm: cand.setbackMm, heightMm: Math.round(r.z * 10) / 10, tiltDeg };
+      best = { placement, smallestMarginMm: r.score, limitedBy: r.by, margins: [] };
+    }
+  }
+  if (best) {
+    // Rounded to 0.1 mm for the shop floor; keep it inside the window it came from.
+    best.margins = envelopeMargins(spec, settings, best.placement);
+    const smallest = best.margins.reduce((m, x) => (x.marginMm < m.marginMm ? x : m), best.margins[0]);
+    if (smallest) {
+      best.smallestMarginMm = smallest.marginMm;
+      best.limitedBy = { checkId: smallest.checkId, against: smallest.against };
+    }
+  }
+  const notChecked = ENVELOPE_CHECKS.map((c) => c.run({ spec, settings }))
+    .filter((f) => f.status === 'unknown')
+    .map((f) => f.checkId);
+  return { tiltDeg, stepMm, columns, best, notChecked };
+}
+

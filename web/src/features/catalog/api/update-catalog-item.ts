@@ -1,0 +1,23 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { CatalogItem, CatalogItemInput, CatalogKind } from '../types';
+import { catalogKeys } from './catalog-keys';
+
+export type UpdateCatalogItemArgs = { kind: CatalogKind; id: string; changes: Partial<CatalogItemInput> };
+
+export async function updateCatalogItem({ kind, id, changes }: UpdateCatalogItemArgs): Promise<CatalogItem> {
+  const { data } = await apiClient.patch<CatalogItem>(`/catalog/${kind}/${encodeURIComponent(id)}`, changes, { skipErrorNotification: true });
+  return data;
+}
+
+export function useUpdateCatalogItem({ onSuccess }: { onSuccess?: (item: CatalogItem) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateCatalogItem,
+    onSuccess: (item, { kind }) => {
+      queryClient.setQueryData(catalogKeys.detail(kind, item.id), item);
+      void queryClient.invalidateQueries({ queryKey: catalogKeys.lists(kind) });
+      onSuccess?.(item);
+    },
+  });
+}

@@ -1,0 +1,148 @@
+import { compareFitReports as diffReports, type FindingDelta } from '@swapwright/shared';
+import { Alert, Button, Flex, Table, Tag, Typography } from 'antd';
+import type { ColumnsType } from 'antd/es/table';
+import { useMemo, useState } from 'react';
+import { useUnits } from '@/hooks/use-units';
+import { formatDate } from '@/lib/table';
+import { useFitReport } from '../api/get-fit-report';
+import { useFitReports } from '../api/get-fit-reports';
+import { summaryOf, type FitReportListItem, type FitSummary } from '../types';
+import { CheckStatusTag } from './check-status-tag';
+
+export type ReportHistoryProps = {
+  projectId: string;
+  currentId?: string;
+  onOpen: (id: string) => void;
+};
+
+function formatTime(iso: string): string {
+  const d = new Date(iso);
+  return Number.isNaN(d.getTime()) ? '—' : `${formatDate(iso)} ${d.toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit' })}`;
+}
+
+export function SummaryTags({ summary }: { summary?: FitSummary }) {
+  if (!summary) return <>—</>;
+  return (
+    <Flex gap={4} wrap>
+      {(summary.fails ?? 0) > 0 && <Tag color="red">{summary.fails} blocked</Tag>}
+      {(summary.tight ?? 0) > 0 && <Tag color="gold">{summary.tight} close</Tag>}
+      {(summary.unknown ?? 0) > 0 && <Tag>{summary.unknown} need input</Tag>}
+      <Tag color="green">{summary.ok ?? 0} clear</Tag>
+    </Flex>
+  );
+}
+
+const changeWords: Record<FindingDelta['change'], string> = {
+  improved: 'Better',
+  worse: 'Worse',
+  same: 'Same',
+  added: 'New check',
+  removed: 'Dropped',
+};
+
+function ReportComparison({ a, b }: { a: string; b: string }) {
+  const units = useUnits();
+  const ra = useFitReport(a);
+  const rb = useFitReport(b);
+  const deltas = useMemo(() => (ra.data && rb.data ? diffReports(ra.data.results, rb.data.results) : null), [ra.data, rb.data]);
+  if (ra.isError || rb.isError) return <Alert type="error" title="One of the two reports could not be loaded." />;
+  if (!deltas) return <Typography.Text type="secondary">Loading the two reports…</Typography.Text>;
+  const changed = deltas.filter((d) => d.change !== 'same');
+  const columns: ColumnsType<FindingDelta> = [
+    { title: 'Check', dataIndex: 'title', key: 'title' },
+    { title: 'Older', key: 'before', render: (_, d) => (d.before ? <CheckStatusTag status={d.before.status} /> : '—') },
+    { title: 'Newer', key: 'after', render: (_, d) => (d.after ? <CheckStatusTag status={d.after.status} /> : '—') },
+    {
+      title: 'Margin change',
+      key: 'delta',
+      align: 'right',
+      render: (_, d) => (d.marginDelta === null ? '—' : `${d.marginDelta >= 0 ? '+' : '−'}${units.formatLength(Math.abs(d.marginDelta))}`),
+    },
+    {
+      title: 'Result',
+      key: 'change',
+      render: (_, d) => <Tag color={d.change === 'improved' ? 'green' : d.change === 'worse' ? 'red' : undefined}>{changeWords[d.change]}</Tag>,
+    },
+  ];
+  return (
+    <div data-testid="report-comparison">
+      <Typography.Paragraph style={{ marginBottom: 8 }}>
+        {changed.length === 0 ? 'The two reports agree on every check.' : `${changed.length} of ${deltas.length} checks changed between the two reports.`}
+      </Typography.Paragraph>
+      {changed.length > 0 && (
+        <Table size="small" rowKey="checkId" columns={columns} dataSource={changed} pagination={false} aria-label="Changes between the two reports" />
+      )}
+      <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+        Margin changes are shown in length; for checks in other units read the figures on each report.
+      </Typography.Text>
+    </div>
+  );
+}
+
+/** Stored reports of the project, with a side-by-side comparison of any two. */
+export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryProps) {
+  const reports = useFitReports(projectId);
+  const [picked, setPicked] = useState<string[]>([]);
+  const [comparing, setComparing] = useState<[string, string] | null>(null);
+  const units = useUnits();
+
+  const columns: ColumnsType<FitReportListItem> = [
+    {
+      title: 'Run',
+      key: 'createdAt',
+      render: (_, r) => (
+        <Flex gap={6} align="center">
+          <Typography.Link onClick={() => onOpen(r.id)}>{formatTime(r.createdAt)}</Typography.Link>
+          {r.id === currentId && <Tag color="blue">Showing</Tag>}
+        </Flex>
+      ),
+    },
+    { title: 'By', key: 'by', render: (_, r) => r.createdBy?.name ?? '—', responsive: ['md'] },
+    {
+      title: 'Placement',
+      key: 'placement',
+      responsive: ['lg'],
+      render: (_, r) =>
+        r.placement ? `${units.formatLength(r.placement.setbackMm)} back · ${units.formatLength(r.placement.heightMm)} up · ${r.placement.tiltDeg.toFixed(1)}°` : '—',
+    },
+    { title: 'Result', key: 'summary', render: (_, r) => <SummaryTags summary={summaryOf(r)} /> },
+  ];
+
+  const items = reports.data ?? [];
+  return (
+    <Flex vertical gap={12} data-testid="report-history">
+      <Table<FitReportListItem>
+        size="small"
+        rowKey="id"
+        loading={reports.isPending}
+        columns={columns}
+        dataSource={items}
+        pagination={items.length > 10 ? { pageSize: 10 } : false}
+        aria-label="Fit report history"
+        locale={{ emptyText: 'No stored reports yet.' }}
+        rowSelection={{
+          selectedRowKeys: picked,
+          onChange: (keys) => setPicked((keys as string[]).slice(-2)),
+          getCheckboxProps: (r) => ({ 'aria-label': `Pick the report of ${formatTime(r.createdAt)} to compare` }),
+          hideSelectAll: true,
+        }}
+      />
+      <Flex gap={8} align="center" className="fit-control">
+        <Button disabled={picked.length !== 2} onClick={() => setComparing([picked[0], picked[1]])}>
+          Compare the two picked
+        </Button>
+        <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+          Tick two reports to see what changed between them.
+        </Typography.Text>
+      </Flex>
+      {comparing && (() => {
+        const byDate = [...comparing].sort((x, y) => {
+          const dx = items.find((i) => i.id === x)?.createdAt ?? '';
+          const dy = items.find((i) => i.id === y)?.createdAt ?? '';
+          return dx.localeCompare(dy);
+        });
+        return <ReportComparison a={byDate[0]} b={byDate[1]} />;
+      })()}
+    </Flex>
+  );
+}
