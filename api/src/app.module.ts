@@ -4,6 +4,7 @@ import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
+import { CatalogModule } from './catalog/catalog.module';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
@@ -12,6 +13,7 @@ import { createValidationPipe } from './common/pipes/validation.pipe';
 import { AppConfigService } from './config/app-config';
 import { validateEnv } from './config/env.validation';
 import { CustomersModule } from './customers/customers.module';
+import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { buildDataSourceOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
@@ -54,6 +56,8 @@ import { UsersModule } from './users/users.module';
     InvitationsModule,
     CustomersModule,
     ProjectsModule,
+    CatalogModule,
+    FitReportsModule,
     HealthModule,
   ],
   providers: [

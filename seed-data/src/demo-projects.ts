@@ -1,3 +1,4 @@
+import { DEMO_CATALOG_IDS } from './catalog/demo-catalog-ids';
 import { DEMO_CUSTOMER_IDS } from './demo-customers';
 
 export type DemoProjectStatus = 'intake' | 'measuring' | 'checking' | 'quoting' | 'approved' | 'building' | 'done';
@@ -9,7 +10,7 @@ export interface DemoProject {
   title: string;
   status: DemoProjectStatus;
   vehicleDescription: string;
-  /** Catalog references: filled in once the demo catalog has fixed ids of its own. */
+  /** Catalog references (see catalog/demo-catalog-ids.ts). */
   chassisModelId: string | null;
   engineProfileId: string | null;
   transmissionId: string | null;
@@ -29,11 +30,12 @@ export const DEMO_PROJECTS: DemoProject[] = [
     title: 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap',
     status: 'measuring',
     vehicleDescription: 'Harlan Ridgeback 1978 half-ton pickup, long bed, original inline six removed; frame straight, light surface rust.',
-    chassisModelId: null,
-    engineProfileId: null,
-    transmissionId: null,
+    chassisModelId: DEMO_CATALOG_IDS.chassis.ridgeback78,
+    engineProfileId: DEMO_CATALOG_IDS.engines.kestrel53,
+    transmissionId: DEMO_CATALOG_IDS.transmissions.marlow45,
     goals: { use: 'street', targetPowerKw: 260, revLimitRpm: 6000, budgetCents: 1_450_000 },
-    placement: { setbackMm: 540, heightMm: 610, tiltDeg: 3 },
+    // The placement of the shared demo fit spec: here the stock front-sump pan meets the crossmember.
+    placement: { setbackMm: 660, heightMm: 500, tiltDeg: 3 },
   },
   {
     id: DEMO_PROJECT_IDS.stag,
@@ -41,9 +43,9 @@ export const DEMO_PROJECTS: DemoProject[] = [
     title: 'Pellam Stag 1984 4x4: Kestrel 6.2 V8 for towing',
     status: 'intake',
     vehicleDescription: 'Pellam Stag 1984 three-quarter-ton 4x4, tow package, leaf springs front and rear.',
-    chassisModelId: null,
-    engineProfileId: null,
-    transmissionId: null,
+    chassisModelId: DEMO_CATALOG_IDS.chassis.stag84,
+    engineProfileId: DEMO_CATALOG_IDS.engines.kestrel62,
+    transmissionId: DEMO_CATALOG_IDS.transmissions.marlow65,
     goals: { use: 'tow', targetPowerKw: 300, revLimitRpm: 5800, budgetCents: 2_200_000 },
     placement: null,
   },

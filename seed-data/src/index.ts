@@ -2,3 +2,4 @@ export const SEED_VERSION = 1;
 export * from './demo-shop';
 export * from './demo-customers';
 export * from './demo-projects';
+export * from './catalog';

@@ -80,11 +80,12 @@ export class CatalogService {
     const row = await this.get(kind, user, id);
     const { spec: changes, extras } = this.split(definition, plain(body));
     if (changes.name !== undefined && String(changes.name).trim() === '') throw CatalogErrors.nameMissing();
-    const spec = { ...(row.spec as Record<string, unknown>), ...changes, id: row.id };
-    spec.name = String(spec.name).trim();
+    const merged: Record<string, unknown> = { ...(row.spec as Record<string, unknown>), ...changes, id: row.id };
+    const name = String(merged.name).trim();
+    const spec = { ...merged, name };
     await this.scoped(kind).repository.update(
       { id: row.id, shopId: user.shopId },
-      { name: spec.name as string, spec, ...definition.columns(spec, extras) } as object,
+      { name, spec, ...definition.columns(spec, extras) } as object,
     );
     return this.get(kind, user, id);
   }

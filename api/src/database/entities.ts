@@ -1,6 +1,10 @@
 import { RefreshToken } from '../auth/refresh-token.entity';
+import { CATALOG_ENTITIES } from '../catalog/catalog-item.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { Customer } from '../customers/customer.entity';
+import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
+import { ProjectFitSelection } from '../fit-reports/project-fit-selection.entity';
+import { ShopFitSettings } from '../fit-reports/shop-fit-settings.entity';
 import { Invitation } from '../invitations/invitation.entity';
 import { Membership } from '../memberships/membership.entity';
 import { Project } from '../projects/project.entity';
@@ -8,4 +12,5 @@ import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
-export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project];
+export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project,
+  ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord];

@@ -5,6 +5,8 @@ import { CreateMemberships1796100003000 } from './migrations/1796100003000-creat
 import { CreateInvitations1796100003500 } from './migrations/1796100003500-create-invitations';
 import { CreateAuthTokens1796100004000 } from './migrations/1796100004000-create-auth-tokens';
 import { CreateProjects1796100005000 } from './migrations/1796100005000-create-projects';
+import { CreateCatalog1796100010000 } from './migrations/1796100010000-create-catalog';
+import { CreateFitReports1796100011000 } from './migrations/1796100011000-create-fit-reports';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -15,4 +17,6 @@ export const MIGRATIONS = [
   CreateInvitations1796100003500,
   CreateAuthTokens1796100004000,
   CreateProjects1796100005000,
+  CreateCatalog1796100010000,
+  CreateFitReports1796100011000,
 ];

@@ -8,6 +8,6 @@ export const FitReportErrors = {
   },
   badSelection: (details: string[]) =>
     new AppError(400, 'fit_selection_invalid', details[0] ?? 'The fit selections refer to parts that are not in your catalog.', details),
-  compareSameProjectOnly: () =>
+  compareSameReport: () =>
     new AppError(400, 'fit_reports_compare_invalid', 'Give two different report ids as a and b.'),
 };

@@ -1,10 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
+import { computeFitWindow, resolveFitSettings } from '@swapwright/shared';
 import type {
   BellhousingAdapterSpec,
   ChassisSpec,
   EngineControllerSpec,
   EngineSpec,
+  FitSettings,
   FitSpec,
   MountAdapterSpec,
   OilPanSpec,
@@ -45,7 +47,7 @@ export class FitSpecBuilderService {
     @InjectRepository(ProjectFitSelection) private readonly selections: Repository<ProjectFitSelection>,
   ) {}
 
-  async build(user: Shop, project: Project): Promise<BuiltFitSpec> {
+  async build(user: Shop, project: Project, settingsOverrides: Partial<FitSettings> = {}): Promise<BuiltFitSpec> {
     const notes: string[] = [];
     const [engine, chassisRow, transmission] = await Promise.all([
       this.catalog.findSpec<EngineSpec>('engines', user, project.engineProfileId),
@@ -97,7 +99,7 @@ export class FitSpecBuilderService {
       goals: goals ?? ({} as SwapGoals),
       candidates: await this.candidates(user, engine),
     };
-    const placed = this.placement(project, partial, chassisRow, needed);
+    const placed = this.placement(project, partial, chassisRow, settingsOverrides, needed);
     if (needed.length > 0 || !goals || !placed) throw FitReportErrors.notReady(needed);
     return { spec: { ...partial, placement: placed.placement }, placementSource: placed.source, notes };
   }
@@ -157,11 +159,15 @@ export class FitSpecBuilderService {
     };
   }
 
-  /** The project's placement; else the fit engine's proposal; else where the chassis's stock engine sat. */
+  /**
+   * The project's placement; else the fit window's best placement, searched around where the chassis's stock
+   * engine sat (or across the engine bay when that is unknown); else that stock placement itself.
+   */
   private placement(
     project: Project,
     spec: Omit<FitSpec, 'placement'>,
     chassisRow: CatalogChassis,
+    settingsOverrides: Partial<FitSettings>,
     needed: string[],
   ): { placement: Placement; source: PlacementSource } | null {
     if (project.placementSetbackMm !== null && project.placementHeightMm !== null && project.placementTiltDeg !== null) {
@@ -170,19 +176,31 @@ export class FitSpecBuilderService {
         source: 'project',
       };
     }
-    const proposed = proposePlacement(spec);
+    const stock = chassisDefaultPlacement(chassisRow);
+    const proposed = proposePlacement(spec, stock, settingsOverrides);
     if (proposed) return { placement: proposed, source: 'proposed' };
-    const fallback = chassisDefaultPlacement(chassisRow);
-    if (fallback) return { placement: fallback, source: 'chassis-default' };
-    needed.push("set the engine's placement on the project (the chassis has no default placement)");
+    if (stock) return { placement: stock, source: 'chassis-default' };
+    needed.push("set the engine's placement on the project (no placement fits and the chassis has no stock placement)");
     return null;
   }
 }
 
-/**
- * The fit window's best placement for this spec. The shared fit window is not available yet, so this
- * proposes nothing and the chassis default is used; once shared exports it, call it here.
- */
-export function proposePlacement(_spec: Omit<FitSpec, 'placement'>): Placement | null {
-  return null;
+/** Where the search runs when the chassis has no stock placement: the usual engine bay, front axle to firewall. */
+const OPEN_SEARCH = { setbackFromMm: 0, setbackToMm: 1500, stepMm: 10 };
+
+/** The fit window's best placement (every clearance check passing with the largest margin), or null. */
+export function proposePlacement(
+  spec: Omit<FitSpec, 'placement'>,
+  start: Placement | null,
+  settingsOverrides: Partial<FitSettings>,
+): Placement | null {
+  const tiltDeg = start?.tiltDeg ?? resolveFitSettings(settingsOverrides).defaultTiltDeg;
+  const placement = start ?? { setbackMm: (OPEN_SEARCH.setbackFromMm + OPEN_SEARCH.setbackToMm) / 2, heightMm: 500, tiltDeg };
+  try {
+    const window = computeFitWindow({ ...spec, placement }, start ? { tiltDeg } : { ...OPEN_SEARCH, tiltDeg }, settingsOverrides);
+    return window.best?.placement ?? null;
+  } catch {
+    // A spec the window search cannot handle still gets a report at the stock placement.
+    return null;
+  }
 }

@@ -46,7 +46,7 @@ export class Project {
   @Column({ type: 'varchar', length: 16, default: 'street' })
   goalUse: ProjectUse;
 
-  @Column({ type: 'int', nullable: true })
+  @Column({ type: 'decimal', precision: 6, scale: 1, nullable: true, transformer: decimalTransformer })
   goalTargetPowerKw: number | null;
 
   @Column({ type: 'int', nullable: true })

@@ -189,6 +189,12 @@ function buildColumn(spec: FitSpec, settings: FitSettings, base: PlacedEngine): 
   return { constant, constraints, bands, widthMargins };
 }
 
+function rank(e: { c: Constraint; i: number }, lastLow: number | undefined, lastHigh: number | undefined): number {
+  if (e.c.linear) return 0;
+  if (e.i === lastLow || e.i === lastHigh) return 1;
+  return 2;
+}
+
 /** Boundary of a monotone constraint: the lowest passing z for `rises`, the highest for `falls`; ±Infinity when it never binds in range. */
 function monotoneBound(c: Constraint, z0: number, zMin: number, zMax: number): number {
   const rises = c.trend === 'rises';
@@ -301,22 +307,32 @@ function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, nu
   let high = zMax;
   let highBy = WINDOW_RANGE;
   const general: Constraint[] = [];
-  for (const c of model.constraints) {
+  // Exact (linear) bounds first, then the constraint that bound the previous column, then the rest: a
+  // monotone margin already ≥ 0 at the current low (high) cannot raise (lower) it, which costs one evaluation.
+  const lastLow = warm.get('|low');
+  const lastHigh = warm.get('|high');
+  const order = model.constraints
+    .map((c, i) => ({ c, i, key: `${c.bound.checkId}|${c.bound.against}` }))
+    .sort((a, b) => rank(a, lastLow, lastHigh) - rank(b, lastLow, lastHigh) || a.i - b.i);
+  for (const { c, key, i } of order) {
     if (c.trend === 'any') {
       general.push(c);
       continue;
     }
-    const key = `${c.bound.checkId}|${c.bound.against}`;
+    if (c.trend === 'rises' && !c.linear && low > zMin && c.margin(low) >= 0) continue;
+    if (c.trend === 'falls' && !c.linear && high < zMax && c.margin(high) >= 0) continue;
     const z0 = Math.min(zMax, Math.max(zMin, warm.get(key) ?? spec.placement.heightMm));
     const b = monotoneBound(c, z0, zMin, zMax);
     if (Number.isFinite(b)) warm.set(key, b);
     if (c.trend === 'rises' && b > low) {
       low = b;
       lowBy = c.bound;
+      warm.set('|low', i);
     }
     if (c.trend === 'falls' && b < high) {
       high = b;
       highBy = c.bound;
+      warm.set('|high', i);
     }
   }
   if (low > high) return blocked(low > zMax ? lowBy : high < zMin ? highBy : lowBy);
@@ -325,6 +341,11 @@ function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, nu
   for (const c of general) {
     const next: FitWindowInterval[] = [];
     for (const iv of intervals) {
+      // 1-Lipschitz: a margin of at least the interval's length at its low end holds over all of it.
+      if (c.margin(iv.lowMm) >= iv.highMm - iv.lowMm) {
+        next.push(iv);
+        continue;
+      }
       for (const [a, b] of passingIntervals(c.margin, iv.lowMm, iv.highMm)) {
         next.push({
           lowMm: a,
@@ -372,7 +393,7 @@ function maximiseOnInterval(model: ColumnModel, lo: number, hi: number): { z: nu
   let d = a + g * (b - a);
   let fc = scoreAt(model, c).score;
   let fd = scoreAt(model, d).score;
-  for (let i = 0; i < 40 && b - a > 1e-3; i++) {
+  for (let i = 0; i < 30 && b - a > 1e-2; i++) {
     if (fc >= fd) {
       b = d;
       d = c;
@@ -420,22 +441,25 @@ export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, 
     models.push(model);
   }
 
-  // Best placement: score the middle of each column's intervals, refine the most promising few.
-  const scored: Array<{ setbackMm: number; lo: number; hi: number; model: ColumnModel; score: number }> = [];
+  // Best placement: score the middle of every passing interval once, then refine the most promising few
+  // by golden-section search on the smallest margin (ties: the wider interval, then the nearer setback).
+  const candidates: Array<{ setbackMm: number; lo: number; hi: number; model: ColumnModel; mid: number }> = [];
   for (let i = 0; i < columns.length; i++) {
     const col = columns[i];
     if (!col.feasible) continue;
-    const model = models[i];
     for (const iv of col.intervals) {
-      scored.push({ setbackMm: col.setbackMm, lo: iv.lowMm, hi: iv.highMm, model, score: scoreAt(model, (iv.lowMm + iv.highMm) / 2).score });
+      candidates.push({ setbackMm: col.setbackMm, lo: iv.lowMm, hi: iv.highMm, model: models[i], mid: scoreAt(models[i], (iv.lowMm + iv.highMm) / 2).score });
     }
   }
-  scored.sort((a, b) => b.score - a.score);
+  const here = spec.placement.setbackMm;
+  candidates.sort(
+    (a, b) => b.mid - a.mid || b.hi - b.lo - (a.hi - a.lo) || Math.abs(a.setbackMm - here) - Math.abs(b.setbackMm - here),
+  );
   let best: BestPlacement | null = null;
   let bestScore = -Infinity;
-  for (const cand of scored.slice(0, 5)) {
+  for (const cand of candidates.slice(0, 6)) {
     const r = maximiseOnInterval(cand.model, cand.lo, cand.hi);
-    if (r.score > bestScore) {
+    if (r.score > bestScore + 1e-9) {
       bestScore = r.score;
       const placement = { setbackMm: cand.setbackMm, heightMm: Math.round(r.z * 10) / 10, tiltDeg };
       best = { placement, smallestMarginMm: r.score, limitedBy: r.by, margins: [] };

@@ -27,7 +27,7 @@ const navDefinitions: readonly NavDefinition[] = [
   { key: 'customers', label: 'Customers', to: paths.customers, match: [paths.customers], roles: ['owner', 'estimator'], group: 'work' },
   { key: 'work-orders', label: 'Work orders', to: paths.workOrders, match: [paths.workOrders], roles: ['owner', 'fabricator'], group: 'work' },
   { key: 'parts-counter', label: 'Parts counter', to: paths.partsCounter, match: [paths.partsCounter], roles: ['owner', 'counter'], group: 'work' },
-  { key: 'catalog', label: 'Catalog', to: paths.catalog, match: [paths.catalog], roles: ['owner', 'counter'], group: 'work' },
+  { key: 'catalog', label: 'Catalog', to: paths.catalog, match: [paths.catalog], roles: ['owner', 'estimator', 'fabricator', 'counter'], group: 'work' },
   { key: 'members', label: 'Members', to: paths.members, match: [paths.members], roles: ['owner'], group: 'shop' },
   { key: 'shop-settings', label: 'Shop settings', to: paths.shopSettings, match: [paths.shopSettings], roles: ['owner'], group: 'shop' },
 ];
@@ -54,14 +54,19 @@ export function activeNavKey(items: NavItem[], pathname: string): string | undef
 export const sectionRoles = {
   projects: ['owner', 'estimator', 'fabricator', 'counter'],
   projectDetail: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
+  projectFit: ['owner', 'estimator', 'fabricator', 'counter'],
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
   workOrders: ['owner', 'fabricator'],
   partsCounter: ['owner', 'counter'],
-  catalog: ['owner', 'counter'],
+  catalog: ['owner', 'estimator', 'fabricator', 'counter'],
   members: ['owner'],
   shopSettings: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';
 export const canEditProjects = (role: Role): boolean => role === 'owner' || role === 'estimator';
+/** Run fit checks, change fit selections and save the placement. */
+export const canRunFitCheck = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'fabricator';
+/** Catalog writers, as the API allows: owner, estimator and counter (the fabricator reads). */
+export const canEditCatalog = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'counter';

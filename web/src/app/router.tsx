@@ -27,7 +27,8 @@ const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'Me
 const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings-page'), 'ShopSettingsPage');
 const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'WorkOrdersPage');
 const PartsCounterPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'PartsCounterPage');
-const CatalogPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'CatalogPage');
+const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
+const ProjectFitPage = lazyNamed(() => import('./routes/fit/project-fit-page'), 'ProjectFitPage');
 const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');
 const RouteErrorBoundary = lazy(() =>
   import('@/components/route-error-boundary').then((m) => ({ default: m.RouteErrorBoundary })),
@@ -96,6 +97,7 @@ export const routes: RouteObject[] = [
           { index: true, element: <HomePage />, errorElement: <SectionError section="Home" /> },
           section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage, { customer: paths.myProjects }),
           section(paths.projectDetail, sectionRoles.projectDetail, 'the project', ProjectDetailPage),
+          section(paths.projectFit, sectionRoles.projectFit, 'the fit check', ProjectFitPage),
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
           section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),

@@ -8,6 +8,7 @@ export const paths = {
   home: '/',
   projects: '/projects',
   projectDetail: '/projects/:projectId',
+  projectFit: '/projects/:projectId/fit',
   myProjects: '/my-projects',
   customers: '/customers',
   workOrders: '/work-orders',
@@ -21,6 +22,9 @@ export type AppPath = (typeof paths)[keyof typeof paths];
 
 export const toProjectDetail = (projectId: string): string =>
   paths.projectDetail.replace(':projectId', encodeURIComponent(projectId));
+
+export const toProjectFit = (projectId: string): string =>
+  paths.projectFit.replace(':projectId', encodeURIComponent(projectId));
 
 export const toSignIn = (next?: string): string =>
   next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;

@@ -17,7 +17,7 @@ export class CreateProjects1796100005000 implements MigrationInterface {
         \`engineProfileId\` varchar(36) NULL,
         \`transmissionId\` varchar(36) NULL,
         \`goalUse\` varchar(16) NOT NULL DEFAULT 'street',
-        \`goalTargetPowerKw\` int NULL,
+        \`goalTargetPowerKw\` decimal(6,1) NULL,
         \`goalRevLimitRpm\` int NULL,
         \`goalBudgetCents\` bigint NULL,
         \`placementSetbackMm\` decimal(8,2) NULL,

@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { appDataSource } from '../data-source';
+import { seedCatalog } from './seed-catalog';
 import { seedDemo } from './seed-demo';
 
 async function run(): Promise<void> {
@@ -9,6 +10,8 @@ async function run(): Promise<void> {
     if (pending) throw new Error('The database has pending migrations. Run `npm run migration:run -w api` first.');
     const result = await seedDemo(appDataSource);
     console.log(result === 'loaded' ? 'Demo data loaded: Ironbark Swap Works.' : 'Demo data already present; nothing changed.');
+    const catalog = await seedCatalog(appDataSource);
+    console.log(catalog.inserted > 0 ? `Demo catalog: ${catalog.inserted} records added.` : 'Demo catalog already present.');
   } finally {
     await appDataSource.destroy();
   }

@@ -20,9 +20,9 @@ export class ProjectGoalsDto {
   @IsIn(PROJECT_USES, { message: `goals.use must be one of: ${PROJECT_USES.join(', ')}` })
   use: ProjectUse;
 
-  @ApiPropertyOptional({ type: Number, nullable: true, minimum: 1, maximum: 2000 })
+  @ApiPropertyOptional({ type: Number, nullable: true, minimum: 1, maximum: 2000, description: 'kW, one decimal' })
   @IsOptional()
-  @IsInt()
+  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'goals.targetPowerKw must be a number with at most one decimal' })
   @Min(1)
   @Max(2000)
   targetPowerKw?: number | null;

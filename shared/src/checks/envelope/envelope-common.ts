@@ -57,9 +57,10 @@ export function solvePlacementChange(
 ): number | null {
   const at = (v: number): Placement => (axis === 'setback' ? { ...placement, setbackMm: v } : { ...placement, heightMm: v });
   const start = axis === 'setback' ? placement.setbackMm : placement.heightMm;
-  const z = findBoundary((v) => margin(at(v)), start, direction, { maxTravel, tolerance: 0.01 });
+  const z = findBoundary((v) => margin(at(v)), start, direction, { maxTravel, tolerance: 1e-4 });
   if (z === null) return null;
-  return Math.ceil(Math.abs(z - start) * 10) / 10 * direction;
+  // Rounded up to 0.1 mm (never short of the need), ignoring the solver's last 0.001 mm.
+  return (Math.ceil(Math.abs(z - start) * 10 - 1e-3) / 10) * direction;
 }
 
 export function placementRemedy(axis: PlacementRemedy['axis'], changeBy: number, note: string): PlacementRemedy {

@@ -20,8 +20,16 @@ export interface WidthContact {
   railZTop: number;
 }
 
+const sortedCache = new WeakMap<readonly RailStation[], RailStation[]>();
+
+/** Stations front to rear (cached per input array; the fit window asks for them many times). */
 function sortedStations(stations: readonly RailStation[]): RailStation[] {
-  return [...stations].sort((a, b) => a.x - b.x);
+  let sorted = sortedCache.get(stations);
+  if (!sorted) {
+    sorted = [...stations].sort((a, b) => a.x - b.x);
+    sortedCache.set(stations, sorted);
+  }
+  return sorted;
 }
 
 const at = (stations: RailStation[], x: number, f: (s: RailStation) => number): number => interpolateStations(stations, (s) => s.x, f, x);

@@ -7,8 +7,9 @@ import { AppNav } from '../routes/app/app-nav';
 
 const expected: Record<Role, string[]> = {
   owner: ['Home', 'Projects', 'Customers', 'Work orders', 'Parts counter', 'Catalog', 'Members', 'Shop settings'],
-  estimator: ['Home', 'Projects', 'Customers'],
-  fabricator: ['Home', 'Projects', 'Work orders'],
+  // the catalog is readable by estimators and fabricators (they pick parts and read specs)
+  estimator: ['Home', 'Projects', 'Customers', 'Catalog'],
+  fabricator: ['Home', 'Projects', 'Work orders', 'Catalog'],
   counter: ['Home', 'Parts counter', 'Catalog'],
   customer: ['My projects'],
 };

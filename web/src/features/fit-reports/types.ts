@@ -1,22 +1,10 @@
-import type { CheckStatus, FitSettings, FitSpec, Finding, Placement } from '@swapwright/shared';
+import type { CheckStatus, FitReport as SharedFitReport, FitSettings, FitSpec, Finding, Placement } from '@swapwright/shared';
 
 /** Counts of checks by status. */
 export type FitSummary = Partial<Record<CheckStatus, number>> & { total?: number };
 
-/** What the fit engine returns for one placement (shared `runFitCheck`). */
-export type FitReport = {
-  engineVersion: string;
-  placement: Placement;
-  /** The thresholds the report was computed with. */
-  settings?: FitSettings;
-  /** Work-safety cautions for what the shortfalls lead to. */
-  safety?: string[];
-  findings: Finding[];
-  /** The checks that are `tight` or `fails`, worst first. */
-  shortfalls: Finding[];
-  summary: FitSummary;
-  caution: string;
-};
+/** What the fit engine returns for one placement (the same function runs on the server and here). */
+export type FitReport = SharedFitReport;
 
 export type FitInputsSnapshot = {
   spec: FitSpec;

@@ -23,11 +23,11 @@ function respond(config: InternalAxiosRequestConfig, status: number, data: unkno
 describe('apiClient 401 handling', () => {
   const realAdapter = apiClient.defaults.adapter;
   let seen: Seen[];
-  let onUnauthorized: ReturnType<typeof vi.fn>;
+  let onUnauthorized: ReturnType<typeof vi.fn<(next: string) => void>>;
 
   beforeEach(() => {
     seen = [];
-    onUnauthorized = vi.fn();
+    onUnauthorized = vi.fn<(next: string) => void>();
     setUnauthorizedHandler(onUnauthorized);
     tokenStorage.set({ accessToken: 'expired', refreshToken: 'refresh-old' });
   });

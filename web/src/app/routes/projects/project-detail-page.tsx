@@ -1,7 +1,7 @@
 import { Button, Col, Flex, Popconfirm, Row, Space, Card, Typography } from 'antd';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { paths, toProjectFit } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
@@ -51,22 +51,25 @@ export function ProjectDetailPage() {
         }
         subtitle={`${p.vehicleDescription} · opened ${formatDate(p.createdAt)} · last change ${formatDate(p.updatedAt)}`}
         extra={
-          canEdit && (
-            <Space>
-              <Button type="primary" onClick={() => setEditing(true)}>
-                Edit project
-              </Button>
-              <Popconfirm
-                title="Delete this project?"
-                description="Its measurements, reports and quotes go with it. This cannot be undone."
-                okText="Delete"
-                okButtonProps={{ danger: true, loading: remove.isPending }}
-                onConfirm={() => remove.mutateAsync(p.id)}
-              >
-                <Button danger>Delete</Button>
-              </Popconfirm>
-            </Space>
-          )
+          <Space>
+            {user.role !== 'customer' && <Button onClick={() => navigate(toProjectFit(p.id))}>Fit check</Button>}
+            {canEdit && (
+              <>
+                <Button type="primary" onClick={() => setEditing(true)}>
+                  Edit project
+                </Button>
+                <Popconfirm
+                  title="Delete this project?"
+                  description="Its measurements, reports and quotes go with it. This cannot be undone."
+                  okText="Delete"
+                  okButtonProps={{ danger: true, loading: remove.isPending }}
+                  onConfirm={() => remove.mutateAsync(p.id)}
+                >
+                  <Button danger>Delete</Button>
+                </Popconfirm>
+              </>
+            )}
+          </Space>
         }
       />
       <Card style={{ marginBottom: 16 }} title="Stage">

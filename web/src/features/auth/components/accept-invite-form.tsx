@@ -18,7 +18,7 @@ export function AcceptInviteForm({ token, onAccepted }: AcceptInviteFormProps) {
     >
       <FormErrorAlert
         error={accept.error}
-        messages={{ invalid_token: 'This invitation has expired or was already used. Ask the shop owner to send a new one.' }}
+        messages={{ invitation_invalid: 'This invitation has expired or was already used. Ask the shop owner to send a new one.' }}
       />
       <Form.Item label="Your name" name="name" rules={[{ required: true, whitespace: true, message: 'Enter your name' }, { max: 120 }]}>
         <Input autoComplete="name" autoFocus />

@@ -5,7 +5,7 @@ export const PASSWORD_MIN_LENGTH = 8;
 export const passwordRules: Rule[] = [
   { required: true, message: 'Choose a password' },
   { min: PASSWORD_MIN_LENGTH, message: `Use at least ${PASSWORD_MIN_LENGTH} characters` },
-  { max: 128, message: 'Use at most 128 characters' },
+  { max: 72, message: 'Use at most 72 characters' },
 ];
 
 export const emailRules: Rule[] = [

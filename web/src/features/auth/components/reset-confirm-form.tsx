@@ -28,7 +28,7 @@ export function ResetConfirmForm({ token, onDone, onRequestNew }: ResetConfirmFo
     >
       <FormErrorAlert
         error={confirm.error}
-        messages={{ invalid_token: 'This reset link has expired or was already used. Ask for a new one.' }}
+        messages={{ reset_token_invalid: 'This reset link has expired or was already used. Ask for a new one.' }}
       />
       <Form.Item label="New password" name="password" rules={passwordRules} hasFeedback>
         <Input.Password autoComplete="new-password" autoFocus />

@@ -10,7 +10,7 @@ export function withPlacement(spec: FitSpec, placement: Placement): FitSpec {
 
 /** Runs the same fit engine the API runs, here in the browser (preview only, nothing is stored). */
 export function previewFitCheck(spec: FitSpec, placement: Placement, settings?: Partial<FitSettings>): FitReport {
-  return runFitCheck(withPlacement(spec, placement), settings) as FitReport;
+  return runFitCheck(withPlacement(spec, placement), settings);
 }
 
 /** Setbacks searched either side of the saved placement. */

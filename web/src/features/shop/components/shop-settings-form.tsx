@@ -97,7 +97,7 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
                 { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
               ]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={3} step={0.25} suffix="%" aria-label="Sales tax" />
+              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={2} step={0.25} suffix="%" aria-label="Sales tax" />
             </Form.Item>
           </Col>
           <Col xs={24} sm={8}>

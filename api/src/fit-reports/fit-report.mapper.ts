@@ -1,0 +1,31 @@
+import { FitReportResponseDto, FitReportSummaryResponseDto } from './dto/fit-report-response.dto';
+import { FitReportRecord } from './fit-report-record.entity';
+
+export function mapFitReportSummary(record: FitReportRecord): FitReportSummaryResponseDto {
+  return {
+    id: record.id,
+    projectId: record.projectId,
+    createdById: record.createdById,
+    engineVersion: record.engineVersion,
+    placement: { setbackMm: record.placementSetbackMm, heightMm: record.placementHeightMm, tiltDeg: record.placementTiltDeg },
+    placementSource: record.placementSource,
+    counts: {
+      total: record.totalCount,
+      ok: record.okCount,
+      tight: record.tightCount,
+      fails: record.failsCount,
+      unknown: record.unknownCount,
+    },
+    worstStatus: record.worstStatus,
+    caution: record.results.caution,
+    createdAt: record.createdAt.toISOString(),
+  };
+}
+
+export function mapFitReport(record: FitReportRecord): FitReportResponseDto {
+  return {
+    ...mapFitReportSummary(record),
+    report: record.results as unknown as FitReportResponseDto['report'],
+    inputs: record.inputsSnapshot as unknown as FitReportResponseDto['inputs'],
+  };
+}

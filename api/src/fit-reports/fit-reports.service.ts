@@ -1,0 +1,134 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import {
+  compareFitReports,
+  runFitCheck,
+  STATUS_SEVERITY,
+  type CheckStatus,
+  type FitReport,
+  type FitReportSummary,
+  type FitSettings,
+  type FitSpec,
+} from '@swapwright/shared';
+import { randomUUID } from 'node:crypto';
+import { DataSource, In, Repository } from 'typeorm';
+import { AppError } from '../common/errors/app-error';
+import { Page, PageQueryDto, skipOf, toPage } from '../common/pagination/page-query.dto';
+import { AuthUser } from '../common/tenant/auth-user';
+import { TenantRepository } from '../common/tenant/tenant-repository';
+import { Project, ProjectStatus } from '../projects/project.entity';
+import { ProjectsService } from '../projects/projects.service';
+import { FitReportComparisonResponseDto } from './dto/fit-report-response.dto';
+import { WhatIfDto } from './dto/what-if.dto';
+import { mapFitReportSummary } from './fit-report.mapper';
+import { FitReportRecord } from './fit-report-record.entity';
+import { FitReportErrors } from './fit-reports.errors';
+import { FitSettingsService } from './fit-settings.service';
+import { FitSpecBuilderService } from './fit-spec-builder.service';
+
+/** Running a check moves a project that is still being set up on to the checking stage. */
+const BEFORE_CHECKING: ProjectStatus[] = ['intake', 'measuring'];
+
+export function worstStatusOf(summary: FitReportSummary): CheckStatus {
+  const statuses: CheckStatus[] = ['ok', 'tight', 'fails', 'unknown'];
+  return statuses
+    .filter((status) => summary[status] > 0)
+    .reduce<CheckStatus>((worst, status) => (STATUS_SEVERITY[status] > STATUS_SEVERITY[worst] ? status : worst), 'ok');
+}
+
+/** Class instances from the validation pipe to the plain JSON the engine would get from any other caller. */
+function plain<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value)) as T;
+}
+
+@Injectable()
+export class FitReportsService {
+  private readonly scoped: TenantRepository<FitReportRecord>;
+
+  constructor(
+    @InjectRepository(FitReportRecord) reports: Repository<FitReportRecord>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly projects: ProjectsService,
+    private readonly builder: FitSpecBuilderService,
+    private readonly settings: FitSettingsService,
+  ) {
+    this.scoped = new TenantRepository(reports);
+  }
+
+  async run(user: AuthUser, projectId: string): Promise<FitReportRecord> {
+    const project = await this.projects.get(user, projectId);
+    const settingsOverrides = await this.settings.overridesFor(user);
+    const built = await this.builder.build(user, project, settingsOverrides);
+    const report = runFitCheck(built.spec, settingsOverrides);
+    const record = this.scoped.repository.create({
+      id: randomUUID(),
+      shopId: user.shopId,
+      projectId: project.id,
+      createdById: user.userId,
+      engineVersion: report.engineVersion,
+      placementSetbackMm: report.placement.setbackMm,
+      placementHeightMm: report.placement.heightMm,
+      placementTiltDeg: report.placement.tiltDeg,
+      placementSource: built.placementSource,
+      inputsSnapshot: { spec: built.spec, settingsOverrides, placementSource: built.placementSource, notes: built.notes },
+      results: report,
+      totalCount: report.summary.total,
+      okCount: report.summary.ok,
+      tightCount: report.summary.tight,
+      failsCount: report.summary.fails,
+      unknownCount: report.summary.unknown,
+      worstStatus: worstStatusOf(report.summary),
+    });
+    await this.dataSource.transaction(async (manager) => {
+      await manager.insert(FitReportRecord, record);
+      await manager.update(
+        Project,
+        { id: project.id, shopId: user.shopId, status: In(BEFORE_CHECKING) },
+        { status: 'checking' as ProjectStatus },
+      );
+    });
+    return this.get(user, record.id);
+  }
+
+  async list(user: AuthUser, projectId: string, query: PageQueryDto): Promise<Page<FitReportRecord>> {
+    const project = await this.projects.get(user, projectId);
+    const [items, total] = await this.scoped
+      .query(user, 'report')
+      .andWhere('report.projectId = :projectId', { projectId: project.id })
+      .orderBy('report.createdAt', 'DESC')
+      .addOrderBy('report.id', 'DESC')
+      .skip(skipOf(query))
+      .take(query.pageSize)
+      .getManyAndCount();
+    return toPage(items, total, query);
+  }
+
+  /** One report of the caller's shop; a customer only sees reports of their own projects. */
+  async get(user: AuthUser, id: string): Promise<FitReportRecord> {
+    const record = await this.scoped.findById(user, id);
+    if (!record) throw FitReportErrors.notFound();
+    try {
+      await this.projects.get(user, record.projectId);
+    } catch (error) {
+      if (error instanceof AppError && error.getStatus() === 404) throw FitReportErrors.notFound();
+      throw error;
+    }
+    return record;
+  }
+
+  async compare(user: AuthUser, aId: string, bId: string): Promise<FitReportComparisonResponseDto> {
+    if (aId === bId) throw FitReportErrors.compareSameReport();
+    const [a, b] = await Promise.all([this.get(user, aId), this.get(user, bId)]);
+    return {
+      a: mapFitReportSummary(a),
+      b: mapFitReportSummary(b),
+      changes: compareFitReports(a.results, b.results),
+    };
+  }
+
+  /** Runs the engine on a spec as given, with the shop's thresholds under the request's own; nothing is stored. */
+  async whatIf(user: AuthUser, input: WhatIfDto): Promise<FitReport> {
+    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesFor(user)), ...plain(input.settings ?? {}) };
+    return runFitCheck(plain(input.spec) as FitSpec, overrides);
+  }
+}

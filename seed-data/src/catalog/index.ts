@@ -1,0 +1,3 @@
+export * from './demo-catalog-ids';
+export * from './demo-catalog';
+export * from './demo-fit-selections';

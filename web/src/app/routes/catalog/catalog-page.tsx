@@ -1,0 +1,49 @@
+import { Alert, Card, Tabs } from 'antd';
+import { useState } from 'react';
+import { PageHeader } from '@/components/page-header';
+import { useListSearchParams } from '@/hooks/use-list-search-params';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { CatalogItemDrawer } from '@/features/catalog/components/catalog-item-drawer';
+import { CatalogTable } from '@/features/catalog/components/catalog-table';
+import { kindDefinitions } from '@/features/catalog/lib/catalog-kinds';
+import { catalogKinds, type CatalogItem, type CatalogKind } from '@/features/catalog/types';
+import { canEditCatalog } from '../../navigation';
+
+const noSort: readonly never[] = [];
+
+export function CatalogPage() {
+  const user = useSignedInUser();
+  const canEdit = canEditCatalog(user.role);
+  const [params, setParams] = useListSearchParams({ sortFields: noSort, filters: ['kind'] });
+  const kind: CatalogKind = catalogKinds.find((k) => k === params.kind) ?? 'engines';
+  const [editing, setEditing] = useState<{ item: CatalogItem | null } | null>(null);
+
+  return (
+    <>
+      <PageHeader
+        title="Catalog"
+        subtitle="The shop’s own engines, chassis, transmissions and parts, with the figures the fit check reads."
+      />
+      {!canEdit && (
+        <Alert style={{ marginBottom: 16 }} type="info" showIcon title="Read only for your role" description="Ask the owner, an estimator or the parts counter to change an entry." />
+      )}
+      <Card>
+        <Tabs
+          activeKey={kind}
+          onChange={(next) => setParams({ kind: next, page: 1, search: undefined })}
+          items={catalogKinds.map((k) => ({ key: k, label: kindDefinitions[k].label }))}
+        />
+        <CatalogTable
+          key={kind}
+          kind={kind}
+          query={{ page: params.page, pageSize: params.pageSize, search: params.search }}
+          onQueryChange={setParams}
+          canEdit={canEdit}
+          onEdit={(item) => setEditing({ item })}
+          onCreate={() => setEditing({ item: null })}
+        />
+      </Card>
+      {canEdit && <CatalogItemDrawer kind={kind} open={editing !== null} item={editing?.item ?? null} onClose={() => setEditing(null)} />}
+    </>
+  );
+}

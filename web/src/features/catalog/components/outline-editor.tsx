@@ -1,0 +1,84 @@
+import { Button, Flex, Table, Typography } from 'antd';
+import type { ColumnsType } from 'antd/es/table';
+import { useUnits } from '@/hooks/use-units';
+import { LengthInput } from './length-input';
+
+export type OutlinePoint = Record<string, number>;
+
+export type OutlineEditorProps = {
+  /** Points in millimetres. */
+  value?: OutlinePoint[];
+  onChange?: (points: OutlinePoint[]) => void;
+  axes: readonly [string, string];
+  /** Names the table and its buttons for screen readers. */
+  label: string;
+  closed?: boolean;
+};
+
+type Row = OutlinePoint & { key: number };
+
+/** A point list as a table of rows, typed in the person's unit and kept in millimetres. */
+export function OutlineEditor({ value = [], onChange, axes, label, closed }: OutlineEditorProps) {
+  const units = useUnits();
+  const [a, b] = axes;
+  const rows: Row[] = value.map((p, i) => ({ ...p, key: i }));
+
+  const setPoint = (index: number, axis: string, mm: number | null) => {
+    const next = value.map((p, i) => (i === index ? { ...p, [axis]: mm ?? 0 } : p));
+    onChange?.(next);
+  };
+  const add = () => {
+    const last = value[value.length - 1];
+    onChange?.([...value, last ? { ...last } : { [a]: 0, [b]: 0 }]);
+  };
+  const remove = (index: number) => onChange?.(value.filter((_, i) => i !== index));
+
+  const columns: ColumnsType<Row> = [
+    { title: '#', key: 'n', width: 48, render: (_, r) => r.key + 1 },
+    ...[a, b].map((axis) => ({
+      title: `${axis} (${units.unitLabel})`,
+      key: axis,
+      render: (_: unknown, r: Row) => (
+        <LengthInput size="small" aria-label={`${label}: point ${r.key + 1} ${axis}`} value={r[axis]} onChange={(mm) => setPoint(r.key, axis, mm)} />
+      ),
+    })),
+    {
+      title: <span className="sr-only">Remove</span>,
+      key: 'remove',
+      width: 90,
+      align: 'right',
+      render: (_, r) => (
+        <Button size="small" type="text" danger onClick={() => remove(r.key)} aria-label={`Remove point ${r.key + 1} of ${label}`}>
+          Remove
+        </Button>
+      ),
+    },
+  ];
+
+  return (
+    <div data-testid="outline-editor">
+      <Table<Row> size="small" rowKey="key" columns={columns} dataSource={rows} pagination={false} aria-label={label} locale={{ emptyText: 'No points yet' }} />
+      <Flex justify="space-between" align="center" style={{ marginTop: 6 }}>
+        <Button size="small" onClick={add} aria-label={`Add a point to ${label}`}>
+          Add point
+        </Button>
+        <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+          {value.length} point{value.length === 1 ? '' : 's'}
+          {closed ? ', closed outline' : ''}
+        </Typography.Text>
+      </Flex>
+    </div>
+  );
+}
+
+/** Form rule: enough points, every coordinate a number. */
+export function outlineRule(minPoints: number, label: string) {
+  return {
+    validator: async (_: unknown, value: OutlinePoint[] | undefined) => {
+      const points = value ?? [];
+      if (points.length < minPoints) throw new Error(`${label} needs at least ${minPoints} points.`);
+      if (points.some((p) => Object.values(p).some((v) => typeof v !== 'number' || !Number.isFinite(v))))
+        throw new Error(`${label}: every point needs both figures.`);
+    },
+  };
+}

@@ -1,0 +1,82 @@
+import type { Finding } from '@swapwright/shared';
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import { ShortfallList } from '../shortfall-list';
+
+function finding(over: Partial<Finding>): Finding {
+  return {
+    checkId: 'envelope.x',
+    group: 'envelope',
+    title: 'A check',
+    status: 'fails',
+    measured: 0,
+    required: 12.7,
+    margin: -12.7,
+    limit: 'min',
+    unit: 'mm',
+    message: 'Message.',
+    missing: [],
+    remedies: [],
+    thresholdSource: 'Common practice',
+    ...over,
+  };
+}
+
+const close = finding({ checkId: 'envelope.hood', title: 'Hood to intake', status: 'tight', measured: 15.875, margin: 3.175 });
+const slightlyBlocked = finding({ checkId: 'envelope.heads-firewall', title: 'Heads to firewall', measured: 6.35, margin: -6.35 });
+const badlyBlocked = finding({
+  checkId: 'envelope.sump-crossmember',
+  title: 'Oil pan to front crossmember',
+  measured: -25.4,
+  margin: -38.1,
+  remedies: [
+    { kind: 'part', category: 'oil-pan', requires: { sumpPosition: 'rear' }, partIds: ['pan-rear'], note: 'A rear-sump pan clears.' },
+    { kind: 'placement', axis: 'height', changeBy: 38.1, unit: 'mm', note: '' },
+    { kind: 'fabrication', operation: 'Notch the crossmember', laborHours: 8, note: 'Have a qualified welder do it.' },
+  ],
+});
+
+function rowOrder(): string[] {
+  return screen.getAllByTestId(/^shortfall-(?!measured|margin)/).map((el) => el.getAttribute('data-testid') ?? '');
+}
+
+describe('ShortfallList', () => {
+  it('puts the worst first: blocked before close, the biggest miss first', () => {
+    renderWithApp(<ShortfallList shortfalls={[close, slightlyBlocked, badlyBlocked]} />);
+    expect(rowOrder()).toEqual(['shortfall-envelope.sump-crossmember', 'shortfall-envelope.heads-firewall', 'shortfall-envelope.hood']);
+    expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('Blocked')).toBeTruthy();
+    expect(within(screen.getByTestId('shortfall-envelope.hood')).getByText('Close call')).toBeTruthy();
+  });
+
+  it('shows the figures in inches (1 in = 25.4 mm exactly, NIST SP 811)', () => {
+    renderWithApp(<ShortfallList shortfalls={[badlyBlocked, close]} />);
+    const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
+    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-1 in');
+    expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−1.5 in');
+    expect(within(row).getByText('at least 0.5 in')).toBeTruthy();
+    expect(within(screen.getByTestId('shortfall-envelope.hood')).getByTestId('shortfall-measured').textContent).toBe('0.63 in');
+    expect(within(row).getByText('Move: Raise the engine 1.5 in')).toBeTruthy();
+    expect(within(row).getByText('8 h labor')).toBeTruthy();
+  });
+
+  it('shows the same figures in millimetres when the person works in mm', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'mm');
+    renderWithApp(<ShortfallList shortfalls={[badlyBlocked]} />);
+    const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
+    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-25.4 mm');
+    expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−38.1 mm');
+    expect(within(row).getByText('at least 12.7 mm')).toBeTruthy();
+  });
+
+  it('offers the matching catalog part with a "Use" button', async () => {
+    const onUsePart = vi.fn();
+    renderWithApp(
+      <ShortfallList shortfalls={[badlyBlocked]} parts={{ 'pan-rear': { id: 'pan-rear', name: 'Rear-sump pan R1' } }} onUsePart={onUsePart} />,
+    );
+    const button = screen.getByRole('button', { name: /^Use this pan: Rear-sump pan R1/ });
+    await userEvent.click(button);
+    expect(onUsePart).toHaveBeenCalledWith(badlyBlocked.remedies[0], 'pan-rear');
+  });
+});
