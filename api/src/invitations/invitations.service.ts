@@ -105,7 +105,7 @@ export class InvitationsService {
 
   private async sendInvitation(email: string, shopName: string, inviter: string, role: string, token: string) {
     const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
-    const link = `${appUrl}/accept-invitation?token=${encodeURIComponent(token)}`;
+    const link = `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
     await this.mail.sendOrLog({
       to: email,
       subject: `${shopName} invites you to Swapwright`,

@@ -319,7 +319,8 @@ function envelopeAt(points: readonly ChassisPoint[], closed: boolean, x: number,
 }
 
 /**
- * Closed form for vertically convex outlines: lifting `a` clears `b` only by passing over it at every x
+ * Closed form for vertically convex outlines whose interiors overlap (callers check that first): lifting
+ * `a` clears `b` only by passing over it at every x
  * they share (a section cannot switch from above to below along a connected x range), so the lift is the
  * largest (top of b − bottom of a) over the shared x range, taken at the vertices of either outline.
  * Returns null when either outline is not vertically convex.
@@ -437,6 +438,10 @@ export function outlineGap(a: readonly ChassisPoint[], aClosed: boolean, b: read
       from: { x: best.fx, z: best.fz },
       to: { x: best.tx, z: best.tz },
     };
+  }
+  // Touching (from any side) is a gap of 0; only a true overlap of the interiors is measured by a lift.
+  if (!outlinesOverlap(a, aClosed, b, dz)) {
+    return { gap: 0, overlapping: false, from: { x: best.fx, z: best.fz }, to: { x: best.tx, z: best.tz } };
   }
   const { lift, from, to } = verticalLiftConvex(a, aClosed, b, dz) ?? verticalSeparationLift(a, aClosed, b, dz);
   if (lift <= 0) {

@@ -1,5 +1,13 @@
-import { inchesToMm, mmToInches } from '@swapwright/shared';
 import type { UnitSystem } from '@/types/api';
+
+/**
+ * 1 in = 25.4 mm exactly (NIST SP 811). Same figures as `inchesToMm` / `mmToInches` in
+ * @swapwright/shared (a test keeps them equal); defined here because importing the shared
+ * package's single entry point from the first chunk would bundle the whole fit engine into it.
+ */
+export const MM_PER_INCH = 25.4;
+export const inchesToMm = (inches: number): number => inches * MM_PER_INCH;
+export const mmToInches = (mm: number): number => mm / MM_PER_INCH;
 
 /** Display precision: 0.01 in (finer than a 1/64 in rule) and 0.1 mm. */
 export const lengthDecimals: Record<UnitSystem, number> = { in: 2, mm: 1 };

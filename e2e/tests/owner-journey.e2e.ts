@@ -1,0 +1,70 @@
+import { BASE_URL, openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { signInAs } from './support/session';
+
+interface CapturedMail {
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+describe('the owner sets the shop up and brings in a new estimator', () => {
+  let owner: BrowserSession;
+
+  beforeAll(async () => {
+    owner = await openBrowser();
+    await signInAs(owner.page, 'owner');
+  });
+
+  afterAll(async () => {
+    await owner.close();
+  });
+
+  it('sets the labor rate in shop settings', async () => {
+    const { page } = owner;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Shop settings' }).click();
+    const form = page.getByRole('form', { name: 'Shop settings' });
+    await form.waitFor();
+    await form.getByRole('spinbutton', { name: 'Labor rate per hour' }).fill('118');
+    const saved = page.waitForResponse((r) => r.url().endsWith('/api/shops/current') && r.request().method() === 'PATCH');
+    await page.getByRole('button', { name: 'Save settings' }).click();
+    expect((await saved).status()).toBe(200);
+    await saveScreenshot(page, 'owner-shop-settings');
+  });
+
+  it('invites an estimator, who joins through the e-mailed link', async () => {
+    const { page } = owner;
+    const email = `new.estimator.${Date.now()}@ironbark.test`;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Members' }).click();
+    const form = page.getByRole('form', { name: 'Invite a member' });
+    await form.getByLabel('Email').fill(email);
+    await form.getByRole('combobox', { name: 'Role' }).click();
+    await page.locator('.ant-select-item-option', { hasText: 'Estimator' }).click();
+    const sent = page.waitForResponse((r) => r.url().endsWith('/api/invitations') && r.request().method() === 'POST');
+    await form.getByRole('button', { name: 'Send invitation' }).click();
+    expect((await sent).status()).toBe(201);
+    await page.getByText(email).first().waitFor();
+    await saveScreenshot(page, 'owner-members');
+
+    const mails = (await (await page.request.get(`${BASE_URL}/api/dev/mail`)).json()) as CapturedMail[];
+    const invitation = mails.find((mail) => mail.to.includes(email));
+    expect(invitation).toBeDefined();
+    const link = /https?:\/\/\S+accept-invite\?token=[^\s"<>]+/.exec(invitation!.text)?.[0];
+    expect(link).toBeDefined();
+
+    const invitee = await openBrowser();
+    try {
+      await invitee.page.goto(link!);
+      const accept = invitee.page.getByRole('form', { name: 'Accept invitation' });
+      await accept.getByLabel('Your name').fill('Tamsin Okafor-Reyes');
+      await accept.getByLabel('Password', { exact: true }).fill('long-enough-password-1');
+      await accept.getByLabel('Repeat password').fill('long-enough-password-1');
+      await saveScreenshot(invitee.page, 'accept-invitation');
+      await invitee.page.getByRole('button', { name: 'Join the shop' }).click();
+      const nav = invitee.page.getByRole('navigation', { name: 'Main' });
+      await nav.getByRole('link', { name: 'Customers' }).waitFor();
+      expect(await nav.getByRole('link', { name: 'Members' }).count()).toBe(0);
+    } finally {
+      await invitee.close();
+    }
+  });
+});

@@ -1,0 +1,23 @@
+import { inchesToMm as sharedInchesToMm, mmToInches as sharedMmToInches } from '@swapwright/shared';
+import { describe, expect, it } from 'vitest';
+import { formatLength, formatPower, inchesToMm, mmToInches, parseLength } from '../units';
+
+describe('length units', () => {
+  it('agree with the shared package', () => {
+    for (const v of [0, 1, 12.5, 317.5, 1041.4, -3.2]) {
+      expect(inchesToMm(v)).toBe(sharedInchesToMm(v));
+      expect(mmToInches(v)).toBe(sharedMmToInches(v));
+    }
+  });
+
+  it('12.5 in is 317.5 mm (1 in = 25.4 mm exactly)', () => {
+    expect(inchesToMm(12.5)).toBe(317.5);
+    expect(parseLength('12.5 in', 'mm')).toBe(317.5);
+    expect(formatLength(317.5, 'in')).toBe('12.5 in');
+  });
+
+  it('formats power in hp with inches and kW with millimetres', () => {
+    expect(formatPower(298, 'in')).toBe('400 hp (298 kW)');
+    expect(formatPower(298, 'mm')).toBe('298 kW');
+  });
+});
