@@ -33,8 +33,8 @@ export const DEMO_CATALOG_IDS = {
     dunmore5: '5a0b1c2d-0000-4000-8000-000000000553',
   },
   controllers: {
-    brightlineB8: '5a0b1c2d-0000-4000-8000-000000000561',
-    brightlineB6: '5a0b1c2d-0000-4000-8000-000000000562',
+    tessaryT8: '5a0b1c2d-0000-4000-8000-000000000561',
+    tessaryT6: '5a0b1c2d-0000-4000-8000-000000000562',
     quillStandalone: '5a0b1c2d-0000-4000-8000-000000000563',
   },
   mountAdapters: {

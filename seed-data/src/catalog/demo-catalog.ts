@@ -313,10 +313,10 @@ const transmissions: TransmissionSpec[] = [
 ];
 
 const controllers: EngineControllerSpec[] = [
-  { ...BASE.controller!, id: IDS.controllers.brightlineB8, name: 'Brightline B8 standalone controller' },
+  { ...BASE.controller!, id: IDS.controllers.tessaryT8, name: 'Tessary T8 standalone controller' },
   {
-    id: IDS.controllers.brightlineB6,
-    name: 'Brightline B6 six-cylinder controller',
+    id: IDS.controllers.tessaryT6,
+    name: 'Tessary T6 six-cylinder controller',
     crankSignals: ['60-2', '36-1'],
     camSignals: ['1x'],
     throttles: ['cable'],

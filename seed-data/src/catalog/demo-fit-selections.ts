@@ -27,7 +27,7 @@ export const DEMO_FIT_SELECTIONS: DemoFitSelection[] = [
     oilPanId: IDS.oilPans.kestrelStockFront,
     oilPickupId: IDS.oilPickups.kestrelFront,
     oilPumpId: IDS.oilPumps.kestrelStock,
-    controllerId: IDS.controllers.brightlineB8,
+    controllerId: IDS.controllers.tessaryT8,
     accessoryDriveId: DEMO_ACCESSORY_DRIVE_IDS.truck,
     driveshaft: { ...DEMO_FIT_SPEC.driveshaft! },
     timingSetAdvanceDeg: DEMO_FIT_SPEC.timingSetAdvanceDeg ?? 0,

@@ -81,6 +81,8 @@ export interface FitWindow {
   notChecked: string[];
 }
 
+const BOUND_INSET_MM = 1e-6;
+
 export const WINDOW_RANGE: WindowBound = { checkId: 'window.range', against: 'searched range' };
 
 interface Constraint {
@@ -358,7 +360,16 @@ function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, nu
     if (next.length === 0 && intervals.length > 0) emptiedBy = c.bound;
     intervals = next;
   }
-  intervals = subtractBands(intervals, model.bands).sort((a, b) => b.highMm - b.lowMm - (a.highMm - a.lowMm));
+  // Each bound is pulled 1e-6 mm inside, so rounding between the window's frame (height 0 plus z) and a check
+  // placed at that height cannot turn a bound into a failure.
+  intervals = subtractBands(intervals, model.bands)
+    .map((iv) => ({
+      ...iv,
+      lowMm: iv.lowBoundBy === WINDOW_RANGE ? iv.lowMm : iv.lowMm + BOUND_INSET_MM,
+      highMm: iv.highBoundBy === WINDOW_RANGE ? iv.highMm : iv.highMm - BOUND_INSET_MM,
+    }))
+    .filter((iv) => iv.highMm >= iv.lowMm)
+    .sort((a, b) => b.highMm - b.lowMm - (a.highMm - a.lowMm));
   if (intervals.length === 0) return blocked(emptiedBy ?? model.bands[0]?.bound ?? lowBy);
   const w = intervals[0];
   return {

@@ -21,7 +21,11 @@ export type FitReportListItem = {
   id: string;
   projectId: string;
   createdAt: string;
+  createdById?: string | null;
   createdBy?: { id: string; name: string } | null;
+  placementSource?: 'project' | 'proposed' | 'chassis-default';
+  /** Counts by status (the API calls them `counts`). */
+  counts?: FitSummary;
   engineVersion?: string;
   placement?: Placement | null;
   summary?: FitSummary;
@@ -70,6 +74,14 @@ export type FitReportComparison = {
 /** Counts of a stored report, whichever way the list gives them. */
 export function summaryOf(item: FitReportListItem): FitSummary | undefined {
   if (item.summary) return item.summary;
+  if (item.counts) return item.counts;
   if (item.okCount === undefined) return undefined;
   return { ok: item.okCount, tight: item.tightCount, fails: item.failsCount, unknown: item.unknownCount, total: item.totalCount };
+}
+
+/** The API's full report ({ report, inputs }) or the older ({ results, inputsSnapshot }) in one shape. */
+export function normalizeStoredReport(raw: StoredFitReport & { report?: FitReport; inputs?: FitInputsSnapshot }): StoredFitReport {
+  const results = raw.results ?? raw.report;
+  const inputsSnapshot = raw.inputsSnapshot ?? raw.inputs;
+  return { ...raw, results: results as FitReport, inputsSnapshot: inputsSnapshot as FitInputsSnapshot, summary: raw.summary ?? raw.counts ?? results?.summary };
 }

@@ -5,6 +5,7 @@ import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { toProjectDetail } from '@/config/paths';
+import { getErrorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notifier';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useFitReport } from '@/features/fit-reports/api/get-fit-report';
@@ -79,6 +80,7 @@ export function ProjectFitPage() {
 
   const run = useRunFitReport({
     onSuccess: (r) => {
+      void project.refetch();
       setOpenId(r.id);
       setPreview(null);
       setStale(false);
@@ -247,7 +249,7 @@ export function ProjectFitPage() {
           )}
         </Card>
 
-        {run.isError && <Alert type="error" showIcon title="The fit check could not run" description="Check that the engine and chassis are chosen, then try again." />}
+        {run.isError && <Alert type="error" showIcon title="The fit check could not run" description={getErrorMessage(run.error)} />}
         {stale && stored && (
           <Alert
             className="fit-control"

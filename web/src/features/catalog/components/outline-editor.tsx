@@ -24,7 +24,9 @@ export function OutlineEditor({ value = [], onChange, axes, label, closed }: Out
   const rows: Row[] = value.map((p, i) => ({ ...p, key: i }));
 
   const setPoint = (index: number, axis: string, mm: number | null) => {
-    const next = value.map((p, i) => (i === index ? { ...p, [axis]: mm ?? 0 } : p));
+    // an emptied cell keeps its last figure until a number is typed
+    if (mm === null) return;
+    const next = value.map((p, i) => (i === index ? { ...p, [axis]: mm } : p));
     onChange?.(next);
   };
   const add = () => {

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import { describe, expect, it } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { previewFitCheck } from '../../lib/fit-engine';
-import { ChecksTable } from '../checks-table';
+import { ShortfallList } from '../shortfall-list';
 import { PlacementControls, samePlacement } from '../placement-controls';
 
 const saved = DEMO_FIT_SPEC.placement;
@@ -15,16 +15,16 @@ function PreviewHarness() {
   return (
     <>
       <PlacementControls value={placement} onChange={setPlacement} saved={saved} isPreview={!samePlacement(placement, saved)} />
-      <ChecksTable findings={report.findings} />
+      <ShortfallList shortfalls={report.shortfalls} />
     </>
   );
 }
 
 describe('placement preview', () => {
-  it('re-runs the fit engine when the crank height changes and updates the figures', async () => {
+  it('re-runs the fit engine when the crank height changes and updates the figures', { timeout: 40_000 }, async () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<PreviewHarness />);
-    const row = () => screen.getByTestId('check-envelope.sump-crossmember');
+    const row = () => screen.getByTestId('shortfall-envelope.sump-crossmember');
     expect(within(row()).getByText('-96 mm')).toBeTruthy();
     expect(row().getAttribute('data-status')).toBe('fails');
     expect(screen.queryByTestId('preview-badge')).toBeNull();
@@ -36,12 +36,12 @@ describe('placement preview', () => {
     expect(screen.getByTestId('preview-badge').textContent).toBe('Preview, not saved');
   });
 
-  it('takes the height in inches when the person works in inches', async () => {
+  it('takes the height in inches when the person works in inches', { timeout: 40_000 }, async () => {
     renderWithApp(<PreviewHarness />);
     const height = screen.getByRole('spinbutton', { name: 'Crank height' });
     expect((height as HTMLInputElement).value).toBe('19.69');
     fireEvent.change(height, { target: { value: '22.05' } });
     // 22.05 in = 560.07 mm: the pan still overlaps the crossmember by about 1.4 in
-    await waitFor(() => expect(within(screen.getByTestId('check-envelope.sump-crossmember')).getByText('-1.41 in')).toBeTruthy());
+    await waitFor(() => expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('-1.41 in')).toBeTruthy());
   });
 });
