@@ -2,7 +2,7 @@ import { outlineGapToward, type GapResult, type SeparationDirection } from '../.
 import { findBoundary } from '../../geometry/lipschitz-solve';
 import type { FitSettings } from '../../settings/fit-settings';
 import type { CheckStatus, PlacementRemedy } from '../../types/finding';
-import type { ChassisObstacle, ChassisPoint, FitSpec, Placement } from '../../types/fit-spec';
+import type { ChassisObstacle, ChassisPoint, Placement } from '../../types/fit-spec';
 import { statusFromMargin } from '../check-definition';
 
 /** One decimal, the way the report prints millimetres. */
@@ -73,8 +73,4 @@ export function describeHeightChange(changeBy: number): string {
 
 export function describeSetbackChange(changeBy: number): string {
   return changeBy >= 0 ? `Set the engine back ${mm(changeBy)}` : `Move the engine forward ${mm(-changeBy)}`;
-}
-
-export function pickFirst<T>(spec: FitSpec, f: (s: FitSpec) => T): T {
-  return f(spec);
 }
