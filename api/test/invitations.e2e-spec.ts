@@ -4,7 +4,7 @@ import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAll
 async function invitationTokenFor(email: string): Promise<string> {
   const mails = (await (await fetch(process.env.MAIL_FAKE_URL!)).json()) as Array<{ to: string[]; text: string }>;
   const mail = mails.find((m) => m.to.includes(email));
-  const match = mail && /accept-invitation\?token=([A-Za-z0-9_%-]+)/.exec(mail.text);
+  const match = mail && /accept-invite\?token=([A-Za-z0-9_%-]+)/.exec(mail.text);
   if (!match) throw new Error(`no invitation mail for ${email}`);
   return decodeURIComponent(match[1]);
 }

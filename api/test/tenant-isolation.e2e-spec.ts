@@ -37,7 +37,7 @@ describe('tenant isolation', () => {
 
   it("leaves the other shop's records untouched", async () => {
     const [row] = await t.dataSource.query('SELECT title FROM projects WHERE id = ?', [OTHER_SHOP.projectId]);
-    expect(row.title).toBe('Corvane Tallboy 1971: Alder 4.8 I6');
+    expect(row.title).toBe('Orrin Tallboy 1971: Alder 4.8 I6');
     expect(await countRows(t.dataSource, 'customers')).toBeGreaterThan(5);
   });
 

@@ -308,12 +308,22 @@ export function ProjectFitPage() {
             </Card>
 
             <Row gutter={[16, 16]}>
-              <Col xs={24} xxl={16}>
+              <Col xs={24} xl={16}>
                 <Card title="Side view" className="fit-side-card">
                   <SideView spec={shownSpec} findings={shown.findings} window={fitWindow} proposed={fitWindow?.best?.placement ?? null} />
+                  {fitWindow && !fitWindow.columns.some((c) => c.feasible) && (
+                    <Alert
+                      style={{ marginTop: 8 }}
+                      type="info"
+                      showIcon
+                      data-testid="no-fit-window"
+                      title="No clear window near this placement"
+                      description={`At ${fitWindow.tiltDeg.toFixed(1)}° tilt no crank height clears every clearance check within the setbacks searched. Work through the shortfalls (a different pan, hood or firewall work) and run again.`}
+                    />
+                  )}
                 </Card>
               </Col>
-              <Col xs={24} xxl={8}>
+              <Col xs={24} xl={8}>
                 <Card className="fit-control">
                   <PlacementControls
                     value={placement}
