@@ -145,7 +145,10 @@ ENV
 
 migrate_and_seed() {
   say "Migrating database $DB_NAME"
-  npm run -s migration:run -w api
+  local log="$LOCAL/migrations-$DB_NAME.log"
+  npm run -s migration:run -w api >"$log" 2>&1 || { cat "$log"; fail "migrations failed on $DB_NAME"; }
+  local ran; ran="$(grep -c 'has been executed successfully' "$log" || true)"
+  echo "$ran migration(s) applied (log: ${log#$ROOT/})"
   say "Loading demo data (once)"
   npm run -s seed -w api
 }

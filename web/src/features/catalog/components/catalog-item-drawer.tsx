@@ -63,22 +63,30 @@ function toBody(kind: CatalogKind, values: FormValues): Record<string, unknown> 
   return body;
 }
 
-function ScalarInput({ field }: { field: ScalarField }) {
+/** Form.Item hands value and onChange to its direct child: pass them through to the real control. */
+type ControlProps = { value?: unknown; onChange?: (value: unknown) => void; checked?: boolean; id?: string };
+
+function ScalarInput({ field, ...control }: { field: ScalarField } & ControlProps) {
+  const p = control as Record<string, never>;
   switch (field.type) {
     case 'length':
-      return <LengthInput aria-label={field.label} />;
+      return <LengthInput aria-label={field.label} {...p} />;
     case 'number':
-      return <InputNumber aria-label={field.label} style={{ width: '100%' }} min={field.min} max={field.max} suffix={field.suffix} />;
+      return <InputNumber aria-label={field.label} style={{ width: '100%' }} min={field.min} max={field.max} suffix={field.suffix} {...p} />;
     case 'select':
-      return <Select aria-label={field.label} options={field.options} />;
+      return <Select aria-label={field.label} options={field.options} {...p} />;
     case 'multi':
-      return <Select aria-label={field.label} mode="multiple" options={field.options} />;
+      return <Select aria-label={field.label} mode="multiple" options={field.options} {...p} />;
     case 'tags':
-      return <Select aria-label={field.label} mode="tags" tokenSeparators={[',']} open={false} suffixIcon={null} placeholder="Type and press Enter" />;
+      return <Select aria-label={field.label} mode="tags" tokenSeparators={[',']} open={false} suffixIcon={null} placeholder="Type and press Enter" {...p} />;
     case 'boolean':
-      return <Checkbox aria-label={field.label}>Yes</Checkbox>;
+      return (
+        <Checkbox aria-label={field.label} {...p}>
+          Yes
+        </Checkbox>
+      );
     default:
-      return <Input aria-label={field.label} maxLength={80} />;
+      return <Input aria-label={field.label} maxLength={80} {...p} />;
   }
 }
 

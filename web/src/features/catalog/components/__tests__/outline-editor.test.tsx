@@ -68,3 +68,18 @@ describe('parseJsonField', () => {
     expect(parseJsonField('', { label: 'Pinion', shape: 'object', required: true })).toEqual({ ok: false, message: 'Pinion is required.' });
   });
 });
+
+describe('CatalogItemDrawer', () => {
+  it('fills the form from the stored spec, lengths in the person’s unit', async () => {
+    const { CatalogItemDrawer } = await import('../catalog-item-drawer');
+    const item = {
+      id: 'pan-1',
+      name: 'Rear-sump pan R1',
+      spec: { id: 'pan-1', name: 'Rear-sump pan R1', railPattern: 'R-V8', sumpPosition: 'rear', pickupMount: 'pump-bolted', sumpCenterU: 254, sumpFloorW: -254, capacityL: 5.7, dipstickProvision: [], bottomProfile: pan },
+    };
+    renderWithApp(<CatalogItemDrawer kind="oil-pans" open item={item} onClose={() => undefined} />);
+    expect(((await screen.findByRole('textbox', { name: 'Rail pattern' })) as HTMLInputElement).value).toBe('R-V8');
+    expect((screen.getByRole('spinbutton', { name: 'Sump floor (w)' }) as HTMLInputElement).value).toBe('-10.00');
+    expect((screen.getByRole('spinbutton', { name: 'Capacity' }) as HTMLInputElement).value).toBe('5.7');
+  });
+});
