@@ -1,0 +1,68 @@
+import type { Page } from 'playwright-core';
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { signInAs } from './support/session';
+
+const SUMP_CHECK = 'envelope.sump-crossmember';
+const DEMO_PROJECT = /Harlan Ridgeback 1978: Kestrel 5\.3 V8 swap/;
+
+async function runFitCheck(page: Page): Promise<void> {
+  const ran = page.waitForResponse((r) => /\/api\/projects\/[^/]+\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');
+  await page.getByRole('button', { name: 'Run fit check' }).click();
+  expect((await ran).status()).toBe(201);
+}
+
+describe('the estimator fits the demo engine and clears the crossmember with a rear-sump pan', () => {
+  let browser: BrowserSession;
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+    await signInAs(browser.page, 'estimator');
+  });
+
+  afterAll(async () => {
+    await browser.close();
+  });
+
+  it('runs the fit check and finds the sump against the crossmember in the shortfall list', async () => {
+    const { page } = browser;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('link', { name: DEMO_PROJECT }).first().click();
+    await page.getByRole('button', { name: 'Fit check' }).click();
+    await runFitCheck(page);
+
+    const shortfall = page.getByTestId(`shortfall-${SUMP_CHECK}`);
+    await shortfall.waitFor();
+    expect(await shortfall.getAttribute('data-status')).toBe('fails');
+    // The figure is shown in the shop's units (inches for the demo shop).
+    expect(await shortfall.innerText()).toMatch(/-?\d+(\.\d+)?\s*in/);
+    await page.getByTestId('fit-caution').waitFor();
+    await saveScreenshot(page, 'fit-report-stock-pan');
+    await page.getByTestId('side-view').screenshot({ path: `${__dirname}/../test-results/screenshots/fit-side-view-stock-pan.png` });
+  });
+
+  it('switches to the rear-sump pan the remedy suggests and the check clears', async () => {
+    const { page } = browser;
+    const shortfall = page.getByTestId(`shortfall-${SUMP_CHECK}`);
+    const saved = page.waitForResponse((r) => r.url().endsWith('/fit-selections') && r.request().method() === 'PUT');
+    await shortfall.getByRole('button', { name: /^Use this pan: .*rear-sump/ }).first().click();
+    expect((await saved).status()).toBe(200);
+    await runFitCheck(page);
+
+    const check = page.getByTestId(`check-${SUMP_CHECK}`);
+    await page.waitForFunction(
+      (id) => ['ok', 'tight'].includes(document.querySelector(`[data-testid="check-${id}"]`)?.getAttribute('data-status') ?? ''),
+      SUMP_CHECK,
+    );
+    expect(['ok', 'tight']).toContain(await check.getAttribute('data-status'));
+    expect(await page.getByTestId(`shortfall-${SUMP_CHECK}`).count()).toBe(0);
+    await saveScreenshot(page, 'fit-report-rear-sump-pan');
+    await page.getByTestId('side-view').screenshot({ path: `${__dirname}/../test-results/screenshots/fit-side-view-rear-sump-pan.png` });
+  });
+
+  it('saves the placement to the project', async () => {
+    const { page } = browser;
+    const saved = page.waitForResponse((r) => /\/api\/projects\/[^/]+$/.test(r.url()) && r.request().method() === 'PATCH');
+    await page.getByRole('button', { name: 'Save placement' }).click();
+    expect((await saved).status()).toBe(200);
+  });
+});
