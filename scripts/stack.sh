@@ -196,6 +196,7 @@ cmd_start() {
 MSG
   print_sign_ins
   echo
+  echo "Ready in ${SECONDS} s."
   echo "Press Ctrl-C to stop the server and the database (data is kept)."
   wait $API_PID
 }
@@ -231,7 +232,7 @@ cmd_test() {
   run_suite e2e bash -c "cd e2e && E2E_BASE_URL='http://127.0.0.1:$PORT' CHROMIUM_PATH=/usr/bin/chromium npx jest --ci --runInBand --json --outputFile='$results/e2e.json'"
   kill $API_PID 2>/dev/null || true
 
-  say "Summary"
+  say "Summary (${SECONDS} s in all)"
   node scripts/test-summary.js "$results" shared web api e2e
   echo "suites passed: ${SUITES_PASSED[*]:-none}; failed: ${SUITES_FAILED[*]:-none}"
   local totals; totals="$(node scripts/test-summary.js "$results" --totals shared web api e2e)"
