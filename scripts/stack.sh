@@ -104,7 +104,7 @@ mail_start() {
   SMTP_PORT="$(free_port "$default_port")"
   MAIL_HTTP_PORT="$(free_port $((SMTP_PORT + 1)))"
   MAIL_FAKE_SMTP_PORT=$SMTP_PORT MAIL_FAKE_HTTP_PORT=$MAIL_HTTP_PORT \
-    node_modules/.bin/tsx scripts/fakes/mail-fake.ts >"$MAIL_DIR/mail.log" 2>&1 &
+    node --import tsx scripts/fakes/mail-fake.ts >"$MAIL_DIR/mail.log" 2>&1 &
   MAIL_PID=$!
   echo "$MAIL_PID" >"$MAIL_DIR/pid"
   local tries=0
