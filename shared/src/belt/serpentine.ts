@@ -1,3 +1,5 @@
+import { mmWithInches } from '../units/figure-format';
+
 /**
  * Length of a belt around several pulleys, grooved side or back side, from the pulley centres.
  * Derived: walk the pulleys in belt order around a counter-clockwise loop; signed radius a = +r where the
@@ -92,7 +94,7 @@ function walkLoop(pulleys: readonly BeltPulley[], order: SerpentineLayout['order
     const distance = Math.hypot(dx, dy);
     const radiusSum = from.diameter / 2 + to.diameter / 2;
     if (distance < radiusSum) {
-      return { ok: false, code: 'pulleys-overlap', pulleyId: to.id, message: `Pulleys ${from.id} and ${to.id} overlap: their centres are ${distance.toFixed(1)} apart, their radii add to ${radiusSum.toFixed(1)}.` };
+      return { ok: false, code: 'pulleys-overlap', pulleyId: to.id, message: `Pulleys ${from.id} and ${to.id} overlap: their centres are ${mmWithInches(distance)} apart, their radii add to ${mmWithInches(radiusSum)}.` };
     }
     const offset = signed[i] - signed[j];
     const theta = Math.atan2(dy, dx) + Math.asin(offset / distance);

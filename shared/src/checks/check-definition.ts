@@ -33,6 +33,55 @@ export interface FindingFields {
   against?: string;
 }
 
+/** Plain words for the inputs a check most often lacks; anything else is spelled out from its field path. */
+const MISSING_INPUT_WORDS: Record<string, string> = {
+  accessoryDrive: 'the accessory drive',
+  controller: 'the engine controller',
+  oilPan: 'the oil pan',
+  oilPickup: 'the oil pickup',
+  oilPump: 'the oil pump',
+  transmission: 'the transmission',
+  'oilPan.bottomProfile': "the oil pan's bottom outline",
+  'chassis.hoodLine': "the hood's underside line",
+  'chassis.radiatorCore': "the radiator core's position",
+  'chassis.radiatorCore.ratedKw': "the radiator's rated heat rejection",
+  'chassis.steeringBox': "the steering box's position",
+  'chassis.railStations': 'the frame rail widths',
+  'chassis.transmissionCrossmember': 'the transmission crossmember',
+  'candidates.stockBeltLengthsMm': 'the stock belt lengths',
+  'engine.rearProfile': "the engine's rear outline",
+  'engine.topProfile': "the engine's top outline",
+  'engine.fanFrontU': "the fan's position on the engine",
+  'engine.widthFeatures or engine.accessoryDrives': "the engine's width features or accessory drives",
+  'engine.injectorFlowLbh': "the injectors' flow rating",
+  'engine.injectorRatedPsi': "the pressure the injectors are rated at",
+  'goals.revLimitRpm': 'the rev limit',
+  'transmission.topGearRatio': "the transmission's top gear ratio",
+  'transmission.sideProfile': "the transmission's side outline",
+};
+
+/**
+ * An input named in a `missing` list (a field path, sometimes with a note in brackets), in words for a
+ * finding's message: known paths use {@link MISSING_INPUT_WORDS}; others are split at dots and capitals.
+ */
+export function describeMissingInput(path: string): string {
+  const known = MISSING_INPUT_WORDS[path];
+  if (known) return known;
+  const obstacle = /^chassis\.obstacles \(kind (.+)\)$/.exec(path);
+  if (obstacle) return `the outline of the ${obstacle[1].replace(/-/g, ' ')}`;
+  const mount = /^(engine|chassis)\.(mountBosses|mountPads)\.(\w+)$/.exec(path);
+  if (mount) return mount[1] === 'engine' ? `the engine's ${mount[3]} mount boss` : `the chassis's ${mount[3]} mount pad`;
+  const bracket = path.indexOf(' (');
+  const head = bracket >= 0 ? path.slice(0, bracket) : path;
+  const tail = bracket >= 0 ? path.slice(bracket) : '';
+  const words = (MISSING_INPUT_WORDS[head] ?? head
+    .split(/[.\s]+/)
+    .map((part) => part.replace(/(Mm|Deg|Kw|Psi|Lbh|Lph|Rpm)$/, '').replace(/([a-z0-9])([A-Z])/g, '$1 $2').toLowerCase())
+    .filter((part) => part.length > 0)
+    .join(' ')).replace(/^the /, '');
+  return `the ${words}${tail.replace(/([a-z0-9])([A-Z])/g, '$1 $2').toLowerCase()}`;
+}
+
 export function unknownFinding(fields: FindingFields, missing: string[], message?: string): Finding {
   return {
     limit: 'min',
@@ -41,7 +90,7 @@ export function unknownFinding(fields: FindingFields, missing: string[], message
     measured: null,
     required: null,
     margin: null,
-    message: message ?? `Cannot check ${fields.title.toLowerCase()}: missing ${missing.join(', ')}.`,
+    message: message ?? `Cannot check ${fields.title.toLowerCase()}: missing ${missing.map(describeMissingInput).join(', ')}.`,
     missing,
     remedies: [],
   };

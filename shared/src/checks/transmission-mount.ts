@@ -3,7 +3,8 @@ import type { Finding, Remedy } from '../types/finding';
 import type { ChassisPoint, FitSpec } from '../types/fit-spec';
 import type { CheckContext, CheckDefinition } from './check-definition';
 import { measuredFinding, statusFromMargin, unknownFinding } from './check-definition';
-import { COMMON_PRACTICE, mm } from './envelope/envelope-common';
+import { COMMON_PRACTICE } from './envelope/envelope-common';
+import { mmWithInches } from '../units/figure-format';
 
 export const TRANSMISSION_MOUNT_POSITION_ID = 'drivetrain.transmission-mount-position';
 export const TRANSMISSION_MOUNT_HEIGHT_ID = 'drivetrain.transmission-mount-height';
@@ -26,7 +27,7 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
     title: 'Transmission mount over the crossmember (fore-aft)',
     unit: 'mm' as const,
     limit: 'max' as const,
-    thresholdSource: 'The crossmember\'s own adjustable range (chassis.transmissionCrossmember.adjustableXMm, measured).',
+    thresholdSource: "The crossmember's own fore-aft adjustment, as measured on the chassis.",
     against: 'transmission-crossmember',
   };
   if (!spec.transmission) return unknownFinding(fields, ['transmission']);
@@ -39,13 +40,13 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
   const dir = o.dx >= 0 ? 'behind' : 'ahead of';
   const message =
     margin >= 0
-      ? `The transmission mount lands ${mm(measured)} ${dir} the crossmember, inside its ±${mm(range)} adjustment (margin ${mm(margin)}).`
-      : `The transmission mount lands ${mm(measured)} ${dir} the crossmember, ${mm(-margin)} past its ±${mm(range)} adjustment.`;
+      ? `The transmission mount lands ${mmWithInches(measured)} ${dir} the crossmember, inside its ±${mmWithInches(range)} adjustment, a margin of ${mmWithInches(margin)}.`
+      : `The transmission mount lands ${mmWithInches(measured)} ${dir} the crossmember, ${mmWithInches(-margin)} past its ±${mmWithInches(range)} adjustment.`;
   const remedies: Remedy[] = [];
   if (status !== 'ok') {
     remedies.push({
       kind: 'fabrication',
-      operation: `Relocate the transmission crossmember ${mm(measured)} ${o.dx >= 0 ? 'rearward' : 'forward'}`,
+      operation: `Relocate the transmission crossmember ${mmWithInches(measured)} ${o.dx >= 0 ? 'rearward' : 'forward'}`,
       laborHours: settings.transmissionCrossmemberFabricationHours,
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
     });
@@ -66,7 +67,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
     title: 'Transmission mount to crossmember height',
     unit: 'mm' as const,
     limit: 'max' as const,
-    thresholdSource: `${COMMON_PRACTICE}: about 3 mm bolts down directly (mountDirectFitToleranceMm); spacers up to an inch (transmissionMountSpacerMaxMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: about ${mmWithInches(settings.mountDirectFitToleranceMm)} bolts down directly (the shop's direct-fit tolerance); spacers up to ${mmWithInches(settings.transmissionMountSpacerMaxMm)} (the shop's largest mount spacer).`,
     against: 'transmission-crossmember',
   };
   if (!spec.transmission) return unknownFinding(fields, ['transmission']);
@@ -81,19 +82,19 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
   let message: string;
   const status = margin >= 0 ? 'ok' : 'fails';
   if (status === 'ok') {
-    message = `The transmission mount sits ${mm(Math.abs(dz))} ${dz >= 0 ? 'above' : 'below'} the crossmember pad and bolts down directly (up to ${mm(tol)}).`;
+    message = `The transmission mount sits ${mmWithInches(Math.abs(dz))} ${dz >= 0 ? 'above' : 'below'} the crossmember pad and bolts down directly: up to ${mmWithInches(tol)} is taken up without a spacer.`;
   } else if (dz > 0 && dz <= spacerMax) {
-    message = `The transmission mount sits ${mm(dz)} above the crossmember pad: a ${mm(dz)} spacer closes it.`;
-    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mm(dz)} spacer under the mount (at most ${mm(spacerMax)}).` });
+    message = `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad: a ${mmWithInches(dz)} spacer closes it.`;
+    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mmWithInches(dz)} spacer under the mount (at most ${mmWithInches(spacerMax)}).` });
     remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, note: 'Support the transmission with a jack and the vehicle on stands.' });
   } else {
     message =
       dz > 0
-        ? `The transmission mount sits ${mm(dz)} above the crossmember pad, more than the ${mm(spacerMax)} a spacer should take: the crossmember must be raised.`
-        : `The transmission mount sits ${mm(-dz)} below the crossmember pad: the crossmember must be dropped or replaced.`;
+        ? `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, more than the ${mmWithInches(spacerMax)} a spacer should take: the crossmember must be raised.`
+        : `The transmission mount sits ${mmWithInches(-dz)} below the crossmember pad: the crossmember must be dropped or replaced.`;
     remedies.push({
       kind: 'fabrication',
-      operation: dz > 0 ? `Raise the crossmember pad ${mm(dz)}` : `Drop the crossmember ${mm(-dz)} or fit a drop crossmember`,
+      operation: dz > 0 ? `Raise the crossmember pad ${mmWithInches(dz)}` : `Drop the crossmember ${mmWithInches(-dz)} or fit a drop crossmember`,
       laborHours: settings.transmissionCrossmemberFabricationHours,
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
     });

@@ -243,6 +243,17 @@ export interface BellhousingAdapterSpec {
   thicknessMm: number;
 }
 
+/** A stock ribbed (PK) serpentine belt; `designation` is ribs × profile × effective length, e.g. `6PK1225`. */
+export interface SerpentineBeltSpec {
+  id: string;
+  name: string;
+  ribs: number;
+  profile: 'PK';
+  effectiveLengthMm: number;
+  designation: string;
+  stockOnHand?: number;
+}
+
 export interface SwapGoals {
   use: 'street' | 'tow' | 'off-road' | 'strip';
   targetPowerKw: number;

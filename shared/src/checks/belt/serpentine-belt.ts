@@ -2,7 +2,7 @@ import { serpentineLength, type BeltPulley, type SerpentineResult } from '../../
 import { beltLengthWindow, formatBeltDesignation, nearestStockBelt } from '../../belt/stock-belt';
 import type { Finding, Remedy } from '../../types/finding';
 import type { AccessoryDriveSpec, FitSpec } from '../../types/fit-spec';
-import { mmWithInches } from '../../units/figure-format';
+import { mmRangeWithInches, mmWithInches } from '../../units/figure-format';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 
 const FIELDS: FindingFields = {
@@ -12,7 +12,7 @@ const FIELDS: FindingFields = {
   unit: 'mm',
   limit: 'min',
   thresholdSource:
-    "Belt length from the pulley layout (tangent runs and wrap arcs); a stock belt the tensioner's take-up accepts (ISO 155 allowance, ISO 9982 designation); PK pulleys at least 45 mm (ISO 9981).",
+    "Belt length from the pulley layout (tangent runs and wrap arcs); a stock belt the tensioner's take-up accepts (ISO 155 allowance, ISO 9982 designation); PK pulleys at least 45 mm (1.77 in) (ISO 9981).",
 };
 
 /** The drive the spec names, or the engine's first. */
@@ -61,18 +61,22 @@ export function checkSerpentineBelt({ spec, settings }: CheckContext): Finding {
   let status = statusFromMargin(choice.marginMm, settings.beltTightBandMm);
   const small = smallPulleys(drive, settings.minPulleyDiameterMm);
   if (status === 'ok' && small.length > 0) status = 'tight';
-  const smallText = small.length > 0 ? ` Pulley ${small.join(', ')} is under the ${settings.minPulleyDiameterMm} mm minimum for PK belts and will shorten belt life.` : '';
+  const smallText = small.length > 0 ? ` Pulley ${small.join(', ')} is under the ${mmWithInches(settings.minPulleyDiameterMm, { decimals: 0 })} minimum for PK belts and will shorten belt life.` : '';
   const chosen = formatBeltDesignation(drive.ribs, choice.lengthMm);
+  // Whole millimetres inside the window, the same in the message and the remedy.
+  const minLengthMm = Math.ceil(window.minMm);
+  const maxLengthMm = Math.floor(window.maxMm);
+  const range = mmRangeWithInches(minLengthMm, maxLengthMm, { decimals: 0 });
   const message = choice.withinTakeUp
-    ? `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); stock belt ${chosen} is ${signed(choice.differenceMm)} mm from it, inside the tensioner's ${window.minMm.toFixed(0)}–${window.maxMm.toFixed(0)} mm range with ${choice.marginMm.toFixed(1)} mm to spare.${smallText}`
-    : `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); the tensioner accepts ${window.minMm.toFixed(0)}–${window.maxMm.toFixed(0)} mm and the nearest stock belt, ${chosen}, is outside that range.${smallText}`;
+    ? `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); stock belt ${chosen} is ${mmWithInches(choice.differenceMm, { signed: true })} from it, inside the tensioner's range of ${range} with ${mmWithInches(choice.marginMm)} to spare.${smallText}`
+    : `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); the tensioner accepts ${range} and the nearest stock belt, ${chosen}, is outside that range.${smallText}`;
   const remedies: Remedy[] = [
     {
       kind: 'part',
       category: 'belt',
-      requires: { ribs: drive.ribs, minLengthMm: Math.ceil(window.minMm), maxLengthMm: Math.floor(window.maxMm), designation },
+      requires: { ribs: drive.ribs, minLengthMm, maxLengthMm, designation },
       partIds: [],
-      note: `A ${drive.ribs}-rib PK belt between ${Math.ceil(window.minMm)} and ${Math.floor(window.maxMm)} mm effective length.`,
+      note: `A ${drive.ribs}-rib PK belt of ${range} effective length.`,
     },
     driveRemedy(drive),
   ];
@@ -93,9 +97,6 @@ function driveRemedy(drive: AccessoryDriveSpec): Remedy {
   };
 }
 
-function signed(value: number): string {
-  return `${value >= 0 ? '+' : ''}${value.toFixed(1)}`;
-}
 
 
 export const SERPENTINE_BELT_CHECK: CheckDefinition = {

@@ -26,7 +26,7 @@ export function checkCriticalSpeed({ spec, settings }: CheckContext): Finding {
   const allowedRpm = settings.criticalSpeedFraction * criticalRpm;
   const margin = allowedRpm - shaftSpeed.rpm;
   const status = statusFromMargin(margin, settings.shaftSpeedTightBandRpm);
-  const tube = `${mmWithInches(shaft.outerDiameterMm)} × ${shaft.wallMm.toFixed(2)} mm ${shaft.material} tube`;
+  const tube = `${mmWithInches(shaft.outerDiameterMm)} × ${mmWithInches(shaft.wallMm, { decimals: 2 })} wall ${shaft.material} tube`;
   const message = `A ${tube}, ${mmWithInches(line.lengthMm)} long, has a critical speed of ${Math.round(criticalRpm)} rpm; the shaft turns ${describeShaftSpeed(shaftSpeed)}, against an allowed ${Math.round(allowedRpm)} rpm (${Math.round(settings.criticalSpeedFraction * 100)} % of critical).`;
   return measuredFinding({ ...FIELDS }, { measured: shaftSpeed.rpm, required: allowedRpm, margin, status }, message, [
     {

@@ -19,7 +19,7 @@ describe('drivetrain.driveshaft-length', () => {
     const finding = run(systemFitSpec());
     expect(finding).toMatchObject({ status: 'ok', measured: 60, required: 25.4, unit: 'mm' });
     expect(finding.margin).toBeCloseTo(34.6, 9);
-    expect(finding.message).toContain('1270.0 mm (50 in)');
+    expect(finding.message).toContain('1270.0 mm (50.00 in)');
   });
 
   it('tight: growth leaves 30 mm', () => {

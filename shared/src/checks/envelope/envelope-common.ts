@@ -4,12 +4,7 @@ import type { FitSettings } from '../../settings/fit-settings';
 import type { CheckStatus, PlacementRemedy } from '../../types/finding';
 import type { ChassisObstacle, ChassisPoint, Placement } from '../../types/fit-spec';
 import { statusFromMargin } from '../check-definition';
-
-/** One decimal, the way the report prints millimetres. */
-export function mm(value: number): string {
-  const r = Math.round(value * 10) / 10;
-  return `${Object.is(r, -0) ? 0 : r} mm`;
-}
+import { mmWithInches } from '../../units/figure-format';
 
 export const COMMON_PRACTICE = 'Common practice (no published source)';
 
@@ -68,9 +63,9 @@ export function placementRemedy(axis: PlacementRemedy['axis'], changeBy: number,
 }
 
 export function describeHeightChange(changeBy: number): string {
-  return changeBy >= 0 ? `Raise the engine ${mm(changeBy)}` : `Lower the engine ${mm(-changeBy)}`;
+  return changeBy >= 0 ? `Raise the engine ${mmWithInches(changeBy)}` : `Lower the engine ${mmWithInches(-changeBy)}`;
 }
 
 export function describeSetbackChange(changeBy: number): string {
-  return changeBy >= 0 ? `Set the engine back ${mm(changeBy)}` : `Move the engine forward ${mm(-changeBy)}`;
+  return changeBy >= 0 ? `Set the engine back ${mmWithInches(changeBy)}` : `Move the engine forward ${mmWithInches(-changeBy)}`;
 }

@@ -3,8 +3,9 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { ChassisPoint, FitSpec } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm, placementRemedy } from './envelope-common';
+import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { placedForSpec, placeEngine, type PlacedEngine } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const FAN_RADIATOR_ID = 'envelope.fan-radiator';
 
@@ -29,7 +30,7 @@ export function runFanRadiator({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Fan and front pulley to radiator core',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE}: an inch between fan and core (setting minFanToCoreMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: an inch between fan and core (the shop's minimum fan to radiator core gap).`,
     against: 'radiator-core',
   };
   const core = spec.chassis.radiatorCore;
@@ -39,13 +40,13 @@ export function runFanRadiator({ spec, settings }: CheckContext): Finding {
   const fig = figures(g.gap, settings.minFanToCoreMm, settings);
   const message =
     g.gap >= 0
-      ? `The ${g.feature} is ${mm(g.gap)} behind the radiator core; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `The ${g.feature} reaches ${mm(-g.gap)} past the rear face of the radiator core; it needs ${mm(-fig.margin)} more room.`;
+      ? `The ${g.feature} is ${mmWithInches(g.gap)} behind the radiator core; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `The ${g.feature} reaches ${mmWithInches(-g.gap)} past the rear face of the radiator core; it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
     const shift = target - fig.margin;
-    remedies.push(placementRemedy('setback', shift, `Set the engine back ${mm(shift)} (the gap to the core grows one for one); recheck the firewall and driveshaft.`));
+    remedies.push(placementRemedy('setback', shift, `Set the engine back ${mmWithInches(shift)} (the gap to the core grows one for one); recheck the firewall and driveshaft.`));
     if (g.feature === 'front pulley') {
       const fits = shorterDrives(spec, core.x, settings.minFanToCoreMm + target);
       remedies.push({
@@ -62,7 +63,7 @@ export function runFanRadiator({ spec, settings }: CheckContext): Finding {
       kind: 'fabrication',
       operation: 'Move the radiator support forward',
       laborHours: settings.radiatorSupportFabricationHours,
-      note: `The core has to move ${mm(shift)} forward; check the hood latch and grille.`,
+      note: `The core has to move ${mmWithInches(shift)} forward; check the hood latch and grille.`,
     });
   }
   return measuredFinding(fields, fig, message, remedies);

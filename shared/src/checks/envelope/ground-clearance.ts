@@ -2,9 +2,10 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { ChassisPoint } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm, placementRemedy } from './envelope-common';
+import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { evaluateCandidatePans } from './pan-clearance';
 import { placedForSpec, type PlacedEngine } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const GROUND_CLEARANCE_ID = 'envelope.ground-clearance';
 
@@ -28,14 +29,14 @@ export function runGroundClearance({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Ground clearance under the engine',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE}: about 4 in under the lowest point of a street truck (setting minGroundClearanceMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: about 4 in under the lowest point of a street truck (the shop's minimum ground clearance).`,
     against: 'ground',
   };
   if (!spec.oilPan || spec.oilPan.bottomProfile.length < 3) return unknownFinding(fields, ['oilPan.bottomProfile']);
   const low = lowestPoint(placedForSpec(spec));
   if (!low) return unknownFinding(fields, ['oilPan.bottomProfile']);
   const fig = figures(low.point.z, settings.minGroundClearanceMm, settings);
-  const message = `The lowest point (${low.part}, ${mm(low.point.x)} behind the front axle line) is ${mm(low.point.z)} above the ground at ride height; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`;
+  const message = `The lowest point (${low.part}, ${mmWithInches(low.point.x)} behind the front axle line) is ${mmWithInches(low.point.z)} above the ground at ride height; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
@@ -51,7 +52,7 @@ export function runGroundClearance({ spec, settings }: CheckContext): Finding {
     });
     // Ground clearance rises one for one with the engine.
     const raise = target - fig.margin;
-    remedies.push(placementRemedy('height', raise, `Raise the engine ${mm(raise)}; the hood clearance drops by the same amount.`));
+    remedies.push(placementRemedy('height', raise, `Raise the engine ${mmWithInches(raise)}; the hood clearance drops by the same amount.`));
   }
   return measuredFinding(fields, fig, message, remedies);
 }

@@ -2,8 +2,9 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { Placement } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
+import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const HEADS_FIREWALL_ID = 'envelope.heads-firewall';
 export const FIREWALL_KINDS = ['firewall'] as const;
@@ -18,7 +19,7 @@ export function runHeadsFirewall({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Rear of heads to firewall',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE} (setting minFirewallGapMm).`,
+    thresholdSource: `${COMMON_PRACTICE} (the shop's minimum clearance to the firewall).`,
   };
   const missing: string[] = [];
   if (!spec.engine.rearProfile || spec.engine.rearProfile.length === 0) missing.push('engine.rearProfile');
@@ -30,8 +31,8 @@ export function runHeadsFirewall({ spec, settings }: CheckContext): Finding {
   const fig = figures(gap, settings.minFirewallGapMm, settings);
   const message =
     gap >= 0
-      ? `The rear of the heads clears the firewall (${worst.obstacle.name}) by ${mm(gap)}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `The rear of the heads runs ${mm(-gap)} into the firewall (${worst.obstacle.name}); it needs ${mm(-fig.margin)} more room.`;
+      ? `The rear of the heads clears the firewall (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `The rear of the heads runs ${mmWithInches(-gap)} into the firewall (${worst.obstacle.name}); it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
@@ -39,7 +40,7 @@ export function runHeadsFirewall({ spec, settings }: CheckContext): Finding {
       worstGap(placeEngine(spec, p).rearProfile, false, [worst.obstacle], 0, 'forward')!.result.gap - fig.required - target;
     const shift = solvePlacementChange(spec.placement, 'setback', -1, marginAt, 300);
     if (shift !== null) {
-      remedies.push(placementRemedy('setback', shift, `Move the engine forward ${mm(-shift)}; recheck the fan to radiator gap and the crossmember.`));
+      remedies.push(placementRemedy('setback', shift, `Move the engine forward ${mmWithInches(-shift)}; recheck the fan to radiator gap and the crossmember.`));
     }
     remedies.push({
       kind: 'fabrication',

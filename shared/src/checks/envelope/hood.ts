@@ -2,8 +2,9 @@ import { verticalClearance, type VerticalClearance } from '../../geometry/vertic
 import type { Finding, Remedy } from '../../types/finding';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm, placementRemedy } from './envelope-common';
+import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { placedForSpec, type PlacedEngine } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const HOOD_ID = 'envelope.hood';
 
@@ -19,7 +20,7 @@ export function runHood({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Hood to top of engine',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE}: half an inch for hood flex and engine rock (setting minHoodGapMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: half an inch for hood flex and engine rock (the shop's minimum clearance under the hood).`,
     against: 'hood',
   };
   const missing: string[] = [];
@@ -33,18 +34,18 @@ export function runHood({ spec, settings }: CheckContext): Finding {
   const fig = figures(c.clearance, settings.minHoodGapMm, settings);
   const message =
     c.clearance >= 0
-      ? `The top of the engine is ${mm(c.clearance)} under the hood at ${mm(c.from.x)} behind the axle line; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `The top of the engine stands ${mm(-c.clearance)} above the underside of the hood at ${mm(c.from.x)} behind the axle line; it needs ${mm(-fig.margin)} more room.`;
+      ? `The top of the engine is ${mmWithInches(c.clearance)} under the hood at ${mmWithInches(c.from.x)} behind the axle line; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `The top of the engine stands ${mmWithInches(-c.clearance)} above the underside of the hood at ${mmWithInches(c.from.x)} behind the axle line; it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
     const drop = target - fig.margin;
-    remedies.push(placementRemedy('height', -drop, `Lower the engine ${mm(drop)} (hood clearance changes one for one); recheck the pan and ground clearance.`));
+    remedies.push(placementRemedy('height', -drop, `Lower the engine ${mmWithInches(drop)} (hood clearance changes one for one); recheck the pan and ground clearance.`));
     remedies.push({
       kind: 'fabrication',
       operation: 'Fit a cowl or scoop hood, or a lower air-cleaner base',
       laborHours: settings.hoodFabricationHours,
-      note: `The top of the engine needs ${mm(drop)} more room.`,
+      note: `The top of the engine needs ${mmWithInches(drop)} more room.`,
     });
   }
   return measuredFinding(fields, fig, message, remedies);

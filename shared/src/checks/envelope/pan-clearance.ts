@@ -8,7 +8,6 @@ import {
   describeHeightChange,
   describeSetbackChange,
   figures,
-  mm,
   placementRemedy,
   solvePlacementChange,
   worstGap,
@@ -17,6 +16,7 @@ import {
 import { obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
 import { lowestPoint } from './ground-clearance';
 import { measureHood } from './hood';
+import { mmWithInches } from '../../units/figure-format';
 
 /** The obstacle kinds below the pan, one check each. */
 export const PAN_OBSTACLE_KINDS = {
@@ -31,7 +31,7 @@ export const ALL_BELOW_KINDS: ChassisObstacle['kind'][] = [
   ...PAN_OBSTACLE_KINDS.axle,
 ];
 
-export const PAN_GAP_SOURCE = `${COMMON_PRACTICE}: half an inch under the pan, since the engine rocks on its mounts under torque (setting minGapBelowMm).`;
+export const PAN_GAP_SOURCE = `${COMMON_PRACTICE}: half an inch under the pan, since the engine rocks on its mounts under torque (the shop's minimum clearance below the engine).`;
 
 /** Smallest pan gap to the obstacles of the given kinds at a placement (the pan is placed here). */
 export function measurePanGap(
@@ -116,7 +116,7 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
     partIds: candidates.map((c) => c.pan.id),
     note: candidates.length
       ? `A ${sumpPosition}-sump pan for the ${spec.engine.panRail.pattern} rail clears ${config.label} in this placement: ` +
-        candidates.map((c) => `${c.pan.name} by ${mm(c.thisCheckMargin + required)}`).join('; ') +
+        candidates.map((c) => `${c.pan.name} by ${mmWithInches(c.thisCheckMargin + required)}`).join('; ') +
         '. Fit the matching pickup and check the dipstick.'
       : `No candidate pan clears ${config.label} in this placement; look for a ${sumpPosition}-sump pan for the ${spec.engine.panRail.pattern} rail.`,
   });
@@ -129,17 +129,17 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
     const hood = measureHood(placeEngine(spec, { ...spec.placement, heightMm: spec.placement.heightMm + raise }), spec.chassis.hoodLine);
     const hoodNote = hood
       ? hood.clearance - settings.minHoodGapMm >= 0
-        ? ` The hood still clears by ${mm(hood.clearance)} there.`
-        : ` The hood would then be short by ${mm(settings.minHoodGapMm - hood.clearance)}.`
+        ? ` The hood still clears by ${mmWithInches(hood.clearance)} there.`
+        : ` The hood would then be short by ${mmWithInches(settings.minHoodGapMm - hood.clearance)}.`
       : '';
-    remedies.push(placementRemedy('height', raise, `${describeHeightChange(raise)} to clear ${config.label} by ${mm(required + target)}.${hoodNote}`));
+    remedies.push(placementRemedy('height', raise, `${describeHeightChange(raise)} to clear ${config.label} by ${mmWithInches(required + target)}.${hoodNote}`));
   }
   const back = solvePlacementChange(spec.placement, 'setback', 1, marginAt, 300);
   const forward = solvePlacementChange(spec.placement, 'setback', -1, marginAt, 300);
   const shift = back !== null && (forward === null || Math.abs(back) <= Math.abs(forward)) ? back : forward;
   if (shift !== null) {
     remedies.push(
-      placementRemedy('setback', shift, `${describeSetbackChange(shift)} so the pan clears ${config.label} by ${mm(required + target)}; recheck the firewall, driveshaft and mounts.`),
+      placementRemedy('setback', shift, `${describeSetbackChange(shift)} so the pan clears ${config.label} by ${mmWithInches(required + target)}; recheck the firewall, driveshaft and mounts.`),
     );
   }
   const fab = config.fabrication(settings);
@@ -162,8 +162,8 @@ export function runPanCheck(context: CheckContext, config: PanCheckConfig): Find
   const name = `${config.label} (${worst.obstacle.name})`;
   const message =
     gap >= 0
-      ? `The oil pan clears ${name} by ${mm(gap)}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `The oil pan runs ${mm(-gap)} into ${name}: it would have to rise ${mm(-gap)} just to touch free and ${mm(-fig.margin)} to leave the required ${mm(fig.required)}.`;
+      ? `The oil pan clears ${name} by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `The oil pan runs ${mmWithInches(-gap)} into ${name}: it would have to rise ${mmWithInches(-gap)} just to touch free and ${mmWithInches(-fig.margin)} to leave the required ${mmWithInches(fig.required)}.`;
   const remedies = fig.status === 'ok' ? [] : panRemedies(spec, settings, config, worst, fig.status === 'fails');
   return measuredFinding({ ...fields, against: worst.obstacle.id }, fig, message, remedies);
 }

@@ -4,8 +4,9 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { RailStation, SideName } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm } from './envelope-common';
+import { COMMON_PRACTICE, figures } from './envelope-common';
 import { driveWidthBox, placedForSpec, type PlacedEngine, type PlacedWidthBox } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const RAIL_WIDTH_ID = 'envelope.rail-width';
 
@@ -140,7 +141,7 @@ function railRemedies(spec: CheckContext['spec'], settings: FitSettings, contact
       category: 'exhaust-manifold',
       requires: { maxHalfWidthMm: Math.floor((contact.insideWidthMm / 2 - settings.minRailGapMm - target) * 10) / 10 },
       partIds: [],
-      note: `${contact.box.name} needs ${mm(need)} less width on the ${contact.side}: tighter manifolds or swap headers made for this chassis.`,
+      note: `${contact.box.name} needs ${mmWithInches(need)} less width on the ${contact.side}: tighter manifolds or swap headers made for this chassis.`,
     });
   }
   remedies.push({
@@ -158,7 +159,7 @@ export function runRailWidth({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Accessory drive and exhaust width to frame rails',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE}: hot exhaust and moving accessories near the rails (setting minRailGapMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: hot exhaust and moving accessories near the rails (the shop's minimum clearance to the frame rails).`,
   };
   const missing: string[] = [];
   if (!spec.chassis.railStations || spec.chassis.railStations.length === 0) missing.push('chassis.railStations');
@@ -170,11 +171,11 @@ export function runRailWidth({ spec, settings }: CheckContext): Finding {
     return clearFinding(fields, settings.minRailGapMm, 'No width feature of the engine is level with the frame rails where they were measured at this placement.');
   }
   const fig = figures(contact.gap, settings.minRailGapMm, settings);
-  const where = `${mm(contact.x)} behind the axle line, where the rails are ${mm(contact.insideWidthMm)} apart inside`;
+  const where = `at ${mmWithInches(contact.x)} behind the axle line, where the rails are ${mmWithInches(contact.insideWidthMm)} apart inside`;
   const message =
     contact.gap >= 0
-      ? `${contact.box.name} clears the ${contact.side} frame rail by ${mm(contact.gap)} ${where}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `${contact.box.name} is ${mm(-contact.gap)} wider than the space to the ${contact.side} frame rail ${where}.`;
+      ? `${contact.box.name} clears the ${contact.side} frame rail by ${mmWithInches(contact.gap)} ${where}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `${contact.box.name} is ${mmWithInches(-contact.gap)} wider than the space to the ${contact.side} frame rail ${where}.`;
   const remedies = fig.status === 'ok' ? [] : railRemedies(spec, settings, contact, fig.status === 'fails' ? 0 : settings.tightBandMm);
   return measuredFinding({ ...fields, against: `frame-rail-${contact.side}` }, fig, message, remedies);
 }

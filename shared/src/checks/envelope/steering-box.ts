@@ -2,9 +2,10 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { ChassisSpec } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm } from './envelope-common';
+import { COMMON_PRACTICE, figures } from './envelope-common';
 import { placedForSpec, type PlacedWidthBox } from './placed-engine';
 import { clearFinding } from './rail-width';
+import { mmWithInches } from '../../units/figure-format';
 
 export const STEERING_BOX_ID = 'envelope.steering-box';
 
@@ -37,7 +38,7 @@ export function runSteeringBox({ spec, settings }: CheckContext): Finding {
     group: 'envelope' as const,
     title: 'Accessory drive and exhaust to steering box',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE} (setting minSteeringBoxGapMm).`,
+    thresholdSource: `${COMMON_PRACTICE} (the shop's minimum clearance to the steering box).`,
     against: 'steering-box',
   };
   const steering = spec.chassis.steeringBox;
@@ -49,8 +50,8 @@ export function runSteeringBox({ spec, settings }: CheckContext): Finding {
   const fig = figures(worst.gap, settings.minSteeringBoxGapMm, settings);
   const message =
     worst.gap >= 0
-      ? `${worst.box.name} clears the steering box by ${mm(worst.gap)}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `${worst.box.name} reaches ${mm(-worst.gap)} past the inboard face of the steering box.`;
+      ? `${worst.box.name} clears the steering box by ${mmWithInches(worst.gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `${worst.box.name} reaches ${mmWithInches(-worst.gap)} past the inboard face of the steering box.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     remedies.push({
@@ -58,7 +59,7 @@ export function runSteeringBox({ spec, settings }: CheckContext): Finding {
       category: worst.box.source === 'accessory-drive' ? 'accessory-drive' : 'exhaust-manifold',
       requires: { maxHalfWidthMm: Math.floor((Math.abs(steering.inboardY) - fig.required) * 10) / 10, side: steering.side },
       partIds: [],
-      note: `${worst.box.name} must be ${mm(-fig.margin + (fig.status === 'fails' ? 0 : settings.tightBandMm))} narrower on the ${steering.side}.`,
+      note: `${worst.box.name} must be ${mmWithInches(-fig.margin + (fig.status === 'fails' ? 0 : settings.tightBandMm))} narrower on the ${steering.side}.`,
     });
     remedies.push({
       kind: 'fabrication',

@@ -17,7 +17,7 @@ describe('envelope.sump-crossmember', () => {
     expect(f.against).toBe('xm');
     expect(f.unit).toBe('mm');
     expect(f.remedies).toEqual([]);
-    expect(f.message).toContain('20 mm');
+    expect(f.message).toContain('20.0 mm (0.79 in)');
   });
 
   it('tight: 14 mm (z_e 494)', () => {
@@ -51,7 +51,7 @@ describe('envelope.sump-crossmember', () => {
     const f = runCheck(SUMP_CROSSMEMBER_CHECK, boxFitSpec({ heightMm: 450 }));
     expect(f.measured).toBeCloseTo(-30, 9);
     expect(f.margin).toBeCloseTo(-42.7, 9);
-    expect(f.message).toMatch(/30 mm into/);
+    expect(f.message).toMatch(/30\.0 mm \(1\.18 in\) into/);
   });
 
   it('tilt 3°: distance to the sloping pan floor', () => {

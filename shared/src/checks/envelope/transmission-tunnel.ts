@@ -2,8 +2,9 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { Placement } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, figures, mm, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
+import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
+import { mmWithInches } from '../../units/figure-format';
 
 export const TRANSMISSION_TUNNEL_ID = 'envelope.transmission-tunnel';
 export const TUNNEL_KINDS = ['tunnel'] as const;
@@ -19,7 +20,7 @@ export function runTransmissionTunnel({ spec, settings }: CheckContext): Finding
     group: 'envelope' as const,
     title: 'Bellhousing and transmission to tunnel',
     unit: 'mm' as const,
-    thresholdSource: `${COMMON_PRACTICE} (setting minFirewallGapMm).`,
+    thresholdSource: `${COMMON_PRACTICE} (the shop's minimum clearance to the firewall and tunnel).`,
   };
   const missing: string[] = [];
   if (!spec.transmission || spec.transmission.sideProfile.length < 3) missing.push('transmission.sideProfile');
@@ -31,15 +32,15 @@ export function runTransmissionTunnel({ spec, settings }: CheckContext): Finding
   const fig = figures(gap, settings.minFirewallGapMm, settings);
   const message =
     gap >= 0
-      ? `The bellhousing and transmission clear the tunnel (${worst.obstacle.name}) by ${mm(gap)}; at least ${mm(fig.required)} is required, a margin of ${mm(fig.margin)}.`
-      : `The transmission runs ${mm(-gap)} into the tunnel (${worst.obstacle.name}); it needs ${mm(-fig.margin)} more room.`;
+      ? `The bellhousing and transmission clear the tunnel (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      : `The transmission runs ${mmWithInches(-gap)} into the tunnel (${worst.obstacle.name}); it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
     const marginAt = (p: Placement): number =>
       worstGap(placeEngine(spec, p).transmission!, true, [worst.obstacle], 0, 'down')!.result.gap - fig.required - target;
     const drop = solvePlacementChange(spec.placement, 'height', -1, marginAt, 300);
-    if (drop !== null) remedies.push(placementRemedy('height', drop, `Lower the engine ${mm(-drop)}; recheck the pan and ground clearance.`));
+    if (drop !== null) remedies.push(placementRemedy('height', drop, `Lower the engine ${mmWithInches(-drop)}; recheck the pan and ground clearance.`));
     remedies.push({
       kind: 'fabrication',
       operation: 'Open up and re-skin the transmission tunnel',

@@ -16,7 +16,7 @@ describe('fuel.injector-size', () => {
     expect(finding.required).toBeCloseTo(31.25, 6);
     expect(finding.measured).toBeCloseTo(36.08, 2);
     // Source: lb/h × 453.59237 / 60 / SG 0.74: 31.25 lb/h = 319.25 cc/min.
-    expect(finding.message).toContain('31.2 lb/h (319 cc/min)');
+    expect(finding.message).toContain('at least 31.3 lb/h (320 cc/min)');
   });
 
   it('tight within 5 % and fails below the requirement', () => {

@@ -3,6 +3,7 @@ import type { Finding } from '../../types/finding';
 import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
 import { efiFuelSupplyRemedies } from './fuel-pump-flow';
+import { formatFigure } from '../../units/figure-format';
 
 const FIELDS: FindingFields = {
   checkId: 'fuel.system-pressure',
@@ -25,7 +26,7 @@ export function checkFuelSystemPressure({ spec, settings }: CheckContext): Findi
     return measuredFinding(
       FIELDS,
       { measured: system.regulatorPsi, required, margin: -Math.abs(required - system.regulatorPsi), status: 'fails' },
-      `The chassis has a carburetor fuel system at ${system.regulatorPsi.toFixed(1)} psi; the engine's injection needs ${required.toFixed(1)} psi, so the system needs an injection pump and regulator.`,
+      `The chassis has a carburetor fuel system at ${formatFigure(system.regulatorPsi, 'psi')}; the engine's injection needs ${formatFigure(required, 'psi')}, so the system needs an injection pump and regulator.`,
       efiFuelSupplyRemedies(spec, minFlow),
     );
   }
@@ -35,14 +36,14 @@ export function checkFuelSystemPressure({ spec, settings }: CheckContext): Findi
   return measuredFinding(
     FIELDS,
     { measured: system.regulatorPsi, required, margin, status },
-    `The chassis regulator holds ${system.regulatorPsi.toFixed(1)} psi; the engine is rated at ${required.toFixed(1)} psi (${difference >= 0 ? '+' : ''}${difference.toFixed(1)} psi).`,
+    `The chassis regulator holds ${formatFigure(system.regulatorPsi, 'psi')}; the engine is rated at ${formatFigure(required, 'psi')} (${formatFigure(difference, 'psi', { signed: true })}).`,
     [
       {
         kind: 'part',
         category: 'fuel-regulator',
         requires: { pressurePsi: required },
         partIds: [],
-        note: `Set or replace the regulator for ${required.toFixed(1)} psi and check it with a gauge. ${FUEL_SYSTEM_CAUTION}`,
+        note: `Set or replace the regulator for ${formatFigure(required, 'psi')} and check it with a gauge. ${FUEL_SYSTEM_CAUTION}`,
       },
     ],
   );

@@ -3,6 +3,12 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { FitSpec } from '../../types/fit-spec';
 import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
+import { formatFigure } from '../../units/figure-format';
+
+/** The pump flow the engine needs, as every message and note prints it (rounded up to 0.1 L/h). */
+export function formatRequiredFlow(lph: number): string {
+  return formatFigure(lph, 'L/h', { roundUp: true });
+}
 
 const FIELDS: FindingFields = {
   checkId: 'fuel.pump-flow',
@@ -23,14 +29,14 @@ export function efiFuelSupplyRemedies(spec: FitSpec, minFlowLph: number): Remedy
       category: 'fuel-pump',
       requires: { minFlowLph: Math.ceil(minFlowLph), minPressurePsi: psi },
       partIds: [],
-      note: `An in-tank or inline pump that delivers at least ${Math.ceil(minFlowLph)} L/h at ${psi.toFixed(1)} psi, with hose and filter rated for injection pressure. ${FUEL_SYSTEM_CAUTION}`,
+      note: `An in-tank or inline pump that delivers at least ${formatRequiredFlow(minFlowLph)} at ${formatFigure(psi, 'psi')}, with hose and filter rated for injection pressure. ${FUEL_SYSTEM_CAUTION}`,
     },
     {
       kind: 'part',
       category: 'fuel-regulator',
       requires: { pressurePsi: psi },
       partIds: [],
-      note: `A regulator set to ${psi.toFixed(1)} psi (return or returnless, to suit the tank). ${FUEL_SYSTEM_CAUTION}`,
+      note: `A regulator set to ${formatFigure(psi, 'psi')} (return or returnless, to suit the tank). ${FUEL_SYSTEM_CAUTION}`,
     },
   ];
 }
@@ -41,7 +47,7 @@ export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
   const required = requiredPumpFlowLph(massFlow, settings.fuelDensityLbPerGal, settings.fuelPumpMargin);
   const needPsi = spec.engine.fuelPressurePsi;
   const remedies = efiFuelSupplyRemedies(spec, required);
-  const need = `The engine burns ${massFlow.toFixed(0)} lb/h at ${spec.goals.targetPowerKw.toFixed(0)} kW, so the pump must deliver ${required.toFixed(0)} L/h at ${needPsi.toFixed(1)} psi (${Math.round(settings.fuelPumpMargin * 100)} % margin)`;
+  const need = `The engine burns ${formatFigure(massFlow, 'lb/h')} of fuel at ${formatFigure(spec.goals.targetPowerKw, 'kW', { decimals: 0 })}, so the pump must deliver at least ${formatRequiredFlow(required)} at ${formatFigure(needPsi, 'psi')} (${Math.round(settings.fuelPumpMargin * 100)} % margin)`;
   if (system.kind === 'carburetor') {
     return measuredFinding(
       FIELDS,
@@ -54,7 +60,7 @@ export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
     return measuredFinding(
       FIELDS,
       { measured: 0, required, margin: -required, status: 'fails' },
-      `${need}; the chassis pump is rated at only ${system.pumpRatedPsi.toFixed(1)} psi.`,
+      `${need}; the chassis pump is rated at only ${formatFigure(system.pumpRatedPsi, 'psi')}.`,
       remedies,
     );
   }
@@ -63,7 +69,7 @@ export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
   return measuredFinding(
     FIELDS,
     { measured: system.pumpFlowLph, required, margin, status },
-    `${need}; the chassis pump gives ${system.pumpFlowLph.toFixed(0)} L/h at ${system.pumpRatedPsi.toFixed(1)} psi.`,
+    `${need}; the chassis pump gives ${formatFigure(system.pumpFlowLph, 'L/h')} at ${formatFigure(system.pumpRatedPsi, 'psi')}.`,
     remedies.slice(0, 1),
   );
 }

@@ -3,6 +3,7 @@ import type { Finding } from '../../types/finding';
 import { kwToHp } from '../../units/quantities';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
+import { formatFigure, roundUpTo } from '../../units/figure-format';
 
 const FIELDS: FindingFields = {
   checkId: 'fuel.injector-size',
@@ -28,14 +29,18 @@ export function checkInjectorSize({ spec, settings }: CheckContext): Finding {
   const margin = measured - required;
   const status = statusFromMargin(margin, settings.fuelTightBandFraction * required);
   const sg = settings.fuelSpecificGravity;
-  const message = `At ${spec.goals.targetPowerKw.toFixed(0)} kW (${powerHp.toFixed(0)} hp) each of ${engine.cylinders} injectors must flow ${required.toFixed(1)} lb/h (${lbhToCcPerMin(required, sg).toFixed(0)} cc/min) at ${Math.round(settings.injectorMaxDuty * 100)} % duty; the engine's injectors give ${measured.toFixed(1)} lb/h (${lbhToCcPerMin(measured, sg).toFixed(0)} cc/min) at ${operatingPsi.toFixed(1)} psi.`;
+  // The requirement is rounded up once, to the same 0.1 lb/h the part remedy asks for, and printed that way everywhere.
+  const requiredShown = roundUpTo(required, 1);
+  const flow = (lbh: number): string => `${formatFigure(lbh, 'lb/h')} (${formatFigure(lbhToCcPerMin(lbh, sg), 'cc/min', { decimals: 0 })})`;
+  const psi = formatFigure(operatingPsi, 'psi');
+  const message = `At ${formatFigure(spec.goals.targetPowerKw, 'kW', { decimals: 0 })} (${formatFigure(powerHp, 'hp', { decimals: 0 })}) each of ${engine.cylinders} injectors must flow at least ${flow(requiredShown)} at ${Math.round(settings.injectorMaxDuty * 100)} % duty; the engine's injectors give ${flow(measured)} at ${psi}.`;
   return measuredFinding({ ...FIELDS, against: engine.id }, { measured, required, margin, status }, message, [
     {
       kind: 'part',
       category: 'injector',
-      requires: { minFlowLbh: Math.ceil(required * 10) / 10, atPsi: operatingPsi, count: engine.cylinders },
+      requires: { minFlowLbh: requiredShown, atPsi: operatingPsi, count: engine.cylinders },
       partIds: [],
-      note: `Injectors of at least ${required.toFixed(1)} lb/h at ${operatingPsi.toFixed(1)} psi; the controller's injector data must be updated to match. ${FUEL_SYSTEM_CAUTION}`,
+      note: `Injectors of at least ${formatFigure(requiredShown, 'lb/h')} at ${psi}; the controller's injector data must be updated to match. ${FUEL_SYSTEM_CAUTION}`,
     },
   ]);
 }

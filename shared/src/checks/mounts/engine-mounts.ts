@@ -3,7 +3,8 @@ import type { Finding, Remedy } from '../../types/finding';
 import type { ChassisPoint3, FitSpec, MountAdapterSpec, SideName } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
-import { COMMON_PRACTICE, mm } from '../envelope/envelope-common';
+import { COMMON_PRACTICE } from '../envelope/envelope-common';
+import { mmWithInches } from '../../units/figure-format';
 
 export interface MountOffset {
   side: SideName;
@@ -41,7 +42,7 @@ export function coveringAdapters(spec: FitSpec, o: MountOffset): MountAdapterSpe
 }
 
 function describe(o: MountOffset): string {
-  const part = (v: number, plus: string, minus: string): string => `${mm(Math.abs(v))} ${v >= 0 ? plus : minus}`;
+  const part = (v: number, plus: string, minus: string): string => `${mmWithInches(Math.abs(v))} ${v >= 0 ? plus : minus}`;
   return `${part(o.dx, 'rearward', 'forward')}, ${part(o.dz, 'up', 'down')}, ${part(o.dy, 'to the right', 'to the left')}`;
 }
 
@@ -52,7 +53,7 @@ export function runEngineMount({ spec, settings }: CheckContext, side: SideName)
     title: `Engine mount, ${side} side`,
     unit: 'mm' as const,
     limit: 'max' as const,
-    thresholdSource: `${COMMON_PRACTICE}: slotted holes and rubber isolators take up about 3 mm (setting mountDirectFitToleranceMm).`,
+    thresholdSource: `${COMMON_PRACTICE}: slotted holes and rubber isolators take up about ${mmWithInches(settings.mountDirectFitToleranceMm)} (the shop's direct-fit tolerance for mounts).`,
     against: `mount-pad-${side}`,
   };
   const missing: string[] = [];
@@ -66,12 +67,12 @@ export function runEngineMount({ spec, settings }: CheckContext, side: SideName)
   const remedies: Remedy[] = [];
   let message: string;
   if (status === 'ok') {
-    message = `The ${side} engine mount boss lands ${mm(o.distance)} from the chassis pad (${describe(o)}); it bolts up directly (up to ${mm(required)}).`;
+    message = `The ${side} engine mount boss lands ${mmWithInches(o.distance)} from the chassis pad, ${describe(o)}; it bolts up directly, since up to ${mmWithInches(required)} is taken up.`;
   } else {
     const adapters = coveringAdapters(spec, o);
     const need = { maxDxMm: Math.ceil(Math.abs(o.dx)), maxDzMm: Math.ceil(Math.abs(o.dz)), maxDyMm: Math.ceil(Math.abs(o.dy)) };
-    message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss (${mm(o.distance)} in all); ${
-      adapters.length ? `the ${adapters[0].name} bridges it.` : 'no listed adapter bridges it, so the mounts must be fabricated.'
+    message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss, ${mmWithInches(o.distance)} in all; ${
+      adapters.length ? `the catalog adapter ${adapters[0].name} covers that offset.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
     }`;
     if (adapters.length) {
       remedies.push({
@@ -79,7 +80,7 @@ export function runEngineMount({ spec, settings }: CheckContext, side: SideName)
         category: 'mount-adapter',
         requires: need,
         partIds: adapters.map((a) => a.id),
-        note: `Bridges ${describe(o)}.`,
+        note: `A mount adapter that covers ${describe(o)}.`,
       });
     }
     remedies.push({

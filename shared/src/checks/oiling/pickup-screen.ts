@@ -1,7 +1,7 @@
 import { pickupScreenPosition } from '../../oiling/oil-system';
 import type { Finding, Remedy } from '../../types/finding';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
-import { mmWithInches } from '../../units/figure-format';
+import { mmRangeWithInches, mmWithInches } from '../../units/figure-format';
 import { missingOilParts } from './pan-pickup-pump';
 
 const FIELDS: FindingFields = {
@@ -38,13 +38,13 @@ export function checkPickupScreen({ spec, settings }: CheckContext): Finding {
     return measuredFinding(
       { ...fields, limit: 'match' },
       { measured: pickup.screenU, required: pan.sumpCenterU, margin: -1, status: 'fails' },
-      `The pickup screen at u = ${pickup.screenU.toFixed(0)} mm is not over the ${pan.name}'s sump (centred at u = ${pan.sumpCenterU.toFixed(0)} mm): it would draw air at low oil level.`,
+      `The pickup screen sits ${mmWithInches(pickup.screenU)} ahead of the bellhousing face, but the ${pan.name}'s sump is centred ${mmWithInches(pan.sumpCenterU)} ahead of it: the screen is not over the sump and would draw air at low oil level.`,
       remedies,
     );
   }
   const margin = Math.min(belowMin, aboveMax);
   const status = statusFromMargin(margin, settings.pickupScreenTightBandMm);
-  const message = `The pickup screen sits ${mmWithInches(position.gapMm)} above the sump floor; it should be ${min}–${max} mm.`;
+  const message = `The pickup screen sits ${mmWithInches(position.gapMm)} above the sump floor; it should be ${mmRangeWithInches(min, max)}.`;
   return measuredFinding(fields, { measured: position.gapMm, required: limit === 'min' ? min : max, margin, status }, message, remedies);
 }
 
