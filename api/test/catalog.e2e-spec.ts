@@ -9,6 +9,11 @@ function panBody(): Record<string, unknown> {
   return { ...rest, name: 'Bench test rear-sump pan' };
 }
 
+/** A valid belt body: ribs and length; the server fills in the profile and the designation. */
+function beltBody(overrides: Record<string, unknown> = {}): Record<string, unknown> {
+  return { name: 'Bench test belt', ribs: 6, effectiveLengthMm: 1232, stockOnHand: 2, ...overrides };
+}
+
 describe('catalog', () => {
   let t: TestApp;
   let demo: Record<DemoRole, Session>;
@@ -181,5 +186,95 @@ describe('catalog', () => {
     const response = await t.http.delete(`/api/catalog/oil-pans/${DEMO_CATALOG_IDS.oilPans.kestrelStockFront}`).set(...bearer(demo.owner));
     expect(response.status).toBe(409);
     expect(response.body.code).toBe('still_referenced');
+  });
+
+  describe('serpentine belts', () => {
+    it('seeds the demo belt stock with designations', async () => {
+      const response = await t.http.get(`/api/catalog/belts/${DEMO_CATALOG_IDS.belts.sixPk1225}`).set(...bearer(demo.fabricator));
+      expect(response.status).toBe(200);
+      expect(response.body.spec).toMatchObject({ ribs: 6, profile: 'PK', effectiveLengthMm: 1225, designation: '6PK1225' });
+      expect(response.body.name).toBe('Ironbark stock 6PK1225');
+    });
+
+    it('creates, reads, filters by ribs, updates and deletes a belt; the designation follows ribs and length', async () => {
+      const created = await t.http.post('/api/catalog/belts').set(...bearer(demo.counter)).send(beltBody());
+      expect(created.status).toBe(201);
+      // Source: ISO 9982:2019 (PK rib pitch 3.56 mm; designation ribs × profile × effective length)
+      expect(created.body.spec).toEqual({
+        id: created.body.id,
+        name: 'Bench test belt',
+        ribs: 6,
+        profile: 'PK',
+        effectiveLengthMm: 1232,
+        designation: '6PK1232',
+        stockOnHand: 2,
+      });
+
+      const read = await t.http.get(`/api/catalog/belts/${created.body.id}`).set(...bearer(demo.fabricator));
+      expect(read.status).toBe(200);
+      expect(read.body.spec.designation).toBe('6PK1232');
+
+      const sixes = await t.http.get('/api/catalog/belts?ribs=6&pageSize=100').set(...bearer(demo.owner));
+      expect(sixes.status).toBe(200);
+      expect(sixes.body.items.map((item: { id: string }) => item.id)).toContain(created.body.id);
+      expect(sixes.body.items.every((item: { spec: { ribs: number } }) => item.spec.ribs === 6)).toBe(true);
+      const fives = await t.http.get('/api/catalog/belts?ribs=5').set(...bearer(demo.owner));
+      expect(fives.body.items.map((item: { id: string }) => item.id)).toEqual([DEMO_CATALOG_IDS.belts.fivePk1223]);
+
+      const updated = await t.http
+        .patch(`/api/catalog/belts/${created.body.id}`)
+        .set(...bearer(demo.estimator))
+        .send({ ribs: 8, effectiveLengthMm: 1510.4 });
+      expect(updated.status).toBe(200);
+      expect(updated.body.spec).toMatchObject({ id: created.body.id, ribs: 8, effectiveLengthMm: 1510.4, designation: '8PK1510', stockOnHand: 2 });
+      const [row] = await t.dataSource.query('SELECT ribs FROM catalog_belts WHERE id = ?', [created.body.id]);
+      expect(Number(row.ribs)).toBe(8);
+
+      const removed = await t.http.delete(`/api/catalog/belts/${created.body.id}`).set(...bearer(demo.owner));
+      expect(removed.status).toBe(204);
+      expect((await t.http.get(`/api/catalog/belts/${created.body.id}`).set(...bearer(demo.owner))).status).toBe(404);
+    });
+
+    it('refuses a filter belts do not have, and ribs on other kinds', async () => {
+      expect((await t.http.get('/api/catalog/belts?railPattern=KS-V8').set(...bearer(demo.owner))).status).toBe(400);
+      const engines = await t.http.get('/api/catalog/engines?ribs=6').set(...bearer(demo.owner));
+      expect(engines.status).toBe(400);
+      expect(engines.body.message).toMatch(/engines cannot be filtered by ribs/);
+    });
+
+    const cases: Array<{ what: string; body: () => Record<string, unknown>; message: RegExp }> = [
+      { what: 'too few ribs', body: () => beltBody({ ribs: 2 }), message: /ribs must not be less than 3/ },
+      { what: 'too many ribs', body: () => beltBody({ ribs: 13 }), message: /ribs must not be greater than 12/ },
+      { what: 'a fractional rib count', body: () => beltBody({ ribs: 6.5 }), message: /ribs must be an integer number/ },
+      { what: 'a length typed in inches', body: () => beltBody({ effectiveLengthMm: 48.2 }), message: /effectiveLengthMm must not be less than 400/ },
+      { what: 'an unknown field', body: () => beltBody({ colour: 'black' }), message: /property colour should not exist/ },
+      { what: 'a designation in the body', body: () => beltBody({ designation: '6PK9999' }), message: /property designation should not exist/ },
+      { what: 'a profile other than PK', body: () => beltBody({ profile: 'PJ' }), message: /profile must be one of: PK/ },
+      { what: 'a missing length', body: () => beltBody({ effectiveLengthMm: undefined }), message: /effectiveLengthMm must/ },
+    ];
+
+    it.each(cases)('refuses $what (400, nothing written)', async ({ body, message }) => {
+      const before = await countRows(t.dataSource, 'catalog_belts');
+      const response = await t.http.post('/api/catalog/belts').set(...bearer(demo.owner)).send(body());
+      expect(response.status).toBe(400);
+      expect(response.body.code).toBe('validation_failed');
+      expect(response.body.details.join('\n')).toMatch(message);
+      expect(await countRows(t.dataSource, 'catalog_belts')).toBe(before);
+    });
+
+    it('refuses a bad belt update and keeps the stored spec', async () => {
+      const id = DEMO_CATALOG_IDS.belts.sixPk1120;
+      const response = await t.http.patch(`/api/catalog/belts/${id}`).set(...bearer(demo.owner)).send({ ribs: 20 });
+      expect(response.status).toBe(400);
+      const [row] = await t.dataSource.query('SELECT spec, ribs FROM catalog_belts WHERE id = ?', [id]);
+      expect(JSON.parse(row.spec)).toMatchObject({ ribs: 6, designation: '6PK1120' });
+      expect(Number(row.ribs)).toBe(6);
+    });
+
+    it('lets the fabricator read belts but not write them; customers see none', async () => {
+      expect((await t.http.get('/api/catalog/belts').set(...bearer(demo.fabricator))).status).toBe(200);
+      expect((await t.http.post('/api/catalog/belts').set(...bearer(demo.fabricator)).send(beltBody())).status).toBe(403);
+      expect((await t.http.get('/api/catalog/belts').set(...bearer(demo.customer))).status).toBe(403);
+    });
   });
 });

@@ -74,6 +74,18 @@ describe('fit reports', () => {
     expect(project.status).toBe('checking');
   });
 
+  it("picks a stock belt from the shop's belts with the truck drive's rib count: the belt check is ok", async () => {
+    const response = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.counter));
+    expect(response.status).toBe(200);
+    // Only the 6-rib belts: the seeded 5PK1223 is nearer the computed length but is the wrong width.
+    expect(response.body.inputs.spec.candidates.stockBeltLengthsMm).toEqual([1120, 1165, 1195, 1225, 1260]);
+    const belt = finding(response.body.report, 'belt.serpentine-length') as FindingBody & { message: string; against: string };
+    // Source: ISO 9982:2019 (PK rib pitch 3.56 mm; designation ribs × profile × effective length)
+    expect(belt).toMatchObject({ status: 'ok', unit: 'mm', measured: 1225, against: DEMO_FIT_SELECTIONS[0].accessoryDriveId });
+    expect(belt.message).toMatch(/stock belt 6PK1225 is \+1\.6 mm/);
+    expect(belt.message).toMatch(/inside the tensioner's/);
+  });
+
   it('switching to the rear-sump pan clears the crossmember; compare shows the change', async () => {
     const put = await t.http
       .put(`/api/projects/${RIDGEBACK}/fit-selections`)
@@ -103,6 +115,25 @@ describe('fit reports', () => {
     expect(response.body.items.map((item: { id: string }) => item.id)).toEqual([rearReportId, stockReportId]);
     expect(response.body.items[0].report).toBeUndefined();
     expect(response.body.items[0].caution).toMatch(/planning aid/);
+  });
+
+  it("names each report's author in the summaries and the full report, null once the author is gone", async () => {
+    const names = new Map(Object.values(demo).map((session) => [session.user.id, session.user.name]));
+    const list = await t.http.get(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner)).expect(200);
+    for (const item of list.body.items as { createdById: string; createdByName: string | null }[]) {
+      expect(item.createdByName).toBe(names.get(item.createdById));
+      expect(item.createdByName).toEqual(expect.any(String));
+    }
+    const one = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.owner)).expect(200);
+    expect(one.body.createdByName).toBe(demo.fabricator.user.name);
+    const author = one.body.createdById;
+    await t.dataSource.query('UPDATE fit_reports SET createdById = NULL WHERE id = ?', [stockReportId]);
+    try {
+      const gone = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.owner)).expect(200);
+      expect(gone.body).toMatchObject({ createdById: null, createdByName: null });
+    } finally {
+      await t.dataSource.query('UPDATE fit_reports SET createdById = ? WHERE id = ?', [author, stockReportId]);
+    }
   });
 
   it('what-if with the shared demo spec returns exactly what the engine computes, and stores nothing', async () => {

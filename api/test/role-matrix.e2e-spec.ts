@@ -145,6 +145,15 @@ describe('role matrix', () => {
     }
   });
 
+  it('shows the shop rates to staff only; a customer gets id, name, units and currency', async () => {
+    const customer = await t.http.get('/api/shops/current').set(...bearer(sessions.customer)).expect(200);
+    expect(Object.keys(customer.body).sort()).toEqual(['currency', 'id', 'name', 'unitSystem']);
+    for (const role of STAFF) {
+      const staff = await t.http.get('/api/shops/current').set(...bearer(sessions[role])).expect(200);
+      expect(staff.body).toMatchObject({ id: customer.body.id, laborRatePerHour: expect.any(Number), taxRatePercent: expect.any(Number) });
+    }
+  });
+
   it('refuses every non-public route without a token', async () => {
     for (const route of CASES) {
       const response = await t.http[route.method](await route.path(t));

@@ -1,4 +1,5 @@
-import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_CATALOG_IDS, DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { bearer, countRows, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 
 describe('validation', () => {
@@ -101,5 +102,90 @@ describe('validation', () => {
   it('refuses deleting a customer who still has projects', async () => {
     const response = await t.http.delete(`/api/customers/${DEMO_CUSTOMER_IDS.juno}`).set(...bearer(s.owner)).expect(409);
     expect(response.body.code).toBe('customer_has_projects');
+  });
+
+  describe('catalog references of a project', () => {
+    beforeAll(() => seedCatalog(t.dataSource));
+
+    const REFS = [
+      { field: 'chassisModelId', wrongKind: DEMO_CATALOG_IDS.engines.kestrel53 },
+      { field: 'engineProfileId', wrongKind: DEMO_CATALOG_IDS.chassis.stag84 },
+      { field: 'transmissionId', wrongKind: DEMO_CATALOG_IDS.engines.kestrel62 },
+    ];
+
+    it.each(REFS)('refuses a $field outside the shop catalog on PATCH and POST, naming it, and writes nothing', async ({ field, wrongKind }) => {
+      const path = `/api/projects/${DEMO_PROJECT_IDS.ridgeback}`;
+      const before = await t.http.get(path).set(...bearer(s.owner)).expect(200);
+      const projects = await countRows(t.dataSource, 'projects');
+      for (const id of ['nope', wrongKind]) {
+        const patch = await t.http.patch(path).set(...bearer(s.owner)).send({ title: 'Renamed', [field]: id }).expect(400);
+        expect(patch.body).toMatchObject({ code: 'validation_failed', message: expect.stringMatching(new RegExp(`^${field} `)) });
+        const post = await t.http.post('/api/projects').set(...bearer(s.estimator)).send({ ...validProject, [field]: id }).expect(400);
+        expect(post.body.message).toMatch(new RegExp(`^${field} must be the id of (a chassis|an engine|a transmission) in your shop's catalog$`));
+      }
+      expect((await t.http.get(path).set(...bearer(s.owner)).expect(200)).body).toEqual(before.body);
+      expect(await countRows(t.dataSource, 'projects')).toBe(projects);
+    });
+
+    it('accepts ids of the shop catalog and null', async () => {
+      const path = `/api/projects/${DEMO_PROJECT_IDS.stag}`;
+      const body = {
+        chassisModelId: DEMO_CATALOG_IDS.chassis.stag84,
+        engineProfileId: DEMO_CATALOG_IDS.engines.kestrel62,
+        transmissionId: DEMO_CATALOG_IDS.transmissions.marlow65,
+      };
+      await t.http.patch(path).set(...bearer(s.owner)).send(body).expect(200);
+      const cleared = await t.http.patch(path).set(...bearer(s.owner)).send({ transmissionId: null }).expect(200);
+      expect(cleared.body).toMatchObject({ ...body, transmissionId: null });
+      const created = await t.http.post('/api/projects').set(...bearer(s.estimator)).send({ ...validProject, ...body }).expect(201);
+      expect(created.body).toMatchObject(body);
+    });
+  });
+
+  describe('blank names', () => {
+    it.each([
+      { what: 'a customer name', path: '/api/customers', body: { name: '   ' }, message: 'name must not be empty' },
+      { what: 'a project title', path: '/api/projects', body: { ...validProject, title: ' \t ' }, message: 'title must not be empty' },
+      { what: 'a catalog item name', path: '/api/catalog/chassis', body: null, message: 'name must not be empty' },
+    ])('refuses $what of only spaces', async ({ path, body, message }) => {
+      let send = body;
+      if (!send) {
+        const existing = await t.http.get(`${path}/${DEMO_CATALOG_IDS.chassis.stag84}`).set(...bearer(s.owner)).expect(200);
+        const { id: _id, ...spec } = existing.body.spec;
+        send = { ...spec, name: '   ' };
+      }
+      const response = await t.http.post(path).set(...bearer(s.owner)).send(send).expect(400);
+      expect(response.body.message).toBe(message);
+    });
+
+    it('refuses a blank shop name and trims a padded customer name', async () => {
+      const shop = await t.http.patch('/api/shops/current').set(...bearer(s.owner)).send({ name: '  ' }).expect(400);
+      expect(shop.body.message).toBe('name must not be empty');
+      const update = await t.http.patch(`/api/customers/${DEMO_CUSTOMER_IDS.juno}`).set(...bearer(s.owner)).send({ name: ' ' }).expect(400);
+      expect(update.body.message).toBe('name must not be empty');
+      const created = await t.http.post('/api/customers').set(...bearer(s.owner)).send({ name: '  Padded Name  ' }).expect(201);
+      expect(created.body.name).toBe('Padded Name');
+    });
+  });
+
+  describe('the headline message', () => {
+    it.each([
+      { what: 'a missing name', body: {}, headline: 'name must not be empty' },
+      { what: 'a number for the name', body: { name: 123 }, headline: 'name must be a string' },
+      { what: 'an object for the e-mail', body: { name: 'Ok', email: { a: 1 } }, headline: 'email must be an e-mail address' },
+      { what: 'an unknown field beside a too long name', body: { name: 'x'.repeat(121), extra: 1 }, headline: 'property extra should not exist' },
+    ])('leads with the real problem for $what and keeps every message', async ({ body, headline }) => {
+      const response = await t.http.post('/api/customers').set(...bearer(s.owner)).send(body).expect(400);
+      expect(response.body.message).toBe(headline);
+      expect(response.body.details[0]).toBe(headline);
+      if ('name' in body && typeof body.name === 'string' && body.name.length > 120) {
+        expect(response.body.details).toContain('name must be shorter than or equal to 120 characters');
+      }
+    });
+
+    it('still lists the length problem of a missing name in details', async () => {
+      const response = await t.http.post('/api/customers').set(...bearer(s.owner)).send({}).expect(400);
+      expect(response.body.details).toEqual(expect.arrayContaining(['name must be a string', 'name must be shorter than or equal to 120 characters']));
+    });
   });
 });

@@ -7,6 +7,7 @@ import type {
   OilPanSpec,
   OilPickupSpec,
   OilPumpSpec,
+  SerpentineBeltSpec,
   TransmissionSpec,
 } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
@@ -129,6 +130,14 @@ export class CatalogBellhousingAdapter extends CatalogItem<BellhousingAdapterSpe
   transmissionPattern: string;
 }
 
+@Entity('catalog_belts')
+@Index('ix_catalog_belts_shop_name', ['shopId', 'name'])
+export class CatalogSerpentineBelt extends CatalogItem<SerpentineBeltSpec> {
+  @Index('ix_catalog_belts_ribs')
+  @Column({ type: 'tinyint', unsigned: true })
+  ribs: number;
+}
+
 export const CATALOG_ENTITIES = [
   CatalogEngine,
   CatalogOilPan,
@@ -139,4 +148,5 @@ export const CATALOG_ENTITIES = [
   CatalogEngineController,
   CatalogMountAdapter,
   CatalogBellhousingAdapter,
+  CatalogSerpentineBelt,
 ];

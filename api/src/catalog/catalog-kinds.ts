@@ -1,4 +1,5 @@
 import { Type } from '@nestjs/common';
+import { formatBeltDesignation } from '@swapwright/shared';
 import type { ObjectLiteral } from 'typeorm';
 import {
   CatalogBellhousingAdapter,
@@ -10,6 +11,7 @@ import {
   CatalogOilPan,
   CatalogOilPickup,
   CatalogOilPump,
+  CatalogSerpentineBelt,
   CatalogTransmission,
 } from './catalog-item.entity';
 import {
@@ -22,6 +24,7 @@ import {
   OilPanResponseDto,
   OilPickupResponseDto,
   OilPumpResponseDto,
+  SerpentineBeltResponseDto,
   TransmissionResponseDto,
 } from './dto/catalog-item-response.dto';
 import {
@@ -33,6 +36,7 @@ import {
   CreateOilPanDto,
   CreateOilPickupDto,
   CreateOilPumpDto,
+  CreateSerpentineBeltDto,
   CreateTransmissionDto,
 } from './dto/create-catalog-item.dto';
 import { CatalogFilter } from './dto/list-catalog-query.dto';
@@ -45,6 +49,7 @@ import {
   UpdateOilPanDto,
   UpdateOilPickupDto,
   UpdateOilPumpDto,
+  UpdateSerpentineBeltDto,
   UpdateTransmissionDto,
 } from './dto/update-catalog-item.dto';
 
@@ -57,7 +62,8 @@ export type CatalogKind =
   | 'chassis'
   | 'controllers'
   | 'mount-adapters'
-  | 'bellhousing-adapters';
+  | 'bellhousing-adapters'
+  | 'belts';
 
 /** Body fields that are stored beside the spec rather than in it. */
 export type CatalogExtras = Record<string, unknown>;
@@ -76,6 +82,8 @@ export interface CatalogKindDefinition<E extends CatalogItem = CatalogItem> {
   extraFields: string[];
   /** The indexed copies of spec fields, plus the extras' columns. */
   columns(spec: ObjectLiteral, extras: CatalogExtras): ObjectLiteral;
+  /** Spec fields the server computes from the others on every save; the body may not set them. */
+  derive?(spec: ObjectLiteral): ObjectLiteral;
   /** Extra response fields read from the row. */
   present?(row: E): ObjectLiteral;
 }
@@ -93,6 +101,11 @@ function placementColumns(extras: CatalogExtras): ObjectLiteral {
 export function chassisDefaultPlacement(row: CatalogChassis): { setbackMm: number; heightMm: number; tiltDeg: number } | null {
   if (row.defaultSetbackMm === null || row.defaultHeightMm === null || row.defaultTiltDeg === null) return null;
   return { setbackMm: row.defaultSetbackMm, heightMm: row.defaultHeightMm, tiltDeg: row.defaultTiltDeg };
+}
+
+/** Profile and designation of a stock belt, from its ribs and effective length (ISO 9982 style, e.g. 6PK1225). */
+export function deriveBeltFields(spec: ObjectLiteral): { profile: 'PK'; designation: string } {
+  return { profile: 'PK', designation: formatBeltDesignation(Number(spec.ribs), Number(spec.effectiveLengthMm)) };
 }
 
 export const CATALOG_KINDS: Record<CatalogKind, CatalogKindDefinition> = {
@@ -195,5 +208,17 @@ export const CATALOG_KINDS: Record<CatalogKind, CatalogKindDefinition> = {
     filters: { enginePattern: 'enginePattern', transmissionPattern: 'transmissionPattern' },
     extraFields: [],
     columns: (spec) => ({ enginePattern: spec.enginePattern, transmissionPattern: spec.transmissionPattern }),
+  },
+  belts: {
+    kind: 'belts',
+    singular: 'serpentine belt',
+    entity: CatalogSerpentineBelt,
+    createDto: CreateSerpentineBeltDto,
+    updateDto: UpdateSerpentineBeltDto,
+    responseDto: SerpentineBeltResponseDto,
+    filters: { ribs: 'ribs' },
+    extraFields: [],
+    columns: (spec) => ({ ribs: spec.ribs }),
+    derive: deriveBeltFields,
   },
 };

@@ -33,6 +33,7 @@ import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { Page } from '../common/pagination/page-query.dto';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { createValidationPipe } from '../common/pipes/validation.pipe';
+import { withArticle } from '../common/text/article';
 import { CATALOG_READERS, CATALOG_WRITERS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { CatalogService } from './catalog.service';
@@ -98,7 +99,7 @@ export function createCatalogController(definition: CatalogKindDefinition): Type
 
     @Post()
     @Roles(...CATALOG_WRITERS)
-    @ApiOperation({ summary: `Add a ${one} to the catalog`, operationId: `create${titleOf(definition)}` })
+    @ApiOperation({ summary: `Add ${withArticle(one)} to the catalog`, operationId: `create${titleOf(definition)}` })
     @ApiBody({ type: definition.createDto })
     @ApiCreatedResponse({ type: definition.responseDto })
     @ApiBadRequestResponse({ type: ErrorResponseDto })
@@ -120,7 +121,7 @@ export function createCatalogController(definition: CatalogKindDefinition): Type
 
     @Patch(':id')
     @Roles(...CATALOG_WRITERS)
-    @ApiOperation({ summary: `Change a ${one}: given top-level fields replace the stored ones`, operationId: `update${titleOf(definition)}` })
+    @ApiOperation({ summary: `Change ${withArticle(one)}: given top-level fields replace the stored ones`, operationId: `update${titleOf(definition)}` })
     @ApiBody({ type: definition.updateDto })
     @ApiOkResponse({ type: definition.responseDto })
     @ApiBadRequestResponse({ type: ErrorResponseDto })
@@ -136,7 +137,7 @@ export function createCatalogController(definition: CatalogKindDefinition): Type
     @Delete(':id')
     @Roles(...CATALOG_WRITERS)
     @HttpCode(204)
-    @ApiOperation({ summary: `Remove a ${one} (refused while a project's fit selections use it)`, operationId: `delete${titleOf(definition)}` })
+    @ApiOperation({ summary: `Remove ${withArticle(one)} (refused while a project's fit selections use it)`, operationId: `delete${titleOf(definition)}` })
     @ApiNoContentResponse()
     @ApiNotFoundResponse({ type: ErrorResponseDto })
     async remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {

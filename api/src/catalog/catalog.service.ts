@@ -64,7 +64,9 @@ export class CatalogService {
     const { spec, extras } = this.split(definition, plain(body));
     const id = randomUUID();
     const name = String(spec.name).trim();
-    const fullSpec = { id, ...spec, name };
+    if (name === '') throw CatalogErrors.nameMissing();
+    const given = { id, ...spec, name };
+    const fullSpec = { ...given, ...definition.derive?.(given) };
     await this.scoped(kind).repository.insert({
       id,
       shopId: user.shopId,
@@ -82,7 +84,8 @@ export class CatalogService {
     if (changes.name !== undefined && String(changes.name).trim() === '') throw CatalogErrors.nameMissing();
     const merged: Record<string, unknown> = { ...(row.spec as Record<string, unknown>), ...changes, id: row.id };
     const name = String(merged.name).trim();
-    const spec = { ...merged, name };
+    const named = { ...merged, name };
+    const spec = { ...named, ...definition.derive?.(named) };
     await this.scoped(kind).repository.update(
       { id: row.id, shopId: user.shopId },
       { name, spec, ...definition.columns(spec, extras) } as object,
@@ -119,7 +122,7 @@ export class CatalogService {
   }
 
   /** Candidate specs of one kind, optionally restricted by filter columns, in name order. */
-  async candidateSpecs<TSpec>(kind: CatalogKind, user: Shop, where: Record<string, string> = {}): Promise<TSpec[]> {
+  async candidateSpecs<TSpec>(kind: CatalogKind, user: Shop, where: Record<string, string | number> = {}): Promise<TSpec[]> {
     const rows = await this.scoped(kind).repository.find({
       where: { ...where, shopId: user.shopId },
       order: { name: 'ASC', id: 'ASC' },

@@ -7,6 +7,7 @@ import { CreateAuthTokens1796100004000 } from './migrations/1796100004000-create
 import { CreateProjects1796100005000 } from './migrations/1796100005000-create-projects';
 import { CreateCatalog1796100010000 } from './migrations/1796100010000-create-catalog';
 import { CreateFitReports1796100011000 } from './migrations/1796100011000-create-fit-reports';
+import { CreateCatalogBelts1796100012000 } from './migrations/1796100012000-create-catalog-belts';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -19,4 +20,5 @@ export const MIGRATIONS = [
   CreateProjects1796100005000,
   CreateCatalog1796100010000,
   CreateFitReports1796100011000,
+  CreateCatalogBelts1796100012000,
 ];

@@ -1,6 +1,7 @@
 import type { CheckStatus, FitReport, FitSettings, FitSpec } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
+import type { User } from '../users/user.entity';
 
 /** Where the placement of a run came from. */
 export type PlacementSource = 'project' | 'proposed' | 'chassis-default';
@@ -30,6 +31,9 @@ export class FitReportRecord {
 
   @Column({ type: 'char', length: 36, nullable: true })
   createdById: string | null;
+
+  /** The author, joined in by the service when it reads (see FitReportsService); null once that user is gone. Not a column. */
+  createdBy?: Pick<User, 'name'> | null;
 
   @Column({ type: 'varchar', length: 20 })
   engineVersion: string;

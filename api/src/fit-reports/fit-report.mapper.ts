@@ -6,6 +6,7 @@ export function mapFitReportSummary(record: FitReportRecord): FitReportSummaryRe
     id: record.id,
     projectId: record.projectId,
     createdById: record.createdById,
+    createdByName: record.createdBy?.name ?? null,
     engineVersion: record.engineVersion,
     placement: { setbackMm: record.placementSetbackMm, heightMm: record.placementHeightMm, tiltDeg: record.placementTiltDeg },
     placementSource: record.placementSource,

@@ -11,13 +11,14 @@ import {
   type FitSpec,
 } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, In, Repository, SelectQueryBuilder } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
 import { Page, PageQueryDto, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { Project, ProjectStatus } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
+import { User } from '../users/user.entity';
 import { FitReportComparisonResponseDto } from './dto/fit-report-response.dto';
 import { WhatIfDto } from './dto/what-if.dto';
 import { mapFitReportSummary } from './fit-report.mapper';
@@ -92,8 +93,7 @@ export class FitReportsService {
 
   async list(user: AuthUser, projectId: string, query: PageQueryDto): Promise<Page<FitReportRecord>> {
     const project = await this.projects.get(user, projectId);
-    const [items, total] = await this.scoped
-      .query(user, 'report')
+    const [items, total] = await this.withAuthorName(this.scoped.query(user, 'report'))
       .andWhere('report.projectId = :projectId', { projectId: project.id })
       .orderBy('report.createdAt', 'DESC')
       .addOrderBy('report.id', 'DESC')
@@ -103,9 +103,14 @@ export class FitReportsService {
     return toPage(items, total, query);
   }
 
+  /** Joins the author onto `createdBy` (left join: null once that user was removed). */
+  private withAuthorName(builder: SelectQueryBuilder<FitReportRecord>): SelectQueryBuilder<FitReportRecord> {
+    return builder.leftJoinAndMapOne('report.createdBy', User, 'author', 'author.id = report.createdById');
+  }
+
   /** One report of the caller's shop; a customer only sees reports of their own projects. */
   async get(user: AuthUser, id: string): Promise<FitReportRecord> {
-    const record = await this.scoped.findById(user, id);
+    const record = await this.withAuthorName(this.scoped.query(user, 'report')).andWhere('report.id = :id', { id }).getOne();
     if (!record) throw FitReportErrors.notFound();
     try {
       await this.projects.get(user, record.projectId);

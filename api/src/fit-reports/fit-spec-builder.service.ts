@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { computeFitWindow, resolveFitSettings } from '@swapwright/shared';
 import type {
+  AccessoryDriveSpec,
   BellhousingAdapterSpec,
   ChassisSpec,
   EngineControllerSpec,
@@ -13,6 +14,7 @@ import type {
   OilPickupSpec,
   OilPumpSpec,
   Placement,
+  SerpentineBeltSpec,
   SwapGoals,
   TransmissionSpec,
 } from '@swapwright/shared';
@@ -97,24 +99,38 @@ export class FitSpecBuilderService {
         timingSetAdvanceDeg: selection.timingSetAdvanceDeg,
       }),
       goals: goals ?? ({} as SwapGoals),
-      candidates: await this.candidates(user, engine),
+      candidates: await this.candidates(user, engine, selection?.accessoryDriveId ?? undefined),
     };
     const placed = this.placement(project, partial, chassisRow, settingsOverrides, needed);
     if (needed.length > 0 || !goals || !placed) throw FitReportErrors.notReady(needed);
     return { spec: { ...partial, placement: placed.placement }, placementSource: placed.source, notes };
   }
 
-  /** The catalog parts the engine may offer as remedies: pans that bolt to this engine, adapters for its bell. */
-  async candidates(user: Shop, engine: EngineSpec): Promise<NonNullable<FitSpec['candidates']>> {
-    const [oilPans, oilPickups, oilPumps, mountAdapters, bellhousingAdapters, controllers] = await Promise.all([
+  /**
+   * The catalog parts the engine may offer as remedies: pans that bolt to this engine, adapters for its bell,
+   * and the lengths of the stock belts as wide as the chosen accessory drive.
+   */
+  async candidates(user: Shop, engine: EngineSpec, accessoryDriveId?: string): Promise<NonNullable<FitSpec['candidates']>> {
+    const drive = chosenAccessoryDrive(engine, accessoryDriveId);
+    const [oilPans, oilPickups, oilPumps, mountAdapters, bellhousingAdapters, controllers, belts] = await Promise.all([
       this.catalog.candidateSpecs<OilPanSpec>('oil-pans', user, { railPattern: engine.panRail.pattern }),
       this.catalog.candidateSpecs<OilPickupSpec>('oil-pickups', user),
       this.catalog.candidateSpecs<OilPumpSpec>('oil-pumps', user),
       this.catalog.candidateSpecs<MountAdapterSpec>('mount-adapters', user),
       this.catalog.candidateSpecs<BellhousingAdapterSpec>('bellhousing-adapters', user, { enginePattern: engine.bellPattern }),
       this.catalog.candidateSpecs<EngineControllerSpec>('controllers', user),
+      drive ? this.catalog.candidateSpecs<SerpentineBeltSpec>('belts', user, { ribs: drive.ribs }) : Promise.resolve([]),
     ]);
-    return { oilPans, oilPickups, oilPumps, mountAdapters, bellhousingAdapters, controllers };
+    const stockBeltLengthsMm = drive ? stockBeltLengthsFor(drive, belts) : [];
+    return {
+      oilPans,
+      oilPickups,
+      oilPumps,
+      mountAdapters,
+      bellhousingAdapters,
+      controllers,
+      ...(stockBeltLengthsMm.length > 0 && { stockBeltLengthsMm }),
+    };
   }
 
   /** Measured chassis values of this project; none until the measurement module provides them. */
@@ -183,6 +199,18 @@ export class FitSpecBuilderService {
     needed.push("set the engine's placement on the project (no placement fits and the chassis has no stock placement)");
     return null;
   }
+}
+
+/** The drive the fit engine's belt check reads: the selected one, else the engine's first (none for an unknown id). */
+export function chosenAccessoryDrive(engine: Pick<EngineSpec, 'accessoryDrives'>, accessoryDriveId?: string): AccessoryDriveSpec | null {
+  if (accessoryDriveId !== undefined) return engine.accessoryDrives.find((drive) => drive.id === accessoryDriveId) ?? null;
+  return engine.accessoryDrives[0] ?? null;
+}
+
+/** Effective lengths of the belts with the drive's rib count, shortest first, each length once. */
+export function stockBeltLengthsFor(drive: Pick<AccessoryDriveSpec, 'ribs'>, belts: readonly SerpentineBeltSpec[]): number[] {
+  const lengths = belts.filter((belt) => belt.ribs === drive.ribs).map((belt) => belt.effectiveLengthMm);
+  return [...new Set(lengths)].sort((a, b) => a - b);
 }
 
 /** Where the search runs when the chassis has no stock placement: the usual engine bay, front axle to firewall. */

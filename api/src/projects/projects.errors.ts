@@ -1,4 +1,5 @@
 import { AppError } from '../common/errors/app-error';
+import { withArticle } from '../common/text/article';
 
 export const ProjectErrors = {
   notFound: () => new AppError(404, 'project_not_found', 'That project does not exist in your shop.'),
@@ -9,5 +10,9 @@ export const ProjectErrors = {
       'project_fields_forbidden',
       `Your role may change only the placement and status of a project, not: ${fields.join(', ')}.`,
     ),
+  catalogRefNotFound: (field: string, singular: string) => {
+    const message = `${field} must be the id of ${withArticle(singular)} in your shop's catalog`;
+    return new AppError(400, 'validation_failed', message, [message]);
+  },
   notNullable: (field: string) => new AppError(400, 'validation_failed', `${field} must not be null`, [`${field} must not be null`]),
 };

@@ -1,4 +1,5 @@
 import { Repository } from 'typeorm';
+import { CatalogService } from '../catalog/catalog.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { Customer } from '../customers/customer.entity';
 import { Project } from './project.entity';
@@ -29,6 +30,10 @@ function repositoryMock<T extends object>(overrides: Partial<Record<keyof Reposi
   return { create: jest.fn((value) => value), insert: jest.fn(), exists: jest.fn(), ...overrides } as unknown as Repository<T>;
 }
 
+function catalogMock(known: string[] = []) {
+  return { definition: () => ({ singular: 'part' }), existing: jest.fn(async (_kind: string, _user: unknown, ids: string[]) => new Set(ids.filter((id) => known.includes(id)))) } as unknown as CatalogService;
+}
+
 describe('assertFieldsAllowed', () => {
   it('lets a fabricator change placement and status', () => {
     expect(() => assertFieldsAllowed(userStub.fabricator, { placement: null, status: 'checking' })).not.toThrow();
@@ -51,12 +56,27 @@ describe('ProjectsService.create', () => {
   it("refuses a customer outside the caller's shop before writing", async () => {
     const projects = repositoryMock<Project>();
     const customers = repositoryMock<Customer>({ exists: jest.fn().mockResolvedValue(false) });
-    const service = new ProjectsService(projects, customers);
+    const service = new ProjectsService(projects, customers, catalogMock());
 
     await expect(service.create(userStub.estimator, { customerId: 'c-other', title: 'Swap' })).rejects.toMatchObject({
       code: 'customer_not_found',
     });
     expect(customers.exists).toHaveBeenCalledWith({ where: { id: 'c-other', shopId: 'shop-a' } });
+    expect(projects.insert).not.toHaveBeenCalled();
+  });
+});
+
+describe('ProjectsService catalog references', () => {
+  it('refuses an engine id that is not in the shop catalog, naming the field, before writing', async () => {
+    const projects = repositoryMock<Project>();
+    const customers = repositoryMock<Customer>({ exists: jest.fn().mockResolvedValue(true) });
+    const catalog = catalogMock(['chassis-1']);
+    const service = new ProjectsService(projects, customers, catalog);
+
+    await expect(
+      service.create(userStub.estimator, { customerId: 'c-1', title: 'Swap', chassisModelId: 'chassis-1', engineProfileId: 'nope' }),
+    ).rejects.toMatchObject({ status: 400, message: expect.stringMatching(/^engineProfileId /) });
+    expect(catalog.existing).toHaveBeenCalledWith('engines', userStub.estimator, ['nope']);
     expect(projects.insert).not.toHaveBeenCalled();
   });
 });

@@ -3,6 +3,8 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { Repository, SelectQueryBuilder } from 'typeorm';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
+import { CatalogService } from '../catalog/catalog.service';
+import { CatalogKind } from '../catalog/catalog-kinds';
 import { FABRICATOR_PROJECT_FIELDS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
@@ -21,6 +23,13 @@ export function assertFieldsAllowed(user: Pick<AuthUser, 'role'>, changes: objec
   if (refused.length > 0) throw ProjectErrors.fieldsForbidden(refused);
 }
 
+/** Project fields that point at a catalog row of the caller's shop. */
+const CATALOG_REFS = [
+  { field: 'chassisModelId', kind: 'chassis' },
+  { field: 'engineProfileId', kind: 'engines' },
+  { field: 'transmissionId', kind: 'transmissions' },
+] as const satisfies readonly { field: keyof CreateProjectDto; kind: CatalogKind }[];
+
 function placementColumns(placement: ProjectPlacementDto | null | undefined): Partial<Project> {
   if (placement === undefined) return {};
   return {
@@ -37,6 +46,7 @@ export class ProjectsService {
   constructor(
     @InjectRepository(Project) projects: Repository<Project>,
     @InjectRepository(Customer) private readonly customers: Repository<Customer>,
+    private readonly catalog: CatalogService,
   ) {
     this.scoped = new TenantRepository(projects);
   }
@@ -76,6 +86,7 @@ export class ProjectsService {
 
   async create(user: AuthUser, input: CreateProjectDto): Promise<Project> {
     await this.assertCustomerInShop(user, input.customerId);
+    await this.assertCatalogRefs(user, input);
     const project = this.scoped.repository.create({
       id: randomUUID(),
       shopId: user.shopId,
@@ -106,6 +117,7 @@ export class ProjectsService {
     if (input.customerId !== undefined && input.customerId !== project.customerId) {
       await this.assertCustomerInShop(user, input.customerId);
     }
+    await this.assertCatalogRefs(user, input, project);
     const changes: Partial<Project> = {
       ...(input.customerId !== undefined && { customerId: input.customerId }),
       ...(input.title !== undefined && { title: input.title.trim() }),
@@ -129,6 +141,20 @@ export class ProjectsService {
   async remove(user: AuthUser, id: string): Promise<void> {
     const project = await this.get(user, id);
     await this.scoped.repository.delete({ id: project.id, shopId: user.shopId });
+  }
+
+  /** Every catalog id given (not null, and on update not the one already stored) must be a row of that kind in the caller's shop. */
+  private async assertCatalogRefs(
+    user: AuthUser,
+    input: Partial<Pick<CreateProjectDto, (typeof CATALOG_REFS)[number]['field']>>,
+    current?: Project,
+  ): Promise<void> {
+    for (const { field, kind } of CATALOG_REFS) {
+      const id = input[field];
+      if (id === undefined || id === null || id === current?.[field]) continue;
+      const found = await this.catalog.existing(kind, user, [id]);
+      if (!found.has(id)) throw ProjectErrors.catalogRefNotFound(field, this.catalog.definition(kind).singular);
+    }
   }
 
   private async assertCustomerInShop(user: AuthUser, customerId: string): Promise<void> {

@@ -5,6 +5,7 @@ import {
   DEMO_REAR_SUMP_PICKUP,
   DEMO_STOCK_PAN,
   DEMO_STOCK_PICKUP,
+  formatBeltDesignation,
   type BellhousingAdapterSpec,
   type ChassisSpec,
   type EngineControllerSpec,
@@ -14,6 +15,7 @@ import {
   type OilPickupSpec,
   type OilPumpSpec,
   type Placement,
+  type SerpentineBeltSpec,
   type TransmissionSpec,
 } from '@swapwright/shared';
 import { DEMO_CATALOG_IDS as IDS } from './demo-catalog-ids';
@@ -350,6 +352,25 @@ const bellhousingAdapters: BellhousingAdapterSpec[] = [
   },
 ];
 
+/**
+ * Stock 6-rib belts around the demo drives' computed lengths (serpentineLength: Kestrel truck ≈ 1223 mm, Kestrel
+ * compact ≈ 1118 mm, Harrow ≈ 1162 mm), so each drive has one inside its tensioner's take-up; 6PK1195 and 6PK1260
+ * sit just outside the truck drive's range, and the 5-rib belt is the wrong width for every demo drive.
+ */
+function belt(id: string, ribs: number, effectiveLengthMm: number, stockOnHand: number): SerpentineBeltSpec {
+  const designation = formatBeltDesignation(ribs, effectiveLengthMm);
+  return { id, name: `Ironbark stock ${designation}`, ribs, profile: 'PK', effectiveLengthMm, designation, stockOnHand };
+}
+
+const belts: SerpentineBeltSpec[] = [
+  belt(IDS.belts.sixPk1120, 6, 1120, 3),
+  belt(IDS.belts.sixPk1165, 6, 1165, 2),
+  belt(IDS.belts.sixPk1195, 6, 1195, 1),
+  belt(IDS.belts.sixPk1225, 6, 1225, 4),
+  belt(IDS.belts.sixPk1260, 6, 1260, 2),
+  belt(IDS.belts.fivePk1223, 5, 1223, 1),
+];
+
 export interface DemoCatalog {
   engines: EngineSpec[];
   oilPans: OilPanSpec[];
@@ -360,6 +381,7 @@ export interface DemoCatalog {
   controllers: EngineControllerSpec[];
   mountAdapters: MountAdapterSpec[];
   bellhousingAdapters: BellhousingAdapterSpec[];
+  belts: SerpentineBeltSpec[];
 }
 
 export const DEMO_CATALOG: DemoCatalog = {
@@ -372,4 +394,5 @@ export const DEMO_CATALOG: DemoCatalog = {
   controllers,
   mountAdapters,
   bellhousingAdapters,
+  belts,
 };

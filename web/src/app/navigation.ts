@@ -54,7 +54,8 @@ export function activeNavKey(items: NavItem[], pathname: string): string | undef
 export const sectionRoles = {
   projects: ['owner', 'estimator', 'fabricator', 'counter'],
   projectDetail: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
-  projectFit: ['owner', 'estimator', 'fabricator', 'counter'],
+  // customers read their own project's stored reports (read-only)
+  projectFit: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
   workOrders: ['owner', 'fabricator'],
@@ -66,6 +67,8 @@ export const sectionRoles = {
 
 export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';
 export const canEditProjects = (role: Role): boolean => role === 'owner' || role === 'estimator';
+/** Customers only read stored fit reports: no catalog, selections or placement. */
+export const isFitReadOnly = (role: Role): boolean => role === 'customer';
 /** Run fit checks, change fit selections and save the placement. */
 export const canRunFitCheck = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'fabricator';
 /** Catalog writers, as the API allows: owner, estimator and counter (the fabricator reads). */

@@ -5,13 +5,15 @@ export type FormErrorAlertProps = {
   error: unknown;
   /** Replace the server's sentence for known codes, e.g. bad credentials. */
   messages?: Partial<Record<string, string>>;
+  /** Rewrites the server's sentences (title and details) into the form's own words. */
+  translate?: (text: string) => string;
 };
 
-export function FormErrorAlert({ error, messages }: FormErrorAlertProps) {
+export function FormErrorAlert({ error, messages, translate = (t) => t }: FormErrorAlertProps) {
   if (!error) return null;
   const body = getApiErrorBody(error);
-  const title = (body && messages?.[body.code]) || getErrorMessage(error);
-  const details = body?.details?.filter((d) => d !== title) ?? [];
+  const title = translate((body && messages?.[body.code]) || getErrorMessage(error));
+  const details = body?.details?.map(translate).filter((d) => d !== title) ?? [];
   return (
     <Alert
       type="error"

@@ -22,9 +22,5 @@ export function sortOrderFor(column: string, sort?: string, order?: SortOrder): 
   return order === 'desc' ? 'descend' : 'ascend';
 }
 
-export function formatDate(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return '—';
-  return new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric' }).format(d);
-}
+/** Kept for existing imports; the formatter lives in `@/lib/dates`. */
+export { formatDate } from './dates';

@@ -1,5 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, MaxLength, MinLength } from 'class-validator';
+import { Trim } from '../../common/decorators/trim.decorator';
 
 export const PASSWORD_MIN = 8;
 // bcrypt reads at most 72 bytes.
@@ -18,12 +19,14 @@ export class SignUpDto {
   password: string;
 
   @ApiProperty({ maxLength: 120 })
+  @Trim()
   @IsString()
   @IsNotEmpty({ message: 'name must not be empty' })
   @MaxLength(120)
   name: string;
 
   @ApiProperty({ maxLength: 120, example: 'Back Forty Garage' })
+  @Trim()
   @IsString()
   @IsNotEmpty({ message: 'shopName must not be empty' })
   @MaxLength(120)

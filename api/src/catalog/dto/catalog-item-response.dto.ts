@@ -9,6 +9,7 @@ import {
   OilPickupSpecDto,
   OilPumpSpecDto,
   PlacementDto,
+  SerpentineBeltSpecDto,
   TransmissionSpecDto,
 } from './part-spec.dto';
 
@@ -51,4 +52,7 @@ export class MountAdapterResponseDto extends CatalogItemFieldsDto {
 }
 export class BellhousingAdapterResponseDto extends CatalogItemFieldsDto {
   @ApiProperty({ type: BellhousingAdapterSpecDto }) spec: BellhousingAdapterSpecDto;
+}
+export class SerpentineBeltResponseDto extends CatalogItemFieldsDto {
+  @ApiProperty({ type: SerpentineBeltSpecDto }) spec: SerpentineBeltSpecDto;
 }

@@ -1,6 +1,6 @@
 import { ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsOptional, ValidateNested } from 'class-validator';
+import { IsIn, IsOptional, ValidateNested } from 'class-validator';
 import {
   BellhousingAdapterSpecDto,
   ChassisSpecDto,
@@ -10,7 +10,9 @@ import {
   OilPanSpecDto,
   OilPickupSpecDto,
   OilPumpSpecDto,
+  BELT_PROFILES,
   PlacementDto,
+  SerpentineBeltSpecDto,
   TransmissionSpecDto,
 } from './part-spec.dto';
 
@@ -34,4 +36,12 @@ export class CreateChassisDto extends OmitType(ChassisSpecDto, ['id'] as const) 
   @ValidateNested()
   @Type(() => PlacementDto)
   defaultPlacement?: PlacementDto | null;
+}
+
+/** The designation is computed from ribs and length; the profile defaults to PK, the only one the fit engine knows. */
+export class CreateSerpentineBeltDto extends OmitType(SerpentineBeltSpecDto, ['id', 'designation', 'profile'] as const) {
+  @ApiPropertyOptional({ enum: BELT_PROFILES, default: 'PK' })
+  @IsOptional()
+  @IsIn(BELT_PROFILES, { message: `profile must be one of: ${BELT_PROFILES.join(', ')}` })
+  profile?: (typeof BELT_PROFILES)[number];
 }

@@ -1,7 +1,8 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { PageQueryDto } from '../../common/pagination/page-query.dto';
-import { PICKUP_MOUNTS, SUMP_POSITIONS } from './part-spec.dto';
+import { BELT_RIBS, PICKUP_MOUNTS, SUMP_POSITIONS } from './part-spec.dto';
 
 export const CATALOG_SORT_FIELDS = ['name', 'createdAt', 'updatedAt'] as const;
 export type CatalogSortField = (typeof CATALOG_SORT_FIELDS)[number];
@@ -15,6 +16,7 @@ export const CATALOG_FILTERS = [
   'bellPattern',
   'enginePattern',
   'transmissionPattern',
+  'ribs',
 ] as const;
 export type CatalogFilter = (typeof CATALOG_FILTERS)[number];
 
@@ -63,4 +65,12 @@ export class ListCatalogQueryDto extends PageQueryDto {
   @IsString()
   @MaxLength(40)
   transmissionPattern?: string;
+
+  @ApiPropertyOptional({ type: 'integer', minimum: BELT_RIBS.min, maximum: BELT_RIBS.max, description: 'belts' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(BELT_RIBS.min)
+  @Max(BELT_RIBS.max)
+  ribs?: number;
 }

@@ -8,6 +8,7 @@ import type {
   OilPanSpec,
   OilPickupSpec,
   OilPumpSpec,
+  SerpentineBeltSpec,
   TransmissionSpec,
 } from '@swapwright/shared';
 import { IsNegative } from 'class-validator';
@@ -19,6 +20,7 @@ import {
   NestedList,
   NumberIn,
   OneOf,
+  OptionalIntIn,
   OptionalNested,
   OptionalNumberIn,
   Text,
@@ -60,6 +62,8 @@ export const OBSTACLE_KINDS = [
 ] as const;
 export const FUEL_SYSTEM_KINDS = ['carburetor', 'efi-return', 'efi-returnless'] as const;
 export const DRIVESHAFT_MATERIALS = ['steel', 'aluminum'] as const;
+export const BELT_PROFILES = ['PK'] as const;
+export const BELT_RIBS = { min: 3, max: 12 } as const;
 
 // ---------------------------------------------------------------- points
 
@@ -342,6 +346,18 @@ export class BellhousingAdapterSpecDto implements BellhousingAdapterSpec {
   @Text(40) enginePattern: string;
   @Text(40) transmissionPattern: string;
   @NumberIn(0, 150) thicknessMm: number;
+}
+
+// ---------------------------------------------------------------- belts
+
+export class SerpentineBeltSpecDto implements SerpentineBeltSpec {
+  @Text(64) id: string;
+  @Text() name: string;
+  @IntIn(BELT_RIBS.min, BELT_RIBS.max) ribs: number;
+  @OneOf(BELT_PROFILES) profile: (typeof BELT_PROFILES)[number];
+  @NumberIn(400, 3000, 'Effective (outside) length, ISO 9982') effectiveLengthMm: number;
+  @Text(16, 'Ribs × profile × effective length, e.g. 6PK1225; computed by the server') designation: string;
+  @OptionalIntIn(0, 100_000, 'Belts on the shelf') stockOnHand?: number;
 }
 
 // ---------------------------------------------------------------- placement

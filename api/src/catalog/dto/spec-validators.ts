@@ -40,6 +40,16 @@ export function OptionalNumberIn(min: number, max: number, description?: string)
   );
 }
 
+export function OptionalIntIn(min: number, max: number, description?: string) {
+  return applyDecorators(
+    ApiPropertyOptional({ type: 'integer', minimum: min, maximum: max, description }),
+    IsOptional(),
+    IsInt(),
+    Min(min),
+    Max(max),
+  );
+}
+
 export function IntIn(min: number, max: number, description?: string) {
   return applyDecorators(ApiProperty({ type: 'integer', minimum: min, maximum: max, description }), IsInt(), Min(min), Max(max));
 }
@@ -109,9 +119,17 @@ export function NumberList(min: number, max: number, itemMin: number, itemMax: n
   );
 }
 
+/**
+ * @nestjs/swagger resolves a thunk only when the function is named `type` (as an inline `type: () => X` is);
+ * a thunk handed through a helper is anonymous and would end up as an empty `$ref`.
+ */
+function lazy(type: () => ClassType): () => ClassType {
+  return { type: () => type() }.type;
+}
+
 export function Nested(type: () => ClassType, description?: string) {
   return applyDecorators(
-    ApiProperty({ type, description }),
+    ApiProperty({ type: lazy(type), description }),
     IsObject({ message: '$property must be an object' }),
     ValidateNested(),
     Type(type),
@@ -120,7 +138,7 @@ export function Nested(type: () => ClassType, description?: string) {
 
 export function OptionalNested(type: () => ClassType, description?: string) {
   return applyDecorators(
-    ApiPropertyOptional({ type, description }),
+    ApiPropertyOptional({ type: lazy(type), description }),
     IsOptional(),
     IsObject({ message: '$property must be an object' }),
     ValidateNested(),
@@ -130,7 +148,7 @@ export function OptionalNested(type: () => ClassType, description?: string) {
 
 export function NestedList(type: () => ClassType, min: number, max: number, description?: string) {
   return applyDecorators(
-    ApiProperty({ type, isArray: true, minItems: min, maxItems: max, description }),
+    ApiProperty({ type: lazy(type), isArray: true, minItems: min, maxItems: max, description }),
     IsArray(),
     ArrayMinSize(min, { message: `$property must have at least ${min} item${min === 1 ? '' : 's'}` }),
     ArrayMaxSize(max),
@@ -141,7 +159,7 @@ export function NestedList(type: () => ClassType, min: number, max: number, desc
 
 export function OptionalNestedList(type: () => ClassType, min: number, max: number, description?: string) {
   return applyDecorators(
-    ApiPropertyOptional({ type, isArray: true, minItems: min, maxItems: max, description }),
+    ApiPropertyOptional({ type: lazy(type), isArray: true, minItems: min, maxItems: max, description }),
     IsOptional(),
     IsArray(),
     ArrayMinSize(min),

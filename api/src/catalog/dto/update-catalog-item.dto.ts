@@ -8,6 +8,7 @@ import {
   CreateOilPanDto,
   CreateOilPickupDto,
   CreateOilPumpDto,
+  CreateSerpentineBeltDto,
   CreateTransmissionDto,
 } from './create-catalog-item.dto';
 
@@ -21,3 +22,4 @@ export class UpdateChassisDto extends PartialType(CreateChassisDto) {}
 export class UpdateEngineControllerDto extends PartialType(CreateEngineControllerDto) {}
 export class UpdateMountAdapterDto extends PartialType(CreateMountAdapterDto) {}
 export class UpdateBellhousingAdapterDto extends PartialType(CreateBellhousingAdapterDto) {}
+export class UpdateSerpentineBeltDto extends PartialType(CreateSerpentineBeltDto) {}

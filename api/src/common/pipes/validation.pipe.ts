@@ -1,23 +1,57 @@
 import { ValidationError, ValidationPipe } from '@nestjs/common';
 import { CommonErrors } from '../errors/app-error';
 
-function flatten(errors: ValidationError[], parent = ''): string[] {
+interface Problem {
+  constraint: string;
+  message: string;
+}
+
+/** Missing or refused fields first, then wrong types; length, range and format problems after them. */
+const CONSTRAINT_RANK: Record<string, number> = {
+  isDefined: 0,
+  isNotEmpty: 0,
+  whitelistValidation: 0,
+  isString: 1,
+  isNumber: 1,
+  isInt: 1,
+  isBoolean: 1,
+  isEmail: 1,
+  isUuid: 1,
+  isIn: 1,
+  isEnum: 1,
+  isArray: 1,
+  isObject: 1,
+  nestedValidation: 1,
+};
+const OTHER_RANK = 2;
+
+function flatten(errors: ValidationError[], parent = ''): Problem[] {
   return errors.flatMap((error) => {
     const path = parent ? `${parent}.${error.property}` : error.property;
-    const own = Object.values(error.constraints ?? {}).map((message) =>
-      parent && message.startsWith(error.property) ? `${parent}.${message}` : message,
-    );
+    const own = Object.entries(error.constraints ?? {}).map(([constraint, message]) => ({
+      constraint,
+      message: parent && message.startsWith(error.property) ? `${parent}.${message}` : message,
+    }));
     return [...own, ...flatten(error.children ?? [], path)];
   });
 }
 
-/** Unknown fields refused, types converted, every message listed in `details`. */
+/** Every message, the most telling first (stable within a rank), so the headline names the real problem. */
+export function validationMessages(errors: ValidationError[]): string[] {
+  const rank = (problem: Problem) => CONSTRAINT_RANK[problem.constraint] ?? OTHER_RANK;
+  return flatten(errors)
+    .map((problem, index) => ({ problem, index }))
+    .sort((a, b) => rank(a.problem) - rank(b.problem) || a.index - b.index)
+    .map(({ problem }) => problem.message);
+}
+
+/** Unknown fields refused, types converted, every message listed in `details`; `message` is the first of them. */
 export function createValidationPipe(): ValidationPipe {
   return new ValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
     validationError: { target: false, value: false },
-    exceptionFactory: (errors) => CommonErrors.validation(flatten(errors)),
+    exceptionFactory: (errors) => CommonErrors.validation(validationMessages(errors)),
   });
 }

@@ -7,6 +7,7 @@ import { Role } from './role';
  * | route group                          | owner | estimator | fabricator        | counter | customer   |
  * | ------------------------------------ | ----- | --------- | ----------------- | ------- | ---------- |
  * | GET /auth/me, GET /shops/current     | yes   | yes       | yes               | yes     | yes        |
+ * | … its rates (labor, tax, supplies)   | yes   | yes       | yes               | yes     | -          |
  * | PATCH /shops/current                 | yes   | -         | -                 | -       | -          |
  * | /memberships, /invitations (manage)  | yes   | -         | -                 | -       | -          |
  * | GET /customers, /customers/:id       | yes   | yes       | yes               | yes     | -          |
@@ -27,6 +28,8 @@ import { Role } from './role';
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];
 export const STAFF: Role[] = ['owner', 'estimator', 'fabricator', 'counter'];
+/** Who sees the shop's rates in GET /shops/current; the others get only its name, units and currency. */
+export const SHOP_RATE_READERS: Role[] = STAFF;
 export const CUSTOMER_READERS: Role[] = STAFF;
 export const CUSTOMER_WRITERS: Role[] = ['owner', 'estimator'];
 export const PROJECT_READERS: Role[] = ALL_ROLES;

@@ -31,6 +31,8 @@ function rowsOf(kind: CatalogKind): SeedRow[] {
       return plain(DEMO_CATALOG.mountAdapters);
     case 'bellhousing-adapters':
       return plain(DEMO_CATALOG.bellhousingAdapters);
+    case 'belts':
+      return plain(DEMO_CATALOG.belts);
   }
 }
 

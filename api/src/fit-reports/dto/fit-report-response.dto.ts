@@ -48,6 +48,8 @@ export class FitReportSummaryResponseDto {
   @ApiProperty({ format: 'uuid' }) id: string;
   @ApiProperty({ format: 'uuid' }) projectId: string;
   @ApiProperty({ type: String, nullable: true }) createdById: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Name of the user who ran the check; null once that user is gone' })
+  createdByName: string | null;
   @ApiProperty() engineVersion: string;
   @ApiProperty({ type: PlacementDto }) placement: PlacementDto;
   @ApiProperty({ enum: PLACEMENT_SOURCES, description: "project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat" })

@@ -1,12 +1,13 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
+import { withArticle } from '../../common/text/article';
 import { DRIVESHAFT_MATERIALS } from '../../catalog/dto/part-spec.dto';
 import { DriveshaftSpecDto } from './fit-spec.dto';
 
 function OptionalCatalogId(kind: string) {
   return (target: object, key: string) => {
-    ApiPropertyOptional({ type: String, format: 'uuid', nullable: true, description: `A ${kind} of the shop's catalog` })(target, key);
+    ApiPropertyOptional({ type: String, format: 'uuid', nullable: true, description: `${withArticle(kind, true)} of the shop's catalog` })(target, key);
     IsOptional()(target, key);
     IsUUID('all', { message: `${key} must be a UUID` })(target, key);
   };

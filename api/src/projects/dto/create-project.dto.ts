@@ -14,6 +14,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { PROJECT_STATUSES, PROJECT_USES, ProjectStatus, ProjectUse } from '../project.entity';
+import { Trim } from '../../common/decorators/trim.decorator';
 
 export class ProjectGoalsDto {
   @ApiProperty({ enum: PROJECT_USES })
@@ -91,6 +92,7 @@ export class CreateProjectDto extends CatalogRefs {
   customerId: string;
 
   @ApiProperty({ maxLength: 160 })
+  @Trim()
   @IsString()
   @IsNotEmpty({ message: 'title must not be empty' })
   @MaxLength(160)

@@ -1,12 +1,14 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsISO4217CurrencyCode, IsNotEmpty, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { UNIT_SYSTEMS, UnitSystem } from '../shop.entity';
+import { Trim } from '../../common/decorators/trim.decorator';
 
 export class UpdateShopDto {
   @ApiPropertyOptional({ maxLength: 120 })
   @IsOptional()
+  @Trim()
   @IsString()
-  @IsNotEmpty()
+  @IsNotEmpty({ message: 'name must not be empty' })
   @MaxLength(120)
   name?: string;
 

@@ -7,7 +7,8 @@ export type CatalogKind =
   | 'chassis'
   | 'controllers'
   | 'mount-adapters'
-  | 'bellhousing-adapters';
+  | 'bellhousing-adapters'
+  | 'belts';
 
 export const catalogKinds: readonly CatalogKind[] = [
   'engines',
@@ -19,6 +20,7 @@ export const catalogKinds: readonly CatalogKind[] = [
   'controllers',
   'mount-adapters',
   'bellhousing-adapters',
+  'belts',
 ];
 
 export type CatalogSpec = Record<string, unknown>;

@@ -23,6 +23,8 @@ export type FitReportListItem = {
   createdAt: string;
   createdById?: string | null;
   createdBy?: { id: string; name: string } | null;
+  /** Who ran it, by name (list summaries). */
+  createdByName?: string | null;
   placementSource?: 'project' | 'proposed' | 'chassis-default';
   /** Counts by status (the API calls them `counts`). */
   counts?: FitSummary;

@@ -6,6 +6,7 @@ import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { toProjectDetail } from '@/config/paths';
 import { getErrorMessage } from '@/lib/api-error';
+import { formatDateTime } from '@/lib/dates';
 import { notifySuccess } from '@/lib/notifier';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useFitReport } from '@/features/fit-reports/api/get-fit-report';
@@ -27,7 +28,7 @@ import type { FitSelectionKey, FitSelections } from '@/features/fit-reports/type
 import { useProject } from '@/features/projects/api/get-project';
 import { useUpdateProject } from '@/features/projects/api/update-project';
 import type { Project } from '@/features/projects/types';
-import { canEditProjects, canRunFitCheck } from '../../navigation';
+import { canEditProjects, canRunFitCheck, isFitReadOnly } from '../../navigation';
 import { engineSpecOf, panOf, pickupsOf, useFitCatalog } from './use-fit-selection-slots';
 import '@/features/fit-reports/components/fit-print.css';
 
@@ -66,14 +67,16 @@ export function ProjectFitPage() {
   const user = useSignedInUser();
   const canRun = canRunFitCheck(user.role);
   const canPickProjectParts = canEditProjects(user.role);
+  // customers get the stored report only; the catalog and selections answer them 403
+  const readOnly = isFitReadOnly(user.role);
   const project = useProject(projectId);
-  const selections = useFitSelections(projectId);
+  const selections = useFitSelections(projectId, { enabled: !readOnly });
   const reports = useFitReports(projectId);
   const [openId, setOpenId] = useState<string | undefined>();
   const latestId = reports.data?.[0]?.id;
   const reportId = openId ?? latestId;
   const report = useFitReport(reportId);
-  const catalog = useFitCatalog();
+  const catalog = useFitCatalog(!readOnly);
   const [preview, setPreview] = useState<Placement | null>(null);
   const [stale, setStale] = useState(false);
   const [busyPartId, setBusyPartId] = useState<string | null>(null);
@@ -241,13 +244,15 @@ export function ProjectFitPage() {
       <Flex vertical gap={16}>
         <ReportCaution caution={shown?.caution} safety={shown?.safety} />
 
-        <Card title="What goes in" className="fit-control fit-selections-card" size="small">
-          {selections.isError ? (
-            <ErrorState error={selections.error} onRetry={() => void selections.refetch()} />
-          ) : (
-            <SelectionsPanel slots={slots} saving={updateSelections.isPending || updateProject.isPending} />
-          )}
-        </Card>
+        {!readOnly && (
+          <Card title="What goes in" className="fit-control fit-selections-card" size="small">
+            {selections.isError ? (
+              <ErrorState error={selections.error} onRetry={() => void selections.refetch()} />
+            ) : (
+              <SelectionsPanel slots={slots} saving={updateSelections.isPending || updateProject.isPending} />
+            )}
+          </Card>
+        )}
 
         {run.isError && <Alert type="error" showIcon title="The fit check could not run" description={getErrorMessage(run.error)} />}
         {stale && stored && (
@@ -277,7 +282,7 @@ export function ProjectFitPage() {
               title={
                 <Flex gap={8} align="center" wrap>
                   <span>{isPreview ? 'Preview at the new placement' : 'Report'}</span>
-                  {isPreview ? <Tag color="gold">Preview, not saved</Tag> : <Tag>Stored {new Date(stored.createdAt).toLocaleString('en-US')}</Tag>}
+                  {isPreview ? <Tag color="gold">Preview, not saved</Tag> : <Tag>Stored {formatDateTime(stored.createdAt)}</Tag>}
                   <Typography.Text type="secondary" style={{ fontSize: 12, fontWeight: 400 }}>
                     engine {shown.engineVersion}
                   </Typography.Text>
@@ -308,7 +313,7 @@ export function ProjectFitPage() {
             </Card>
 
             <Row gutter={[16, 16]}>
-              <Col xs={24} xl={16}>
+              <Col xs={24} xl={readOnly ? 24 : 16}>
                 <Card title="Side view" className="fit-side-card">
                   <SideView spec={shownSpec} findings={shown.findings} window={fitWindow} proposed={fitWindow?.best?.placement ?? null} />
                   {fitWindow && !fitWindow.columns.some((c) => c.feasible) && (
@@ -323,6 +328,7 @@ export function ProjectFitPage() {
                   )}
                 </Card>
               </Col>
+              {!readOnly && (
               <Col xs={24} xl={8}>
                 <Card className="fit-control">
                   <PlacementControls
@@ -337,6 +343,7 @@ export function ProjectFitPage() {
                   />
                 </Card>
               </Col>
+              )}
               <Col xs={24} xl={12}>
                 <Card title="Front view: widths" className="fit-front-card">
                   <FrontView spec={shownSpec} minGapMm={minRailGap} />

@@ -5,7 +5,7 @@ import { paths, toProjectFit } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
-import { formatDate } from '@/lib/table';
+import { formatDate } from '@/lib/dates';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useDeleteProject } from '@/features/projects/api/delete-project';
 import { useProject } from '@/features/projects/api/get-project';
@@ -14,8 +14,9 @@ import { ProjectFormDrawer } from '@/features/projects/components/project-form-d
 import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
 import { useShop } from '@/features/shop/api/get-shop';
-import { canEditProjects } from '../../navigation';
+import { canEditProjects, canRunFitCheck } from '../../navigation';
 import { useCustomerOptions } from '../shared/use-customer-options';
+import { useProjectPartNames } from './use-project-part-names';
 
 export function ProjectDetailPage() {
   const { projectId = '' } = useParams();
@@ -24,6 +25,8 @@ export function ProjectDetailPage() {
   const navigate = useNavigate();
   const { system } = useUnits();
   const project = useProject(projectId);
+  const isCustomer = user.role === 'customer';
+  const partNames = useProjectPartNames(project.data, !isCustomer);
   const shop = useShop();
   const [editing, setEditing] = useState(false);
   const customers = useCustomerOptions({ enabled: editing });
@@ -52,7 +55,7 @@ export function ProjectDetailPage() {
         subtitle={`${p.vehicleDescription} · opened ${formatDate(p.createdAt)} · last change ${formatDate(p.updatedAt)}`}
         extra={
           <Space>
-            {user.role !== 'customer' && <Button onClick={() => navigate(toProjectFit(p.id))}>Fit check</Button>}
+            <Button onClick={() => navigate(toProjectFit(p.id))}>{isCustomer ? 'Fit report' : 'Fit check'}</Button>
             {canEdit && (
               <>
                 <Button type="primary" onClick={() => setEditing(true)}>
@@ -80,7 +83,13 @@ export function ProjectDetailPage() {
           <ProjectGoalsCard project={p} currency={currency} />
         </Col>
         <Col xs={24} xl={12}>
-          <ProjectSelectionsCard project={p} />
+          <ProjectSelectionsCard
+            project={p}
+            names={partNames}
+            unnamedLabel={isCustomer ? 'Chosen by the shop' : undefined}
+            fitPath={toProjectFit(p.id)}
+            fitLinkLabel={canRunFitCheck(user.role) || canEdit ? 'Choose parts on the fit page' : 'Open the fit report'}
+          />
         </Col>
         <Col xs={24}>
           <ProjectPlacementCard project={p} />

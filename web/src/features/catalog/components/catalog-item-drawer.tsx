@@ -1,4 +1,5 @@
-import { Button, Checkbox, Divider, Drawer, Flex, Form, Input, InputNumber, Select, Typography } from 'antd';
+import { formatBeltDesignation } from '@swapwright/shared';
+import { Button, Checkbox, Divider, Drawer, Flex, Form, Input, InputNumber, Select, Typography, type FormInstance } from 'antd';
 import { useEffect, useState } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useCreateCatalogItem } from '../api/create-catalog-item';
@@ -7,7 +8,7 @@ import { kindDefinitions, type JsonField, type ScalarField } from '../lib/catalo
 import type { CatalogItem, CatalogKind } from '../types';
 import { LengthInput } from './length-input';
 import { ObstaclesEditor, obstaclesRule } from './obstacles-editor';
-import { OutlineEditor, outlineRule } from './outline-editor';
+import { OutlineEditor, outlineRule, translateOutlineErrors } from './outline-editor';
 
 export type CatalogItemDrawerProps = { kind: CatalogKind; open: boolean; item?: CatalogItem | null; onClose: () => void };
 
@@ -104,6 +105,18 @@ function fieldRules(field: ScalarField) {
   return rules;
 }
 
+/** The belt's name as stamped on it, from the typed ribs and length; the server computes the stored one the same way. */
+function BeltDesignationPreview({ form }: { form: FormInstance<FormValues> }) {
+  const ribs = Form.useWatch('ribs', form) as unknown;
+  const length = Form.useWatch('effectiveLengthMm', form) as unknown;
+  const valid = typeof ribs === 'number' && Number.isInteger(ribs) && ribs >= 1 && typeof length === 'number' && length > 0;
+  return (
+    <Typography.Paragraph type="secondary" data-testid="belt-designation">
+      Designation: {valid ? formatBeltDesignation(ribs, length) : '—'}
+    </Typography.Paragraph>
+  );
+}
+
 /** Create or edit one catalog entry: its scalar figures, point lists and the nested parts as JSON. */
 export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDrawerProps) {
   const def = kindDefinitions[kind];
@@ -153,7 +166,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
         </Flex>
       }
     >
-      <FormErrorAlert error={error} />
+      <FormErrorAlert error={error} translate={(t) => translateOutlineErrors(t, def.outlines)} />
       <Form<FormValues> form={form} layout="vertical" onFinish={submit} requiredMark="optional" scrollToFirstError>
         <Form.Item name="name" label="Name" rules={[{ required: true, whitespace: true, message: 'Give it a name the shop will recognise.' }, { max: 160 }]}>
           <Input maxLength={160} />
@@ -173,6 +186,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
             </Form.Item>
           ))}
         </Flex>
+        {kind === 'belts' && <BeltDesignationPreview form={form} />}
         {def.outlines.map((o) => (
           <div key={o.name}>
             <Divider titlePlacement="start" plain>
@@ -181,7 +195,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
             <Typography.Paragraph type="secondary" style={{ fontSize: 13 }}>
               {o.help}
             </Typography.Paragraph>
-            <Form.Item name={o.name} rules={o.minPoints > 0 ? [outlineRule(o.minPoints, o.label)] : []}>
+            <Form.Item name={o.name} rules={o.minPoints > 0 || o.negativeAxis ? [outlineRule(o.minPoints, o.label, o.negativeAxis)] : []}>
               <OutlineEditor axes={o.axes} label={o.label} closed={o.closed} />
             </Form.Item>
           </div>

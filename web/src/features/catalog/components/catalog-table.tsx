@@ -29,7 +29,9 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
     if (value === undefined || value === null || value === '') return '—';
     if (f?.type === 'length' && typeof value === 'number') return units.formatLength(value);
     if (typeof value === 'boolean') return value ? 'Yes' : 'No';
-    if (Array.isArray(value)) return value.join(', ') || '—';
+    const label = (v: unknown) => f?.options?.find((o) => o.value === v)?.label ?? String(v);
+    if (Array.isArray(value)) return value.map(label).join(', ') || '—';
+    if (f?.options) return label(value);
     return `${String(value)}${f?.suffix ? ` ${f.suffix}` : ''}`;
   };
 
@@ -48,7 +50,7 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
         ),
     },
     ...def.columns.map((c) => ({
-      title: def.fields.find((f) => f.name === c)?.label ?? c,
+      title: def.fields.find((f) => f.name === c)?.label ?? def.columnLabels?.[c] ?? c,
       key: c,
       render: (_: unknown, item: CatalogItem) => show(c, item.spec?.[c]),
       responsive: ['md' as const],

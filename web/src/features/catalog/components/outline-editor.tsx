@@ -73,14 +73,30 @@ export function OutlineEditor({ value = [], onChange, axes, label, closed }: Out
   );
 }
 
-/** Form rule: enough points, every coordinate a number. */
-export function outlineRule(minPoints: number, label: string) {
+/** Form rule: enough points, every coordinate a number, and the negative axis below zero where one is set. */
+export function outlineRule(minPoints: number, label: string, negativeAxis?: string) {
   return {
     validator: async (_: unknown, value: OutlinePoint[] | undefined) => {
       const points = value ?? [];
       if (points.length < minPoints) throw new Error(`${label} needs at least ${minPoints} points.`);
       if (points.some((p) => Object.values(p).some((v) => typeof v !== 'number' || !Number.isFinite(v))))
         throw new Error(`${label}: every point needs both figures.`);
+      if (negativeAxis) {
+        const rows = points.flatMap((p, i) => ((p[negativeAxis] as number) >= 0 ? [i + 1] : []));
+        if (rows.length > 0) throw new Error(`${label}: ${negativeAxis} must be negative (below the crank) in row ${rows.join(', ')}.`);
+      }
     },
   };
+}
+
+/**
+ * The API names a point by its list index from 0 ("bottomProfile.1.w must be negative"); the table numbers
+ * rows from 1. Rewrites such paths as "Bottom profile row 2: w must be negative".
+ */
+export function translateOutlineErrors(text: string, outlines: ReadonlyArray<{ name: string; label: string }>): string {
+  return text.replace(/(?:\b[A-Za-z]+\.)*?\b([A-Za-z]+)\.(\d+)\.([A-Za-z]+)\b/g, (match, list: string, index: string, axis: string) => {
+    const outline = outlines.find((o) => o.name === list);
+    if (!outline) return match;
+    return `${outline.label} row ${Number(index) + 1}: ${axis}`;
+  });
 }

@@ -22,6 +22,8 @@ export type OutlineField = {
   closed: boolean;
   minPoints: number;
   help: string;
+  /** An axis every point must keep below zero (the API refuses the rest). */
+  negativeAxis?: 'w' | 'z';
 };
 
 export type JsonField = { name: string; label: string; shape: 'object' | 'array'; help: string; required?: boolean };
@@ -37,11 +39,38 @@ export type KindDefinition = {
   json: JsonField[];
   /** Columns of the table besides the name. */
   columns: string[];
+  /** Headings of columns that are not form fields (figures the server computes). */
+  columnLabels?: Record<string, string>;
   /** The spec a new entry starts from. */
   defaults: Record<string, unknown>;
 };
 
-const opts = (...values: string[]) => values.map((v) => ({ value: v, label: v }));
+/** Readable names for the enum values the catalog stores. */
+const optionLabels: Record<string, string> = {
+  front: 'Front',
+  center: 'Center',
+  rear: 'Rear',
+  dual: 'Dual',
+  'pump-bolted': 'Bolted to the pump',
+  'block-bolted': 'Bolted to the block',
+  'press-in': 'Pressed into the pump',
+  'block-left': 'Block, left',
+  'block-right': 'Block, right',
+  'pan-left': 'Pan, left',
+  'pan-right': 'Pan, right',
+  left: 'Left',
+  right: 'Right',
+  cable: 'Cable',
+  electronic: 'Electronic',
+  crossmember: 'Crossmember',
+  'steering-linkage': 'Steering linkage',
+  'axle-at-bump': 'Axle at full bump',
+  'differential-at-bump': 'Differential at full bump',
+  firewall: 'Firewall',
+  tunnel: 'Tunnel',
+  other: 'Other',
+};
+const opts = (...values: string[]) => values.map((v) => ({ value: v, label: optionLabels[v] ?? v }));
 const sumpPositions = opts('front', 'center', 'rear', 'dual');
 const pickupMounts = opts('pump-bolted', 'block-bolted', 'press-in');
 const dipsticks = opts('block-left', 'block-right', 'pan-left', 'pan-right');
@@ -126,6 +155,7 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
         axes: ['u', 'w'],
         closed: true,
         minPoints: 3,
+        negativeAxis: 'w',
         help: `${ENGINE_FRAME} Points below the crank (w negative), front to rear; the outline closes along the pan rail.`,
       },
     ],
@@ -257,6 +287,29 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     json: [],
     columns: ['enginePattern', 'transmissionPattern', 'thicknessMm'],
     defaults: {},
+  },
+  belts: {
+    kind: 'belts',
+    label: 'Belts',
+    singular: 'serpentine belt',
+    fields: [
+      { name: 'ribs', label: 'Ribs', type: 'number', required: true, min: 3, max: 12, help: 'PK profile, 3.56 mm per rib.' },
+      {
+        name: 'effectiveLengthMm',
+        label: 'Effective length',
+        type: 'length',
+        required: true,
+        min: 400,
+        max: 3000,
+        help: 'The outside length printed on the belt, e.g. 1225 in 6PK1225.',
+      },
+      { name: 'stockOnHand', label: 'On the shelf', type: 'number', min: 0, max: 100000 },
+    ],
+    outlines: [],
+    json: [],
+    columns: ['designation', 'ribs', 'effectiveLengthMm', 'stockOnHand'],
+    columnLabels: { designation: 'Designation' },
+    defaults: { ribs: 6 },
   },
 };
 

@@ -17,6 +17,6 @@ export async function getFitReports(projectId: string, signal?: AbortSignal): Pr
 export const fitReportsQueryOptions = (projectId: string) =>
   queryOptions({ queryKey: fitReportKeys.list(projectId), queryFn: ({ signal }) => getFitReports(projectId, signal) });
 
-export function useFitReports(projectId: string) {
-  return useQuery(fitReportsQueryOptions(projectId));
+export function useFitReports(projectId: string, { enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({ ...fitReportsQueryOptions(projectId), enabled });
 }

@@ -11,6 +11,6 @@ export async function getFitSelections(projectId: string, signal?: AbortSignal):
 export const fitSelectionsQueryOptions = (projectId: string) =>
   queryOptions({ queryKey: fitReportKeys.selections(projectId), queryFn: ({ signal }) => getFitSelections(projectId, signal) });
 
-export function useFitSelections(projectId: string) {
-  return useQuery(fitSelectionsQueryOptions(projectId));
+export function useFitSelections(projectId: string, { enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({ ...fitSelectionsQueryOptions(projectId), enabled });
 }

@@ -4,6 +4,7 @@ import type { ColumnsType } from 'antd/es/table';
 import type { HTMLAttributes } from 'react';
 import { useUnits } from '@/hooks/use-units';
 import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
+import { matchResult, missingInputLabel } from '../lib/labels';
 import { groupLabels, groupOrder, worstStatus } from '../lib/status';
 import { CheckStatusTag } from './check-status-tag';
 
@@ -25,13 +26,13 @@ export function ChecksTable({ findings }: ChecksTableProps) {
         <>
           <Typography.Text strong>{f.title}</Typography.Text>
           <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
-            {f.status === 'unknown' && f.missing.length ? `Missing: ${f.missing.join(', ')}` : f.message}
+            {f.status === 'unknown' && f.missing.length ? `Missing: ${f.missing.map(missingInputLabel).join(', ')}` : f.message}
           </Typography.Paragraph>
         </>
       ),
     },
-    { title: 'Found', key: 'measured', width: 120, align: 'right', render: (_, f) => formatFigure(f.measured, f.unit, units) },
-    { title: 'Needs', key: 'required', width: 140, align: 'right', render: (_, f) => formatRequirement(f, units), responsive: ['md'] },
+    { title: 'Found', key: 'measured', width: 120, align: 'right', render: (_, f) => (f.limit === 'match' ? matchResult(f) : formatFigure(f.measured, f.unit, units)) },
+    { title: 'Needs', key: 'required', width: 140, align: 'right', render: (_, f) => (f.limit === 'match' ? '—' : formatRequirement(f, units)), responsive: ['md'] },
     { title: 'Margin', key: 'margin', width: 110, align: 'right', render: (_, f) => formatMargin(f, units) },
     {
       title: 'Threshold from',

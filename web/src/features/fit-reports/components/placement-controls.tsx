@@ -1,5 +1,6 @@
 import type { Placement } from '@swapwright/shared';
-import { Button, Col, Flex, InputNumber, Row, Slider, Tag, Typography } from 'antd';
+import { Alert, Button, Col, Flex, InputNumber, Row, Slider, Tag, Typography } from 'antd';
+import { useState } from 'react';
 import { useUnits } from '@/hooks/use-units';
 
 export type PlacementControlsProps = {
@@ -17,6 +18,22 @@ export type PlacementControlsProps = {
 
 const SPAN_MM = 200;
 
+/** The placement the API accepts (setback and height in mm, tilt in degrees). */
+export const PLACEMENT_LIMITS = {
+  setbackMm: { min: -1500, max: 5000 },
+  heightMm: { min: 0, max: 2500 },
+  tiltDeg: { min: -20, max: 20 },
+} as const;
+
+type Axis = keyof typeof PLACEMENT_LIMITS;
+
+const inLimits = (axis: Axis, v: number) => Number.isFinite(v) && v >= PLACEMENT_LIMITS[axis].min && v <= PLACEMENT_LIMITS[axis].max;
+
+/** Axes of a placement outside what can be saved. */
+export function placementOutOfRange(p: Placement): Axis[] {
+  return (Object.keys(PLACEMENT_LIMITS) as Axis[]).filter((axis) => !inLimits(axis, p[axis]));
+}
+
 type AxisRowProps = {
   label: string;
   hint: string;
@@ -24,12 +41,18 @@ type AxisRowProps = {
   valueDisplay: number;
   min: number;
   max: number;
+  /** What the number box accepts, in display units (the slider range sits inside it). */
+  limitMin: number;
+  limitMax: number;
   step: number;
   unit: string;
   onChange: (displayValue: number) => void;
+  /** Reports typed text outside the limits (the number box only passes on values inside them). */
+  onInvalid: (invalid: boolean) => void;
+  invalid: boolean;
 };
 
-function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, step, unit, onChange }: AxisRowProps) {
+function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, limitMin, limitMax, step, unit, onChange, onInvalid, invalid }: AxisRowProps) {
   return (
     <div>
       <Flex justify="space-between" align="baseline">
@@ -54,9 +77,17 @@ function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, step, unit, o
           <InputNumber
             aria-label={ariaLabel}
             value={valueDisplay}
+            min={limitMin}
+            max={limitMax}
             step={step}
             suffix={unit}
+            status={invalid ? 'error' : undefined}
             style={{ width: '100%' }}
+            onInput={(text) => {
+              const n = Number(text);
+              onInvalid(text.trim() !== '' && Number.isFinite(n) && (n < limitMin || n > limitMax));
+            }}
+            onBlur={() => onInvalid(false)}
             onChange={(v) => {
               if (typeof v === 'number' && Number.isFinite(v)) onChange(v);
             }}
@@ -70,15 +101,32 @@ function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, step, unit, o
 /** Setback, crank height and tilt in the person's units; every change re-runs the fit engine here in the browser. */
 export function PlacementControls({ value, onChange, saved, proposed, isPreview, onSave, saving, onReset }: PlacementControlsProps) {
   const units = useUnits();
+  const [typedOut, setTypedOut] = useState<Partial<Record<Axis, boolean>>>({});
   const center = saved ?? value;
   const lengthStep = units.system === 'in' ? 0.05 : 1;
-  const range = (mm: number, lo = -Infinity) => ({
-    min: units.toDisplay(Math.max(lo, mm - SPAN_MM)),
-    max: units.toDisplay(mm + SPAN_MM),
+  const clampTo = (axis: Axis, v: number) => Math.min(PLACEMENT_LIMITS[axis].max, Math.max(PLACEMENT_LIMITS[axis].min, v));
+  /** Slider range around the saved value, widened to the current value, never past the limits. */
+  const lengthRange = (axis: 'setbackMm' | 'heightMm') => {
+    const lo = Math.min(center[axis] - SPAN_MM, value[axis]);
+    const hi = Math.max(center[axis] + SPAN_MM, value[axis]);
+    return {
+      min: units.toDisplay(clampTo(axis, lo)),
+      max: units.toDisplay(clampTo(axis, hi)),
+      // rounded inwards so a limit shown in inches never converts back past the limit
+      limitMin: Math.ceil(units.toDisplay(PLACEMENT_LIMITS[axis].min) * 100) / 100,
+      limitMax: Math.floor(units.toDisplay(PLACEMENT_LIMITS[axis].max) * 100) / 100,
+    };
+  };
+  const axisState = (axis: Axis) => ({
+    invalid: Boolean(typedOut[axis]) || !inLimits(axis, value[axis]),
+    onInvalid: (invalid: boolean) => setTypedOut((s) => (Boolean(s[axis]) === invalid ? s : { ...s, [axis]: invalid })),
   });
-  const setback = range(center.setbackMm);
-  const height = range(center.heightMm, 0);
-  const widen = (r: { min: number; max: number }, v: number) => ({ min: Math.min(r.min, v), max: Math.max(r.max, v) });
+  const limitText: Record<Axis, string> = {
+    setbackMm: `Setback must be between ${units.formatLength(PLACEMENT_LIMITS.setbackMm.min)} and ${units.formatLength(PLACEMENT_LIMITS.setbackMm.max)}.`,
+    heightMm: `Crank height must be between ${units.formatLength(PLACEMENT_LIMITS.heightMm.min)} and ${units.formatLength(PLACEMENT_LIMITS.heightMm.max)}.`,
+    tiltDeg: `Tilt must be between ${PLACEMENT_LIMITS.tiltDeg.min}° and +${PLACEMENT_LIMITS.tiltDeg.max}°.`,
+  };
+  const problems = (Object.keys(PLACEMENT_LIMITS) as Axis[]).filter((axis) => axisState(axis).invalid);
 
   return (
     <Flex vertical gap={12} className="fit-placement-controls fit-control" data-testid="placement-controls">
@@ -100,7 +148,8 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
         ariaLabel="Setback"
         unit={units.unitLabel}
         step={lengthStep}
-        {...widen(setback, units.toDisplay(value.setbackMm))}
+        {...lengthRange('setbackMm')}
+        {...axisState('setbackMm')}
         valueDisplay={units.toDisplay(value.setbackMm)}
         onChange={(v) => onChange({ ...value, setbackMm: units.fromDisplay(v) })}
       />
@@ -110,7 +159,8 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
         ariaLabel="Crank height"
         unit={units.unitLabel}
         step={lengthStep}
-        {...widen(height, units.toDisplay(value.heightMm))}
+        {...lengthRange('heightMm')}
+        {...axisState('heightMm')}
         valueDisplay={units.toDisplay(value.heightMm)}
         onChange={(v) => onChange({ ...value, heightMm: units.fromDisplay(v) })}
       />
@@ -120,8 +170,11 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
         ariaLabel="Tilt"
         unit="°"
         step={0.1}
-        min={Math.min(-5, value.tiltDeg)}
-        max={Math.max(10, value.tiltDeg)}
+        min={clampTo('tiltDeg', Math.min(-5, value.tiltDeg))}
+        max={clampTo('tiltDeg', Math.max(10, value.tiltDeg))}
+        limitMin={PLACEMENT_LIMITS.tiltDeg.min}
+        limitMax={PLACEMENT_LIMITS.tiltDeg.max}
+        {...axisState('tiltDeg')}
         valueDisplay={Math.round(value.tiltDeg * 10) / 10}
         onChange={(v) => onChange({ ...value, tiltDeg: v })}
       />
@@ -130,9 +183,18 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
           Proposed by the fit window: {units.formatLength(proposed.setbackMm)} back, {units.formatLength(proposed.heightMm)} up, {proposed.tiltDeg.toFixed(1)}°
         </Typography.Text>
       )}
+      {problems.length > 0 && (
+        <Alert
+          type="warning"
+          showIcon
+          data-testid="placement-out-of-range"
+          title="Out of range"
+          description={problems.map((axis) => limitText[axis]).join(' ')}
+        />
+      )}
       <Flex gap={8} wrap>
         {onSave && (
-          <Button type="primary" onClick={onSave} loading={saving}>
+          <Button type="primary" onClick={onSave} loading={saving} disabled={problems.length > 0}>
             Save placement
           </Button>
         )}

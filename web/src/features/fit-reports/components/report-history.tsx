@@ -3,7 +3,7 @@ import { Alert, Button, Flex, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { useMemo, useState } from 'react';
 import { useUnits } from '@/hooks/use-units';
-import { formatDate } from '@/lib/table';
+import { formatDateTime } from '@/lib/dates';
 import { useFitReport } from '../api/get-fit-report';
 import { useFitReports } from '../api/get-fit-reports';
 import { summaryOf, type FitReportListItem, type FitSummary } from '../types';
@@ -15,10 +15,7 @@ export type ReportHistoryProps = {
   onOpen: (id: string) => void;
 };
 
-function formatTime(iso: string): string {
-  const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? '—' : `${formatDate(iso)} ${d.toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit' })}`;
-}
+const formatTime = formatDateTime;
 
 export function SummaryTags({ summary }: { summary?: FitSummary }) {
   if (!summary) return <>—</>;
@@ -97,7 +94,7 @@ export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryPro
         </Flex>
       ),
     },
-    { title: 'By', key: 'by', render: (_, r) => r.createdBy?.name ?? '—', responsive: ['md'] },
+    { title: 'By', key: 'by', render: (_, r) => r.createdByName || r.createdBy?.name || '—', responsive: ['md'] },
     {
       title: 'Placement',
       key: 'placement',

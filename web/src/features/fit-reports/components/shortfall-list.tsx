@@ -2,6 +2,7 @@ import type { Finding, PartRemedy, PlacementRemedy, Remedy } from '@swapwright/s
 import { Button, Empty, Flex, Space, Tag, Typography } from 'antd';
 import { useUnits } from '@/hooks/use-units';
 import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
+import { describeRequirement, matchResult } from '../lib/labels';
 import { categoryLabels, describePlacementRemedy, partNouns, selectionKeyFor, type PartInfo } from '../lib/remedies';
 import { compareWorstFirst, groupLabels } from '../lib/status';
 import { CheckStatusTag } from './check-status-tag';
@@ -23,13 +24,14 @@ export type ShortfallListProps = {
 function PartRemedyView({ remedy, parts, onUsePart, chosenIds, busyPartId }: { remedy: PartRemedy } & Omit<ShortfallListProps, 'shortfalls' | 'onTryPlacement'>) {
   const noun = partNouns[remedy.category] ?? 'part';
   const selectable = Boolean(selectionKeyFor[remedy.category]) && Boolean(onUsePart);
+  const units = useUnits();
   return (
     <div>
       <Typography.Text strong>{categoryLabels[remedy.category] ?? remedy.category}</Typography.Text>
       {remedy.note && <Typography.Text type="secondary">: {remedy.note}</Typography.Text>}
       {remedy.partIds.length === 0 ? (
         <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
-          No catalog part matches yet. Add one to the catalog with: {Object.entries(remedy.requires).map(([k, v]) => `${k} ${String(v)}`).join(', ')}.
+          No catalog part matches yet. Add one to the catalog with: {Object.entries(remedy.requires).map(([k, v]) => describeRequirement(k, v, units)).join(', ')}.
         </Typography.Paragraph>
       ) : (
         <ul className="fit-remedy-parts" style={{ margin: '4px 0 0', paddingLeft: 18 }}>
@@ -118,6 +120,11 @@ export function ShortfallList({ shortfalls, ...rest }: ShortfallListProps) {
               </Typography.Text>
               <Typography.Text type="secondary">{groupLabels[f.group]}</Typography.Text>
             </Space>
+            {f.limit === 'match' ? (
+              <Typography.Text strong data-testid="shortfall-measured">
+                {matchResult(f)}
+              </Typography.Text>
+            ) : (
             <Space size={16} wrap>
               <span>
                 <Typography.Text type="secondary">Found </Typography.Text>
@@ -136,6 +143,7 @@ export function ShortfallList({ shortfalls, ...rest }: ShortfallListProps) {
                 </Typography.Text>
               </span>
             </Space>
+            )}
           </Flex>
           <Typography.Paragraph style={{ margin: '4px 0 0' }}>{f.message}</Typography.Paragraph>
           {f.remedies.length > 0 && (

@@ -21,18 +21,25 @@ export const partNouns: Partial<Record<PartCategory, string>> = {
   'bellhousing-adapter': 'adapter',
 };
 
-export const categoryLabels: Partial<Record<PartCategory, string>> = {
+export const categoryLabels: Record<PartCategory, string> = {
   'oil-pan': 'Oil pan',
   'oil-pickup': 'Oil pickup',
   'oil-pump': 'Oil pump',
   'mount-adapter': 'Mount adapter',
   'bellhousing-adapter': 'Bellhousing adapter',
   'transmission-mount': 'Transmission mount',
-  'engine-controller': 'Engine controller',
-  'accessory-drive': 'Accessory drive',
+  driveshaft: 'Driveshaft',
   'fuel-pump': 'Fuel pump',
   'fuel-regulator': 'Fuel regulator',
+  injector: 'Injectors',
+  'accessory-drive': 'Accessory drive',
+  belt: 'Belt',
+  radiator: 'Radiator',
+  'engine-controller': 'Engine controller',
+  'throttle-pedal': 'Throttle pedal',
   'cam-timing-set': 'Cam timing set',
+  dipstick: 'Dipstick',
+  'exhaust-manifold': 'Exhaust manifold',
 };
 
 export type PartInfo = { id: string; name: string; category?: PartCategory; sumpPosition?: string; mount?: string };

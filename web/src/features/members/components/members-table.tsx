@@ -1,7 +1,7 @@
 import { Button, Popconfirm, Select, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { EmptyState, QueryState } from '@/components/query-state';
-import { formatDate } from '@/lib/table';
+import { formatDate } from '@/lib/dates';
 import { roles, type Role } from '@/types/api';
 import { useDeleteMembership } from '../api/delete-membership';
 import { useMemberships } from '../api/get-memberships';
@@ -20,11 +20,12 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
       title: 'Name',
       dataIndex: 'name',
       key: 'name',
+      // names break between words only, never inside one
       render: (name: string, m) => (
-        <>
+        <span style={{ wordBreak: 'normal', overflowWrap: 'normal', whiteSpace: 'nowrap' }} data-testid="member-name">
           <Typography.Text strong>{name}</Typography.Text>
           {m.userId === currentUserId && <Tag style={{ marginInlineStart: 8 }}>you</Tag>}
-        </>
+        </span>
       ),
     },
     { title: 'Email', dataIndex: 'email', key: 'email' },
@@ -76,7 +77,7 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
       isEmpty={(list) => list.length === 0}
       empty={<EmptyState description="Only you so far. Invite the people who work with you." />}
     >
-      {(list) => <Table<Membership> aria-label="Members" rowKey="id" columns={columns} dataSource={list} pagination={false} />}
+      {(list) => <Table<Membership> aria-label="Members" rowKey="id" columns={columns} dataSource={list} pagination={false} scroll={{ x: 'max-content' }} />}
     </QueryState>
   );
 }

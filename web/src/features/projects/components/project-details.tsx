@@ -1,4 +1,5 @@
 import { Alert, Card, Descriptions, Typography } from 'antd';
+import { Link } from 'react-router-dom';
 import { useUnits } from '@/hooks/use-units';
 import { formatMoneyCents, formatPower } from '@/lib/units';
 import { useLabels } from '../project-labels';
@@ -28,30 +29,42 @@ export function ProjectGoalsCard({ project, currency = 'USD' }: ProjectGoalsCard
   );
 }
 
-export type ProjectSelectionsCardProps = { project: Project };
+export type ProjectPartNames = { chassis?: string; engine?: string; transmission?: string };
 
-export function ProjectSelectionsCard({ project }: ProjectSelectionsCardProps) {
-  const slot = (id: string | null, what: string) =>
-    id ? (
-      <Typography.Text code>{id}</Typography.Text>
-    ) : (
-      <Typography.Text type="secondary">No {what} chosen yet</Typography.Text>
-    );
+export type ProjectSelectionsCardProps = {
+  project: Project;
+  /** Catalog names for the chosen ids, when the viewer may read them. */
+  names?: ProjectPartNames;
+  /** Shown for a chosen part whose name is not known (e.g. the viewer cannot read the catalog). */
+  unnamedLabel?: string;
+  /** Where the parts are chosen or the fit report is read. */
+  fitPath?: string;
+  fitLinkLabel?: string;
+};
+
+export function ProjectSelectionsCard({ project, names = {}, unnamedLabel, fitPath, fitLinkLabel = 'Choose parts on the fit page' }: ProjectSelectionsCardProps) {
+  const slot = (id: string | null, name: string | undefined, what: string) => {
+    if (!id) return <Typography.Text type="secondary">No {what} chosen yet</Typography.Text>;
+    if (name) return <Typography.Text>{name}</Typography.Text>;
+    if (unnamedLabel) return <Typography.Text type="secondary">{unnamedLabel}</Typography.Text>;
+    return <Typography.Text code>{id}</Typography.Text>;
+  };
   return (
     <Card title="Chassis, engine and transmission" data-testid="project-selections">
       <Descriptions
         column={1}
         items={[
           { key: 'vehicle', label: 'Vehicle as described', children: project.vehicleDescription || '—' },
-          { key: 'chassis', label: 'Chassis model', children: slot(project.chassisModelId, 'chassis model') },
-          { key: 'engine', label: 'Engine', children: slot(project.engineProfileId, 'engine') },
-          { key: 'trans', label: 'Transmission', children: slot(project.transmissionId, 'transmission') },
+          { key: 'chassis', label: 'Chassis model', children: slot(project.chassisModelId, names.chassis, 'chassis model') },
+          { key: 'engine', label: 'Engine', children: slot(project.engineProfileId, names.engine, 'engine') },
+          { key: 'trans', label: 'Transmission', children: slot(project.transmissionId, names.transmission, 'transmission') },
         ]}
       />
-      <Typography.Paragraph type="secondary" style={{ margin: '8px 0 0', fontSize: 13 }}>
-        Picking from the shop catalog arrives with the catalog. Until then, describe the combination in the project
-        title and vehicle.
-      </Typography.Paragraph>
+      {fitPath && (
+        <Typography.Paragraph style={{ margin: '8px 0 0' }}>
+          <Link to={fitPath}>{fitLinkLabel}</Link>
+        </Typography.Paragraph>
+      )}
     </Card>
   );
 }

@@ -1,4 +1,5 @@
-import { Button, Col, Drawer, Flex, Form, Input, InputNumber, Radio, Row, Select } from 'antd';
+import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
+import { BoundedNumberInput } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
@@ -54,6 +55,8 @@ export function ProjectFormDrawer({
   const [form] = Form.useForm<ProjectFormValues>();
   const isEdit = Boolean(project);
   const powerUnit = unitSystem === 'in' ? 'hp' : 'kW';
+  // the API takes 1 to 2,000 kW
+  const maxPower = unitSystem === 'in' ? Math.floor(kwToHp(2000)) : 2000;
   const done = (saved: Project) => {
     notifySuccess({ title: isEdit ? 'Project saved' : 'Project opened', description: saved.title });
     onSaved?.(saved);
@@ -173,9 +176,9 @@ export function ProjectFormDrawer({
             <Form.Item
               label={`Target power (${powerUnit})`}
               name="targetPower"
-              rules={[{ type: 'number', min: 1, max: unitSystem === 'in' ? 3000 : 2200, message: 'Enter a realistic figure' }]}
+              rules={[{ type: 'number', min: 1, max: maxPower, message: `Between 1 and ${maxPower.toLocaleString('en-US')} ${powerUnit}` }]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} precision={0} suffix={powerUnit} aria-label="Target power" />
+              <BoundedNumberInput style={{ width: '100%' }} min={1} max={maxPower} precision={0} suffix={powerUnit} aria-label="Target power" />
             </Form.Item>
           </Col>
           <Col span={12}>
@@ -184,12 +187,12 @@ export function ProjectFormDrawer({
               name="revLimitRpm"
               rules={[{ type: 'number', min: 1000, max: 12000, message: 'Between 1,000 and 12,000 rpm' }]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} step={100} precision={0} suffix="rpm" aria-label="Planned rev limit" />
+              <BoundedNumberInput style={{ width: '100%' }} min={1000} max={12000} step={100} precision={0} suffix="rpm" aria-label="Planned rev limit" />
             </Form.Item>
           </Col>
         </Row>
         <Form.Item label="Budget" name="budget" rules={[{ type: 'number', min: 0, message: 'The budget cannot be negative' }]}>
-          <InputNumber
+          <BoundedNumberInput
             style={{ width: '100%' }}
             min={0}
             step={500}

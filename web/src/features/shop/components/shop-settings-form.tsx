@@ -1,4 +1,5 @@
-import { Button, Card, Col, Form, Input, InputNumber, Radio, Row, Typography } from 'antd';
+import { Button, Card, Col, Form, Input, Radio, Row, Typography } from 'antd';
+import { BoundedNumberInput } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
@@ -85,7 +86,7 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
                 { type: 'number', min: 0, max: 10000, message: 'Between 0 and 10,000' },
               ]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} precision={2} step={5} {...money} aria-label="Labor rate per hour" />
+              <BoundedNumberInput style={{ width: '100%' }} min={0} max={10000} precision={2} step={5} {...money} aria-label="Labor rate per hour" />
             </Form.Item>
           </Col>
           <Col xs={24} sm={8}>
@@ -94,10 +95,10 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
               name="taxRatePercent"
               rules={[
                 { required: true, message: 'Enter the tax rate (0 if none)' },
-                { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
+                { type: 'number', min: 0, max: 100, message: 'Between 0 and 100 %' },
               ]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={2} step={0.25} suffix="%" aria-label="Sales tax" />
+              <BoundedNumberInput style={{ width: '100%' }} min={0} max={100} precision={2} step={0.25} suffix="%" aria-label="Sales tax" />
             </Form.Item>
           </Col>
           <Col xs={24} sm={8}>
@@ -110,7 +111,7 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
                 { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
               ]}
             >
-              <InputNumber style={{ width: '100%' }} min={0} max={50} precision={2} step={0.5} suffix="%" aria-label="Shop supplies" />
+              <BoundedNumberInput style={{ width: '100%' }} min={0} max={50} precision={2} step={0.5} suffix="%" aria-label="Shop supplies" />
             </Form.Item>
           </Col>
         </Row>

@@ -1,0 +1,91 @@
+import { DEMO_FIT_SPEC } from '@swapwright/shared';
+import { screen, waitFor } from '@testing-library/react';
+import { Route, Routes } from 'react-router-dom';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { apiClient } from '@/lib/api-client';
+import { createTestQueryClient, renderWithApp } from '@/test/render';
+import { userStub } from '@/test/fixtures';
+import { authKeys } from '@/features/auth/api/auth-keys';
+import { previewFitCheck } from '@/features/fit-reports/lib/fit-engine';
+import type { Project } from '@/features/projects/types';
+import type { Role } from '@/types/api';
+import { RequireRole } from '../../../guards';
+import { sectionRoles } from '../../../navigation';
+import { ProjectFitPage } from '../project-fit-page';
+
+const project: Project = {
+  id: 'p1',
+  title: 'Shop truck swap',
+  status: 'checking',
+  customerId: 'cust-1',
+  customer: { id: 'cust-1', name: 'A customer' },
+  vehicleDescription: 'Long-bed pickup',
+  chassisModelId: 'ch-1',
+  engineProfileId: 'en-1',
+  transmissionId: null,
+  goals: { use: 'street', targetPowerKw: null, revLimitRpm: null, budgetCents: null },
+  placement: DEMO_FIT_SPEC.placement,
+  createdAt: '2026-11-01T10:00:00.000Z',
+  updatedAt: '2026-11-02T10:00:00.000Z',
+};
+
+const listItem = { id: 'r1', projectId: 'p1', createdAt: '2026-11-02T10:00:00.000Z', createdByName: 'Sam Reyes' };
+const stored = { ...listItem, results: previewFitCheck(DEMO_FIT_SPEC, DEMO_FIT_SPEC.placement), inputsSnapshot: { spec: DEMO_FIT_SPEC } };
+
+function mockApi() {
+  return vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => {
+    if (url === '/projects/p1') return { data: project };
+    if (url === '/projects/p1/fit-reports') return { data: [listItem] };
+    if (url === '/fit-reports/r1') return { data: stored };
+    if (url.startsWith('/catalog/')) return { data: { items: [], total: 0, page: 1, pageSize: 100 } };
+    if (url.endsWith('/fit-selections')) return { data: { oilPanId: null, oilPickupId: null, oilPumpId: null, controllerId: null, accessoryDriveId: null } };
+    throw new Error(`unexpected GET ${url}`);
+  });
+}
+
+function renderFitPage(role: Role) {
+  const queryClient = createTestQueryClient();
+  queryClient.setQueryData(authKeys.me(), userStub(role));
+  return renderWithApp(
+    <Routes>
+      <Route
+        path="/projects/:projectId/fit"
+        element={
+          <RequireRole roles={sectionRoles.projectFit}>
+            <ProjectFitPage />
+          </RequireRole>
+        }
+      />
+    </Routes>,
+    { route: '/projects/p1/fit', queryClient },
+  );
+}
+
+afterEach(() => vi.restoreAllMocks());
+
+describe('fit page by role', () => {
+  it('lets a customer read the stored report without any editing or catalog calls', { timeout: 60_000 }, async () => {
+    const get = mockApi();
+    renderFitPage('customer');
+    await screen.findByText('Every check', undefined, { timeout: 20_000 });
+    expect(screen.getByText(/Shortfalls \(/)).toBeTruthy();
+    expect(screen.getByText('Side view')).toBeTruthy();
+    expect(screen.getByText('Front view: widths')).toBeTruthy();
+    expect(screen.queryByText('Not part of your role')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Run fit check' })).toBeNull();
+    expect(screen.queryByText('What goes in')).toBeNull();
+    expect(screen.queryByTestId('placement-controls')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Save placement' })).toBeNull();
+    const urls = get.mock.calls.map((c) => c[0] as string);
+    expect(urls.some((u) => u.startsWith('/catalog/') || u.endsWith('/fit-selections'))).toBe(false);
+  });
+
+  it('gives an estimator the run button, selections and placement controls', { timeout: 60_000 }, async () => {
+    mockApi();
+    renderFitPage('estimator');
+    await screen.findByText('Every check', undefined, { timeout: 20_000 });
+    expect(screen.getByRole('button', { name: 'Run fit check' })).toBeTruthy();
+    expect(screen.getByText('What goes in')).toBeTruthy();
+    await waitFor(() => expect(screen.getByRole('button', { name: 'Save placement' })).toBeTruthy());
+  });
+});

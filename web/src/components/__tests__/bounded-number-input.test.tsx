@@ -1,0 +1,39 @@
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { Form } from 'antd';
+import { describe, expect, it } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import { BoundedNumberInput } from '../bounded-number-input';
+
+let form: ReturnType<typeof Form.useForm<{ tax: number }>>[0] | undefined;
+
+function Harness() {
+  const [f] = Form.useForm<{ tax: number }>();
+  form = f;
+  return (
+    <Form form={f} initialValues={{ tax: 8 }}>
+      <Form.Item name="tax" label="Sales tax" rules={[{ type: 'number', min: 0, max: 100, message: 'Between 0 and 100 %' }]}>
+        <BoundedNumberInput min={0} max={100} precision={2} aria-label="Sales tax" />
+      </Form.Item>
+    </Form>
+  );
+}
+
+describe('BoundedNumberInput', () => {
+  it('keeps an out-of-range figure as typed and lets the rule say why', async () => {
+    renderWithApp(<Harness />);
+    const input = screen.getByRole('spinbutton', { name: 'Sales tax' }) as HTMLInputElement;
+    fireEvent.change(input, { target: { value: '150' } });
+    fireEvent.blur(input);
+    await waitFor(() => expect(screen.getByText('Between 0 and 100 %')).toBeTruthy());
+    expect(form?.getFieldValue('tax')).toBe(150);
+    expect(input.value).toBe('150.00');
+
+    fireEvent.change(input, { target: { value: '-5' } });
+    await waitFor(() => expect(form?.getFieldValue('tax')).toBe(-5));
+    expect(screen.getByText('Between 0 and 100 %')).toBeTruthy();
+
+    fireEvent.change(input, { target: { value: '7.5' } });
+    await waitFor(() => expect(screen.queryByText('Between 0 and 100 %')).toBeNull());
+    expect(form?.getFieldValue('tax')).toBe(7.5);
+  });
+});

@@ -1,0 +1,31 @@
+import { screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import type { Project } from '../../types';
+import { ProjectSelectionsCard } from '../project-details';
+
+const project = {
+  id: 'p1',
+  vehicleDescription: 'Long-bed pickup',
+  chassisModelId: 'ch-1',
+  engineProfileId: 'en-1',
+  transmissionId: null,
+} as Project;
+
+describe('ProjectSelectionsCard', () => {
+  it('shows catalog names and links to the fit page', () => {
+    renderWithApp(<ProjectSelectionsCard project={project} names={{ chassis: 'Short-cab frame', engine: 'Aluminium V8' }} fitPath="/projects/p1/fit" />);
+    expect(screen.getByText('Short-cab frame')).toBeTruthy();
+    expect(screen.getByText('Aluminium V8')).toBeTruthy();
+    expect(screen.queryByText('ch-1')).toBeNull();
+    expect(screen.getByText('No transmission chosen yet')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Choose parts on the fit page' }).getAttribute('href')).toBe('/projects/p1/fit');
+    expect(screen.queryByText(/arrives with the catalog/)).toBeNull();
+  });
+
+  it('says "chosen by the shop" when the name is not known to the viewer', () => {
+    renderWithApp(<ProjectSelectionsCard project={project} unnamedLabel="Chosen by the shop" />);
+    expect(screen.getAllByText('Chosen by the shop')).toHaveLength(2);
+    expect(screen.queryByText('en-1')).toBeNull();
+  });
+});
