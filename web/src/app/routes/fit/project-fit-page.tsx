@@ -329,20 +329,20 @@ export function ProjectFitPage() {
                 </Card>
               </Col>
               {!readOnly && (
-              <Col xs={24} xl={8}>
-                <Card className="fit-control">
-                  <PlacementControls
-                    value={placement}
-                    onChange={setPreview}
-                    saved={p.placement ?? storedPlacement}
-                    proposed={fitWindow?.best?.placement ?? null}
-                    isPreview={isPreview}
-                    onSave={canRun ? () => void savePlacement() : undefined}
-                    saving={updateProject.isPending}
-                    onReset={() => setPreview(null)}
-                  />
-                </Card>
-              </Col>
+                <Col xs={24} xl={8}>
+                  <Card className="fit-control">
+                    <PlacementControls
+                      value={placement}
+                      onChange={setPreview}
+                      saved={p.placement ?? storedPlacement}
+                      proposed={fitWindow?.best?.placement ?? null}
+                      isPreview={isPreview}
+                      onSave={canRun ? () => void savePlacement() : undefined}
+                      saving={updateProject.isPending}
+                      onReset={() => setPreview(null)}
+                    />
+                  </Card>
+                </Col>
               )}
               <Col xs={24} xl={12}>
                 <Card title="Front view: widths" className="fit-front-card">

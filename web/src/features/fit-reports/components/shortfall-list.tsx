@@ -125,24 +125,24 @@ export function ShortfallList({ shortfalls, ...rest }: ShortfallListProps) {
                 {matchResult(f)}
               </Typography.Text>
             ) : (
-            <Space size={16} wrap>
-              <span>
-                <Typography.Text type="secondary">Found </Typography.Text>
-                <Typography.Text strong data-testid="shortfall-measured">
-                  {formatFigure(f.measured, f.unit, units)}
-                </Typography.Text>
-              </span>
-              <span>
-                <Typography.Text type="secondary">Needs </Typography.Text>
-                <Typography.Text>{formatRequirement(f, units)}</Typography.Text>
-              </span>
-              <span>
-                <Typography.Text type="secondary">Margin </Typography.Text>
-                <Typography.Text type={f.status === 'fails' ? 'danger' : undefined} data-testid="shortfall-margin">
-                  {formatMargin(f, units)}
-                </Typography.Text>
-              </span>
-            </Space>
+              <Space size={16} wrap>
+                <span>
+                  <Typography.Text type="secondary">Found </Typography.Text>
+                  <Typography.Text strong data-testid="shortfall-measured">
+                    {formatFigure(f.measured, f.unit, units)}
+                  </Typography.Text>
+                </span>
+                <span>
+                  <Typography.Text type="secondary">Needs </Typography.Text>
+                  <Typography.Text>{formatRequirement(f, units)}</Typography.Text>
+                </span>
+                <span>
+                  <Typography.Text type="secondary">Margin </Typography.Text>
+                  <Typography.Text type={f.status === 'fails' ? 'danger' : undefined} data-testid="shortfall-margin">
+                    {formatMargin(f, units)}
+                  </Typography.Text>
+                </span>
+              </Space>
             )}
           </Flex>
           <Typography.Paragraph style={{ margin: '4px 0 0' }}>{f.message}</Typography.Paragraph>
