@@ -3,7 +3,7 @@ import type { ChassisPoint } from '../types/fit-spec';
 /**
  * Outline-to-outline gap, the fast hand path used by every envelope check and the fit window.
  *
- * Definition (DESIGN.md, "Gap"): when the two outlines do not touch, the smallest distance between them;
+ * Definition of the gap: when the two outlines do not touch, the smallest distance between them;
  * when they overlap, the gap is negative and equals minus the smallest vertical lift of the engine outline
  * (`a`) that separates it from the obstacle (`b`). Touching outlines have a gap of 0.
  *
@@ -423,7 +423,7 @@ export function verticalSeparationLift(
   return { lift: prevT, from: { x: prevEvent.fx, z: prevEvent.fz }, to: { x: prevEvent.tx, z: prevEvent.tz } };
 }
 
-/** The gap of DESIGN.md between engine outline `a` (shifted up by dz) and obstacle polygon `b`. */
+/** The gap between engine outline `a` (shifted up by dz) and obstacle polygon `b`. */
 export function outlineGap(a: readonly ChassisPoint[], aClosed: boolean, b: readonly ChassisPoint[], dz = 0): GapResult {
   const { best, crossing } = boundaryDistance(a, aClosed, b, dz);
   let touchingOrInside = crossing || best.d2 <= EPS;
@@ -461,7 +461,7 @@ export function outlineGapValue(a: readonly ChassisPoint[], aClosed: boolean, b:
   return outlineGap(a, aClosed, b, dz).gap;
 }
 
-/** The way the engine would move to clear an obstacle; DESIGN.md's gap uses `up` (a vertical lift). */
+/** The way the engine would move to clear an obstacle; the gap below uses `up` (a vertical lift). */
 export type SeparationDirection = 'up' | 'down' | 'forward' | 'rearward';
 
 /**

@@ -6,8 +6,8 @@ describe('placeEnginePoint', () => {
     expect(placeEnginePoint({ u: 300, w: -100 }, { setbackMm: 1000, heightMm: 500, tiltDeg: 0 })).toEqual({ x: 700, z: 400 });
   });
 
-  it('REFERENCES §8 (derived): rotating 3° about the front mounts drops a point 30 in behind the pivot by 1.5701 in', () => {
-    // Source: REFERENCES.md §8, "Rotating 3° about the front mounts drops a point 30 in behind the pivot by 1.5701 in (derived)".
+  it('derived: rotating 3° about the front mounts drops a point 30 in behind the pivot by 1.5701 in', () => {
+    // Derived: rotating 3° about the front mounts drops a point 30 in behind the pivot by 30·sin 3° = 1.5701 in (common practice: install tilt 2–4°, typically 3°).
     // Derived: drop = 30 in · sin 3° = 30 · 0.0523360 = 1.570080 in (the pivot stays put; the point is on the crank line).
     const pivotU = 600; // front mounts
     const pointU = pivotU - inchesToMm(30);
