@@ -7,6 +7,7 @@ import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAll
 const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
 const STAG = DEMO_PROJECT_IDS.stag;
 const SUMP = 'envelope.sump-crossmember';
+const MOUNTS = ['mounts.engine-mount-left', 'mounts.engine-mount-right'];
 
 interface FindingBody {
   checkId: string;
@@ -231,6 +232,39 @@ describe('fit reports', () => {
     const kept = await t.http.get(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(demo.counter));
     expect(kept.body.oilPanId).toBe(DEMO_CATALOG_IDS.oilPans.kestrelRearSwap);
     expect((await t.http.put(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(demo.counter)).send(selectionBody())).status).toBe(403);
+  });
+
+  it('choosing the demo mount adapter takes up the mount offsets; an unknown adapter is refused, nothing written', async () => {
+    const before = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.counter));
+    for (const id of MOUNTS) expect(finding(before.body.report, id).status).toBe('fails');
+    expect(before.body.inputs.spec.mountAdapterId).toBeUndefined();
+
+    const adapterId = DEMO_CATALOG_IDS.mountAdapters.drop60;
+    const put = await t.http
+      .put(`/api/projects/${RIDGEBACK}/fit-selections`)
+      .set(...bearer(demo.estimator))
+      .send(selectionBody({ oilPanId: DEMO_CATALOG_IDS.oilPans.kestrelRearSwap, oilPickupId: DEMO_CATALOG_IDS.oilPickups.kestrelRear, mountAdapterId: adapterId }));
+    expect(put.status).toBe(200);
+    expect(put.body.mountAdapterId).toBe(adapterId);
+    const run = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner));
+    expect(run.status).toBe(201);
+    expect(run.body.inputs.spec.mountAdapterId).toBe(adapterId);
+    // Sideways offset 55 mm against the adapter's 60 mm reach on both sides.
+    for (const id of MOUNTS) {
+      expect(['ok', 'tight']).toContain(finding(run.body.report, id).status);
+      expect(finding(run.body.report, id).margin).toBeCloseTo(5, 6);
+    }
+
+    const reports = await countRows(t.dataSource, 'fit_reports');
+    const bad = await t.http
+      .put(`/api/projects/${RIDGEBACK}/fit-selections`)
+      .set(...bearer(demo.owner))
+      .send(selectionBody({ mountAdapterId: '5a0b1c2d-0000-4000-8000-0000000005ff' }));
+    expect(bad.status).toBe(400);
+    expect(bad.body.details.join('\n')).toMatch(/mountAdapterId: there is no mount adapter/);
+    const kept = await t.http.get(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(demo.counter));
+    expect(kept.body).toEqual(put.body);
+    expect(await countRows(t.dataSource, 'fit_reports')).toBe(reports);
   });
 
   it('runs with missing selections: the checks that need them are unknown', async () => {

@@ -8,6 +8,7 @@ import { CreateProjects1796100005000 } from './migrations/1796100005000-create-p
 import { CreateCatalog1796100010000 } from './migrations/1796100010000-create-catalog';
 import { CreateFitReports1796100011000 } from './migrations/1796100011000-create-fit-reports';
 import { CreateCatalogBelts1796100012000 } from './migrations/1796100012000-create-catalog-belts';
+import { FitSelectionsMountAdapter1796100013000 } from './migrations/1796100013000-fit-selections-mount-adapter';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -21,4 +22,5 @@ export const MIGRATIONS = [
   CreateCatalog1796100010000,
   CreateFitReports1796100011000,
   CreateCatalogBelts1796100012000,
+  FitSelectionsMountAdapter1796100013000,
 ];

@@ -10,6 +10,7 @@ export function mapFitSelections(projectId: string, row: ProjectFitSelection | n
     oilPumpId: row?.oilPumpId ?? null,
     controllerId: row?.controllerId ?? null,
     accessoryDriveId: row?.accessoryDriveId ?? null,
+    mountAdapterId: row?.mountAdapterId ?? null,
     driveshaft: hasShaft
       ? {
           outerDiameterMm: row.driveshaftOuterDiameterMm!,

@@ -12,11 +12,12 @@ import { mapFitSelections } from './fit-selection.mapper';
 import { FitReportErrors } from './fit-reports.errors';
 import { ProjectFitSelection } from './project-fit-selection.entity';
 
-const PART_FIELDS: Array<{ field: 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId'; kind: CatalogKind; words: string }> = [
+const PART_FIELDS: Array<{ field: 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId' | 'mountAdapterId'; kind: CatalogKind; words: string }> = [
   { field: 'oilPanId', kind: 'oil-pans', words: 'oil pan' },
   { field: 'oilPickupId', kind: 'oil-pickups', words: 'oil pickup' },
   { field: 'oilPumpId', kind: 'oil-pumps', words: 'oil pump' },
   { field: 'controllerId', kind: 'controllers', words: 'engine controller' },
+  { field: 'mountAdapterId', kind: 'mount-adapters', words: 'mount adapter' },
 ];
 
 @Injectable()
@@ -63,6 +64,7 @@ export class FitSelectionsService {
         oilPumpId: input.oilPumpId?.toLowerCase() ?? null,
         controllerId: input.controllerId?.toLowerCase() ?? null,
         accessoryDriveId: input.accessoryDriveId ?? null,
+        mountAdapterId: input.mountAdapterId?.toLowerCase() ?? null,
         driveshaftOuterDiameterMm: input.driveshaft?.outerDiameterMm ?? null,
         driveshaftWallMm: input.driveshaft?.wallMm ?? null,
         driveshaftMaterial: input.driveshaft?.material ?? null,

@@ -88,6 +88,7 @@ export class FitSpecBuilderService {
     const partial: Omit<FitSpec, 'placement'> = {
       engine,
       ...(selection?.accessoryDriveId && { accessoryDriveId: selection.accessoryDriveId }),
+      ...(selection?.mountAdapterId && { mountAdapterId: selection.mountAdapterId }),
       ...(oilPan && { oilPan }),
       ...(oilPickup && { oilPickup }),
       ...(oilPump && { oilPump }),

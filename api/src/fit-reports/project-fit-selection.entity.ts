@@ -31,6 +31,10 @@ export class ProjectFitSelection {
   @Column({ type: 'varchar', length: 40, nullable: true })
   accessoryDriveId: string | null;
 
+  /** The catalog mount adapter used on both engine mounts. */
+  @Column({ type: 'char', length: 36, nullable: true })
+  mountAdapterId: string | null;
+
   @Column({ type: 'decimal', precision: 6, scale: 2, nullable: true, transformer: decimalTransformer })
   driveshaftOuterDiameterMm: number | null;
 

@@ -10,6 +10,8 @@ export interface DemoFitSelection {
   oilPumpId: string | null;
   controllerId: string | null;
   accessoryDriveId: string | null;
+  /** Unset on the demo project: its report shows the mount offset first, then an adapter is chosen. */
+  mountAdapterId: string | null;
   driveshaft: { outerDiameterMm: number; wallMm: number; material: 'steel' | 'aluminum' } | null;
   timingSetAdvanceDeg: number | null;
   topSpeedKph: number | null;
@@ -29,6 +31,7 @@ export const DEMO_FIT_SELECTIONS: DemoFitSelection[] = [
     oilPumpId: IDS.oilPumps.kestrelStock,
     controllerId: IDS.controllers.tessaryT8,
     accessoryDriveId: DEMO_ACCESSORY_DRIVE_IDS.truck,
+    mountAdapterId: null,
     driveshaft: { ...DEMO_FIT_SPEC.driveshaft! },
     timingSetAdvanceDeg: DEMO_FIT_SPEC.timingSetAdvanceDeg ?? 0,
     topSpeedKph: goals.topSpeedKph ?? null,

@@ -37,6 +37,7 @@ export interface FindingFields {
 const MISSING_INPUT_WORDS: Record<string, string> = {
   accessoryDrive: 'the accessory drive',
   controller: 'the engine controller',
+  mountAdapter: 'the chosen mount adapter',
   oilPan: 'the oil pan',
   oilPickup: 'the oil pickup',
   oilPump: 'the oil pump',

@@ -268,6 +268,8 @@ export interface SwapGoals {
 export interface FitSpec {
   engine: EngineSpec;
   accessoryDriveId?: string;
+  /** The mount adapter chosen for both sides, looked up in `candidates.mountAdapters` by id. */
+  mountAdapterId?: string;
   oilPan?: OilPanSpec;
   oilPickup?: OilPickupSpec;
   oilPump?: OilPumpSpec;

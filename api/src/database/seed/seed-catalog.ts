@@ -82,6 +82,7 @@ export async function seedCatalog(dataSource: DataSource): Promise<CatalogSeedRe
         oilPumpId: selection.oilPumpId,
         controllerId: selection.controllerId,
         accessoryDriveId: selection.accessoryDriveId,
+        mountAdapterId: selection.mountAdapterId,
         driveshaftOuterDiameterMm: selection.driveshaft?.outerDiameterMm ?? null,
         driveshaftWallMm: selection.driveshaft?.wallMm ?? null,
         driveshaftMaterial: selection.driveshaft?.material ?? null,

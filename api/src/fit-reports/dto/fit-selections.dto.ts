@@ -29,6 +29,7 @@ export class UpdateFitSelectionsDto {
   @OptionalCatalogId('oil pickup') oilPickupId?: string | null;
   @OptionalCatalogId('oil pump') oilPumpId?: string | null;
   @OptionalCatalogId('engine controller') controllerId?: string | null;
+  @OptionalCatalogId('mount adapter') mountAdapterId?: string | null;
 
   @ApiPropertyOptional({ type: String, nullable: true, maxLength: 40, description: "One of the engine's accessory drives (spec.accessoryDrives[].id)" })
   @IsOptional()
@@ -65,6 +66,7 @@ export class FitSelectionsResponseDto {
   @ApiProperty({ type: String, nullable: true }) oilPumpId: string | null;
   @ApiProperty({ type: String, nullable: true }) controllerId: string | null;
   @ApiProperty({ type: String, nullable: true }) accessoryDriveId: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The mount adapter used on both engine mounts' }) mountAdapterId: string | null;
   @ApiProperty({ type: DriveshaftResponseDto, nullable: true }) driveshaft: DriveshaftResponseDto | null;
   @ApiProperty({ type: Number, nullable: true }) timingSetAdvanceDeg: number | null;
   @ApiProperty({ type: Number, nullable: true }) topSpeedKph: number | null;

@@ -57,6 +57,7 @@ export class FitCandidatesDto {
 export class FitSpecDto implements FitSpec {
   @Nested(() => EngineSpecDto) engine: EngineSpecDto;
   @OptionalText(40, 'One of engine.accessoryDrives[].id') accessoryDriveId?: string;
+  @OptionalText(40, 'One of candidates.mountAdapters[].id: the adapter chosen for both sides') mountAdapterId?: string;
   @OptionalNested(() => OilPanSpecDto) oilPan?: OilPanSpecDto;
   @OptionalNested(() => OilPickupSpecDto) oilPickup?: OilPickupSpecDto;
   @OptionalNested(() => OilPumpSpecDto) oilPump?: OilPumpSpecDto;

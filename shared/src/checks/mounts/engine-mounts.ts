@@ -1,8 +1,8 @@
 import { placeEnginePoint } from '../../geometry/placement';
 import type { Finding, Remedy } from '../../types/finding';
 import type { ChassisPoint3, FitSpec, MountAdapterSpec, SideName } from '../../types/fit-spec';
-import type { CheckContext, CheckDefinition } from '../check-definition';
-import { measuredFinding, unknownFinding } from '../check-definition';
+import type { CheckContext, CheckDefinition, FindingFields } from '../check-definition';
+import { measuredFinding, statusFromMargin, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE } from '../envelope/envelope-common';
 import { mmWithInches } from '../../units/figure-format';
 
@@ -46,6 +46,52 @@ function describe(o: MountOffset): string {
   return `${part(o.dx, 'rearward', 'forward')}, ${part(o.dz, 'up', 'down')}, ${part(o.dy, 'to the right', 'to the left')}`;
 }
 
+export interface AdapterAxisSlack {
+  axis: 'dx' | 'dz' | 'dy';
+  /** Plain words for the axis in messages. */
+  words: string;
+  /** |offset| along the axis. */
+  offsetMm: number;
+  /** The adapter's reach along the axis. */
+  limitMm: number;
+  /** limit − |offset|: negative where the offset is too large for the adapter. */
+  slackMm: number;
+}
+
+/** The adapter's slack on each axis, tightest first (the most negative when it does not cover). */
+export function adapterSlack(adapter: MountAdapterSpec, o: Pick<MountOffset, 'dx' | 'dy' | 'dz'>): AdapterAxisSlack[] {
+  const axes: Array<[AdapterAxisSlack['axis'], string, number]> = [
+    ['dx', 'fore-aft', adapter.maxDxMm],
+    ['dz', 'vertical', adapter.maxDzMm],
+    ['dy', 'sideways', adapter.maxDyMm],
+  ];
+  return axes
+    .map(([axis, words, limitMm]) => ({ axis, words, offsetMm: Math.abs(o[axis]), limitMm, slackMm: limitMm - Math.abs(o[axis]) }))
+    .sort((a, b) => a.slackMm - b.slackMm);
+}
+
+/** Catalog adapters that cover the offset (a part remedy), then fabrication. */
+function mountRemedies(spec: FitSpec, settings: CheckContext['settings'], o: MountOffset, adapters: MountAdapterSpec[]): Remedy[] {
+  const remedies: Remedy[] = [];
+  if (adapters.length) {
+    const need = { maxDxMm: Math.ceil(Math.abs(o.dx)), maxDzMm: Math.ceil(Math.abs(o.dz)), maxDyMm: Math.ceil(Math.abs(o.dy)) };
+    remedies.push({
+      kind: 'part',
+      category: 'mount-adapter',
+      requires: need,
+      partIds: adapters.map((a) => a.id),
+      note: `A mount adapter that covers ${describe(o)}.`,
+    });
+  }
+  remedies.push({
+    kind: 'fabrication',
+    operation: `Fabricate and weld ${o.side} engine mount brackets`,
+    laborHours: settings.mountFabricationHours,
+    note: 'Support the engine on a hoist or stand while fitting, never work under a hanging engine, and have frame welding done by a qualified welder.',
+  });
+  return remedies;
+}
+
 export function runEngineMount({ spec, settings }: CheckContext, side: SideName): Finding {
   const fields = {
     checkId: `mounts.engine-mount-${side}`,
@@ -61,36 +107,49 @@ export function runEngineMount({ spec, settings }: CheckContext, side: SideName)
   if (!spec.chassis.mountPads?.[side]) missing.push(`chassis.mountPads.${side}`);
   if (missing.length) return unknownFinding(fields, missing);
   const o = mountOffset(spec, side);
+  if (spec.mountAdapterId !== undefined) return runWithChosenAdapter(spec, settings, fields, o);
   const required = settings.mountDirectFitToleranceMm;
   const margin = required - o.distance;
   const status = margin >= 0 ? 'ok' : 'fails';
-  const remedies: Remedy[] = [];
+  let remedies: Remedy[] = [];
   let message: string;
   if (status === 'ok') {
     message = `The ${side} engine mount boss lands ${mmWithInches(o.distance)} from the chassis pad, ${describe(o)}; it bolts up directly, since up to ${mmWithInches(required)} is taken up.`;
   } else {
     const adapters = coveringAdapters(spec, o);
-    const need = { maxDxMm: Math.ceil(Math.abs(o.dx)), maxDzMm: Math.ceil(Math.abs(o.dz)), maxDyMm: Math.ceil(Math.abs(o.dy)) };
     message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss, ${mmWithInches(o.distance)} in all; ${
       adapters.length ? `the catalog adapter ${adapters[0].name} covers that offset.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
     }`;
-    if (adapters.length) {
-      remedies.push({
-        kind: 'part',
-        category: 'mount-adapter',
-        requires: need,
-        partIds: adapters.map((a) => a.id),
-        note: `A mount adapter that covers ${describe(o)}.`,
-      });
-    }
-    remedies.push({
-      kind: 'fabrication',
-      operation: `Fabricate and weld ${side} engine mount brackets`,
-      laborHours: settings.mountFabricationHours,
-      note: 'Support the engine on a hoist or stand while fitting, never work under a hanging engine, and have frame welding done by a qualified welder.',
-    });
+    remedies = mountRemedies(spec, settings, o, adapters);
   }
   return measuredFinding(fields, { measured: o.distance, required, margin, status }, message, remedies);
+}
+
+/**
+ * With an adapter chosen, the figure is the tightest axis: its offset against the adapter's reach there.
+ * Tight within the tight band of that reach; fails on the axis whose offset is past it.
+ */
+function runWithChosenAdapter(spec: FitSpec, settings: CheckContext['settings'], fields: FindingFields, o: MountOffset): Finding {
+  const adapter = (spec.candidates?.mountAdapters ?? []).find((a) => a.id === spec.mountAdapterId);
+  if (!adapter) {
+    return unknownFinding(fields, ['mountAdapter'], `Cannot check ${fields.title.toLowerCase()}: the chosen mount adapter "${spec.mountAdapterId}" is not among the catalog's mount adapters.`);
+  }
+  const [tightest] = adapterSlack(adapter, o);
+  const status = statusFromMargin(tightest.slackMm, settings.tightBandMm);
+  const figures = { measured: tightest.offsetMm, required: tightest.limitMm, margin: tightest.slackMm, status };
+  const offset = `the chassis pad sits ${describe(o)} of the ${o.side} engine mount boss, ${mmWithInches(o.distance)} in all`;
+  if (status !== 'fails') {
+    const reach = `${mmWithInches(adapter.maxDxMm)} fore-aft, ${mmWithInches(adapter.maxDzMm)} vertical and ${mmWithInches(adapter.maxDyMm)} sideways`;
+    const message = `The chosen adapter ${adapter.name} takes up the ${o.side} offset: ${offset}, within its reach of ${reach}; the ${tightest.words} offset leaves ${mmWithInches(tightest.slackMm)} to spare.`;
+    // Tight: name only roomier adapters (clear of the tight band on every axis); fabrication is not needed.
+    const roomier = coveringAdapters(spec, o).filter((a) => a.id !== adapter.id && adapterSlack(a, o)[0].slackMm >= settings.tightBandMm);
+    return measuredFinding(fields, figures, message, roomier.length ? mountRemedies(spec, settings, o, roomier).slice(0, 1) : []);
+  }
+  const adapters = coveringAdapters(spec, o);
+  const message = `The chosen adapter ${adapter.name} does not cover the ${o.side} offset: the ${tightest.words} offset of ${mmWithInches(tightest.offsetMm)} is ${mmWithInches(-tightest.slackMm)} past its ${mmWithInches(tightest.limitMm)} reach (${offset}); ${
+    adapters.length ? `the catalog adapter ${adapters[0].name} covers that offset.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
+  }`;
+  return measuredFinding(fields, figures, message, mountRemedies(spec, settings, o, adapters));
 }
 
 export const ENGINE_MOUNT_LEFT_CHECK: CheckDefinition = {

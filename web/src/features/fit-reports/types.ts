@@ -52,11 +52,13 @@ export type FitSelections = {
   oilPumpId: string | null;
   controllerId: string | null;
   accessoryDriveId: string | null;
+  /** The catalog mount adapter used on both engine mounts. */
+  mountAdapterId?: string | null;
   timingSetAdvanceDeg?: number | null;
   [key: string]: unknown;
 };
 
-export type FitSelectionKey = 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId' | 'accessoryDriveId';
+export type FitSelectionKey = 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId' | 'accessoryDriveId' | 'mountAdapterId';
 
 /** One check's change between two reports. */
 export type FindingChange = {

@@ -39,6 +39,7 @@ const SELECTION_FIELDS = [
   'oilPumpId',
   'controllerId',
   'accessoryDriveId',
+  'mountAdapterId',
   'driveshaft',
   'timingSetAdvanceDeg',
   'topSpeedKph',
@@ -214,9 +215,10 @@ export function ProjectFitPage() {
     slot('oilPumpId', 'Oil pump', catalog.pumps.options, catalog.pumps.loading),
     slot('controllerId', 'Engine controller', catalog.controllers.options, catalog.controllers.loading),
     slot('accessoryDriveId', 'Accessory drive', (engineSpec?.accessoryDrives ?? []).map((d) => ({ value: d.id, label: d.name })), false),
+    slot('mountAdapterId', 'Mount adapter', catalog.mountAdapters.options, catalog.mountAdapters.loading),
   ];
 
-  const chosenIds = [sel?.oilPanId, sel?.oilPickupId, sel?.oilPumpId, sel?.controllerId, sel?.accessoryDriveId].filter((x): x is string => Boolean(x));
+  const chosenIds = [sel?.oilPanId, sel?.oilPickupId, sel?.oilPumpId, sel?.controllerId, sel?.accessoryDriveId, sel?.mountAdapterId].filter((x): x is string => Boolean(x));
   const minRailGap = shown?.settings?.minRailGapMm;
 
   return (

@@ -21,7 +21,8 @@ export function useFitCatalog(enabled = true) {
   const pickups = useOptions('oil-pickups', enabled);
   const pumps = useOptions('oil-pumps', enabled);
   const controllers = useOptions('controllers', enabled);
-  return { engines, chassis, transmissions, pans, pickups, pumps, controllers };
+  const mountAdapters = useOptions('mount-adapters', enabled);
+  return { engines, chassis, transmissions, pans, pickups, pumps, controllers, mountAdapters };
 }
 
 export type FitCatalog = ReturnType<typeof useFitCatalog>;

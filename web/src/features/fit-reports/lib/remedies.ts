@@ -9,6 +9,7 @@ export const selectionKeyFor: Partial<Record<PartCategory, FitSelectionKey>> = {
   'oil-pump': 'oilPumpId',
   'engine-controller': 'controllerId',
   'accessory-drive': 'accessoryDriveId',
+  'mount-adapter': 'mountAdapterId',
 };
 
 export const partNouns: Partial<Record<PartCategory, string>> = {
@@ -17,7 +18,7 @@ export const partNouns: Partial<Record<PartCategory, string>> = {
   'oil-pump': 'pump',
   'engine-controller': 'controller',
   'accessory-drive': 'drive',
-  'mount-adapter': 'mount kit',
+  'mount-adapter': 'adapter',
   'bellhousing-adapter': 'adapter',
 };
 

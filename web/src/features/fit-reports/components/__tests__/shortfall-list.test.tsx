@@ -79,4 +79,23 @@ describe('ShortfallList', () => {
     await userEvent.click(button);
     expect(onUsePart).toHaveBeenCalledWith(badlyBlocked.remedies[0], 'pan-rear');
   });
+
+  it('offers a covering mount adapter with "Use this adapter", and marks the one in use', async () => {
+    const mount = finding({
+      checkId: 'mounts.engine-mount-left',
+      title: 'Engine mount, left side',
+      limit: 'max',
+      measured: 68.4,
+      required: 3,
+      margin: -65.4,
+      remedies: [{ kind: 'part', category: 'mount-adapter', requires: { maxDxMm: 12, maxDzMm: 39, maxDyMm: 55 }, partIds: ['mnt-60', 'mnt-90'], note: '' }],
+    });
+    const parts = { 'mnt-60': { id: 'mnt-60', name: 'Drop plates 60' }, 'mnt-90': { id: 'mnt-90', name: 'Heavy kit 90' } };
+    const onUsePart = vi.fn();
+    renderWithApp(<ShortfallList shortfalls={[mount]} parts={parts} onUsePart={onUsePart} chosenIds={['mnt-90']} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Use this adapter: Drop plates 60' }));
+    expect(onUsePart).toHaveBeenCalledWith(mount.remedies[0], 'mnt-60');
+    expect(screen.queryByRole('button', { name: /Heavy kit 90/ })).toBeNull();
+    expect(screen.getByText('In use')).toBeTruthy();
+  });
 });
