@@ -155,7 +155,7 @@ migrate_and_seed() {
 
 wait_for_api() {
   local tries=0
-  until curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1; do
+  until node -e "fetch('http://127.0.0.1:$PORT/api/health').then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))" 2>/dev/null; do
     tries=$((tries + 1)); [ $tries -gt 300 ] && fail "the API did not answer on port $PORT"
     if ! kill -0 "$API_PID" 2>/dev/null; then fail "the API stopped during start-up (see the lines above)"; fi
     sleep 0.1
