@@ -3,7 +3,7 @@ import { GROUND_CLEARANCE_ID, lowestPoint } from '../checks/envelope/ground-clea
 import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
 import { HOOD_ID, measureHood } from '../checks/envelope/hood';
 import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
-import { obstaclesOfKinds, placedForSpec, type PlacedWidthBox } from '../checks/envelope/placed-engine';
+import { obstaclesOfKinds, placedForSpec, type PlacedEngine, type PlacedWidthBox } from '../checks/envelope/placed-engine';
 import { measureRailWidth, RAIL_WIDTH_ID } from '../checks/envelope/rail-width';
 import { measureSteeringBox, STEERING_BOX_ID } from '../checks/envelope/steering-box';
 import { TRANSMISSION_TUNNEL_ID, TUNNEL_KINDS } from '../checks/envelope/transmission-tunnel';
@@ -25,15 +25,9 @@ export interface DimensionSegment {
   short: boolean;
 }
 
-export interface SideViewGeometry {
-  placement: Placement;
-  /** Placed engine outlines, chassis frame (x rearward, z up). */
-  pan: ChassisPoint[] | null;
-  topProfile: ChassisPoint[];
-  rearProfile: ChassisPoint[];
-  transmission: ChassisPoint[] | null;
-  fanFace: ChassisPoint[];
-  driveFace: ChassisPoint[];
+/** Placed engine outlines in the chassis frame (x rearward, z up), plus what surrounds them. */
+export interface SideViewGeometry
+  extends Pick<PlacedEngine, 'placement' | 'pan' | 'topProfile' | 'rearProfile' | 'transmission' | 'fanFace' | 'driveFace'> {
   obstacles: Array<Pick<ChassisObstacle, 'id' | 'name' | 'kind' | 'outline'>>;
   hoodLine: ChassisPoint[];
   radiator: { x: number; zFrom: number; zTo: number } | null;

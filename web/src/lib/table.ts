@@ -1,5 +1,7 @@
+import type { TablePaginationConfig } from 'antd';
 import type { SorterResult } from 'antd/es/table/interface';
 import type { SortOrder } from '@/types/api';
+import { PAGE_SIZES } from '@/hooks/use-list-search-params';
 
 export type TableSort<TSort extends string> = { sort?: TSort; order?: SortOrder };
 
@@ -20,6 +22,18 @@ export function sorterToParams<TRecord, TSort extends string>(
 export function sortOrderFor(column: string, sort?: string, order?: SortOrder): 'ascend' | 'descend' | null {
   if (sort !== column) return null;
   return order === 'desc' ? 'descend' : 'ascend';
+}
+
+/** antd pagination for a list paged by the server: current page, size choices and "1–20 of 57". */
+export function serverPagination(query: { page: number; pageSize: number }, total: number | undefined): TablePaginationConfig {
+  return {
+    current: query.page,
+    pageSize: query.pageSize,
+    total: total ?? 0,
+    showSizeChanger: true,
+    pageSizeOptions: PAGE_SIZES.map(String),
+    showTotal: (all, [from, to]) => `${from}–${to} of ${all}`,
+  };
 }
 
 /** Kept for existing imports; the formatter lives in `@/lib/dates`. */

@@ -2,7 +2,7 @@ import { Button, Flex, Input, Popconfirm, Space, Table, Typography } from 'antd'
 import type { ColumnsType } from 'antd/es/table';
 import { ErrorState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
-import { formatDate } from '@/lib/table';
+import { formatDate, serverPagination } from '@/lib/table';
 import { useDeleteCatalogItem } from '../api/delete-catalog-item';
 import { useCatalogItems } from '../api/get-catalog-items';
 import { kindDefinitions } from '../lib/catalog-kinds';
@@ -108,14 +108,7 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
         columns={columns}
         dataSource={items.data?.items ?? []}
         locale={{ emptyText: `No ${def.label.toLowerCase()} in the catalog yet.` }}
-        pagination={{
-          current: query.page,
-          pageSize: query.pageSize,
-          total: items.data?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: [10, 20, 50, 100],
-          showTotal: (total, [from, to]) => `${from}–${to} of ${total}`,
-        }}
+        pagination={serverPagination(query, items.data?.total)}
         onChange={(p) => onQueryChange({ page: p.current ?? 1, pageSize: p.pageSize ?? query.pageSize })}
       />
     </Flex>

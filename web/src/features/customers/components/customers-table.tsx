@@ -1,8 +1,7 @@
 import { Button, Flex, Input, Popconfirm, Space, Table, Typography } from 'antd';
 import type { ColumnsType, TableProps } from 'antd/es/table';
 import { ErrorState, EmptyState } from '@/components/query-state';
-import { formatDate, sorterToParams, sortOrderFor } from '@/lib/table';
-import { PAGE_SIZES } from '@/hooks/use-list-search-params';
+import { formatDate, serverPagination, sorterToParams, sortOrderFor } from '@/lib/table';
 import { useCustomers } from '../api/get-customers';
 import { useDeleteCustomer } from '../api/delete-customer';
 import { customerSortFields, type Customer, type CustomerListQuery } from '../types';
@@ -130,15 +129,7 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
         loading={customers.isFetching}
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
-        pagination={{
-          current: query.page,
-          pageSize: query.pageSize,
-          total: page?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total, [from, to]) => `${from}–${to} of ${total}`,
-          hideOnSinglePage: false,
-        }}
+        pagination={serverPagination(query, page?.total)}
         locale={{
           emptyText: customers.isPending ? (
             ' '

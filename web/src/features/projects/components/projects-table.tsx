@@ -3,8 +3,7 @@ import type { ColumnsType, TableProps } from 'antd/es/table';
 import { Link } from 'react-router-dom';
 import { toProjectDetail } from '@/config/paths';
 import { EmptyState, ErrorState } from '@/components/query-state';
-import { PAGE_SIZES } from '@/hooks/use-list-search-params';
-import { formatDate, sorterToParams, sortOrderFor } from '@/lib/table';
+import { formatDate, serverPagination, sorterToParams, sortOrderFor } from '@/lib/table';
 import { useProjects } from '../api/get-projects';
 import { statusLabels, useLabels } from '../project-labels';
 import { projectSortFields, projectStatuses, type Project, type ProjectListQuery, type ProjectStatus } from '../types';
@@ -117,14 +116,7 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
         loading={projects.isFetching}
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
-        pagination={{
-          current: query.page,
-          pageSize: query.pageSize,
-          total: page?.total ?? 0,
-          showSizeChanger: true,
-          pageSizeOptions: PAGE_SIZES.map(String),
-          showTotal: (total, [from, to]) => `${from}–${to} of ${total}`,
-        }}
+        pagination={serverPagination(query, page?.total)}
         locale={{
           emptyText: projects.isPending ? (
             ' '
