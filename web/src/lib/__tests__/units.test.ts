@@ -16,6 +16,12 @@ describe('length units', () => {
     expect(formatLength(317.5, 'in')).toBe('12.5 in');
   });
 
+  it('reads fractions of an inch as a shop writes them', () => {
+    // Source: NIST SP 811, 1 in = 25.4 mm exactly: 12 1/2 in = 12.5 × 25.4 = 317.5 mm.
+    expect(parseLength('12 1/2"', 'mm')).toBe(317.5);
+    expect(parseLength('12-1/2 in', 'mm')).toBe(317.5);
+  });
+
   it('formats power in hp with inches and kW with millimetres', () => {
     expect(formatPower(298, 'in')).toBe('400 hp (298 kW)');
     expect(formatPower(298, 'mm')).toBe('298 kW');
