@@ -35,12 +35,31 @@ ensure_node_modules() {
   fi
 }
 
+BUILD_STAMP="$LOCAL/build.stamp"
+
+# True when a source, config or the lock changed since the last full build (or an output is missing).
+sources_changed() {
+  [ -f "$BUILD_STAMP" ] || return 0
+  for out in shared/dist seed-data/dist api/dist web/dist; do [ -d "$out" ] || return 0; done
+  [ -n "$(find shared/src seed-data/src api/src web/src web/public web/index.html package-lock.json \
+    shared/package.json seed-data/package.json api/package.json web/package.json \
+    shared/tsconfig*.json seed-data/tsconfig.json api/tsconfig*.json web/tsconfig.json web/vite.config.ts \
+    -newer "$BUILD_STAMP" -print -quit 2>/dev/null)" ]
+}
+
 build_all() {
+  if ! sources_changed; then
+    say "Build is up to date (nothing changed since the last one)"
+    return 0
+  fi
   say "Building shared, seed-data, api and web"
+  # Stamp the start, so a file saved during the build still counts as changed next time.
+  touch "$BUILD_STAMP.next"
   npm run build -w shared >/dev/null
   npm run build -w seed-data >/dev/null
   npm run build -w api >/dev/null
   npm run build -w web >"$LOCAL/web-build.log" 2>&1 || { cat "$LOCAL/web-build.log"; fail "web build failed"; }
+  mv "$BUILD_STAMP.next" "$BUILD_STAMP"
 }
 
 free_port() { node "$ROOT/scripts/free-port.js" "$1"; }
