@@ -239,6 +239,7 @@ cmd_test() {
   NODE_ENV_VALUE=test write_env test swapwright_test "$(free_port 3100)"
   SUITES_PASSED=(); SUITES_FAILED=()
 
+  run_suite typecheck npm run -s typecheck
   run_suite shared bash -c "cd shared && npx jest --ci --json --outputFile='$results/shared.json'"
   run_suite web bash -c "cd web && npx vitest run --reporter=default --reporter=json --outputFile.json='$results/web.json'"
   run_suite api bash -c "cd api && npx jest --ci --runInBand --json --outputFile='$results/api.json'"

@@ -148,7 +148,7 @@ describe('validation', () => {
       { what: 'a project title', path: '/api/projects', body: { ...validProject, title: ' \t ' }, message: 'title must not be empty' },
       { what: 'a catalog item name', path: '/api/catalog/chassis', body: null, message: 'name must not be empty' },
     ])('refuses $what of only spaces', async ({ path, body, message }) => {
-      let send = body;
+      let send: object | undefined = body ?? undefined;
       if (!send) {
         const existing = await t.http.get(`${path}/${DEMO_CATALOG_IDS.chassis.stag84}`).set(...bearer(s.owner)).expect(200);
         const { id: _id, ...spec } = existing.body.spec;

@@ -3,10 +3,8 @@ import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   compareFitReports,
   runFitCheck,
-  STATUS_SEVERITY,
-  type CheckStatus,
+  worstStatus,
   type FitReport,
-  type FitReportSummary,
   type FitSettings,
   type FitSpec,
 } from '@swapwright/shared';
@@ -29,13 +27,6 @@ import { FitSpecBuilderService } from './fit-spec-builder.service';
 
 /** Running a check moves a project that is still being set up on to the checking stage. */
 const BEFORE_CHECKING: ProjectStatus[] = ['intake', 'measuring'];
-
-export function worstStatusOf(summary: FitReportSummary): CheckStatus {
-  const statuses: CheckStatus[] = ['ok', 'tight', 'fails', 'unknown'];
-  return statuses
-    .filter((status) => summary[status] > 0)
-    .reduce<CheckStatus>((worst, status) => (STATUS_SEVERITY[status] > STATUS_SEVERITY[worst] ? status : worst), 'ok');
-}
 
 /** Class instances from the validation pipe to the plain JSON the engine would get from any other caller. */
 function plain<T>(value: T): T {
@@ -78,7 +69,7 @@ export class FitReportsService {
       tightCount: report.summary.tight,
       failsCount: report.summary.fails,
       unknownCount: report.summary.unknown,
-      worstStatus: worstStatusOf(report.summary),
+      worstStatus: worstStatus(report.summary),
     });
     await this.dataSource.transaction(async (manager) => {
       await manager.insert(FitReportRecord, record);

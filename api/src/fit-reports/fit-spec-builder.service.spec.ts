@@ -81,7 +81,9 @@ describe('demo belt stock', () => {
   it.each(DEMO_CATALOG.engines.flatMap((engine) => engine.accessoryDrives.map((drive) => ({ engine: engine.name, drive }))))(
     'has a belt inside the take-up of the $engine $drive.name',
     ({ drive }) => {
-      const window = beltLengthWindow(accessoryDriveBeltLayout(drive).length, drive.tensionerTakeUpMm);
+      const layout = accessoryDriveBeltLayout(drive);
+      if (!layout.ok) throw new Error(`the ${drive.name} layout is refused: ${layout.code}`);
+      const window = beltLengthWindow(layout.length, drive.tensionerTakeUpMm);
       const fitting = stockBeltLengthsFor(drive, DEMO_CATALOG.belts).filter((length) => length >= window.minMm && length <= window.maxMm);
       expect(fitting.length).toBeGreaterThan(0);
     },

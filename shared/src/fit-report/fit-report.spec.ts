@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { SYSTEM_CHECKS } from '../checks/system-checks';
 import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../fixtures/demo-fit-spec';
 import { STATUS_SEVERITY } from '../types/finding';
-import { allChecks, compareFitReports, FIT_ENGINE_VERSION, GEOMETRIC_CHECKS, runFitCheck } from './fit-report';
+import { allChecks, compareFitReports, FIT_ENGINE_VERSION, GEOMETRIC_CHECKS, runFitCheck, worstStatus } from './fit-report';
 import { frontViewGeometry, sideViewGeometry } from './view-geometry';
 
 describe('runFitCheck', () => {
@@ -105,5 +105,15 @@ describe('sideViewGeometry and frontViewGeometry', () => {
     const rail = g.dimensions.find((d) => d.checkId === 'envelope.rail-width')!;
     expect(rail.valueMm).toBeCloseTo(Math.abs(rail.to.y - rail.from.y), 9);
     expect(g.steeringBox?.side).toBe('left');
+  });
+});
+
+describe('worstStatus', () => {
+  it('takes the most severe status present, fails over tight over unknown over ok', () => {
+    // Derived: severity order fails > tight > unknown > ok.
+    expect(worstStatus({ total: 3, ok: 1, tight: 1, fails: 0, unknown: 1 })).toBe('tight');
+    expect(worstStatus({ total: 2, ok: 1, tight: 0, fails: 1, unknown: 0 })).toBe('fails');
+    expect(worstStatus({ total: 1, ok: 0, tight: 0, fails: 0, unknown: 1 })).toBe('unknown');
+    expect(worstStatus({ total: 0, ok: 0, tight: 0, fails: 0, unknown: 0 })).toBe('ok');
   });
 });

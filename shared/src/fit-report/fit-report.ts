@@ -72,6 +72,12 @@ export function summarize(findings: readonly Finding[]): FitReportSummary {
   return summary;
 }
 
+/** The most severe status present in a summary (`ok` for an empty report). */
+export function worstStatus(summary: FitReportSummary): CheckStatus {
+  const present = (Object.keys(STATUS_SEVERITY) as CheckStatus[]).filter((status) => summary[status] > 0);
+  return present.reduce<CheckStatus>((worst, status) => (STATUS_SEVERITY[status] > STATUS_SEVERITY[worst] ? status : worst), 'ok');
+}
+
 function runOne(check: CheckDefinition, spec: FitSpec, settings: FitSettings): Finding {
   try {
     return check.run({ spec, settings });
