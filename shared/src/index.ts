@@ -65,3 +65,6 @@ export * from './checks/envelope/steering-box';
 export * from './checks/mounts/engine-mounts';
 export * from './checks/transmission-mount';
 export * from './fit-report/view-geometry';
+export * from './quoting/exact-money';
+export * from './quoting/quote-money';
+export * from './quoting/revision-diff';
