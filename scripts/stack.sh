@@ -154,6 +154,8 @@ export SMTP_HOST=127.0.0.1
 export SMTP_PORT=$SMTP_PORT
 export MAIL_FROM="Swapwright <no-reply@swapwright.test>"
 export MAIL_FAKE_URL=http://127.0.0.1:$MAIL_HTTP_PORT/messages
+# GET /api/dev/mail (owners only) relays the fake above; the test profile turns it on for the API suites.
+export DEV_MAIL_ENABLED=${DEV_MAIL_ENABLED_VALUE:-false}
 export WEB_DIST_DIR=$ROOT/web/dist
 export UPLOAD_DIR=$LOCAL/$profile/uploads
 ENV
@@ -210,7 +212,7 @@ cmd_start() {
 
   Swapwright is running at  http://127.0.0.1:$PORT/
   API documentation:        http://127.0.0.1:$PORT/api/docs
-  Captured e-mail:          http://127.0.0.1:$PORT/api/dev/mail
+  Captured e-mail:          $MAIL_FAKE_URL   (local only)
 
 MSG
   print_sign_ins
@@ -236,7 +238,7 @@ cmd_test() {
   mail_start test 2535
   API_PID=""
   trap 'kill $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
-  NODE_ENV_VALUE=test write_env test swapwright_test "$(free_port 3100)"
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true write_env test swapwright_test "$(free_port 3100)"
   SUITES_PASSED=(); SUITES_FAILED=()
 
   run_suite typecheck npm run -s typecheck
@@ -265,7 +267,7 @@ cmd_services() {
   ensure_debian_packages
   db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
-  NODE_ENV_VALUE=test write_env test swapwright_test "$(free_port 3100)"
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true write_env test swapwright_test "$(free_port 3100)"
   echo "Services running. Use: source .local/test/env.sh   (stop: bash scripts/stack.sh stop-services)"
 }
 

@@ -201,9 +201,20 @@ describe('auth', () => {
       await t.http.post('/api/auth/password-reset/confirm').send({ token: 'abc', password: 'whatever-123' }).expect(400);
     });
 
-    it('shows captured mail through GET /api/dev/mail in test', async () => {
-      const response = await t.http.get('/api/dev/mail').expect(200);
+    it('shows captured mail through GET /api/dev/mail to a signed-in owner when enabled', async () => {
+      const owner = await signIn(t.http, email, 'second-password');
+      const response = await t.http.get('/api/dev/mail').set(...bearer(owner)).expect(200);
       expect(response.body[0]).toMatchObject({ to: [email], subject: expect.any(String) });
+    });
+
+    it('keeps captured mail (reset links) from anyone signed out or not an owner', async () => {
+      const anonymous = await t.http.get('/api/dev/mail').expect(401);
+      expect(JSON.stringify(anonymous.body)).not.toMatch(/reset-password/);
+      for (const role of ['estimator', 'fabricator', 'counter', 'customer'] as const) {
+        const member = await signIn(t.http, `${role}@ironbark.test`);
+        const refused = await t.http.get('/api/dev/mail').set(...bearer(member)).expect(403);
+        expect(refused.body.code).toBe('forbidden');
+      }
     });
   });
 });

@@ -1,4 +1,4 @@
-import { BASE_URL, openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { signInAs } from './support/session';
 
 interface CapturedMail {
@@ -45,7 +45,9 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
     await page.getByText(email).first().waitFor();
     await saveScreenshot(page, 'owner-members');
 
-    const mails = (await (await page.request.get(`${BASE_URL}/api/dev/mail`)).json()) as CapturedMail[];
+    // The local mail fake's own endpoint (scripts/stack.sh exports MAIL_FAKE_URL); /api/dev/mail is for owners only.
+    if (!process.env.MAIL_FAKE_URL) throw new Error('MAIL_FAKE_URL is not set: source .local/test/env.sh first.');
+    const mails = (await (await page.request.get(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
     const invitation = mails.find((mail) => mail.to.includes(email));
     expect(invitation).toBeDefined();
     const link = /https?:\/\/\S+accept-invite\?token=[^\s"<>]+/.exec(invitation!.text)?.[0];

@@ -3,7 +3,3 @@ import { EnvironmentVariables } from './env.validation';
 
 /** ConfigService typed over the validated environment: `config.get('JWT_SECRET', { infer: true })`. */
 export type AppConfigService = ConfigService<EnvironmentVariables, true>;
-
-export function isDevOrTest(nodeEnv: string): boolean {
-  return nodeEnv === 'development' || nodeEnv === 'test';
-}

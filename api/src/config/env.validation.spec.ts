@@ -38,4 +38,17 @@ describe('validateEnv', () => {
       expect((error as Error).message).toMatch(/^Swapwright cannot start/);
     }
   });
+
+  it('leaves captured mail off unless DEV_MAIL_ENABLED is exactly true', () => {
+    expect(validateEnv(envStub.complete).DEV_MAIL_ENABLED).toBe(false);
+    expect(validateEnv({ ...envStub.complete, DEV_MAIL_ENABLED: 'false' }).DEV_MAIL_ENABLED).toBe(false);
+    expect(validateEnv({ ...envStub.complete, DEV_MAIL_ENABLED: 'true' }).DEV_MAIL_ENABLED).toBe(true);
+    expect(() => validateEnv({ ...envStub.complete, DEV_MAIL_ENABLED: 'yes' })).toThrow(/DEV_MAIL_ENABLED must be true or false/);
+  });
+
+  it('refuses captured mail in production', () => {
+    expect(() => validateEnv({ ...envStub.complete, NODE_ENV: 'production', DEV_MAIL_ENABLED: 'true' })).toThrow(
+      /DEV_MAIL_ENABLED must not be true when NODE_ENV is production/,
+    );
+  });
 });

@@ -1,6 +1,7 @@
 import 'reflect-metadata';
-import { plainToInstance, Type } from 'class-transformer';
+import { plainToInstance, Transform, Type } from 'class-transformer';
 import {
+  IsBoolean,
   IsIn,
   IsInt,
   IsNotEmpty,
@@ -73,10 +74,18 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @IsNotEmpty()
   MAIL_FROM: string;
 
-  /** Read by GET /api/dev/mail in development and test. */
+  /** The local mail fake's HTTP endpoint; GET /api/dev/mail relays it when DEV_MAIL_ENABLED is true. */
   @IsOptional()
   @IsUrl({ require_tld: false, require_protocol: true })
   MAIL_FAKE_URL?: string;
+
+  /**
+   * Serves captured mail (which holds password-reset links) at GET /api/dev/mail, to signed-in owners only.
+   * Off unless set to `true`; refused together with NODE_ENV=production.
+   */
+  @Transform(({ value }) => (value === undefined || value === '' ? false : value === 'true' ? true : value === 'false' ? false : value))
+  @IsBoolean({ message: 'DEV_MAIL_ENABLED must be true or false' })
+  DEV_MAIL_ENABLED: boolean = false;
 
   /** The built web app; served for every non-/api path when set. */
   @IsOptional()
@@ -112,7 +121,11 @@ function validateAs<T extends object>(cls: new () => T, raw: Record<string, unkn
 }
 
 export function validateEnv(raw: Record<string, unknown>): EnvironmentVariables {
-  return validateAs(EnvironmentVariables, raw);
+  const env = validateAs(EnvironmentVariables, raw);
+  if (env.NODE_ENV === 'production' && env.DEV_MAIL_ENABLED) {
+    throw new ConfigValidationError(['DEV_MAIL_ENABLED must not be true when NODE_ENV is production (captured mail holds password-reset links)']);
+  }
+  return env;
 }
 
 export function validateDatabaseEnv(raw: Record<string, unknown>): DatabaseEnvironment {

@@ -1,25 +1,32 @@
 import { Controller, Get } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { ApiBearerAuth, ApiForbiddenResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Roles } from '../common/decorators/roles.decorator';
+import { ErrorResponseDto } from '../common/errors/error-response.dto';
+import { SHOP_ADMINS } from '../common/roles/role-matrix';
 import { EnvironmentVariables } from '../config/env.validation';
-import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { Public } from '../common/decorators/public.decorator';
-import { isDevOrTest } from '../config/app-config';
 import { CapturedMailResponseDto } from './dto/captured-mail-response.dto';
 import { MailErrors } from './mail.errors';
 
+/**
+ * Relays the local mail fake. Captured mail holds password-reset and invitation links, so the route answers
+ * only when DEV_MAIL_ENABLED is true (never in production) and only to a signed-in owner.
+ */
 @ApiTags('dev')
 @Controller('dev/mail')
 export class DevMailController {
   constructor(private readonly config: ConfigService<EnvironmentVariables, true>) {}
 
-  @Public()
   @Get()
-  @ApiOperation({ summary: 'Mails captured by the local SMTP fake (development and test only)' })
+  @Roles(...SHOP_ADMINS)
+  @ApiBearerAuth()
+  @ApiOperation({ summary: 'Mails captured by the local SMTP fake (owners only, when DEV_MAIL_ENABLED=true)' })
   @ApiOkResponse({ type: [CapturedMailResponseDto] })
+  @ApiForbiddenResponse({ type: ErrorResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto, description: 'Captured mail is not enabled on this server' })
   async list(): Promise<CapturedMailResponseDto[]> {
-    const config = this.config;
-    const url = config.get('MAIL_FAKE_URL', { infer: true });
-    if (!isDevOrTest(config.get('NODE_ENV', { infer: true })) || !url) throw MailErrors.devMailDisabled();
+    const url = this.config.get('MAIL_FAKE_URL', { infer: true });
+    if (!this.config.get('DEV_MAIL_ENABLED', { infer: true }) || !url) throw MailErrors.devMailDisabled();
     let response: Response;
     try {
       response = await fetch(url, { signal: AbortSignal.timeout(3000) });

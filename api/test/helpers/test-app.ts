@@ -73,3 +73,10 @@ export async function countRows(dataSource: DataSource, table: string): Promise<
   const [row] = await dataSource.query(`SELECT COUNT(*) AS n FROM \`${table}\``);
   return Number(row.n);
 }
+
+/** A fresh app on freshly loaded demo data, with a session for every demo role. */
+export async function startSignedInApp(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
+  const t = await createTestApp();
+  await resetData(t.dataSource);
+  return { t, s: await signInAllRoles(t.http) };
+}

@@ -5,14 +5,17 @@ import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-va
 export type SortOrder = 'asc' | 'desc';
 export const SORT_ORDERS: SortOrder[] = ['asc', 'desc'];
 export const MAX_PAGE_SIZE = 100;
+/** 10,000 pages of 100 rows: far past any shop's list, and small enough that the row offset stays exact. */
+export const MAX_PAGE = 10_000;
 
 /** Shared list parameters; each list DTO extends it and adds a whitelisted `sort` and its filters. */
 export class PageQueryDto {
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
+  @ApiPropertyOptional({ minimum: 1, maximum: MAX_PAGE, default: 1 })
   @IsOptional()
   @Type(() => Number)
   @IsInt()
   @Min(1)
+  @Max(MAX_PAGE, { message: `page must not be greater than ${MAX_PAGE}; narrow the list with search or filters instead` })
   page: number = 1;
 
   @ApiPropertyOptional({ minimum: 1, maximum: MAX_PAGE_SIZE, default: 20 })
