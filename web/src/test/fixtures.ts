@@ -7,7 +7,7 @@ export function userStub(role: Role = 'owner'): CurrentUser {
   return {
     id: `user-${role}`,
     email: `${role}@ironbark.example`,
-    name: 'Dana Whitlock',
+    name: 'Merrin Tolland',
     role,
     shop: shopStub,
     customerId: role === 'customer' ? 'cust-1' : null,

@@ -22,7 +22,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
     >
       <FormErrorAlert error={signUp.error} messages={{ email_taken: 'An account with that email already exists. Sign in instead, or reset the password.' }} />
       <Form.Item label="Your name" name="name" rules={[{ required: true, whitespace: true, message: 'Enter your name' }, { max: 120 }]}>
-        <Input autoComplete="name" placeholder="Dana Whitlock" />
+        <Input autoComplete="name" placeholder="Merrin Tolland" />
       </Form.Item>
       <Form.Item
         label="Shop or garage name"

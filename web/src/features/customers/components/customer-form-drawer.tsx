@@ -77,7 +77,7 @@ export function CustomerFormDrawer({ open, customer, onClose, onSaved }: Custome
             { max: 120, message: 'Keep the name under 120 characters' },
           ]}
         >
-          <Input placeholder="Dana Whitlock" autoFocus />
+          <Input placeholder="Merrin Tolland" autoFocus />
         </Form.Item>
         <Form.Item
           label="Email"
@@ -85,7 +85,7 @@ export function CustomerFormDrawer({ open, customer, onClose, onSaved }: Custome
           rules={[{ type: 'email', message: 'Enter a valid email address' }, { max: 254 }]}
           extra="Needed to invite them to follow their project."
         >
-          <Input type="email" placeholder="dana@example.com" />
+          <Input type="email" placeholder="merrin@example.com" />
         </Form.Item>
         <Form.Item
           label="Phone"
