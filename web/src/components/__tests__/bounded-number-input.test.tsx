@@ -24,13 +24,13 @@ describe('BoundedNumberInput', () => {
     const input = screen.getByRole('spinbutton', { name: 'Sales tax' }) as HTMLInputElement;
     fireEvent.change(input, { target: { value: '150' } });
     fireEvent.blur(input);
-    await waitFor(() => expect(screen.getByText('Between 0 and 100 %')).toBeTruthy());
+    await waitFor(() => expect(screen.getByText('Between 0 and 100 %')).toBeInTheDocument());
     expect(form?.getFieldValue('tax')).toBe(150);
     expect(input.value).toBe('150.00');
 
     fireEvent.change(input, { target: { value: '-5' } });
     await waitFor(() => expect(form?.getFieldValue('tax')).toBe(-5));
-    expect(screen.getByText('Between 0 and 100 %')).toBeTruthy();
+    expect(screen.getByText('Between 0 and 100 %')).toBeInTheDocument();
 
     fireEvent.change(input, { target: { value: '7.5' } });
     await waitFor(() => expect(screen.queryByText('Between 0 and 100 %')).toBeNull());

@@ -59,7 +59,7 @@ describe('apiClient 401 handling', () => {
       return respond(config, 401, { code: 'unauthorized', message: 'Sign in again' });
     };
 
-    await expect(apiClient.get('/projects')).rejects.toBeTruthy();
+    await expect(apiClient.get('/projects')).rejects.toMatchObject({ response: { status: 401 } });
 
     expect(seen.map((s) => s.url)).toEqual(['/projects', '/auth/refresh']);
     expect(tokenStorage.getAccessToken()).toBeNull();

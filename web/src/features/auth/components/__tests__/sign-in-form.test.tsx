@@ -14,8 +14,8 @@ describe('SignInForm', () => {
 
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByText('Enter your email address')).toBeTruthy();
-    expect(screen.getByText('Enter your password')).toBeTruthy();
+    expect(await screen.findByText('Enter your email address')).toBeInTheDocument();
+    expect(screen.getByText('Enter your password')).toBeInTheDocument();
     expect(post).not.toHaveBeenCalled();
   });
 
@@ -23,7 +23,7 @@ describe('SignInForm', () => {
     renderWithApp(<SignInForm />);
     await userEvent.type(screen.getByLabelText('Email'), 'not-an-address');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
-    expect(await screen.findByText(/Enter a valid email address/)).toBeTruthy();
+    expect(await screen.findByText(/Enter a valid email address/)).toBeInTheDocument();
   });
 
   it('posts the credentials, stores the session and reports success', async () => {
@@ -62,8 +62,8 @@ describe('SignInForm', () => {
     await userEvent.type(screen.getByLabelText('Password'), 'wrong one');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByRole('alert')).toBeTruthy();
-    expect(screen.getByText(/do not match an account/)).toBeTruthy();
+    expect(await screen.findByRole('alert')).toBeInTheDocument();
+    expect(screen.getByText(/do not match an account/)).toBeInTheDocument();
     expect(tokenStorage.getAccessToken()).toBeNull();
   });
 });

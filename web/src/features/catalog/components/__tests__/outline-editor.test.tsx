@@ -22,7 +22,7 @@ const pan: OutlinePoint[] = [
 describe('OutlineEditor', () => {
   it('shows stored millimetres in inches and keeps what is typed in millimetres', async () => {
     renderWithApp(<Harness initial={pan} />);
-    expect(screen.getByRole('columnheader', { name: 'u (in)' })).toBeTruthy();
+    expect(screen.getByRole('columnheader', { name: 'u (in)' })).toBeInTheDocument();
     const w2 = screen.getByRole('spinbutton', { name: 'Bottom profile: point 2 w' }) as HTMLInputElement;
     expect(w2.value).toBe('-10.00');
     await userEvent.clear(w2);
@@ -34,7 +34,7 @@ describe('OutlineEditor', () => {
   it('shows and takes millimetres when the person works in mm', async () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<Harness initial={pan} />);
-    expect(screen.getByRole('columnheader', { name: 'u (mm)' })).toBeTruthy();
+    expect(screen.getByRole('columnheader', { name: 'u (mm)' })).toBeInTheDocument();
     const u1 = screen.getByRole('spinbutton', { name: 'Bottom profile: point 1 u' }) as HTMLInputElement;
     expect(u1.value).toBe('600');
     await userEvent.clear(u1);
@@ -54,7 +54,7 @@ describe('OutlineEditor', () => {
       { u: 330, w: -254 },
       { u: 330, w: -254 },
     ]);
-    expect(screen.getByText('2 points, closed outline')).toBeTruthy();
+    expect(screen.getByText('2 points, closed outline')).toBeInTheDocument();
   });
 });
 

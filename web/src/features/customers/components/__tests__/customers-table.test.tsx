@@ -29,10 +29,10 @@ describe('CustomersTable', () => {
     renderWithApp(<CustomersTableInUrl />, { route: '/customers' });
 
     const table = await screen.findByRole('table', { name: 'Customers' });
-    expect(await within(table).findByText('Marlo Penhallow')).toBeTruthy();
-    expect(within(table).getByText('Tove Quillfeather')).toBeTruthy();
-    expect(within(table).getByText('marlo@example.com')).toBeTruthy();
-    expect(screen.getByText('1–20 of 42')).toBeTruthy();
+    expect(await within(table).findByText('Marlo Penhallow')).toBeInTheDocument();
+    expect(within(table).getByText('Tove Quillfeather')).toBeInTheDocument();
+    expect(within(table).getByText('marlo@example.com')).toBeInTheDocument();
+    expect(screen.getByText('1–20 of 42')).toBeInTheDocument();
     expect(get).toHaveBeenCalledWith('/customers', expect.objectContaining({ params: { page: 1, pageSize: 20 } }));
   });
 

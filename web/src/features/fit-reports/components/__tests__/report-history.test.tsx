@@ -23,9 +23,9 @@ describe('ReportHistory', () => {
     const table = await screen.findByRole('table');
     await within(table).findByText('Sam Reyes');
     const rows = within(table).getAllByRole('row').slice(1);
-    expect(within(rows[0]).getByText('Sam Reyes')).toBeTruthy();
+    expect(within(rows[0]).getByText('Sam Reyes')).toBeInTheDocument();
     expect(within(rows[1]).queryByText('Sam Reyes')).toBeNull();
     expect(within(rows[1]).getAllByText('—').length).toBeGreaterThan(0);
-    expect(within(rows[0]).getByText(/Nov 3, 2026/)).toBeTruthy();
+    expect(within(rows[0]).getByText(/Nov 3, 2026/)).toBeInTheDocument();
   });
 });

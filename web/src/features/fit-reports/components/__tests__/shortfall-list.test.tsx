@@ -46,8 +46,8 @@ describe('ShortfallList', () => {
   it('puts the worst first: blocked before close, the biggest miss first', () => {
     renderWithApp(<ShortfallList shortfalls={[close, slightlyBlocked, badlyBlocked]} />);
     expect(rowOrder()).toEqual(['shortfall-envelope.sump-crossmember', 'shortfall-envelope.heads-firewall', 'shortfall-envelope.hood']);
-    expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('Blocked')).toBeTruthy();
-    expect(within(screen.getByTestId('shortfall-envelope.hood')).getByText('Close call')).toBeTruthy();
+    expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('Blocked')).toBeInTheDocument();
+    expect(within(screen.getByTestId('shortfall-envelope.hood')).getByText('Close call')).toBeInTheDocument();
   });
 
   it('shows the figures in inches (1 in = 25.4 mm exactly, NIST SP 811)', () => {
@@ -55,10 +55,10 @@ describe('ShortfallList', () => {
     const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
     expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-1 in');
     expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−1.5 in');
-    expect(within(row).getByText('at least 0.5 in')).toBeTruthy();
+    expect(within(row).getByText('at least 0.5 in')).toBeInTheDocument();
     expect(within(screen.getByTestId('shortfall-envelope.hood')).getByTestId('shortfall-measured').textContent).toBe('0.63 in');
-    expect(within(row).getByText('Move: Raise the engine 1.5 in')).toBeTruthy();
-    expect(within(row).getByText('8 h labor')).toBeTruthy();
+    expect(within(row).getByText('Move: Raise the engine 1.5 in')).toBeInTheDocument();
+    expect(within(row).getByText('8 h labor')).toBeInTheDocument();
   });
 
   it('shows the same figures in millimetres when the person works in mm', () => {
@@ -67,7 +67,7 @@ describe('ShortfallList', () => {
     const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
     expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-25.4 mm');
     expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−38.1 mm');
-    expect(within(row).getByText('at least 12.7 mm')).toBeTruthy();
+    expect(within(row).getByText('at least 12.7 mm')).toBeInTheDocument();
   });
 
   it('offers the matching catalog part with a "Use" button', async () => {
@@ -96,6 +96,6 @@ describe('ShortfallList', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Use this adapter: Drop plates 60' }));
     expect(onUsePart).toHaveBeenCalledWith(mount.remedies[0], 'mnt-60');
     expect(screen.queryByRole('button', { name: /Heavy kit 90/ })).toBeNull();
-    expect(screen.getByText('In use')).toBeTruthy();
+    expect(screen.getByText('In use')).toBeInTheDocument();
   });
 });

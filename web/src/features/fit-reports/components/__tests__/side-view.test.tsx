@@ -11,9 +11,9 @@ describe('SideView', () => {
   it('draws every chassis obstacle, the hood, radiator, pan and transmission', () => {
     renderWithApp(<SideView spec={DEMO_FIT_SPEC} findings={report.findings} />);
     const view = screen.getByTestId('side-view');
-    for (const o of DEMO_FIT_SPEC.chassis.obstacles) expect(within(view).getByTestId(`side-obstacle-${o.id}`)).toBeTruthy();
+    for (const o of DEMO_FIT_SPEC.chassis.obstacles) expect(within(view).getByTestId(`side-obstacle-${o.id}`)).toBeInTheDocument();
     for (const id of ['side-hood', 'side-radiator', 'side-pan', 'side-transmission', 'side-engine', 'side-origin', 'side-ground'])
-      expect(within(view).getByTestId(id)).toBeTruthy();
+      expect(within(view).getByTestId(id)).toBeInTheDocument();
     expect(within(view).getAllByText('Front crossmember').length).toBeGreaterThan(0);
   });
 
@@ -23,7 +23,7 @@ describe('SideView', () => {
     renderWithApp(<SideView spec={DEMO_FIT_SPEC} findings={report.findings} />);
     const dim = screen.getByTestId('side-dim-envelope.sump-crossmember');
     const inches = Math.round((-(sump?.measured ?? 0) / 25.4) * 100) / 100;
-    expect(within(dim).getByText(`overlap ${inches} in`)).toBeTruthy();
+    expect(within(dim).getByText(`overlap ${inches} in`)).toBeInTheDocument();
     expect(dim.getAttribute('data-status')).toBe('fails');
   });
 
@@ -32,7 +32,7 @@ describe('SideView', () => {
     const window = computeFitWindow(spec, { setbackFromMm: 560, setbackToMm: 760, stepMm: 20, tiltDeg: 3 });
     renderWithApp(<SideView spec={spec} findings={runFitCheck(spec).findings} window={window} proposed={window.best?.placement} />);
     expect(screen.getAllByTestId('side-fit-window').length).toBeGreaterThan(0);
-    expect(screen.getByText('Fit window: crank heights that clear')).toBeTruthy();
+    expect(screen.getByText('Fit window: crank heights that clear')).toBeInTheDocument();
   });
 });
 
@@ -41,9 +41,9 @@ describe('FrontView', () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<FrontView spec={DEMO_FIT_SPEC} />);
     const view = screen.getByTestId('front-view');
-    expect(within(view).getByTestId('front-rails')).toBeTruthy();
-    expect(within(view).getByText('rails 740 mm inside')).toBeTruthy();
-    expect(within(view).getByTestId('front-steering-box')).toBeTruthy();
-    expect(within(view).getByTestId('front-box-drive-cv60-truck')).toBeTruthy();
+    expect(within(view).getByTestId('front-rails')).toBeInTheDocument();
+    expect(within(view).getByText('rails 740 mm inside')).toBeInTheDocument();
+    expect(within(view).getByTestId('front-steering-box')).toBeInTheDocument();
+    expect(within(view).getByTestId('front-box-drive-cv60-truck')).toBeInTheDocument();
   });
 });

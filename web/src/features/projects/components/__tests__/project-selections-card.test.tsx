@@ -15,10 +15,10 @@ const project = {
 describe('ProjectSelectionsCard', () => {
   it('shows catalog names and links to the fit page', () => {
     renderWithApp(<ProjectSelectionsCard project={project} names={{ chassis: 'Short-cab frame', engine: 'Aluminium V8' }} fitPath="/projects/p1/fit" />);
-    expect(screen.getByText('Short-cab frame')).toBeTruthy();
-    expect(screen.getByText('Aluminium V8')).toBeTruthy();
+    expect(screen.getByText('Short-cab frame')).toBeInTheDocument();
+    expect(screen.getByText('Aluminium V8')).toBeInTheDocument();
     expect(screen.queryByText('ch-1')).toBeNull();
-    expect(screen.getByText('No transmission chosen yet')).toBeTruthy();
+    expect(screen.getByText('No transmission chosen yet')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Choose parts on the fit page' }).getAttribute('href')).toBe('/projects/p1/fit');
     expect(screen.queryByText(/arrives with the catalog/)).toBeNull();
   });
