@@ -68,3 +68,4 @@ export * from './fit-report/view-geometry';
 export * from './quoting/exact-money';
 export * from './quoting/quote-money';
 export * from './quoting/revision-diff';
+export * from './parts-plan';

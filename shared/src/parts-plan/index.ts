@@ -1,0 +1,5 @@
+export * from './part-categories';
+export * from './part-attributes';
+export * from './plan-types';
+export * from './plan-model';
+export * from './plan-parts';
