@@ -1,5 +1,6 @@
-import { ValidationError, ValidationPipe } from '@nestjs/common';
-import { CommonErrors } from '../errors/app-error';
+import { ArgumentMetadata, ValidationError, ValidationPipe } from '@nestjs/common';
+import { AppError, CommonErrors } from '../errors/app-error';
+import { nullFieldProblems } from '../validation/null-fields';
 
 interface Problem {
   constraint: string;
@@ -45,9 +46,29 @@ export function validationMessages(errors: ValidationError[]): string[] {
     .map(({ problem }) => problem.message);
 }
 
-/** Unknown fields refused, types converted, every message listed in `details`; `message` is the first of them. */
+/**
+ * The global pipe: unknown fields refused, types converted, every message listed in `details` (`message` is the
+ * first of them), and null refused wherever the DTO does not document the field as nullable (see null-fields.ts).
+ */
+class AppValidationPipe extends ValidationPipe {
+  async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
+    const nullProblems = metadata.type === 'body' && metadata.metatype ? nullFieldProblems(metadata.metatype, value) : [];
+    let result: unknown;
+    try {
+      result = await super.transform(value, metadata);
+    } catch (error) {
+      if (nullProblems.length > 0 && error instanceof AppError && error.code === 'validation_failed') {
+        throw CommonErrors.validation([...nullProblems, ...error.details.filter((detail) => !nullProblems.includes(detail))]);
+      }
+      throw error;
+    }
+    if (nullProblems.length > 0) throw CommonErrors.validation(nullProblems);
+    return result;
+  }
+}
+
 export function createValidationPipe(): ValidationPipe {
-  return new ValidationPipe({
+  return new AppValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
