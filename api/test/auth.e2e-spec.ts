@@ -1,23 +1,6 @@
 import { DEMO_PASSWORD } from '@swapwright/seed-data';
+import { mailsTo, resetTokenFrom } from './helpers/mail';
 import { bearer, countRows, createTestApp, resetData, Session, signIn, TestApp } from './helpers/test-app';
-
-interface CapturedMail {
-  to: string[];
-  subject: string;
-  text: string;
-}
-
-async function mailsTo(email: string): Promise<CapturedMail[]> {
-  const response = await fetch(process.env.MAIL_FAKE_URL!);
-  const mails = (await response.json()) as CapturedMail[];
-  return mails.filter((mail) => mail.to.includes(email));
-}
-
-function resetTokenFrom(mail: CapturedMail): string {
-  const match = /reset-password\?token=([A-Za-z0-9_%-]+)/.exec(mail.text);
-  if (!match) throw new Error(`no reset link in: ${mail.text}`);
-  return decodeURIComponent(match[1]);
-}
 
 describe('auth', () => {
   let t: TestApp;

@@ -7,4 +7,8 @@ export interface AccessTokenPayload {
   sub: string;
   /** membership id: the shop and role this token acts in */
   mid: string;
+  /** session id: the sign-in (refresh-token family) this token belongs to; signing out ends it */
+  sid: string;
+  /** the user's session version when issued; a password reset bumps it and ends every token */
+  sv: number;
 }

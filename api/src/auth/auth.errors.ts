@@ -7,6 +7,8 @@ export const AuthErrors = {
     new AppError(403, 'no_membership', 'This account is not a member of any shop any more. Ask a shop owner to invite you.'),
   refreshTokenInvalid: () =>
     new AppError(401, 'refresh_token_invalid', 'Your session has ended. Sign in again.'),
+  sessionEnded: () =>
+    new AppError(401, 'session_ended', 'This session has ended (signed out, or the password was changed). Sign in again.'),
   memberGone: () =>
     new AppError(401, 'membership_revoked', 'You are no longer a member of this shop. Sign in again.'),
   resetTokenInvalid: () =>

@@ -7,13 +7,18 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { AccessTokenPayload } from './auth.constants';
 import { AuthErrors } from './auth.errors';
 import { MemberResolverService } from './member-resolver.service';
+import { SessionsService } from './sessions.service';
 
-/** Verifies the access token, then reloads the membership so a removed member or changed role counts at once. */
+/**
+ * Verifies the access token, checks its session was not ended (sign-out, password reset), then reloads the
+ * membership so a removed member or changed role counts at once.
+ */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
   constructor(
     config: ConfigService<EnvironmentVariables, true>,
     private readonly members: MemberResolverService,
+    private readonly sessions: SessionsService,
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
@@ -24,6 +29,7 @@ export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
   }
 
   async validate(payload: AccessTokenPayload): Promise<AuthUser> {
+    if (!(await this.sessions.isCurrent(payload))) throw AuthErrors.sessionEnded();
     const user = typeof payload.mid === 'string' ? await this.members.resolve(payload.mid) : null;
     if (!user || user.userId !== payload.sub) throw AuthErrors.memberGone();
     return user;

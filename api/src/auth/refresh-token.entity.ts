@@ -11,6 +11,10 @@ export class RefreshToken {
   @Column({ type: 'char', length: 36 })
   membershipId: string;
 
+  /** The sign-in this token belongs to, kept across refreshes; access tokens carry it as `sid`. */
+  @Column({ type: 'char', length: 36 })
+  sessionId: string;
+
   /** sha256 of the opaque token handed to the client. */
   @Column({ type: 'char', length: 64, unique: true })
   tokenHash: string;

@@ -2,8 +2,9 @@ import { Injectable } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { DataSource, EntityManager, IsNull } from 'typeorm';
+import { DataSource, EntityManager, IsNull, Not } from 'typeorm';
 import { Shop } from '../shops/shop.entity';
+import { UsersService } from '../users/users.service';
 import { ACCESS_TOKEN_TTL_SECONDS, AccessTokenPayload, REFRESH_TOKEN_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
 import { mapCurrentUser } from './current-user.mapper';
@@ -18,24 +19,35 @@ export class SessionsService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly jwt: JwtService,
     private readonly members: MemberResolverService,
+    private readonly users: UsersService,
   ) {}
 
-  /** A new access token and refresh token for the membership; pass the manager of an open transaction. */
-  async issue(membershipId: string, manager: EntityManager = this.dataSource.manager): Promise<SessionResponseDto> {
+  /**
+   * A new access token and refresh token for the membership; pass the manager of an open transaction.
+   * `sessionId` continues a sign-in (refresh); without it a new session starts.
+   */
+  async issue(
+    membershipId: string,
+    manager: EntityManager = this.dataSource.manager,
+    sessionId: string = randomUUID(),
+  ): Promise<SessionResponseDto> {
     const user = await this.members.resolve(membershipId, manager);
     if (!user) throw AuthErrors.memberGone();
+    const sessionVersion = await this.users.sessionVersionOf(user.userId, manager);
+    if (sessionVersion === null) throw AuthErrors.memberGone();
     const shop = await manager.findOneOrFail(Shop, { where: { id: user.shopId } });
     const refresh = newOpaqueToken();
     await manager.insert(RefreshToken, {
       id: randomUUID(),
       userId: user.userId,
       membershipId: user.membershipId,
+      sessionId,
       tokenHash: refresh.hash,
       expiresAt: new Date(Date.now() + REFRESH_TOKEN_TTL_MS),
       revokedAt: null,
       replacedById: null,
     });
-    const payload: AccessTokenPayload = { sub: user.userId, mid: user.membershipId };
+    const payload: AccessTokenPayload = { sub: user.userId, mid: user.membershipId, sid: sessionId, sv: sessionVersion };
     const accessToken = await this.jwt.signAsync(payload, { expiresIn: ACCESS_TOKEN_TTL_SECONDS });
     return { accessToken, refreshToken: refresh.token, expiresIn: ACCESS_TOKEN_TTL_SECONDS, user: mapCurrentUser(user, shop) };
   }
@@ -51,7 +63,7 @@ export class SessionsService {
     }
     if (stored.expiresAt.getTime() <= Date.now()) throw AuthErrors.refreshTokenInvalid();
     return this.dataSource.transaction(async (manager) => {
-      const session = await this.issue(stored.membershipId, manager);
+      const session = await this.issue(stored.membershipId, manager, stored.sessionId);
       const replacement = await manager.findOneOrFail(RefreshToken, { where: { tokenHash: hashToken(session.refreshToken) } });
       const result = await manager.update(
         RefreshToken,
@@ -64,6 +76,22 @@ export class SessionsService {
     });
   }
 
+  /**
+   * Whether an access token's session still stands: the user's session version is unchanged (no password reset
+   * since) and its sign-in was not ended (sign-out, or every session ended after a stolen refresh token).
+   * Two indexed lookups per request.
+   */
+  async isCurrent(payload: Pick<AccessTokenPayload, 'sub' | 'sid' | 'sv'>): Promise<boolean> {
+    if (typeof payload.sid !== 'string' || typeof payload.sv !== 'number') return false;
+    if ((await this.users.sessionVersionOf(payload.sub)) !== payload.sv) return false;
+    // Rotation revokes a token with a replacement; sign-out and "end every session" revoke without one.
+    const ended = await this.dataSource.manager.exists(RefreshToken, {
+      where: { sessionId: payload.sid, revokedAt: Not(IsNull()), replacedById: IsNull() },
+    });
+    return !ended;
+  }
+
+  /** Ends the sign-in this refresh token belongs to: the refresh token and that session's access tokens. */
   async revoke(refreshToken: string): Promise<void> {
     await this.dataSource.manager.update(
       RefreshToken,

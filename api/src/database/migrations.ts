@@ -9,6 +9,7 @@ import { CreateCatalog1796100010000 } from './migrations/1796100010000-create-ca
 import { CreateFitReports1796100011000 } from './migrations/1796100011000-create-fit-reports';
 import { CreateCatalogBelts1796100012000 } from './migrations/1796100012000-create-catalog-belts';
 import { FitSelectionsMountAdapter1796100013000 } from './migrations/1796100013000-fit-selections-mount-adapter';
+import { SessionRevocation1796235495169 } from './migrations/1796235495169-session-revocation';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -23,4 +24,5 @@ export const MIGRATIONS = [
   CreateFitReports1796100011000,
   CreateCatalogBelts1796100012000,
   FitSelectionsMountAdapter1796100013000,
+  SessionRevocation1796235495169,
 ];

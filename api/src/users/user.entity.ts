@@ -15,6 +15,10 @@ export class User {
   @Column({ type: 'varchar', length: 100 })
   passwordHash: string;
 
+  /** Carried in every access token; bumped when the password is reset, which ends every session at once. */
+  @Column({ type: 'int', unsigned: true, default: 0 })
+  sessionVersion: number;
+
   @CreateDateColumn({ type: 'datetime', precision: 3 })
   createdAt: Date;
 

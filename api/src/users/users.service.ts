@@ -29,7 +29,14 @@ export class UsersService {
     return manager.save(user);
   }
 
+  /** A new password also bumps the session version: every access token issued before stops working. */
   async setPasswordHash(manager: EntityManager, userId: string, passwordHash: string): Promise<void> {
-    await manager.update(User, { id: userId }, { passwordHash });
+    await manager.update(User, { id: userId }, { passwordHash, sessionVersion: () => '`sessionVersion` + 1' });
+  }
+
+  /** The version access tokens must carry; null when the user is gone. */
+  async sessionVersionOf(userId: string, manager: EntityManager = this.users.manager): Promise<number | null> {
+    const user = await manager.findOne(User, { where: { id: userId }, select: { id: true, sessionVersion: true } });
+    return user ? user.sessionVersion : null;
   }
 }

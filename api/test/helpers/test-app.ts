@@ -74,9 +74,15 @@ export async function countRows(dataSource: DataSource, table: string): Promise<
   return Number(row.n);
 }
 
-/** A fresh app on freshly loaded demo data, with a session for every demo role. */
-export async function startSignedInApp(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
+/** A fresh app on freshly loaded demo data. */
+export async function startTestApp(): Promise<TestApp> {
   const t = await createTestApp();
   await resetData(t.dataSource);
+  return t;
+}
+
+/** A fresh app on freshly loaded demo data, with a session for every demo role. */
+export async function startSignedInApp(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
+  const t = await startTestApp();
   return { t, s: await signInAllRoles(t.http) };
 }
