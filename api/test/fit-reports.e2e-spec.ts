@@ -1,4 +1,5 @@
-import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN, runFitCheck } from '@swapwright/shared';
+import { runFitCheck } from '@swapwright/shared';
+import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '@swapwright/shared/fixtures';
 import { DEMO_CATALOG_IDS, DEMO_FIT_SELECTIONS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';

@@ -1,3 +1,4 @@
+export * from './types/value-lists';
 export * from './types/finding';
 export * from './types/fit-spec';
 export * from './settings/fit-settings';
@@ -42,7 +43,6 @@ export * from './checks/belt/serpentine-belt';
 export * from './checks/cam/cam-timing';
 export * from './fit-report/fit-report';
 export * from './fit-window/fit-window';
-export * from './fixtures/demo-fit-spec';
 export * from './geometry/outline-gap';
 export * from './geometry/flatten-gap';
 export * from './geometry/vertical-clearance';

@@ -1,5 +1,5 @@
 import { Type } from '@nestjs/common';
-import { formatBeltDesignation } from '@swapwright/shared';
+import { formatBeltDesignation, type CatalogKind } from '@swapwright/shared';
 import type { ObjectLiteral } from 'typeorm';
 import {
   CatalogBellhousingAdapter,
@@ -53,17 +53,7 @@ import {
   UpdateTransmissionDto,
 } from './dto/update-catalog-item.dto';
 
-export type CatalogKind =
-  | 'engines'
-  | 'oil-pans'
-  | 'oil-pickups'
-  | 'oil-pumps'
-  | 'transmissions'
-  | 'chassis'
-  | 'controllers'
-  | 'mount-adapters'
-  | 'bellhousing-adapters'
-  | 'belts';
+export type { CatalogKind };
 
 /** Body fields that are stored beside the spec rather than in it. */
 export type CatalogExtras = Record<string, unknown>;

@@ -1,12 +1,9 @@
+import type { ProjectStatus, SwapUse as ProjectUse } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 import { Customer } from '../customers/customer.entity';
 
-export type ProjectStatus = 'intake' | 'measuring' | 'checking' | 'quoting' | 'approved' | 'building' | 'done';
-export const PROJECT_STATUSES: ProjectStatus[] = ['intake', 'measuring', 'checking', 'quoting', 'approved', 'building', 'done'];
-
-export type ProjectUse = 'street' | 'tow' | 'off-road' | 'strip';
-export const PROJECT_USES: ProjectUse[] = ['street', 'tow', 'off-road', 'strip'];
+export { PROJECT_STATUSES, SWAP_USES as PROJECT_USES, type ProjectStatus, type SwapUse as ProjectUse } from '@swapwright/shared';
 
 @Entity('projects')
 @Index('ix_projects_shop_updated', ['shopId', 'updatedAt'])

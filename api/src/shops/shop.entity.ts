@@ -1,8 +1,8 @@
+import type { UnitSystem } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 
-export type UnitSystem = 'in' | 'mm';
-export const UNIT_SYSTEMS: UnitSystem[] = ['in', 'mm'];
+export { UNIT_SYSTEMS, type UnitSystem } from '@swapwright/shared';
 
 @Entity('shops')
 export class Shop {

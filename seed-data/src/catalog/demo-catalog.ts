@@ -5,6 +5,8 @@ import {
   DEMO_REAR_SUMP_PICKUP,
   DEMO_STOCK_PAN,
   DEMO_STOCK_PICKUP,
+} from '@swapwright/shared/fixtures';
+import {
   formatBeltDesignation,
   type BellhousingAdapterSpec,
   type ChassisSpec,

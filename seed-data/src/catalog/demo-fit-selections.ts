@@ -1,4 +1,4 @@
-import { DEMO_FIT_SPEC } from '@swapwright/shared';
+import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import { DEMO_PROJECT_IDS } from '../demo-projects';
 import { DEMO_ACCESSORY_DRIVE_IDS } from './demo-catalog';
 import { DEMO_CATALOG_IDS as IDS } from './demo-catalog-ids';

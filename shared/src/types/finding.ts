@@ -1,17 +1,8 @@
 /** What every check returns. Lengths are millimetres and angles degrees inside the engine. */
 
-export type CheckStatus = 'ok' | 'tight' | 'fails' | 'unknown';
+import type { CheckGroup, CheckStatus, PlacementAxis } from './value-lists';
 
-export type CheckGroup =
-  | 'envelope'
-  | 'mounts'
-  | 'drivetrain'
-  | 'oiling'
-  | 'management'
-  | 'fuel'
-  | 'cooling'
-  | 'belt'
-  | 'cam';
+export type { CheckGroup, CheckStatus } from './value-lists';
 
 /** The unit a finding's figures are in. The web converts `mm` to inches on request; the rest are shown as they are. */
 export type FigureUnit =
@@ -59,7 +50,7 @@ export interface PartRemedy {
 export interface PlacementRemedy {
   kind: 'placement';
   /** setback: engine origin moves rearward (+) or forward (−); height: up (+) or down (−); tilt: front up (+). */
-  axis: 'setback' | 'height' | 'tilt';
+  axis: PlacementAxis;
   changeBy: number;
   unit: 'mm' | 'deg';
   note: string;

@@ -10,6 +10,27 @@
  *   w up toward the deck, v to the right.
  */
 
+import type {
+  CamSignal,
+  CrankSignal,
+  DipstickLocation,
+  DriveshaftMaterial,
+  EngineLayout,
+  FuelSystemKind,
+  ObstacleKind,
+  OilPumpDrive,
+  BeltProfile,
+  PickupMount,
+  PulleyRole,
+  PulleySide,
+  SideName,
+  SumpPosition,
+  SwapUse,
+  ThrottleKind,
+} from './value-lists';
+
+export type { SideName } from './value-lists';
+
 export interface ChassisPoint {
   x: number;
   z: number;
@@ -39,18 +60,17 @@ export interface Placement {
   tiltDeg: number;
 }
 
-export type SideName = 'left' | 'right';
 
 export interface PulleySpec {
   id: string;
-  role: 'crank' | 'water-pump' | 'alternator' | 'power-steering' | 'ac-compressor' | 'idler' | 'tensioner';
+  role: PulleyRole;
   /** Centre in the front view of the engine: v right, w up, millimetres. */
   v: number;
   w: number;
   /** Effective diameter. */
   diameterMm: number;
   /** `grooved`: the ribbed side wraps the pulley; `back`: a smooth idler on the back of the belt. */
-  side: 'grooved' | 'back';
+  side: PulleySide;
 }
 
 export interface AccessoryDriveSpec {
@@ -87,7 +107,7 @@ export interface EngineSpec {
   id: string;
   name: string;
   cylinders: number;
-  layout: 'inline' | 'v';
+  layout: EngineLayout;
   displacementL?: number;
   ratedPowerKw?: number;
   weightKg?: number;
@@ -106,12 +126,12 @@ export interface EngineSpec {
   widthFeatures: WidthFeature[];
   accessoryDrives: AccessoryDriveSpec[];
   bellPattern: string;
-  crankSignal: string;
-  camSignal: string;
-  throttle: 'cable' | 'electronic';
+  crankSignal: CrankSignal;
+  camSignal: CamSignal;
+  throttle: ThrottleKind;
   /** Oil pump driven at crank speed (true on these engines) or at half speed from the cam. */
-  oilPumpDrive: 'crank' | 'cam';
-  dipstickLocation: 'block-left' | 'block-right' | 'pan-left' | 'pan-right';
+  oilPumpDrive: OilPumpDrive;
+  dipstickLocation: DipstickLocation;
   fuelPressurePsi: number;
   injectorFlowLbh?: number;
   injectorRatedPsi?: number;
@@ -126,12 +146,12 @@ export interface OilPanSpec {
   railPattern: string;
   /** Bottom outline in the engine frame, front to rear or rear to front, w < 0, closed along the pan rail. */
   bottomProfile: EnginePoint[];
-  sumpPosition: 'front' | 'center' | 'rear' | 'dual';
-  pickupMount: 'pump-bolted' | 'block-bolted' | 'press-in';
+  sumpPosition: SumpPosition;
+  pickupMount: PickupMount;
   /** The pickup tube's foot position: u of the sump centre and the sump floor w. */
   sumpCenterU: number;
   sumpFloorW: number;
-  dipstickProvision: Array<'block-left' | 'block-right' | 'pan-left' | 'pan-right'>;
+  dipstickProvision: DipstickLocation[];
   capacityL: number;
 }
 
@@ -172,7 +192,7 @@ export interface TransmissionSpec {
 export interface ChassisObstacle {
   id: string;
   name: string;
-  kind: 'crossmember' | 'steering-linkage' | 'axle-at-bump' | 'differential-at-bump' | 'firewall' | 'tunnel' | 'other';
+  kind: ObstacleKind;
   /** Closed outline, chassis frame side view. */
   outline: ChassisPoint[];
 }
@@ -201,16 +221,16 @@ export interface ChassisSpec {
   mountPads: { left: ChassisPoint3; right: ChassisPoint3 };
   transmissionCrossmember: { x: number; z: number; adjustableXMm: number };
   pinion: { x: number; z: number; angleDeg: number };
-  fuelSystem: { kind: 'carburetor' | 'efi-return' | 'efi-returnless'; pumpFlowLph: number; pumpRatedPsi: number; regulatorPsi: number };
-  pedal: 'cable' | 'electronic';
+  fuelSystem: { kind: FuelSystemKind; pumpFlowLph: number; pumpRatedPsi: number; regulatorPsi: number };
+  pedal: ThrottleKind;
 }
 
 export interface EngineControllerSpec {
   id: string;
   name: string;
-  crankSignals: string[];
-  camSignals: string[];
-  throttles: Array<'cable' | 'electronic'>;
+  crankSignals: CrankSignal[];
+  camSignals: CamSignal[];
+  throttles: ThrottleKind[];
   maxCylinders: number;
 }
 
@@ -218,7 +238,7 @@ export interface DriveshaftSpec {
   outerDiameterMm: number;
   wallMm: number;
   /** Steel by default; the elastic modulus is only used by the first-principles cross-check. */
-  material: 'steel' | 'aluminum';
+  material: DriveshaftMaterial;
   /** An existing shaft to reuse, U-joint centre to centre; absent when a new shaft is cut to length. */
   lengthMm?: number;
   /** Growth of the output-to-pinion distance from ride height to full droop, taken by the slip yoke. */
@@ -248,14 +268,14 @@ export interface SerpentineBeltSpec {
   id: string;
   name: string;
   ribs: number;
-  profile: 'PK';
+  profile: BeltProfile;
   effectiveLengthMm: number;
   designation: string;
   stockOnHand?: number;
 }
 
 export interface SwapGoals {
-  use: 'street' | 'tow' | 'off-road' | 'strip';
+  use: SwapUse;
   targetPowerKw: number;
   /** Power held for long periods (towing, climbing); the radiator is sized for this. */
   continuousPowerKw?: number;

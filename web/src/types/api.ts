@@ -1,10 +1,8 @@
 /** Shapes from the HTTP API contract that more than one feature needs. */
 
-export type Role = 'owner' | 'estimator' | 'fabricator' | 'counter' | 'customer';
+import type { Role, UnitSystem } from '@swapwright/shared';
 
-export const roles: readonly Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
-
-export type UnitSystem = 'in' | 'mm';
+export { ROLES as roles, UNIT_SYSTEMS as unitSystems, type Role, type UnitSystem } from '@swapwright/shared';
 
 export type CurrentUser = {
   id: string;

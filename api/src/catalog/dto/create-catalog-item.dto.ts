@@ -1,5 +1,6 @@
 import { ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
+import { BELT_PROFILES } from '@swapwright/shared';
 import { IsIn, IsOptional, ValidateNested } from 'class-validator';
 import {
   BellhousingAdapterSpecDto,
@@ -10,7 +11,6 @@ import {
   OilPanSpecDto,
   OilPickupSpecDto,
   OilPumpSpecDto,
-  BELT_PROFILES,
   PlacementDto,
   SerpentineBeltSpecDto,
   TransmissionSpecDto,

@@ -2,7 +2,8 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { PageQueryDto } from '../../common/pagination/page-query.dto';
-import { BELT_RIBS, PICKUP_MOUNTS, SUMP_POSITIONS } from './part-spec.dto';
+import { PICKUP_MOUNTS, SUMP_POSITIONS } from '@swapwright/shared';
+import { BELT_RIBS } from './part-spec.dto';
 
 export const CATALOG_SORT_FIELDS = ['name', 'createdAt', 'updatedAt'] as const;
 export type CatalogSortField = (typeof CATALOG_SORT_FIELDS)[number];

@@ -11,6 +11,23 @@ import type {
   SerpentineBeltSpec,
   TransmissionSpec,
 } from '@swapwright/shared';
+import {
+  BELT_PROFILES,
+  CAM_SIGNALS,
+  CRANK_SIGNALS,
+  DIPSTICK_LOCATIONS,
+  DRIVESHAFT_MATERIALS,
+  ENGINE_LAYOUTS,
+  FUEL_SYSTEM_KINDS,
+  OBSTACLE_KINDS,
+  OIL_PUMP_DRIVES,
+  PICKUP_MOUNTS,
+  PULLEY_ROLES,
+  PULLEY_SIDES,
+  SIDES,
+  SUMP_POSITIONS,
+  THROTTLES,
+} from '@swapwright/shared';
 import { IsNegative } from 'class-validator';
 import {
   Flag,
@@ -24,7 +41,6 @@ import {
   OptionalNested,
   OptionalNumberIn,
   Text,
-  TextList,
 } from './spec-validators';
 
 /**
@@ -42,27 +58,6 @@ const Z_MIN = -500;
 const Z_MAX = 3000;
 const Y = 1500;
 
-export const SIDES = ['left', 'right'] as const;
-export const ENGINE_LAYOUTS = ['inline', 'v'] as const;
-export const THROTTLES = ['cable', 'electronic'] as const;
-export const OIL_PUMP_DRIVES = ['crank', 'cam'] as const;
-export const DIPSTICK_LOCATIONS = ['block-left', 'block-right', 'pan-left', 'pan-right'] as const;
-export const SUMP_POSITIONS = ['front', 'center', 'rear', 'dual'] as const;
-export const PICKUP_MOUNTS = ['pump-bolted', 'block-bolted', 'press-in'] as const;
-export const PULLEY_ROLES = ['crank', 'water-pump', 'alternator', 'power-steering', 'ac-compressor', 'idler', 'tensioner'] as const;
-export const PULLEY_SIDES = ['grooved', 'back'] as const;
-export const OBSTACLE_KINDS = [
-  'crossmember',
-  'steering-linkage',
-  'axle-at-bump',
-  'differential-at-bump',
-  'firewall',
-  'tunnel',
-  'other',
-] as const;
-export const FUEL_SYSTEM_KINDS = ['carburetor', 'efi-return', 'efi-returnless'] as const;
-export const DRIVESHAFT_MATERIALS = ['steel', 'aluminum'] as const;
-export const BELT_PROFILES = ['PK'] as const;
 export const BELT_RIBS = { min: 3, max: 12 } as const;
 
 // ---------------------------------------------------------------- points
@@ -185,8 +180,8 @@ export class EngineSpecDto implements EngineSpec {
   @NestedList(() => WidthFeatureDto, 0, 40) widthFeatures: WidthFeatureDto[];
   @NestedList(() => AccessoryDriveSpecDto, 0, 10) accessoryDrives: AccessoryDriveSpecDto[];
   @Text(40, 'Bellhousing pattern code, e.g. KB-1') bellPattern: string;
-  @Text(40, 'Crank trigger pattern, e.g. 60-2') crankSignal: string;
-  @Text(40) camSignal: string;
+  @OneOf(CRANK_SIGNALS, 'Crank trigger pattern, e.g. 60-2') crankSignal: (typeof CRANK_SIGNALS)[number];
+  @OneOf(CAM_SIGNALS, 'Cam sensor pattern, pulses per cam turn') camSignal: (typeof CAM_SIGNALS)[number];
   @OneOf(THROTTLES) throttle: (typeof THROTTLES)[number];
   @OneOf(OIL_PUMP_DRIVES) oilPumpDrive: (typeof OIL_PUMP_DRIVES)[number];
   @OneOf(DIPSTICK_LOCATIONS) dipstickLocation: (typeof DIPSTICK_LOCATIONS)[number];
@@ -325,8 +320,8 @@ export class ChassisSpecDto implements ChassisSpec {
 export class EngineControllerSpecDto implements EngineControllerSpec {
   @Text(64) id: string;
   @Text() name: string;
-  @TextList(1, 20, 'Crank trigger patterns it reads, e.g. 60-2') crankSignals: string[];
-  @TextList(0, 20) camSignals: string[];
+  @ListOf(CRANK_SIGNALS, 1, 20, 'Crank trigger patterns it reads, e.g. 60-2') crankSignals: Array<(typeof CRANK_SIGNALS)[number]>;
+  @ListOf(CAM_SIGNALS, 0, 20, 'Cam sensor patterns it reads') camSignals: Array<(typeof CAM_SIGNALS)[number]>;
   @ListOf(THROTTLES, 1, 2) throttles: Array<(typeof THROTTLES)[number]>;
   @IntIn(1, 16) maxCylinders: number;
 }

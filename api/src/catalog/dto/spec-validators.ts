@@ -94,18 +94,6 @@ export function ListOf<T extends string>(values: readonly T[], min: number, max:
   );
 }
 
-export function TextList(min: number, max: number, description?: string) {
-  return applyDecorators(
-    ApiProperty({ type: [String], minItems: min, maxItems: max, description }),
-    IsArray(),
-    ArrayMinSize(min),
-    ArrayMaxSize(max),
-    IsString({ each: true }),
-    IsNotEmpty({ each: true, message: 'each of $property must not be empty' }),
-    MaxLength(40, { each: true }),
-  );
-}
-
 export function NumberList(min: number, max: number, itemMin: number, itemMax: number, description?: string) {
   return applyDecorators(
     ApiPropertyOptional({ type: [Number], minItems: min, maxItems: max, description }),

@@ -1,2 +1,1 @@
-export type Role = 'owner' | 'estimator' | 'fabricator' | 'counter' | 'customer';
-export const ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
+export { ROLES, type Role } from '@swapwright/shared';

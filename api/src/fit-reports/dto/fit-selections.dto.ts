@@ -2,7 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsNotEmpty, IsNumber, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateNested } from 'class-validator';
 import { withArticle } from '../../common/text/article';
-import { DRIVESHAFT_MATERIALS } from '../../catalog/dto/part-spec.dto';
+import { DRIVESHAFT_MATERIALS } from '@swapwright/shared';
 import { DriveshaftSpecDto } from './fit-spec.dto';
 
 function OptionalCatalogId(kind: string) {

@@ -1,8 +1,7 @@
-import type { DriveshaftSpec, FitSpec, SwapGoals } from '@swapwright/shared';
+import { DRIVESHAFT_MATERIALS, type DriveshaftSpec, type FitSpec, type SwapGoals } from '@swapwright/shared';
 import {
   BellhousingAdapterSpecDto,
   ChassisSpecDto,
-  DRIVESHAFT_MATERIALS,
   EngineControllerSpecDto,
   EngineSpecDto,
   MountAdapterSpecDto,

@@ -21,7 +21,7 @@ describe('management.crank-signal and management.cam-signal', () => {
   });
 
   it('fails on the cam signal', () => {
-    expect(checkCamSignal(context(specWith((s) => (s.engine.camSignal = 'four-pulse'))))).toMatchObject({ status: 'fails' });
+    expect(checkCamSignal(context(specWith((s) => (s.engine.camSignal = '4x'))))).toMatchObject({ status: 'fails' });
   });
 
   it('unknown without a controller', () => {

@@ -20,7 +20,7 @@ function checkSignal(kind: SignalKind, { spec }: CheckContext): Finding {
   const controller = spec.controller;
   if (!controller) return unknownFinding(fields, ['controller']);
   const signal = kind === 'crank' ? spec.engine.crankSignal : spec.engine.camSignal;
-  const supported = kind === 'crank' ? controller.crankSignals : controller.camSignals;
+  const supported: readonly string[] = kind === 'crank' ? controller.crankSignals : controller.camSignals;
   const against = { ...fields, against: controller.id };
   if (supported.includes(signal)) {
     return measuredFinding(against, { measured: 0, required: 0, margin: 0, status: 'ok' }, `The ${controller.name} reads the engine's ${signal} ${kind} signal.`);
@@ -34,7 +34,7 @@ function checkSignal(kind: SignalKind, { spec }: CheckContext): Finding {
         kind: 'part',
         category: 'engine-controller',
         requires: { [`${kind}Signal`]: signal },
-        partIds: controllerCandidateIds(spec, (c) => (kind === 'crank' ? c.crankSignals : c.camSignals).includes(signal)),
+        partIds: controllerCandidateIds(spec, (c) => ((kind === 'crank' ? c.crankSignals : c.camSignals) as readonly string[]).includes(signal)),
         note: `A controller that decodes ${signal} (or a trigger wheel and sensor the ${controller.name} reads, fitted to the engine).`,
       },
     ],

@@ -1,27 +1,4 @@
-export type CatalogKind =
-  | 'engines'
-  | 'oil-pans'
-  | 'oil-pickups'
-  | 'oil-pumps'
-  | 'transmissions'
-  | 'chassis'
-  | 'controllers'
-  | 'mount-adapters'
-  | 'bellhousing-adapters'
-  | 'belts';
-
-export const catalogKinds: readonly CatalogKind[] = [
-  'engines',
-  'chassis',
-  'transmissions',
-  'oil-pans',
-  'oil-pickups',
-  'oil-pumps',
-  'controllers',
-  'mount-adapters',
-  'bellhousing-adapters',
-  'belts',
-];
+export { CATALOG_KIND_NAMES as catalogKinds, type CatalogKind } from '@swapwright/shared';
 
 export type CatalogSpec = Record<string, unknown>;
 

@@ -1,18 +1,6 @@
-export type ProjectStatus = 'intake' | 'measuring' | 'checking' | 'quoting' | 'approved' | 'building' | 'done';
+import type { ProjectStatus, SwapUse as ProjectUse } from '@swapwright/shared';
 
-export const projectStatuses: readonly ProjectStatus[] = [
-  'intake',
-  'measuring',
-  'checking',
-  'quoting',
-  'approved',
-  'building',
-  'done',
-];
-
-export type ProjectUse = 'street' | 'tow' | 'off-road' | 'strip';
-
-export const projectUses: readonly ProjectUse[] = ['street', 'tow', 'off-road', 'strip'];
+export { PROJECT_STATUSES as projectStatuses, SWAP_USES as projectUses, type ProjectStatus, type SwapUse as ProjectUse } from '@swapwright/shared';
 
 export type ProjectGoals = {
   use: ProjectUse;

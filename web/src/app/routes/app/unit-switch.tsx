@@ -1,6 +1,6 @@
 import { Segmented, Tooltip } from 'antd';
 import { useUnits } from '@/hooks/use-units';
-import type { UnitSystem } from '@/types/api';
+import { unitSystems, type UnitSystem } from '@/types/api';
 
 export function UnitSwitch() {
   const { system, shopSystem, setOverride } = useUnits();
@@ -11,10 +11,7 @@ export function UnitSwitch() {
         aria-label="Length unit"
         value={system}
         onChange={(v) => setOverride(v === shopSystem ? null : v)}
-        options={[
-          { value: 'in', label: 'in' },
-          { value: 'mm', label: 'mm' },
-        ]}
+        options={unitSystems.map((unit) => ({ value: unit, label: unit }))}
       />
     </Tooltip>
   );

@@ -1,3 +1,15 @@
+import {
+  CAM_SIGNALS,
+  CRANK_SIGNALS,
+  DIPSTICK_LOCATIONS,
+  ENGINE_LAYOUTS,
+  OBSTACLE_KINDS,
+  OIL_PUMP_DRIVES,
+  PICKUP_MOUNTS,
+  SIDES,
+  SUMP_POSITIONS,
+  THROTTLES,
+} from '@swapwright/shared';
 import type { CatalogKind } from '../types';
 
 export type FieldType = 'length' | 'number' | 'text' | 'select' | 'multi' | 'tags' | 'boolean';
@@ -69,13 +81,19 @@ const optionLabels: Record<string, string> = {
   firewall: 'Firewall',
   tunnel: 'Tunnel',
   other: 'Other',
+  inline: 'Inline',
+  v: 'V',
+  crank: 'crank speed',
+  cam: 'cam speed',
 };
-const opts = (...values: string[]) => values.map((v) => ({ value: v, label: optionLabels[v] ?? v }));
-const sumpPositions = opts('front', 'center', 'rear', 'dual');
-const pickupMounts = opts('pump-bolted', 'block-bolted', 'press-in');
-const dipsticks = opts('block-left', 'block-right', 'pan-left', 'pan-right');
-const sides = opts('left', 'right');
-const throttles = opts('cable', 'electronic');
+const opts = (values: readonly string[]) => values.map((v) => ({ value: v, label: optionLabels[v] ?? v }));
+const sumpPositions = opts(SUMP_POSITIONS);
+const pickupMounts = opts(PICKUP_MOUNTS);
+const dipsticks = opts(DIPSTICK_LOCATIONS);
+const sides = opts(SIDES);
+const throttles = opts(THROTTLES);
+const crankSignals = opts(CRANK_SIGNALS);
+const camSignals = opts(CAM_SIGNALS);
 
 const ENGINE_FRAME = 'Engine frame: u forward along the crank from the bellhousing face, w up from the crank centerline.';
 const CHASSIS_FRAME = 'Chassis frame: x rearward from the front axle centerline, z up from the ground at ride height.';
@@ -87,7 +105,7 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     singular: 'engine',
     fields: [
       { name: 'cylinders', label: 'Cylinders', type: 'number', required: true, min: 1, max: 16 },
-      { name: 'layout', label: 'Layout', type: 'select', required: true, options: [{ value: 'inline', label: 'Inline' }, { value: 'v', label: 'V' }] },
+      { name: 'layout', label: 'Layout', type: 'select', required: true, options: opts(ENGINE_LAYOUTS) },
       { name: 'displacementL', label: 'Displacement', type: 'number', suffix: 'L', min: 0.5, max: 15 },
       { name: 'ratedPowerKw', label: 'Rated power', type: 'number', suffix: 'kW', min: 1, max: 2000 },
       { name: 'weightKg', label: 'Weight', type: 'number', suffix: 'kg', min: 1, max: 2000 },
@@ -95,10 +113,10 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
       { name: 'fanWFrom', label: 'Fan span from (w)', type: 'length', required: true },
       { name: 'fanWTo', label: 'Fan span to (w)', type: 'length', required: true },
       { name: 'bellPattern', label: 'Bellhousing pattern', type: 'text', required: true },
-      { name: 'crankSignal', label: 'Crank signal', type: 'text', required: true },
-      { name: 'camSignal', label: 'Cam signal', type: 'text', required: true },
+      { name: 'crankSignal', label: 'Crank signal', type: 'select', required: true, options: crankSignals },
+      { name: 'camSignal', label: 'Cam signal', type: 'select', required: true, options: camSignals },
       { name: 'throttle', label: 'Throttle', type: 'select', required: true, options: throttles },
-      { name: 'oilPumpDrive', label: 'Oil pump turns at', type: 'select', required: true, options: [{ value: 'crank', label: 'crank speed' }, { value: 'cam', label: 'cam speed' }] },
+      { name: 'oilPumpDrive', label: 'Oil pump turns at', type: 'select', required: true, options: opts(OIL_PUMP_DRIVES) },
       { name: 'dipstickLocation', label: 'Dipstick', type: 'select', required: true, options: dipsticks },
       { name: 'fuelPressurePsi', label: 'Fuel pressure', type: 'number', suffix: 'psi', required: true, min: 0, max: 120 },
       { name: 'injectorFlowLbh', label: 'Injector flow', type: 'number', suffix: 'lb/h', min: 0, max: 300 },
@@ -250,8 +268,8 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     singular: 'engine controller',
     fields: [
       { name: 'maxCylinders', label: 'Most cylinders', type: 'number', required: true, min: 1, max: 16 },
-      { name: 'crankSignals', label: 'Crank signals it reads', type: 'tags', required: true },
-      { name: 'camSignals', label: 'Cam signals it reads', type: 'tags', required: true },
+      { name: 'crankSignals', label: 'Crank signals it reads', type: 'multi', required: true, options: crankSignals },
+      { name: 'camSignals', label: 'Cam signals it reads', type: 'multi', options: camSignals },
       { name: 'throttles', label: 'Throttles it drives', type: 'multi', required: true, options: throttles },
     ],
     outlines: [],
@@ -313,4 +331,4 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
   },
 };
 
-export const obstacleKinds = opts('crossmember', 'steering-linkage', 'axle-at-bump', 'differential-at-bump', 'firewall', 'tunnel', 'other');
+export const obstacleKinds = opts(OBSTACLE_KINDS);

@@ -1,4 +1,4 @@
-import { DEMO_FIT_SPEC } from '@swapwright/shared';
+import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import { screen, waitFor } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';

@@ -1,4 +1,5 @@
-import { DEMO_FIT_SPEC, type Placement } from '@swapwright/shared';
+import { type Placement } from '@swapwright/shared';
+import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import { fireEvent, screen } from '@testing-library/react';
 import { useState } from 'react';
 import { describe, expect, it, vi } from 'vitest';

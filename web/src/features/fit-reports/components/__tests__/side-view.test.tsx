@@ -1,4 +1,5 @@
-import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN, computeFitWindow, runFitCheck } from '@swapwright/shared';
+import { computeFitWindow, runFitCheck } from '@swapwright/shared';
+import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '@swapwright/shared/fixtures';
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { renderWithApp } from '@/test/render';

@@ -1,0 +1,104 @@
+/**
+ * Every closed list of values the product accepts, declared once. The types derive from these arrays, the
+ * API validates against them (`@IsIn(LIST)`), and the web builds its selects from them; a new value is
+ * added here and nowhere else (labels for people stay with the web).
+ */
+
+// ---------------------------------------------------------------- parts and chassis
+
+export const ENGINE_LAYOUTS = ['inline', 'v'] as const;
+export type EngineLayout = (typeof ENGINE_LAYOUTS)[number];
+
+export const SIDES = ['left', 'right'] as const;
+export type SideName = (typeof SIDES)[number];
+
+export const THROTTLES = ['cable', 'electronic'] as const;
+export type ThrottleKind = (typeof THROTTLES)[number];
+
+export const OIL_PUMP_DRIVES = ['crank', 'cam'] as const;
+export type OilPumpDrive = (typeof OIL_PUMP_DRIVES)[number];
+
+export const DIPSTICK_LOCATIONS = ['block-left', 'block-right', 'pan-left', 'pan-right'] as const;
+export type DipstickLocation = (typeof DIPSTICK_LOCATIONS)[number];
+
+export const SUMP_POSITIONS = ['front', 'center', 'rear', 'dual'] as const;
+export type SumpPosition = (typeof SUMP_POSITIONS)[number];
+
+export const PICKUP_MOUNTS = ['pump-bolted', 'block-bolted', 'press-in'] as const;
+export type PickupMount = (typeof PICKUP_MOUNTS)[number];
+
+export const PULLEY_ROLES = ['crank', 'water-pump', 'alternator', 'power-steering', 'ac-compressor', 'idler', 'tensioner'] as const;
+export type PulleyRole = (typeof PULLEY_ROLES)[number];
+
+export const PULLEY_SIDES = ['grooved', 'back'] as const;
+export type PulleySide = (typeof PULLEY_SIDES)[number];
+
+export const OBSTACLE_KINDS = ['crossmember', 'steering-linkage', 'axle-at-bump', 'differential-at-bump', 'firewall', 'tunnel', 'other'] as const;
+export type ObstacleKind = (typeof OBSTACLE_KINDS)[number];
+
+export const FUEL_SYSTEM_KINDS = ['carburetor', 'efi-return', 'efi-returnless'] as const;
+export type FuelSystemKind = (typeof FUEL_SYSTEM_KINDS)[number];
+
+export const DRIVESHAFT_MATERIALS = ['steel', 'aluminum'] as const;
+export type DriveshaftMaterial = (typeof DRIVESHAFT_MATERIALS)[number];
+
+export const BELT_PROFILES = ['PK'] as const;
+export type BeltProfile = (typeof BELT_PROFILES)[number];
+
+/**
+ * Crank trigger-wheel patterns: teeth-minus-missing (`60-2`) or pulses per turn (`58x`). The common
+ * patterns of the trade; a controller lists the ones it decodes.
+ */
+export const CRANK_SIGNALS = ['60-2', '58x', '36-1', '36-2-2-2', '24x', '24-1', '12-1', '8x', '7x', '4x', '3x'] as const;
+export type CrankSignal = (typeof CRANK_SIGNALS)[number];
+
+/** Cam sensor patterns, pulses per cam turn. */
+export const CAM_SIGNALS = ['1x', '2x', '3x', '4x', '6x'] as const;
+export type CamSignal = (typeof CAM_SIGNALS)[number];
+
+/** The use the swap is planned for; it sets the margins some checks ask for. */
+export const SWAP_USES = ['street', 'tow', 'off-road', 'strip'] as const;
+export type SwapUse = (typeof SWAP_USES)[number];
+
+// ---------------------------------------------------------------- catalog, shop, people, projects
+
+/** The catalog's kinds, in the order the catalog shows them. */
+export const CATALOG_KIND_NAMES = [
+  'engines',
+  'chassis',
+  'transmissions',
+  'oil-pans',
+  'oil-pickups',
+  'oil-pumps',
+  'controllers',
+  'mount-adapters',
+  'bellhousing-adapters',
+  'belts',
+] as const;
+export type CatalogKind = (typeof CATALOG_KIND_NAMES)[number];
+
+export const ROLES = ['owner', 'estimator', 'fabricator', 'counter', 'customer'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** A shop's and a person's unit system: inches (with lb, psi, hp) or millimetres (with kg, kPa, kW). */
+export const UNIT_SYSTEMS = ['in', 'mm'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const PROJECT_STATUSES = ['intake', 'measuring', 'checking', 'quoting', 'approved', 'building', 'done'] as const;
+export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
+
+// ---------------------------------------------------------------- findings
+
+export const CHECK_STATUSES = ['ok', 'tight', 'fails', 'unknown'] as const;
+export type CheckStatus = (typeof CHECK_STATUSES)[number];
+
+export const CHECK_GROUPS = ['envelope', 'mounts', 'drivetrain', 'oiling', 'management', 'fuel', 'cooling', 'belt', 'cam'] as const;
+export type CheckGroup = (typeof CHECK_GROUPS)[number];
+
+export const PLACEMENT_AXES = ['setback', 'height', 'tilt'] as const;
+export type PlacementAxis = (typeof PLACEMENT_AXES)[number];
+
+/** True when `value` is one of `list`: narrows an unknown string to the list's type. */
+export function isOneOf<T extends string>(list: readonly T[], value: unknown): value is T {
+  return typeof value === 'string' && (list as readonly string[]).includes(value);
+}
