@@ -69,3 +69,8 @@ export * from './quoting/exact-money';
 export * from './quoting/quote-money';
 export * from './quoting/revision-diff';
 export * from './parts-plan';
+export * from './geometry/ground-line';
+export * from './measurements/measurement-points';
+export * from './measurements/measurement-template';
+export * from './measurements/measurement-entry';
+export * from './measurements/apply-measurement-sheet';

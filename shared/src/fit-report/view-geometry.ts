@@ -1,5 +1,6 @@
 import { FAN_RADIATOR_ID, measureFanGap } from '../checks/envelope/fan-radiator';
 import { GROUND_CLEARANCE_ID, lowestPoint } from '../checks/envelope/ground-clearance';
+import { groundZAt } from '../geometry/ground-line';
 import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
 import { HOOD_ID, measureHood } from '../checks/envelope/hood';
 import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
@@ -31,7 +32,8 @@ export interface SideViewGeometry
   obstacles: Array<Pick<ChassisObstacle, 'id' | 'name' | 'kind' | 'outline'>>;
   hoodLine: ChassisPoint[];
   radiator: { x: number; zFrom: number; zTo: number } | null;
-  ground: { z: number; xFrom: number; xTo: number };
+  /** The ground from xFrom (height z) to xTo (height zTo): level at z 0 unless the chassis has a measured ground line. */
+  ground: { z: number; zTo: number; xFrom: number; xTo: number };
   /** The tightest gap of each side-view check, tightest first. */
   dimensions: DimensionSegment[];
   /** A box around everything, for the SVG viewBox. */
@@ -81,16 +83,16 @@ export function sideViewGeometry(spec: FitSpec, settingsOverrides: Partial<FitSe
   push(outlineDimension(HEADS_FIREWALL_ID, placed.rearProfile, false, obstaclesOfKinds(spec, [...FIREWALL_KINDS]), settings.minFirewallGapMm, 'forward'));
   push(outlineDimension(TRANSMISSION_TUNNEL_ID, placed.transmission, true, obstaclesOfKinds(spec, [...TUNNEL_KINDS]), settings.minFirewallGapMm, 'down'));
   if (placed.pan) {
-    const low = lowestPoint(placed);
+    const low = lowestPoint(placed, 0, spec.chassis);
     if (low) {
       push({
         checkId: GROUND_CLEARANCE_ID,
         against: 'ground',
         from: low.point,
-        to: { x: low.point.x, z: 0 },
-        valueMm: low.point.z,
+        to: { x: low.point.x, z: low.point.z - low.clearanceMm },
+        valueMm: low.clearanceMm,
         requiredMm: settings.minGroundClearanceMm,
-        short: low.point.z < settings.minGroundClearanceMm,
+        short: low.clearanceMm < settings.minGroundClearanceMm,
       });
     }
   }
@@ -140,7 +142,7 @@ export function sideViewGeometry(spec: FitSpec, settingsOverrides: Partial<FitSe
     obstacles: spec.chassis.obstacles.map((o) => ({ id: o.id, name: o.name, kind: o.kind, outline: o.outline })),
     hoodLine: spec.chassis.hoodLine,
     radiator: core ? { x: core.x, zFrom: core.zFrom, zTo: core.zTo } : null,
-    ground: { z: 0, xFrom: bounds.xMin, xTo: bounds.xMax },
+    ground: { z: groundZAt(spec.chassis, bounds.xMin), zTo: groundZAt(spec.chassis, bounds.xMax), xFrom: bounds.xMin, xTo: bounds.xMax },
     dimensions: dims,
     bounds,
   };

@@ -122,9 +122,9 @@ function buildColumn(spec: FitSpec, settings: FitSettings, base: PlacedEngine): 
         });
       }
     }
-    const low = lowestPoint(base);
+    const low = lowestPoint(base, 0, chassis);
     if (low) {
-      const a = low.point.z - settings.minGroundClearanceMm;
+      const a = low.clearanceMm - settings.minGroundClearanceMm;
       constraints.push({ bound: { checkId: GROUND_CLEARANCE_ID, against: 'ground' }, trend: 'rises', margin: (z) => a + z, linear: { a, slope: 1 } });
     }
   }

@@ -210,6 +210,12 @@ export interface ChassisSpec {
   name: string;
   wheelbaseMm: number;
   rideHeightMm?: number;
+  /**
+   * The ground under the wheels when the truck does not sit at the catalog's ride height (measured ride heights):
+   * its z under the front axle (x 0) and under the rear axle (x = wheelbase), straight between them. The frame keeps
+   * its coordinates; the ground moves. Absent: the ground is z = 0.
+   */
+  groundLine?: { zAtFrontAxleMm: number; zAtRearAxleMm: number };
   obstacles: ChassisObstacle[];
   /** Underside of the hood, side view, front to rear. */
   hoodLine: ChassisPoint[];

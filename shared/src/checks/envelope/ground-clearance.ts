@@ -1,5 +1,6 @@
 import type { Finding, Remedy } from '../../types/finding';
-import type { ChassisPoint } from '../../types/fit-spec';
+import type { ChassisPoint, ChassisSpec } from '../../types/fit-spec';
+import { groundZAt } from '../../geometry/ground-line';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
@@ -9,12 +10,20 @@ import { mmWithInches } from '../../units/figure-format';
 
 export const GROUND_CLEARANCE_ID = 'envelope.ground-clearance';
 
-/** The lowest point of the placed engine and pan (the ground is z = 0 at ride height). */
-export function lowestPoint(placed: PlacedEngine, dz = 0): { point: ChassisPoint; part: 'oil pan' | 'engine' } | null {
-  let best: { point: ChassisPoint; part: 'oil pan' | 'engine' } | null = null;
+export interface LowestPoint {
+  point: ChassisPoint;
+  part: 'oil pan' | 'engine';
+  /** Height above the ground under it (the ground is z = 0 at ride height, or the chassis's measured ground line). */
+  clearanceMm: number;
+}
+
+/** The point of the placed engine and pan nearest the ground. */
+export function lowestPoint(placed: PlacedEngine, dz = 0, chassis?: Pick<ChassisSpec, 'groundLine' | 'wheelbaseMm'>): LowestPoint | null {
+  let best: LowestPoint | null = null;
   const visit = (points: readonly ChassisPoint[] | null, part: 'oil pan' | 'engine'): void => {
     for (const p of points ?? []) {
-      if (best === null || p.z + dz < best.point.z) best = { point: { x: p.x, z: p.z + dz }, part };
+      const clearanceMm = p.z + dz - (chassis ? groundZAt(chassis, p.x) : 0);
+      if (best === null || clearanceMm < best.clearanceMm) best = { point: { x: p.x, z: p.z + dz }, part, clearanceMm };
     }
   };
   visit(placed.pan, 'oil pan');
@@ -33,10 +42,10 @@ export function runGroundClearance({ spec, settings }: CheckContext): Finding {
     against: 'ground',
   };
   if (!spec.oilPan || spec.oilPan.bottomProfile.length < 3) return unknownFinding(fields, ['oilPan.bottomProfile']);
-  const low = lowestPoint(placedForSpec(spec));
+  const low = lowestPoint(placedForSpec(spec), 0, spec.chassis);
   if (!low) return unknownFinding(fields, ['oilPan.bottomProfile']);
-  const fig = figures(low.point.z, settings.minGroundClearanceMm, settings);
-  const message = `The lowest point (${low.part}, ${mmWithInches(low.point.x)} behind the front axle line) is ${mmWithInches(low.point.z)} above the ground at ride height; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`;
+  const fig = figures(low.clearanceMm, settings.minGroundClearanceMm, settings);
+  const message = `The lowest point (${low.part}, ${mmWithInches(low.point.x)} behind the front axle line) is ${mmWithInches(low.clearanceMm)} above the ground at ride height; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;

@@ -74,8 +74,8 @@ export function evaluateCandidatePans(
       smallest = Math.min(smallest, margin);
       if (group.some((k) => kinds.includes(k))) thisCheckMargin = margin;
     }
-    const low = lowestPoint(placeEngine(spec, spec.placement, pan));
-    if (low) smallest = Math.min(smallest, low.point.z - settings.minGroundClearanceMm);
+    const low = lowestPoint(placeEngine(spec, spec.placement, pan), 0, spec.chassis);
+    if (low) smallest = Math.min(smallest, low.clearanceMm - settings.minGroundClearanceMm);
     if (thisCheckMargin >= 0 && smallest >= 0) out.push({ pan, thisCheckMargin, smallestMargin: smallest });
   }
   return out.sort((a, b) => b.smallestMargin - a.smallestMargin);
