@@ -242,6 +242,8 @@ cmd_test() {
   SUITES_PASSED=(); SUITES_FAILED=()
 
   run_suite typecheck npm run -s typecheck
+  # The web's API types must match the API's OpenAPI document (regenerate with: npm run openapi).
+  run_suite contract bash scripts/check-openapi.sh
   run_suite shared bash -c "cd shared && npx jest --ci --json --outputFile='$results/shared.json'"
   run_suite web bash -c "cd web && npx vitest run --reporter=default --reporter=json --outputFile.json='$results/web.json'"
   run_suite api bash -c "cd api && npx jest --ci --runInBand --json --outputFile='$results/api.json'"

@@ -1,5 +1,5 @@
 import { INestApplication } from '@nestjs/common';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
 import { createJsonBodyMiddleware } from './common/middleware/json-body.middleware';
 
@@ -11,7 +11,13 @@ export function configureApp(app: INestApplication): INestApplication {
   app.use(createJsonBodyMiddleware());
   app.setGlobalPrefix(API_PREFIX);
   app.enableShutdownHooks();
-  const document = SwaggerModule.createDocument(
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, createOpenApiDocument(app), { jsonDocumentUrl: `${API_PREFIX}/docs-json` });
+  return app;
+}
+
+/** The OpenAPI document: the contract the web's generated types come from (see openapi/write-openapi-document.ts). */
+export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
+  return SwaggerModule.createDocument(
     app,
     new DocumentBuilder()
       .setTitle('Swapwright API')
@@ -20,6 +26,4 @@ export function configureApp(app: INestApplication): INestApplication {
       .addBearerAuth()
       .build(),
   );
-  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, { jsonDocumentUrl: `${API_PREFIX}/docs-json` });
-  return app;
 }
