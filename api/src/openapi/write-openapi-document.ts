@@ -28,10 +28,9 @@ const DOCUMENT_ENVIRONMENT: Record<string, string> = {
 };
 
 async function writeOpenApiDocument(outFile: string): Promise<void> {
-  for (const key of Object.keys(process.env)) {
-    if (/^(DB_|SMTP_|MAIL_|JWT_|WEB_|UPLOAD_|APP_|NODE_ENV$|PORT$)/.test(key)) delete process.env[key];
-  }
-  Object.assign(process.env, DOCUMENT_ENVIRONMENT);
+  // Only the placeholders: a setting of the shell (a local .env.sh sourced, say) must not change the document.
+  const { PATH, HOME, TMPDIR } = process.env;
+  process.env = { PATH, HOME, TMPDIR, ...DOCUMENT_ENVIRONMENT };
   const { AppModule } = await import('../app.module');
   const { configureApp, createOpenApiDocument } = await import('../app-setup');
   const app = await NestFactory.create(AppModule, { logger: false, preview: true, abortOnError: false });

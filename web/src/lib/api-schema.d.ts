@@ -11,7 +11,7 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Mails captured by the local SMTP fake (development and test only) */
+        /** Mails captured by the local SMTP fake (owners only, when DEV_MAIL_ENABLED=true) */
         get: operations["DevMailController_list"];
         put?: never;
         post?: never;
@@ -787,6 +787,19 @@ export interface components {
             html: string;
             receivedAt: string;
         };
+        ErrorResponseDto: {
+            /** @example 400 */
+            statusCode: number;
+            /** @example Bad Request */
+            error: string;
+            /** @example validation_failed */
+            code: string;
+            /** @example name must be shorter than or equal to 120 characters */
+            message: string;
+            details: string[];
+            /** @example 6f1c0d3e-2a8b-4c5d-9e0f-1a2b3c4d5e6f */
+            correlationId: string;
+        };
         ShopResponseDto: {
             /** Format: uuid */
             id: string;
@@ -824,19 +837,6 @@ export interface components {
             shopSuppliesPercent?: number;
             /** @example USD */
             currency?: string;
-        };
-        ErrorResponseDto: {
-            /** @example 400 */
-            statusCode: number;
-            /** @example Bad Request */
-            error: string;
-            /** @example validation_failed */
-            code: string;
-            /** @example name must be shorter than or equal to 120 characters */
-            message: string;
-            details: string[];
-            /** @example 6f1c0d3e-2a8b-4c5d-9e0f-1a2b3c4d5e6f */
-            correlationId: string;
         };
         MembershipResponseDto: {
             /** Format: uuid */
@@ -2144,6 +2144,23 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["CapturedMailResponseDto"][];
+                };
+            };
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            /** @description Captured mail is not enabled on this server */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
                 };
             };
         };
