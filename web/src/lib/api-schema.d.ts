@@ -1161,9 +1161,16 @@ export interface components {
             accessoryDrives: components["schemas"]["AccessoryDriveSpecDto"][];
             /** @description Bellhousing pattern code, e.g. KB-1 */
             bellPattern: string;
-            /** @description Crank trigger pattern, e.g. 60-2 */
-            crankSignal: string;
-            camSignal: string;
+            /**
+             * @description Crank trigger pattern, e.g. 60-2
+             * @enum {string}
+             */
+            crankSignal: "60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x";
+            /**
+             * @description Cam sensor pattern, pulses per cam turn
+             * @enum {string}
+             */
+            camSignal: "1x" | "2x" | "3x" | "4x" | "6x";
             /** @enum {string} */
             throttle: "cable" | "electronic";
             /** @enum {string} */
@@ -1211,9 +1218,16 @@ export interface components {
             accessoryDrives: components["schemas"]["AccessoryDriveSpecDto"][];
             /** @description Bellhousing pattern code, e.g. KB-1 */
             bellPattern: string;
-            /** @description Crank trigger pattern, e.g. 60-2 */
-            crankSignal: string;
-            camSignal: string;
+            /**
+             * @description Crank trigger pattern, e.g. 60-2
+             * @enum {string}
+             */
+            crankSignal: "60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x";
+            /**
+             * @description Cam sensor pattern, pulses per cam turn
+             * @enum {string}
+             */
+            camSignal: "1x" | "2x" | "3x" | "4x" | "6x";
             /** @enum {string} */
             throttle: "cable" | "electronic";
             /** @enum {string} */
@@ -1250,9 +1264,16 @@ export interface components {
             accessoryDrives?: components["schemas"]["AccessoryDriveSpecDto"][];
             /** @description Bellhousing pattern code, e.g. KB-1 */
             bellPattern?: string;
-            /** @description Crank trigger pattern, e.g. 60-2 */
-            crankSignal?: string;
-            camSignal?: string;
+            /**
+             * @description Crank trigger pattern, e.g. 60-2
+             * @enum {string}
+             */
+            crankSignal?: "60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x";
+            /**
+             * @description Cam sensor pattern, pulses per cam turn
+             * @enum {string}
+             */
+            camSignal?: "1x" | "2x" | "3x" | "4x" | "6x";
             /** @enum {string} */
             throttle?: "cable" | "electronic";
             /** @enum {string} */
@@ -1598,8 +1619,9 @@ export interface components {
             id: string;
             name: string;
             /** @description Crank trigger patterns it reads, e.g. 60-2 */
-            crankSignals: string[];
-            camSignals: string[];
+            crankSignals: ("60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x")[];
+            /** @description Cam sensor patterns it reads */
+            camSignals: ("1x" | "2x" | "3x" | "4x" | "6x")[];
             throttles: ("cable" | "electronic")[];
             maxCylinders: number;
         };
@@ -1617,16 +1639,18 @@ export interface components {
         CreateEngineControllerDto: {
             name: string;
             /** @description Crank trigger patterns it reads, e.g. 60-2 */
-            crankSignals: string[];
-            camSignals: string[];
+            crankSignals: ("60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x")[];
+            /** @description Cam sensor patterns it reads */
+            camSignals: ("1x" | "2x" | "3x" | "4x" | "6x")[];
             throttles: ("cable" | "electronic")[];
             maxCylinders: number;
         };
         UpdateEngineControllerDto: {
             name?: string;
             /** @description Crank trigger patterns it reads, e.g. 60-2 */
-            crankSignals?: string[];
-            camSignals?: string[];
+            crankSignals?: ("60-2" | "58x" | "36-1" | "36-2-2-2" | "24x" | "24-1" | "12-1" | "8x" | "7x" | "4x" | "3x")[];
+            /** @description Cam sensor patterns it reads */
+            camSignals?: ("1x" | "2x" | "3x" | "4x" | "6x")[];
             throttles?: ("cable" | "electronic")[];
             maxCylinders?: number;
         };
