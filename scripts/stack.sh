@@ -156,6 +156,9 @@ export MAIL_FROM="Swapwright <no-reply@swapwright.test>"
 export MAIL_FAKE_URL=http://127.0.0.1:$MAIL_HTTP_PORT/messages
 # GET /api/dev/mail (owners only) relays the fake above; the test profile turns it on for the API suites.
 export DEV_MAIL_ENABLED=${DEV_MAIL_ENABLED_VALUE:-false}
+# Sign-in, sign-up and password-reset attempts per address and route per window; the suites sign in many times.
+export AUTH_RATE_LIMIT=${AUTH_RATE_LIMIT_VALUE:-10}
+export AUTH_RATE_WINDOW_SECONDS=60
 export WEB_DIST_DIR=$ROOT/web/dist
 export UPLOAD_DIR=$LOCAL/$profile/uploads
 ENV
@@ -238,7 +241,7 @@ cmd_test() {
   mail_start test 2535
   API_PID=""
   trap 'kill $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
-  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true write_env test swapwright_test "$(free_port 3100)"
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$(free_port 3100)"
   SUITES_PASSED=(); SUITES_FAILED=()
 
   run_suite typecheck npm run -s typecheck
@@ -269,7 +272,7 @@ cmd_services() {
   ensure_debian_packages
   db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
-  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true write_env test swapwright_test "$(free_port 3100)"
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$(free_port 3100)"
   echo "Services running. Use: source .local/test/env.sh   (stop: bash scripts/stack.sh stop-services)"
 }
 

@@ -2,12 +2,14 @@ import { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
 import { createJsonBodyMiddleware } from './common/middleware/json-body.middleware';
+import { createSecurityHeadersMiddleware } from './common/middleware/security-headers.middleware';
 
 export const API_PREFIX = 'api';
 
 /** Everything main.ts and the e2e tests share, so tests run the app exactly as served. */
 export function configureApp(app: INestApplication): INestApplication {
   app.use(correlationIdMiddleware);
+  app.use(createSecurityHeadersMiddleware());
   app.use(createJsonBodyMiddleware());
   app.setGlobalPrefix(API_PREFIX);
   app.enableShutdownHooks();

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
+import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
 import { CatalogModule } from './catalog/catalog.module';
@@ -38,6 +39,15 @@ import { UsersModule } from './users/users.module';
         }),
         retryAttempts: 3,
         retryDelay: 1000,
+      }),
+    }),
+    // Used by @AuthRateLimited() routes only (no global throttling).
+    ThrottlerModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: AppConfigService) => ({
+        throttlers: [
+          { ttl: config.get('AUTH_RATE_WINDOW_SECONDS', { infer: true }) * 1000, limit: config.get('AUTH_RATE_LIMIT', { infer: true }) },
+        ],
       }),
     }),
     ServeStaticModule.forRootAsync({

@@ -10,6 +10,7 @@ import {
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { AuthRateLimited } from '../common/guards/auth-rate-limit.guard';
 import { Public } from '../common/decorators/public.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { AuthUser } from '../common/tenant/auth-user';
@@ -30,6 +31,7 @@ export class AuthController {
   ) {}
 
   @Public()
+  @AuthRateLimited()
   @Post('sign-up')
   @ApiCreatedResponse({ type: SessionResponseDto })
   @ApiBadRequestResponse({ type: ErrorResponseDto })
@@ -38,6 +40,7 @@ export class AuthController {
   }
 
   @Public()
+  @AuthRateLimited()
   @Post('sign-in')
   @HttpCode(200)
   @ApiOkResponse({ type: SessionResponseDto })
@@ -72,6 +75,7 @@ export class AuthController {
   }
 
   @Public()
+  @AuthRateLimited()
   @Post('password-reset/request')
   @HttpCode(202)
   @ApiAcceptedResponse({ description: 'Always; a link valid 30 minutes is mailed when the account exists' })
@@ -80,6 +84,7 @@ export class AuthController {
   }
 
   @Public()
+  @AuthRateLimited()
   @Post('password-reset/confirm')
   @HttpCode(204)
   @ApiNoContentResponse()

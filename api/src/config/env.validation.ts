@@ -87,6 +87,19 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @IsBoolean({ message: 'DEV_MAIL_ENABLED must be true or false' })
   DEV_MAIL_ENABLED: boolean = false;
 
+  /** Attempts per client address and route on sign-in, sign-up and password reset, per window. */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(100000)
+  AUTH_RATE_LIMIT: number = 10;
+
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(86400)
+  AUTH_RATE_WINDOW_SECONDS: number = 60;
+
   /** The built web app; served for every non-/api path when set. */
   @IsOptional()
   @IsString()

@@ -1,6 +1,6 @@
 import { INestApplication } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { Test } from '@nestjs/testing';
+import { Test, TestingModuleBuilder } from '@nestjs/testing';
 import { DEMO_PASSWORD, DEMO_SIGN_INS, DemoRole } from '@swapwright/seed-data';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
@@ -24,8 +24,9 @@ export interface Session {
   user: { id: string; email: string; name: string; role: DemoRole; shop: { id: string; name: string; unitSystem: string }; customerId: string | null };
 }
 
-export async function createTestApp(): Promise<TestApp> {
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+/** `override` may replace providers, e.g. the rate limits: `(m) => m.overrideProvider(getOptionsToken()).useValue(...)`. */
+export async function createTestApp(override: (builder: TestingModuleBuilder) => TestingModuleBuilder = (builder) => builder): Promise<TestApp> {
+  const moduleRef = await override(Test.createTestingModule({ imports: [AppModule] })).compile();
   const app = moduleRef.createNestApplication({ logger: ['error', 'warn'] });
   configureApp(app);
   await app.init();

@@ -2332,6 +2332,15 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponseDto"];
                 };
             };
+            /** @description Too many attempts; the Retry-After header gives the seconds to wait */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
         };
     };
     AuthController_signIn: {
@@ -2356,6 +2365,15 @@ export interface operations {
                 };
             };
             401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            /** @description Too many attempts; the Retry-After header gives the seconds to wait */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2456,6 +2474,15 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description Too many attempts; the Retry-After header gives the seconds to wait */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
         };
     };
     AuthController_confirmPasswordReset: {
@@ -2478,6 +2505,15 @@ export interface operations {
                 content?: never;
             };
             400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            /** @description Too many attempts; the Retry-After header gives the seconds to wait */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
