@@ -10,8 +10,11 @@ export const HANDBOOK_CRITICAL_SPEED_CONSTANT = 4_760_000;
 export type ShaftMaterial = 'steel' | 'aluminum';
 
 /**
- * Elastic modulus and density. From memory (handbook tables): steel 29 Msi, 0.283 lb/in³; aluminium alloy
- * 10 Msi, 0.098 lb/in³. Stored in SI.
+ * Elastic modulus and density, stored in SI.
+ * Aluminium — Source: R. C. Hibbeler, Mechanics of Materials, table "Average Mechanical Properties of Typical
+ * Engineering Materials", 6061-T6: E = 10.0 Msi, specific weight 0.098 lb/in³.
+ * Steel — From memory: 29 Msi, 0.283 lb/in³; used only for the first-principles cross-check of the handbook
+ * formula (the same table gives 29.0 Msi and 0.284 lb/in³ for A-36 structural steel).
  */
 export const SHAFT_MATERIALS: Record<ShaftMaterial, { elasticModulusPa: number; densityKgPerM3: number }> = {
   steel: { elasticModulusPa: 29e6 * 6894.757293168361, densityKgPerM3: (0.283 * 0.45359237) / 0.0254 ** 3 },
@@ -51,11 +54,18 @@ export function criticalSpeedFirstPrinciplesRpm(
 }
 
 /**
- * The figure the fit check uses: for steel the lower of the two forms (the handbook constant corresponds to
- * about 30 Msi); for aluminium only the first-principles form, since the handbook constant is for steel.
+ * The figure the fit check uses: for steel the handbook formula it cites, N = 4,760,000·√(D² + d²)/L²; for
+ * aluminium the first-principles form with the published 6061-T6 constants, since the handbook constant is
+ * for steel.
  */
 export function driveshaftCriticalSpeedRpm(outerDiameterMm: number, wallMm: number, lengthMm: number, material: ShaftMaterial = 'steel'): number {
-  const firstPrinciples = criticalSpeedFirstPrinciplesRpm(outerDiameterMm, wallMm, lengthMm, material);
-  if (material !== 'steel') return firstPrinciples;
-  return Math.min(firstPrinciples, criticalSpeedHandbookRpm(outerDiameterMm, wallMm, lengthMm));
+  if (material === 'steel') return criticalSpeedHandbookRpm(outerDiameterMm, wallMm, lengthMm);
+  return criticalSpeedFirstPrinciplesRpm(outerDiameterMm, wallMm, lengthMm, material);
 }
+
+/** Where the critical speed of each material comes from, for the finding's threshold source. */
+export const CRITICAL_SPEED_SOURCES: Record<ShaftMaterial, string> = {
+  steel: "Machinery's Handbook, 31st ed., \"Critical Speeds\": N = 4,760,000·√(D² + d²)/L² rpm, inches, simply supported steel tube",
+  aluminum:
+    'Euler–Bernoulli beam with pinned ends, ω = (π²/L²)·√(E·I/(ρ·A)), with 6061-T6 E = 10.0 Msi and 0.098 lb/in³ (R. C. Hibbeler, Mechanics of Materials, "Average Mechanical Properties of Typical Engineering Materials")',
+};

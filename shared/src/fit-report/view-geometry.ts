@@ -1,10 +1,10 @@
 import { FAN_RADIATOR_ID, measureFanGap } from '../checks/envelope/fan-radiator';
-import { GROUND_CLEARANCE_ID, lowestPoint } from '../checks/envelope/ground-clearance';
+import { GROUND_CLEARANCE_ID } from '../checks/envelope/ground-clearance';
 import { groundZAt } from '../geometry/ground-line';
 import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
 import { HOOD_ID, measureHood } from '../checks/envelope/hood';
 import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
-import { obstaclesOfKinds, placedForSpec, type PlacedEngine, type PlacedWidthBox } from '../checks/envelope/placed-engine';
+import { lowestPoint, obstaclesOfKinds, placedForSpec, type PlacedEngine, type PlacedWidthBox } from '../checks/envelope/placed-engine';
 import { measureRailWidth, RAIL_WIDTH_ID } from '../checks/envelope/rail-width';
 import { measureSteeringBox, STEERING_BOX_ID } from '../checks/envelope/steering-box';
 import { TRANSMISSION_TUNNEL_ID, TUNNEL_KINDS } from '../checks/envelope/transmission-tunnel';

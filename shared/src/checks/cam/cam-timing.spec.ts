@@ -40,4 +40,17 @@ describe('cam.timing-advance', () => {
   it('flags a retarded installation too', () => {
     expect(run(cam(0, 4, -2)).status).toBe('fails');
   });
+
+  it('compares at the tenth of a degree it shows: a total a hair over the recommendation is on it', () => {
+    // Common practice (no published source): cam degrees are read to a tenth at best; 4.02° reads as 4.0°.
+    const finding = run(cam(4.02, 4, 0));
+    expect(finding.status).toBe('ok');
+    expect(finding.message).toContain('exactly');
+    expect(finding.message).not.toContain('0.0°');
+    // Floating-point dust (0.1 + 0.2 = 0.30000000000000004) is not a difference either.
+    expect(run(cam(0.1, 0.3, 0.2)).status).toBe('ok');
+    // 0.06° over shows as 0.1° and is tight, not a silent pass.
+    expect(run(cam(4.06, 4, 0))).toMatchObject({ status: 'tight' });
+    expect(run(cam(4.06, 4, 0)).message).toContain('0.1° more advance than');
+  });
 });

@@ -21,8 +21,9 @@ export function checkCamTiming({ spec, settings }: CheckContext): Finding {
   const setAdvance = spec.timingSetAdvanceDeg ?? 0;
   const total = totalCamAdvanceDeg(cam.advanceGroundDeg, setAdvance);
   const recommended = cam.recommendedTotalDeg;
-  const difference = total - recommended;
-  const margin = settings.camTimingToleranceDeg - Math.abs(difference);
+  // Compared at the precision the degrees are shown at (0.1°): a total a hair off the recommendation is on it.
+  const difference = roundToShown(total - recommended);
+  const margin = roundToShown(settings.camTimingToleranceDeg - Math.abs(difference));
   const status = margin < 0 ? 'fails' : difference === 0 ? 'ok' : 'tight';
   const setText = spec.timingSetAdvanceDeg === undefined ? 'the timing set at its marks (assumed)' : setAdvance === 0 ? 'the timing set at its marks' : `${fmt(setAdvance)} ${setAdvance > 0 ? 'advanced' : 'retarded'} at the timing set`;
   const direction = difference > 0 ? 'more advance than' : difference < 0 ? 'less advance than' : 'exactly';
@@ -42,8 +43,17 @@ export function checkCamTiming({ spec, settings }: CheckContext): Finding {
   ]);
 }
 
+/** Degrees are shown, and compared, to a tenth. */
+const SHOWN_DECIMALS = 1;
+
+function roundToShown(deg: number): number {
+  const rounded = Number(deg.toFixed(SHOWN_DECIMALS));
+  return rounded === 0 ? 0 : rounded;
+}
+
 function fmt(deg: number): string {
-  return `${Number.isInteger(deg) ? deg.toFixed(0) : deg.toFixed(1)}°`;
+  const shown = roundToShown(deg);
+  return `${Number.isInteger(shown) ? shown.toFixed(0) : shown.toFixed(SHOWN_DECIMALS)}°`;
 }
 
 export const CAM_TIMING_CHECK: CheckDefinition = {

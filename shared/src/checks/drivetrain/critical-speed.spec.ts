@@ -7,12 +7,13 @@ const run = (spec: FitSpec) => checkCriticalSpeed({ spec, settings: DEFAULT_FIT_
 
 describe('drivetrain.critical-speed', () => {
   it('ok: 3.000 × 0.083 × 50 in steel at 3870.6 rpm', () => {
-    // Source: Machinery's Handbook 31st ed., "Critical Speeds": 7857.7 rpm handbook, 7736.5 first principles (E 29 Msi);
-    // the check takes the lower. Derived: 160 km/h on a 750 mm tyre with a 3.42 axle = 3870.6 rpm.
+    // Source: Machinery's Handbook 31st ed., "Critical Speeds": 7857.7 rpm by the handbook formula, which the
+    // check computes and cites. Derived: 160 km/h on a 750 mm tyre with a 3.42 axle = 3870.6 rpm.
     const finding = run(systemFitSpec());
     expect(finding.status).toBe('ok');
     expect(finding.measured).toBeCloseTo(3870.6, 1);
-    expect(finding.required).toBeCloseTo(0.75 * 7736.55, 0);
+    expect(finding.required).toBeCloseTo(0.75 * 7857.7, 0);
+    expect(finding.thresholdSource).toContain('4,760,000');
   });
 
   it('fails: 6000 rpm through a 0.70 overdrive', () => {

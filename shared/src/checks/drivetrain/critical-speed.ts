@@ -1,4 +1,4 @@
-import { driveshaftCriticalSpeedRpm } from '../../driveline/critical-speed';
+import { CRITICAL_SPEED_SOURCES, driveshaftCriticalSpeedRpm } from '../../driveline/critical-speed';
 import type { Finding } from '../../types/finding';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { describeShaftSpeed, drivelineLayout } from './driveline-layout';
@@ -10,8 +10,7 @@ const FIELDS: FindingFields = {
   title: 'Driveshaft critical speed',
   unit: 'rpm',
   limit: 'max',
-  thresholdSource:
-    "Machinery's Handbook, 31st ed., \"Critical Speeds\" (N = 4,760,000·√(D² + d²)/L²); keep shaft speed at or under 75 % of critical (common practice).",
+  thresholdSource: `${CRITICAL_SPEED_SOURCES.steel}; keep shaft speed at or under 75 % of critical (common practice).`,
 };
 
 export function checkCriticalSpeed({ spec, settings }: CheckContext): Finding {
@@ -28,7 +27,8 @@ export function checkCriticalSpeed({ spec, settings }: CheckContext): Finding {
   const status = statusFromMargin(margin, settings.shaftSpeedTightBandRpm);
   const tube = `${mmWithInches(shaft.outerDiameterMm)} × ${mmWithInches(shaft.wallMm, { decimals: 2 })} wall ${shaft.material} tube`;
   const message = `A ${tube}, ${mmWithInches(line.lengthMm)} long, has a critical speed of ${Math.round(criticalRpm)} rpm; the shaft turns ${describeShaftSpeed(shaftSpeed)}, against an allowed ${Math.round(allowedRpm)} rpm (${Math.round(settings.criticalSpeedFraction * 100)} % of critical).`;
-  return measuredFinding({ ...FIELDS }, { measured: shaftSpeed.rpm, required: allowedRpm, margin, status }, message, [
+  const thresholdSource = `${CRITICAL_SPEED_SOURCES[shaft.material]}; keep shaft speed at or under 75 % of critical (common practice).`;
+  return measuredFinding({ ...FIELDS, thresholdSource }, { measured: shaftSpeed.rpm, required: allowedRpm, margin, status }, message, [
     {
       kind: 'part',
       category: 'driveshaft',

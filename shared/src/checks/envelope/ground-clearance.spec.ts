@@ -24,4 +24,24 @@ describe('envelope.ground-clearance', () => {
   it('unknown without a pan', () => {
     expect(runCheck(GROUND_CLEARANCE_CHECK, { ...boxFitSpec(), oilPan: undefined }).missing).toEqual(['oilPan.bottomProfile']);
   });
+  it('the lowest of everything placed sets it: a bellhousing hanging below the pan is named', () => {
+    // Derived from the box fixture: a transmission corner at (u −100, w −260) sits at z = 500 − 260 = 240,
+    // below the pan floor at z 300, so 240 is the ground clearance and the bellhousing or case is named.
+    const spec = boxFitSpec();
+    spec.transmission!.sideProfile = [
+      { u: 0, w: 200 },
+      { u: -600, w: 200 },
+      { u: -600, w: -150 },
+      { u: -100, w: -260 },
+      { u: 0, w: -150 },
+    ];
+    const f = runCheck(GROUND_CLEARANCE_CHECK, spec, { minGroundClearanceMm: 250 });
+    expect(f.measured).toBeCloseTo(240, 9);
+    expect(f.message).toContain('bellhousing or transmission case');
+    expect(f.status).toBe('fails');
+    // A shallower pan would not help: only the raise is offered.
+    expect(f.remedies.map((r) => r.kind)).toEqual(['placement']);
+    expect(f.remedies[0]).toMatchObject({ axis: 'height', changeBy: 10 });
+  });
 });
+

@@ -13,8 +13,7 @@ import {
   worstGap,
   type ObstacleGap,
 } from './envelope-common';
-import { obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
-import { lowestPoint } from './ground-clearance';
+import { lowestPoint, obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
 import { measureHood } from './hood';
 import { mmWithInches } from '../../units/figure-format';
 

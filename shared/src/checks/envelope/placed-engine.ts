@@ -1,5 +1,6 @@
 import { placeEngineOutline, placeEnginePoint } from '../../geometry/placement';
-import type { AccessoryDriveSpec, ChassisObstacle, ChassisPoint, FitSpec, OilPanSpec, Placement } from '../../types/fit-spec';
+import { groundZAt } from '../../geometry/ground-line';
+import type { AccessoryDriveSpec, ChassisObstacle, ChassisPoint, ChassisSpec, FitSpec, OilPanSpec, Placement } from '../../types/fit-spec';
 
 /** A width feature (exhaust, heads, accessory drive) placed in the chassis: its side-view box and its half widths. */
 export interface PlacedWidthBox {
@@ -119,6 +120,35 @@ export function placedForSpec(spec: FitSpec): PlacedEngine {
   const placed = placeEngine(spec);
   cache.set(spec, { key, parts, placed });
   return placed;
+}
+
+/** The parts whose outlines can set the lowest point under the vehicle. */
+export type LowestPart = 'oil pan' | 'engine' | 'transmission';
+
+export interface LowestPoint {
+  point: ChassisPoint;
+  part: LowestPart;
+  /** Height above the ground under it (the ground is z = 0 at ride height, or the chassis's measured ground line). */
+  clearanceMm: number;
+}
+
+/**
+ * The point of everything placed — oil pan, engine outlines, and the transmission with its bellhousing —
+ * nearest the ground, and which part it belongs to. `dz` shifts the whole engine up (+) or down (−).
+ */
+export function lowestPoint(placed: PlacedEngine, dz = 0, chassis?: Pick<ChassisSpec, 'groundLine' | 'wheelbaseMm'>): LowestPoint | null {
+  let best: LowestPoint | null = null;
+  const visit = (points: readonly ChassisPoint[] | null, part: LowestPart): void => {
+    for (const p of points ?? []) {
+      const clearanceMm = p.z + dz - (chassis ? groundZAt(chassis, p.x) : 0);
+      if (best === null || clearanceMm < best.clearanceMm) best = { point: { x: p.x, z: p.z + dz }, part, clearanceMm };
+    }
+  };
+  visit(placed.pan, 'oil pan');
+  visit(placed.topProfile, 'engine');
+  visit(placed.rearProfile, 'engine');
+  visit(placed.transmission, 'transmission');
+  return best;
 }
 
 export function obstaclesOfKinds(spec: FitSpec, kinds: readonly ChassisObstacle['kind'][]): ChassisObstacle[] {
