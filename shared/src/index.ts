@@ -74,3 +74,4 @@ export * from './measurements/measurement-points';
 export * from './measurements/measurement-template';
 export * from './measurements/measurement-entry';
 export * from './measurements/apply-measurement-sheet';
+export * from './oiling/pickup-for-pan';

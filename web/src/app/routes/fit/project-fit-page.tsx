@@ -1,4 +1,4 @@
-import type { FitSpec, OilPickupSpec, PartRemedy, Placement, PlacementRemedy } from '@swapwright/shared';
+import { pickupForNewPan, type FitSpec, type OilPickupSpec, type PartRemedy, type Placement, type PlacementRemedy } from '@swapwright/shared';
 import { Alert, Button, Card, Col, Flex, Row, Space, Tag, Typography } from 'antd';
 import { useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
@@ -149,12 +149,10 @@ export function ProjectFitPage() {
       const pan = spec?.candidates?.oilPans?.find((x) => x.id === partId) ?? panOf(catalog, partId);
       const pickups: OilPickupSpec[] = [...(spec?.candidates?.oilPickups ?? []), ...pickupsOf(catalog)];
       const current = pickups.find((x) => x.id === sel?.oilPickupId) ?? spec?.oilPickup;
-      if (pan && (!current || current.sumpPosition !== pan.sumpPosition || current.mount !== pan.pickupMount)) {
-        const match = pickups.find((x) => x.sumpPosition === pan.sumpPosition && x.mount === pan.pickupMount);
-        if (match) {
-          patch.oilPickupId = match.id;
-          extra = ` with the matching pickup ${match.name}`;
-        }
+      const choice = pan ? pickupForNewPan(pan, current, pickups) : null;
+      if (choice?.action === 'change') {
+        patch.oilPickupId = choice.pickup.id;
+        extra = ` with the matching pickup ${choice.pickup.name}`;
       }
     }
     setBusyPartId(partId);
