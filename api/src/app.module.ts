@@ -15,6 +15,7 @@ import { AppConfigService } from './config/app-config';
 import { validateEnv } from './config/env.validation';
 import { CustomersModule } from './customers/customers.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
+import { PartsModule } from './parts/parts.module';
 import { buildDataSourceOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
@@ -68,6 +69,7 @@ import { UsersModule } from './users/users.module';
     ProjectsModule,
     CatalogModule,
     FitReportsModule,
+    PartsModule,
     HealthModule,
   ],
   providers: [

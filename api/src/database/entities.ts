@@ -7,10 +7,11 @@ import { ProjectFitSelection } from '../fit-reports/project-fit-selection.entity
 import { ShopFitSettings } from '../fit-reports/shop-fit-settings.entity';
 import { Invitation } from '../invitations/invitation.entity';
 import { Membership } from '../memberships/membership.entity';
+import { PARTS_ENTITIES } from '../parts/part.entity';
 import { Project } from '../projects/project.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project,
-  ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord];
+  ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES];

@@ -10,6 +10,7 @@ import { CreateFitReports1796100011000 } from './migrations/1796100011000-create
 import { CreateCatalogBelts1796100012000 } from './migrations/1796100012000-create-catalog-belts';
 import { FitSelectionsMountAdapter1796100013000 } from './migrations/1796100013000-fit-selections-mount-adapter';
 import { SessionRevocation1796235495169 } from './migrations/1796235495169-session-revocation';
+import { CreateParts1796236436524 } from './migrations/1796236436524-create-parts';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -25,4 +26,5 @@ export const MIGRATIONS = [
   CreateCatalogBelts1796100012000,
   FitSelectionsMountAdapter1796100013000,
   SessionRevocation1796235495169,
+  CreateParts1796236436524,
 ];

@@ -17,6 +17,6 @@ import { ShopFitSettings } from './shop-fit-settings.entity';
   imports: [TypeOrmModule.forFeature([FitReportRecord, ProjectFitSelection, ShopFitSettings]), CatalogModule, ProjectsModule],
   controllers: [ProjectFitReportsController, FitReportsController, FitSelectionsController, FitSettingsController],
   providers: [FitReportsService, FitSelectionsService, FitSettingsService, FitSpecBuilderService],
-  exports: [FitReportsService],
+  exports: [FitReportsService, FitSpecBuilderService, FitSettingsService],
 })
 export class FitReportsModule {}

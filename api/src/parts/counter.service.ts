@@ -1,0 +1,130 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import Papa from 'papaparse';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager, In } from 'typeorm';
+import { AuthUser } from '../common/tenant/auth-user';
+import { escapeFormula } from './csv-cells';
+import { CounterLine, CounterStatus, PartStock } from './part.entity';
+import { PartsErrors } from './parts.errors';
+import { PartsPlansService } from './parts-plans.service';
+
+export interface CounterLineView {
+  line: CounterLine;
+  stock: PartStock[];
+}
+
+const NEXT: Record<'to-order' | 'ordered', CounterStatus[]> = {
+  'to-order': ['open'],
+  ordered: ['open', 'to-order'],
+};
+
+/** The counter's side of a plan: stock on hand and bins per line, reservations under row locks, orders. */
+@Injectable()
+export class CounterService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly plans: PartsPlansService,
+  ) {}
+
+  async lines(user: Pick<AuthUser, 'shopId'>, planId: string): Promise<CounterLineView[]> {
+    const plan = await this.plans.get(user, planId);
+    const lines = await this.dataSource.getRepository(CounterLine).find({ where: { shopId: user.shopId, planId: plan.id }, order: { sku: 'ASC' } });
+    const partIds = lines.map((l) => l.partId).filter((id): id is string => !!id);
+    const stock = partIds.length > 0 ? await this.dataSource.getRepository(PartStock).find({ where: { shopId: user.shopId, partId: In(partIds) }, order: { location: 'ASC' } }) : [];
+    return lines.map((line) => ({ line, stock: stock.filter((s) => s.partId === line.partId) }));
+  }
+
+  private async lockedLine(manager: EntityManager, user: Pick<AuthUser, 'shopId'>, id: string): Promise<CounterLine> {
+    const line = await manager.getRepository(CounterLine).createQueryBuilder('l').setLock('pessimistic_write').where('l.id = :id AND l.shopId = :shopId', { id, shopId: user.shopId }).getOne();
+    if (!line) throw PartsErrors.lineNotFound();
+    return line;
+  }
+
+  /**
+   * Sets the line's units aside from one location. The line and the part's stock rows are locked
+   * (SELECT ... FOR UPDATE) for the transaction, so two clerks reserving the last unit get one success and one 409.
+   */
+  async reserve(user: AuthUser, id: string, location?: string): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if (line.status !== 'open' && line.status !== 'to-order' && line.status !== 'ordered') throw PartsErrors.lineState(line.sku, line.status, 'reserved');
+      if (!line.partId) throw PartsErrors.partNotFound();
+      const rows = await manager
+        .getRepository(PartStock)
+        .createQueryBuilder('s')
+        .setLock('pessimistic_write')
+        .where('s.partId = :partId AND s.shopId = :shopId', { partId: line.partId, shopId: user.shopId })
+        .orderBy('s.location', 'ASC')
+        .getMany();
+      const usable = rows.filter((row) => !location || row.location === location);
+      const best = usable.sort((a, b) => b.onHand - b.reserved - (a.onHand - a.reserved))[0];
+      const free = best ? best.onHand - best.reserved : 0;
+      if (!best || free < line.quantity) throw PartsErrors.outOfStock(line.sku, free, line.quantity);
+      await manager.update(PartStock, { id: best.id }, { reserved: best.reserved + line.quantity });
+      await manager.update(CounterLine, { id: line.id }, { status: 'reserved', stockId: best.id, updatedById: user.userId });
+    });
+    return this.view(user, id);
+  }
+
+  async release(user: AuthUser, id: string): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if ((line.status !== 'reserved' && line.status !== 'received') || !line.stockId) throw PartsErrors.lineState(line.sku, line.status, 'released');
+      const stock = await manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id', { id: line.stockId }).getOne();
+      if (stock) await manager.update(PartStock, { id: stock.id }, { reserved: Math.max(0, stock.reserved - line.quantity) });
+      await manager.update(CounterLine, { id: line.id }, { status: 'open', stockId: null, updatedById: user.userId });
+    });
+    return this.view(user, id);
+  }
+
+  async mark(user: AuthUser, id: string, status: 'to-order' | 'ordered'): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if (!NEXT[status].includes(line.status)) throw PartsErrors.lineState(line.sku, line.status, `marked ${status}`);
+      await manager.update(CounterLine, { id: line.id }, { status, updatedById: user.userId });
+    });
+    return this.view(user, id);
+  }
+
+  /** The ordered units arrived: they go on hand at the location and are set aside for this job at once. */
+  async receive(user: AuthUser, id: string, location: string, bin?: string): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if (line.status !== 'ordered' && line.status !== 'to-order') throw PartsErrors.lineState(line.sku, line.status, 'received');
+      if (!line.partId) throw PartsErrors.partNotFound();
+      const stock = await manager
+        .getRepository(PartStock)
+        .createQueryBuilder('s')
+        .setLock('pessimistic_write')
+        .where('s.partId = :partId AND s.location = :location', { partId: line.partId, location })
+        .getOne();
+      let stockId = stock?.id;
+      if (stock) {
+        await manager.update(PartStock, { id: stock.id }, { onHand: stock.onHand + line.quantity, reserved: stock.reserved + line.quantity, ...(bin && { bin }) });
+      } else {
+        stockId = randomUUID();
+        await manager.insert(PartStock, { id: stockId, shopId: user.shopId, partId: line.partId, location, bin: bin ?? '', onHand: line.quantity, reserved: line.quantity });
+      }
+      await manager.update(CounterLine, { id: line.id }, { status: 'received', stockId, updatedById: user.userId });
+    });
+    return this.view(user, id);
+  }
+
+  async view(user: Pick<AuthUser, 'shopId'>, id: string): Promise<CounterLineView> {
+    const line = await this.dataSource.getRepository(CounterLine).findOne({ where: { id, shopId: user.shopId } });
+    if (!line) throw PartsErrors.lineNotFound();
+    const stock = line.partId ? await this.dataSource.getRepository(PartStock).find({ where: { shopId: user.shopId, partId: line.partId }, order: { location: 'ASC' } }) : [];
+    return { line, stock };
+  }
+
+  /** The pick list as CSV: where each line's units are (the reserved location first), formula-looking cells escaped. */
+  async pickListCsv(user: Pick<AuthUser, 'shopId'>, planId: string): Promise<string> {
+    const views = await this.lines(user, planId);
+    const rows = views.map(({ line, stock }) => {
+      const from = stock.find((s) => s.id === line.stockId) ?? stock[0];
+      return [line.sku, line.description, line.quantity, from?.location ?? '', from?.bin ?? '', line.status].map(escapeFormula);
+    });
+    return Papa.unparse({ fields: ['sku', 'description', 'quantity', 'location', 'bin', 'status'], data: rows });
+  }
+}

@@ -1,0 +1,29 @@
+import { AppError } from '../common/errors/app-error';
+
+export const PartsErrors = {
+  partNotFound: () => new AppError(404, 'part_not_found', "That part does not exist in your shop's catalog."),
+  supplierNotFound: () => new AppError(404, 'supplier_not_found', 'That supplier does not exist in your shop.'),
+  skuTaken: (sku: string) => new AppError(409, 'sku_taken', `SKU ${sku} is already in your catalog; change that part or pick another SKU.`),
+  supplierTaken: (name: string) => new AppError(409, 'supplier_taken', `A supplier named ${name} already exists.`),
+  badAttributes: (key: string) =>
+    new AppError(400, 'validation_failed', `attributes.${key} must be text, a number, true/false or a list of text`, [
+      `attributes.${key} must be text, a number, true/false or a list of text`,
+    ]),
+  fitSpecIncomplete: () =>
+    new AppError(400, 'validation_failed', 'fitKind and fitSpecId go together: give both or neither', ['fitKind and fitSpecId go together: give both or neither']),
+  fitSpecMissing: (kind: string) => new AppError(400, 'bad_reference', `The linked fit spec is not in your shop's ${kind} catalog.`),
+  planNotFound: () => new AppError(404, 'parts_plan_not_found', 'That parts plan does not exist in your shop.'),
+  planLocked: (version: number) => new AppError(409, 'parts_plan_locked', `Plan version ${version} is locked for a quote; build a new version to change it.`),
+  lineNotFound: () => new AppError(404, 'counter_line_not_found', 'That parts line does not exist in your shop.'),
+  outOfStock: (sku: string, available: number, wanted: number) =>
+    new AppError(
+      409,
+      'out_of_stock',
+      available === 0
+        ? `No ${sku} is left to reserve: another job took the last one. Mark the line to order, or reserve from another location.`
+        : `Only ${available} of ${sku} left to reserve, ${wanted} wanted. Reserve fewer or mark the line to order.`,
+    ),
+  lineState: (sku: string, status: string, action: string) =>
+    new AppError(409, 'counter_line_state', `The ${sku} line is ${status}; it cannot be ${action} now. Refresh to see its current state.`),
+  noStockLocation: (sku: string) => new AppError(409, 'no_stock_location', `${sku} has no stock location yet; receive it into a location first.`),
+};
