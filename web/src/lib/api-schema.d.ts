@@ -758,6 +758,318 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/parts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** List the shop's parts with stock (search SKU, description, supplier SKU; filter category, supplier, in stock) */
+        get: operations["listParts"];
+        put?: never;
+        /** Add a part to the catalog */
+        post: operations["createPart"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts/export.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The catalog as CSV (the import columns) */
+        get: operations["exportParts"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts/import/preview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read a CSV without writing: column mapping, every row error, formula warnings */
+        post: operations["previewPartsImport"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts/import": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Import a CSV: all or nothing in one transaction, upserting by SKU */
+        post: operations["importParts"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One part with its stock */
+        get: operations["getPart"];
+        put?: never;
+        post?: never;
+        /** Remove a part */
+        delete: operations["deletePart"];
+        options?: never;
+        head?: never;
+        /** Change a part */
+        patch: operations["updatePart"];
+        trace?: never;
+    };
+    "/api/parts/{id}/stock": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        /** Set the count on hand at one location and bin */
+        put: operations["setPartStock"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/suppliers": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The shop's suppliers */
+        get: operations["listSuppliers"];
+        put?: never;
+        /** Add a supplier */
+        post: operations["createSupplier"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/suppliers/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Remove a supplier (its parts keep their data, without a supplier) */
+        delete: operations["deleteSupplier"];
+        options?: never;
+        head?: never;
+        /** Change a supplier */
+        patch: operations["updateSupplier"];
+        trace?: never;
+    };
+    "/api/projects/{projectId}/parts-plans": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The project's plan versions, newest first */
+        get: operations["listPartsPlans"];
+        put?: never;
+        /** Build a new plan version from the project's fit report and the catalog */
+        post: operations["buildPartsPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Each project's latest plan, newest first (the counter's work list) */
+        get: operations["listRecentPartsPlans"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One plan version */
+        get: operations["getPartsPlan"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans/{id}/lock": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Lock a plan version for a quote (it never changes after) */
+        post: operations["lockPartsPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans/{id}/counter-lines": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The plan's parts with stock on hand and bins, and each line's state */
+        get: operations["listCounterLines"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans/{id}/pick-list.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The pick list as CSV */
+        get: operations["exportPickList"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/reserve": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Set the line's units aside from stock (409 when another job took them) */
+        post: operations["reserveCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Put reserved units back */
+        post: operations["releaseCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/mark": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Mark a line to order or ordered */
+        post: operations["markCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/receive": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Ordered units arrived: on hand at a location, set aside for this job */
+        post: operations["receiveCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/health": {
         parameters: {
             query?: never;
@@ -2137,6 +2449,130 @@ export interface components {
         UpdateFitSettingsDto: {
             /** @description Replaces the shop’s overrides; an empty object returns to the defaults */
             overrides: components["schemas"]["FitSettingsOverridesDto"];
+        };
+        TorqueSpecDto: {
+            fastener: string;
+            /** @description Tightening torque, N·m. */
+            newtonMetres: number;
+            /** @description Tightening sequence or angle steps. */
+            sequence?: string;
+        };
+        CreatePartDto: {
+            /** @example TR-4410 */
+            sku: string;
+            description: string;
+            /** @enum {string} */
+            category: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+            /** @description Selling price, integer cents. */
+            priceCents: number;
+            /** @description What the shop pays, integer cents. */
+            costCents?: number;
+            /** Format: uuid */
+            supplierId?: Record<string, never> | null;
+            supplierSku?: Record<string, never> | null;
+            /** @description Install labor, hours to a tenth. */
+            laborHours?: number;
+            torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
+            instructions?: Record<string, never> | null;
+            /** @description Fitment attributes: sumpPosition, pickupMount, pumpInlet, railPattern, location (dipstick), crankSignals, camSignals, flowLph, pressurePsi, ratedKw, inletSide, outletSide, type, fabricationHours, ... */
+            attributes?: {
+                [key: string]: string | number | boolean | string[];
+            };
+            /** @description SKUs: this part needs one of them as well. */
+            requiresSkus?: string[];
+            /** @description SKUs that may not be used with this part. */
+            excludesSkus?: string[];
+            /** @description SKUs this part supersedes. */
+            replacesSkus?: string[];
+            /**
+             * @description The catalog kind of the fit spec this part carries.
+             * @enum {string|null}
+             */
+            fitKind?: "engines" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts" | null;
+            /** Format: uuid */
+            fitSpecId?: Record<string, never> | null;
+        };
+        UpdatePartDto: {
+            /** @example TR-4410 */
+            sku?: string;
+            description?: string;
+            /** @enum {string} */
+            category?: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+            /** @description Selling price, integer cents. */
+            priceCents?: number;
+            /** @description What the shop pays, integer cents. */
+            costCents?: number;
+            /** Format: uuid */
+            supplierId?: Record<string, never> | null;
+            supplierSku?: Record<string, never> | null;
+            /** @description Install labor, hours to a tenth. */
+            laborHours?: number;
+            torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
+            instructions?: Record<string, never> | null;
+            /** @description Fitment attributes: sumpPosition, pickupMount, pumpInlet, railPattern, location (dipstick), crankSignals, camSignals, flowLph, pressurePsi, ratedKw, inletSide, outletSide, type, fabricationHours, ... */
+            attributes?: {
+                [key: string]: string | number | boolean | string[];
+            };
+            /** @description SKUs: this part needs one of them as well. */
+            requiresSkus?: string[];
+            /** @description SKUs that may not be used with this part. */
+            excludesSkus?: string[];
+            /** @description SKUs this part supersedes. */
+            replacesSkus?: string[];
+            /**
+             * @description The catalog kind of the fit spec this part carries.
+             * @enum {string|null}
+             */
+            fitKind?: "engines" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts" | null;
+            /** Format: uuid */
+            fitSpecId?: Record<string, never> | null;
+        };
+        SetStockDto: {
+            /** @example Main store */
+            location: string;
+            /** @example A-03-2 */
+            bin?: string;
+            onHand: number;
+        };
+        CreateSupplierDto: {
+            name: string;
+            contact?: Record<string, never> | null;
+            email?: Record<string, never> | null;
+            phone?: Record<string, never> | null;
+        };
+        UpdateSupplierDto: {
+            name?: string;
+            contact?: Record<string, never> | null;
+            email?: Record<string, never> | null;
+            phone?: Record<string, never> | null;
+        };
+        SupplierResponseDto: {
+            id: string;
+            name: string;
+            contact: string | null;
+            email: string | null;
+            phone: string | null;
+        };
+        BuildPlanDto: {
+            /**
+             * @default lowest-cost
+             * @enum {string}
+             */
+            objective: "lowest-cost" | "least-fabrication" | "in-stock";
+            /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
+            resolve?: string[];
+        };
+        ReserveDto: {
+            /** @description Reserve from this location; the one with the most free units when absent. */
+            location?: string;
+        };
+        MarkLineDto: {
+            /** @enum {string} */
+            status: "to-order" | "ordered";
+        };
+        ReceiveDto: {
+            location: string;
+            bin?: string;
         };
         HealthResponseDto: {
             /** @example ok */
@@ -5396,6 +5832,517 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["ErrorResponseDto"];
                 };
+            };
+        };
+    };
+    listParts: {
+        parameters: {
+            query?: {
+                page?: number;
+                pageSize?: number;
+                order?: "asc" | "desc";
+                /** @description Matches inside the main text fields. */
+                search?: string;
+                sort?: "sku" | "description" | "category" | "priceCents" | "updatedAt";
+                category?: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+                supplierId?: string;
+                /** @description Only parts with units free to reserve. */
+                inStock?: boolean;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    createPart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreatePartDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    exportParts: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    previewPartsImport: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file?: string;
+                    mapping?: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    importParts: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file?: string;
+                    mapping?: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    getPart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    deletePart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    updatePart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdatePartDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    setPartStock: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SetStockDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    listSuppliers: {
+        parameters: {
+            query?: {
+                page?: number;
+                pageSize?: number;
+                order?: "asc" | "desc";
+                /** @description Matches inside the main text fields. */
+                search?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    createSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateSupplierDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    deleteSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    updateSupplier: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateSupplierDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SupplierResponseDto"];
+                };
+            };
+        };
+    };
+    listPartsPlans: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    buildPartsPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["BuildPlanDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    listRecentPartsPlans: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    getPartsPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    lockPartsPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    listCounterLines: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    exportPickList: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    reserveCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReserveDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    releaseCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    markCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MarkLineDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    receiveCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReceiveDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
