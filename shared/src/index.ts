@@ -75,3 +75,4 @@ export * from './measurements/measurement-template';
 export * from './measurements/measurement-entry';
 export * from './measurements/apply-measurement-sheet';
 export * from './oiling/pickup-for-pan';
+export * from './units/unit-format';

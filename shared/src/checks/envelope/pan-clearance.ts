@@ -114,10 +114,10 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
     requires: { sumpPosition, railPattern: spec.engine.panRail.pattern },
     partIds: candidates.map((c) => c.pan.id),
     note: candidates.length
-      ? `A ${sumpPosition}-sump pan for the ${spec.engine.panRail.pattern} rail clears ${config.label} in this placement: ` +
+      ? `A ${sumpPosition}-sump pan that bolts to this engine's block clears ${config.label} in this placement: ` +
         candidates.map((c) => `${c.pan.name} by ${mmWithInches(c.thisCheckMargin + required)}`).join('; ') +
         '. Fit the matching pickup and check the dipstick.'
-      : `No candidate pan clears ${config.label} in this placement; look for a ${sumpPosition}-sump pan for the ${spec.engine.panRail.pattern} rail.`,
+      : `No candidate pan clears ${config.label} in this placement; look for a ${sumpPosition}-sump pan that bolts to this engine's block.`,
   });
   const marginAt = (p: Placement): number => {
     const g = worstGap(placePan(pan, p), true, [worst.obstacle]);

@@ -65,7 +65,7 @@ function pumpRemedy(spec: FitSpec, pickup: OilPickupSpec): Remedy {
     category: 'oil-pump',
     requires: { inlet: pickup.pumpInlet },
     partIds,
-    note: `A pump with the ${pickup.pumpInlet} inlet the pickup fits.`,
+    note: `A pump whose inlet takes the ${pickup.name}.`,
   };
 }
 
