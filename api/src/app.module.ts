@@ -19,9 +19,11 @@ import { PartsModule } from './parts/parts.module';
 import { buildDataSourceOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
+import { LaborOperationsModule } from './labor-operations/labor-operations.module';
 import { MailModule } from './mail/mail.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
+import { QuotesModule } from './quotes/quotes.module';
 import { ShopsModule } from './shops/shops.module';
 import { UsersModule } from './users/users.module';
 
@@ -70,6 +72,8 @@ import { UsersModule } from './users/users.module';
     CatalogModule,
     FitReportsModule,
     PartsModule,
+    LaborOperationsModule,
+    QuotesModule,
     HealthModule,
   ],
   providers: [

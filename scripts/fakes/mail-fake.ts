@@ -13,6 +13,8 @@ interface CapturedMail {
   subject: string;
   text: string;
   html: string;
+  /** Attachments with their bytes in base64, so a test can open a PDF that was sent. */
+  attachments: { filename: string; contentType: string; size: number; contentBase64: string }[];
   receivedAt: string;
 }
 
@@ -35,6 +37,12 @@ const smtp = new SMTPServer({
           subject: parsed.subject ?? '',
           text: parsed.text ?? '',
           html: typeof parsed.html === 'string' ? parsed.html : '',
+          attachments: parsed.attachments.map((attachment) => ({
+            filename: attachment.filename ?? '',
+            contentType: attachment.contentType,
+            size: attachment.size,
+            contentBase64: attachment.content.toString('base64'),
+          })),
           receivedAt: new Date().toISOString(),
         });
         if (messages.length > 500) messages.length = 500;

@@ -3,3 +3,4 @@ export * from './demo-shop';
 export * from './demo-customers';
 export * from './demo-projects';
 export * from './catalog';
+export * from './demo-labor-operations';

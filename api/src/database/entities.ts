@@ -6,6 +6,11 @@ import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { ProjectFitSelection } from '../fit-reports/project-fit-selection.entity';
 import { ShopFitSettings } from '../fit-reports/shop-fit-settings.entity';
 import { Invitation } from '../invitations/invitation.entity';
+import { LaborOperation } from '../labor-operations/labor-operation.entity';
+import { QuoteNotification } from '../quotes/quote-notification.entity';
+import { QuoteRevision } from '../quotes/quote-revision.entity';
+import { QuoteSettings } from '../quotes/quote-settings.entity';
+import { Quote } from '../quotes/quote.entity';
 import { Membership } from '../memberships/membership.entity';
 import { PARTS_ENTITIES } from '../parts/part.entity';
 import { Project } from '../projects/project.entity';
@@ -14,4 +19,5 @@ import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project,
-  ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES];
+  ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
+  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification];

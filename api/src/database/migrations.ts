@@ -11,6 +11,7 @@ import { CreateCatalogBelts1796100012000 } from './migrations/1796100012000-crea
 import { FitSelectionsMountAdapter1796100013000 } from './migrations/1796100013000-fit-selections-mount-adapter';
 import { SessionRevocation1796235495169 } from './migrations/1796235495169-session-revocation';
 import { CreateParts1796236436524 } from './migrations/1796236436524-create-parts';
+import { CreateQuotes1796236709687 } from './migrations/1796236709687-create-quotes';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -27,4 +28,5 @@ export const MIGRATIONS = [
   FitSelectionsMountAdapter1796100013000,
   SessionRevocation1796235495169,
   CreateParts1796236436524,
+  CreateQuotes1796236709687,
 ];

@@ -8,6 +8,7 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html?: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 @Injectable()

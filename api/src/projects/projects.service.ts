@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { Repository, SelectQueryBuilder } from 'typeorm';
+import { EntityManager, In, Repository, SelectQueryBuilder } from 'typeorm';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { CatalogService } from '../catalog/catalog.service';
 import { CatalogKind } from '../catalog/catalog-kinds';
@@ -12,7 +12,7 @@ import { Customer } from '../customers/customer.entity';
 import { CreateProjectDto, ProjectPlacementDto } from './dto/create-project.dto';
 import { ListProjectsQueryDto } from './dto/list-projects-query.dto';
 import { UpdateProjectDto } from './dto/update-project.dto';
-import { Project } from './project.entity';
+import { Project, PROJECT_STATUSES, ProjectStatus } from './project.entity';
 import { ProjectErrors } from './projects.errors';
 
 /** A fabricator may move the engine and the project along, nothing else. */
@@ -136,6 +136,16 @@ export class ProjectsService {
       await this.scoped.repository.update({ id: project.id, shopId: user.shopId }, changes);
     }
     return this.get(user, id);
+  }
+
+  /**
+   * Moves a project forward to `to` when it is at an earlier stage; never back. The one way other modules change
+   * a project's status (pass the transaction's manager when the move belongs with other writes).
+   */
+  async advanceStatus(shopId: string, projectId: string, to: ProjectStatus, manager?: EntityManager): Promise<void> {
+    const earlier = PROJECT_STATUSES.slice(0, PROJECT_STATUSES.indexOf(to));
+    if (earlier.length === 0) return;
+    await (manager ?? this.scoped.repository.manager).update(Project, { id: projectId, shopId, status: In(earlier) }, { status: to });
   }
 
   async remove(user: AuthUser, id: string): Promise<void> {

@@ -24,6 +24,14 @@ import { Role } from './role';
  * | POST /fit-reports/what-if            | yes   | yes       | yes               | yes     | -          |
  * | GET /fit-settings                    | yes   | yes       | yes               | yes     | -          |
  * | PUT /fit-settings                    | yes   | -         | -                 | -       | -          |
+ * | GET /labor-operations                | yes   | yes       | yes               | yes     | -          |
+ * | POST/PATCH/DELETE /labor-operations  | yes   | yes       | -                 | -       | -          |
+ * | GET quotes (list, one, PDF, compare) | yes   | yes       | yes               | yes     | own, sent  |
+ * | POST/PATCH quotes, send              | yes   | yes       | -                 | -       | -          |
+ * | answer a quote, pay its deposit      | -     | -         | -                 | -       | own only   |
+ * | GET/PUT /quote-settings              | yes   | read      | -                 | -       | -          |
+ * | GET work orders                      | yes   | yes       | yes               | -       | -          |
+ * | record a work-order check            | yes   | yes       | yes               | -       | -          |
  */
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];
@@ -47,3 +55,13 @@ export const FIT_REPORT_READERS: Role[] = ALL_ROLES;
 export const FIT_WHAT_IF_USERS: Role[] = STAFF;
 export const FIT_SETTINGS_READERS: Role[] = STAFF;
 export const FIT_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
+export const LABOR_OPERATION_READERS: Role[] = STAFF;
+export const LABOR_OPERATION_WRITERS: Role[] = ['owner', 'estimator'];
+/** Customers read the sent revisions of quotes on their own projects (the service scopes them). */
+export const QUOTE_READERS: Role[] = ALL_ROLES;
+export const QUOTE_WRITERS: Role[] = ['owner', 'estimator'];
+export const QUOTE_ANSWERERS: Role[] = ['customer'];
+export const QUOTE_SETTINGS_READERS: Role[] = ['owner', 'estimator'];
+export const QUOTE_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
+export const WORK_ORDER_READERS: Role[] = ['owner', 'estimator', 'fabricator'];
+export const WORK_ORDER_RECORDERS: Role[] = ['owner', 'estimator', 'fabricator'];

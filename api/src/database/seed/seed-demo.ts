@@ -2,6 +2,7 @@ import * as bcrypt from 'bcryptjs';
 import { DataSource } from 'typeorm';
 import {
   DEMO_CUSTOMERS,
+  DEMO_LABOR_OPERATIONS,
   DEMO_PASSWORD,
   DEMO_PROJECTS,
   DEMO_SHOP,
@@ -9,6 +10,7 @@ import {
 } from '@swapwright/seed-data';
 import { BCRYPT_ROUNDS } from '../../auth/auth.constants';
 import { Customer } from '../../customers/customer.entity';
+import { LaborOperation } from '../../labor-operations/labor-operation.entity';
 import { Membership } from '../../memberships/membership.entity';
 import { Project } from '../../projects/project.entity';
 import { Shop } from '../../shops/shop.entity';
@@ -54,6 +56,10 @@ export async function seedDemo(dataSource: DataSource): Promise<SeedResult> {
         placementHeightMm: project.placement?.heightMm ?? null,
         placementTiltDeg: project.placement?.tiltDeg ?? null,
       })),
+    );
+    await manager.insert(
+      LaborOperation,
+      DEMO_LABOR_OPERATIONS.map((operation) => ({ ...operation, shopId: DEMO_SHOP.id })),
     );
     return 'loaded';
   });

@@ -1,0 +1,206 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { DEPOSIT_KINDS, DISCOUNT_KINDS, PART_PRICINGS, type DepositKind, type DiscountKind, type PartPricing } from '@swapwright/shared';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsDateString,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsNumber,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { IsOptionalDefined } from '../../common/decorators/optional-defined.decorator';
+import { Trim } from '../../common/decorators/trim.decorator';
+
+const MAX_CENTS = 100_000_000_00; // 100 million in the shop's currency: beyond any swap job
+
+export class QuoteLineInputDto {
+  @ApiPropertyOptional({ description: 'Keep the key of a line you edit, so revisions can be compared line by line; omit for a new line.' })
+  @IsOptionalDefined()
+  @IsUUID()
+  key?: string;
+
+  @ApiProperty({ enum: ['part', 'labor'] })
+  @IsIn(['part', 'labor'])
+  kind: 'part' | 'labor';
+
+  @ApiProperty({ maxLength: 200 })
+  @Trim()
+  @IsString()
+  @IsNotEmpty({ message: 'each line needs a description' })
+  @MaxLength(200)
+  description: string;
+
+  @ApiPropertyOptional({ type: String, nullable: true })
+  @IsOptional()
+  @IsString()
+  @MaxLength(40)
+  catalogKind?: string | null;
+
+  @ApiPropertyOptional({ type: String, nullable: true })
+  @IsOptional()
+  @IsUUID()
+  catalogItemId?: string | null;
+
+  @ApiPropertyOptional({ type: String, nullable: true })
+  @IsOptional()
+  @IsUUID()
+  laborOperationId?: string | null;
+
+  @ApiPropertyOptional({ description: 'Part lines: whole units', default: 1 })
+  @IsOptionalDefined()
+  @IsInt({ message: 'quantity must be a whole number' })
+  @Min(1)
+  @Max(10000)
+  quantity?: number;
+
+  @ApiPropertyOptional({ enum: PART_PRICINGS, default: 'list' })
+  @IsOptionalDefined()
+  @IsIn(PART_PRICINGS)
+  pricing?: PartPricing;
+
+  @ApiPropertyOptional({ description: 'Part lines priced from the list: the unit price in cents' })
+  @IsOptionalDefined()
+  @IsInt({ message: 'unitPriceCents must be a whole number of cents' })
+  @Min(0)
+  @Max(MAX_CENTS)
+  unitPriceCents?: number;
+
+  @ApiPropertyOptional({ description: 'Part lines priced from cost: the unit cost in cents' })
+  @IsOptionalDefined()
+  @IsInt({ message: 'unitCostCents must be a whole number of cents' })
+  @Min(0)
+  @Max(MAX_CENTS)
+  unitCostCents?: number;
+
+  @ApiPropertyOptional({ description: 'Part lines priced from cost: markup in percent' })
+  @IsOptionalDefined()
+  @IsNumber({ maxDecimalPlaces: 4 })
+  @Min(0)
+  @Max(1000)
+  markupPercent?: number;
+
+  @ApiPropertyOptional({ description: 'Labor lines: hours to a tenth' })
+  @IsOptionalDefined()
+  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'hours are quoted to a tenth of an hour' })
+  @Min(0)
+  @Max(999)
+  hours?: number;
+}
+
+export class QuoteDiscountDto {
+  @ApiProperty({ enum: DISCOUNT_KINDS })
+  @IsIn(DISCOUNT_KINDS)
+  kind: DiscountKind;
+
+  @ApiPropertyOptional({ type: Number, nullable: true })
+  @IsOptional()
+  @IsNumber({ maxDecimalPlaces: 4 })
+  @Min(0)
+  @Max(100)
+  percent?: number | null;
+
+  @ApiPropertyOptional({ type: Number, nullable: true })
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  @Max(MAX_CENTS)
+  amountCents?: number | null;
+}
+
+export class QuoteDepositDto {
+  @ApiProperty({ enum: DEPOSIT_KINDS })
+  @IsIn(DEPOSIT_KINDS)
+  kind: DepositKind;
+
+  @ApiPropertyOptional({ type: Number, nullable: true })
+  @IsOptional()
+  @IsNumber({ maxDecimalPlaces: 4 })
+  @Min(0)
+  @Max(100)
+  percent?: number | null;
+
+  @ApiPropertyOptional({ type: Number, nullable: true })
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  @Max(MAX_CENTS)
+  amountCents?: number | null;
+}
+
+/** What the estimator edits on the working revision; everything optional (only what is given changes). */
+export class UpdateQuoteDto {
+  @ApiPropertyOptional({ type: [QuoteLineInputDto], description: 'The whole list of lines, in order' })
+  @IsOptionalDefined()
+  @IsArray()
+  @ArrayMaxSize(200)
+  @ValidateNested({ each: true })
+  @Type(() => QuoteLineInputDto)
+  lines?: QuoteLineInputDto[];
+
+  @ApiPropertyOptional({ type: QuoteDiscountDto })
+  @IsOptionalDefined()
+  @ValidateNested()
+  @Type(() => QuoteDiscountDto)
+  discount?: QuoteDiscountDto;
+
+  @ApiPropertyOptional({ type: QuoteDepositDto })
+  @IsOptionalDefined()
+  @ValidateNested()
+  @Type(() => QuoteDepositDto)
+  deposit?: QuoteDepositDto;
+
+  @ApiPropertyOptional({ example: '2027-01-15', description: 'Last day the customer may accept' })
+  @IsOptionalDefined()
+  @IsDateString({ strict: true }, { message: 'validUntil must be a date like 2027-01-15' })
+  validUntil?: string;
+
+  @ApiPropertyOptional({ maxLength: 4000 })
+  @IsOptionalDefined()
+  @IsString()
+  @MaxLength(4000)
+  terms?: string;
+
+  @ApiPropertyOptional({ maxLength: 2000 })
+  @IsOptionalDefined()
+  @IsString()
+  @MaxLength(2000)
+  notes?: string;
+}
+
+export class CreateQuoteDto extends UpdateQuoteDto {
+  @ApiPropertyOptional({ description: 'The stored fit report to build on; the newest one of the project when omitted' })
+  @IsOptionalDefined()
+  @IsUUID()
+  fitReportId?: string;
+}
+
+export class AnswerQuoteDto {
+  @ApiProperty({ enum: ['accept', 'decline'] })
+  @IsIn(['accept', 'decline'], { message: 'answer must be accept or decline' })
+  answer: 'accept' | 'decline';
+
+  @ApiPropertyOptional({ maxLength: 1000, description: 'Why the quote is declined (asked for when declining)' })
+  @IsOptionalDefined()
+  @Trim()
+  @IsString()
+  @MaxLength(1000)
+  reason?: string;
+}
+
+export class UpdateQuoteSettingsDto {
+  @ApiPropertyOptional() @IsOptionalDefined() @IsNumber({ maxDecimalPlaces: 4 }) @Min(0) @Max(100) laborTaxPercent?: number;
+  @ApiPropertyOptional({ type: Number, nullable: true }) @IsOptional() @IsInt() @Min(0) @Max(MAX_CENTS) suppliesCapCents?: number | null;
+  @ApiPropertyOptional() @IsOptionalDefined() @IsNumber({ maxDecimalPlaces: 4 }) @Min(0) @Max(100) depositPercent?: number;
+  @ApiPropertyOptional() @IsOptionalDefined() @IsInt() @Min(1) @Max(365) validityDays?: number;
+  @ApiPropertyOptional() @IsOptionalDefined() @IsNumber({ maxDecimalPlaces: 4 }) @Min(0) @Max(1000) defaultMarkupPercent?: number;
+  @ApiPropertyOptional() @IsOptionalDefined() @IsString() @MaxLength(4000) terms?: string;
+}

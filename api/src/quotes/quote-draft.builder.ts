@@ -1,0 +1,93 @@
+import type { FitReport, PartCategory } from '@swapwright/shared';
+import { randomUUID } from 'node:crypto';
+import type { LaborOperation } from '../labor-operations/labor-operation.entity';
+import type { QuoteLineInputDto } from './dto/quote-input.dto';
+import type { LineSource } from './quote-revision.entity';
+
+/** The catalog kind a part remedy's category is stocked under (categories without a catalog kind stay as text). */
+export const CATALOG_KIND_OF_CATEGORY: Partial<Record<PartCategory, string>> = {
+  'oil-pan': 'oil-pans',
+  'oil-pickup': 'oil-pickups',
+  'oil-pump': 'oil-pumps',
+  'mount-adapter': 'mount-adapters',
+  'bellhousing-adapter': 'bellhousing-adapters',
+  'engine-controller': 'controllers',
+  belt: 'belts',
+};
+
+export interface CatalogRowForQuote {
+  id: string;
+  name: string;
+  /** Unit price in cents, when the catalog row carries one. */
+  priceCents: number | null;
+}
+
+export type DraftLine = QuoteLineInputDto & { key: string; source: LineSource };
+
+export interface DraftInputs {
+  report: FitReport | null;
+  operations: LaborOperation[];
+  /** Looks a catalog row up by kind and id (null when it is gone). */
+  catalogRow: (kind: string, id: string) => CatalogRowForQuote | null;
+  /** Operations every swap needs (by code), quoted even when no shortfall asks for them. */
+  baseOperationCodes: readonly string[];
+  defaultMarkupPercent: number;
+}
+
+/** A price as the catalog may hold it: integer cents (`priceCents`) or a decimal amount (`price`). */
+export function catalogPriceCents(spec: Record<string, unknown>): number | null {
+  if (typeof spec.priceCents === 'number' && Number.isSafeInteger(spec.priceCents)) return spec.priceCents;
+  if (typeof spec.price === 'number' && Number.isFinite(spec.price)) return Math.round(spec.price * 100);
+  return null;
+}
+
+/**
+ * The first draft of a quote, drawn from the fit report: the base operations, a parts line for the first
+ * catalog part of each part remedy (with the shop operation that installs it), and a labor line for each
+ * fabrication remedy (the shop's own operation when one matches, else the remedy's hours). The estimator edits from there.
+ */
+export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
+  const lines: DraftLine[] = [];
+  const usedOperations = new Set<string>();
+  const match = (text: string) =>
+    inputs.operations.find((operation) => operation.matches.some((word) => word && text.toLowerCase().includes(word.toLowerCase()))) ?? null;
+  const addOperation = (operation: LaborOperation, source: LineSource) => {
+    if (usedOperations.has(operation.id)) return;
+    usedOperations.add(operation.id);
+    lines.push({ key: randomUUID(), kind: 'labor', source, description: operation.name, laborOperationId: operation.id, hours: operation.bookHours });
+  };
+  for (const code of inputs.baseOperationCodes) {
+    const operation = inputs.operations.find((candidate) => candidate.code === code);
+    if (operation) addOperation(operation, 'manual');
+  }
+  const usedParts = new Set<string>();
+  for (const finding of inputs.report?.shortfalls ?? []) {
+    for (const remedy of finding.remedies) {
+      if (remedy.kind === 'part') {
+        const kind = CATALOG_KIND_OF_CATEGORY[remedy.category] ?? null;
+        const row = kind && remedy.partIds[0] ? inputs.catalogRow(kind, remedy.partIds[0]) : null;
+        const key = row ? `${kind}:${row.id}` : `${remedy.category}:${remedy.note}`;
+        if (usedParts.has(key)) continue;
+        usedParts.add(key);
+        lines.push({
+          key: randomUUID(),
+          kind: 'part',
+          source: 'fit-remedy',
+          description: row ? row.name : remedy.note.slice(0, 200),
+          catalogKind: row ? kind : null,
+          catalogItemId: row ? row.id : null,
+          quantity: 1,
+          pricing: 'list',
+          unitPriceCents: row?.priceCents ?? 0,
+        });
+        const installs = match(remedy.category);
+        if (installs) addOperation(installs, 'fit-remedy');
+      } else if (remedy.kind === 'fabrication') {
+        const operation = match(remedy.operation);
+        if (operation) addOperation(operation, 'fit-remedy');
+        else lines.push({ key: randomUUID(), kind: 'labor', source: 'fit-remedy', description: remedy.operation.slice(0, 200), hours: Math.round(remedy.laborHours * 10) / 10 });
+      }
+    }
+  }
+  return lines;
+}

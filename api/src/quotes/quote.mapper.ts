@@ -1,0 +1,88 @@
+import { QUOTE_ROUNDING_RULE, type RevisionDiff } from '@swapwright/shared';
+import {
+  QuoteNotificationResponseDto,
+  QuoteResponseDto,
+  QuoteRevisionDiffResponseDto,
+  QuoteRevisionResponseDto,
+  QuoteSettingsResponseDto,
+} from './dto/quote-response.dto';
+import { QuoteNotification } from './quote-notification.entity';
+import { QuoteRevision } from './quote-revision.entity';
+import { QuoteSettings } from './quote-settings.entity';
+import { quoteLabel, QuoteView } from './quotes.service';
+
+export function mapQuoteRevision(revision: QuoteRevision): QuoteRevisionResponseDto {
+  return {
+    number: revision.number,
+    sent: revision.sentAt !== null,
+    sentAt: revision.sentAt?.toISOString() ?? null,
+    fitReportId: revision.fitReportId,
+    partsPlanId: revision.partsPlanId,
+    partsPlanVersion: revision.partsPlanVersion,
+    validUntil: revision.validUntil,
+    currency: revision.currency,
+    laborRateCents: revision.laborRateCents,
+    suppliesPercent: revision.suppliesPercent,
+    suppliesCapCents: revision.suppliesCapCents,
+    partsTaxPercent: revision.partsTaxPercent,
+    laborTaxPercent: revision.laborTaxPercent,
+    discountKind: revision.discountKind,
+    discountPercent: revision.discountPercent,
+    discountAmountCents: revision.discountAmountCents,
+    depositKind: revision.depositKind,
+    depositPercent: revision.depositPercent,
+    depositAmountCents: revision.depositAmountCents,
+    terms: revision.terms,
+    notes: revision.notes,
+    lines: revision.lines.map((line) => ({ ...line })),
+    totals: { ...revision.totals },
+    createdAt: revision.createdAt.toISOString(),
+  };
+}
+
+export function mapQuote(view: QuoteView): QuoteResponseDto {
+  const { quote, project } = view;
+  return {
+    id: quote.id,
+    projectId: project.id,
+    projectTitle: project.title,
+    customerName: project.customer?.name ?? null,
+    label: quoteLabel(quote),
+    status: view.status,
+    latestRevision: quote.latestRevision,
+    sentRevision: quote.sentRevision,
+    answeredAt: quote.answeredAt?.toISOString() ?? null,
+    declineReason: quote.declineReason,
+    depositState: quote.depositState,
+    depositPaidAt: quote.depositPaidAt?.toISOString() ?? null,
+    roundingRule: QUOTE_ROUNDING_RULE,
+    revision: mapQuoteRevision(view.revision),
+    revisions: view.revisions.map((revision) => ({ number: revision.number, sentAt: revision.sentAt?.toISOString() ?? null, totalCents: revision.totals.totalCents })),
+  };
+}
+
+export function mapRevisionDiff(diff: RevisionDiff): QuoteRevisionDiffResponseDto {
+  return {
+    fromNumber: diff.fromNumber,
+    toNumber: diff.toNumber,
+    lines: diff.lines.map((line) => ({
+      change: line.change,
+      key: line.key,
+      kind: line.kind,
+      description: line.description,
+      ...(line.change === 'changed' && { fields: line.fields }),
+      beforeCents: line.change === 'added' ? null : line.before.lineTotalCents,
+      afterCents: line.change === 'removed' ? null : line.after.lineTotalCents,
+    })),
+    totals: diff.totals,
+  };
+}
+
+export function mapQuoteNotification(notification: QuoteNotification): QuoteNotificationResponseDto {
+  return { id: notification.id, quoteId: notification.quoteId, projectId: notification.projectId, message: notification.message, createdAt: notification.createdAt.toISOString() };
+}
+
+export function mapQuoteSettings(settings: QuoteSettings): QuoteSettingsResponseDto {
+  const { laborTaxPercent, suppliesCapCents, depositPercent, validityDays, defaultMarkupPercent, terms } = settings;
+  return { laborTaxPercent, suppliesCapCents, depositPercent, validityDays, defaultMarkupPercent, terms };
+}

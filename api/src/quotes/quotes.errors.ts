@@ -1,0 +1,25 @@
+import { AppError } from '../common/errors/app-error';
+
+export const QuoteErrors = {
+  notFound: () => new AppError(404, 'quote_not_found', 'That quote does not exist in your shop.'),
+  revisionNotFound: (number: number) => new AppError(404, 'quote_revision_not_found', `This quote has no revision ${number}.`),
+  notEditable: (status: string) =>
+    new AppError(409, 'quote_not_editable', `This quote is ${status}; an approved quote is not changed. Start a new quote for further work.`),
+  invalidMoney: (message: string) => new AppError(400, 'validation_failed', message, [message]),
+  emptyQuote: () => new AppError(422, 'quote_empty', 'Add at least one parts or labor line before sending the quote.'),
+  noCustomerEmail: () =>
+    new AppError(422, 'quote_customer_without_email', "The project's customer has no e-mail address; add one to the customer before sending."),
+  pastValidity: (validUntil: string) =>
+    new AppError(422, 'quote_validity_past', `The quote is valid until ${validUntil}, which has passed; set a later date before sending.`),
+  nothingToSend: () => new AppError(409, 'quote_already_sent', 'This revision was already sent; change the quote to make a new revision, then send that.'),
+  notAwaitingAnswer: (status: string) => new AppError(409, 'quote_not_awaiting_answer', `This quote is ${status} and cannot be answered now.`),
+  lapsed: (validUntil: string) =>
+    new AppError(409, 'quote_lapsed', `This quote was valid until ${validUntil}. Ask the shop for a fresh quote.`),
+  reasonRequired: () => new AppError(400, 'validation_failed', 'Say why the quote is declined (reason).', ['reason must not be empty when declining']),
+  fitReportNotOfProject: () => new AppError(400, 'validation_failed', 'fitReportId must be a fit report of this project.', ['fitReportId must be a fit report of this project']),
+  badLine: (detail: string) => new AppError(400, 'validation_failed', detail, [detail]),
+  linkInvalid: () => new AppError(401, 'quote_link_invalid', 'This quote link is not valid. Open the link from the e-mail exactly as sent, or ask the shop to send it again.'),
+  linkExpired: () => new AppError(410, 'quote_link_expired', 'This quote link has expired. Ask the shop to send the quote again.'),
+  linkSuperseded: () => new AppError(409, 'quote_link_superseded', 'The shop has sent a newer revision of this quote; open the link in the newest e-mail.'),
+  compareSame: () => new AppError(400, 'validation_failed', 'Give two different revision numbers to compare.', ['from and to must differ']),
+};

@@ -1,0 +1,491 @@
+import { Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { diffRevisions, type FitReport, type RevisionDiff } from '@swapwright/shared';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
+import { CatalogService } from '../catalog/catalog.service';
+import { CatalogKind } from '../catalog/catalog-kinds';
+import { AuthUser } from '../common/tenant/auth-user';
+import { TenantRepository } from '../common/tenant/tenant-repository';
+import { EnvironmentVariables } from '../config/env.validation';
+import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
+import { FitReportsService } from '../fit-reports/fit-reports.service';
+import { LaborOperationsService } from '../labor-operations/labor-operations.service';
+import { MailService } from '../mail/mail.service';
+import { Project } from '../projects/project.entity';
+import { ProjectsService } from '../projects/projects.service';
+import { Shop } from '../shops/shop.entity';
+import { ShopsService } from '../shops/shops.service';
+import { AnswerQuoteDto, CreateQuoteDto, QuoteLineInputDto, UpdateQuoteDto } from './dto/quote-input.dto';
+import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromReport } from './quote-draft.builder';
+import { QuoteLinksService } from './quote-links.service';
+import { priceRevision, UnpricedLine } from './quote-money.adapter';
+import { QuoteNotification } from './quote-notification.entity';
+import { QuotePdfService } from './quote-pdf.service';
+import { QuoteLine, QuoteRevision } from './quote-revision.entity';
+import { QuoteSettingsService } from './quote-settings.service';
+import { Quote, QuoteStatus } from './quote.entity';
+import { QuoteErrors } from './quotes.errors';
+
+/** Operations every swap quote starts with (codes of the shop's labor operations). */
+export const BASE_OPERATION_CODES = ['engine-remove-install'] as const;
+
+/** Everything one view of a quote needs. */
+export interface QuoteView {
+  quote: Quote;
+  status: QuoteStatus;
+  project: Project;
+  revision: QuoteRevision;
+  revisions: QuoteRevision[];
+}
+
+/** Who is acting: a signed-in member, or the holder of a quote link (a customer without a sign-in). */
+export type QuoteActor = { kind: 'member'; user: AuthUser } | { kind: 'link'; shopId: string };
+
+/** Reads made on behalf of a link holder use the shop's scope (the link itself is the permission). */
+function shopReader(shopId: string): AuthUser {
+  return { userId: '', email: '', name: 'Quote link', membershipId: '', shopId, role: 'estimator', customerId: null };
+}
+
+export function todayIso(now = new Date()): string {
+  return now.toISOString().slice(0, 10);
+}
+
+function addDays(iso: string, days: number): string {
+  const date = new Date(`${iso}T00:00:00Z`);
+  date.setUTCDate(date.getUTCDate() + days);
+  return todayIso(date);
+}
+
+/** A quote awaiting an answer past its validity date reads as lapsed. */
+export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = todayIso()): QuoteStatus {
+  if (quote.status === 'awaiting-answer' && sent && sent.validUntil < today) return 'lapsed';
+  return quote.status;
+}
+
+export const QUOTE_STATUS_WORDS: Record<QuoteStatus, string> = {
+  drafting: 'being written',
+  'awaiting-answer': 'awaiting the customer',
+  approved: 'approved',
+  'turned-down': 'turned down',
+  lapsed: 'lapsed',
+};
+
+@Injectable()
+export class QuotesService {
+  private readonly logger = new Logger(QuotesService.name);
+  private readonly quotes: TenantRepository<Quote>;
+  private readonly revisions: TenantRepository<QuoteRevision>;
+
+  constructor(
+    @InjectRepository(Quote) quotes: Repository<Quote>,
+    @InjectRepository(QuoteRevision) revisions: Repository<QuoteRevision>,
+    @InjectRepository(QuoteNotification) private readonly notifications: Repository<QuoteNotification>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly projects: ProjectsService,
+    private readonly fitReports: FitReportsService,
+    private readonly operations: LaborOperationsService,
+    private readonly catalog: CatalogService,
+    private readonly shops: ShopsService,
+    private readonly settings: QuoteSettingsService,
+    private readonly links: QuoteLinksService,
+    private readonly pdf: QuotePdfService,
+    private readonly mail: MailService,
+    private readonly config: ConfigService<EnvironmentVariables, true>,
+  ) {
+    this.quotes = new TenantRepository(quotes);
+    this.revisions = new TenantRepository(revisions);
+  }
+
+  // ------------------------------------------------------------------ reading
+
+  async listForProject(user: AuthUser, projectId: string): Promise<QuoteView[]> {
+    const project = await this.projects.get(user, projectId);
+    const quotes = await this.quotes.repository.find({ where: this.quotes.where(user, { projectId: project.id }), order: { number: 'DESC' } });
+    const views: QuoteView[] = [];
+    for (const quote of quotes) {
+      if (user.role === 'customer' && quote.sentRevision === null) continue;
+      views.push(await this.viewOf(user, quote, project));
+    }
+    return views;
+  }
+
+  async get(user: AuthUser, id: string): Promise<QuoteView> {
+    const quote = await this.findQuote(user.shopId, id);
+    const project = await this.projects.get(user, quote.projectId).catch(() => {
+      throw QuoteErrors.notFound();
+    });
+    if (user.role === 'customer' && quote.sentRevision === null) throw QuoteErrors.notFound();
+    return this.viewOf(user, quote, project);
+  }
+
+  /** The quote a link points at, as its holder sees it (the revision sent with the link). */
+  async getByLink(token: string): Promise<QuoteView> {
+    const claims = this.links.verify(token);
+    const quote = await this.findQuote(claims.s, claims.q).catch(() => {
+      throw QuoteErrors.linkInvalid();
+    });
+    if (quote.sentRevision !== claims.r) throw QuoteErrors.linkSuperseded();
+    const reader = shopReader(claims.s);
+    const project = await this.projects.get(reader, quote.projectId);
+    return this.viewOf(reader, quote, project, true);
+  }
+
+  async revision(user: AuthUser, id: string, number?: number): Promise<QuoteView> {
+    const view = await this.get(user, id);
+    if (number === undefined) return view;
+    const revision = view.revisions.find((candidate) => candidate.number === number);
+    if (!revision) throw QuoteErrors.revisionNotFound(number);
+    return { ...view, revision };
+  }
+
+  async compare(user: AuthUser, id: string, from: number, to: number): Promise<RevisionDiff> {
+    if (from === to) throw QuoteErrors.compareSame();
+    const view = await this.get(user, id);
+    const find = (number: number) => {
+      const revision = view.revisions.find((candidate) => candidate.number === number);
+      if (!revision) throw QuoteErrors.revisionNotFound(number);
+      return { number, totals: revision.totals, lines: revision.lines.map((line) => ({ ...line, quantity: line.kind === 'labor' ? (line.hours ?? 0) : line.quantity })) };
+    };
+    return diffRevisions(find(from), find(to));
+  }
+
+  async pdfOf(user: AuthUser, id: string, number?: number): Promise<{ fileName: string; content: Buffer }> {
+    return this.renderPdf(await this.revision(user, id, number));
+  }
+
+  async pdfByLink(token: string): Promise<{ fileName: string; content: Buffer }> {
+    return this.renderPdf(await this.getByLink(token));
+  }
+
+  // ------------------------------------------------------------------ writing
+
+  async create(user: AuthUser, projectId: string, input: CreateQuoteDto): Promise<QuoteView> {
+    const project = await this.projects.get(user, projectId);
+    const report = await this.reportFor(user, project, input.fitReportId);
+    const [shop, settings] = await Promise.all([this.shops.getCurrent(user), this.settings.forShop(user)]);
+    const lines = input.lines ? await this.linesFromInput(user, input.lines, []) : await this.draftLines(user, report?.results ?? null, settings.defaultMarkupPercent);
+    const quoteId = randomUUID();
+    const revision: Omit<QuoteRevision, 'lines' | 'totals' | 'createdAt'> & { lines: UnpricedLine[] } = {
+      id: randomUUID(),
+      shopId: user.shopId,
+      quoteId,
+      number: 1,
+      fitReportId: report?.id ?? null,
+      partsPlanId: null,
+      partsPlanVersion: null,
+      validUntil: input.validUntil ?? addDays(todayIso(), settings.validityDays),
+      currency: shop.currency,
+      laborRateCents: Math.round(shop.laborRatePerHour * 100),
+      suppliesPercent: shop.shopSuppliesPercent,
+      suppliesCapCents: settings.suppliesCapCents,
+      partsTaxPercent: shop.taxRatePercent,
+      laborTaxPercent: settings.laborTaxPercent,
+      discountKind: input.discount?.kind ?? 'none',
+      discountPercent: input.discount?.percent ?? null,
+      discountAmountCents: input.discount?.amountCents ?? null,
+      depositKind: input.deposit?.kind ?? 'percent',
+      depositPercent: input.deposit ? (input.deposit.percent ?? null) : settings.depositPercent,
+      depositAmountCents: input.deposit?.amountCents ?? null,
+      terms: input.terms ?? settings.terms,
+      notes: input.notes ?? '',
+      createdById: user.userId,
+      sentAt: null,
+      lines,
+    };
+    const priced = priceRevision(revision);
+    await this.dataSource.transaction(async (manager) => {
+      const [{ next }] = await manager.query('SELECT COALESCE(MAX(number), 0) + 1 AS next FROM quotes WHERE shopId = ? FOR UPDATE', [user.shopId]);
+      await manager.insert(Quote, {
+        id: quoteId,
+        shopId: user.shopId,
+        projectId: project.id,
+        number: Number(next),
+        status: 'drafting',
+        latestRevision: 1,
+        sentRevision: null,
+        sentById: null,
+        answeredAt: null,
+        declineReason: null,
+        depositState: 'not-due',
+        depositPaidAt: null,
+      });
+      await manager.insert(QuoteRevision, { ...revision, ...priced });
+    });
+    return this.get(user, quoteId);
+  }
+
+  /** Changes the working revision; when the newest revision was already sent, the change starts the next one. */
+  async update(user: AuthUser, id: string, input: UpdateQuoteDto): Promise<QuoteView> {
+    const view = await this.get(user, id);
+    if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
+    const latest = view.revisions[view.revisions.length - 1];
+    const lines = input.lines ? await this.linesFromInput(user, input.lines, latest.lines) : latest.lines;
+    const next = {
+      ...latest,
+      lines,
+      ...(input.discount && {
+        discountKind: input.discount.kind,
+        discountPercent: input.discount.percent ?? null,
+        discountAmountCents: input.discount.amountCents ?? null,
+      }),
+      ...(input.deposit && { depositKind: input.deposit.kind, depositPercent: input.deposit.percent ?? null, depositAmountCents: input.deposit.amountCents ?? null }),
+      ...(input.validUntil !== undefined && { validUntil: input.validUntil }),
+      ...(input.terms !== undefined && { terms: input.terms }),
+      ...(input.notes !== undefined && { notes: input.notes }),
+    };
+    const priced = priceRevision(next);
+    await this.dataSource.transaction(async (manager) => {
+      if (latest.sentAt === null) {
+        await manager.update(QuoteRevision, { id: latest.id, shopId: user.shopId, sentAt: IsNull() }, { ...this.editable({ ...next, ...priced }) });
+        return;
+      }
+      const number = latest.number + 1;
+      await manager.insert(QuoteRevision, {
+        ...next,
+        ...priced,
+        id: randomUUID(),
+        number,
+        createdById: user.userId,
+        sentAt: null,
+        createdAt: undefined,
+      });
+      await manager.update(Quote, { id: view.quote.id, shopId: user.shopId }, { latestRevision: number });
+    });
+    return this.get(user, id);
+  }
+
+  /** Freezes the working revision, e-mails it to the customer with the PDF and a signed link; again for the same revision re-sends the mail. */
+  async send(user: AuthUser, id: string): Promise<QuoteView> {
+    const view = await this.get(user, id);
+    if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
+    const latest = view.revisions[view.revisions.length - 1];
+    if (latest.lines.length === 0) throw QuoteErrors.emptyQuote();
+    if (latest.validUntil < todayIso()) throw QuoteErrors.pastValidity(latest.validUntil);
+    if (!view.project.customer?.email) throw QuoteErrors.noCustomerEmail();
+    if (latest.sentAt !== null && view.quote.status !== 'awaiting-answer') throw QuoteErrors.nothingToSend();
+    if (latest.sentAt === null) {
+      const sentAt = new Date();
+      await this.dataSource.transaction(async (manager) => {
+        const frozen = await manager.update(QuoteRevision, { id: latest.id, shopId: user.shopId, sentAt: IsNull() }, { sentAt });
+        if (!frozen.affected) throw QuoteErrors.nothingToSend();
+        await manager.update(
+          Quote,
+          { id: view.quote.id, shopId: user.shopId },
+          { status: 'awaiting-answer', sentRevision: latest.number, sentById: user.userId, answeredAt: null, declineReason: null, depositState: 'not-due' },
+        );
+        await this.projects.advanceStatus(user.shopId, view.project.id, 'quoting', manager);
+      });
+    }
+    const sent = await this.get(user, id);
+    await this.mailQuote(sent);
+    return sent;
+  }
+
+  /** The customer's answer (signed in, or through the link) to the revision they were sent. */
+  async answer(actor: QuoteActor, idOrToken: string, input: AnswerQuoteDto): Promise<QuoteView> {
+    const view = actor.kind === 'link' ? await this.getByLink(idOrToken) : await this.get(actor.user, idOrToken);
+    const shopId = view.quote.shopId;
+    if (view.status === 'lapsed') throw QuoteErrors.lapsed(view.revision.validUntil);
+    if (view.quote.status !== 'awaiting-answer') throw QuoteErrors.notAwaitingAnswer(QUOTE_STATUS_WORDS[view.status]);
+    const reason = input.reason?.trim() ?? '';
+    if (input.answer === 'decline' && !reason) throw QuoteErrors.reasonRequired();
+    const accepted = input.answer === 'accept';
+    await this.dataSource.transaction(async (manager) => {
+      const changed = await manager.update(
+        Quote,
+        { id: view.quote.id, shopId, status: 'awaiting-answer', sentRevision: view.revision.number },
+        {
+          status: accepted ? 'approved' : 'turned-down',
+          answeredAt: new Date(),
+          declineReason: accepted ? null : reason,
+          depositState: accepted && view.revision.totals.depositCents > 0 ? 'due' : 'not-due',
+        },
+      );
+      if (!changed.affected) throw QuoteErrors.notAwaitingAnswer('already answered');
+      if (accepted) await this.projects.advanceStatus(shopId, view.project.id, 'approved', manager);
+      await this.notify(manager, view, accepted ? `${view.project.customer?.name ?? 'The customer'} approved quote ${quoteLabel(view.quote)} (revision ${view.revision.number}).` : `${view.project.customer?.name ?? 'The customer'} turned down quote ${quoteLabel(view.quote)}: ${reason}`);
+    });
+    const answered = await this.findQuote(shopId, view.quote.id);
+    await this.mailEstimator(view, accepted ? 'approved' : 'turned down', reason);
+    return this.viewOf(shopReader(shopId), answered, view.project, true);
+  }
+
+  // ------------------------------------------------------------------ for the payments and work-order modules
+
+  /** Marks the deposit of an approved quote paid; false when it already was (so an event applies once). */
+  async markDepositPaid(manager: EntityManager, shopId: string, quoteId: string, paidAt: Date): Promise<boolean> {
+    const changed = await manager.update(Quote, { id: quoteId, shopId, status: 'approved', depositState: 'due' }, { depositState: 'paid', depositPaidAt: paidAt });
+    return Boolean(changed.affected);
+  }
+
+  async notifyDepositPaid(manager: EntityManager, view: QuoteView): Promise<void> {
+    await this.notify(manager, view, `${view.project.customer?.name ?? 'The customer'} paid the deposit on quote ${quoteLabel(view.quote)}.`);
+  }
+
+  /** A quote by id within a shop, as the system sees it (no role scoping): for payment events. */
+  async viewInShop(shopId: string, quoteId: string): Promise<QuoteView> {
+    const reader = shopReader(shopId);
+    const quote = await this.findQuote(shopId, quoteId);
+    return this.viewOf(reader, quote, await this.projects.get(reader, quote.projectId), true);
+  }
+
+  async notificationsFor(user: AuthUser): Promise<QuoteNotification[]> {
+    return this.notifications.find({ where: { shopId: user.shopId, userId: user.userId }, order: { createdAt: 'DESC' }, take: 50 });
+  }
+
+  // ------------------------------------------------------------------ helpers
+
+  private async findQuote(shopId: string, id: string): Promise<Quote> {
+    const quote = await this.quotes.findById({ shopId }, id);
+    if (!quote) throw QuoteErrors.notFound();
+    return quote;
+  }
+
+  private async viewOf(user: AuthUser, quote: Quote, project: Project, sentOnly = user.role === 'customer'): Promise<QuoteView> {
+    const all = await this.revisions.repository.find({ where: this.revisions.where(user, { quoteId: quote.id }), order: { number: 'ASC' } });
+    const revisions = sentOnly ? all.filter((revision) => revision.sentAt !== null) : all;
+    const sent = all.find((revision) => revision.number === quote.sentRevision) ?? null;
+    const revision = sentOnly ? (sent ?? revisions[revisions.length - 1]) : all[all.length - 1];
+    return { quote, status: effectiveQuoteStatus(quote, sent), project, revision, revisions };
+  }
+
+  private editable(revision: QuoteRevision): Partial<QuoteRevision> {
+    const { lines, totals, discountKind, discountPercent, discountAmountCents, depositKind, depositPercent, depositAmountCents, validUntil, terms, notes } = revision;
+    return { lines, totals, discountKind, discountPercent, discountAmountCents, depositKind, depositPercent, depositAmountCents, validUntil, terms, notes };
+  }
+
+  private async reportFor(user: AuthUser, project: Project, fitReportId?: string): Promise<FitReportRecord | null> {
+    if (fitReportId) {
+      const report = await this.fitReports.get(user, fitReportId);
+      if (report.projectId !== project.id) throw QuoteErrors.fitReportNotOfProject();
+      return report;
+    }
+    const page = await this.fitReports.list(user, project.id, { page: 1, pageSize: 1 } as never);
+    return page.items[0] ?? null;
+  }
+
+  private async draftLines(user: AuthUser, report: FitReport | null, defaultMarkupPercent: number): Promise<UnpricedLine[]> {
+    const operations = await this.operations.list(user);
+    const rows = new Map<string, { id: string; name: string; priceCents: number | null }>();
+    for (const finding of report?.shortfalls ?? []) {
+      for (const remedy of finding.remedies) {
+        if (remedy.kind !== 'part') continue;
+        for (const id of remedy.partIds.slice(0, 1)) {
+          const kind = CATALOG_KIND_OF_CATEGORY[remedy.category];
+          if (!kind) continue;
+          const row = await this.catalog.findRow(kind as CatalogKind, user, id).catch(() => null);
+          if (row) rows.set(`${kind}:${id}`, { id: row.id, name: row.name, priceCents: catalogPriceCents(row.spec as unknown as Record<string, unknown>) });
+        }
+      }
+    }
+    const drafted = draftLinesFromReport({
+      report,
+      operations,
+      catalogRow: (kind, id) => rows.get(`${kind}:${id}`) ?? null,
+      baseOperationCodes: BASE_OPERATION_CODES,
+      defaultMarkupPercent,
+    });
+    return drafted.map((line) => this.toUnpriced(line, line.source));
+  }
+
+  /** The estimator's lines, checked: labor operations must be the shop's own; a kept key keeps its line's origin. */
+  private async linesFromInput(user: AuthUser, input: QuoteLineInputDto[], previous: QuoteLine[]): Promise<UnpricedLine[]> {
+    const operationIds = [...new Set(input.map((line) => line.laborOperationId).filter((id): id is string => Boolean(id)))];
+    const found = new Set((await this.operations.byIds(user, operationIds)).map((operation) => operation.id));
+    const missing = operationIds.find((operationId) => !found.has(operationId));
+    if (missing) throw QuoteErrors.badLine(`laborOperationId ${missing} is not one of your shop's labor operations`);
+    const keys = new Set<string>();
+    return input.map((line, index) => {
+      if (line.key && keys.has(line.key)) throw QuoteErrors.badLine(`line ${index + 1} repeats the key of another line`);
+      if (line.key) keys.add(line.key);
+      if (line.kind === 'labor' && line.hours === undefined) throw QuoteErrors.badLine(`line ${index + 1} (labor) needs hours`);
+      if (line.kind === 'part' && (line.pricing ?? 'list') === 'list' && line.unitPriceCents === undefined) {
+        throw QuoteErrors.badLine(`line ${index + 1} (part) needs unitPriceCents, or pricing cost-plus with unitCostCents and markupPercent`);
+      }
+      const before = line.key ? previous.find((candidate) => candidate.key === line.key) : undefined;
+      return this.toUnpriced({ ...line, key: line.key ?? randomUUID() }, before?.source ?? 'manual');
+    });
+  }
+
+  private toUnpriced(line: QuoteLineInputDto & { key: string }, source: QuoteLine['source']): UnpricedLine {
+    return {
+      key: line.key,
+      kind: line.kind,
+      source,
+      description: line.description,
+      catalogKind: line.catalogKind ?? null,
+      catalogItemId: line.catalogItemId ?? null,
+      laborOperationId: line.laborOperationId ?? null,
+      quantity: line.kind === 'part' ? (line.quantity ?? 1) : 1,
+      pricing: line.kind === 'part' ? (line.pricing ?? 'list') : 'list',
+      unitCostCents: line.unitCostCents ?? null,
+      markupPercent: line.markupPercent ?? null,
+      hours: line.kind === 'labor' ? (line.hours ?? 0) : null,
+      unitPriceCents: line.unitPriceCents ?? null,
+    };
+  }
+
+  private async renderPdf(view: QuoteView): Promise<{ fileName: string; content: Buffer }> {
+    const reader = shopReader(view.quote.shopId);
+    const shop = await this.shops.getCurrent(reader);
+    const report = view.revision.fitReportId ? await this.fitReports.get(reader, view.revision.fitReportId).catch(() => null) : null;
+    const content = await this.pdf.render({ view, shop, report });
+    return { fileName: `${quoteLabel(view.quote)}-rev${view.revision.number}.pdf`, content };
+  }
+
+  private approvalLink(view: QuoteView): string {
+    const expiresAt = new Date(`${view.revision.validUntil}T23:59:59Z`);
+    const token = this.links.sign({ q: view.quote.id, s: view.quote.shopId, r: view.revision.number }, expiresAt);
+    return `${this.config.get('APP_URL', { infer: true })}/quote-answer/${token}`;
+  }
+
+  private async mailQuote(view: QuoteView): Promise<void> {
+    const { fileName, content } = await this.renderPdf(view);
+    const shop: Shop = await this.shops.getCurrent(shopReader(view.quote.shopId));
+    const link = this.approvalLink(view);
+    const customer = view.project.customer!;
+    await this.mail.send({
+      to: customer.email!,
+      subject: `${shop.name}: quote ${quoteLabel(view.quote)} for ${view.project.title}`,
+      text:
+        `Hello ${customer.name},\n\n` +
+        `${shop.name} has prepared quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}". ` +
+        `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${view.revision.validUntil}):\n${link}\n\n` +
+        `This quote is a planning aid built on the figures measured so far; the shop confirms every measurement before cutting or ordering.\n`,
+      attachments: [{ filename: fileName, content, contentType: 'application/pdf' }],
+    });
+  }
+
+  private async mailEstimator(view: QuoteView, answer: string, reason: string): Promise<void> {
+    if (!view.quote.sentById) return;
+    const [row] = await this.dataSource.query('SELECT email FROM users WHERE id = ?', [view.quote.sentById]);
+    if (!row?.email) return;
+    await this.mail.sendOrLog({
+      to: row.email,
+      subject: `Quote ${quoteLabel(view.quote)} ${answer} by ${view.project.customer?.name ?? 'the customer'}`,
+      text:
+        `${view.project.customer?.name ?? 'The customer'} ${answer} quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}".` +
+        (reason ? `\nReason given: ${reason}` : '') +
+        `\n\nOpen the project: ${this.config.get('APP_URL', { infer: true })}/projects/${view.project.id}\n`,
+    });
+  }
+
+  private async notify(manager: EntityManager, view: QuoteView, message: string): Promise<void> {
+    if (!view.quote.sentById) return;
+    await manager.insert(QuoteNotification, {
+      id: randomUUID(),
+      shopId: view.quote.shopId,
+      userId: view.quote.sentById,
+      quoteId: view.quote.id,
+      projectId: view.project.id,
+      message: message.slice(0, 500),
+      readAt: null,
+    });
+  }
+}
+
+export function quoteLabel(quote: Pick<Quote, 'number'>): string {
+  return `Q-${String(quote.number).padStart(4, '0')}`;
+}
