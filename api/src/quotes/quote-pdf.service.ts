@@ -32,6 +32,12 @@ const INK = '#1f2933';
 const MUTED = '#52606d';
 const RULE = '#cbd2d9';
 
+/** The first sentence of a remedy or finding text (the rest is in the fit report). */
+function firstSentence(text: string): string {
+  const end = text.search(/\.\s/);
+  return end > 0 && end < 240 ? text.slice(0, end + 1) : text.length > 240 ? `${text.slice(0, 237)}…` : text;
+}
+
 function money(cents: number, currency: string): string {
   return `${currency} ${formatCents(cents)}`;
 }
@@ -132,24 +138,33 @@ export class QuotePdfService {
       { width },
     );
     doc.moveDown(0.3);
+    if (doc.y > doc.page.height - 200) doc.addPage();
+    // The side view first, at the right, so it stays on the page the summary starts on.
     const viewTop = doc.y;
+    const viewPage = doc.page;
     const textWidth = width - 200;
+    this.sideView(doc, record, 50 + textWidth + 10, viewTop, 190, 120);
+    doc.y = viewTop;
+    doc.x = 50;
     if (results.shortfalls.length === 0) doc.fillColor(INK).fontSize(10).text('No shortfalls: every check that could run fits.', 50, doc.y, { width: textWidth });
-    for (const finding of results.shortfalls.slice(0, 8)) {
+    const quotedFromReport = lines.some((line) => line.source === 'fit-remedy');
+    const shown = results.shortfalls.slice(0, 6);
+    for (const finding of shown) {
       doc.font('bold').fontSize(9.5).fillColor(INK).text(`${finding.title} — ${STATUS_WORDS[finding.status] ?? finding.status}`, 50, doc.y, { width: textWidth });
-      doc.font('body').fontSize(9).fillColor(MUTED).text(finding.message, { width: textWidth });
+      doc.font('body').fontSize(9).fillColor(MUTED).text(firstSentence(finding.message), { width: textWidth });
       const resolved = finding.remedies
-        .map((remedy) => (remedy.kind === 'fabrication' ? remedy.operation : remedy.kind === 'part' ? remedy.note : null))
+        .map((remedy) => (remedy.kind === 'fabrication' ? remedy.operation : remedy.kind === 'part' ? firstSentence(remedy.note) : null))
         .filter((text): text is string => Boolean(text));
-      const quoted = lines.filter((line) => line.source !== 'manual').map((line) => line.description);
       if (resolved.length > 0) {
-        doc.fillColor(INK).text(`Resolved by: ${resolved.slice(0, 2).join('; ')}${quoted.length ? ' (quoted below)' : ''}`, { width: textWidth });
+        doc.fillColor(INK).text(`Resolved by: ${resolved.slice(0, 2).join('; ')}`, { width: textWidth });
       }
       doc.moveDown(0.2);
     }
-    const afterText = doc.y;
-    this.sideView(doc, record, 50 + textWidth + 10, viewTop, 190, 120);
-    doc.y = Math.max(afterText, viewTop + 128);
+    if (results.shortfalls.length > shown.length) {
+      doc.fillColor(MUTED).text(`…and ${results.shortfalls.length - shown.length} more in the fit report.`, 50, doc.y, { width: textWidth });
+    }
+    if (quotedFromReport) doc.fillColor(MUTED).text('The lines marked from the fit check below carry out these remedies.', 50, doc.y, { width: textWidth });
+    if (doc.page === viewPage) doc.y = Math.max(doc.y, viewTop + 128);
     doc.x = 50;
   }
 
@@ -214,7 +229,7 @@ export class QuotePdfService {
       doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${money(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
       for (const line of lines) {
         row([
-          line.description,
+          line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description,
           kind === 'part' ? String(line.quantity) : `${(line.hours ?? 0).toFixed(1)} h`,
           formatCents(line.unitPriceCents),
           formatCents(line.lineTotalCents),

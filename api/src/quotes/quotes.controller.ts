@@ -22,6 +22,7 @@ import {
 } from './dto/quote-response.dto';
 import { mapQuote, mapQuoteNotification, mapQuoteSettings, mapRevisionDiff } from './quote.mapper';
 import { QuoteSettingsService } from './quote-settings.service';
+import { QUOTE_STATUSES } from './quote.entity';
 import { QuotesService } from './quotes.service';
 
 function pdfFile(response: Response, file: { fileName: string; content: Buffer }): StreamableFile {
@@ -55,6 +56,14 @@ export class ProjectQuotesController {
 @Controller('quotes')
 export class QuotesController {
   constructor(private readonly quotes: QuotesService) {}
+
+  @Get()
+  @Roles(...QUOTE_WRITERS)
+  @ApiOkResponse({ type: [QuoteResponseDto], description: "The shop's newest quotes (up to 100), optionally of one status" })
+  @ApiQuery({ name: 'status', required: false, enum: QUOTE_STATUSES })
+  async list(@CurrentUser() user: AuthUser, @Query('status') status?: string): Promise<QuoteResponseDto[]> {
+    return (await this.quotes.listForShop(user, status)).map(mapQuote);
+  }
 
   @Get('notifications')
   @Roles(...QUOTE_WRITERS)

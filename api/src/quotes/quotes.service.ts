@@ -25,7 +25,7 @@ import { QuoteNotification } from './quote-notification.entity';
 import { QuotePdfService } from './quote-pdf.service';
 import { QuoteLine, QuoteRevision } from './quote-revision.entity';
 import { QuoteSettingsService } from './quote-settings.service';
-import { Quote, QuoteStatus } from './quote.entity';
+import { Quote, QUOTE_STATUSES, QuoteStatus } from './quote.entity';
 import { QuoteErrors } from './quotes.errors';
 
 /** Operations every swap quote starts with (codes of the shop's labor operations). */
@@ -109,6 +109,17 @@ export class QuotesService {
       views.push(await this.viewOf(user, quote, project));
     }
     return views;
+  }
+
+  /** The shop's newest quotes; a status filter matches the status as read (a lapsed quote is stored as awaiting an answer). */
+  async listForShop(user: AuthUser, status?: string): Promise<QuoteView[]> {
+    if (status !== undefined && !(QUOTE_STATUSES as readonly string[]).includes(status)) {
+      throw QuoteErrors.badLine(`status must be one of: ${QUOTE_STATUSES.join(', ')}`);
+    }
+    const quotes = await this.quotes.repository.find({ where: this.quotes.where(user), order: { number: 'DESC' }, take: 100 });
+    const views: QuoteView[] = [];
+    for (const quote of quotes) views.push(await this.viewOf(user, quote, await this.projects.get(user, quote.projectId)));
+    return status ? views.filter((view) => view.status === status) : views;
   }
 
   async get(user: AuthUser, id: string): Promise<QuoteView> {
