@@ -1070,6 +1070,230 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/labor-operations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["LaborOperationsController_list"];
+        put?: never;
+        post: operations["LaborOperationsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/labor-operations/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["LaborOperationsController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["LaborOperationsController_update"];
+        trace?: never;
+    };
+    "/api/projects/{projectId}/quotes": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ProjectQuotesController_list"];
+        put?: never;
+        post: operations["ProjectQuotesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuotesController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes/notifications": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuotesController_notifications"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuotesController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch: operations["QuotesController_update"];
+        trace?: never;
+    };
+    "/api/quotes/{id}/send": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["QuotesController_send"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes/{id}/answer": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["QuotesController_answer"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes/{id}/compare": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuotesController_compare"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quotes/{id}/pdf": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuotesController_pdf"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quote-links/{token}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuoteLinksController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quote-links/{token}/answer": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["QuoteLinksController_answer"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quote-links/{token}/pdf": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuoteLinksController_pdf"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quote-settings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QuoteSettingsController_get"];
+        put: operations["QuoteSettingsController_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/health": {
         parameters: {
             query?: never;
@@ -2573,6 +2797,282 @@ export interface components {
         ReceiveDto: {
             location: string;
             bin?: string;
+        };
+        TorqueSpecResponseDto: {
+            fastener: string;
+            lbfFt: number;
+            /** @description N·m, from lbf·ft by the exact factor 1.3558179483314004 (NIST SP 811) */
+            newtonMetres: number;
+            sequence: string | null;
+        };
+        CheckTemplateResponseDto: {
+            key: string;
+            label: string;
+            unit: string | null;
+            min: number | null;
+            max: number | null;
+        };
+        LaborOperationResponseDto: {
+            id: string;
+            code: string;
+            name: string;
+            bookHours: number;
+            buildOrder: number;
+            matches: string[];
+            hazards: ("lifting" | "support" | "fuel" | "welding" | "steering" | "brakes")[];
+            torqueSpecs: components["schemas"]["TorqueSpecResponseDto"][];
+            checks: components["schemas"]["CheckTemplateResponseDto"][];
+            updatedAt: string;
+        };
+        CheckTemplateDto: {
+            /** @example cam-turns */
+            key: string;
+            /** @example Camshaft turns by hand after the bearings go in */
+            label: string;
+            /** @example mm */
+            unit?: string | null;
+            min?: number | null;
+            max?: number | null;
+        };
+        CreateLaborOperationDto: {
+            /** @example crossmember-notch */
+            code: string;
+            /** @example Modify front crossmember for pan clearance */
+            name: string;
+            /**
+             * @description Book hours, to a tenth
+             * @example 3.5
+             */
+            bookHours: number;
+            /** @example 100 */
+            buildOrder?: number;
+            matches?: string[];
+            hazards?: ("lifting" | "support" | "fuel" | "welding" | "steering" | "brakes")[];
+            torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
+            checks?: components["schemas"]["CheckTemplateDto"][];
+        };
+        UpdateLaborOperationDto: {
+            /** @example crossmember-notch */
+            code?: string;
+            /** @example Modify front crossmember for pan clearance */
+            name?: string;
+            /**
+             * @description Book hours, to a tenth
+             * @example 3.5
+             */
+            bookHours?: number;
+            /** @example 100 */
+            buildOrder?: number;
+            matches?: string[];
+            hazards?: ("lifting" | "support" | "fuel" | "welding" | "steering" | "brakes")[];
+            torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
+            checks?: components["schemas"]["CheckTemplateDto"][];
+        };
+        QuoteLineResponseDto: {
+            key: string;
+            /** @enum {string} */
+            kind: "part" | "labor";
+            /** @enum {string} */
+            source: "plan" | "fit-remedy" | "manual";
+            description: string;
+            catalogKind: string | null;
+            catalogItemId: string | null;
+            laborOperationId: string | null;
+            quantity: number;
+            /** @enum {string} */
+            pricing: "list" | "cost-plus";
+            unitCostCents: number | null;
+            markupPercent: number | null;
+            hours: number | null;
+            unitPriceCents: number;
+            lineTotalCents: number;
+        };
+        QuoteTotalsResponseDto: {
+            partsSubtotalCents: number;
+            laborSubtotalCents: number;
+            suppliesCents: number;
+            partsDiscountCents: number;
+            laborDiscountCents: number;
+            partsTaxCents: number;
+            laborTaxCents: number;
+            taxCents: number;
+            totalCents: number;
+            depositCents: number;
+        };
+        QuoteRevisionResponseDto: {
+            number: number;
+            /** @description A sent revision is frozen */
+            sent: boolean;
+            sentAt: string | null;
+            fitReportId: string | null;
+            partsPlanId: string | null;
+            partsPlanVersion: number | null;
+            validUntil: string;
+            currency: string;
+            laborRateCents: number;
+            suppliesPercent: number;
+            suppliesCapCents: number | null;
+            partsTaxPercent: number;
+            laborTaxPercent: number;
+            /** @enum {string} */
+            discountKind: "none" | "percent" | "fixed";
+            discountPercent: number | null;
+            discountAmountCents: number | null;
+            /** @enum {string} */
+            depositKind: "percent" | "fixed";
+            depositPercent: number | null;
+            depositAmountCents: number | null;
+            terms: string;
+            notes: string;
+            lines: components["schemas"]["QuoteLineResponseDto"][];
+            totals: components["schemas"]["QuoteTotalsResponseDto"];
+            createdAt: string;
+        };
+        QuoteRevisionSummaryDto: {
+            number: number;
+            sentAt: string | null;
+            totalCents: number;
+        };
+        QuoteResponseDto: {
+            id: string;
+            projectId: string;
+            projectTitle: string;
+            customerName: string | null;
+            /** @example Q-0007 */
+            label: string;
+            /** @enum {string} */
+            status: "drafting" | "awaiting-answer" | "approved" | "turned-down" | "lapsed";
+            latestRevision: number;
+            sentRevision: number | null;
+            answeredAt: string | null;
+            declineReason: string | null;
+            /** @enum {string} */
+            depositState: "not-due" | "due" | "paid";
+            depositPaidAt: string | null;
+            roundingRule: string;
+            /** @description The revision shown: the working one for the shop, the sent one for the customer */
+            revision: components["schemas"]["QuoteRevisionResponseDto"];
+            revisions: components["schemas"]["QuoteRevisionSummaryDto"][];
+        };
+        QuoteLineInputDto: {
+            /** @description Keep the key of a line you edit, so revisions can be compared line by line; omit for a new line. */
+            key?: string;
+            /** @enum {string} */
+            kind: "part" | "labor";
+            description: string;
+            catalogKind?: string | null;
+            catalogItemId?: string | null;
+            laborOperationId?: string | null;
+            /**
+             * @description Part lines: whole units
+             * @default 1
+             */
+            quantity: number;
+            /**
+             * @default list
+             * @enum {string}
+             */
+            pricing: "list" | "cost-plus";
+            /** @description Part lines priced from the list: the unit price in cents */
+            unitPriceCents?: number;
+            /** @description Part lines priced from cost: the unit cost in cents */
+            unitCostCents?: number;
+            /** @description Part lines priced from cost: markup in percent */
+            markupPercent?: number;
+            /** @description Labor lines: hours to a tenth */
+            hours?: number;
+        };
+        QuoteDiscountDto: {
+            /** @enum {string} */
+            kind: "none" | "percent" | "fixed";
+            percent?: number | null;
+            amountCents?: number | null;
+        };
+        QuoteDepositDto: {
+            /** @enum {string} */
+            kind: "percent" | "fixed";
+            percent?: number | null;
+            amountCents?: number | null;
+        };
+        CreateQuoteDto: {
+            /** @description The whole list of lines, in order */
+            lines?: components["schemas"]["QuoteLineInputDto"][];
+            discount?: components["schemas"]["QuoteDiscountDto"];
+            deposit?: components["schemas"]["QuoteDepositDto"];
+            /**
+             * @description Last day the customer may accept
+             * @example 2027-01-15
+             */
+            validUntil?: string;
+            terms?: string;
+            notes?: string;
+            /** @description The stored fit report to build on; the newest one of the project when omitted */
+            fitReportId?: string;
+        };
+        QuoteNotificationResponseDto: {
+            id: string;
+            quoteId: string;
+            projectId: string;
+            message: string;
+            createdAt: string;
+        };
+        UpdateQuoteDto: {
+            /** @description The whole list of lines, in order */
+            lines?: components["schemas"]["QuoteLineInputDto"][];
+            discount?: components["schemas"]["QuoteDiscountDto"];
+            deposit?: components["schemas"]["QuoteDepositDto"];
+            /**
+             * @description Last day the customer may accept
+             * @example 2027-01-15
+             */
+            validUntil?: string;
+            terms?: string;
+            notes?: string;
+        };
+        AnswerQuoteDto: {
+            /** @enum {string} */
+            answer: "accept" | "decline";
+            /** @description Why the quote is declined (asked for when declining) */
+            reason?: string;
+        };
+        QuoteRevisionDiffLineDto: {
+            /** @enum {string} */
+            change: "added" | "removed" | "changed";
+            key: string;
+            /** @enum {string} */
+            kind: "part" | "labor";
+            description: string;
+            fields?: string[];
+            beforeCents?: number | null;
+            afterCents?: number | null;
+        };
+        QuoteRevisionDiffTotalDto: {
+            field: string;
+            beforeCents: number;
+            afterCents: number;
+            deltaCents: number;
+        };
+        QuoteRevisionDiffResponseDto: {
+            fromNumber: number;
+            toNumber: number;
+            lines: components["schemas"]["QuoteRevisionDiffLineDto"][];
+            totals: components["schemas"]["QuoteRevisionDiffTotalDto"][];
+        };
+        QuoteSettingsResponseDto: {
+            laborTaxPercent: number;
+            suppliesCapCents: number | null;
+            depositPercent: number;
+            validityDays: number;
+            defaultMarkupPercent: number;
+            terms: string;
+        };
+        UpdateQuoteSettingsDto: {
+            laborTaxPercent?: number;
+            suppliesCapCents?: number | null;
+            depositPercent?: number;
+            validityDays?: number;
+            defaultMarkupPercent?: number;
+            terms?: string;
         };
         HealthResponseDto: {
             /** @example ok */
@@ -6343,6 +6843,428 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+        };
+    };
+    LaborOperationsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LaborOperationResponseDto"][];
+                };
+            };
+        };
+    };
+    LaborOperationsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateLaborOperationDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LaborOperationResponseDto"];
+                };
+            };
+        };
+    };
+    LaborOperationsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    LaborOperationsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateLaborOperationDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LaborOperationResponseDto"];
+                };
+            };
+        };
+    };
+    ProjectQuotesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"][];
+                };
+            };
+        };
+    };
+    ProjectQuotesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateQuoteDto"];
+            };
+        };
+        responses: {
+            /** @description Without lines, the first draft is drawn from the fit report and the shop's labor operations. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_list: {
+        parameters: {
+            query?: {
+                status?: "drafting" | "awaiting-answer" | "approved" | "turned-down" | "lapsed";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The shop's newest quotes (up to 100), optionally of one status */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"][];
+                };
+            };
+        };
+    };
+    QuotesController_notifications: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteNotificationResponseDto"][];
+                };
+            };
+        };
+    };
+    QuotesController_get: {
+        parameters: {
+            query?: {
+                revision?: number;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateQuoteDto"];
+            };
+        };
+        responses: {
+            /** @description Edits the working revision; once the newest was sent, the edit starts the next revision. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_send: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Freezes the working revision and e-mails it with the PDF and an approval link. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_answer: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AnswerQuoteDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_compare: {
+        parameters: {
+            query: {
+                from: number;
+                to: number;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteRevisionDiffResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_pdf: {
+        parameters: {
+            query?: {
+                revision?: number;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    QuoteLinksController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuoteLinksController_answer: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AnswerQuoteDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuoteLinksController_pdf: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    QuoteSettingsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteSettingsResponseDto"];
+                };
+            };
+        };
+    };
+    QuoteSettingsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateQuoteSettingsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QuoteSettingsResponseDto"];
+                };
             };
         };
     };
