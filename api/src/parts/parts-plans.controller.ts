@@ -1,5 +1,6 @@
 import { Body, Controller, Get, Header, HttpCode, Param, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiConflictResponse, ApiCreatedResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
@@ -27,6 +28,8 @@ export class PartsPlansController {
   @Post('projects/:projectId/parts-plans')
   @Roles(...PLAN_BUILDERS)
   @ApiOperation({ summary: "Build a new plan version from the project's fit report and the catalog", operationId: 'buildPartsPlan' })
+  @ApiCreatedResponse({ type: PartsPlanResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
   async build(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string, @Body() body: BuildPlanDto): Promise<PartsPlanResponseDto> {
     return mapPlan(await this.plans.build(user, projectId, body.objective ?? 'lowest-cost', body.resolve));
   }
@@ -34,6 +37,7 @@ export class PartsPlansController {
   @Get('projects/:projectId/parts-plans')
   @Roles(...PLAN_READERS)
   @ApiOperation({ summary: "The project's plan versions, newest first", operationId: 'listPartsPlans' })
+  @ApiOkResponse({ type: [PartsPlanResponseDto] })
   async list(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<PartsPlanResponseDto[]> {
     return (await this.plans.list(user, projectId)).map(mapPlan);
   }
@@ -41,6 +45,7 @@ export class PartsPlansController {
   @Get('parts-plans')
   @Roles(...PLAN_READERS)
   @ApiOperation({ summary: "Each project's latest plan, newest first (the counter's work list)", operationId: 'listRecentPartsPlans' })
+  @ApiOkResponse({ type: [PlanSummaryResponseDto] })
   async recent(@CurrentUser() user: AuthUser): Promise<PlanSummaryResponseDto[]> {
     return (await this.plans.recent(user)).map((p) => ({
       id: p.id,
@@ -57,6 +62,8 @@ export class PartsPlansController {
   @Get('parts-plans/:id')
   @Roles(...PLAN_READERS)
   @ApiOperation({ summary: 'One plan version', operationId: 'getPartsPlan' })
+  @ApiOkResponse({ type: PartsPlanResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
   async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<PartsPlanResponseDto> {
     return mapPlan(await this.plans.get(user, id));
   }
@@ -65,6 +72,8 @@ export class PartsPlansController {
   @HttpCode(200)
   @Roles(...PLAN_BUILDERS)
   @ApiOperation({ summary: 'Lock a plan version for a quote (it never changes after)', operationId: 'lockPartsPlan' })
+  @ApiOkResponse({ type: PartsPlanResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async lock(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<PartsPlanResponseDto> {
     return mapPlan(await this.plans.lock(user, id));
   }
@@ -72,6 +81,7 @@ export class PartsPlansController {
   @Get('parts-plans/:id/counter-lines')
   @Roles(...PLAN_READERS)
   @ApiOperation({ summary: "The plan's parts with stock on hand and bins, and each line's state", operationId: 'listCounterLines' })
+  @ApiOkResponse({ type: [CounterLineResponseDto] })
   async lines(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto[]> {
     return (await this.counter.lines(user, id)).map(mapCounterLine);
   }
@@ -81,6 +91,8 @@ export class PartsPlansController {
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="pick-list.csv"')
   @ApiOperation({ summary: 'The pick list as CSV', operationId: 'exportPickList' })
+  @ApiProduces('text/csv')
+  @ApiOkResponse({ schema: { type: 'string' } })
   async pickList(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<string> {
     return this.counter.pickListCsv(user, id);
   }
@@ -89,6 +101,8 @@ export class PartsPlansController {
   @HttpCode(200)
   @Roles(...COUNTER_CLERKS)
   @ApiOperation({ summary: "Set the line's units aside from stock (409 when another job took them)", operationId: 'reserveCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async reserve(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: ReserveDto): Promise<CounterLineResponseDto> {
     return mapCounterLine(await this.counter.reserve(user, id, body.location));
   }
@@ -97,6 +111,8 @@ export class PartsPlansController {
   @HttpCode(200)
   @Roles(...COUNTER_CLERKS)
   @ApiOperation({ summary: 'Put reserved units back', operationId: 'releaseCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async release(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto> {
     return mapCounterLine(await this.counter.release(user, id));
   }
@@ -105,6 +121,8 @@ export class PartsPlansController {
   @HttpCode(200)
   @Roles(...COUNTER_CLERKS)
   @ApiOperation({ summary: 'Mark a line to order or ordered', operationId: 'markCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async mark(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: MarkLineDto): Promise<CounterLineResponseDto> {
     return mapCounterLine(await this.counter.mark(user, id, body.status));
   }
@@ -113,6 +131,8 @@ export class PartsPlansController {
   @HttpCode(200)
   @Roles(...COUNTER_CLERKS)
   @ApiOperation({ summary: 'Ordered units arrived: on hand at a location, set aside for this job', operationId: 'receiveCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async receive(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: ReceiveDto): Promise<CounterLineResponseDto> {
     return mapCounterLine(await this.counter.receive(user, id, body.location, body.bin));
   }

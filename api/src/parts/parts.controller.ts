@@ -1,6 +1,7 @@
 import { Body, Controller, Delete, Get, Header, HttpCode, Param, Patch, Post, Put, Query, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiBadRequestResponse, ApiBearerAuth, ApiBody, ApiConflictResponse, ApiConsumes, ApiCreatedResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { AppError } from '../common/errors/app-error';
@@ -11,7 +12,10 @@ import { AuthUser } from '../common/tenant/auth-user';
 import {
   CreatePartDto,
   CreateSupplierDto,
+  ImportPreviewResponseDto,
   ListPartsQueryDto,
+  PartPageResponseDto,
+  SupplierPageResponseDto,
   PartResponseDto,
   SetStockDto,
   SupplierResponseDto,
@@ -20,7 +24,7 @@ import {
 } from './dto/part.dto';
 import { ImportMappingDto } from './dto/plan.dto';
 import { mapPart, mapSupplier } from './part.mapper';
-import { ImportMapping, ImportPreview, PartsImportService } from './parts-import.service';
+import { ImportMapping, PartsImportService } from './parts-import.service';
 import { PartsService } from './parts.service';
 
 /** The part of a multer upload the import reads. */
@@ -58,6 +62,8 @@ export class PartsController {
   @Get()
   @Roles(...CATALOG_READERS)
   @ApiOperation({ summary: "List the shop's parts with stock (search SKU, description, supplier SKU; filter category, supplier, in stock)", operationId: 'listParts' })
+  @ApiOkResponse({ type: PartPageResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
   async list(@CurrentUser() user: AuthUser, @Query() query: ListPartsQueryDto): Promise<Page<PartResponseDto>> {
     const page = await this.parts.list(user, query);
     return { ...page, items: page.items.map((p) => mapPart(p.part, p.stock, p.supplierName)) };
@@ -68,6 +74,8 @@ export class PartsController {
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="parts-catalog.csv"')
   @ApiOperation({ summary: 'The catalog as CSV (the import columns)', operationId: 'exportParts' })
+  @ApiProduces('text/csv')
+  @ApiOkResponse({ schema: { type: 'string' } })
   async exportCsv(@CurrentUser() user: AuthUser): Promise<string> {
     return this.importer.exportCsv(user);
   }
@@ -79,7 +87,9 @@ export class PartsController {
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' }, mapping: { type: 'string' } } } })
   @ApiOperation({ summary: 'Read a CSV without writing: column mapping, every row error, formula warnings', operationId: 'previewPartsImport' })
-  preview(@UploadedFile() file: UploadedCsv | undefined, @Body() body: ImportMappingDto): ImportPreview {
+  @ApiOkResponse({ type: ImportPreviewResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  preview(@UploadedFile() file: UploadedCsv | undefined, @Body() body: ImportMappingDto): ImportPreviewResponseDto {
     return this.importer.parse(csvText(file), mappingOf(body)).preview;
   }
 
@@ -90,7 +100,9 @@ export class PartsController {
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' }, mapping: { type: 'string' } } } })
   @ApiOperation({ summary: 'Import a CSV: all or nothing in one transaction, upserting by SKU', operationId: 'importParts' })
-  async import(@CurrentUser() user: AuthUser, @UploadedFile() file: UploadedCsv | undefined, @Body() body: ImportMappingDto): Promise<ImportPreview> {
+  @ApiOkResponse({ type: ImportPreviewResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto, description: 'Any row error: nothing written; details list the lines' })
+  async import(@CurrentUser() user: AuthUser, @UploadedFile() file: UploadedCsv | undefined, @Body() body: ImportMappingDto): Promise<ImportPreviewResponseDto> {
     const result = await this.importer.import(user, csvText(file), mappingOf(body));
     return { ...result, rejected: [], errors: [] };
   }
@@ -98,6 +110,9 @@ export class PartsController {
   @Post()
   @Roles(...CATALOG_WRITERS)
   @ApiOperation({ summary: 'Add a part to the catalog', operationId: 'createPart' })
+  @ApiCreatedResponse({ type: PartResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async create(@CurrentUser() user: AuthUser, @Body() body: CreatePartDto): Promise<PartResponseDto> {
     const p = await this.parts.create(user, body);
     return mapPart(p.part, p.stock, p.supplierName);
@@ -106,6 +121,8 @@ export class PartsController {
   @Get(':id')
   @Roles(...CATALOG_READERS)
   @ApiOperation({ summary: 'One part with its stock', operationId: 'getPart' })
+  @ApiOkResponse({ type: PartResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
   async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<PartResponseDto> {
     const p = await this.parts.get(user, id);
     return mapPart(p.part, p.stock, p.supplierName);
@@ -114,6 +131,9 @@ export class PartsController {
   @Patch(':id')
   @Roles(...CATALOG_WRITERS)
   @ApiOperation({ summary: 'Change a part', operationId: 'updatePart' })
+  @ApiOkResponse({ type: PartResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async update(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: UpdatePartDto): Promise<PartResponseDto> {
     const p = await this.parts.update(user, id, body);
     return mapPart(p.part, p.stock, p.supplierName);
@@ -122,6 +142,8 @@ export class PartsController {
   @Put(':id/stock')
   @Roles(...CATALOG_WRITERS)
   @ApiOperation({ summary: 'Set the count on hand at one location and bin', operationId: 'setPartStock' })
+  @ApiOkResponse({ type: PartResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto, description: 'Fewer on hand than are reserved there' })
   async setStock(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: SetStockDto): Promise<PartResponseDto> {
     const p = await this.parts.setStock(user, id, body);
     return mapPart(p.part, p.stock, p.supplierName);
@@ -145,6 +167,7 @@ export class SuppliersController {
   @Get()
   @Roles(...CATALOG_READERS)
   @ApiOperation({ summary: "The shop's suppliers", operationId: 'listSuppliers' })
+  @ApiOkResponse({ type: SupplierPageResponseDto })
   async list(@CurrentUser() user: AuthUser, @Query() query: PageQueryDto): Promise<Page<SupplierResponseDto>> {
     const page = await this.parts.listSuppliers(user, query);
     return { ...page, items: page.items.map(mapSupplier) };
@@ -153,6 +176,8 @@ export class SuppliersController {
   @Post()
   @Roles(...CATALOG_WRITERS)
   @ApiOperation({ summary: 'Add a supplier', operationId: 'createSupplier' })
+  @ApiCreatedResponse({ type: SupplierResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
   async create(@CurrentUser() user: AuthUser, @Body() body: CreateSupplierDto): Promise<SupplierResponseDto> {
     return mapSupplier(await this.parts.createSupplier(user, body));
   }

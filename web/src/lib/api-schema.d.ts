@@ -2681,6 +2681,77 @@ export interface components {
             /** @description Tightening sequence or angle steps. */
             sequence?: string;
         };
+        StockResponseDto: {
+            id: string;
+            location: string;
+            bin: string;
+            onHand: number;
+            reserved: number;
+            available: number;
+        };
+        PartResponseDto: {
+            id: string;
+            sku: string;
+            description: string;
+            /** @enum {string} */
+            category: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+            priceCents: number;
+            costCents: number;
+            supplierId: string | null;
+            supplierName: string | null;
+            supplierSku: string | null;
+            laborHours: number;
+            torqueSpecs: components["schemas"]["TorqueSpecDto"][];
+            instructions: string | null;
+            attributes: {
+                [key: string]: unknown;
+            };
+            requiresSkus: string[];
+            excludesSkus: string[];
+            replacesSkus: string[];
+            /** @enum {string|null} */
+            fitKind: "engines" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts" | null;
+            fitSpecId: string | null;
+            stock: components["schemas"]["StockResponseDto"][];
+            onHand: number;
+            available: number;
+            updatedAt: string;
+        };
+        PartPageResponseDto: {
+            items: components["schemas"]["PartResponseDto"][];
+            total: number;
+            page: number;
+            pageSize: number;
+        };
+        ImportRowErrorDto: {
+            /** @description Line in the file (the header is line 1). */
+            row: number;
+            field: string;
+            message: string;
+        };
+        ImportRejectedRowDto: {
+            row: number;
+            cells: {
+                [key: string]: string;
+            };
+            errors: string[];
+        };
+        ImportPreviewResponseDto: {
+            headers: string[];
+            /** @description Import field → file header. */
+            mapping: {
+                [key: string]: string;
+            };
+            /** @description Required fields no column maps to yet. */
+            unmapped: string[];
+            rowCount: number;
+            validCount: number;
+            errors: components["schemas"]["ImportRowErrorDto"][];
+            rejected: components["schemas"]["ImportRejectedRowDto"][];
+            warnings: components["schemas"]["ImportRowErrorDto"][];
+            inserted?: number;
+            updated?: number;
+        };
         CreatePartDto: {
             /** @example TR-4410 */
             sku: string;
@@ -2758,6 +2829,19 @@ export interface components {
             bin?: string;
             onHand: number;
         };
+        SupplierResponseDto: {
+            id: string;
+            name: string;
+            contact: string | null;
+            email: string | null;
+            phone: string | null;
+        };
+        SupplierPageResponseDto: {
+            items: components["schemas"]["SupplierResponseDto"][];
+            total: number;
+            page: number;
+            pageSize: number;
+        };
         CreateSupplierDto: {
             name: string;
             contact?: Record<string, never> | null;
@@ -2770,13 +2854,6 @@ export interface components {
             email?: Record<string, never> | null;
             phone?: Record<string, never> | null;
         };
-        SupplierResponseDto: {
-            id: string;
-            name: string;
-            contact: string | null;
-            email: string | null;
-            phone: string | null;
-        };
         BuildPlanDto: {
             /**
              * @default lowest-cost
@@ -2785,6 +2862,52 @@ export interface components {
             objective: "lowest-cost" | "least-fabrication" | "in-stock";
             /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
             resolve?: string[];
+        };
+        PartsPlanResponseDto: {
+            id: string;
+            projectId: string;
+            version: number;
+            /** @enum {string} */
+            objective: "lowest-cost" | "least-fabrication" | "in-stock";
+            /** @enum {string} */
+            status: "draft" | "locked";
+            totalCents: number;
+            /** @description Model build and solve time, ms. */
+            solveMs: number;
+            lockedAt: string | null;
+            createdAt: string;
+            /** @description Picks (each explained), operations, kept parts, unresolved shortfalls, totals. */
+            result: {
+                [key: string]: unknown;
+            };
+            /** @description The fit check run again with the chosen parts. */
+            recheck: {
+                [key: string]: unknown;
+            };
+        };
+        PlanSummaryResponseDto: {
+            id: string;
+            projectId: string;
+            projectTitle: string;
+            version: number;
+            status: string;
+            objective: string;
+            totalCents: number;
+            createdAt: string;
+        };
+        CounterLineResponseDto: {
+            id: string;
+            planId: string;
+            partId: string | null;
+            sku: string;
+            description: string;
+            quantity: number;
+            /** @enum {string} */
+            status: "open" | "reserved" | "to-order" | "ordered" | "received";
+            stockId: string | null;
+            stock: components["schemas"]["StockResponseDto"][];
+            onHand: number;
+            available: number;
         };
         ReserveDto: {
             /** @description Reserve from this location; the one with the most free units when absent. */
@@ -6359,7 +6482,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartPageResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6380,7 +6513,25 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6397,7 +6548,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "text/csv": string;
+                };
             };
         };
     };
@@ -6422,7 +6575,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["ImportPreviewResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6447,7 +6610,18 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["ImportPreviewResponseDto"];
+                };
+            };
+            /** @description Any row error: nothing written; details list the lines */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6466,7 +6640,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6508,7 +6692,25 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6531,7 +6733,18 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartResponseDto"];
+                };
+            };
+            /** @description Fewer on hand than are reserved there */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6554,7 +6767,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["SupplierPageResponseDto"];
+                };
             };
         };
     };
@@ -6575,7 +6790,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["SupplierResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6638,7 +6863,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartsPlanResponseDto"][];
+                };
             };
         };
     };
@@ -6661,7 +6888,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartsPlanResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6678,7 +6915,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PlanSummaryResponseDto"][];
+                };
             };
         };
     };
@@ -6697,7 +6936,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartsPlanResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6716,7 +6965,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["PartsPlanResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6735,7 +6994,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"][];
+                };
             };
         };
     };
@@ -6754,7 +7015,9 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "text/csv": string;
+                };
             };
         };
     };
@@ -6777,7 +7040,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6796,7 +7069,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6819,7 +7102,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };
@@ -6842,7 +7135,17 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
             };
         };
     };

@@ -274,3 +274,42 @@ export class SupplierResponseDto {
   @ApiProperty({ nullable: true, type: String }) email: string | null;
   @ApiProperty({ nullable: true, type: String }) phone: string | null;
 }
+
+export class PartPageResponseDto {
+  @ApiProperty({ type: [PartResponseDto] }) items: PartResponseDto[];
+  @ApiProperty() total: number;
+  @ApiProperty() page: number;
+  @ApiProperty() pageSize: number;
+}
+
+export class SupplierPageResponseDto {
+  @ApiProperty({ type: [SupplierResponseDto] }) items: SupplierResponseDto[];
+  @ApiProperty() total: number;
+  @ApiProperty() page: number;
+  @ApiProperty() pageSize: number;
+}
+
+export class ImportRowErrorDto {
+  @ApiProperty({ description: 'Line in the file (the header is line 1).' }) row: number;
+  @ApiProperty() field: string;
+  @ApiProperty() message: string;
+}
+
+export class ImportRejectedRowDto {
+  @ApiProperty() row: number;
+  @ApiProperty({ type: 'object', additionalProperties: { type: 'string' } }) cells: Record<string, string>;
+  @ApiProperty({ type: [String] }) errors: string[];
+}
+
+export class ImportPreviewResponseDto {
+  @ApiProperty({ type: [String] }) headers: string[];
+  @ApiProperty({ type: 'object', additionalProperties: { type: 'string' }, description: 'Import field → file header.' }) mapping: Record<string, string>;
+  @ApiProperty({ type: [String], description: 'Required fields no column maps to yet.' }) unmapped: string[];
+  @ApiProperty() rowCount: number;
+  @ApiProperty() validCount: number;
+  @ApiProperty({ type: [ImportRowErrorDto] }) errors: ImportRowErrorDto[];
+  @ApiProperty({ type: [ImportRejectedRowDto] }) rejected: ImportRejectedRowDto[];
+  @ApiProperty({ type: [ImportRowErrorDto] }) warnings: ImportRowErrorDto[];
+  @ApiPropertyOptional() inserted?: number;
+  @ApiPropertyOptional() updated?: number;
+}
