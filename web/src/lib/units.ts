@@ -30,17 +30,36 @@ export function formatLength(mm: number | null | undefined, system: UnitSystem):
   return `${text} ${unitLabels[system]}`;
 }
 
+export type ReadResult = { ok: true; value: number } | { ok: false; message: string };
+
 /**
  * Reads what a person typed ("12.5", "12 1/2 in", '12.5"', "317.5 mm", "317,5 mm") with the shared
- * parser. A bare number is taken in the current unit. Returns mm, or null when the text is not a length.
+ * parser. A bare number is taken in the current unit. Gives mm, or the parser's message saying what it could not read.
  */
-export function parseLength(input: string | number | null | undefined, system: UnitSystem): number | null {
-  if (input === null || input === undefined || input === '') return null;
-  if (typeof input === 'number') return Number.isFinite(input) ? displayToMm(input, system) : null;
+export function readLength(input: string, system: UnitSystem): ReadResult {
   // A lone comma with no point is a decimal comma here ("317,5"), not a thousands separator.
   const text = !input.includes('.') && input.split(',').length === 2 ? input.replace(',', '.') : input;
   const result = parseLengthResult(text, system);
-  return result.ok ? result.mm : null;
+  return result.ok ? { ok: true, value: result.mm } : { ok: false, message: result.error.message };
+}
+
+/** Like {@link readLength}, for callers that only need the value: mm, or null when the text is not a length. */
+export function parseLength(input: string | number | null | undefined, system: UnitSystem): number | null {
+  if (input === null || input === undefined || input === '') return null;
+  if (typeof input === 'number') return Number.isFinite(input) ? displayToMm(input, system) : null;
+  const result = readLength(input, system);
+  return result.ok ? result.value : null;
+}
+
+const ANGLE_PATTERN = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*(?:°|deg|degrees?)?$/i;
+
+/** Reads an angle in degrees: "2.5", "-1", "3°", "1.5 deg". */
+export function readAngle(input: string): ReadResult {
+  const trimmed = input.trim().replace('−', '-');
+  if (trimmed === '') return { ok: false, message: 'Enter an angle in degrees, for example 2.5.' };
+  const match = ANGLE_PATTERN.exec(trimmed);
+  if (!match) return { ok: false, message: `"${input.trim()}" is not an angle: type degrees, for example 2.5 or -1.` };
+  return { ok: true, value: Number(match[1].replace(',', '.')) };
 }
 
 /** Power in the unit people in that system usually quote: hp with inches, kW with millimetres. */

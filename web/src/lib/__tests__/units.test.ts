@@ -1,6 +1,6 @@
 import { inchesToMm as sharedInchesToMm, mmToInches as sharedMmToInches } from '@swapwright/shared';
 import { describe, expect, it } from 'vitest';
-import { formatLength, formatPower, inchesToMm, mmToInches, parseLength } from '../units';
+import { formatLength, formatPower, inchesToMm, mmToInches, parseLength, readAngle, readLength } from '../units';
 
 describe('length units', () => {
   it('agree with the shared package', () => {
@@ -25,5 +25,23 @@ describe('length units', () => {
   it('formats power in hp with inches and kW with millimetres', () => {
     expect(formatPower(298, 'in')).toBe('400 hp (298 kW)');
     expect(formatPower(298, 'mm')).toBe('298 kW');
+  });
+});
+
+describe('readLength and readAngle', () => {
+  it('read fractions, decimals and millimetres alike', () => {
+    // Source: NIST SP 811 (2008), Appendix B.8: 1 in = 25.4 mm exactly; 21 1/2 in = 546.1 mm.
+    expect(readLength('21 1/2', 'in')).toEqual({ ok: true, value: expect.closeTo(546.1, 9) });
+    expect(readLength('21.5', 'in')).toEqual({ ok: true, value: expect.closeTo(546.1, 9) });
+    expect(readLength('546.1 mm', 'in')).toEqual({ ok: true, value: 546.1 });
+    expect(readLength('546,1', 'mm')).toEqual({ ok: true, value: 546.1 });
+  });
+
+  it('say what they cannot read', () => {
+    expect(readLength('21 furlongs', 'in')).toEqual({ ok: false, message: expect.stringContaining('"furlongs" is not a length unit') });
+    expect(readLength('', 'in')).toEqual({ ok: false, message: expect.stringContaining('Enter a length') });
+    expect(readAngle('2.5°')).toEqual({ ok: true, value: 2.5 });
+    expect(readAngle('-1 deg')).toEqual({ ok: true, value: -1 });
+    expect(readAngle('up')).toEqual({ ok: false, message: expect.stringContaining('"up" is not an angle') });
   });
 });

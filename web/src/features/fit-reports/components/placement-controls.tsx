@@ -1,7 +1,9 @@
-import type { Placement } from '@swapwright/shared';
-import { Alert, Button, Col, Flex, InputNumber, Row, Slider, Tag, Typography } from 'antd';
+import { inchesToMm, mmToInches, type Placement } from '@swapwright/shared';
+import { Alert, Button, Col, Flex, Row, Slider, Tag, Typography } from 'antd';
 import { useState } from 'react';
+import { ParsedNumberInput } from '@/components/parsed-number-input';
 import { useUnits } from '@/hooks/use-units';
+import { readAngle, readLength, type ReadResult } from '@/lib/units';
 
 export type PlacementControlsProps = {
   value: Placement;
@@ -37,60 +39,61 @@ export function placementOutOfRange(p: Placement): Axis[] {
 type AxisRowProps = {
   label: string;
   hint: string;
-  ariaLabel: string;
-  valueDisplay: number;
-  min: number;
-  max: number;
-  /** What the number box accepts, in display units (the slider range sits inside it). */
+  /** The held value (mm or degrees) and the slider's range around it, in the same unit. */
+  value: number;
+  sliderMin: number;
+  sliderMax: number;
+  /** What can be saved; a typed value outside it is refused with `rangeMessage`. */
   limitMin: number;
   limitMax: number;
+  /** Slider and arrow-key step, in the held unit. */
   step: number;
   unit: string;
-  onChange: (displayValue: number) => void;
-  /** Reports typed text outside the limits (the number box only passes on values inside them). */
-  onInvalid: (invalid: boolean) => void;
+  toDisplay: (value: number) => number;
+  fromDisplay: (display: number) => number;
+  read: (text: string) => ReadResult;
+  rangeMessage: string;
+  onChange: (value: number) => void;
+  onProblem: (message: string | null) => void;
   invalid: boolean;
 };
 
-function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, limitMin, limitMax, step, unit, onChange, onInvalid, invalid }: AxisRowProps) {
+function AxisRow({ label, hint, value, sliderMin, sliderMax, limitMin, limitMax, step, unit, toDisplay, fromDisplay, read, rangeMessage, onChange, onProblem, invalid }: AxisRowProps) {
   return (
     <div>
-      <Flex justify="space-between" align="baseline">
+      <Flex justify="space-between" align="baseline" wrap gap={4}>
         <Typography.Text strong>{label}</Typography.Text>
         <Typography.Text type="secondary" style={{ fontSize: 12 }}>
           {hint}
         </Typography.Text>
       </Flex>
-      <Row gutter={12} align="middle">
-        <Col flex="auto">
+      <Row gutter={12} align="middle" wrap={false}>
+        <Col flex="auto" style={{ minWidth: 0 }}>
           <Slider
-            min={min}
-            max={max}
-            step={step}
-            value={valueDisplay}
-            onChange={(v) => onChange(v as number)}
+            min={toDisplay(sliderMin)}
+            max={toDisplay(sliderMax)}
+            step={toDisplay(step) || undefined}
+            value={toDisplay(value)}
+            onChange={(v) => onChange(fromDisplay(v as number))}
             tooltip={{ formatter: (v) => `${v} ${unit}` }}
-            ariaLabelForHandle={`${ariaLabel} slider`}
+            ariaLabelForHandle={`${label} slider`}
           />
         </Col>
-        <Col flex="150px">
-          <InputNumber
-            aria-label={ariaLabel}
-            value={valueDisplay}
+        <Col flex="130px">
+          <ParsedNumberInput
+            label={label}
+            value={value}
+            onChange={onChange}
+            read={read}
+            toDisplay={toDisplay}
             min={limitMin}
             max={limitMax}
             step={step}
+            rangeMessage={rangeMessage}
             suffix={unit}
-            status={invalid ? 'error' : undefined}
+            onProblem={onProblem}
+            invalid={invalid}
             style={{ width: '100%' }}
-            onInput={(text) => {
-              const n = Number(text);
-              onInvalid(text.trim() !== '' && Number.isFinite(n) && (n < limitMin || n > limitMax));
-            }}
-            onBlur={() => onInvalid(false)}
-            onChange={(v) => {
-              if (typeof v === 'number' && Number.isFinite(v)) onChange(v);
-            }}
           />
         </Col>
       </Row>
@@ -98,35 +101,56 @@ function AxisRow({ label, hint, ariaLabel, valueDisplay, min, max, limitMin, lim
   );
 }
 
-/** Setback, crank height and tilt in the person's units; every change re-runs the fit engine here in the browser. */
+const plain = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 });
+const roundDegrees = (v: number) => Math.round(v * 10) / 10;
+
+/**
+ * Setback, crank height and tilt in the person's units; every change re-runs the fit engine here in the browser.
+ * The boxes read fractions, decimals and either unit (`21 1/2`, `21.5 in`, `546 mm`) and refuse, with a message,
+ * what they cannot read or what lies outside the limits.
+ */
 export function PlacementControls({ value, onChange, saved, proposed, isPreview, onSave, saving, onReset }: PlacementControlsProps) {
   const units = useUnits();
-  const [typedOut, setTypedOut] = useState<Partial<Record<Axis, boolean>>>({});
+  const [typed, setTyped] = useState<Partial<Record<Axis, string | null>>>({});
   const center = saved ?? value;
-  const lengthStep = units.system === 'in' ? 0.05 : 1;
+  const lengthStep = units.system === 'in' ? inchesToMm(0.05) : 1;
   const clampTo = (axis: Axis, v: number) => Math.min(PLACEMENT_LIMITS[axis].max, Math.max(PLACEMENT_LIMITS[axis].min, v));
-  /** Slider range around the saved value, widened to the current value, never past the limits. */
-  const lengthRange = (axis: 'setbackMm' | 'heightMm') => {
-    const lo = Math.min(center[axis] - SPAN_MM, value[axis]);
-    const hi = Math.max(center[axis] + SPAN_MM, value[axis]);
+  /** The limits as the person reads them, rounded inwards so a figure typed at a limit converts back inside it. */
+  const unrounded = (mm: number) => (units.system === 'in' ? mmToInches(mm) : mm);
+  const shownLimits = (axis: 'setbackMm' | 'heightMm') => ({
+    min: Math.ceil(unrounded(PLACEMENT_LIMITS[axis].min) * 100) / 100,
+    max: Math.floor(unrounded(PLACEMENT_LIMITS[axis].max) * 100) / 100,
+  });
+  const lengthAxis = (axis: 'setbackMm' | 'heightMm', name: string) => {
+    const shown = shownLimits(axis);
     return {
-      min: units.toDisplay(clampTo(axis, lo)),
-      max: units.toDisplay(clampTo(axis, hi)),
-      // rounded inwards so a limit shown in inches never converts back past the limit
-      limitMin: Math.ceil(units.toDisplay(PLACEMENT_LIMITS[axis].min) * 100) / 100,
-      limitMax: Math.floor(units.toDisplay(PLACEMENT_LIMITS[axis].max) * 100) / 100,
+      // slider range around the saved value, widened to the current value, never past the limits
+      sliderMin: clampTo(axis, Math.min(center[axis] - SPAN_MM, value[axis])),
+      sliderMax: clampTo(axis, Math.max(center[axis] + SPAN_MM, value[axis])),
+      limitMin: units.fromDisplay(shown.min),
+      limitMax: units.fromDisplay(shown.max),
+      step: lengthStep,
+      unit: units.unitLabel,
+      toDisplay: units.toDisplay,
+      fromDisplay: units.fromDisplay,
+      read: (text: string) => readLength(text, units.system),
+      rangeMessage: `${name} must be between ${plain.format(shown.min)} ${units.unitLabel} and ${plain.format(shown.max)} ${units.unitLabel}.`,
+      value: value[axis],
+      onChange: (mm: number) => onChange({ ...value, [axis]: mm }),
+      ...axisState(axis),
     };
   };
   const axisState = (axis: Axis) => ({
-    invalid: Boolean(typedOut[axis]) || !inLimits(axis, value[axis]),
-    onInvalid: (invalid: boolean) => setTypedOut((s) => (Boolean(s[axis]) === invalid ? s : { ...s, [axis]: invalid })),
+    invalid: Boolean(typed[axis]) || !inLimits(axis, value[axis]),
+    onProblem: (message: string | null) => setTyped((s) => ((s[axis] ?? null) === message ? s : { ...s, [axis]: message })),
   });
   const limitText: Record<Axis, string> = {
-    setbackMm: `Setback must be between ${units.formatLength(PLACEMENT_LIMITS.setbackMm.min)} and ${units.formatLength(PLACEMENT_LIMITS.setbackMm.max)}.`,
-    heightMm: `Crank height must be between ${units.formatLength(PLACEMENT_LIMITS.heightMm.min)} and ${units.formatLength(PLACEMENT_LIMITS.heightMm.max)}.`,
+    setbackMm: lengthAxis('setbackMm', 'Setback').rangeMessage,
+    heightMm: lengthAxis('heightMm', 'Crank height').rangeMessage,
     tiltDeg: `Tilt must be between ${PLACEMENT_LIMITS.tiltDeg.min}° and +${PLACEMENT_LIMITS.tiltDeg.max}°.`,
   };
-  const problems = (Object.keys(PLACEMENT_LIMITS) as Axis[]).filter((axis) => axisState(axis).invalid);
+  const axes = Object.keys(PLACEMENT_LIMITS) as Axis[];
+  const problems = axes.filter((axis) => axisState(axis).invalid).map((axis) => typed[axis] ?? limitText[axis]);
 
   return (
     <Flex vertical gap={12} className="fit-placement-controls fit-control" data-testid="placement-controls">
@@ -142,41 +166,24 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
           <Tag>As saved</Tag>
         )}
       </Flex>
-      <AxisRow
-        label="Setback"
-        hint="bellhousing face behind the front axle"
-        ariaLabel="Setback"
-        unit={units.unitLabel}
-        step={lengthStep}
-        {...lengthRange('setbackMm')}
-        {...axisState('setbackMm')}
-        valueDisplay={units.toDisplay(value.setbackMm)}
-        onChange={(v) => onChange({ ...value, setbackMm: units.fromDisplay(v) })}
-      />
-      <AxisRow
-        label="Crank height"
-        hint="crank centerline above the ground"
-        ariaLabel="Crank height"
-        unit={units.unitLabel}
-        step={lengthStep}
-        {...lengthRange('heightMm')}
-        {...axisState('heightMm')}
-        valueDisplay={units.toDisplay(value.heightMm)}
-        onChange={(v) => onChange({ ...value, heightMm: units.fromDisplay(v) })}
-      />
+      <AxisRow label="Setback" hint="bellhousing face behind the front axle" {...lengthAxis('setbackMm', 'Setback')} />
+      <AxisRow label="Crank height" hint="crank centerline above the ground" {...lengthAxis('heightMm', 'Crank height')} />
       <AxisRow
         label="Tilt"
         hint="front up is positive"
-        ariaLabel="Tilt"
         unit="°"
         step={0.1}
-        min={clampTo('tiltDeg', Math.min(-5, value.tiltDeg))}
-        max={clampTo('tiltDeg', Math.max(10, value.tiltDeg))}
+        value={value.tiltDeg}
+        sliderMin={clampTo('tiltDeg', Math.min(-5, value.tiltDeg))}
+        sliderMax={clampTo('tiltDeg', Math.max(10, value.tiltDeg))}
         limitMin={PLACEMENT_LIMITS.tiltDeg.min}
         limitMax={PLACEMENT_LIMITS.tiltDeg.max}
+        toDisplay={roundDegrees}
+        fromDisplay={(v) => v}
+        read={readAngle}
+        rangeMessage={limitText.tiltDeg}
+        onChange={(tiltDeg) => onChange({ ...value, tiltDeg })}
         {...axisState('tiltDeg')}
-        valueDisplay={Math.round(value.tiltDeg * 10) / 10}
-        onChange={(v) => onChange({ ...value, tiltDeg: v })}
       />
       {proposed && (
         <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="proposed-placement">
@@ -188,8 +195,8 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
           type="warning"
           showIcon
           data-testid="placement-out-of-range"
-          title="Out of range"
-          description={problems.map((axis) => limitText[axis]).join(' ')}
+          title="Check these figures"
+          description={problems.join(' ')}
         />
       )}
       <Flex gap={8} wrap>
