@@ -49,6 +49,9 @@ export type CreateProjectInput = {
 };
 
 export type UpdateProjectInput = Partial<CreateProjectInput> & {
+  engineProfileId?: string | null;
+  chassisModelId?: string | null;
+  transmissionId?: string | null;
   status?: ProjectStatus;
   placement?: ProjectPlacement | null;
 };

@@ -1,7 +1,11 @@
-import type { EngineSpec, OilPanSpec, OilPickupSpec } from '@swapwright/shared';
+import type { EngineSpec, FitSpec, OilPanSpec, OilPickupSpec } from '@swapwright/shared';
+import { useMemo } from 'react';
 import { useCatalogItems } from '@/features/catalog/api/get-catalog-items';
 import type { CatalogItem, CatalogKind } from '@/features/catalog/types';
-import type { SelectionOption } from '@/features/fit-reports/components/selections-panel';
+import type { SelectionOption, SelectionSlot } from '@/features/fit-reports/components/selections-panel';
+import { partsOfSpec, type PartInfo } from '@/features/fit-reports/lib/remedies';
+import type { FitSelectionKey, FitSelections } from '@/features/fit-reports/types';
+import type { Project } from '@/features/projects/types';
 
 const ALL = { page: 1, pageSize: 100 } as const;
 
@@ -31,10 +35,71 @@ export function engineSpecOf(catalog: FitCatalog, engineId: string | null | unde
   return catalog.engines.items.find((i) => i.id === engineId)?.spec as unknown as EngineSpec | undefined;
 }
 
-export function panOf(catalog: FitCatalog, id: string | null | undefined): OilPanSpec | undefined {
-  return catalog.pans.items.find((i) => i.id === id)?.spec as unknown as OilPanSpec | undefined;
-}
-
 export function pickupsOf(catalog: FitCatalog): OilPickupSpec[] {
   return catalog.pickups.items.map((i) => ({ ...(i.spec as unknown as OilPickupSpec), id: i.id, name: i.name }));
+}
+
+export function pansOf(catalog: FitCatalog): OilPanSpec[] {
+  return catalog.pans.items.map((i) => ({ ...(i.spec as unknown as OilPanSpec), id: i.id, name: i.name }));
+}
+
+/** Names of the parts remedies may point at: the report's own and the catalog's. */
+export function usePartNames(spec: FitSpec | undefined, catalog: FitCatalog): Record<string, PartInfo> {
+  const { pans, pickups, pumps, controllers } = catalog;
+  return useMemo(() => {
+    const names = partsOfSpec(spec);
+    for (const i of [...pans.items, ...pickups.items, ...pumps.items, ...controllers.items]) names[i.id] ??= { id: i.id, name: i.name };
+    return names;
+  }, [spec, pans.items, pickups.items, pumps.items, controllers.items]);
+}
+
+export type SelectionSlotsOptions = {
+  project: Project;
+  catalog: FitCatalog;
+  selections: FitSelections | undefined;
+  selectionsLoading: boolean;
+  /** The engine the project uses (its accessory drives fill the drive slot). */
+  engineSpec: EngineSpec | undefined;
+  canPickSelections: boolean;
+  canPickProjectParts: boolean;
+  savingSelections: boolean;
+  savingProject: boolean;
+  onSelect: (patch: Partial<FitSelections>) => void;
+  onProjectPart: (changes: Partial<Pick<Project, ProjectPartKey>>) => void;
+};
+
+type ProjectPartKey = 'engineProfileId' | 'chassisModelId' | 'transmissionId';
+
+/** The slots of "What goes in": engine, chassis and transmission on the project, the rest in the fit selections. */
+export function selectionSlots(o: SelectionSlotsOptions): SelectionSlot[] {
+  const { catalog, selections: sel } = o;
+  const slot = (key: FitSelectionKey, label: string, options: SelectionOption[], loading: boolean): SelectionSlot => ({
+    key,
+    label,
+    value: sel?.[key] ?? null,
+    options,
+    loading: loading || o.selectionsLoading,
+    disabled: !o.canPickSelections || o.savingSelections,
+    onChange: (v) => o.onSelect({ [key]: v }),
+  });
+  const projectSlot = (key: ProjectPartKey, label: string, options: SelectionOption[], loading: boolean): SelectionSlot => ({
+    key,
+    label,
+    value: o.project[key],
+    options,
+    loading,
+    disabled: !o.canPickProjectParts || o.savingProject,
+    onChange: (v) => o.onProjectPart({ [key]: v }),
+  });
+  return [
+    projectSlot('engineProfileId', 'Engine', catalog.engines.options, catalog.engines.loading),
+    projectSlot('chassisModelId', 'Chassis', catalog.chassis.options, catalog.chassis.loading),
+    projectSlot('transmissionId', 'Transmission', catalog.transmissions.options, catalog.transmissions.loading),
+    slot('oilPanId', 'Oil pan', catalog.pans.options, catalog.pans.loading),
+    slot('oilPickupId', 'Oil pickup', catalog.pickups.options, catalog.pickups.loading),
+    slot('oilPumpId', 'Oil pump', catalog.pumps.options, catalog.pumps.loading),
+    slot('controllerId', 'Engine controller', catalog.controllers.options, catalog.controllers.loading),
+    slot('accessoryDriveId', 'Accessory drive', (o.engineSpec?.accessoryDrives ?? []).map((d) => ({ value: d.id, label: d.name })), false),
+    slot('mountAdapterId', 'Mount adapter', catalog.mountAdapters.options, catalog.mountAdapters.loading),
+  ];
 }

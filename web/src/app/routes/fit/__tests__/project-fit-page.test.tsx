@@ -64,7 +64,7 @@ function renderFitPage(role: Role) {
 afterEach(() => vi.restoreAllMocks());
 
 describe('fit page by role', () => {
-  it('lets a customer read the stored report without any editing or catalog calls', { timeout: 60_000 }, async () => {
+  it('lets a customer read the stored report without any editing or catalog calls', { timeout: 180_000 }, async () => {
     const get = mockApi();
     renderFitPage('customer');
     await screen.findByText('Every check', undefined, { timeout: 20_000 });
@@ -80,7 +80,7 @@ describe('fit page by role', () => {
     expect(urls.some((u) => u.startsWith('/catalog/') || u.endsWith('/fit-selections'))).toBe(false);
   });
 
-  it('gives an estimator the run button, selections and placement controls', { timeout: 60_000 }, async () => {
+  it('gives an estimator the run button, selections and placement controls', { timeout: 180_000 }, async () => {
     mockApi();
     renderFitPage('estimator');
     await screen.findByText('Every check', undefined, { timeout: 20_000 });

@@ -1,0 +1,60 @@
+import type { Placement, PlacementRemedy } from '@swapwright/shared';
+import { useDeferredValue, useEffect, useMemo, useState } from 'react';
+import { samePlacement } from '../components/placement-controls';
+import { fitWindowFor, previewFitCheck, withPlacement } from '../lib/fit-engine';
+import type { StoredFitReport } from '../types';
+
+function settingsOf(report: StoredFitReport) {
+  return (report.results.settings ?? report.inputsSnapshot.settingsOverrides ?? report.inputsSnapshot.settings ?? undefined) as
+    | Parameters<typeof previewFitCheck>[2]
+    | undefined;
+}
+
+/**
+ * A stored report and a placement the person is trying out: the fit engine runs here in the browser on the report's
+ * inputs at the tried placement, and the fit window is searched around the stored placement at the tried tilt.
+ */
+export function usePlacementPreview(stored: StoredFitReport | undefined) {
+  const [preview, setPreview] = useState<Placement | null>(null);
+  const spec = stored?.inputsSnapshot.spec;
+  const settings = stored ? settingsOf(stored) : undefined;
+  const storedPlacement = stored?.results.placement ?? spec?.placement ?? null;
+  const placement = preview ?? storedPlacement;
+  const isPreview = Boolean(preview && storedPlacement && !samePlacement(preview, storedPlacement));
+
+  useEffect(() => setPreview(null), [stored?.id]);
+
+  const shown = useMemo(() => {
+    if (!stored || !spec) return null;
+    if (!isPreview || !preview) return stored.results;
+    try {
+      return previewFitCheck(spec, preview, settings);
+    } catch {
+      return stored.results;
+    }
+  }, [stored, spec, isPreview, preview, settings]);
+
+  const tilt = useDeferredValue(placement?.tiltDeg ?? 0);
+  const fitWindow = useMemo(() => {
+    if (!spec || !storedPlacement) return null;
+    try {
+      return fitWindowFor(spec, storedPlacement.setbackMm, tilt, settings);
+    } catch {
+      return null;
+    }
+  }, [spec, storedPlacement, tilt, settings]);
+
+  const shownSpec = useMemo(() => (spec && placement ? withPlacement(spec, placement) : undefined), [spec, placement]);
+
+  /** Moves the tried placement by a remedy's change. */
+  const tryRemedy = (r: PlacementRemedy) => {
+    if (!placement) return;
+    const next = { ...placement };
+    if (r.axis === 'height') next.heightMm += r.changeBy;
+    else if (r.axis === 'setback') next.setbackMm += r.changeBy;
+    else next.tiltDeg += r.changeBy;
+    setPreview(next);
+  };
+
+  return { spec, storedPlacement, placement, isPreview, shown, fitWindow, shownSpec, setPreview, tryRemedy, reset: () => setPreview(null) };
+}
