@@ -1840,6 +1840,7 @@ export interface components {
             sumpPosition: "front" | "center" | "rear" | "dual";
             /** @enum {string} */
             pickupMount: "pump-bolted" | "block-bolted" | "press-in";
+            /** @description Forward of the bellhousing face (u > 0), within the bottom outline */
             sumpCenterU: number;
             sumpFloorW: number;
             dipstickProvision: ("block-left" | "block-right" | "pan-left" | "pan-right")[];
@@ -1865,6 +1866,7 @@ export interface components {
             sumpPosition: "front" | "center" | "rear" | "dual";
             /** @enum {string} */
             pickupMount: "pump-bolted" | "block-bolted" | "press-in";
+            /** @description Forward of the bellhousing face (u > 0), within the bottom outline */
             sumpCenterU: number;
             sumpFloorW: number;
             dipstickProvision: ("block-left" | "block-right" | "pan-left" | "pan-right")[];
@@ -1879,6 +1881,7 @@ export interface components {
             sumpPosition?: "front" | "center" | "rear" | "dual";
             /** @enum {string} */
             pickupMount?: "pump-bolted" | "block-bolted" | "press-in";
+            /** @description Forward of the bellhousing face (u > 0), within the bottom outline */
             sumpCenterU?: number;
             sumpFloorW?: number;
             dipstickProvision?: ("block-left" | "block-right" | "pan-left" | "pan-right")[];

@@ -28,13 +28,15 @@ import {
   SUMP_POSITIONS,
   THROTTLES,
 } from '@swapwright/shared';
-import { IsNegative } from 'class-validator';
+import { IsNegative, IsPositive } from 'class-validator';
+import { WithinOutlineLength } from '../../common/validation/form-values';
 import {
   Flag,
   IntIn,
   ListOf,
   Nested,
   NestedList,
+  PointList,
   NumberIn,
   OneOf,
   OptionalIntIn,
@@ -170,8 +172,8 @@ export class EngineSpecDto implements EngineSpec {
   @OptionalNumberIn(0.3, 15) displacementL?: number;
   @OptionalNumberIn(1, 2000) ratedPowerKw?: number;
   @OptionalNumberIn(20, 1500) weightKg?: number;
-  @NestedList(() => EngineTopPointDto, 2, 200, 'Side profile of the top of the engine, w ≥ 0') topProfile: EngineTopPointDto[];
-  @NestedList(() => EnginePointDto, 1, 200, 'Rear of the heads and anything at the back of the engine') rearProfile: EnginePointDto[];
+  @PointList(() => EngineTopPointDto, 2, 200, 'Side profile of the top of the engine, w ≥ 0') topProfile: EngineTopPointDto[];
+  @PointList(() => EnginePointDto, 1, 200, 'Rear of the heads and anything at the back of the engine') rearProfile: EnginePointDto[];
   @NumberIn(-U, U) fanFrontU: number;
   @NumberIn(-W, W) fanWFrom: number;
   @NumberIn(-W, W) fanWTo: number;
@@ -199,10 +201,13 @@ export class OilPanSpecDto implements OilPanSpec {
   @Text(64) id: string;
   @Text() name: string;
   @Text(40) railPattern: string;
-  @NestedList(() => PanPointDto, 3, 200, 'Bottom outline, engine frame, every point below the crank (w < 0)') bottomProfile: PanPointDto[];
+  @PointList(() => PanPointDto, 3, 200, 'Bottom outline, engine frame, every point below the crank (w < 0)') bottomProfile: PanPointDto[];
   @OneOf(SUMP_POSITIONS) sumpPosition: (typeof SUMP_POSITIONS)[number];
   @OneOf(PICKUP_MOUNTS) pickupMount: (typeof PICKUP_MOUNTS)[number];
-  @NumberIn(-U, U) sumpCenterU: number;
+  @NumberIn(-U, U, 'Forward of the bellhousing face (u > 0), within the bottom outline')
+  @IsPositive({ message: 'sumpCenterU must be more than 0: the sump centre lies forward of the bellhousing face (u grows forward)' })
+  @WithinOutlineLength('bottomProfile', 'the sump is part of the pan')
+  sumpCenterU: number;
   @NumberIn(-W, 0) @IsNegative({ message: 'sumpFloorW must be negative: the sump floor lies below the crank' }) sumpFloorW: number;
   @ListOf(DIPSTICK_LOCATIONS, 0, 4) dipstickProvision: Array<(typeof DIPSTICK_LOCATIONS)[number]>;
   @NumberIn(0.5, 40) capacityL: number;
@@ -234,7 +239,7 @@ export class TransmissionSpecDto implements TransmissionSpec {
   @Text(40) bellPattern: string;
   @NumberIn(100, 3000, 'Bell face to the slip-yoke U-joint centre') lengthToOutputMm: number;
   @Nested(() => TransmissionPointDto) mountPoint: TransmissionPointDto;
-  @NestedList(() => TransmissionPointDto, 3, 200, 'Side outline, u ≤ 0') sideProfile: TransmissionPointDto[];
+  @PointList(() => TransmissionPointDto, 3, 200, 'Side outline, u ≤ 0') sideProfile: TransmissionPointDto[];
   @NumberIn(0, 400) slipYokeTravelMm: number;
   @NumberIn(0.3, 5) topGearRatio: number;
   @OptionalNumberIn(10, 1000) weightKg?: number;
@@ -246,7 +251,7 @@ export class ChassisObstacleDto {
   @Text(40) id: string;
   @Text() name: string;
   @OneOf(OBSTACLE_KINDS) kind: (typeof OBSTACLE_KINDS)[number];
-  @NestedList(() => ChassisPointDto, 3, 200, 'Closed outline, chassis frame side view') outline: ChassisPointDto[];
+  @PointList(() => ChassisPointDto, 3, 200, 'Closed outline, chassis frame side view') outline: ChassisPointDto[];
 }
 
 export class RailStationDto {
@@ -304,7 +309,7 @@ export class ChassisSpecDto implements ChassisSpec {
   @NumberIn(1000, 8000) wheelbaseMm: number;
   @OptionalNumberIn(0, 1500) rideHeightMm?: number;
   @NestedList(() => ChassisObstacleDto, 0, 60) obstacles: ChassisObstacleDto[];
-  @NestedList(() => ChassisPointDto, 2, 200, 'Underside of the hood, front to rear') hoodLine: ChassisPointDto[];
+  @PointList(() => ChassisPointDto, 2, 200, 'Underside of the hood, front to rear') hoodLine: ChassisPointDto[];
   @Nested(() => RadiatorCoreDto) radiatorCore: RadiatorCoreDto;
   @NestedList(() => RailStationDto, 1, 60) railStations: RailStationDto[];
   @OptionalNested(() => SteeringBoxDto) steeringBox?: SteeringBoxDto;

@@ -18,6 +18,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { NoRepeatedPoints } from '../../common/validation/form-values';
 
 /**
  * Reusable validation decorators for the part-spec DTOs: each pairs the OpenAPI description with the
@@ -143,6 +144,11 @@ export function NestedList(type: () => ClassType, min: number, max: number, desc
     ValidateNested({ each: true }),
     Type(type),
   );
+}
+
+/** A list of outline points: NestedList, and no two consecutive points the same (a zero-length edge is a slip). */
+export function PointList(type: () => ClassType, min: number, max: number, description?: string) {
+  return applyDecorators(NestedList(type, min, max, description), NoRepeatedPoints());
 }
 
 export function OptionalNestedList(type: () => ClassType, min: number, max: number, description?: string) {

@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsOptional, IsString, Matches, MaxLength } from 'class-validator';
 import { Trim } from '../../common/decorators/trim.decorator';
+import { IsPhoneText } from '../../common/validation/form-values';
 
 export class CreateCustomerDto {
   @ApiProperty({ maxLength: 120, example: 'Odile Straker' })
@@ -21,6 +22,7 @@ export class CreateCustomerDto {
   @IsString()
   @MaxLength(40)
   @Matches(/^[0-9+()\-.\s/x]*$/i, { message: 'phone may contain only digits, spaces and + ( ) - . / x' })
+  @IsPhoneText()
   phone?: string | null;
 
   @ApiPropertyOptional({ type: String, maxLength: 4000, nullable: true })

@@ -16,16 +16,25 @@ import {
 import { PROJECT_STATUSES, PROJECT_USES, ProjectStatus, ProjectUse } from '../project.entity';
 import { Trim } from '../../common/decorators/trim.decorator';
 
+/**
+ * Targets of an engine swap in kW: 10 kW (about 13 hp) is below any road engine, 2000 kW (about 2,680 hp) above any
+ * the shop fits. Source for the hp figures: NIST SP 811 (2008), Appendix B.9, 1 hp (550 ft·lbf/s) = 745.6999 W.
+ */
+const TARGET_POWER_KW = { min: 10, max: 2000 } as const;
+const TARGET_POWER_MESSAGE = `goals.targetPowerKw must be between ${TARGET_POWER_KW.min} and ${TARGET_POWER_KW.max} kW (about 13 to 2,680 hp); send power in kW as a number`;
+/** 100 million in the shop's currency, in cents: a larger budget is a typing slip. Common practice (no published source). */
+const MAX_BUDGET_CENTS = 100_000_000_00;
+
 export class ProjectGoalsDto {
   @ApiProperty({ enum: PROJECT_USES })
   @IsIn(PROJECT_USES, { message: `goals.use must be one of: ${PROJECT_USES.join(', ')}` })
   use: ProjectUse;
 
-  @ApiPropertyOptional({ type: Number, nullable: true, minimum: 1, maximum: 2000, description: 'kW, one decimal' })
+  @ApiPropertyOptional({ type: Number, nullable: true, minimum: TARGET_POWER_KW.min, maximum: TARGET_POWER_KW.max, description: 'kW, one decimal' })
   @IsOptional()
   @IsNumber({ maxDecimalPlaces: 1 }, { message: 'goals.targetPowerKw must be a number with at most one decimal' })
-  @Min(1)
-  @Max(2000)
+  @Min(TARGET_POWER_KW.min, { message: TARGET_POWER_MESSAGE })
+  @Max(TARGET_POWER_KW.max, { message: TARGET_POWER_MESSAGE })
   targetPowerKw?: number | null;
 
   @ApiPropertyOptional({ type: Number, nullable: true, minimum: 500, maximum: 12000 })
@@ -39,7 +48,9 @@ export class ProjectGoalsDto {
   @IsOptional()
   @IsInt()
   @Min(0)
-  @Max(100_000_000_00)
+  @Max(MAX_BUDGET_CENTS, {
+    message: `goals.budgetCents must be at most ${MAX_BUDGET_CENTS} (100,000,000.00 in the shop's currency, in cents): check the budget for extra digits`,
+  })
   budgetCents?: number | null;
 }
 
