@@ -76,3 +76,4 @@ export * from './measurements/measurement-entry';
 export * from './measurements/apply-measurement-sheet';
 export * from './oiling/pickup-for-pan';
 export * from './units/unit-format';
+export * from './fit-window/placement-proposal';

@@ -8,6 +8,7 @@ import { lowestPoint, obstaclesOfKinds, placeEngine, type PlacedEngine } from '.
 import { measureRailWidth, RAIL_WIDTH_ID, railForbiddenBands } from '../checks/envelope/rail-width';
 import { measureSteeringBox, STEERING_BOX_ID, steeringBoxGap } from '../checks/envelope/steering-box';
 import { TRANSMISSION_TUNNEL_ID, TUNNEL_KINDS } from '../checks/envelope/transmission-tunnel';
+import { goldenSectionMax } from '../geometry/golden-section';
 import { findBoundary } from '../geometry/lipschitz-solve';
 import { outlineGapValue } from '../geometry/outline-gap';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
@@ -93,7 +94,7 @@ interface Constraint {
   linear?: { a: number; slope: 1 | -1 };
 }
 
-interface ColumnModel {
+export interface ColumnModel {
   constant: Array<{ bound: WindowBound; margin: number }>;
   constraints: Constraint[];
   bands: Array<{ from: number; to: number; bound: WindowBound }>;
@@ -286,7 +287,7 @@ export function windowColumn(ctx: WindowContext, setbackMm: number, warm: Map<st
   return columnWithModel(ctx, setbackMm, warm).column;
 }
 
-function columnWithModel(ctx: WindowContext, setbackMm: number, warm: Map<string, number>): { column: FitWindowColumn; model: ColumnModel } {
+export function columnWithModel(ctx: WindowContext, setbackMm: number, warm: Map<string, number>): { column: FitWindowColumn; model: ColumnModel } {
   const column = solveColumn(ctx, setbackMm, warm, buildColumn(ctx.spec, ctx.settings, placeEngine(ctx.spec, { setbackMm, heightMm: 0, tiltDeg: ctx.tiltDeg })));
   return column;
 }
@@ -379,7 +380,7 @@ function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, nu
 }
 
 /** Smallest margin over every envelope constraint at a height (the best-placement objective). */
-function scoreAt(model: ColumnModel, z: number): { score: number; by: WindowBound } {
+export function scoreAt(model: ColumnModel, z: number): { score: number; by: WindowBound } {
   let score = Infinity;
   let by = WINDOW_RANGE;
   for (const c of model.constant) if (c.margin < score) ({ margin: score, bound: by } = c);
@@ -395,36 +396,8 @@ function scoreAt(model: ColumnModel, z: number): { score: number; by: WindowBoun
 }
 
 function maximiseOnInterval(model: ColumnModel, lo: number, hi: number): { z: number; score: number; by: WindowBound } {
-  // Golden-section search: the objective is a minimum of rising and falling margins, unimodal in practice;
-  // the ends and the middle are kept as fall-backs.
-  const g = (Math.sqrt(5) - 1) / 2;
-  let a = lo;
-  let b = hi;
-  let c = b - g * (b - a);
-  let d = a + g * (b - a);
-  let fc = scoreAt(model, c).score;
-  let fd = scoreAt(model, d).score;
-  for (let i = 0; i < 30 && b - a > 1e-2; i++) {
-    if (fc >= fd) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - g * (b - a);
-      fc = scoreAt(model, c).score;
-    } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + g * (b - a);
-      fd = scoreAt(model, d).score;
-    }
-  }
-  let best = { z: (a + b) / 2, ...scoreAt(model, (a + b) / 2) };
-  for (const z of [lo, hi, (lo + hi) / 2]) {
-    const s = scoreAt(model, z);
-    if (s.score > best.score) best = { z, ...s };
-  }
-  return best;
+  const { z } = goldenSectionMax((height) => scoreAt(model, height).score, lo, hi);
+  return { z, ...scoreAt(model, z) };
 }
 
 /** Margins of the envelope checks at a placement, from the check functions themselves. */
