@@ -134,6 +134,28 @@ mail_start() {
   echo "Mail fake: SMTP 127.0.0.1:$SMTP_PORT, captured mail at http://127.0.0.1:$MAIL_HTTP_PORT/messages"
 }
 
+# ---------------------------------------------------------------- payment provider fake
+# payment_start <profile> <default port> <api port>: the provider's API on 127.0.0.1, webhooks signed back to the API.
+payment_start() {
+  local profile=$1 default_port=$2 api_port=$3
+  PAYMENT_DIR="$LOCAL/$profile/payments"
+  mkdir -p "$PAYMENT_DIR"
+  PAYMENT_FAKE_PORT="$(free_port "$default_port")"
+  [ -f "$PAYMENT_DIR/webhook-secret" ] || echo "whsec_$(random_secret)" >"$PAYMENT_DIR/webhook-secret"
+  PAYMENT_SECRET_KEY="sk_test_local_$profile"
+  PAYMENT_WEBHOOK_SECRET="$(cat "$PAYMENT_DIR/webhook-secret")"
+  PAYMENT_FAKE_PORT=$PAYMENT_FAKE_PORT PAYMENT_SECRET_KEY=$PAYMENT_SECRET_KEY PAYMENT_WEBHOOK_SECRET=$PAYMENT_WEBHOOK_SECRET \
+    PAYMENT_WEBHOOK_URL="http://127.0.0.1:$api_port/api/payments/webhook" \
+    node --import tsx scripts/fakes/payment-fake.ts >"$PAYMENT_DIR/payments.log" 2>&1 &
+  echo $! >"$PAYMENT_DIR/pid"
+  local tries=0
+  until grep -q 'payment fake' "$PAYMENT_DIR/payments.log" 2>/dev/null; do
+    tries=$((tries + 1)); [ $tries -gt 200 ] && { cat "$PAYMENT_DIR/payments.log"; fail "payment fake did not start"; }
+    sleep 0.1
+  done
+  echo "Payment fake: http://127.0.0.1:$PAYMENT_FAKE_PORT (test cards: pm_card_visa pays, pm_card_chargeDeclined is declined)"
+}
+
 stop_pid_file() { [ -f "$1" ] && kill "$(cat "$1")" 2>/dev/null || true; rm -f "$1"; }
 
 # ---------------------------------------------------------------- environment for the API
@@ -154,6 +176,9 @@ export SMTP_HOST=127.0.0.1
 export SMTP_PORT=$SMTP_PORT
 export MAIL_FROM="Swapwright <no-reply@swapwright.test>"
 export MAIL_FAKE_URL=http://127.0.0.1:$MAIL_HTTP_PORT/messages
+export PAYMENT_API_URL=http://127.0.0.1:${PAYMENT_FAKE_PORT:-12111}
+export PAYMENT_SECRET_KEY=${PAYMENT_SECRET_KEY:-sk_test_local}
+export PAYMENT_WEBHOOK_SECRET=${PAYMENT_WEBHOOK_SECRET:-whsec_local_unset}
 # GET /api/dev/mail (owners only) relays the fake above; the test profile turns it on for the API suites.
 export DEV_MAIL_ENABLED=${DEV_MAIL_ENABLED_VALUE:-false}
 # Sign-in, sign-up and password-reset attempts per address and route per window; the suites sign in many times.
@@ -203,8 +228,9 @@ cmd_start() {
   db_start dev 3307 swapwright
   mail_start dev 2525
   local api_port; api_port="$(free_port "${SWAPWRIGHT_PORT:-3000}")"
+  payment_start dev 12111 "$api_port"
   write_env dev swapwright "$api_port"
-  trap 'say "Stopping"; kill $API_PID 2>/dev/null || true; wait $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; db_stop_dir "$DB_DIR"; echo "Stopped. Data kept in .local/dev (npm run reset wipes it)."' EXIT
+  trap 'say "Stopping"; kill $API_PID 2>/dev/null || true; wait $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"; echo "Stopped. Data kept in .local/dev (npm run reset wipes it)."' EXIT
   trap 'exit 0' INT TERM
   migrate_and_seed
   say "Starting the server"
@@ -240,8 +266,10 @@ cmd_test() {
   FRESH_DB=1 db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
   API_PID=""
-  trap 'kill $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
-  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$(free_port 3100)"
+  local api_port; api_port="$(free_port 3100)"
+  payment_start test 12121 "$api_port"
+  trap 'kill $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$api_port"
   SUITES_PASSED=(); SUITES_FAILED=()
 
   run_suite typecheck npm run -s typecheck
@@ -272,18 +300,21 @@ cmd_services() {
   ensure_debian_packages
   db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
-  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$(free_port 3100)"
+  local api_port; api_port="$(free_port 3100)"
+  payment_start test 12121 "$api_port"
+  NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$api_port"
   echo "Services running. Use: source .local/test/env.sh   (stop: bash scripts/stack.sh stop-services)"
 }
 
 cmd_stop_services() {
   stop_pid_file "$LOCAL/test/mail/pid"
+  stop_pid_file "$LOCAL/test/payments/pid"
   db_stop_dir "$LOCAL/test/mariadb"
 }
 
 cmd_reset() {
   for dir in "$LOCAL"/*/mariadb; do [ -d "$dir" ] && db_stop_dir "$dir"; done
-  for pid in "$LOCAL"/*/mail/pid; do [ -f "$pid" ] && stop_pid_file "$pid"; done
+  for pid in "$LOCAL"/*/mail/pid "$LOCAL"/*/payments/pid; do [ -f "$pid" ] && stop_pid_file "$pid"; done
   rm -rf "$LOCAL"
   echo "Local data wiped (.local/). The next npm start loads the demo shop again."
 }

@@ -23,6 +23,7 @@ import { LaborOperationsModule } from './labor-operations/labor-operations.modul
 import { MailModule } from './mail/mail.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
+import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
 import { ShopsModule } from './shops/shops.module';
 import { UsersModule } from './users/users.module';
@@ -74,6 +75,7 @@ import { UsersModule } from './users/users.module';
     PartsModule,
     LaborOperationsModule,
     QuotesModule,
+    PaymentsModule,
     HealthModule,
   ],
   providers: [

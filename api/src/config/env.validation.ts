@@ -100,6 +100,22 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @Max(86400)
   AUTH_RATE_WINDOW_SECONDS: number = 60;
 
+  /** The payment provider's API base (the local fake in development and test: http://127.0.0.1:<port>). */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true })
+  PAYMENT_API_URL?: string;
+
+  @IsOptional()
+  @IsString()
+  @MinLength(8)
+  PAYMENT_SECRET_KEY?: string;
+
+  /** Signs the provider's webhooks; the app refuses an event whose signature does not verify with it. */
+  @IsOptional()
+  @IsString()
+  @MinLength(8)
+  PAYMENT_WEBHOOK_SECRET?: string;
+
   /** The built web app; served for every non-/api path when set. */
   @IsOptional()
   @IsString()

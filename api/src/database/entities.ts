@@ -13,6 +13,7 @@ import { QuoteSettings } from '../quotes/quote-settings.entity';
 import { Quote } from '../quotes/quote.entity';
 import { Membership } from '../memberships/membership.entity';
 import { PARTS_ENTITIES } from '../parts/part.entity';
+import { DepositPayment, PaymentEvent } from '../payments/deposit-payment.entity';
 import { Project } from '../projects/project.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
@@ -20,4 +21,4 @@ import { User } from '../users/user.entity';
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
-  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification];
+  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent];

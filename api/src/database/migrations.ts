@@ -12,6 +12,7 @@ import { FitSelectionsMountAdapter1796100013000 } from './migrations/17961000130
 import { SessionRevocation1796235495169 } from './migrations/1796235495169-session-revocation';
 import { CreateParts1796236436524 } from './migrations/1796236436524-create-parts';
 import { CreateQuotes1796236709687 } from './migrations/1796236709687-create-quotes';
+import { CreateDepositPayments1796239097244 } from './migrations/1796239097244-create-deposit-payments';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -29,4 +30,5 @@ export const MIGRATIONS = [
   SessionRevocation1796235495169,
   CreateParts1796236436524,
   CreateQuotes1796236709687,
+  CreateDepositPayments1796239097244,
 ];

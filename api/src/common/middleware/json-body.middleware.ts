@@ -10,7 +10,9 @@ export const JSON_BODY_LIMIT = '1mb';
 const TOO_DEEP = 'entity.too.deep';
 
 /** Runs on the raw bytes before JSON.parse: a body nested deeper than MAX_JSON_DEPTH is refused unparsed. */
-function refuseDeepNesting(_request: Request, _response: Response, buffer: Buffer): void {
+function refuseDeepNesting(request: Request, _response: Response, buffer: Buffer): void {
+  // Signed webhooks are verified over the exact bytes received, so those keep them.
+  if (request.originalUrl?.startsWith('/api/payments/webhook')) (request as Request & { rawBody?: Buffer }).rawBody = buffer;
   if (jsonDepthExceeds(buffer, MAX_JSON_DEPTH)) throw Object.assign(new Error('too deep'), { status: 400, type: TOO_DEEP });
 }
 

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { QuotesModule } from '../quotes/quotes.module';
+import { DepositPayment, PaymentEvent } from './deposit-payment.entity';
+import { DepositsService } from './deposits.service';
+import { PaymentsController } from './payments.controller';
+import { PaymentsService } from './payments.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([DepositPayment, PaymentEvent]), QuotesModule],
+  controllers: [PaymentsController],
+  providers: [PaymentsService, DepositsService],
+})
+export class PaymentsModule {}
