@@ -1294,6 +1294,54 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/quotes/{id}/deposit": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["PaymentsController_payAsCustomer"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/quote-links/{token}/deposit": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["PaymentsController_payByLink"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payments/webhook": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["PaymentsController_webhook"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/health": {
         parameters: {
             query?: never;
@@ -3199,6 +3247,27 @@ export interface components {
             validityDays?: number;
             defaultMarkupPercent?: number;
             terms?: string;
+        };
+        PayDepositDto: {
+            /**
+             * @description The payment method the provider's card form returned (in test: pm_card_visa pays, pm_card_chargeDeclined is declined)
+             * @example pm_card_visa
+             */
+            paymentMethod: string;
+        };
+        DepositPaymentResponseDto: {
+            quoteId: string;
+            /** @enum {string} */
+            state: "pending" | "failed" | "paid";
+            amountCents: number;
+            currency: string;
+            /** @description What happens next, in words */
+            message: string;
+        };
+        WebhookAnswerDto: {
+            received: boolean;
+            /** @description False when the event was already applied (a duplicate or replay changes nothing) */
+            applied: boolean;
         };
         HealthResponseDto: {
             /** @example ok */
@@ -7570,6 +7639,77 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["QuoteSettingsResponseDto"];
+                };
+            };
+        };
+    };
+    PaymentsController_payAsCustomer: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PayDepositDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DepositPaymentResponseDto"];
+                };
+            };
+        };
+    };
+    PaymentsController_payByLink: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PayDepositDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DepositPaymentResponseDto"];
+                };
+            };
+        };
+    };
+    PaymentsController_webhook: {
+        parameters: {
+            query?: never;
+            header: {
+                "stripe-signature": string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WebhookAnswerDto"];
                 };
             };
         };
