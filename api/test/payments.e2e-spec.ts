@@ -27,11 +27,19 @@ describe('deposit payments through the provider SDK and its local fake', () => {
   const saved = { ...process.env };
 
   beforeAll(async () => {
-    const appPort = await freePort();
-    fake = await startPaymentFakeProcess(`http://127.0.0.1:${appPort}/api/payments/webhook`);
-    process.env.PAYMENT_API_URL = fake.url;
-    process.env.PAYMENT_SECRET_KEY = fake.secretKey;
-    process.env.PAYMENT_WEBHOOK_SECRET = fake.webhookSecret;
+    // The fake the test services run (scripts/stack.sh) sends its events to PORT; without it, start one here.
+    const { PAYMENT_API_URL, PAYMENT_SECRET_KEY, PAYMENT_WEBHOOK_SECRET, PORT } = process.env;
+    let appPort: number;
+    if (PAYMENT_API_URL && PAYMENT_SECRET_KEY && PAYMENT_WEBHOOK_SECRET && PORT) {
+      appPort = Number(PORT);
+      fake = { url: PAYMENT_API_URL, secretKey: PAYMENT_SECRET_KEY, webhookSecret: PAYMENT_WEBHOOK_SECRET, stop: async () => undefined };
+    } else {
+      appPort = await freePort();
+      fake = await startPaymentFakeProcess(`http://127.0.0.1:${appPort}/api/payments/webhook`);
+      process.env.PAYMENT_API_URL = fake.url;
+      process.env.PAYMENT_SECRET_KEY = fake.secretKey;
+      process.env.PAYMENT_WEBHOOK_SECRET = fake.webhookSecret;
+    }
     t = await createTestApp();
     await t.app.listen(appPort, '127.0.0.1');
     await resetData(t.dataSource);
@@ -90,7 +98,7 @@ describe('deposit payments through the provider SDK and its local fake', () => {
 
   it('a duplicate or replayed event changes nothing', async () => {
     const events = (await (await fetch(`${fake.url}/_fake/events`)).json()) as Stripe.Event[];
-    const succeeded = events.find((event) => event.type === 'payment_intent.succeeded')!;
+    const succeeded = events.filter((event) => event.type === 'payment_intent.succeeded').at(-1)!;
     const eventsBefore = await countRows(t.dataSource, 'payment_events');
     const quoteBefore = await quoteByLink();
     const redelivered = (await (await fetch(`${fake.url}/_fake/events/${succeeded.id}/deliver`, { method: 'POST' })).json()) as { delivered: number };
