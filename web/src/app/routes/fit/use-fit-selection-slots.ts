@@ -4,7 +4,7 @@ import { useCatalogItems } from '@/features/catalog/api/get-catalog-items';
 import type { CatalogItem, CatalogKind } from '@/features/catalog/types';
 import type { SelectionOption, SelectionSlot } from '@/features/fit-reports/components/selections-panel';
 import { partsOfSpec, type PartInfo } from '@/features/fit-reports/lib/remedies';
-import type { FitSelectionKey, FitSelections } from '@/features/fit-reports/types';
+import type { FitSelectionKey, FitSelections, FitSelectionsInput } from '@/features/fit-reports/types';
 import type { Project } from '@/features/projects/types';
 
 const ALL = { page: 1, pageSize: 100 } as const;
@@ -64,7 +64,7 @@ export type SelectionSlotsOptions = {
   canPickProjectParts: boolean;
   savingSelections: boolean;
   savingProject: boolean;
-  onSelect: (patch: Partial<FitSelections>) => void;
+  onSelect: (patch: FitSelectionsInput) => void;
   onProjectPart: (changes: Partial<Pick<Project, ProjectPartKey>>) => void;
 };
 

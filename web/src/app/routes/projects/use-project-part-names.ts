@@ -15,8 +15,8 @@ export function useProjectPartNames(project: Project | undefined, canReadCatalog
   const transmission = useCatalogItem('transmissions', staff ? project?.transmissionId : null);
 
   const reports = useFitReports(project?.id ?? '', { enabled: !canReadCatalog && Boolean(project) });
-  const latest = useFitReport(!canReadCatalog ? reports.data?.[0]?.id : undefined);
-  const spec = latest.data?.inputsSnapshot.spec;
+  const latest = useFitReport(!canReadCatalog ? reports.data?.items[0]?.id : undefined);
+  const spec = latest.data?.inputs.spec;
 
   if (canReadCatalog) return { chassis: chassis.data?.name, engine: engine.data?.name, transmission: transmission.data?.name };
   // a chosen part the latest report does not name shows as chosen by the shop

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import { normalizeStoredReport, type StoredFitReport } from '../types';
+import type { StoredFitReport } from '../types';
 import { fitReportKeys } from './fit-report-keys';
 
 export async function getFitReport(id: string, signal?: AbortSignal): Promise<StoredFitReport> {
   const { data } = await apiClient.get<StoredFitReport>(`/fit-reports/${encodeURIComponent(id)}`, { signal });
-  return normalizeStoredReport(data);
+  return data;
 }
 
 export const fitReportQueryOptions = (id: string) =>

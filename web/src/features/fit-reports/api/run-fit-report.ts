@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import { normalizeStoredReport, type StoredFitReport } from '../types';
+import type { StoredFitReport } from '../types';
 import { fitReportKeys } from './fit-report-keys';
 
 /** Runs the fit check on the server with the project's current inputs and stores the report. */
 export async function runFitReport(projectId: string): Promise<StoredFitReport> {
   const { data } = await apiClient.post<StoredFitReport>(`/projects/${encodeURIComponent(projectId)}/fit-reports`, {});
-  return normalizeStoredReport(data);
+  return data;
 }
 
 export function useRunFitReport({ onSuccess }: { onSuccess?: (report: StoredFitReport) => void } = {}) {

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { FitSelections } from '../types';
+import type { FitSelections, FitSelectionsInput } from '../types';
 import { fitReportKeys } from './fit-report-keys';
 
-export type UpdateFitSelectionsArgs = { projectId: string; selections: Partial<FitSelections> };
+export type UpdateFitSelectionsArgs = { projectId: string; selections: FitSelectionsInput };
 
 export async function updateFitSelections({ projectId, selections }: UpdateFitSelectionsArgs): Promise<FitSelections> {
   const { data } = await apiClient.put<FitSelections>(`/projects/${encodeURIComponent(projectId)}/fit-selections`, selections);

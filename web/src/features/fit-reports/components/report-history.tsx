@@ -1,12 +1,11 @@
-import { compareFitReports as diffReports, type FindingDelta } from '@swapwright/shared';
 import { Alert, Button, Flex, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
-import { useFitReport } from '../api/get-fit-report';
+import { useFitReportComparison } from '../api/compare-fit-reports';
 import { useFitReports } from '../api/get-fit-reports';
-import { summaryOf, type FitReportListItem, type FitSummary } from '../types';
+import type { FitReportComparison, FitReportListItem, FitSummary } from '../types';
 import { CheckStatusTag } from './check-status-tag';
 
 export type ReportHistoryProps = {
@@ -29,6 +28,8 @@ export function SummaryTags({ summary }: { summary?: FitSummary }) {
   );
 }
 
+type FindingDelta = FitReportComparison['changes'][number];
+
 const changeWords: Record<FindingDelta['change'], string> = {
   improved: 'Better',
   worse: 'Worse',
@@ -37,13 +38,13 @@ const changeWords: Record<FindingDelta['change'], string> = {
   removed: 'Dropped',
 };
 
+/** What changed between an older report `a` and a newer report `b`, as the server compares them. */
 function ReportComparison({ a, b }: { a: string; b: string }) {
   const units = useUnits();
-  const ra = useFitReport(a);
-  const rb = useFitReport(b);
-  const deltas = useMemo(() => (ra.data && rb.data ? diffReports(ra.data.results, rb.data.results) : null), [ra.data, rb.data]);
-  if (ra.isError || rb.isError) return <Alert type="error" title="One of the two reports could not be loaded." />;
-  if (!deltas) return <Typography.Text type="secondary">Loading the two reports…</Typography.Text>;
+  const comparison = useFitReportComparison(a, b);
+  if (comparison.isError) return <Alert type="error" title="The two reports could not be compared." />;
+  if (!comparison.data) return <Typography.Text type="secondary">Comparing the two reports…</Typography.Text>;
+  const deltas = comparison.data.changes;
   const changed = deltas.filter((d) => d.change !== 'same');
   const columns: ColumnsType<FindingDelta> = [
     { title: 'Check', dataIndex: 'title', key: 'title' },
@@ -94,7 +95,7 @@ export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryPro
         </Flex>
       ),
     },
-    { title: 'By', key: 'by', render: (_, r) => r.createdByName || r.createdBy?.name || '—', responsive: ['md'] },
+    { title: 'By', key: 'by', render: (_, r) => r.createdByName ?? '—', responsive: ['md'] },
     {
       title: 'Placement',
       key: 'placement',
@@ -102,10 +103,10 @@ export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryPro
       render: (_, r) =>
         r.placement ? `${units.formatLength(r.placement.setbackMm)} back · ${units.formatLength(r.placement.heightMm)} up · ${r.placement.tiltDeg.toFixed(1)}°` : '—',
     },
-    { title: 'Result', key: 'summary', render: (_, r) => <SummaryTags summary={summaryOf(r)} /> },
+    { title: 'Result', key: 'summary', render: (_, r) => <SummaryTags summary={r.counts} /> },
   ];
 
-  const items = reports.data ?? [];
+  const items = reports.data?.items ?? [];
   return (
     <Flex vertical gap={12} data-testid="report-history">
       <Table<FitReportListItem>

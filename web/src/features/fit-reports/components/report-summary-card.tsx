@@ -12,7 +12,7 @@ export type ReportSummaryCardProps = {
 
 /** Which report is on screen, its counts, and what the server filled in or left out when it ran. */
 export function ReportSummaryCard({ stored, shown, isPreview }: ReportSummaryCardProps) {
-  const notes = stored.inputsSnapshot.notes ?? [];
+  const notes = stored.inputs.notes;
   return (
     <Card
       className="fit-report-summary"

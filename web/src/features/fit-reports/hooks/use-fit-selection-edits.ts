@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { notifySuccess } from '@/lib/notifier';
 import { useUpdateFitSelections } from '../api/update-fit-selections';
 import { selectionKeyFor } from '../lib/remedies';
-import type { FitSelections } from '../types';
+import type { FitSelections, FitSelectionsInput } from '../types';
 
 /** The fields the selections PUT accepts; it replaces the whole selection, so every one is sent. */
 const SELECTION_FIELDS = [
@@ -21,13 +21,13 @@ const SELECTION_FIELDS = [
   'continuousPowerKw',
 ] as const;
 
-function selectionBody(current: FitSelections | undefined, patch: Partial<FitSelections>): Partial<FitSelections> {
-  const body: Record<string, unknown> = {};
+function selectionBody(current: FitSelections | undefined, patch: FitSelectionsInput): FitSelectionsInput {
+  const body: FitSelectionsInput = {};
   for (const f of SELECTION_FIELDS) {
     const v = f in patch ? patch[f] : current?.[f];
-    if (v !== undefined) body[f] = v;
+    if (v !== undefined) Object.assign(body, { [f]: v });
   }
-  return body as Partial<FitSelections>;
+  return body;
 }
 
 export type FitSelectionEditsOptions = {
@@ -47,14 +47,14 @@ export function useFitSelectionEdits({ projectId, selections, spec, catalogPans,
   const update = useUpdateFitSelections({ onSuccess: () => onSaved?.() });
   const [busyPartId, setBusyPartId] = useState<string | null>(null);
 
-  const save = async (patch: Partial<FitSelections>) => {
+  const save = async (patch: FitSelectionsInput) => {
     await update.mutateAsync({ projectId, selections: selectionBody(selections, patch) });
   };
 
   const choosePart = async (remedy: PartRemedy, partId: string) => {
     const key = selectionKeyFor[remedy.category];
     if (!key) return;
-    const patch: Partial<FitSelections> = { [key]: partId };
+    const patch: FitSelectionsInput = { [key]: partId };
     let extra = '';
     if (key === 'oilPanId') {
       const pan = spec?.candidates?.oilPans?.find((x) => x.id === partId) ?? catalogPans.find((x) => x.id === partId);

@@ -6,7 +6,7 @@ import { useFitReports } from '../api/get-fit-reports';
 export function useOpenReport(projectId: string) {
   const reports = useFitReports(projectId);
   const [openId, setOpenId] = useState<string | undefined>();
-  const reportId = openId ?? reports.data?.[0]?.id;
+  const reportId = openId ?? reports.data?.items[0]?.id;
   const report = useFitReport(reportId);
   return { reports, report, reportId, openReport: setOpenId };
 }

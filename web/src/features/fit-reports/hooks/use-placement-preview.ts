@@ -4,21 +4,16 @@ import { samePlacement } from '../components/placement-controls';
 import { fitWindowFor, previewFitCheck, withPlacement } from '../lib/fit-engine';
 import type { StoredFitReport } from '../types';
 
-function settingsOf(report: StoredFitReport) {
-  return (report.results.settings ?? report.inputsSnapshot.settingsOverrides ?? report.inputsSnapshot.settings ?? undefined) as
-    | Parameters<typeof previewFitCheck>[2]
-    | undefined;
-}
-
 /**
  * A stored report and a placement the person is trying out: the fit engine runs here in the browser on the report's
  * inputs at the tried placement, and the fit window is searched around the stored placement at the tried tilt.
  */
 export function usePlacementPreview(stored: StoredFitReport | undefined) {
   const [preview, setPreview] = useState<Placement | null>(null);
-  const spec = stored?.inputsSnapshot.spec;
-  const settings = stored ? settingsOf(stored) : undefined;
-  const storedPlacement = stored?.results.placement ?? spec?.placement ?? null;
+  const spec = stored?.inputs.spec;
+  /** The thresholds the stored run used (defaults plus the shop's overrides). */
+  const settings = stored?.report.settings;
+  const storedPlacement = stored?.report.placement ?? null;
   const placement = preview ?? storedPlacement;
   const isPreview = Boolean(preview && storedPlacement && !samePlacement(preview, storedPlacement));
 
@@ -26,11 +21,11 @@ export function usePlacementPreview(stored: StoredFitReport | undefined) {
 
   const shown = useMemo(() => {
     if (!stored || !spec) return null;
-    if (!isPreview || !preview) return stored.results;
+    if (!isPreview || !preview) return stored.report;
     try {
       return previewFitCheck(spec, preview, settings);
     } catch {
-      return stored.results;
+      return stored.report;
     }
   }, [stored, spec, isPreview, preview, settings]);
 

@@ -7,6 +7,7 @@ import { createTestQueryClient, renderWithApp } from '@/test/render';
 import { userStub } from '@/test/fixtures';
 import { authKeys } from '@/features/auth/api/auth-keys';
 import { previewFitCheck } from '@/features/fit-reports/lib/fit-engine';
+import type { FitReportListItem, StoredFitReport } from '@/features/fit-reports/types';
 import type { Project } from '@/features/projects/types';
 import type { Role } from '@/types/api';
 import { RequireRole } from '../../../guards';
@@ -29,13 +30,30 @@ const project: Project = {
   updatedAt: '2026-11-02T10:00:00.000Z',
 };
 
-const listItem = { id: 'r1', projectId: 'p1', createdAt: '2026-11-02T10:00:00.000Z', createdByName: 'Sam Reyes' };
-const stored = { ...listItem, results: previewFitCheck(DEMO_FIT_SPEC, DEMO_FIT_SPEC.placement), inputsSnapshot: { spec: DEMO_FIT_SPEC } };
+const engineReport = previewFitCheck(DEMO_FIT_SPEC, DEMO_FIT_SPEC.placement);
+const listItem: FitReportListItem = {
+  id: 'r1',
+  projectId: 'p1',
+  createdAt: '2026-11-02T10:00:00.000Z',
+  createdById: 'u1',
+  createdByName: 'Sam Reyes',
+  engineVersion: engineReport.engineVersion,
+  placement: DEMO_FIT_SPEC.placement,
+  placementSource: 'project',
+  counts: engineReport.summary,
+  worstStatus: 'fails',
+  caution: engineReport.caution,
+};
+const stored: StoredFitReport = {
+  ...listItem,
+  report: engineReport,
+  inputs: { spec: DEMO_FIT_SPEC, settingsOverrides: {}, placementSource: 'project', notes: [] },
+};
 
 function mockApi() {
   return vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => {
     if (url === '/projects/p1') return { data: project };
-    if (url === '/projects/p1/fit-reports') return { data: [listItem] };
+    if (url === '/projects/p1/fit-reports') return { data: { items: [listItem], total: 1, page: 1, pageSize: 50 } };
     if (url === '/fit-reports/r1') return { data: stored };
     if (url.startsWith('/catalog/')) return { data: { items: [], total: 0, page: 1, pageSize: 100 } };
     if (url.endsWith('/fit-selections')) return { data: { oilPanId: null, oilPickupId: null, oilPumpId: null, controllerId: null, accessoryDriveId: null } };
