@@ -26,7 +26,7 @@ const CustomersPage = lazyNamed(() => import('./routes/customers/customers-page'
 const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'MembersPage');
 const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings-page'), 'ShopSettingsPage');
 const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'WorkOrdersPage');
-const PartsCounterPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'PartsCounterPage');
+const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
 const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
 const ProjectFitPage = lazyNamed(() => import('./routes/fit/project-fit-page'), 'ProjectFitPage');
 const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');

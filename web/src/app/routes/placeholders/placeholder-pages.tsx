@@ -36,18 +36,6 @@ export function WorkOrdersPage() {
   );
 }
 
-export function PartsCounterPage() {
-  return (
-    <Placeholder
-      testId="parts-counter-placeholder"
-      title="Parts counter"
-      subtitle="Matched parts lists, stock, reservations and pick lists."
-      heading="The parts counter arrives with the catalog"
-      body="Approved parts plans will land here with stock on hand and bin locations, ready to reserve and pick."
-    />
-  );
-}
-
 export function CatalogPage() {
   return (
     <Placeholder

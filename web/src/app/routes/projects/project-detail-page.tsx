@@ -13,6 +13,7 @@ import { ProjectGoalsCard, ProjectPlacementCard, ProjectSelectionsCard } from '@
 import { ProjectFormDrawer } from '@/features/projects/components/project-form-drawer';
 import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
+import { PartsPlanCard } from '@/features/parts-plans/components/parts-plan-card';
 import { useShop } from '@/features/shop/api/get-shop';
 import { canEditProjects, canRunFitCheck } from '../../navigation';
 import { useCustomerOptions } from '../shared/use-customer-options';
@@ -94,6 +95,11 @@ export function ProjectDetailPage() {
         <Col xs={24}>
           <ProjectPlacementCard project={p} />
         </Col>
+        {!isCustomer && (
+          <Col xs={24}>
+            <PartsPlanCard projectId={p.id} canBuild={canEdit} currency={currency} />
+          </Col>
+        )}
       </Row>
       {canEdit && (
         <ProjectFormDrawer

@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { CounterLine } from './get-counter-lines';
+import { counterKeys } from './counter-keys';
+
+export async function receiveCounterLine({ lineId, location }: { lineId: string; location: string }): Promise<CounterLine> {
+  const { data } = await apiClient.post<CounterLine>(`/counter-lines/${encodeURIComponent(lineId)}/receive`, { location });
+  return data;
+}
+
+export function useReceiveCounterLine() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: receiveCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+}

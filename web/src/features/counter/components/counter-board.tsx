@@ -1,0 +1,133 @@
+import { Button, Card, Empty, Select, Space, Table, Tag, Typography } from 'antd';
+import { useState } from 'react';
+import { formatMoneyCents } from '@/lib/units';
+import { downloadPickList } from '../api/download-pick-list';
+import { type CounterLine, useCounterLines } from '../api/get-counter-lines';
+import { useRecentPartsPlans } from '../api/get-recent-parts-plans';
+import { useMarkCounterLine } from '../api/mark-counter-line';
+import { useReceiveCounterLine } from '../api/receive-counter-line';
+import { useReleaseCounterLine } from '../api/release-counter-line';
+import { useReserveCounterLine } from '../api/reserve-counter-line';
+
+const STATUS_COLORS: Record<string, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue' };
+const STATUS_LABELS: Record<string, string> = { open: 'Not set aside', reserved: 'Set aside', 'to-order': 'To order', ordered: 'Ordered', received: 'Arrived, set aside' };
+
+/** The counter's job board: each project's latest plan as a matched parts list with stock and bins, reservations and a printable pick list. */
+export function CounterBoard() {
+  const plans = useRecentPartsPlans();
+  const [chosen, setChosen] = useState<string>();
+  const planId = chosen ?? plans.data?.[0]?.id;
+  const plan = plans.data?.find((p) => p.id === planId);
+  const lines = useCounterLines(planId);
+  const reserve = useReserveCounterLine();
+  const release = useReleaseCounterLine();
+  const mark = useMarkCounterLine();
+  const receive = useReceiveCounterLine();
+
+  if (plans.data && plans.data.length === 0) {
+    return (
+      <Card>
+        <Empty description="No parts plans yet. Once an estimator builds a plan for a project, its parts list lands here." />
+      </Card>
+    );
+  }
+
+  const binOf = (line: CounterLine) => {
+    const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
+    return from ? `${from.location} · ${from.bin || 'no bin'}` : 'no location';
+  };
+
+  return (
+    <Card
+      className="pick-list"
+      title={
+        <Space wrap>
+          <span>Parts list for</span>
+          <Select
+            aria-label="Job"
+            className="no-print"
+            style={{ minWidth: 320 }}
+            loading={plans.isLoading}
+            value={planId}
+            onChange={setChosen}
+            options={(plans.data ?? []).map((p) => ({ value: p.id, label: `${p.projectTitle} · plan v${p.version}` }))}
+          />
+          <span className="print-only">{plan ? `${plan.projectTitle} · plan v${plan.version}` : ''}</span>
+        </Space>
+      }
+      extra={
+        planId && (
+          <Space className="no-print">
+            <Button onClick={() => window.print()}>Print pick list</Button>
+            <Button onClick={() => void downloadPickList(planId)}>Export CSV</Button>
+          </Space>
+        )
+      }
+    >
+      <Table<CounterLine>
+        size="small"
+        rowKey="id"
+        loading={lines.isLoading}
+        pagination={false}
+        dataSource={lines.data ?? []}
+        scroll={{ x: true }}
+        columns={[
+          { title: 'SKU', dataIndex: 'sku' },
+          { title: 'Part', dataIndex: 'description' },
+          { title: 'Qty', dataIndex: 'quantity', align: 'right' },
+          { title: 'On hand', dataIndex: 'onHand', align: 'right' },
+          { title: 'Free', dataIndex: 'available', align: 'right' },
+          { title: 'Location and bin', key: 'bin', render: (_, line) => binOf(line) },
+          {
+            title: 'State',
+            dataIndex: 'status',
+            render: (status: string) => (
+              <Tag color={STATUS_COLORS[status]} data-testid="line-status">
+                {STATUS_LABELS[status] ?? status}
+              </Tag>
+            ),
+          },
+          {
+            title: 'Action',
+            key: 'action',
+            className: 'no-print',
+            render: (_, line) => (
+              <Space wrap>
+                {['open', 'to-order', 'ordered'].includes(line.status) && (
+                  <Button size="small" type="primary" disabled={line.available < line.quantity} loading={reserve.isPending && reserve.variables === line.id} onClick={() => reserve.mutate(line.id)}>
+                    Reserve
+                  </Button>
+                )}
+                {(line.status === 'reserved' || line.status === 'received') && (
+                  <Button size="small" onClick={() => release.mutate(line.id)}>
+                    Release
+                  </Button>
+                )}
+                {line.status === 'open' && (
+                  <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'to-order' })}>
+                    To order
+                  </Button>
+                )}
+                {(line.status === 'open' || line.status === 'to-order') && (
+                  <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'ordered' })}>
+                    Ordered
+                  </Button>
+                )}
+                {(line.status === 'ordered' || line.status === 'to-order') && (
+                  <Button size="small" onClick={() => receive.mutate({ lineId: line.id, location: line.stock[0]?.location ?? 'Main store' })}>
+                    Received
+                  </Button>
+                )}
+              </Space>
+            ),
+          },
+        ]}
+      />
+      {plan && (
+        <Typography.Paragraph type="secondary" style={{ marginTop: 12 }}>
+          Plan total {formatMoneyCents(plan.totalCents)} (parts and labor). Check each part against the plan before it leaves the counter.
+        </Typography.Paragraph>
+      )}
+    </Card>
+  );
+}

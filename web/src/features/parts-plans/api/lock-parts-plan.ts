@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { PartsPlan } from './get-project-parts-plans';
+import { partsPlanKeys } from './parts-plan-keys';
+
+export async function lockPartsPlan(planId: string): Promise<PartsPlan> {
+  const { data } = await apiClient.post<PartsPlan>(`/parts-plans/${encodeURIComponent(planId)}/lock`);
+  return data;
+}
+
+export function useLockPartsPlan() {
+  const client = useQueryClient();
+  return useMutation({ mutationFn: lockPartsPlan, onSuccess: () => client.invalidateQueries({ queryKey: partsPlanKeys.all }) });
+}

@@ -1,0 +1,141 @@
+import { Alert, Button, Card, Descriptions, Empty, List, Select, Space, Table, Tag, Typography } from 'antd';
+import type { PartsPlanResult, PlanObjective, PlanPartPick } from '@swapwright/shared';
+import { PLAN_OBJECTIVES } from '@swapwright/shared';
+import { useState } from 'react';
+import { formatMoneyCents } from '@/lib/units';
+import { useBuildPartsPlan } from '../api/build-parts-plan';
+import { useProjectPartsPlans } from '../api/get-project-parts-plans';
+import { useLockPartsPlan } from '../api/lock-parts-plan';
+
+const OBJECTIVE_LABELS: Record<PlanObjective, string> = {
+  'lowest-cost': 'Lowest total (parts + labor)',
+  'least-fabrication': 'Fewest fabrication hours',
+  'in-stock': 'Only what is on the shelf now',
+};
+
+export type PartsPlanCardProps = { projectId: string; canBuild: boolean; currency?: string };
+
+/** The project's parts plan: build a version, see each pick explained, what stays unresolved, lock it for a quote. */
+export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardProps) {
+  const plans = useProjectPartsPlans(projectId);
+  const build = useBuildPartsPlan(projectId);
+  const lock = useLockPartsPlan();
+  const [objective, setObjective] = useState<PlanObjective>('lowest-cost');
+  const latest = plans.data?.[0];
+  const result = latest?.result as unknown as PartsPlanResult | undefined;
+  const money = (cents: number) => formatMoneyCents(cents, currency);
+
+  return (
+    <Card
+      title="Parts plan"
+      data-testid="parts-plan-card"
+      extra={
+        canBuild && (
+          <Space wrap>
+            <Select<PlanObjective>
+              aria-label="Plan objective"
+              value={objective}
+              onChange={setObjective}
+              style={{ minWidth: 240 }}
+              options={PLAN_OBJECTIVES.map((value) => ({ value, label: OBJECTIVE_LABELS[value] }))}
+            />
+            <Button type="primary" loading={build.isPending} onClick={() => build.mutate({ objective })}>
+              Build plan
+            </Button>
+          </Space>
+        )
+      }
+    >
+      {!latest || !result ? (
+        <Empty description={canBuild ? 'No plan yet: build one from the latest fit check and the catalog.' : 'No parts plan yet.'} />
+      ) : (
+        <Space direction="vertical" style={{ width: '100%' }} size="middle">
+          <Descriptions size="small" column={{ xs: 1, md: 4 }}>
+            <Descriptions.Item label="Version">
+              {latest.version} {latest.status === 'locked' ? <Tag color="blue">Locked for quote</Tag> : <Tag>Draft</Tag>}
+            </Descriptions.Item>
+            <Descriptions.Item label="Aim">{OBJECTIVE_LABELS[latest.objective as PlanObjective] ?? latest.objective}</Descriptions.Item>
+            <Descriptions.Item label="Parts">{money(result.totals.partsCents)}</Descriptions.Item>
+            <Descriptions.Item label="Labor">
+              {money(result.totals.laborCents)} ({result.totals.laborHours} h)
+            </Descriptions.Item>
+            <Descriptions.Item label="Total">
+              <strong data-testid="plan-total">{money(result.totals.totalCents)}</strong>
+            </Descriptions.Item>
+            <Descriptions.Item label="Fabrication">{result.totals.fabricationHours} h</Descriptions.Item>
+          </Descriptions>
+          {result.notes.map((note) => (
+            <Alert key={note} type="info" showIcon message={note} />
+          ))}
+          <Table<PlanPartPick>
+            size="small"
+            rowKey="partId"
+            pagination={false}
+            dataSource={result.picks}
+            scroll={{ x: true }}
+            columns={[
+              { title: 'SKU', dataIndex: 'sku' },
+              { title: 'Part', dataIndex: 'description' },
+              { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => money(v) },
+              { title: 'Labor', dataIndex: 'laborHours', align: 'right', render: (v: number) => `${v} h` },
+              {
+                title: 'Why',
+                key: 'why',
+                render: (_, pick) => (
+                  <div data-testid={`pick-${pick.sku}`}>
+                    {pick.resolves.length > 0 && <div>Resolves: {pick.resolves.map((r) => r.title).join(', ')}</div>}
+                    {pick.broughtInBy.map((why) => (
+                      <div key={why}>Brought in: {why}</div>
+                    ))}
+                    {pick.rejected.length > 0 && (
+                      <Typography.Text type="secondary">
+                        Cheaper, not chosen: {pick.rejected.map((r) => `${r.sku} (${money(r.totalCents)}) ${r.reason}`).join('; ')}
+                      </Typography.Text>
+                    )}
+                  </div>
+                ),
+              },
+            ]}
+          />
+          {result.operations.length > 0 && (
+            <List
+              size="small"
+              header="Fabrication and labor operations"
+              dataSource={result.operations}
+              renderItem={(op) => <List.Item>{op.explanation}</List.Item>}
+            />
+          )}
+          {result.kept.length > 0 && (
+            <Typography.Text type="secondary">Kept as fitted: {result.kept.map((k) => k.name).join(', ')}.</Typography.Text>
+          )}
+          {result.unresolved.length > 0 && (
+            <Alert
+              type="warning"
+              showIcon
+              message="Not resolved by this plan"
+              description={
+                <ul style={{ margin: 0, paddingLeft: 18 }}>
+                  {result.unresolved.map((u) => (
+                    <li key={u.checkId}>
+                      <strong>{u.title}</strong>: {u.reason}
+                      {u.catalogNeeds.length > 0 && `. The catalog would need: ${u.catalogNeeds.join('; ')}`}
+                    </li>
+                  ))}
+                </ul>
+              }
+            />
+          )}
+          <Typography.Text type="secondary">
+            Re-checked with the chosen parts: {String((latest.recheck as { summary?: { fails?: number } }).summary?.fails ?? 0)} checks still fail. Fuel
+            system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
+          </Typography.Text>
+          {canBuild && latest.status !== 'locked' && (
+            <Button loading={lock.isPending} onClick={() => lock.mutate(latest.id)}>
+              Lock version {latest.version} for a quote
+            </Button>
+          )}
+        </Space>
+      )}
+    </Card>
+  );
+}

@@ -1,0 +1,116 @@
+import { Alert, Button, Card, Form, Progress, Select, Space, Table, Typography, Upload } from 'antd';
+import Papa from 'papaparse';
+import { useState } from 'react';
+import { saveBlob } from '@/lib/download';
+import { useImportParts } from '../api/import-parts';
+import { type ImportPreview, usePreviewPartsImport } from '../api/preview-parts-import';
+
+const FIELDS = ['sku', 'description', 'category', 'price', 'cost', 'supplier', 'supplierSku', 'laborHours', 'location', 'bin', 'onHand'] as const;
+const REQUIRED = new Set(['sku', 'description', 'category', 'price']);
+
+/** The rejected rows as a CSV the clerk can fix and upload again, with the errors in a last column. */
+function downloadRejected(preview: ImportPreview): void {
+  const fields = [...preview.headers, 'errors'];
+  const data = preview.rejected.map((r) => [...preview.headers.map((h) => r.cells[h] ?? ''), r.errors.join('; ')]);
+  saveBlob(new Blob([Papa.unparse({ fields, data }, { escapeFormulae: true })], { type: 'text/csv' }), 'rejected-rows.csv');
+}
+
+/** Upload a supplier's file, map its columns, see every row's errors, then import it all or nothing. */
+export function PartsImport() {
+  const [file, setFile] = useState<File | null>(null);
+  const [mapping, setMapping] = useState<Record<string, string>>({});
+  const [progress, setProgress] = useState(0);
+  const preview = usePreviewPartsImport();
+  const run = useImportParts();
+  const result = preview.data;
+
+  const check = (next: File, nextMapping: Record<string, string>) =>
+    preview.mutate({ file: next, mapping: nextMapping, onProgress: setProgress }, { onSuccess: (p) => setMapping(p.mapping) });
+
+  return (
+    <Card title="Import a supplier's catalog or price file (CSV)">
+      <Space direction="vertical" style={{ width: '100%' }}>
+        <Upload
+          accept=".csv,text/csv"
+          maxCount={1}
+          beforeUpload={(chosen) => {
+            setFile(chosen);
+            setMapping({});
+            run.reset();
+            check(chosen, {});
+            return false;
+          }}
+          showUploadList={{ showRemoveIcon: false }}
+        >
+          <Button>Choose CSV file</Button>
+        </Upload>
+        {(preview.isPending || run.isPending) && <Progress percent={progress} status="active" aria-label="Upload progress" />}
+        {result && file && (
+          <>
+            <Form layout="inline">
+              {FIELDS.map((field) => (
+                <Form.Item key={field} label={field} required={REQUIRED.has(field)} style={{ marginBottom: 8 }}>
+                  <Select
+                    aria-label={`Column for ${field}`}
+                    allowClear
+                    style={{ width: 170 }}
+                    value={mapping[field]}
+                    options={result.headers.map((h) => ({ value: h, label: h }))}
+                    onChange={(header?: string) => {
+                      const next = { ...mapping };
+                      if (header) next[field] = header;
+                      else delete next[field];
+                      setMapping(next);
+                      check(file, next);
+                    }}
+                  />
+                </Form.Item>
+              ))}
+            </Form>
+            {result.unmapped.length > 0 ? (
+              <Alert type="info" showIcon message={`Choose the file's columns for: ${result.unmapped.join(', ')}.`} />
+            ) : result.errors.length > 0 ? (
+              <Alert
+                type="error"
+                showIcon
+                message={`${result.rejected.length} of ${result.rowCount} rows have errors. Nothing is imported until every row is right.`}
+                action={<Button onClick={() => downloadRejected(result)}>Download rejected rows</Button>}
+              />
+            ) : (
+              <Alert type="success" showIcon message={`${result.validCount} rows ready to import.`} data-testid="import-ready" />
+            )}
+            {result.warnings.length > 0 && (
+              <Alert type="warning" showIcon message={`${result.warnings.length} cells start like spreadsheet formulas; they are stored as plain text and exported escaped.`} />
+            )}
+            {result.errors.length > 0 && (
+              <Table
+                size="small"
+                rowKey={(e) => `${e.row}-${e.field}`}
+                dataSource={result.errors}
+                pagination={{ pageSize: 10 }}
+                columns={[
+                  { title: 'Line', dataIndex: 'row' },
+                  { title: 'Column', dataIndex: 'field' },
+                  { title: 'Problem', dataIndex: 'message' },
+                ]}
+              />
+            )}
+            <Button
+              type="primary"
+              disabled={result.unmapped.length > 0 || result.errors.length > 0}
+              loading={run.isPending}
+              onClick={() => run.mutate({ file, mapping, onProgress: setProgress })}
+            >
+              Import {result.validCount} rows
+            </Button>
+            {run.data && (
+              <Typography.Text data-testid="import-done">
+                Imported: {run.data.inserted} new, {run.data.updated} updated.
+              </Typography.Text>
+            )}
+          </>
+        )}
+      </Space>
+    </Card>
+  );
+}

@@ -1,0 +1,58 @@
+import { Button, Input, Select, Space, Switch, Table, Typography } from 'antd';
+import { PART_CATEGORIES, PART_CATEGORY_LABELS, type CatalogPartCategory } from '@swapwright/shared';
+import { useState } from 'react';
+import { serverPagination } from '@/lib/table';
+import { formatMoneyCents } from '@/lib/units';
+import { downloadPartsCsv } from '../api/download-parts-csv';
+import { type Part, type PartListQuery, useParts } from '../api/get-parts';
+
+/** The shop's parts with stock and bins: server-side paging, search and filters. */
+export function PartsTable() {
+  const [query, setQuery] = useState<PartListQuery>({ page: 1, pageSize: 20 });
+  const parts = useParts(query);
+  return (
+    <Space direction="vertical" style={{ width: '100%' }}>
+      <Space wrap>
+        <Input.Search
+          aria-label="Search parts"
+          placeholder="SKU, description or supplier SKU"
+          allowClear
+          style={{ width: 280 }}
+          onSearch={(search) => setQuery((q) => ({ ...q, page: 1, search: search || undefined }))}
+        />
+        <Select<CatalogPartCategory>
+          aria-label="Category"
+          allowClear
+          placeholder="Every category"
+          style={{ width: 220 }}
+          options={PART_CATEGORIES.map((value) => ({ value, label: PART_CATEGORY_LABELS[value] }))}
+          onChange={(category) => setQuery((q) => ({ ...q, page: 1, category }))}
+        />
+        <Space>
+          <Switch aria-label="In stock only" onChange={(inStock) => setQuery((q) => ({ ...q, page: 1, inStock: inStock || undefined }))} />
+          <Typography.Text>In stock only</Typography.Text>
+        </Space>
+        <Button onClick={() => void downloadPartsCsv()}>Export CSV</Button>
+      </Space>
+      <Table<Part>
+        size="small"
+        rowKey="id"
+        loading={parts.isFetching}
+        dataSource={parts.data?.items ?? []}
+        pagination={serverPagination(query, parts.data?.total)}
+        onChange={(pagination) => setQuery((q) => ({ ...q, page: pagination.current ?? 1, pageSize: pagination.pageSize ?? 20 }))}
+        scroll={{ x: true }}
+        columns={[
+          { title: 'SKU', dataIndex: 'sku' },
+          { title: 'Description', dataIndex: 'description' },
+          { title: 'Category', dataIndex: 'category', render: (c: CatalogPartCategory) => PART_CATEGORY_LABELS[c] ?? c },
+          { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => formatMoneyCents(v) },
+          { title: 'Supplier', dataIndex: 'supplierName', render: (v: string | null, p) => (v ? `${v}${p.supplierSku ? ` · ${p.supplierSku}` : ''}` : '—') },
+          { title: 'On hand', dataIndex: 'onHand', align: 'right' },
+          { title: 'Free', dataIndex: 'available', align: 'right' },
+          { title: 'Bins', key: 'bins', render: (_, p) => p.stock.map((s) => `${s.location} ${s.bin}`.trim()).join(', ') || '—' },
+        ]}
+      />
+    </Space>
+  );
+}
