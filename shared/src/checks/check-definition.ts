@@ -1,6 +1,7 @@
 import type { CheckGroup, CheckStatus, Finding, FigureUnit, Remedy } from '../types/finding';
 import type { FitSpec } from '../types/fit-spec';
 import type { FitSettings } from '../settings/fit-settings';
+import type { WindowTermsOf } from './envelope/window-terms';
 
 export interface CheckContext {
   spec: FitSpec;
@@ -13,6 +14,8 @@ export interface CheckDefinition {
   title: string;
   /** True when the result depends on the engine's placement (setback, height, tilt). */
   dependsOnPlacement: boolean;
+  /** Envelope checks: how the check bounds the fit window, stated beside its rule (see window-terms.ts). */
+  windowTerms?: WindowTermsOf;
   run(context: CheckContext): Finding;
 }
 

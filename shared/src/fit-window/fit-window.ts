@@ -1,16 +1,8 @@
 import { ENVELOPE_CHECKS } from '../checks/envelope';
-import { FAN_RADIATOR_ID, measureFanGap } from '../checks/envelope/fan-radiator';
-import { GROUND_CLEARANCE_ID } from '../checks/envelope/ground-clearance';
-import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
-import { HOOD_ID, measureHood } from '../checks/envelope/hood';
-import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
-import { lowestPoint, obstaclesOfKinds, placeEngine, type PlacedEngine } from '../checks/envelope/placed-engine';
-import { measureRailWidth, RAIL_WIDTH_ID, railForbiddenBands } from '../checks/envelope/rail-width';
-import { measureSteeringBox, STEERING_BOX_ID, steeringBoxGap } from '../checks/envelope/steering-box';
-import { TRANSMISSION_TUNNEL_ID, TUNNEL_KINDS } from '../checks/envelope/transmission-tunnel';
+import { placeEngine, type PlacedEngine } from '../checks/envelope/placed-engine';
+import type { WindowBound } from '../checks/envelope/window-terms';
 import { goldenSectionMax } from '../geometry/golden-section';
 import { findBoundary } from '../geometry/lipschitz-solve';
-import { outlineGapValue } from '../geometry/outline-gap';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
 import type { CheckStatus } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
@@ -31,11 +23,7 @@ export interface FitWindowOptions {
   zMaxMm?: number;
 }
 
-/** What sets a bound: a check and the obstacle, or the end of the searched range. */
-export interface WindowBound {
-  checkId: string;
-  against: string;
-}
+export type { WindowBound } from '../checks/envelope/window-terms';
 
 export interface FitWindowInterval {
   lowMm: number;
@@ -102,93 +90,23 @@ export interface ColumnModel {
   widthMargins: (z: number) => Array<{ bound: WindowBound; margin: number }>;
 }
 
+/** The column's terms, collected from every envelope check's own window terms (see window-terms.ts). */
 function buildColumn(spec: FitSpec, settings: FitSettings, base: PlacedEngine): ColumnModel {
   const constant: ColumnModel['constant'] = [];
   const constraints: Constraint[] = [];
   const bands: ColumnModel['bands'] = [];
-  const chassis = spec.chassis;
-  if (base.pan) {
-    const pan = base.pan;
-    const ids: Array<[string, readonly FitSpec['chassis']['obstacles'][number]['kind'][]]> = [
-      ['envelope.sump-crossmember', PAN_OBSTACLE_KINDS.crossmember],
-      ['envelope.sump-steering-linkage', PAN_OBSTACLE_KINDS.steering],
-      ['envelope.sump-axle', PAN_OBSTACLE_KINDS.axle],
-    ];
-    for (const [checkId, kinds] of ids) {
-      for (const obstacle of obstaclesOfKinds(spec, kinds)) {
-        constraints.push({
-          bound: { checkId, against: obstacle.id },
-          trend: 'rises',
-          margin: (z) => outlineGapValue(pan, true, obstacle.outline, z) - settings.minGapBelowMm,
-        });
-      }
+  const marginReaders: Array<(heightMm: number) => Array<{ bound: WindowBound; margin: number }>> = [];
+  for (const check of ENVELOPE_CHECKS) {
+    const terms = check.windowTerms?.(spec, settings, base);
+    if (!terms) continue;
+    for (const c of terms.constraints ?? []) {
+      constraints.push({ bound: c.bound, trend: c.trend, margin: c.marginAt, linear: c.linear ? { a: c.linear.intercept, slope: c.linear.slope } : undefined });
     }
-    const low = lowestPoint(base, 0, chassis);
-    if (low) {
-      const a = low.clearanceMm - settings.minGroundClearanceMm;
-      constraints.push({ bound: { checkId: GROUND_CLEARANCE_ID, against: 'ground' }, trend: 'rises', margin: (z) => a + z, linear: { a, slope: 1 } });
-    }
+    constant.push(...(terms.constants ?? []));
+    for (const band of terms.bands ?? []) bands.push({ from: band.fromMm, to: band.toMm, bound: band.bound });
+    if (terms.marginsAt) marginReaders.push(terms.marginsAt);
   }
-  const hood = measureHood(base, chassis.hoodLine);
-  if (hood) {
-    const a = hood.clearance - settings.minHoodGapMm;
-    constraints.push({ bound: { checkId: HOOD_ID, against: 'hood' }, trend: 'falls', margin: (z) => a - z, linear: { a, slope: -1 } });
-  }
-  if (base.transmission) {
-    // Mirrored in z once: the drop that clears the tunnel is the lift of the mirror image (shifted by −z).
-    const trans = base.transmission.map((p) => ({ x: p.x, z: -p.z }));
-    for (const tunnel of obstaclesOfKinds(spec, [...TUNNEL_KINDS])) {
-      const roof = tunnel.outline.map((p) => ({ x: p.x, z: -p.z }));
-      constraints.push({
-        bound: { checkId: TRANSMISSION_TUNNEL_ID, against: tunnel.id },
-        // The tunnel is above the case: the margin falls as the engine rises; an overlap is the drop that clears it.
-        trend: 'falls',
-        margin: (z) => outlineGapValue(trans, true, roof, -z) - settings.minFirewallGapMm,
-      });
-    }
-  }
-  if (base.rearProfile.length) {
-    const rear = base.rearProfile;
-    for (const wall of obstaclesOfKinds(spec, [...FIREWALL_KINDS])) {
-      constraints.push({
-        bound: { checkId: HEADS_FIREWALL_ID, against: wall.id },
-        trend: 'any',
-        // Scanned upward, so an overlap is measured as the lift that clears it (the passing set is the same in any direction).
-        margin: (z) => outlineGapValue(rear, false, wall.outline, z) - settings.minFirewallGapMm,
-      });
-    }
-  }
-  if (chassis.radiatorCore && Number.isFinite(spec.engine.fanFrontU)) {
-    const fan = measureFanGap(base, chassis.radiatorCore.x);
-    if (fan) constant.push({ bound: { checkId: FAN_RADIATOR_ID, against: 'radiator-core' }, margin: fan.gap - settings.minFanToCoreMm });
-  }
-  const railBound = (side: string): WindowBound => ({ checkId: RAIL_WIDTH_ID, against: `frame-rail-${side}` });
-  if (chassis.railStations?.length && base.widthBoxes.length) {
-    for (const band of railForbiddenBands(base.widthBoxes, chassis.railStations, settings.minRailGapMm)) {
-      const side = band.box.halfWidthLeftMm >= band.box.halfWidthRightMm ? 'left' : 'right';
-      bands.push({ from: band.from, to: band.to, bound: railBound(side) });
-    }
-  }
-  const steering = chassis.steeringBox;
-  if (steering && base.widthBoxes.length) {
-    for (const box of base.widthBoxes) {
-      if (!(box.xMin < steering.xTo && box.xMax > steering.xFrom)) continue;
-      if (steeringBoxGap(box, steering) >= settings.minSteeringBoxGapMm) continue;
-      bands.push({ from: steering.zFrom - box.zMax, to: steering.zTo - box.zMin, bound: { checkId: STEERING_BOX_ID, against: 'steering-box' } });
-    }
-  }
-  const widthMargins = (z: number): Array<{ bound: WindowBound; margin: number }> => {
-    const out: Array<{ bound: WindowBound; margin: number }> = [];
-    if (chassis.railStations?.length) {
-      const c = measureRailWidth(base.widthBoxes, chassis.railStations, z);
-      if (c) out.push({ bound: railBound(c.side), margin: c.gap - settings.minRailGapMm });
-    }
-    if (steering) {
-      const s = measureSteeringBox(base.widthBoxes, steering, z);
-      if (s) out.push({ bound: { checkId: STEERING_BOX_ID, against: 'steering-box' }, margin: s.gap - settings.minSteeringBoxGapMm });
-    }
-    return out;
-  };
+  const widthMargins = (z: number): Array<{ bound: WindowBound; margin: number }> => marginReaders.flatMap((read) => read(z));
   return { constant, constraints, bands, widthMargins };
 }
 

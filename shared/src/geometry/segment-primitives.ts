@@ -1,4 +1,3 @@
-import type { ChassisPoint } from '../types/fit-spec';
 
 /** Small exact predicates and distances on segments, shared by the outline distance, overlap and lift. */
 export const EPS = 1e-9;

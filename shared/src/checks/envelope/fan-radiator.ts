@@ -84,4 +84,11 @@ export const FAN_RADIATOR_CHECK: CheckDefinition = {
   title: 'Fan and front pulley to radiator core',
   dependsOnPlacement: true,
   run: runFanRadiator,
+  // Height does not move the fan toward the core: a constant margin for the column.
+  windowTerms: (spec, settings, base) => {
+    const core = spec.chassis.radiatorCore;
+    if (!core || !Number.isFinite(spec.engine.fanFrontU)) return {};
+    const fan = measureFanGap(base, core.x);
+    return fan ? { constants: [{ bound: { checkId: FAN_RADIATOR_ID, against: 'radiator-core' }, margin: fan.gap - settings.minFanToCoreMm }] } : {};
+  },
 };

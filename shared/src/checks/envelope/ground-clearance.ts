@@ -56,4 +56,15 @@ export const GROUND_CLEARANCE_CHECK: CheckDefinition = {
   title: 'Ground clearance under the engine',
   dependsOnPlacement: true,
   run: runGroundClearance,
+  // The lowest point rises one for one with the engine: an exact linear bound (only with a pan, like the check).
+  windowTerms: (spec, settings, base) => {
+    const low = base.pan ? lowestPoint(base, 0, spec.chassis) : null;
+    if (!low) return {};
+    const intercept = low.clearanceMm - settings.minGroundClearanceMm;
+    return {
+      constraints: [
+        { bound: { checkId: GROUND_CLEARANCE_ID, against: 'ground' }, trend: 'rises', marginAt: (heightMm) => intercept + heightMm, linear: { intercept, slope: 1 } },
+      ],
+    };
+  },
 };

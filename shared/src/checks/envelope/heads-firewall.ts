@@ -5,6 +5,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { outlineGapValue } from '../../geometry/outline-gap';
 
 export const HEADS_FIREWALL_ID = 'envelope.heads-firewall';
 export const FIREWALL_KINDS = ['firewall'] as const;
@@ -58,4 +59,16 @@ export const HEADS_FIREWALL_CHECK: CheckDefinition = {
   title: 'Rear of heads to firewall',
   dependsOnPlacement: true,
   run: runHeadsFirewall,
+  windowTerms: (spec, settings, base) => {
+    const rear = base.rearProfile;
+    if (!rear.length) return {};
+    return {
+      constraints: obstaclesOfKinds(spec, [...FIREWALL_KINDS]).map((wall) => ({
+        bound: { checkId: HEADS_FIREWALL_ID, against: wall.id },
+        trend: 'any' as const,
+        // Scanned upward, so an overlap is measured as the lift that clears it (the passing set is the same in any direction).
+        marginAt: (heightMm: number) => outlineGapValue(rear, false, wall.outline, heightMm) - settings.minFirewallGapMm,
+      })),
+    };
+  },
 };

@@ -57,4 +57,13 @@ export const HOOD_CHECK: CheckDefinition = {
   title: 'Hood to top of engine',
   dependsOnPlacement: true,
   run: runHood,
+  // The hood gap shrinks one for one as the engine rises: an exact linear bound.
+  windowTerms: (spec, settings, base) => {
+    const hood = measureHood(base, spec.chassis.hoodLine);
+    if (!hood) return {};
+    const intercept = hood.clearance - settings.minHoodGapMm;
+    return {
+      constraints: [{ bound: { checkId: HOOD_ID, against: 'hood' }, trend: 'falls', marginAt: (heightMm) => intercept - heightMm, linear: { intercept, slope: -1 } }],
+    };
+  },
 };

@@ -16,6 +16,7 @@ import {
 import { lowestPoint, obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
 import { measureHood } from './hood';
 import { mmWithInches } from '../../units/figure-format';
+import { outlineGapValue } from '../../geometry/outline-gap';
 
 /** The obstacle kinds below the pan, one check each. */
 export const PAN_OBSTACLE_KINDS = {
@@ -174,5 +175,17 @@ export function panCheck(config: PanCheckConfig): CheckDefinition {
     title: config.title,
     dependsOnPlacement: true,
     run: (context) => runPanCheck(context, config),
+    // The pan must keep the minimum gap above each obstacle of its kinds; the gap grows as the engine rises.
+    windowTerms: (spec, settings, base) => {
+      const pan = base.pan;
+      if (!pan) return {};
+      return {
+        constraints: obstaclesOfKinds(spec, config.kinds).map((obstacle) => ({
+          bound: { checkId: config.id, against: obstacle.id },
+          trend: 'rises' as const,
+          marginAt: (heightMm: number) => outlineGapValue(pan, true, obstacle.outline, heightMm) - settings.minGapBelowMm,
+        })),
+      };
+    },
   };
 }

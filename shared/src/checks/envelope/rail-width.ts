@@ -186,4 +186,21 @@ export const RAIL_WIDTH_CHECK: CheckDefinition = {
   title: 'Accessory drive and exhaust width to frame rails',
   dependsOnPlacement: true,
   run: runRailWidth,
+  // A width feature level with a rail closer than the minimum gap forbids that band of heights.
+  windowTerms: (spec, settings, base) => {
+    const stations = spec.chassis.railStations;
+    if (!stations?.length || !base.widthBoxes.length) return {};
+    const railBound = (side: string) => ({ checkId: RAIL_WIDTH_ID, against: `frame-rail-${side}` });
+    return {
+      bands: railForbiddenBands(base.widthBoxes, stations, settings.minRailGapMm).map((band) => ({
+        fromMm: band.from,
+        toMm: band.to,
+        bound: railBound(band.box.halfWidthLeftMm >= band.box.halfWidthRightMm ? 'left' : 'right'),
+      })),
+      marginsAt: (heightMm) => {
+        const contact = measureRailWidth(base.widthBoxes, stations, heightMm);
+        return contact ? [{ bound: railBound(contact.side), margin: contact.gap - settings.minRailGapMm }] : [];
+      },
+    };
+  },
 };

@@ -77,4 +77,19 @@ export const STEERING_BOX_CHECK: CheckDefinition = {
   title: 'Accessory drive and exhaust to steering box',
   dependsOnPlacement: true,
   run: runSteeringBox,
+  // A width feature beside the steering box and closer than the minimum gap forbids the heights where they are level.
+  windowTerms: (spec, settings, base) => {
+    const steering = spec.chassis.steeringBox;
+    if (!steering || !base.widthBoxes.length) return {};
+    const bound = { checkId: STEERING_BOX_ID, against: 'steering-box' };
+    return {
+      bands: base.widthBoxes
+        .filter((box) => box.xMin < steering.xTo && box.xMax > steering.xFrom && steeringBoxGap(box, steering) < settings.minSteeringBoxGapMm)
+        .map((box) => ({ fromMm: steering.zFrom - box.zMax, toMm: steering.zTo - box.zMin, bound })),
+      marginsAt: (heightMm) => {
+        const nearest = measureSteeringBox(base.widthBoxes, steering, heightMm);
+        return nearest ? [{ bound, margin: nearest.gap - settings.minSteeringBoxGapMm }] : [];
+      },
+    };
+  },
 };

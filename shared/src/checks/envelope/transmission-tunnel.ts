@@ -5,6 +5,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { outlineGapValue } from '../../geometry/outline-gap';
 
 export const TRANSMISSION_TUNNEL_ID = 'envelope.transmission-tunnel';
 export const TUNNEL_KINDS = ['tunnel'] as const;
@@ -57,4 +58,20 @@ export const TRANSMISSION_TUNNEL_CHECK: CheckDefinition = {
   title: 'Bellhousing and transmission to tunnel',
   dependsOnPlacement: true,
   run: runTransmissionTunnel,
+  windowTerms: (spec, settings, base) => {
+    if (!base.transmission) return {};
+    // Mirrored in z once: the drop that clears the tunnel is the lift of the mirror image (shifted by −height).
+    const mirroredCase = base.transmission.map((p) => ({ x: p.x, z: -p.z }));
+    return {
+      constraints: obstaclesOfKinds(spec, [...TUNNEL_KINDS]).map((tunnel) => {
+        const mirroredRoof = tunnel.outline.map((p) => ({ x: p.x, z: -p.z }));
+        return {
+          bound: { checkId: TRANSMISSION_TUNNEL_ID, against: tunnel.id },
+          // The tunnel is above the case: the margin falls as the engine rises; an overlap is the drop that clears it.
+          trend: 'falls' as const,
+          marginAt: (heightMm: number) => outlineGapValue(mirroredCase, true, mirroredRoof, -heightMm) - settings.minFirewallGapMm,
+        };
+      }),
+    };
+  },
 };
