@@ -29,6 +29,7 @@ const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder
 const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
 const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
 const ProjectFitPage = lazyNamed(() => import('./routes/fit/project-fit-page'), 'ProjectFitPage');
+const QuoteAnswerPage = lazyNamed(() => import('./routes/quotes/quote-answer-page'), 'QuoteAnswerPage');
 const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');
 const RouteErrorBoundary = lazy(() =>
   import('@/components/route-error-boundary').then((m) => ({ default: m.RouteErrorBoundary })),
@@ -83,6 +84,15 @@ export const routes: RouteObject[] = [
           { path: paths.resetPassword, element: <ResetPasswordPage /> },
           { path: paths.acceptInvite, element: <AcceptInvitePage /> },
         ],
+      },
+      {
+        path: paths.quoteAnswer,
+        element: (
+          <TopSuspense>
+            <QuoteAnswerPage />
+          </TopSuspense>
+        ),
+        errorElement: <SectionError section="the quote" />,
       },
       {
         element: (

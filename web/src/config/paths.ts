@@ -4,6 +4,7 @@ export const paths = {
   signUp: '/sign-up',
   resetPassword: '/reset-password',
   acceptInvite: '/accept-invite',
+  quoteAnswer: '/quote-answer/:token',
 
   home: '/',
   projects: '/projects',

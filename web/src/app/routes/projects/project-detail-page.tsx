@@ -14,6 +14,7 @@ import { ProjectFormDrawer } from '@/features/projects/components/project-form-d
 import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
 import { PartsPlanCard } from '@/features/parts-plans/components/parts-plan-card';
+import { ProjectQuotesCard } from '@/features/quotes/components/project-quotes-card';
 import { useShop } from '@/features/shop/api/get-shop';
 import { canEditProjects, canRunFitCheck } from '../../navigation';
 import { useCustomerOptions } from '../shared/use-customer-options';
@@ -76,6 +77,7 @@ export function ProjectDetailPage() {
           </Space>
         }
       />
+      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} />}
       <Card style={{ marginBottom: 16 }} title="Stage">
         <ProjectStageSteps status={p.status} />
       </Card>

@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Quote } from '../types';
+import { quoteKeys } from './quote-keys';
+
+export async function sendQuote(quoteId: string): Promise<Quote> {
+  const { data } = await apiClient.post<Quote>(`/quotes/${encodeURIComponent(quoteId)}/send`);
+  return data;
+}
+
+export function useSendQuote(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: sendQuote,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) }),
+  });
+}

@@ -1,0 +1,77 @@
+import { formatCents } from '@swapwright/shared';
+import { App, Button, Card, Empty, Flex, List, Space, Typography } from 'antd';
+import { getErrorMessage } from '@/lib/api-error';
+import { useCreateQuote } from '../api/create-quote';
+import { useProjectQuotes } from '../api/get-project-quotes';
+import { useSendQuote } from '../api/send-quote';
+import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+
+export interface ProjectQuotesCardProps {
+  projectId: string;
+  /** Owner and estimator write quotes; others read them. */
+  canWrite: boolean;
+}
+
+/** The project's quotes: draft one from the stored fit report, send it to the customer, follow the answer and the deposit. */
+export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProps) {
+  const quotes = useProjectQuotes(projectId);
+  const create = useCreateQuote(projectId);
+  const send = useSendQuote(projectId);
+  const { message } = App.useApp();
+  return (
+    <Card
+      title="Quotes"
+      style={{ marginBottom: 16 }}
+      extra={
+        canWrite && (
+          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`Quote ${quote.label} drafted from the fit check`) })} loading={create.isPending}>
+            Draft a quote
+          </Button>
+        )
+      }
+    >
+      {quotes.data && quotes.data.length === 0 && <Empty description="No quote yet" />}
+      <List
+        dataSource={quotes.data ?? []}
+        loading={quotes.isLoading}
+        renderItem={(quote) => (
+          <List.Item
+            data-testid={`quote-${quote.label}`}
+            actions={[
+              canWrite && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
+                <Button
+                  key="send"
+                  type="primary"
+                  size="small"
+                  loading={send.isPending}
+                  onClick={() =>
+                    send.mutate(quote.id, {
+                      onSuccess: (sent) => void message.success(`Quote ${sent.label} sent to ${sent.customerName ?? 'the customer'}`),
+                      onError: (error) => void message.error(getErrorMessage(error)),
+                    })
+                  }
+                >
+                  Send to customer
+                </Button>
+              ),
+            ].filter(Boolean)}
+          >
+            <Flex vertical gap={4}>
+              <Space wrap>
+                <Typography.Text strong>{quote.label}</Typography.Text>
+                <span>revision {quote.latestRevision}</span>
+                <QuoteStatusTag status={quote.status} />
+                <DepositTag state={quote.depositState} />
+              </Space>
+              <Typography.Text type="secondary">
+                Total {quote.revision.currency} {formatCents(quote.revision.totals.totalCents)} · deposit {formatCents(quote.revision.totals.depositCents)} · valid until{' '}
+                {quote.revision.validUntil}
+                {quote.declineReason ? ` · reason: ${quote.declineReason}` : ''}
+              </Typography.Text>
+            </Flex>
+          </List.Item>
+        )}
+      />
+    </Card>
+  );
+}

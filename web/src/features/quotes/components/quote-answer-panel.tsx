@@ -1,0 +1,126 @@
+import { FIT_REPORT_CAUTION } from '@swapwright/shared';
+import { Alert, Button, Card, Flex, Input, Space, Typography } from 'antd';
+import { useState } from 'react';
+import { getErrorMessage } from '@/lib/api-error';
+import { useAnswerQuoteByLink } from '../api/answer-quote-by-link';
+import { useQuoteByLink } from '../api/get-quote-by-link';
+import { usePayDepositByLink } from '../api/pay-deposit-by-link';
+import { QuoteLines } from './quote-lines';
+import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+
+/**
+ * The local payment fake's card form: its test cards stand for the payment methods a provider's card form
+ * would return (4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined).
+ */
+const TEST_CARDS: Record<string, string> = {
+  '4242424242424242': 'pm_card_visa',
+  '4000000000000002': 'pm_card_chargeDeclined',
+};
+
+export interface QuoteAnswerPanelProps {
+  token: string;
+}
+
+/** What the customer sees from the link in the quote e-mail: the quote, accept or decline with a reason, then the deposit. */
+export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
+  const [paying, setPaying] = useState(false);
+  const quote = useQuoteByLink(token, paying);
+  // polling stops once the deposit reads as paid (the card below is then no longer shown)
+  const answer = useAnswerQuoteByLink(token);
+  const pay = usePayDepositByLink(token);
+  const [declining, setDeclining] = useState(false);
+  const [reason, setReason] = useState('');
+  const [card, setCard] = useState('');
+  const [payError, setPayError] = useState<string | null>(null);
+
+  if (quote.isLoading) return <Card loading />;
+  if (quote.isError || !quote.data) {
+    return <Alert type="error" showIcon message="This quote link cannot be opened" description={getErrorMessage(quote.error)} />;
+  }
+  const q = quote.data;
+  const waiting = paying && q.depositState !== 'paid';
+  const submitCard = () => {
+    setPayError(null);
+    const method = TEST_CARDS[card.replace(/\s/g, '')];
+    if (!method) {
+      setPayError('That card number is not one of the test cards of the local payment service.');
+      return;
+    }
+    pay.mutate(method, { onSuccess: () => setPaying(true), onError: (error) => setPayError(getErrorMessage(error)) });
+  };
+
+  return (
+    <Flex vertical gap={16}>
+      <Card
+        title={
+          <Space wrap>
+            <span>
+              Quote {q.label} · revision {q.revision.number}
+            </span>
+            <QuoteStatusTag status={q.status} />
+            <DepositTag state={q.depositState} />
+          </Space>
+        }
+      >
+        <Typography.Paragraph>
+          {q.projectTitle} · for {q.customerName} · valid until {q.revision.validUntil}
+        </Typography.Paragraph>
+        <QuoteLines quote={q} />
+        <Typography.Paragraph style={{ marginTop: 12 }}>
+          <a href={`/api/quote-links/${encodeURIComponent(token)}/pdf`} target="_blank" rel="noreferrer">
+            Open the quote as a PDF
+          </a>
+        </Typography.Paragraph>
+        <Alert type="warning" showIcon message="Planning aid" description={FIT_REPORT_CAUTION} />
+      </Card>
+
+      {q.status === 'awaiting-answer' && (
+        <Card title="Your answer">
+          {answer.isError && <Alert type="error" showIcon message={getErrorMessage(answer.error)} style={{ marginBottom: 12 }} />}
+          {!declining ? (
+            <Space wrap>
+              <Button type="primary" loading={answer.isPending} onClick={() => answer.mutate({ answer: 'accept' })}>
+                Accept this quote
+              </Button>
+              <Button onClick={() => setDeclining(true)}>Decline…</Button>
+            </Space>
+          ) : (
+            <Flex vertical gap={8}>
+              <label htmlFor="decline-reason">Why are you declining? The shop reads this.</label>
+              <Input.TextArea id="decline-reason" value={reason} onChange={(event) => setReason(event.target.value)} maxLength={1000} rows={3} />
+              <Space>
+                <Button danger disabled={!reason.trim()} loading={answer.isPending} onClick={() => answer.mutate({ answer: 'decline', reason })}>
+                  Decline the quote
+                </Button>
+                <Button onClick={() => setDeclining(false)}>Back</Button>
+              </Space>
+            </Flex>
+          )}
+        </Card>
+      )}
+
+      {q.status === 'approved' && q.depositState === 'due' && (
+        <Card title="Pay the deposit">
+          <Typography.Paragraph>
+            Deposit due: <strong>{q.revision.currency} {(q.revision.totals.depositCents / 100).toFixed(2)}</strong>. Work is booked once it is paid.
+          </Typography.Paragraph>
+          {payError && <Alert type="error" showIcon message={payError} style={{ marginBottom: 12 }} />}
+          {waiting ? (
+            <Alert type="info" showIcon message="Payment sent; waiting for the payment service to confirm it…" />
+          ) : (
+            <Flex vertical gap={8} style={{ maxWidth: 360 }}>
+              <label htmlFor="card-number">Card number (local test payment service)</label>
+              <Input id="card-number" inputMode="numeric" autoComplete="off" value={card} onChange={(event) => setCard(event.target.value)} placeholder="4242 4242 4242 4242" />
+              <Button type="primary" loading={pay.isPending} onClick={submitCard}>
+                Pay the deposit
+              </Button>
+            </Flex>
+          )}
+        </Card>
+      )}
+
+      {q.depositState === 'paid' && <Alert type="success" showIcon message="Deposit paid. Thank you: the shop will book your truck into the bay." />}
+      {q.status === 'turned-down' && <Alert type="info" showIcon message="You declined this quote. The shop has been told." />}
+    </Flex>
+  );
+}
