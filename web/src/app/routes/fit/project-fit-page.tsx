@@ -12,6 +12,7 @@ import { useRunFitReport } from '@/features/fit-reports/api/run-fit-report';
 import { ChecksTable } from '@/features/fit-reports/components/checks-table';
 import { FrontView } from '@/features/fit-reports/components/front-view';
 import { PlacementControls } from '@/features/fit-reports/components/placement-controls';
+import { ProposalBounds } from '@/features/fit-reports/components/proposal-bounds';
 import { ReportCaution } from '@/features/fit-reports/components/report-caution';
 import { ReportHistory } from '@/features/fit-reports/components/report-history';
 import { ReportSummaryCard } from '@/features/fit-reports/components/report-summary-card';
@@ -42,7 +43,7 @@ export function ProjectFitPage() {
   const catalog = useFitCatalog(!readOnly);
   const stored = report.data;
   const preview = usePlacementPreview(stored);
-  const { shown, spec, shownSpec, placement, fitWindow } = preview;
+  const { shown, spec, shownSpec, placement, fitWindow, proposal } = preview;
   const partNames = usePartNames(spec, catalog);
   /** Parts or placement changed since the report on screen was stored. */
   const [stale, setStale] = useState(false);
@@ -165,7 +166,7 @@ export function ProjectFitPage() {
 
             <Row gutter={[16, 16]}>
               <Col xs={24} xl={readOnly ? 24 : 16}>
-                <SideViewCard spec={shownSpec} findings={shown.findings} window={fitWindow} />
+                <SideViewCard spec={shownSpec} findings={shown.findings} window={fitWindow} proposed={proposal?.placement} />
               </Col>
               {!readOnly && (
                 <Col xs={24} xl={8}>
@@ -174,12 +175,17 @@ export function ProjectFitPage() {
                       value={placement}
                       onChange={preview.setPreview}
                       saved={p.placement ?? preview.storedPlacement}
-                      proposed={fitWindow?.best?.placement ?? null}
+                      proposed={proposal?.placement ?? fitWindow?.best?.placement ?? null}
                       isPreview={preview.isPreview}
                       onSave={canRun ? () => void savePlacement() : undefined}
                       saving={updateProject.isPending}
                       onReset={preview.reset}
                     />
+                    {proposal && (
+                      <div style={{ marginTop: 12 }}>
+                        <ProposalBounds proposal={proposal} findings={shown.findings} />
+                      </div>
+                    )}
                   </Card>
                 </Col>
               )}

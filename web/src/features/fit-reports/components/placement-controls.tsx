@@ -187,7 +187,7 @@ export function PlacementControls({ value, onChange, saved, proposed, isPreview,
       />
       {proposed && (
         <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="proposed-placement">
-          Proposed by the fit window: {units.formatLength(proposed.setbackMm)} back, {units.formatLength(proposed.heightMm)} up, {proposed.tiltDeg.toFixed(1)}°
+          Proposed: {units.formatLength(proposed.setbackMm)} back, {units.formatLength(proposed.heightMm)} up, {proposed.tiltDeg.toFixed(1)}°
         </Typography.Text>
       )}
       {problems.length > 0 && (

@@ -1,4 +1,4 @@
-import type { Finding, FitSpec, FitWindow } from '@swapwright/shared';
+import type { Finding, FitSpec, FitWindow, Placement } from '@swapwright/shared';
 import { Alert, Card } from 'antd';
 import { SideView } from './side-view';
 
@@ -6,13 +6,15 @@ export type SideViewCardProps = {
   spec: FitSpec;
   findings: readonly Finding[];
   window: FitWindow | null;
+  /** The proposed placement drawn over the view (default: the window's best at this tilt). */
+  proposed?: Placement | null;
 };
 
 /** The side view with the fit window over it, and what to do when no crank height clears. */
-export function SideViewCard({ spec, findings, window }: SideViewCardProps) {
+export function SideViewCard({ spec, findings, window, proposed }: SideViewCardProps) {
   return (
     <Card title="Side view" className="fit-side-card">
-      <SideView spec={spec} findings={findings} window={window} proposed={window?.best?.placement ?? null} />
+      <SideView spec={spec} findings={findings} window={window} proposed={proposed ?? window?.best?.placement ?? null} />
       {window && !window.columns.some((c) => c.feasible) && (
         <Alert
           style={{ marginTop: 8 }}

@@ -1,7 +1,7 @@
 import type { Placement, PlacementRemedy } from '@swapwright/shared';
 import { useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { samePlacement } from '../components/placement-controls';
-import { fitWindowFor, previewFitCheck, withPlacement } from '../lib/fit-engine';
+import { fitWindowFor, previewFitCheck, proposalFor, withPlacement } from '../lib/fit-engine';
 import type { StoredFitReport } from '../types';
 
 /**
@@ -39,6 +39,16 @@ export function usePlacementPreview(stored: StoredFitReport | undefined) {
     }
   }, [spec, storedPlacement, tilt, settings]);
 
+  /** The best placement over a range of tilts, and what bounds it; searched once per stored report. */
+  const proposal = useMemo(() => {
+    if (!spec) return null;
+    try {
+      return proposalFor(spec, settings);
+    } catch {
+      return null;
+    }
+  }, [spec, settings]);
+
   const shownSpec = useMemo(() => (spec && placement ? withPlacement(spec, placement) : undefined), [spec, placement]);
 
   /** Moves the tried placement by a remedy's change. */
@@ -51,5 +61,5 @@ export function usePlacementPreview(stored: StoredFitReport | undefined) {
     setPreview(next);
   };
 
-  return { spec, storedPlacement, placement, isPreview, shown, fitWindow, shownSpec, setPreview, tryRemedy, reset: () => setPreview(null) };
+  return { spec, storedPlacement, placement, isPreview, shown, fitWindow, proposal, shownSpec, setPreview, tryRemedy, reset: () => setPreview(null) };
 }

@@ -1,4 +1,4 @@
-import { computeFitWindow, runFitCheck, type FitSettings, type FitSpec, type FitWindow, type Placement } from '@swapwright/shared';
+import { computeFitWindow, proposePlacement, runFitCheck, type FitSettings, type FitSpec, type FitWindow, type Placement, type PlacementProposal } from '@swapwright/shared';
 import type { FitReport } from '../types';
 
 export type { FitWindow };
@@ -23,4 +23,9 @@ export function fitWindowFor(spec: FitSpec, centerSetbackMm: number, tiltDeg: nu
     { setbackFromMm: centerSetbackMm - WINDOW_SPAN_MM, setbackToMm: centerSetbackMm + WINDOW_SPAN_MM, stepMm: 10, tiltDeg },
     settings ?? {},
   );
+}
+
+/** The tilt-aware best placement around the report's own setback (clearances and U-joint angles weighed together). */
+export function proposalFor(spec: FitSpec, settings?: Partial<FitSettings>): PlacementProposal | null {
+  return proposePlacement(spec, {}, settings ?? {});
 }

@@ -1,0 +1,42 @@
+import type { Finding, PlacementProposal } from '@swapwright/shared';
+import { Typography } from 'antd';
+import { useUnits } from '@/hooks/use-units';
+
+export type ProposalBoundsProps = {
+  proposal: PlacementProposal;
+  /** The report's findings, for the checks' names. */
+  findings: readonly Finding[];
+};
+
+/** The proposed placement and the checks that limit it, tightest first. */
+export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
+  const units = useUnits();
+  const { placement, boundedBy, allPass } = proposal;
+  const title = (checkId: string) => findings.find((f) => f.checkId === checkId)?.title ?? checkId;
+  const room = (margin: number, unit: 'mm' | 'deg') =>
+    unit === 'deg' ? `${margin < 0 ? '−' : ''}${Math.abs(margin).toFixed(1)}°` : `${margin < 0 ? '−' : ''}${units.formatLength(Math.abs(margin))}`;
+  return (
+    <div data-testid="placement-proposal">
+      <Typography.Text strong>Best placement found</Typography.Text>
+      <Typography.Paragraph style={{ margin: '2px 0 4px', fontSize: 13 }}>
+        {units.formatLength(placement.setbackMm)} back, {units.formatLength(placement.heightMm)} up, tilted {placement.tiltDeg.toFixed(1)}°
+        {allPass ? ', with every clearance and the U-joint angles passing.' : ': the most room found, but not every check passes there.'}
+      </Typography.Paragraph>
+      {boundedBy.length > 0 && (
+        <>
+          <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+            Limited by
+          </Typography.Text>
+          <ul style={{ margin: 0, paddingLeft: 18, fontSize: 13 }}>
+            {boundedBy.map((b) => (
+              <li key={b.checkId}>
+                {title(b.checkId)}
+                {b.against ? ` (${b.against})` : ''}: {room(b.margin, b.unit)} to spare
+              </li>
+            ))}
+          </ul>
+        </>
+      )}
+    </div>
+  );
+}
