@@ -1,0 +1,51 @@
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { signInAs } from './support/session';
+
+const DEMO_PROJECT = 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap';
+
+describe('parts plan: the estimator plans, the counter reserves and prints', () => {
+  let browser: BrowserSession;
+
+  afterEach(async () => {
+    await browser?.close();
+  });
+
+  it('the estimator builds a plan and sees the rear-sump pan with its matching pickup chosen and explained', async () => {
+    browser = await openBrowser();
+    const { page } = browser;
+    await signInAs(page, 'estimator');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('link', { name: DEMO_PROJECT }).click();
+    const card = page.getByTestId('parts-plan-card');
+    await card.getByRole('button', { name: 'Build plan' }).click();
+    await card.getByTestId('pick-TR-4410').getByText(/Resolves: .*crossmember/i).waitFor();
+    await card.getByTestId('pick-TR-4411').getByText(/agrees with the chosen oil pan TR-4410/).waitFor();
+    await card.getByTestId('pick-TR-4411').getByText(/BR-220 .*does not agree/).waitFor();
+    await card.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'estimator-parts-plan');
+  });
+
+  it('the counter reserves the parts and prints the pick list', async () => {
+    browser = await openBrowser();
+    const { page } = browser;
+    await signInAs(page, 'counter');
+    await page.getByRole('tab', { name: 'Jobs' }).waitFor();
+    const lineOf = (sku: string) => page.getByRole('row').filter({ has: page.getByRole('cell', { name: sku, exact: true }) });
+    const row = lineOf('TR-4410');
+    await row.getByRole('button', { name: 'Reserve' }).click();
+    await row.getByTestId('line-status').getByText('Set aside').waitFor();
+    const pickup = lineOf('TR-4411');
+    await pickup.getByRole('button', { name: 'Reserve' }).click();
+    await pickup.getByTestId('line-status').getByText('Set aside').waitFor();
+    await page.evaluate(() => {
+      (window as unknown as { printed: boolean }).printed = false;
+      window.print = () => {
+        (window as unknown as { printed: boolean }).printed = true;
+      };
+    });
+    await page.getByRole('button', { name: 'Print pick list' }).click();
+    expect(await page.evaluate(() => (window as unknown as { printed: boolean }).printed)).toBe(true);
+    await page.emulateMedia({ media: 'print' });
+    await saveScreenshot(page, 'counter-pick-list-print');
+  });
+});
