@@ -1,4 +1,4 @@
-import { checkUJointAngles } from '../checks/drivetrain/u-joint-angles';
+import { uJointRoom } from '../checks/drivetrain/u-joint-angles';
 import { withPlacement } from '../checks/envelope/placed-engine';
 import { goldenSectionMax } from '../geometry/golden-section';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
@@ -70,9 +70,7 @@ interface DrivelineRoom {
 }
 
 function drivelineRoom(spec: FitSpec, settings: FitSettings, placement: Placement): DrivelineRoom | null {
-  const finding = checkUJointAngles({ spec: withPlacement(spec, placement), settings });
-  if (finding.margin === null) return null;
-  return { marginDeg: finding.margin, status: finding.status };
+  return uJointRoom(withPlacement(spec, placement), settings);
 }
 
 interface Candidate {

@@ -1,7 +1,10 @@
 import { maxOperatingAngleAtSpeed } from '../../driveline/operating-angles';
 import type { Finding, Remedy } from '../../types/finding';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
-import { describeShaftSpeed, drivelineLayout } from './driveline-layout';
+import { describeShaftSpeed, drivelineLayout, type DrivelineLayout } from './driveline-layout';
+import type { FitSettings } from '../../settings/fit-settings';
+import type { CheckStatus } from '../../types/finding';
+import type { FitSpec } from '../../types/fit-spec';
 import { formatDegrees } from '../../units/figure-format';
 
 const FIELDS: FindingFields = {
@@ -22,10 +25,9 @@ interface Constraint {
   margin: number;
 }
 
-export function checkUJointAngles({ spec, settings }: CheckContext): Finding {
-  const result = drivelineLayout(spec);
-  if (!result.ok) return unknownFinding(FIELDS, result.missing);
-  const { angles, shaftSpeed, transmission } = result.layout;
+/** The U-joint rule: the governing constraint (smallest margin) and the status, without the sentence. */
+function uJointRule(layout: DrivelineLayout, settings: FitSettings): { governing: Constraint; status: CheckStatus; speedMaxDeg: number; overSmoothLimit: boolean } {
+  const { angles, shaftSpeed } = layout;
   const speedMaxDeg = shaftSpeed
     ? maxOperatingAngleAtSpeed(shaftSpeed.rpm, settings.uJointMaxAngleBySpeed, settings.uJointMinDeg)
     : settings.uJointMaxDeg;
@@ -46,6 +48,22 @@ export function checkUJointAngles({ spec, settings }: CheckContext): Finding {
   let status = statusFromMargin(governing.margin, settings.uJointTightBandDeg);
   const overSmoothLimit = largest > settings.uJointMaxDeg;
   if (status === 'ok' && overSmoothLimit) status = 'tight';
+  return { governing, status, speedMaxDeg, overSmoothLimit };
+}
+
+/** The U-joint margin (degrees) and status at the spec's placement; null without a transmission. Cheap: no sentence. */
+export function uJointRoom(spec: FitSpec, settings: FitSettings): { marginDeg: number; status: CheckStatus } | null {
+  const result = drivelineLayout(spec);
+  if (!result.ok) return null;
+  const { governing, status } = uJointRule(result.layout, settings);
+  return { marginDeg: governing.margin, status };
+}
+
+export function checkUJointAngles({ spec, settings }: CheckContext): Finding {
+  const result = drivelineLayout(spec);
+  if (!result.ok) return unknownFinding(FIELDS, result.missing);
+  const { angles, shaftSpeed, transmission } = result.layout;
+  const { governing, status, speedMaxDeg, overSmoothLimit } = uJointRule(result.layout, settings);
   const speedText = shaftSpeed ? ` (${describeShaftSpeed(shaftSpeed)}, maximum ${formatDegrees(speedMaxDeg, 1)})` : '';
   const figures = `Front joint ${formatDegrees(angles.frontDeg)}, rear ${formatDegrees(angles.rearDeg)}, difference ${formatDegrees(angles.differenceDeg)}; shaft at ${formatDegrees(angles.shaftDeg)}, transmission ${formatDegrees(angles.transmissionDeg)}, pinion ${formatDegrees(angles.pinionDeg)}${speedText}.`;
   let verdict: string;
