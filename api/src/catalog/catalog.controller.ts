@@ -18,19 +18,18 @@ import {
   ApiBearerAuth,
   ApiBody,
   ApiCreatedResponse,
-  ApiExtraModels,
   ApiForbiddenResponse,
   ApiNoContentResponse,
   ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
   ApiTags,
-  getSchemaPath,
 } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { Page } from '../common/pagination/page-query.dto';
+import { ApiPageResponse, mapPage } from '../common/pagination/page-response';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { createValidationPipe } from '../common/pipes/validation.pipe';
 import { withArticle } from '../common/text/article';
@@ -71,7 +70,6 @@ export function createCatalogController(definition: CatalogKindDefinition): Type
 
   @ApiTags('catalog')
   @ApiBearerAuth()
-  @ApiExtraModels(definition.responseDto)
   @ApiForbiddenResponse({ type: ErrorResponseDto, description: 'Customers have no catalog access' })
   @Controller(`catalog/${kind}`)
   class KindCatalogController {
@@ -80,21 +78,10 @@ export function createCatalogController(definition: CatalogKindDefinition): Type
     @Get()
     @Roles(...CATALOG_READERS)
     @ApiOperation({ summary: `List the shop's ${kind}`, operationId: `list${titleOf(definition)}` })
-    @ApiOkResponse({
-      schema: {
-        type: 'object',
-        properties: {
-          items: { type: 'array', items: { $ref: getSchemaPath(definition.responseDto) } },
-          total: { type: 'integer' },
-          page: { type: 'integer' },
-          pageSize: { type: 'integer' },
-        },
-      },
-    })
+    @ApiPageResponse(definition.responseDto)
     @ApiBadRequestResponse({ type: ErrorResponseDto })
     async list(@CurrentUser() user: AuthUser, @Query() query: ListCatalogQueryDto): Promise<Page<CatalogItemResponseDto>> {
-      const page = await this.catalog.list(kind, user, query);
-      return { ...page, items: page.items.map((row) => mapCatalogItem(definition, row)) };
+      return mapPage(await this.catalog.list(kind, user, query), (row) => mapCatalogItem(definition, row));
     }
 
     @Post()

@@ -3,13 +3,15 @@ import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiNotFoundRes
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
+import { ApiPageResponse, mapPage } from '../common/pagination/page-response';
+import { Page } from '../common/pagination/page-query.dto';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { CUSTOMER_READERS, CUSTOMER_WRITERS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { mapCustomer } from './customer.mapper';
 import { CustomersService } from './customers.service';
 import { CreateCustomerDto } from './dto/create-customer.dto';
-import { CustomerPageResponseDto, CustomerResponseDto } from './dto/customer-response.dto';
+import { CustomerResponseDto } from './dto/customer-response.dto';
 import { ListCustomersQueryDto } from './dto/list-customers-query.dto';
 import { UpdateCustomerDto } from './dto/update-customer.dto';
 
@@ -21,10 +23,9 @@ export class CustomersController {
 
   @Get()
   @Roles(...CUSTOMER_READERS)
-  @ApiOkResponse({ type: CustomerPageResponseDto })
-  async list(@CurrentUser() user: AuthUser, @Query() query: ListCustomersQueryDto): Promise<CustomerPageResponseDto> {
-    const page = await this.customers.list(user, query);
-    return { ...page, items: page.items.map(mapCustomer) };
+  @ApiPageResponse(CustomerResponseDto)
+  async list(@CurrentUser() user: AuthUser, @Query() query: ListCustomersQueryDto): Promise<Page<CustomerResponseDto>> {
+    return mapPage(await this.customers.list(user, query), mapCustomer);
   }
 
   @Post()

@@ -13,16 +13,17 @@ import type { FitReport } from '@swapwright/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
-import { PageQueryDto } from '../common/pagination/page-query.dto';
+import { Page, PageQueryDto } from '../common/pagination/page-query.dto';
+import { ApiPageResponse, mapPage } from '../common/pagination/page-response';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { FIT_REPORT_READERS, FIT_REPORT_RUNNERS, FIT_WHAT_IF_USERS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { CompareFitReportsQueryDto } from './dto/compare-fit-reports-query.dto';
 import {
   FitReportComparisonResponseDto,
-  FitReportPageResponseDto,
   FitReportResponseDto,
   FitReportResultDto,
+  FitReportSummaryResponseDto,
 } from './dto/fit-report-response.dto';
 import { WhatIfDto } from './dto/what-if.dto';
 import { mapFitReport, mapFitReportSummary } from './fit-report.mapper';
@@ -53,15 +54,14 @@ export class ProjectFitReportsController {
   @Get()
   @Roles(...FIT_REPORT_READERS)
   @ApiOperation({ summary: "The project's fit reports, newest first (summaries)" })
-  @ApiOkResponse({ type: FitReportPageResponseDto })
+  @ApiPageResponse(FitReportSummaryResponseDto)
   @ApiNotFoundResponse({ type: ErrorResponseDto })
   async list(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIdPipe) id: string,
     @Query() query: PageQueryDto,
-  ): Promise<FitReportPageResponseDto> {
-    const page = await this.reports.list(user, id, query);
-    return { ...page, items: page.items.map(mapFitReportSummary) };
+  ): Promise<Page<FitReportSummaryResponseDto>> {
+    return mapPage(await this.reports.list(user, id, query), mapFitReportSummary);
   }
 }
 

@@ -3,12 +3,14 @@ import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiNotFoundRes
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
+import { ApiPageResponse, mapPage } from '../common/pagination/page-response';
+import { Page } from '../common/pagination/page-query.dto';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { PROJECT_EDITORS, PROJECT_READERS, PROJECT_WRITERS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { CreateProjectDto } from './dto/create-project.dto';
 import { ListProjectsQueryDto } from './dto/list-projects-query.dto';
-import { ProjectPageResponseDto, ProjectResponseDto } from './dto/project-response.dto';
+import { ProjectResponseDto } from './dto/project-response.dto';
 import { UpdateProjectDto } from './dto/update-project.dto';
 import { mapProject } from './project.mapper';
 import { ProjectsService } from './projects.service';
@@ -21,10 +23,9 @@ export class ProjectsController {
 
   @Get()
   @Roles(...PROJECT_READERS)
-  @ApiOkResponse({ type: ProjectPageResponseDto })
-  async list(@CurrentUser() user: AuthUser, @Query() query: ListProjectsQueryDto): Promise<ProjectPageResponseDto> {
-    const page = await this.projects.list(user, query);
-    return { ...page, items: page.items.map(mapProject) };
+  @ApiPageResponse(ProjectResponseDto)
+  async list(@CurrentUser() user: AuthUser, @Query() query: ListProjectsQueryDto): Promise<Page<ProjectResponseDto>> {
+    return mapPage(await this.projects.list(user, query), mapProject);
   }
 
   @Post()

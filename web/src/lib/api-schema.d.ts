@@ -1516,6 +1516,12 @@ export interface components {
             name: string;
             password: string;
         };
+        PageMetaResponseDto: {
+            /** @description Items matching the filters, across all pages */
+            total: number;
+            page: number;
+            pageSize: number;
+        };
         CustomerResponseDto: {
             /** Format: uuid */
             id: string;
@@ -1530,12 +1536,6 @@ export interface components {
             userId: string | null;
             createdAt: string;
             updatedAt: string;
-        };
-        CustomerPageResponseDto: {
-            items: components["schemas"]["CustomerResponseDto"][];
-            total: number;
-            page: number;
-            pageSize: number;
         };
         CreateCustomerDto: {
             /** @example Odile Straker */
@@ -1587,12 +1587,6 @@ export interface components {
             placement: components["schemas"]["ProjectPlacementResponseDto"] | null;
             createdAt: string;
             updatedAt: string;
-        };
-        ProjectPageResponseDto: {
-            items: components["schemas"]["ProjectResponseDto"][];
-            total: number;
-            page: number;
-            pageSize: number;
         };
         ProjectGoalsDto: {
             /** @enum {string} */
@@ -2361,11 +2355,157 @@ export interface components {
             fails: number;
             unknown: number;
         };
+        UJointAngleRowDto: {
+            rpm: number;
+            maxDeg: number;
+        };
+        FitSettingsValuesResponseDto: {
+            /** @example 12.7 */
+            minGapBelowMm: number;
+            /** @example 6 */
+            tightBandMm: number;
+            /** @example 100 */
+            minGroundClearanceMm: number;
+            /** @example 12.7 */
+            minHoodGapMm: number;
+            /** @example 25.4 */
+            minFanToCoreMm: number;
+            /** @example 12.7 */
+            minFirewallGapMm: number;
+            /** @example 12.7 */
+            minRailGapMm: number;
+            /** @example 12.7 */
+            minSteeringBoxGapMm: number;
+            /** @example 6 */
+            mountFabricationHours: number;
+            /** @example 4 */
+            transmissionCrossmemberFabricationHours: number;
+            /** @example 3 */
+            defaultTiltDeg: number;
+            /** @example 0.5 */
+            uJointMinDeg: number;
+            /** @example 3 */
+            uJointMaxDeg: number;
+            /** @example 1 */
+            uJointMaxDifferenceDeg: number;
+            /** @example 0.75 */
+            criticalSpeedFraction: number;
+            /** @example 25.4 */
+            slipYokeMinEngagementMm: number;
+            /** @example 0.5 */
+            bsfcLbPerHpH: number;
+            /** @example 0.8 */
+            injectorMaxDuty: number;
+            /** @example 0.25 */
+            fuelPumpMargin: number;
+            /** @example 6 */
+            fuelDensityLbPerGal: number;
+            /** @example 0.74 */
+            fuelSpecificGravity: number;
+            /** @example 1 */
+            heatToCoolantFraction: number;
+            /** @example 0.1 */
+            coolingMargin: number;
+            /** @example 6000 */
+            stockOilPumpLimitRpm: number;
+            /** @example 250 */
+            oilPumpTightBandRpm: number;
+            /** @description Maximum U-joint angle by driveshaft speed */
+            uJointMaxAngleBySpeed: components["schemas"]["UJointAngleRowDto"][];
+            /** @example 0.25 */
+            uJointTightBandDeg: number;
+            /** @example 250 */
+            shaftSpeedTightBandRpm: number;
+            /** @example 6 */
+            pickupScreenMinGapMm: number;
+            /** @example 10 */
+            pickupScreenMaxGapMm: number;
+            /** @example 1 */
+            pickupScreenTightBandMm: number;
+            /** @example 5 */
+            pickupSumpToleranceMm: number;
+            /** @example 0.05 */
+            fuelTightBandFraction: number;
+            /** @example 0.05 */
+            coolingTightBandFraction: number;
+            /** @example 3 */
+            fuelPressureTolerancePsi: number;
+            /** @example 1 */
+            camTimingToleranceDeg: number;
+            /** @example 5 */
+            beltTightBandMm: number;
+            /** @example 45 */
+            minPulleyDiameterMm: number;
+            /** @example 1.5 */
+            pinionAngleShimHours: number;
+            /** @example 1 */
+            coolantHoseRerouteHours: number;
+            /** @example 3 */
+            mountDirectFitToleranceMm: number;
+            /** @example 25.4 */
+            transmissionMountSpacerMaxMm: number;
+            /** @example 8 */
+            crossmemberFabricationHours: number;
+            /** @example 5 */
+            steeringLinkageFabricationHours: number;
+            /** @example 2 */
+            axleBumpStopFabricationHours: number;
+            /** @example 4 */
+            hoodFabricationHours: number;
+            /** @example 4 */
+            radiatorSupportFabricationHours: number;
+            /** @example 8 */
+            firewallFabricationHours: number;
+            /** @example 6 */
+            tunnelFabricationHours: number;
+            /** @example 4 */
+            railClearanceFabricationHours: number;
+        };
+        PartRemedyResponseDto: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "PartRemedyResponseDto";
+            /** @example oil-pan */
+            category: string;
+            /** @description The attributes the part must have, e.g. { sumpPosition: "rear" } */
+            requires: {
+                [key: string]: string | number | boolean;
+            };
+            /** @description Catalog ids known to satisfy the requirement, best first */
+            partIds: string[];
+            note: string;
+        };
+        PlacementRemedyResponseDto: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "PlacementRemedyResponseDto";
+            /** @enum {string} */
+            axis: "setback" | "height" | "tilt";
+            /** @description setback: rearward (+); height: up (+); tilt: front up (+) */
+            changeBy: number;
+            /** @enum {string} */
+            unit: "mm" | "deg";
+            note: string;
+        };
+        FabricationRemedyResponseDto: {
+            /**
+             * @description discriminator enum property added by openapi-typescript
+             * @enum {string}
+             */
+            kind: "FabricationRemedyResponseDto";
+            operation: string;
+            laborHours: number;
+            note: string;
+        };
         FindingResponseDto: {
             /** @example envelope.sump-crossmember */
             checkId: string;
-            /** @example envelope */
-            group: string;
+            /** @enum {string} */
+            group: "envelope" | "mounts" | "drivetrain" | "oiling" | "management" | "fuel" | "cooling" | "belt" | "cam";
             title: string;
             /** @enum {string} */
             status: "ok" | "tight" | "fails" | "unknown";
@@ -2380,7 +2520,7 @@ export interface components {
             message: string;
             missing: string[];
             /** @description Part, placement or fabrication remedies */
-            remedies: Record<string, never>[];
+            remedies: (components["schemas"]["PartRemedyResponseDto"] | components["schemas"]["PlacementRemedyResponseDto"] | components["schemas"]["FabricationRemedyResponseDto"])[];
             thresholdSource: string;
             against?: string;
         };
@@ -2388,9 +2528,7 @@ export interface components {
             engineVersion: string;
             placement: components["schemas"]["PlacementDto"];
             /** @description The thresholds used (defaults plus overrides) */
-            settings: {
-                [key: string]: unknown;
-            };
+            settings: components["schemas"]["FitSettingsValuesResponseDto"];
             findings: components["schemas"]["FindingResponseDto"][];
             /** @description Every tight or failing check, worst first */
             shortfalls: components["schemas"]["FindingResponseDto"][];
@@ -2449,93 +2587,6 @@ export interface components {
             goals: components["schemas"]["SwapGoalsDto"];
             /** @description Catalog parts the engine may name in remedies */
             candidates?: components["schemas"]["FitCandidatesDto"];
-        };
-        FitReportInputsResponseDto: {
-            spec: components["schemas"]["FitSpecDto"];
-            settingsOverrides: {
-                [key: string]: unknown;
-            };
-            /** @enum {string} */
-            placementSource: "project" | "proposed" | "chassis-default";
-            /** @description What the API filled in or left out when building the spec */
-            notes: string[];
-        };
-        FitReportResponseDto: {
-            /** Format: uuid */
-            id: string;
-            /** Format: uuid */
-            projectId: string;
-            createdById: string | null;
-            /** @description Name of the user who ran the check; null once that user is gone */
-            createdByName: string | null;
-            engineVersion: string;
-            placement: components["schemas"]["PlacementDto"];
-            /**
-             * @description project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat
-             * @enum {string}
-             */
-            placementSource: "project" | "proposed" | "chassis-default";
-            counts: components["schemas"]["FitReportCountsDto"];
-            /** @enum {string} */
-            worstStatus: "ok" | "tight" | "fails" | "unknown";
-            caution: string;
-            createdAt: string;
-            report: components["schemas"]["FitReportResultDto"];
-            inputs: components["schemas"]["FitReportInputsResponseDto"];
-        };
-        FitReportSummaryResponseDto: {
-            /** Format: uuid */
-            id: string;
-            /** Format: uuid */
-            projectId: string;
-            createdById: string | null;
-            /** @description Name of the user who ran the check; null once that user is gone */
-            createdByName: string | null;
-            engineVersion: string;
-            placement: components["schemas"]["PlacementDto"];
-            /**
-             * @description project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat
-             * @enum {string}
-             */
-            placementSource: "project" | "proposed" | "chassis-default";
-            counts: components["schemas"]["FitReportCountsDto"];
-            /** @enum {string} */
-            worstStatus: "ok" | "tight" | "fails" | "unknown";
-            caution: string;
-            createdAt: string;
-        };
-        FitReportPageResponseDto: {
-            items: components["schemas"]["FitReportSummaryResponseDto"][];
-            total: number;
-            page: number;
-            pageSize: number;
-        };
-        FindingDeltaSideDto: {
-            /** @enum {string} */
-            status: "ok" | "tight" | "fails" | "unknown";
-            measured: number | null;
-            margin: number | null;
-        };
-        FindingDeltaDto: {
-            checkId: string;
-            title: string;
-            before: components["schemas"]["FindingDeltaSideDto"] | null;
-            after: components["schemas"]["FindingDeltaSideDto"] | null;
-            /** @enum {string} */
-            change: "improved" | "worse" | "same" | "added" | "removed";
-            statusChanged: boolean;
-            /** @description b.margin − a.margin */
-            marginDelta: number | null;
-        };
-        FitReportComparisonResponseDto: {
-            a: components["schemas"]["FitReportSummaryResponseDto"];
-            b: components["schemas"]["FitReportSummaryResponseDto"];
-            /** @description Per check, b relative to a */
-            changes: components["schemas"]["FindingDeltaDto"][];
-        };
-        UJointAngleRowDto: {
-            rpm: number;
-            maxDeg: number;
         };
         FitSettingsOverridesDto: {
             /** @description Maximum U-joint angle by driveshaft speed */
@@ -2639,6 +2690,81 @@ export interface components {
             /** @default 4 */
             railClearanceFabricationHours: number;
         };
+        FitReportInputsResponseDto: {
+            spec: components["schemas"]["FitSpecDto"];
+            settingsOverrides: components["schemas"]["FitSettingsOverridesDto"];
+            /** @enum {string} */
+            placementSource: "project" | "proposed" | "chassis-default";
+            /** @description What the API filled in or left out when building the spec */
+            notes: string[];
+        };
+        FitReportResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            projectId: string;
+            createdById: string | null;
+            /** @description Name of the user who ran the check; null once that user is gone */
+            createdByName: string | null;
+            engineVersion: string;
+            placement: components["schemas"]["PlacementDto"];
+            /**
+             * @description project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat
+             * @enum {string}
+             */
+            placementSource: "project" | "proposed" | "chassis-default";
+            counts: components["schemas"]["FitReportCountsDto"];
+            /** @enum {string} */
+            worstStatus: "ok" | "tight" | "fails" | "unknown";
+            caution: string;
+            createdAt: string;
+            report: components["schemas"]["FitReportResultDto"];
+            inputs: components["schemas"]["FitReportInputsResponseDto"];
+        };
+        FitReportSummaryResponseDto: {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            projectId: string;
+            createdById: string | null;
+            /** @description Name of the user who ran the check; null once that user is gone */
+            createdByName: string | null;
+            engineVersion: string;
+            placement: components["schemas"]["PlacementDto"];
+            /**
+             * @description project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat
+             * @enum {string}
+             */
+            placementSource: "project" | "proposed" | "chassis-default";
+            counts: components["schemas"]["FitReportCountsDto"];
+            /** @enum {string} */
+            worstStatus: "ok" | "tight" | "fails" | "unknown";
+            caution: string;
+            createdAt: string;
+        };
+        FindingDeltaSideDto: {
+            /** @enum {string} */
+            status: "ok" | "tight" | "fails" | "unknown";
+            measured: number | null;
+            margin: number | null;
+        };
+        FindingDeltaDto: {
+            checkId: string;
+            title: string;
+            before: components["schemas"]["FindingDeltaSideDto"] | null;
+            after: components["schemas"]["FindingDeltaSideDto"] | null;
+            /** @enum {string} */
+            change: "improved" | "worse" | "same" | "added" | "removed";
+            statusChanged: boolean;
+            /** @description b.margin − a.margin */
+            marginDelta: number | null;
+        };
+        FitReportComparisonResponseDto: {
+            a: components["schemas"]["FitReportSummaryResponseDto"];
+            b: components["schemas"]["FitReportSummaryResponseDto"];
+            /** @description Per check, b relative to a */
+            changes: components["schemas"]["FindingDeltaDto"][];
+        };
         WhatIfDto: {
             /** @description A complete FitSpec (see docs/fit-spec.md for every field and the frames) */
             spec: components["schemas"]["FitSpecDto"];
@@ -2712,13 +2838,9 @@ export interface components {
         };
         FitSettingsResponseDto: {
             /** @description The shop's own thresholds */
-            overrides: {
-                [key: string]: unknown;
-            };
+            overrides: components["schemas"]["FitSettingsOverridesDto"];
             /** @description Defaults plus the overrides: what a run uses */
-            effective: {
-                [key: string]: unknown;
-            };
+            effective: components["schemas"]["FitSettingsValuesResponseDto"];
             updatedAt: string | null;
         };
         UpdateFitSettingsDto: {
@@ -3740,7 +3862,9 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["CustomerPageResponseDto"];
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["CustomerResponseDto"][];
+                    };
                 };
             };
         };
@@ -3864,7 +3988,9 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProjectPageResponseDto"];
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["ProjectResponseDto"][];
+                    };
                 };
             };
         };
@@ -4002,11 +4128,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["EngineResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["EngineResponseDto"][];
                     };
                 };
             };
@@ -4230,11 +4353,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["OilPanResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["OilPanResponseDto"][];
                     };
                 };
             };
@@ -4458,11 +4578,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["OilPickupResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["OilPickupResponseDto"][];
                     };
                 };
             };
@@ -4686,11 +4803,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["OilPumpResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["OilPumpResponseDto"][];
                     };
                 };
             };
@@ -4914,11 +5028,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["TransmissionResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["TransmissionResponseDto"][];
                     };
                 };
             };
@@ -5142,11 +5253,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["ChassisResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["ChassisResponseDto"][];
                     };
                 };
             };
@@ -5370,11 +5478,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["EngineControllerResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["EngineControllerResponseDto"][];
                     };
                 };
             };
@@ -5598,11 +5703,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["MountAdapterResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["MountAdapterResponseDto"][];
                     };
                 };
             };
@@ -5826,11 +5928,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["BellhousingAdapterResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["BellhousingAdapterResponseDto"][];
                     };
                 };
             };
@@ -6054,11 +6153,8 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        items?: components["schemas"]["SerpentineBeltResponseDto"][];
-                        total?: number;
-                        page?: number;
-                        pageSize?: number;
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["SerpentineBeltResponseDto"][];
                     };
                 };
             };
@@ -6267,7 +6363,9 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["FitReportPageResponseDto"];
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["FitReportSummaryResponseDto"][];
+                    };
                 };
             };
             404: {

@@ -12,9 +12,3 @@ export class CustomerResponseDto {
   @ApiProperty() updatedAt: string;
 }
 
-export class CustomerPageResponseDto {
-  @ApiProperty({ type: [CustomerResponseDto] }) items: CustomerResponseDto[];
-  @ApiProperty() total: number;
-  @ApiProperty() page: number;
-  @ApiProperty() pageSize: number;
-}

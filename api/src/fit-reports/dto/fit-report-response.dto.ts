@@ -1,15 +1,68 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiExtraModels, ApiProperty, ApiPropertyOptional, getSchemaPath } from '@nestjs/swagger';
+import {
+  CHECK_GROUPS,
+  CHECK_STATUSES,
+  DEFAULT_FIT_SETTINGS,
+  PLACEMENT_AXES,
+  type CheckGroup,
+  type CheckStatus,
+  type FitSettings,
+  type PlacementAxis,
+} from '@swapwright/shared';
 import { PlacementDto } from '../../catalog/dto/part-spec.dto';
 import { PLACEMENT_SOURCES, PlacementSource } from '../fit-report-record.entity';
+import { FitSettingsOverridesDto, UJointAngleRowDto } from './fit-settings-overrides.dto';
 import { FitSpecDto } from './fit-spec.dto';
 
-const STATUSES = ['ok', 'tight', 'fails', 'unknown'];
+export class PartRemedyResponseDto {
+  @ApiProperty({ enum: ['part'] }) kind: 'part';
+  @ApiProperty({ example: 'oil-pan' }) category: string;
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: { oneOf: [{ type: 'string' }, { type: 'number' }, { type: 'boolean' }] },
+    description: 'The attributes the part must have, e.g. { sumpPosition: "rear" }',
+  })
+  requires: Record<string, string | number | boolean>;
+  @ApiProperty({ type: [String], description: 'Catalog ids known to satisfy the requirement, best first' }) partIds: string[];
+  @ApiProperty() note: string;
+}
 
+export class PlacementRemedyResponseDto {
+  @ApiProperty({ enum: ['placement'] }) kind: 'placement';
+  @ApiProperty({ enum: PLACEMENT_AXES }) axis: PlacementAxis;
+  @ApiProperty({ description: 'setback: rearward (+); height: up (+); tilt: front up (+)' }) changeBy: number;
+  @ApiProperty({ enum: ['mm', 'deg'] }) unit: 'mm' | 'deg';
+  @ApiProperty() note: string;
+}
+
+export class FabricationRemedyResponseDto {
+  @ApiProperty({ enum: ['fabrication'] }) kind: 'fabrication';
+  @ApiProperty() operation: string;
+  @ApiProperty() laborHours: number;
+  @ApiProperty() note: string;
+}
+
+/** Every threshold of a fit run (shared FitSettings): the defaults with the shop's and the request's overrides. */
+// The interface gives the class FitSettings' fields; the loop below documents each of them.
+export interface FitSettingsValuesResponseDto extends FitSettings {}
+export class FitSettingsValuesResponseDto {}
+// Declared from DEFAULT_FIT_SETTINGS, so a threshold the engine adds is documented without a change here.
+for (const [key, fallback] of Object.entries(DEFAULT_FIT_SETTINGS)) {
+  const target = FitSettingsValuesResponseDto.prototype;
+  if (typeof fallback === 'number') ApiProperty({ type: Number, example: fallback })(target, key);
+  else if (key === 'uJointMaxAngleBySpeed') {
+    ApiProperty({ type: [UJointAngleRowDto], description: 'Maximum U-joint angle by driveshaft speed' })(target, key);
+  } else {
+    throw new Error(`FitSettingsValuesResponseDto does not document the setting ${key}: add it here`);
+  }
+}
+
+@ApiExtraModels(PartRemedyResponseDto, PlacementRemedyResponseDto, FabricationRemedyResponseDto)
 export class FindingResponseDto {
   @ApiProperty({ example: 'envelope.sump-crossmember' }) checkId: string;
-  @ApiProperty({ example: 'envelope' }) group: string;
+  @ApiProperty({ enum: CHECK_GROUPS }) group: CheckGroup;
   @ApiProperty() title: string;
-  @ApiProperty({ enum: STATUSES }) status: string;
+  @ApiProperty({ enum: CHECK_STATUSES }) status: CheckStatus;
   @ApiProperty({ type: Number, nullable: true }) measured: number | null;
   @ApiProperty({ type: Number, nullable: true }) required: number | null;
   @ApiProperty({ type: Number, nullable: true, description: 'Positive is inside the limit; negative fails' }) margin: number | null;
@@ -17,7 +70,19 @@ export class FindingResponseDto {
   @ApiProperty({ example: 'mm' }) unit: string;
   @ApiProperty() message: string;
   @ApiProperty({ type: [String] }) missing: string[];
-  @ApiProperty({ type: 'array', items: { type: 'object' }, description: 'Part, placement or fabrication remedies' }) remedies: object[];
+  @ApiProperty({
+    type: 'array',
+    items: {
+      oneOf: [
+        { $ref: getSchemaPath(PartRemedyResponseDto) },
+        { $ref: getSchemaPath(PlacementRemedyResponseDto) },
+        { $ref: getSchemaPath(FabricationRemedyResponseDto) },
+      ],
+      discriminator: { propertyName: 'kind' },
+    },
+    description: 'Part, placement or fabrication remedies',
+  })
+  remedies: Array<PartRemedyResponseDto | PlacementRemedyResponseDto | FabricationRemedyResponseDto>;
   @ApiProperty() thresholdSource: string;
   @ApiPropertyOptional() against?: string;
 }
@@ -34,8 +99,8 @@ export class FitReportCountsDto {
 export class FitReportResultDto {
   @ApiProperty() engineVersion: string;
   @ApiProperty({ type: PlacementDto }) placement: PlacementDto;
-  @ApiProperty({ type: 'object', additionalProperties: true, description: 'The thresholds used (defaults plus overrides)' })
-  settings: object;
+  @ApiProperty({ type: FitSettingsValuesResponseDto, description: 'The thresholds used (defaults plus overrides)' })
+  settings: FitSettingsValuesResponseDto;
   @ApiProperty({ type: [FindingResponseDto] }) findings: FindingResponseDto[];
   @ApiProperty({ type: [FindingResponseDto], description: 'Every tight or failing check, worst first' }) shortfalls: FindingResponseDto[];
   @ApiProperty({ type: FitReportCountsDto }) summary: FitReportCountsDto;
@@ -55,14 +120,14 @@ export class FitReportSummaryResponseDto {
   @ApiProperty({ enum: PLACEMENT_SOURCES, description: "project: the project's own; proposed: the fit engine's best; chassis-default: where the stock engine sat" })
   placementSource: PlacementSource;
   @ApiProperty({ type: FitReportCountsDto }) counts: FitReportCountsDto;
-  @ApiProperty({ enum: STATUSES }) worstStatus: string;
+  @ApiProperty({ enum: CHECK_STATUSES }) worstStatus: CheckStatus;
   @ApiProperty() caution: string;
   @ApiProperty() createdAt: string;
 }
 
 export class FitReportInputsResponseDto {
   @ApiProperty({ type: FitSpecDto }) spec: FitSpecDto;
-  @ApiProperty({ type: 'object', additionalProperties: true }) settingsOverrides: object;
+  @ApiProperty({ type: FitSettingsOverridesDto }) settingsOverrides: FitSettingsOverridesDto;
   @ApiProperty({ enum: PLACEMENT_SOURCES }) placementSource: PlacementSource;
   @ApiProperty({ type: [String], description: 'What the API filled in or left out when building the spec' }) notes: string[];
 }
@@ -72,15 +137,9 @@ export class FitReportResponseDto extends FitReportSummaryResponseDto {
   @ApiProperty({ type: FitReportInputsResponseDto }) inputs: FitReportInputsResponseDto;
 }
 
-export class FitReportPageResponseDto {
-  @ApiProperty({ type: [FitReportSummaryResponseDto] }) items: FitReportSummaryResponseDto[];
-  @ApiProperty() total: number;
-  @ApiProperty() page: number;
-  @ApiProperty() pageSize: number;
-}
 
 export class FindingDeltaSideDto {
-  @ApiProperty({ enum: STATUSES }) status: string;
+  @ApiProperty({ enum: CHECK_STATUSES }) status: CheckStatus;
   @ApiProperty({ type: Number, nullable: true }) measured: number | null;
   @ApiProperty({ type: Number, nullable: true }) margin: number | null;
 }
@@ -102,7 +161,8 @@ export class FitReportComparisonResponseDto {
 }
 
 export class FitSettingsResponseDto {
-  @ApiProperty({ type: 'object', additionalProperties: true, description: "The shop's own thresholds" }) overrides: object;
-  @ApiProperty({ type: 'object', additionalProperties: true, description: 'Defaults plus the overrides: what a run uses' }) effective: object;
+  @ApiProperty({ type: FitSettingsOverridesDto, description: "The shop's own thresholds" }) overrides: FitSettingsOverridesDto;
+  @ApiProperty({ type: FitSettingsValuesResponseDto, description: 'Defaults plus the overrides: what a run uses' })
+  effective: FitSettingsValuesResponseDto;
   @ApiProperty({ type: String, nullable: true }) updatedAt: string | null;
 }

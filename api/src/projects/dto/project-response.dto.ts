@@ -35,9 +35,3 @@ export class ProjectResponseDto {
   @ApiProperty() updatedAt: string;
 }
 
-export class ProjectPageResponseDto {
-  @ApiProperty({ type: [ProjectResponseDto] }) items: ProjectResponseDto[];
-  @ApiProperty() total: number;
-  @ApiProperty() page: number;
-  @ApiProperty() pageSize: number;
-}
