@@ -1613,7 +1613,7 @@ export interface components {
              * @default intake
              * @enum {string}
              */
-            status: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
+            status?: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
             vehicleDescription?: string;
             /** @description Defaults to use street with no targets */
             goals?: components["schemas"]["ProjectGoalsDto"];
@@ -1639,7 +1639,7 @@ export interface components {
              * @default intake
              * @enum {string}
              */
-            status: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
+            status?: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
             vehicleDescription?: string;
             placement?: components["schemas"]["ProjectPlacementDto"] | null;
             /** @description Only the given goal fields change */
@@ -2333,7 +2333,7 @@ export interface components {
              * @default PK
              * @enum {string}
              */
-            profile: "PK";
+            profile?: "PK";
         };
         UpdateSerpentineBeltDto: {
             name?: string;
@@ -2346,7 +2346,7 @@ export interface components {
              * @default PK
              * @enum {string}
              */
-            profile: "PK";
+            profile?: "PK";
         };
         FitReportCountsDto: {
             total: number;
@@ -2592,103 +2592,103 @@ export interface components {
             /** @description Maximum U-joint angle by driveshaft speed */
             uJointMaxAngleBySpeed?: components["schemas"]["UJointAngleRowDto"][];
             /** @default 12.7 */
-            minGapBelowMm: number;
+            minGapBelowMm?: number;
             /** @default 6 */
-            tightBandMm: number;
+            tightBandMm?: number;
             /** @default 100 */
-            minGroundClearanceMm: number;
+            minGroundClearanceMm?: number;
             /** @default 12.7 */
-            minHoodGapMm: number;
+            minHoodGapMm?: number;
             /** @default 25.4 */
-            minFanToCoreMm: number;
+            minFanToCoreMm?: number;
             /** @default 12.7 */
-            minFirewallGapMm: number;
+            minFirewallGapMm?: number;
             /** @default 12.7 */
-            minRailGapMm: number;
+            minRailGapMm?: number;
             /** @default 12.7 */
-            minSteeringBoxGapMm: number;
+            minSteeringBoxGapMm?: number;
             /** @default 6 */
-            mountFabricationHours: number;
+            mountFabricationHours?: number;
             /** @default 4 */
-            transmissionCrossmemberFabricationHours: number;
+            transmissionCrossmemberFabricationHours?: number;
             /** @default 3 */
-            defaultTiltDeg: number;
+            defaultTiltDeg?: number;
             /** @default 0.5 */
-            uJointMinDeg: number;
+            uJointMinDeg?: number;
             /** @default 3 */
-            uJointMaxDeg: number;
+            uJointMaxDeg?: number;
             /** @default 1 */
-            uJointMaxDifferenceDeg: number;
+            uJointMaxDifferenceDeg?: number;
             /** @default 0.75 */
-            criticalSpeedFraction: number;
+            criticalSpeedFraction?: number;
             /** @default 25.4 */
-            slipYokeMinEngagementMm: number;
+            slipYokeMinEngagementMm?: number;
             /** @default 0.5 */
-            bsfcLbPerHpH: number;
+            bsfcLbPerHpH?: number;
             /** @default 0.8 */
-            injectorMaxDuty: number;
+            injectorMaxDuty?: number;
             /** @default 0.25 */
-            fuelPumpMargin: number;
+            fuelPumpMargin?: number;
             /** @default 6 */
-            fuelDensityLbPerGal: number;
+            fuelDensityLbPerGal?: number;
             /** @default 0.74 */
-            fuelSpecificGravity: number;
+            fuelSpecificGravity?: number;
             /** @default 1 */
-            heatToCoolantFraction: number;
+            heatToCoolantFraction?: number;
             /** @default 0.1 */
-            coolingMargin: number;
+            coolingMargin?: number;
             /** @default 6000 */
-            stockOilPumpLimitRpm: number;
+            stockOilPumpLimitRpm?: number;
             /** @default 250 */
-            oilPumpTightBandRpm: number;
+            oilPumpTightBandRpm?: number;
             /** @default 0.25 */
-            uJointTightBandDeg: number;
+            uJointTightBandDeg?: number;
             /** @default 250 */
-            shaftSpeedTightBandRpm: number;
+            shaftSpeedTightBandRpm?: number;
             /** @default 6 */
-            pickupScreenMinGapMm: number;
+            pickupScreenMinGapMm?: number;
             /** @default 10 */
-            pickupScreenMaxGapMm: number;
+            pickupScreenMaxGapMm?: number;
             /** @default 1 */
-            pickupScreenTightBandMm: number;
+            pickupScreenTightBandMm?: number;
             /** @default 5 */
-            pickupSumpToleranceMm: number;
+            pickupSumpToleranceMm?: number;
             /** @default 0.05 */
-            fuelTightBandFraction: number;
+            fuelTightBandFraction?: number;
             /** @default 0.05 */
-            coolingTightBandFraction: number;
+            coolingTightBandFraction?: number;
             /** @default 3 */
-            fuelPressureTolerancePsi: number;
+            fuelPressureTolerancePsi?: number;
             /** @default 1 */
-            camTimingToleranceDeg: number;
+            camTimingToleranceDeg?: number;
             /** @default 5 */
-            beltTightBandMm: number;
+            beltTightBandMm?: number;
             /** @default 45 */
-            minPulleyDiameterMm: number;
+            minPulleyDiameterMm?: number;
             /** @default 1.5 */
-            pinionAngleShimHours: number;
+            pinionAngleShimHours?: number;
             /** @default 1 */
-            coolantHoseRerouteHours: number;
+            coolantHoseRerouteHours?: number;
             /** @default 3 */
-            mountDirectFitToleranceMm: number;
+            mountDirectFitToleranceMm?: number;
             /** @default 25.4 */
-            transmissionMountSpacerMaxMm: number;
+            transmissionMountSpacerMaxMm?: number;
             /** @default 8 */
-            crossmemberFabricationHours: number;
+            crossmemberFabricationHours?: number;
             /** @default 5 */
-            steeringLinkageFabricationHours: number;
+            steeringLinkageFabricationHours?: number;
             /** @default 2 */
-            axleBumpStopFabricationHours: number;
+            axleBumpStopFabricationHours?: number;
             /** @default 4 */
-            hoodFabricationHours: number;
+            hoodFabricationHours?: number;
             /** @default 4 */
-            radiatorSupportFabricationHours: number;
+            radiatorSupportFabricationHours?: number;
             /** @default 8 */
-            firewallFabricationHours: number;
+            firewallFabricationHours?: number;
             /** @default 6 */
-            tunnelFabricationHours: number;
+            tunnelFabricationHours?: number;
             /** @default 4 */
-            railClearanceFabricationHours: number;
+            railClearanceFabricationHours?: number;
         };
         FitReportInputsResponseDto: {
             spec: components["schemas"]["FitSpecDto"];
@@ -3032,7 +3032,7 @@ export interface components {
              * @default lowest-cost
              * @enum {string}
              */
-            objective: "lowest-cost" | "least-fabrication" | "in-stock";
+            objective?: "lowest-cost" | "least-fabrication" | "in-stock";
             /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
             resolve?: string[];
         };
@@ -3263,12 +3263,12 @@ export interface components {
              * @description Part lines: whole units
              * @default 1
              */
-            quantity: number;
+            quantity?: number;
             /**
              * @default list
              * @enum {string}
              */
-            pricing: "list" | "cost-plus";
+            pricing?: "list" | "cost-plus";
             /** @description Part lines priced from the list: the unit price in cents */
             unitPriceCents?: number;
             /** @description Part lines priced from cost: the unit cost in cents */
