@@ -1,6 +1,6 @@
 import { DEMO_PASSWORD } from '@swapwright/seed-data';
-import { mailsTo, resetTokenFrom } from './helpers/mail';
-import { bearer, countRows, createTestApp, resetData, Session, signIn, TestApp } from './helpers/test-app';
+import { mailsTo, resetTokenFrom, signUpTokenFor } from './helpers/mail';
+import { bearer, countRows, createTestApp, resetData, Session, signIn, signUpThroughMail, TestApp } from './helpers/test-app';
 
 describe('auth', () => {
   let t: TestApp;
@@ -13,11 +13,16 @@ describe('auth', () => {
   afterAll(() => t.close());
 
   describe('sign-up', () => {
-    it('creates the user, a one-person shop and the owner membership', async () => {
-      const response = await t.http
+    it('creates the user, a one-person shop and the owner membership once the mailed link is opened', async () => {
+      const users = await countRows(t.dataSource, 'users');
+      const asked = await t.http
         .post('/api/auth/sign-up')
         .send({ email: 'Wren.Halloway@Example.test', password: 'long-enough-1', name: 'Wren Halloway', shopName: 'Wren Garage' })
-        .expect(201);
+        .expect(202);
+      expect(asked.body.message).toMatch(/Check your e-mail/);
+      expect(await countRows(t.dataSource, 'users')).toBe(users);
+      const token = await signUpTokenFor('wren.halloway@example.test');
+      const response = await t.http.post('/api/auth/sign-up/confirm').send({ token }).expect(201);
       expect(response.body.user).toMatchObject({
         email: 'wren.halloway@example.test',
         name: 'Wren Halloway',
@@ -30,15 +35,39 @@ describe('auth', () => {
       expect(me.body.shop.id).toBe(response.body.user.shop.id);
     });
 
-    it('refuses a taken e-mail with 409 and writes nothing', async () => {
+    it('answers a taken e-mail exactly like a new one, writes nothing and mails the owner a notice', async () => {
       const before = { shops: await countRows(t.dataSource, 'shops'), users: await countRows(t.dataSource, 'users') };
       const response = await t.http
         .post('/api/auth/sign-up')
         .send({ email: 'owner@ironbark.test', password: 'long-enough-1', name: 'Someone Else', shopName: 'Second Garage' })
-        .expect(409);
-      expect(response.body.code).toBe('email_taken');
+        .expect(202);
+      const fresh = await t.http
+        .post('/api/auth/sign-up')
+        .send({ email: 'nobody.yet@example.test', password: 'long-enough-1', name: 'Someone Else', shopName: 'Second Garage' })
+        .expect(202);
+      expect(response.body).toEqual({ message: fresh.body.message.replace('nobody.yet@example.test', 'owner@ironbark.test') });
       expect(await countRows(t.dataSource, 'shops')).toBe(before.shops);
       expect(await countRows(t.dataSource, 'users')).toBe(before.users);
+      const [notice] = await mailsTo('owner@ironbark.test');
+      expect(notice.subject).toMatch(/tried to create a Swapwright account with your address/);
+      expect(notice.text).toMatch(/reset-password/);
+      expect(notice.text).not.toMatch(/sign-up\?token=/);
+    });
+
+    it('opens a sign-up link once, and not after 24 hours', async () => {
+      const email = 'once.only@example.test';
+      await t.http.post('/api/auth/sign-up').send({ email, password: 'long-enough-1', name: 'Odran Pell', shopName: 'Pell Works' }).expect(202);
+      const token = await signUpTokenFor(email);
+      await t.http.post('/api/auth/sign-up/confirm').send({ token }).expect(201);
+      const again = await t.http.post('/api/auth/sign-up/confirm').send({ token }).expect(400);
+      expect(again.body.code).toBe('sign_up_link_invalid');
+
+      const late = 'late.comer@example.test';
+      await t.http.post('/api/auth/sign-up').send({ email: late, password: 'long-enough-1', name: 'Tess Marrow', shopName: 'Marrow Yard' }).expect(202);
+      await t.dataSource.query('UPDATE pending_sign_ups SET expiresAt = NOW(3) - INTERVAL 1 MINUTE WHERE email = ?', [late]);
+      const expired = await t.http.post('/api/auth/sign-up/confirm').send({ token: await signUpTokenFor(late) }).expect(400);
+      expect(expired.body.message).toMatch(/older than 24 hours/);
+      await t.http.post('/api/auth/sign-in').send({ email: late, password: 'long-enough-1' }).expect(401);
     });
   });
 
@@ -142,7 +171,7 @@ describe('auth', () => {
     const email = 'reset.me@example.test';
 
     beforeAll(async () => {
-      await t.http.post('/api/auth/sign-up').send({ email, password: 'first-password', name: 'Rhea Calloway', shopName: 'Calloway Shed' }).expect(201);
+      await signUpThroughMail(t.http, { email, password: 'first-password', name: 'Rhea Calloway', shopName: 'Calloway Shed' });
       await fetch(process.env.MAIL_FAKE_URL!, { method: 'DELETE' });
     });
 

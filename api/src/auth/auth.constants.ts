@@ -1,6 +1,7 @@
 export const ACCESS_TOKEN_TTL_SECONDS = 15 * 60;
 export const REFRESH_TOKEN_TTL_MS = 30 * 24 * 60 * 60 * 1000;
 export const PASSWORD_RESET_TTL_MS = 30 * 60 * 1000;
+export const SIGN_UP_LINK_TTL_MS = 24 * 60 * 60 * 1000;
 export const BCRYPT_ROUNDS = 10;
 
 export interface AccessTokenPayload {

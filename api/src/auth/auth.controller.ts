@@ -19,8 +19,9 @@ import { PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password
 import { RefreshTokenDto } from './dto/refresh-token.dto';
 import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
 import { SignInDto } from './dto/sign-in.dto';
-import { SignUpDto } from './dto/sign-up.dto';
+import { SignUpAcceptedResponseDto, SignUpConfirmDto, SignUpDto } from './dto/sign-up.dto';
 import { PasswordResetService } from './password-reset.service';
+import { SignUpService } from './sign-up.service';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -28,15 +29,30 @@ export class AuthController {
   constructor(
     private readonly auth: AuthService,
     private readonly passwordReset: PasswordResetService,
+    private readonly signUps: SignUpService,
   ) {}
 
   @Public()
   @AuthRateLimited()
   @Post('sign-up')
-  @ApiCreatedResponse({ type: SessionResponseDto })
+  @HttpCode(202)
+  @ApiAcceptedResponse({
+    type: SignUpAcceptedResponseDto,
+    description: 'Always the same answer: a link to finish is mailed to a new address; a registered one gets a notice instead',
+  })
   @ApiBadRequestResponse({ type: ErrorResponseDto })
-  signUp(@Body() body: SignUpDto): Promise<SessionResponseDto> {
-    return this.auth.signUp(body);
+  async signUp(@Body() body: SignUpDto): Promise<SignUpAcceptedResponseDto> {
+    await this.signUps.request(body);
+    return { message: `Check your e-mail: we sent ${body.email.trim()} a link to finish creating your shop.` };
+  }
+
+  @Public()
+  @AuthRateLimited()
+  @Post('sign-up/confirm')
+  @ApiCreatedResponse({ type: SessionResponseDto, description: 'The shop is created and its owner signed in' })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  confirmSignUp(@Body() body: SignUpConfirmDto): Promise<SessionResponseDto> {
+    return this.signUps.confirm(body.token);
   }
 
   @Public()

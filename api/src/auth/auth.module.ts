@@ -12,6 +12,7 @@ import { JwtStrategy } from './jwt.strategy';
 import { MemberResolverService } from './member-resolver.service';
 import { PasswordResetService } from './password-reset.service';
 import { SessionsService } from './sessions.service';
+import { SignUpService } from './sign-up.service';
 
 @Module({
   imports: [
@@ -29,7 +30,7 @@ import { SessionsService } from './sessions.service';
     MembershipsModule,
   ],
   controllers: [AuthController],
-  providers: [AuthService, SessionsService, PasswordResetService, MemberResolverService, JwtStrategy],
+  providers: [AuthService, SignUpService, SessionsService, PasswordResetService, MemberResolverService, JwtStrategy],
   exports: [SessionsService, AuthService],
 })
 export class AuthModule {}

@@ -11,7 +11,6 @@ import { AuthErrors } from './auth.errors';
 import { mapCurrentUser } from './current-user.mapper';
 import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
 import { SignInDto } from './dto/sign-in.dto';
-import { SignUpDto } from './dto/sign-up.dto';
 import { SessionsService } from './sessions.service';
 
 // Compared against when the e-mail is unknown, so a wrong e-mail takes as long as a wrong password.
@@ -30,17 +29,6 @@ export class AuthService {
     private readonly memberships: MembershipsService,
     private readonly sessions: SessionsService,
   ) {}
-
-  /** A new person with their own one-person shop, as its owner: one transaction. */
-  async signUp(input: SignUpDto): Promise<SessionResponseDto> {
-    const passwordHash = await hashPassword(input.password);
-    return this.dataSource.transaction(async (manager) => {
-      const user = await this.users.create(manager, { email: input.email, name: input.name, passwordHash });
-      const shop = await this.shops.create(manager, input.shopName);
-      const membership = await this.memberships.create(manager, { shopId: shop.id, userId: user.id, role: 'owner' });
-      return this.sessions.issue(membership.id, manager);
-    });
-  }
 
   async signIn(input: SignInDto): Promise<SessionResponseDto> {
     const user = await this.users.findByEmail(input.email);

@@ -1,6 +1,7 @@
 import { RefreshToken } from '../auth/refresh-token.entity';
 import { CATALOG_ENTITIES } from '../catalog/catalog-item.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
+import { PendingSignUp } from '../auth/pending-sign-up.entity';
 import { Customer } from '../customers/customer.entity';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { ProjectFitSelection } from '../fit-reports/project-fit-selection.entity';
@@ -19,6 +20,6 @@ import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
-export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, Customer, Project,
+export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
   LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent];

@@ -13,6 +13,7 @@ import { SessionRevocation1796235495169 } from './migrations/1796235495169-sessi
 import { CreateParts1796236436524 } from './migrations/1796236436524-create-parts';
 import { CreateQuotes1796236709687 } from './migrations/1796236709687-create-quotes';
 import { CreateDepositPayments1796239097244 } from './migrations/1796239097244-create-deposit-payments';
+import { PendingSignUps1796239565848 } from './migrations/1796239565848-pending-sign-ups';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -31,4 +32,5 @@ export const MIGRATIONS = [
   CreateParts1796236436524,
   CreateQuotes1796236709687,
   CreateDepositPayments1796239097244,
+  PendingSignUps1796239565848,
 ];

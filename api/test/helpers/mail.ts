@@ -16,3 +16,11 @@ export function resetTokenFrom(mail: CapturedMail): string {
   if (!match) throw new Error(`no reset link in: ${mail.text}`);
   return decodeURIComponent(match[1]);
 }
+
+/** The token of the newest "finish creating your shop" link mailed to `email`. */
+export async function signUpTokenFor(email: string): Promise<string> {
+  const mail = (await mailsTo(email.toLowerCase())).find((m) => /Finish creating your Swapwright shop/.test(m.subject));
+  const match = mail && /sign-up\?token=([A-Za-z0-9_%-]+)/.exec(mail.text);
+  if (!match) throw new Error(`no sign-up link mailed to ${email}`);
+  return decodeURIComponent(match[1]);
+}

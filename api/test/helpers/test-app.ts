@@ -8,6 +8,7 @@ import { configureApp } from '../../src/app-setup';
 import { AppModule } from '../../src/app.module';
 import { seedDemo } from '../../src/database/seed/seed-demo';
 import { loadOtherShop } from '../fixtures/other-shop.fixture';
+import { signUpTokenFor } from './mail';
 
 export interface TestApp {
   app: INestApplication;
@@ -35,7 +36,8 @@ export async function createTestApp(override: (builder: TestingModuleBuilder) =>
     app,
     http: request(app.getHttpServer()),
     dataSource,
-    jwt: app.get(JwtService, { strict: false }),
+    // Signs like the access tokens do; other modules (quote links) register JwtServices with keys of their own.
+    jwt: new JwtService({ secret: process.env.JWT_SECRET, signOptions: { algorithm: 'HS256' } }),
     close: () => app.close(),
   };
 }
@@ -86,4 +88,15 @@ export async function startTestApp(): Promise<TestApp> {
 export async function startSignedInApp(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
   const t = await startTestApp();
   return { t, s: await signInAllRoles(t.http) };
+}
+
+/** Signs up the way a person does: the form, then the e-mailed link. Returns the session the link opens. */
+export async function signUpThroughMail(
+  http: TestApp['http'],
+  input: { email: string; password: string; name: string; shopName: string },
+): Promise<Session> {
+  await http.post('/api/auth/sign-up').send(input).expect(202);
+  const token = await signUpTokenFor(input.email);
+  const response = await http.post('/api/auth/sign-up/confirm').send({ token }).expect(201);
+  return response.body as Session;
 }

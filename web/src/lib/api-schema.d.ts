@@ -85,6 +85,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/auth/sign-up/confirm": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_confirmSignUp"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/auth/sign-in": {
         parameters: {
             query?: never;
@@ -1444,6 +1460,14 @@ export interface components {
             name: string;
             /** @example Back Forty Garage */
             shopName: string;
+        };
+        SignUpAcceptedResponseDto: {
+            /** @example Check your e-mail: we sent builder@example.test a link to finish creating your shop. */
+            message: string;
+        };
+        SignUpConfirmDto: {
+            /** @description The token from the e-mailed sign-up link */
+            token: string;
         };
         CurrentUserShopDto: {
             /** Format: uuid */
@@ -3569,6 +3593,48 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Always the same answer: a link to finish is mailed to a new address; a registered one gets a notice instead */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignUpAcceptedResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            /** @description Too many attempts; the Retry-After header gives the seconds to wait */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    AuthController_confirmSignUp: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignUpConfirmDto"];
+            };
+        };
+        responses: {
+            /** @description The shop is created and its owner signed in */
             201: {
                 headers: {
                     [name: string]: unknown;

@@ -32,3 +32,16 @@ export class SignUpDto {
   @MaxLength(120)
   shopName: string;
 }
+
+export class SignUpConfirmDto {
+  @ApiProperty({ description: 'The token from the e-mailed sign-up link' })
+  @IsString()
+  @IsNotEmpty({ message: 'token must not be empty' })
+  @MaxLength(200)
+  token: string;
+}
+
+export class SignUpAcceptedResponseDto {
+  @ApiProperty({ example: 'Check your e-mail: we sent builder@example.test a link to finish creating your shop.' })
+  message: string;
+}

@@ -1,16 +1,52 @@
-import { Typography } from 'antd';
-import { Link, useNavigate } from 'react-router-dom';
+import { Alert, Spin, Typography } from 'antd';
+import { useEffect, useRef } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { useConfirmSignUp } from '@/features/auth/api/confirm-sign-up';
 import { SignUpForm } from '@/features/auth/components/sign-up-form';
+import { getErrorMessage } from '@/lib/api-error';
 import { RedirectIfSignedIn } from '../../guards';
 import { AuthHeading } from './auth-heading';
 
+/** With `?token=` from the e-mailed link: create the shop and sign in. */
+function FinishSignUp({ token }: { token: string }) {
+  const navigate = useNavigate();
+  const confirm = useConfirmSignUp({ onSuccess: () => navigate(paths.home, { replace: true }) });
+  const sent = useRef(false);
+  useEffect(() => {
+    if (sent.current) return;
+    sent.current = true;
+    confirm.mutate(token);
+  }, [confirm, token]);
+
+  if (confirm.isError) {
+    return (
+      <>
+        <AuthHeading title="Create your shop" />
+        <Alert type="error" showIcon role="alert" title={getErrorMessage(confirm.error)} />
+        <Typography.Paragraph style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
+          <Link to={paths.signUp}>Sign up again</Link> or <Link to={paths.signIn}>sign in</Link>
+        </Typography.Paragraph>
+      </>
+    );
+  }
+  return (
+    <>
+      <AuthHeading title="Creating your shop" />
+      <Spin aria-label="Creating your shop" />
+    </>
+  );
+}
+
 export function SignUpPage() {
   const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const token = params.get('token');
+  if (token) return <FinishSignUp token={token} />;
   return (
     <RedirectIfSignedIn>
-      <AuthHeading title="Create your shop" subtitle="You will be its owner and can invite your crew later." />
-      <SignUpForm onSignedUp={() => navigate(paths.home, { replace: true })} />
+      <AuthHeading title="Create your shop" subtitle="You will be its owner and can invite your crew later. We e-mail you a link to finish." />
+      <SignUpForm onBack={() => navigate(paths.signIn)} />
       <Typography.Paragraph style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
         Already have an account? <Link to={paths.signIn}>Sign in</Link>
       </Typography.Paragraph>

@@ -1,25 +1,19 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Session } from '@/types/api';
-import { useStoreSession } from '../hooks/use-store-session';
+import type { components } from '@/lib/api-schema';
 
-export type SignUpInput = { email: string; password: string; name: string; shopName: string };
+export type SignUpInput = components['schemas']['SignUpDto'];
+export type SignUpAccepted = components['schemas']['SignUpAcceptedResponseDto'];
 
-export async function signUp(input: SignUpInput): Promise<Session> {
-  const { data } = await apiClient.post<Session>('/auth/sign-up', input, {
+/** Always answers alike (a registered address is not revealed): the shop is created from the e-mailed link. */
+export async function signUp(input: SignUpInput): Promise<SignUpAccepted> {
+  const { data } = await apiClient.post<SignUpAccepted>('/auth/sign-up', input, {
     skipAuthRefresh: true,
     skipErrorNotification: true,
   });
   return data;
 }
 
-export function useSignUp({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {
-  const storeSession = useStoreSession();
-  return useMutation({
-    mutationFn: signUp,
-    onSuccess: (session) => {
-      storeSession(session);
-      onSuccess?.(session);
-    },
-  });
+export function useSignUp() {
+  return useMutation({ mutationFn: signUp });
 }

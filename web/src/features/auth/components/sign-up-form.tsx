@@ -1,15 +1,25 @@
-import { Button, Form, Input } from 'antd';
-import type { Session } from '@/types/api';
+import { Button, Form, Input, Result } from 'antd';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useSignUp } from '../api/sign-up';
 import { confirmPasswordRules, emailRules, passwordRules } from './password-rules';
 
-export type SignUpFormProps = { onSignedUp?: (session: Session) => void };
+export type SignUpFormProps = { onBack?: () => void };
 
 type SignUpValues = { name: string; shopName: string; email: string; password: string; confirm: string };
 
-export function SignUpForm({ onSignedUp }: SignUpFormProps) {
-  const signUp = useSignUp({ onSuccess: onSignedUp });
+export function SignUpForm({ onBack }: SignUpFormProps) {
+  const signUp = useSignUp();
+
+  if (signUp.isSuccess) {
+    return (
+      <Result
+        status="success"
+        title="Check your e-mail"
+        subTitle={`${signUp.data.message} The link works once, for 24 hours. Already have an account with that address? The e-mail says so instead.`}
+        extra={onBack && <Button onClick={onBack}>Back to sign in</Button>}
+      />
+    );
+  }
 
   return (
     <Form<SignUpValues>
@@ -20,7 +30,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
         signUp.mutate({ name: name.trim(), shopName: shopName.trim(), email: email.trim(), password })
       }
     >
-      <FormErrorAlert error={signUp.error} messages={{ email_taken: 'An account with that email already exists. Sign in instead, or reset the password.' }} />
+      <FormErrorAlert error={signUp.error} />
       <Form.Item label="Your name" name="name" rules={[{ required: true, whitespace: true, message: 'Enter your name' }, { max: 120 }]}>
         <Input autoComplete="name" placeholder="Merrin Tolland" />
       </Form.Item>

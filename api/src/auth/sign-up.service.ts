@@ -1,0 +1,100 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, IsNull, MoreThan } from 'typeorm';
+import { EnvironmentVariables } from '../config/env.validation';
+import { MailService } from '../mail/mail.service';
+import { MembershipsService } from '../memberships/memberships.service';
+import { ShopsService } from '../shops/shops.service';
+import { normalizeEmail, UsersService } from '../users/users.service';
+import { SIGN_UP_LINK_TTL_MS } from './auth.constants';
+import { AuthErrors } from './auth.errors';
+import { hashPassword } from './auth.service';
+import { SessionResponseDto } from './dto/session-response.dto';
+import { SignUpDto } from './dto/sign-up.dto';
+import { escapeHtml } from './password-reset.service';
+import { PendingSignUp } from './pending-sign-up.entity';
+import { SessionsService } from './sessions.service';
+import { hashToken, newOpaqueToken } from './token-hash';
+
+/**
+ * Sign-up answers the same whether or not the address has an account (like password reset), so nobody can
+ * probe who is registered: a new address gets a link that creates the shop; a registered one gets a notice.
+ */
+@Injectable()
+export class SignUpService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly users: UsersService,
+    private readonly shops: ShopsService,
+    private readonly memberships: MembershipsService,
+    private readonly sessions: SessionsService,
+    private readonly mail: MailService,
+    private readonly config: ConfigService<EnvironmentVariables, true>,
+  ) {}
+
+  async request(input: SignUpDto): Promise<void> {
+    const email = normalizeEmail(input.email);
+    // Hashed on both paths, so the answer takes as long either way.
+    const passwordHash = await hashPassword(input.password);
+    const existing = await this.users.findByEmail(email);
+    if (existing) {
+      await this.mail.sendOrLog({
+        to: existing.email,
+        subject: 'Someone tried to create a Swapwright account with your address',
+        text:
+          `Hello ${existing.name},\n\nSomeone (perhaps you) tried to create a new Swapwright account with this e-mail address, ` +
+          `which already has one. Nothing was changed.\n\nSign in: ${this.link('/sign-in')}\n` +
+          `Forgot the password? Reset it: ${this.link('/reset-password')}\n\nIf it was not you, you can ignore this e-mail.\n`,
+        html:
+          `<p>Hello ${escapeHtml(existing.name)},</p><p>Someone (perhaps you) tried to create a new Swapwright account with this ` +
+          `e-mail address, which already has one. Nothing was changed.</p><p><a href="${this.link('/sign-in')}">Sign in</a>, or ` +
+          `<a href="${this.link('/reset-password')}">reset the password</a> if you forgot it.</p><p>If it was not you, you can ignore this e-mail.</p>`,
+      });
+      return;
+    }
+    const { token, hash } = newOpaqueToken();
+    await this.dataSource.manager.insert(PendingSignUp, {
+      id: randomUUID(),
+      email,
+      name: input.name.trim(),
+      shopName: input.shopName.trim(),
+      passwordHash,
+      tokenHash: hash,
+      expiresAt: new Date(Date.now() + SIGN_UP_LINK_TTL_MS),
+      usedAt: null,
+    });
+    const link = this.link(`/sign-up?token=${encodeURIComponent(token)}`);
+    await this.mail.sendOrLog({
+      to: email,
+      subject: 'Finish creating your Swapwright shop',
+      text:
+        `Hello ${input.name.trim()},\n\nOpen this link within 24 hours to create your shop "${input.shopName.trim()}" on Swapwright; ` +
+        `it works once:\n\n${link}\n\nIf you did not sign up, ignore this e-mail: no account is created.\n`,
+      html:
+        `<p>Hello ${escapeHtml(input.name.trim())},</p><p><a href="${link}">Create your shop “${escapeHtml(input.shopName.trim())}”</a> ` +
+        `within 24 hours; the link works once.</p><p>If you did not sign up, ignore this e-mail: no account is created.</p>`,
+    });
+  }
+
+  /** Opens the e-mailed link: the person, their one-person shop and the owner membership, in one transaction. */
+  async confirm(token: string): Promise<SessionResponseDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const pending = await manager.findOne(PendingSignUp, { where: { tokenHash: hashToken(token) } });
+      if (!pending) throw AuthErrors.signUpLinkInvalid();
+      const now = new Date();
+      const used = await manager.update(PendingSignUp, { id: pending.id, usedAt: IsNull(), expiresAt: MoreThan(now) }, { usedAt: now });
+      if (used.affected !== 1) throw AuthErrors.signUpLinkInvalid();
+      // Another link for the same address may have been opened first: users.create refuses it (409 email_taken).
+      const user = await this.users.create(manager, { email: pending.email, name: pending.name, passwordHash: pending.passwordHash });
+      const shop = await this.shops.create(manager, pending.shopName);
+      const membership = await this.memberships.create(manager, { shopId: shop.id, userId: user.id, role: 'owner' });
+      return this.sessions.issue(membership.id, manager);
+    });
+  }
+
+  private link(path: string): string {
+    return `${this.config.get('APP_URL', { infer: true }).replace(/\/$/, '')}${path}`;
+  }
+}

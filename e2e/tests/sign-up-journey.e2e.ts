@@ -1,0 +1,53 @@
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+
+interface CapturedMail {
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+async function mailsTo(email: string): Promise<CapturedMail[]> {
+  if (!process.env.MAIL_FAKE_URL) throw new Error('MAIL_FAKE_URL is not set: source .local/test/env.sh first.');
+  const mails = (await (await fetch(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
+  return mails.filter((mail) => mail.to.includes(email));
+}
+
+describe('a new owner signs up and finishes through the e-mailed link', () => {
+  let browser: BrowserSession;
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+
+  afterAll(async () => {
+    await browser.close();
+  });
+
+  it('is told to check the e-mail, opens the link and lands in the new shop', async () => {
+    const { page } = browser;
+    const email = `new.owner.${Date.now()}@example.test`;
+    await page.goto('/sign-up');
+    const form = page.getByRole('form', { name: 'Create your shop' });
+    await form.getByLabel('Your name').fill('Corvin Ashdale');
+    await form.getByLabel('Shop or garage name').fill('Ashdale Shed');
+    await form.getByLabel('Email').fill(email);
+    await form.getByLabel('Password', { exact: true }).fill('long-enough-password-1');
+    await form.getByLabel('Repeat password').fill('long-enough-password-1');
+    const sent = page.waitForResponse((r) => r.url().endsWith('/api/auth/sign-up') && r.request().method() === 'POST');
+    await form.getByRole('button', { name: 'Create shop' }).click();
+    expect((await sent).status()).toBe(202);
+    await page.getByText('Check your e-mail', { exact: true }).waitFor();
+    expect(await page.getByText(email, { exact: false }).count()).toBeGreaterThan(0);
+    await saveScreenshot(page, 'sign-up-check-mail');
+
+    const [mail] = await mailsTo(email);
+    expect(mail.subject).toBe('Finish creating your Swapwright shop');
+    const link = /https?:\/\/\S+\/sign-up\?token=[^\s"<>]+/.exec(mail.text)?.[0];
+    expect(link).toBeDefined();
+    await page.goto(link!);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.waitFor();
+    expect(await nav.getByRole('link', { name: 'Shop settings' }).count()).toBe(1);
+    await saveScreenshot(page, 'sign-up-finished');
+  });
+});

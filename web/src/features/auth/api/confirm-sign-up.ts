@@ -1,0 +1,21 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Session } from '@/types/api';
+import { useStoreSession } from '../hooks/use-store-session';
+
+/** Opens the e-mailed sign-up link: creates the shop and signs its owner in. */
+export async function confirmSignUp(token: string): Promise<Session> {
+  const { data } = await apiClient.post<Session>('/auth/sign-up/confirm', { token }, { skipAuthRefresh: true, skipErrorNotification: true });
+  return data;
+}
+
+export function useConfirmSignUp({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {
+  const storeSession = useStoreSession();
+  return useMutation({
+    mutationFn: confirmSignUp,
+    onSuccess: (session) => {
+      storeSession(session);
+      onSuccess?.(session);
+    },
+  });
+}
