@@ -30,8 +30,7 @@ export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
           <ul style={{ margin: 0, paddingLeft: 18, fontSize: 13 }}>
             {boundedBy.map((b) => (
               <li key={b.checkId}>
-                {title(b.checkId)}
-                {b.against ? ` (${b.against})` : ''}: {room(b.margin, b.unit)} to spare
+                {title(b.checkId)}: {room(b.margin, b.unit)} to spare
               </li>
             ))}
           </ul>
