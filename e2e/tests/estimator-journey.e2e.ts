@@ -1,4 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 describe('the estimator opens a customer and a swap project', () => {
@@ -31,7 +32,7 @@ describe('the estimator opens a customer and a swap project', () => {
     expect((await created).status()).toBe(201);
     await page.getByRole('searchbox', { name: 'Search customers' }).fill(customerName);
     await page.getByRole('searchbox', { name: 'Search customers' }).press('Enter');
-    await page.getByRole('table', { name: 'Customers' }).getByText(customerName).waitFor();
+    await expectVisible(page.getByRole('table', { name: 'Customers' }).getByText(customerName));
   });
 
   it('opens a project for that customer and finds it in the projects table', async () => {
@@ -56,7 +57,7 @@ describe('the estimator opens a customer and a swap project', () => {
     await page.goto('/projects');
     await page.getByRole('searchbox', { name: 'Search projects' }).fill(projectTitle);
     await page.getByRole('searchbox', { name: 'Search projects' }).press('Enter');
-    await page.getByRole('table', { name: 'Projects' }).getByText(projectTitle).waitFor();
+    await expectVisible(page.getByRole('table', { name: 'Projects' }).getByText(projectTitle));
     await saveScreenshot(page, 'estimator-project-found');
   });
 });

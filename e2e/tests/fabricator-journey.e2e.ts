@@ -1,4 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 describe('the fabricator checks the chassis waiting to be measured', () => {
@@ -26,8 +27,24 @@ describe('the fabricator checks the chassis waiting to be measured', () => {
     const ran = page.waitForResponse((r) => /\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');
     await page.getByRole('button', { name: 'Run fit check' }).click();
     expect((await ran).status()).toBe(201);
-    await page.getByTestId('side-view').waitFor();
-    await page.getByTestId('front-view').waitFor();
+    await expectVisible(page.getByTestId('side-view'));
+    await expectVisible(page.getByTestId('front-view'));
+    await expectText(page.getByTestId('fit-caution'), /\S/);
     await saveScreenshot(page, 'fabricator-fit-report');
+
+    // on a phone the report fits the screen and the top bar still names who is signed in
+    await page.setViewportSize({ width: 390, height: 844 });
+    await expectVisible(page.getByRole('button', { name: /^Account:/ }));
+    await page.waitForTimeout(300);
+    await expectFitsWidth(page);
+    await saveScreenshot(page, 'fabricator-fit-report-phone');
+
+    // on paper the report carries the shop, the customer and the vehicle
+    await page.emulateMedia({ media: 'print' });
+    const header = page.getByTestId('fit-print-header');
+    await expectText(header, /Ironbark Swap Works/);
+    await expectText(header, /Customer/);
+    await expectText(header, /Vehicle/);
+    await page.emulateMedia({ media: 'screen' });
   });
 });

@@ -1,4 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 interface CapturedMail {
@@ -42,7 +43,7 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
     const sent = page.waitForResponse((r) => r.url().endsWith('/api/invitations') && r.request().method() === 'POST');
     await form.getByRole('button', { name: 'Send invitation' }).click();
     expect((await sent).status()).toBe(201);
-    await page.getByText(email).first().waitFor();
+    await expectVisible(page.getByRole('table', { name: 'Invitations' }).getByText(email));
     await saveScreenshot(page, 'owner-members');
 
     // The local mail fake's own endpoint (scripts/stack.sh exports MAIL_FAKE_URL); /api/dev/mail is for owners only.
@@ -63,7 +64,7 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
       await saveScreenshot(invitee.page, 'accept-invitation');
       await invitee.page.getByRole('button', { name: 'Join the shop' }).click();
       const nav = invitee.page.getByRole('navigation', { name: 'Main' });
-      await nav.getByRole('link', { name: 'Customers' }).waitFor();
+      await expectVisible(nav.getByRole('link', { name: 'Customers' }));
       expect(await nav.getByRole('link', { name: 'Members' }).count()).toBe(0);
     } finally {
       await invitee.close();

@@ -1,4 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectVisible } from './support/expect-page';
 import { mainNavigationLabels, signInAs, type DemoRole } from './support/session';
 
 const EXPECTED_NAVIGATION: Record<DemoRole, string[]> = {
@@ -22,7 +23,8 @@ describe('each demo role signs in and sees its own navigation', () => {
 
   it('shows the sign-in page to a visitor', async () => {
     await browser.page.goto('/');
-    await browser.page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await expectVisible(browser.page.getByRole('button', { name: 'Sign in' }));
+    await expectVisible(browser.page.getByLabel('Email'));
     await saveScreenshot(browser.page, 'sign-in');
   });
 

@@ -28,7 +28,7 @@ const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings
 const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'WorkOrdersPage');
 const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
 const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
-const ProjectFitPage = lazyNamed(() => import('./routes/fit/project-fit-page'), 'ProjectFitPage');
+const FitReportRoute = lazyNamed(() => import('./routes/fit/fit-report-route'), 'FitReportRoute');
 const QuoteAnswerPage = lazyNamed(() => import('./routes/quotes/quote-answer-page'), 'QuoteAnswerPage');
 const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');
 const RouteErrorBoundary = lazy(() =>
@@ -107,7 +107,7 @@ export const routes: RouteObject[] = [
           { index: true, element: <HomePage />, errorElement: <SectionError section="Home" /> },
           section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage, { customer: paths.myProjects }),
           section(paths.projectDetail, sectionRoles.projectDetail, 'the project', ProjectDetailPage),
-          section(paths.projectFit, sectionRoles.projectFit, 'the fit check', ProjectFitPage),
+          section(paths.projectFit, sectionRoles.projectFit, 'the fit check', FitReportRoute),
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
           section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),

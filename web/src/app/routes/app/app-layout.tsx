@@ -3,7 +3,7 @@ import { Suspense, useState } from 'react';
 import { Link, Outlet } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { palette, siderWidth, spacing } from '@/config/theme';
-import { Logo } from '@/components/logo';
+import { Logo, LogoMark } from '@/components/logo';
 import { LoadingState } from '@/components/query-state';
 import { PlanningNote } from '@/components/planning-note';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
@@ -55,19 +55,30 @@ export function AppLayout() {
       )}
       <Layout>
         <Layout.Header
-          style={{ display: 'flex', alignItems: 'center', justifyContent: 'space-between', borderBottom: `1px solid ${palette.line}`, position: 'sticky', top: 0, zIndex: 10 }}
+          style={{
+            display: 'flex',
+            alignItems: 'center',
+            justifyContent: 'space-between',
+            gap: spacing.sm,
+            borderBottom: `1px solid ${palette.line}`,
+            position: 'sticky',
+            top: 0,
+            zIndex: 10,
+            // a phone keeps the bar within its width: less padding, the mark without the wordmark
+            ...(isNarrow ? { paddingInline: spacing.sm } : {}),
+          }}
         >
-          <Flex align="center" gap={12}>
+          <Flex align="center" gap={isNarrow ? 8 : 12} style={{ flex: 'none' }}>
             {isNarrow && (
               <Button aria-label="Open navigation" onClick={() => setNavOpen(true)}>
                 Menu
               </Button>
             )}
-            {isNarrow && <Logo size={24} />}
+            {isNarrow && <LogoMark size={24} title="Swapwright" />}
           </Flex>
-          <Flex align="center" gap={16} style={{ marginInlineStart: 'auto' }}>
+          <Flex align="center" gap={isNarrow ? 8 : 16} style={{ marginInlineStart: 'auto', minWidth: 0 }}>
             <UnitSwitch />
-            <UserMenu user={user} />
+            <UserMenu user={user} compact={isNarrow} />
           </Flex>
         </Layout.Header>
         <Layout.Content style={{ padding: isNarrow ? spacing.md : `${spacing.lg}px ${spacing.xl}px`, maxWidth: 1320, width: '100%' }}>

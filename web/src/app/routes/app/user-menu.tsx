@@ -22,9 +22,13 @@ function initials(name: string): string {
     .join('');
 }
 
-export type UserMenuProps = { user: CurrentUser };
+export type UserMenuProps = {
+  user: CurrentUser;
+  /** On a phone: name and role shortened with an ellipsis rather than pushing the bar wider than the screen. */
+  compact?: boolean;
+};
 
-export function UserMenu({ user }: UserMenuProps) {
+export function UserMenu({ user, compact = false }: UserMenuProps) {
   const navigate = useNavigate();
   const signOut = useSignOut({ onSettled: () => navigate(paths.signIn, { replace: true }) });
 
@@ -39,14 +43,16 @@ export function UserMenu({ user }: UserMenuProps) {
         ],
       }}
     >
-      <Button type="text" aria-label={`Account: ${user.name}`} style={{ height: 44, paddingInline: 8 }}>
-        <Flex align="center" gap={10}>
-          <Avatar size={30} style={{ background: palette.teal700, fontWeight: 600, fontSize: 13 }}>
+      <Button type="text" aria-label={`Account: ${user.name}`} title={`${user.name}, ${roleNames[user.role]}`} style={{ height: 44, paddingInline: compact ? 4 : 8, minWidth: 0, maxWidth: '100%' }}>
+        <Flex align="center" gap={compact ? 6 : 10} style={{ minWidth: 0 }}>
+          <Avatar size={30} style={{ background: palette.teal700, fontWeight: 600, fontSize: 13, flex: 'none' }}>
             {initials(user.name) || '?'}
           </Avatar>
-          <Flex vertical align="flex-start" style={{ lineHeight: 1.15 }}>
-            <Typography.Text strong>{user.name}</Typography.Text>
-            <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+          <Flex vertical align="flex-start" style={{ lineHeight: 1.15, minWidth: 0, maxWidth: compact ? 150 : 240 }}>
+            <Typography.Text strong ellipsis style={{ maxWidth: '100%' }}>
+              {user.name}
+            </Typography.Text>
+            <Typography.Text type="secondary" ellipsis style={{ fontSize: 12, maxWidth: '100%' }}>
               {roleNames[user.role]}
             </Typography.Text>
           </Flex>

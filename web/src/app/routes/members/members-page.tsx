@@ -12,16 +12,17 @@ export function MembersPage() {
   return (
     <>
       <PageHeader title="Members" subtitle="Who works in the shop, in which role, and who can follow their own projects." />
+      {/* the members table takes the full width on a desktop, so none of its columns is cut off */}
+      <Card title="People in the shop" style={{ marginBottom: 16 }}>
+        <MembersTable currentUserId={user.id} />
+      </Card>
       <Row gutter={[16, 16]}>
-        <Col xs={24} xl={16}>
-          <Card title="People in the shop" style={{ marginBottom: 16 }}>
-            <MembersTable currentUserId={user.id} />
-          </Card>
+        <Col xs={24} xl={14}>
           <Card title="Invitations">
             <InvitationsTable />
           </Card>
         </Col>
-        <Col xs={24} xl={8}>
+        <Col xs={24} xl={10}>
           <Card title="Invite someone">
             <InviteForm customerOptions={customers.options} customersLoading={customers.loading} onCustomerSearch={customers.onSearch} />
           </Card>

@@ -1,49 +1,19 @@
-import { Card, Typography } from 'antd';
+import { ComingNext } from '@/components/coming-next';
 import { PageHeader } from '@/components/page-header';
-import { EmptyState } from '@/components/query-state';
-
-type PlaceholderProps = { title: string; subtitle: string; heading: string; body: string; testId: string };
-
-function Placeholder({ title, subtitle, heading, body, testId }: PlaceholderProps) {
-  return (
-    <>
-      <PageHeader title={title} subtitle={subtitle} />
-      <Card data-testid={testId}>
-        <EmptyState
-          description={
-            <>
-              <Typography.Title level={4} style={{ marginTop: 0 }}>
-                {heading}
-              </Typography.Title>
-              <Typography.Text type="secondary">{body}</Typography.Text>
-            </>
-          }
-        />
-      </Card>
-    </>
-  );
-}
+import { paths } from '@/config/paths';
 
 export function WorkOrdersPage() {
   return (
-    <Placeholder
-      testId="work-orders-placeholder"
-      title="Work orders"
-      subtitle="Operations in order, torque specs and the checks to record."
-      heading="Work orders open when a quote is approved"
-      body="Each approved swap will get its operations in order with tightening sequences and sign-off checks."
-    />
-  );
-}
-
-export function CatalogPage() {
-  return (
-    <Placeholder
-      testId="catalog-placeholder"
-      title="Catalog"
-      subtitle="The shop’s own chassis, engines, transmissions and parts."
-      heading="The shop catalog is on its way"
-      body="You will enter items here or import a supplier list from CSV."
-    />
+    <>
+      <PageHeader title="Work orders" subtitle="Operations in order, tightening specs and the checks to record." />
+      <ComingNext
+        testId="work-orders-placeholder"
+        coming="Each approved swap will get a work order here: its operations in order, tightening sequences and sign-off checks."
+        now={[
+          { label: 'Open the projects', to: paths.projects, description: 'Every swap with its stage, chosen parts and fit check.' },
+          { label: 'Look up the catalog', to: paths.catalog, description: 'Engines, chassis and parts with the figures the fit check reads.' },
+        ]}
+      />
+    </>
   );
 }

@@ -6,9 +6,12 @@ import { useCreateCatalogItem } from '../api/create-catalog-item';
 import { useUpdateCatalogItem } from '../api/update-catalog-item';
 import { kindDefinitions, type JsonField, type ScalarField } from '../lib/catalog-kinds';
 import type { CatalogItem, CatalogKind } from '../types';
-import { LengthInput } from './length-input';
+import { LengthInput, readableLengthRule } from '@/components/length-input';
+import { useUnits } from '@/hooks/use-units';
+import { FrameDiagram } from './frame-diagram';
 import { ObstaclesEditor, obstaclesRule } from './obstacles-editor';
 import { OutlineEditor, outlineRule, translateOutlineErrors } from './outline-editor';
+import { useDrawerSize } from '@/hooks/use-drawer-size';
 
 export type CatalogItemDrawerProps = { kind: CatalogKind; open: boolean; item?: CatalogItem | null; onClose: () => void };
 
@@ -91,15 +94,17 @@ function ScalarInput({ field, ...control }: { field: ScalarField } & ControlProp
   }
 }
 
-function fieldRules(field: ScalarField) {
+function fieldRules(field: ScalarField, formatLength: (mm: number) => string) {
   const rules: Array<Record<string, unknown>> = [];
   if (field.required && field.type !== 'boolean') rules.push({ required: true, message: `${field.label} is required.` });
+  if (field.type === 'length') rules.push(readableLengthRule(field.label));
+  const shown = (v: number) => (field.type === 'length' ? formatLength(v) : `${v}${field.suffix ? ` ${field.suffix}` : ''}`);
   if ((field.type === 'number' || field.type === 'length') && (field.min !== undefined || field.max !== undefined))
     rules.push({
       validator: async (_: unknown, v: unknown) => {
-        if (typeof v !== 'number') return;
-        if (field.min !== undefined && v < field.min) throw new Error(`${field.label} must be at least ${field.min}${field.type === 'length' ? ' mm' : ''}.`);
-        if (field.max !== undefined && v > field.max) throw new Error(`${field.label} must be at most ${field.max}${field.type === 'length' ? ' mm' : ''}.`);
+        if (typeof v !== 'number' || Number.isNaN(v)) return;
+        if (field.min !== undefined && v < field.min) throw new Error(`${field.label} must be at least ${shown(field.min)}.`);
+        if (field.max !== undefined && v > field.max) throw new Error(`${field.label} must be at most ${shown(field.max)}.`);
       },
     });
   return rules;
@@ -120,7 +125,9 @@ function BeltDesignationPreview({ form }: { form: FormInstance<FormValues> }) {
 /** Create or edit one catalog entry: its scalar figures, point lists and the nested parts as JSON. */
 export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDrawerProps) {
   const def = kindDefinitions[kind];
+  const units = useUnits();
   const [form] = Form.useForm<FormValues>();
+  const drawerSize = useDrawerSize(720);
   const [error, setError] = useState<unknown>(null);
   const create = useCreateCatalogItem({ onSuccess: onClose });
   const update = useUpdateCatalogItem({ onSuccess: onClose });
@@ -154,7 +161,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
     <Drawer
       open={open}
       onClose={onClose}
-      size={720}
+      size={drawerSize}
       title={item ? `Edit ${def.singular}: ${item.name}` : `New ${def.singular}`}
       destroyOnHidden
       extra={
@@ -168,6 +175,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
     >
       <FormErrorAlert error={error} translate={(t) => translateOutlineErrors(t, def.outlines)} />
       <Form<FormValues> form={form} layout="vertical" onFinish={submit} requiredMark="optional" scrollToFirstError>
+        {def.measuredFrom && <FrameDiagram from={def.measuredFrom} />}
         <Form.Item name="name" label="Name" rules={[{ required: true, whitespace: true, message: 'Give it a name the shop will recognise.' }, { max: 160 }]}>
           <Input maxLength={160} />
         </Form.Item>
@@ -178,7 +186,7 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
               name={f.name}
               label={f.label}
               help={f.help}
-              rules={fieldRules(f)}
+              rules={fieldRules(f, units.formatLength)}
               valuePropName={f.type === 'boolean' ? 'checked' : 'value'}
               style={{ flex: '1 1 200px', minWidth: 200 }}
             >

@@ -1,7 +1,8 @@
 import { Button, Flex, Table, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { useUnits } from '@/hooks/use-units';
-import { LengthInput } from './length-input';
+import { axisLabel } from '../lib/catalog-kinds';
+import { LengthInput } from '@/components/length-input';
 
 export type OutlinePoint = Record<string, number>;
 
@@ -24,7 +25,7 @@ export function OutlineEditor({ value = [], onChange, axes, label, closed }: Out
   const rows: Row[] = value.map((p, i) => ({ ...p, key: i }));
 
   const setPoint = (index: number, axis: string, mm: number | null) => {
-    // an emptied cell keeps its last figure until a number is typed
+    // an emptied cell keeps its last figure until a number is typed; unreadable text is kept as NaN, which the form refuses
     if (mm === null) return;
     const next = value.map((p, i) => (i === index ? { ...p, [axis]: mm } : p));
     onChange?.(next);
@@ -38,10 +39,10 @@ export function OutlineEditor({ value = [], onChange, axes, label, closed }: Out
   const columns: ColumnsType<Row> = [
     { title: '#', key: 'n', width: 48, render: (_, r) => r.key + 1 },
     ...[a, b].map((axis) => ({
-      title: `${axis} (${units.unitLabel})`,
+      title: `${axisLabel(axis)} (${units.unitLabel})`,
       key: axis,
       render: (_: unknown, r: Row) => (
-        <LengthInput size="small" aria-label={`${label}: point ${r.key + 1} ${axis}`} value={r[axis]} onChange={(mm) => setPoint(r.key, axis, mm)} />
+        <LengthInput size="small" aria-label={`${label}: point ${r.key + 1} ${axisLabel(axis).toLowerCase()}`} value={r[axis]} onChange={(mm) => setPoint(r.key, axis, mm)} />
       ),
     })),
     {
@@ -73,17 +74,23 @@ export function OutlineEditor({ value = [], onChange, axes, label, closed }: Out
   );
 }
 
-/** Form rule: enough points, every coordinate a number, and the negative axis below zero where one is set. */
+/** Form rule: enough points, every figure readable, no point twice, and the negative axis below zero where one is set. */
 export function outlineRule(minPoints: number, label: string, negativeAxis?: string) {
   return {
     validator: async (_: unknown, value: OutlinePoint[] | undefined) => {
       const points = value ?? [];
       if (points.length < minPoints) throw new Error(`${label} needs at least ${minPoints} points.`);
-      if (points.some((p) => Object.values(p).some((v) => typeof v !== 'number' || !Number.isFinite(v))))
-        throw new Error(`${label}: every point needs both figures.`);
+      const unreadable = points.flatMap((p, i) => (Object.values(p).some((v) => typeof v !== 'number' || !Number.isFinite(v)) ? [i + 1] : []));
+      if (unreadable.length > 0)
+        throw new Error(`${label}: row ${unreadable.join(', ')} has a figure that is not a length (type for example 12 1/2, 12.5 in or 318 mm).`);
+      for (let i = 0; i < points.length; i++)
+        for (let j = i + 1; j < points.length; j++) {
+          const same = Object.keys(points[i]).every((k) => Math.abs((points[i][k] as number) - (points[j][k] as number)) < 0.05);
+          if (same) throw new Error(`${label}: rows ${i + 1} and ${j + 1} are the same point. Change one or remove it.`);
+        }
       if (negativeAxis) {
         const rows = points.flatMap((p, i) => ((p[negativeAxis] as number) >= 0 ? [i + 1] : []));
-        if (rows.length > 0) throw new Error(`${label}: ${negativeAxis} must be negative (below the crank) in row ${rows.join(', ')}.`);
+        if (rows.length > 0) throw new Error(`${label}: ${axisLabel(negativeAxis)} must be negative (below the crank) in row ${rows.join(', ')}.`);
       }
     },
   };
@@ -97,6 +104,6 @@ export function translateOutlineErrors(text: string, outlines: ReadonlyArray<{ n
   return text.replace(/(?:\b[A-Za-z]+\.)*?\b([A-Za-z]+)\.(\d+)\.([A-Za-z]+)\b/g, (match, list: string, index: string, axis: string) => {
     const outline = outlines.find((o) => o.name === list);
     if (!outline) return match;
-    return `${outline.label} row ${Number(index) + 1}: ${axis}`;
+    return `${outline.label} row ${Number(index) + 1}: ${axisLabel(axis)}`;
   });
 }

@@ -55,6 +55,8 @@ export type KindDefinition = {
   columnLabels?: Record<string, string>;
   /** The spec a new entry starts from. */
   defaults: Record<string, unknown>;
+  /** Shows the drawing of where its figures are measured from. */
+  measuredFrom?: MeasuredFrom;
 };
 
 /** Readable names for the enum values the catalog stores. */
@@ -95,23 +97,32 @@ const throttles = opts(THROTTLES);
 const crankSignals = opts(CRANK_SIGNALS);
 const camSignals = opts(CAM_SIGNALS);
 
-const ENGINE_FRAME = 'Engine frame: u forward along the crank from the bellhousing face, w up from the crank centerline.';
-const CHASSIS_FRAME = 'Chassis frame: x rearward from the front axle centerline, z up from the ground at ride height.';
+/** Where the figures of a form are measured from; the form shows the matching drawing. */
+export type MeasuredFrom = 'engine' | 'chassis';
+
+/** Plain names of the measuring directions (the stored keys stay u/w for the engine and x/z for the chassis). */
+const axisLabels: Record<string, string> = { u: 'Forward', w: 'Height', x: 'Back', z: 'Height' };
+export const axisLabel = (axis: string): string => axisLabels[axis] ?? axis;
+
+const ENGINE_FRAME =
+  'Measured from the crank centerline at the bellhousing face: forward along the crank, height above the crank centerline (below it is negative).';
+const CHASSIS_FRAME = 'Measured from the front axle centerline on the ground at ride height: back toward the rear, height above the ground.';
 
 export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
   engines: {
     kind: 'engines',
     label: 'Engines',
     singular: 'engine',
+    measuredFrom: 'engine',
     fields: [
       { name: 'cylinders', label: 'Cylinders', type: 'number', required: true, min: 1, max: 16 },
       { name: 'layout', label: 'Layout', type: 'select', required: true, options: opts(ENGINE_LAYOUTS) },
       { name: 'displacementL', label: 'Displacement', type: 'number', suffix: 'L', min: 0.5, max: 15 },
       { name: 'ratedPowerKw', label: 'Rated power', type: 'number', suffix: 'kW', min: 1, max: 2000 },
       { name: 'weightKg', label: 'Weight', type: 'number', suffix: 'kg', min: 1, max: 2000 },
-      { name: 'fanFrontU', label: 'Fan or front pulley face (u)', type: 'length', required: true },
-      { name: 'fanWFrom', label: 'Fan span from (w)', type: 'length', required: true },
-      { name: 'fanWTo', label: 'Fan span to (w)', type: 'length', required: true },
+      { name: 'fanFrontU', label: 'Fan or front pulley face, forward', type: 'length', required: true, min: 1 },
+      { name: 'fanWFrom', label: 'Fan, lowest edge height', type: 'length', required: true },
+      { name: 'fanWTo', label: 'Fan, highest edge height', type: 'length', required: true },
       { name: 'bellPattern', label: 'Bellhousing pattern', type: 'text', required: true },
       { name: 'crankSignal', label: 'Crank signal', type: 'select', required: true, options: crankSignals },
       { name: 'camSignal', label: 'Cam signal', type: 'select', required: true, options: camSignals },
@@ -157,12 +168,13 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     kind: 'oil-pans',
     label: 'Oil pans',
     singular: 'oil pan',
+    measuredFrom: 'engine',
     fields: [
       { name: 'railPattern', label: 'Rail pattern', type: 'text', required: true },
       { name: 'sumpPosition', label: 'Sump', type: 'select', required: true, options: sumpPositions },
       { name: 'pickupMount', label: 'Pickup mounting', type: 'select', required: true, options: pickupMounts },
-      { name: 'sumpCenterU', label: 'Sump centre (u)', type: 'length', required: true },
-      { name: 'sumpFloorW', label: 'Sump floor (w)', type: 'length', required: true, max: 0, help: 'Below the crank: negative.' },
+      { name: 'sumpCenterU', label: 'Sump centre, forward', type: 'length', required: true, min: 1, help: 'Ahead of the bellhousing face.' },
+      { name: 'sumpFloorW', label: 'Sump floor height', type: 'length', required: true, max: 0, help: 'Below the crank: negative.' },
       { name: 'capacityL', label: 'Capacity', type: 'number', suffix: 'L', required: true, min: 0.5, max: 30 },
       { name: 'dipstickProvision', label: 'Dipstick provision', type: 'multi', options: dipsticks },
     ],
@@ -185,12 +197,13 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     kind: 'oil-pickups',
     label: 'Oil pickups',
     singular: 'oil pickup',
+    measuredFrom: 'engine',
     fields: [
       { name: 'sumpPosition', label: 'Sump', type: 'select', required: true, options: sumpPositions },
       { name: 'mount', label: 'Mounting', type: 'select', required: true, options: pickupMounts },
       { name: 'pumpInlet', label: 'Pump inlet', type: 'text', required: true },
-      { name: 'screenU', label: 'Screen position (u)', type: 'length', required: true },
-      { name: 'screenW', label: 'Screen height (w)', type: 'length', required: true, max: 0 },
+      { name: 'screenU', label: 'Pickup screen, forward', type: 'length', required: true, min: 1, help: 'Ahead of the bellhousing face.' },
+      { name: 'screenW', label: 'Pickup screen height', type: 'length', required: true, max: 0, help: 'Below the crank: negative.' },
     ],
     outlines: [],
     json: [],
@@ -215,6 +228,7 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     kind: 'transmissions',
     label: 'Transmissions',
     singular: 'transmission',
+    measuredFrom: 'engine',
     fields: [
       { name: 'bellPattern', label: 'Bellhousing pattern', type: 'text', required: true },
       { name: 'lengthToOutputMm', label: 'Bell face to output U-joint', type: 'length', required: true, min: 1 },
@@ -233,6 +247,7 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
     kind: 'chassis',
     label: 'Chassis',
     singular: 'chassis',
+    measuredFrom: 'chassis',
     fields: [
       { name: 'wheelbaseMm', label: 'Wheelbase', type: 'length', required: true, min: 1 },
       { name: 'rideHeightMm', label: 'Ride height reference', type: 'length' },
@@ -308,8 +323,8 @@ export const kindDefinitions: Record<CatalogKind, KindDefinition> = {
   },
   belts: {
     kind: 'belts',
-    label: 'Belts',
-    singular: 'serpentine belt',
+    label: 'Accessory drive belts',
+    singular: 'accessory drive belt',
     fields: [
       { name: 'ribs', label: 'Ribs', type: 'number', required: true, min: 3, max: 12, help: 'PK profile, 3.56 mm per rib.' },
       {

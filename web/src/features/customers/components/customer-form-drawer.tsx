@@ -5,6 +5,8 @@ import { notifySuccess } from '@/lib/notifier';
 import { useCreateCustomer } from '../api/create-customer';
 import { useUpdateCustomer } from '../api/update-customer';
 import type { Customer, CustomerInput } from '../types';
+import { useDrawerSize } from '@/hooks/use-drawer-size';
+import { phoneProblem } from '@/lib/phone';
 
 export type CustomerFormDrawerProps = {
   open: boolean;
@@ -21,6 +23,7 @@ function clean(values: CustomerInput): CustomerInput {
 
 export function CustomerFormDrawer({ open, customer, onClose, onSaved }: CustomerFormDrawerProps) {
   const [form] = Form.useForm<CustomerInput>();
+  const drawerSize = useDrawerSize(460);
   const isEdit = Boolean(customer);
   const done = (saved: Customer) => {
     notifySuccess({ title: isEdit ? 'Customer saved' : 'Customer added', description: saved.name });
@@ -56,7 +59,7 @@ export function CustomerFormDrawer({ open, customer, onClose, onSaved }: Custome
       open={open}
       onClose={onClose}
       title={isEdit ? `Edit ${customer?.name}` : 'New customer'}
-      size={460}
+      size={drawerSize}
       destroyOnHidden
       footer={
         <Flex justify="flex-end" gap={8}>
@@ -93,6 +96,7 @@ export function CustomerFormDrawer({ open, customer, onClose, onSaved }: Custome
           rules={[
             { max: 40, message: 'Keep the phone under 40 characters' },
             { pattern: /^[0-9+()\-.\s x]*$/i, message: 'Use digits, spaces and + ( ) - . only' },
+            { validator: async (_: unknown, v: unknown) => { const problem = phoneProblem(typeof v === 'string' ? v : ''); if (problem) throw new Error(problem); } },
           ]}
         >
           <Input type="tel" placeholder="555-0142" />

@@ -42,7 +42,7 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       sortOrder: sortOrderFor('email', query.sort, query.order),
       render: (email: string | null) => (email ? <a href={`mailto:${email}`}>{email}</a> : '—'),
     },
-    { title: 'Phone', dataIndex: 'phone', key: 'phone', render: (p: string | null) => p || '—' },
+    { title: 'Phone', dataIndex: 'phone', key: 'phone', render: (p: string | null) => p || '—', responsive: ['sm'] },
     {
       title: 'Portal',
       key: 'portal',
@@ -65,6 +65,7 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       sorter: true,
       sortOrder: sortOrderFor('updatedAt', query.sort, query.order),
       render: formatDate,
+      responsive: ['sm'],
     },
   ];
 
@@ -130,6 +131,8 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
         pagination={serverPagination(query, page?.total)}
+        // a phone scrolls the table inside its card rather than the page sideways
+        scroll={{ x: 'max-content' }}
         locale={{
           emptyText: customers.isPending ? (
             ' '

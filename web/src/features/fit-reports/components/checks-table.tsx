@@ -35,7 +35,7 @@ export function ChecksTable({ findings }: ChecksTableProps) {
     { title: 'Needs', key: 'required', width: 140, align: 'right', render: (_, f) => (f.limit === 'match' ? '—' : formatRequirement(f, units)), responsive: ['md'] },
     { title: 'Margin', key: 'margin', width: 110, align: 'right', render: (_, f) => formatMargin(f, units) },
     {
-      title: 'Threshold from',
+      title: 'Limit based on',
       key: 'source',
       width: 220,
       responsive: ['xl'],

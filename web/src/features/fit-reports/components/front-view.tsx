@@ -1,10 +1,14 @@
 import type { FitSpec } from '@swapwright/shared';
 import { Flex, Typography } from 'antd';
-import { useId, useMemo } from 'react';
+import { useId, useMemo, useRef } from 'react';
 import { palette } from '@/config/theme';
 import { useUnits } from '@/hooks/use-units';
 import { buildFrontScene, FRONT_RAIL_THICKNESS } from '../lib/front-scene';
+import { placeLabels, segmentBoxes, type Box, type LabelRequest } from '../lib/label-placement';
+import { DRAWING_TEXT_PX, DrawingLabel, drawingScale, useRenderedWidth } from './drawing-label';
 import { LegendSwatch } from './side-view';
+
+const MAX_HEIGHT_PX = 420;
 
 export type FrontViewProps = { spec: FitSpec; minGapMm?: number };
 
@@ -22,21 +26,61 @@ export function FrontView({ spec, minGapMm = 12.7 }: FrontViewProps) {
   // Seen from the front: the vehicle's right (y > 0) is on the viewer's left.
   const X = (y: number) => b.yMax - y + pad;
   const Y = (z: number) => b.zMax - z + pad;
+  // line weights follow the drawing; text follows the screen, so it stays readable when the drawing shrinks
   const fs = Math.max(vbW, vbH) / 40;
   const sw = fs / 8;
-  const halo = { paintOrder: 'stroke' as const, stroke: '#fff', strokeWidth: fs / 4, strokeLinejoin: 'round' as const };
+  const figureRef = useRef<HTMLElement>(null);
+  const scale = drawingScale(useRenderedWidth(figureRef), vbW, vbH, MAX_HEIGHT_PX);
+  const text = { note: DRAWING_TEXT_PX.note / scale, name: DRAWING_TEXT_PX.name / scale, figure: DRAWING_TEXT_PX.figure / scale };
   const st = scene.station;
 
   const gapColor = (v: number) => (v < minGapMm ? (v < 0 ? '#8e2a21' : '#7a4e0e') : '#1f5e3a');
+  const gapText = (v: number) => (v < 0 ? `overlap ${units.formatLength(-v)}` : units.formatLength(v));
+  const railsY = st ? Y(st.zBottom) + fs * 1.2 : 0;
+
+  const labels = useMemo(() => {
+    const requests: LabelRequest[] = [];
+    const avoid: Box[] = [];
+    for (const g of scene.gaps) {
+      const from = { x: X(g.fromY), y: Y(g.z) };
+      const to = { x: X(g.toY), y: Y(g.z) };
+      requests.push({ id: `gap:${g.id}`, anchor: { x: (from.x + to.x) / 2, y: from.y }, lines: [gapText(g.valueMm)], fontSize: text.figure, bold: true, prefer: ['above', 'below'] });
+      avoid.push(...segmentBoxes(from, to, sw * 4));
+    }
+    if (st) {
+      const from = { x: X(-st.insideWidthMm / 2), y: railsY };
+      const to = { x: X(st.insideWidthMm / 2), y: railsY };
+      avoid.push(...segmentBoxes(from, to, sw * 4));
+      requests.push({ id: 'rails', anchor: { x: X(0), y: railsY }, lines: [`rails ${units.formatLength(st.insideWidthMm)} inside`], fontSize: text.name, prefer: ['below', 'above'] });
+    }
+    if (st)
+      for (const side of [-1, 1]) {
+        const inner = X((side * st.insideWidthMm) / 2);
+        const outer = X((side * st.insideWidthMm) / 2 + side * FRONT_RAIL_THICKNESS);
+        avoid.push({ x: Math.min(inner, outer), y: Y(st.zTop), w: FRONT_RAIL_THICKNESS, h: st.zTop - st.zBottom });
+      }
+    const sbox = scene.steeringBox;
+    if (sbox) avoid.push({ x: Math.min(X(sbox.yFrom), X(sbox.yTo)), y: Y(sbox.zTo), w: Math.abs(sbox.yTo - sbox.yFrom), h: sbox.zTo - sbox.zFrom });
+    if (sbox) requests.push({ id: 'steering-box', anchor: { x: (X(sbox.yFrom) + X(sbox.yTo)) / 2, y: Y(sbox.zTo) }, lines: ['steering box'], fontSize: text.name, prefer: ['above', 'above-left', 'above-right'] });
+    requests.push({ id: 'vehicle-right', anchor: { x: 0, y: 0 }, lines: ['vehicle right'], fontSize: text.note, prefer: ['below-right'] });
+    requests.push({ id: 'vehicle-left', anchor: { x: vbW, y: 0 }, lines: ['vehicle left'], fontSize: text.note, prefer: ['below-left'] });
+    const placed = placeLabels(requests, { bounds: { x: 0, y: 0, w: vbW, h: vbH }, avoid });
+    return new Map(placed.map((l) => [l.id, l]));
+  }, [scene, vbW, vbH, scale, units]);
+
+  const labelOf = (id: string, fill: string, bold = false) => {
+    const l = labels.get(id);
+    return l ? <DrawingLabel label={l} fill={fill} bold={bold} halo={text.name / 4} leaderWidth={sw} /> : null;
+  };
 
   return (
-    <figure className="fit-front-view" data-testid="front-view" style={{ margin: 0 }}>
+    <figure ref={figureRef} className="fit-front-view" data-testid="front-view" style={{ margin: 0 }}>
       <svg
         viewBox={`0 0 ${vbW.toFixed(0)} ${vbH.toFixed(0)}`}
         width="100%"
         role="img"
         aria-labelledby={`${uid}-title`}
-        style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: 420 }}
+        style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: MAX_HEIGHT_PX }}
       >
         <title id={`${uid}-title`}>
           Front view widths{st ? `: rails ${units.formatLength(st.insideWidthMm)} apart inside` : ''}.{' '}
@@ -47,12 +91,8 @@ export function FrontView({ spec, minGapMm = 12.7 }: FrontViewProps) {
             <path d="M0,0 L10,5 L0,10 z" fill="context-stroke" />
           </marker>
         </defs>
-        <text x={pad * 0.3} y={pad * 0.6} fontSize={fs * 0.8} fill={palette.inkMuted}>
-          vehicle right
-        </text>
-        <text x={vbW - pad * 0.3} y={pad * 0.6} fontSize={fs * 0.8} fill={palette.inkMuted} textAnchor="end">
-          vehicle left
-        </text>
+        {labelOf('vehicle-right', palette.inkMuted)}
+        {labelOf('vehicle-left', palette.inkMuted)}
         {/* centerline */}
         <line x1={X(0)} x2={X(0)} y1={pad * 0.8} y2={vbH - pad * 0.3} stroke={palette.inkMuted} strokeWidth={sw} strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`} />
 
@@ -78,16 +118,13 @@ export function FrontView({ spec, minGapMm = 12.7 }: FrontViewProps) {
             <line
               x1={X(-st.insideWidthMm / 2)}
               x2={X(st.insideWidthMm / 2)}
-              y1={Y(st.zBottom) + fs * 1.2}
-              y2={Y(st.zBottom) + fs * 1.2}
+              y1={railsY}
+              y2={railsY}
               stroke={palette.ink}
               strokeWidth={sw}
               markerStart={`url(#${uid}-arrow)`}
               markerEnd={`url(#${uid}-arrow)`}
             />
-            <text x={X(0)} y={Y(st.zBottom) + fs * 2.4} fontSize={fs * 0.85} textAnchor="middle" fill={palette.ink} style={halo}>
-              rails {units.formatLength(st.insideWidthMm)} inside
-            </text>
           </g>
         )}
 
@@ -103,9 +140,6 @@ export function FrontView({ spec, minGapMm = 12.7 }: FrontViewProps) {
               stroke="#6b5a4a"
               strokeWidth={sw * 1.3}
             />
-            <text x={(X(scene.steeringBox.yFrom) + X(scene.steeringBox.yTo)) / 2} y={Y(scene.steeringBox.zTo) - fs * 0.4} fontSize={fs * 0.75} textAnchor="middle" style={halo}>
-              steering box
-            </text>
           </g>
         )}
 
@@ -128,15 +162,18 @@ export function FrontView({ spec, minGapMm = 12.7 }: FrontViewProps) {
 
         <circle cx={X(scene.crank.y)} cy={Y(scene.crank.z)} r={fs * 0.4} fill="#fff" stroke={palette.oxide600} strokeWidth={sw * 1.5} />
 
+        <g data-testid="front-labels">
+          {labelOf('rails', palette.ink)}
+          {labelOf('steering-box', palette.ink)}
+        </g>
+
         {scene.gaps.map((g) => {
           const c = gapColor(g.valueMm);
           return (
             <g key={g.id} data-testid={`front-gap-${g.id}`}>
-              <title>{`${g.label}: ${units.formatLength(g.valueMm)}`}</title>
+              <title>{`${g.label}: ${gapText(g.valueMm)}`}</title>
               <line x1={X(g.fromY)} x2={X(g.toY)} y1={Y(g.z)} y2={Y(g.z)} stroke={c} strokeWidth={sw * 1.5} markerStart={`url(#${uid}-arrow)`} markerEnd={`url(#${uid}-arrow)`} />
-              <text x={(X(g.fromY) + X(g.toY)) / 2} y={Y(g.z) - fs * 0.5} fontSize={fs * 0.9} fontWeight={700} fill={c} textAnchor="middle" style={halo}>
-                {g.valueMm < 0 ? `overlap ${units.formatLength(-g.valueMm)}` : units.formatLength(g.valueMm)}
-              </text>
+              {labelOf(`gap:${g.id}`, c, true)}
             </g>
           );
         })}

@@ -1,11 +1,15 @@
 import type { Finding, FitSpec, FitWindow, Placement } from '@swapwright/shared';
 import { Flex, Typography } from 'antd';
-import { useId, useMemo } from 'react';
+import { useId, useMemo, useRef } from 'react';
 import { palette } from '@/config/theme';
 import { useUnits } from '@/hooks/use-units';
+import { placeLabels, segmentBoxes, wrapLabel, type Box, type LabelRequest } from '../lib/label-placement';
 import { buildSideScene, type GapDimension } from '../lib/side-scene';
 import type { Pt } from '../lib/scene-geometry';
 import { statusColors } from '../lib/status';
+import { DRAWING_TEXT_PX, DrawingLabel, drawingScale, useRenderedWidth } from './drawing-label';
+
+const MAX_HEIGHT_PX = 560;
 
 export type SideViewProps = {
   spec: FitSpec;
@@ -87,23 +91,75 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
   const vbH = height + 2 * pad;
   const X = (x: number) => x - b.xMin + pad;
   const Y = (z: number) => b.zMax - z + pad;
+  // line weights and markers follow the drawing; text follows the screen, so it stays readable when the drawing shrinks
   const fs = Math.max(vbW, vbH) / 62;
   const sw = fs / 7;
+  const figureRef = useRef<HTMLElement>(null);
+  const scale = drawingScale(useRenderedWidth(figureRef), vbW, vbH, MAX_HEIGHT_PX);
+  const text = { note: DRAWING_TEXT_PX.note / scale, name: DRAWING_TEXT_PX.name / scale, figure: DRAWING_TEXT_PX.figure / scale };
   const pts = (p: readonly Pt[]) => p.map((q) => `${X(q.x).toFixed(1)},${Y(q.z).toFixed(1)}`).join(' ');
   const origin = scene.crank.origin;
 
   const dimLabel = (d: GapDimension) => (d.valueMm < 0 ? `overlap ${units.formatLength(-d.valueMm)}` : units.formatLength(d.valueMm));
 
-  const halo = { paintOrder: 'stroke' as const, stroke: '#fff', strokeWidth: fs / 4, strokeLinejoin: 'round' as const };
+  const labels = useMemo(() => {
+    const wrapAt = Math.max(vbW * 0.3, text.name * 6);
+    const requests: LabelRequest[] = [];
+    const avoid: Box[] = [];
+    // the figures first: they sit on their dimension line and matter most
+    for (const d of scene.dimensions) {
+      const from = { x: X(d.from.x), y: Y(d.from.z) };
+      const to = { x: X(d.to.x), y: Y(d.to.z) };
+      const vertical = Math.abs(to.y - from.y) >= Math.abs(to.x - from.x);
+      requests.push({ id: `dim:${d.checkId}`, anchor: { x: (from.x + to.x) / 2, y: (from.y + to.y) / 2 }, lines: [dimLabel(d)], fontSize: text.figure, bold: true, prefer: vertical ? ['right', 'left'] : ['above', 'below'] });
+      avoid.push(...segmentBoxes(from, to, sw * 4));
+    }
+    // labels tied to the frame of the drawing next, then the names of things
+    requests.push({ id: 'axle', anchor: { x: X(0), y: Y(b.zMax) - pad * 0.5 }, lines: ['front axle'], fontSize: text.note, prefer: ['right', 'below-right'] });
+    requests.push({ id: 'ground', anchor: { x: fs * 0.3, y: Y(0) }, lines: ['ground at ride height'], fontSize: text.note, prefer: ['above-right'] });
+    for (const o of scene.obstacles) {
+      if (o.outline.length === 0) continue;
+      // small obstacles that sit close together (link, axle, crossmember): names keep off all of them
+      const xs = o.outline.map((p) => X(p.x));
+      const ys = o.outline.map((p) => Y(p.z));
+      const box = { x: Math.min(...xs), y: Math.min(...ys), w: Math.max(...xs) - Math.min(...xs), h: Math.max(...ys) - Math.min(...ys) };
+      if (box.w < vbW * 0.15 && box.h < vbH * 0.15) avoid.push(box);
+    }
+    for (const o of scene.obstacles) {
+      if (o.outline.length === 0) continue;
+      const top = o.outline.reduce((t, p) => (p.z > t.z ? p : t), o.outline[0]);
+      const cx = o.outline.reduce((sum, p) => sum + p.x, 0) / o.outline.length;
+      requests.push({ id: `obstacle:${o.id}`, anchor: { x: X(cx), y: Y(top.z) }, lines: wrapLabel(o.name, text.name, wrapAt), fontSize: text.name, prefer: ['above', 'above-right', 'above-left'] });
+    }
+    if (scene.hoodLine.length > 1) requests.push({ id: 'hood', anchor: { x: X(scene.hoodLine[0].x), y: Y(scene.hoodLine[0].z) }, lines: ['hood'], fontSize: text.name, prefer: ['above-right', 'above'] });
+    if (scene.radiator) requests.push({ id: 'radiator', anchor: { x: X(scene.radiator.x) - fs * 0.45, y: Y(scene.radiator.zTo) }, lines: ['radiator'], fontSize: text.name, prefer: ['above', 'above-left'] });
+    const originAt = { x: X(origin.x), y: Y(origin.z) };
+    avoid.push({ x: originAt.x - fs, y: originAt.y - fs, w: fs * 2, h: fs * 2 });
+    requests.push({
+      id: 'origin',
+      anchor: originAt,
+      lines: wrapLabel(`crank origin ${units.formatLength(origin.x)} back, ${units.formatLength(origin.z)} up`, text.note, wrapAt),
+      fontSize: text.note,
+      prefer: ['below-right', 'below', 'below-left'],
+    });
+    const placed = placeLabels(requests, { bounds: { x: 0, y: 0, w: vbW, h: vbH }, avoid });
+    return new Map(placed.map((l) => [l.id, l]));
+  }, [scene, vbW, vbH, scale, units]);
+
+  const halo = text.name / 4;
+  const labelOf = (id: string, fill: string, bold = false) => {
+    const l = labels.get(id);
+    return l ? <DrawingLabel label={l} fill={fill} bold={bold} halo={halo} leaderWidth={sw} /> : null;
+  };
 
   return (
-    <figure className="fit-side-view" data-testid="side-view" style={{ margin: 0 }}>
+    <figure ref={figureRef} className="fit-side-view" data-testid="side-view" style={{ margin: 0 }}>
       <svg
         viewBox={`0 0 ${vbW.toFixed(0)} ${vbH.toFixed(0)}`}
         width="100%"
         role="img"
         aria-labelledby={`${uid}-title ${uid}-desc`}
-        style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: 560 }}
+        style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: MAX_HEIGHT_PX }}
       >
         <title id={`${uid}-title`}>Side view of the engine in the chassis</title>
         <desc id={`${uid}-desc`}>
@@ -122,16 +178,10 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
         <g data-testid="side-ground">
           <rect x={0} y={Y(0)} width={vbW} height={pad} fill={`url(#${uid}-hatch)`} opacity="0.6" />
           <line x1={0} x2={vbW} y1={Y(0)} y2={Y(0)} stroke={colors.ground} strokeWidth={sw * 1.5} />
-          <text x={fs * 0.5} y={Y(0) - fs * 0.4} fontSize={fs * 0.8} fill={palette.inkMuted}>
-            ground at ride height
-          </text>
         </g>
 
         {/* front axle centerline */}
         <line x1={X(0)} x2={X(0)} y1={Y(b.zMax) - pad * 0.5} y2={Y(0)} stroke={palette.inkMuted} strokeWidth={sw} strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`} />
-        <text x={X(0) + fs * 0.3} y={Y(b.zMax) - pad * 0.2} fontSize={fs * 0.8} fill={palette.inkMuted}>
-          front axle
-        </text>
 
         {/* fit window */}
         {windowBands.map((band, i) => (
@@ -151,9 +201,6 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
         {scene.hoodLine.length > 1 && (
           <g data-testid="side-hood">
             <polyline points={pts(scene.hoodLine)} fill="none" stroke={colors.hood} strokeWidth={sw * 2} strokeDasharray={`${fs / 1.5} ${fs / 3}`} />
-            <text x={X(scene.hoodLine[0].x)} y={Y(scene.hoodLine[0].z) - fs * 0.4} fontSize={fs * 0.85} fill={colors.hood}>
-              hood
-            </text>
           </g>
         )}
 
@@ -170,17 +217,12 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
               stroke={colors.radiator}
               strokeWidth={sw}
             />
-            <text x={X(scene.radiator.x) - fs * 1.3} y={Y(scene.radiator.zTo) - fs * 0.4} fontSize={fs * 0.85} fill="#7d5d22">
-              radiator
-            </text>
           </g>
         )}
 
         {/* chassis obstacles */}
         {scene.obstacles.map((o) => {
           const structural = o.kind === 'firewall' || o.kind === 'tunnel';
-          const top = o.outline.reduce((t, p) => (p.z > t.z ? p : t), o.outline[0]);
-          const cx = o.outline.reduce((s, p) => s + p.x, 0) / Math.max(o.outline.length, 1);
           return (
             <g key={o.id} data-testid={`side-obstacle-${o.id}`}>
               <title>{o.name}</title>
@@ -191,11 +233,6 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
                 stroke={structural ? colors.structure : colors.obstacleStroke}
                 strokeWidth={sw * 1.3}
               />
-              {top && (
-                <text x={X(cx)} y={Y(top.z) - fs * 0.35} fontSize={fs * 0.75} textAnchor="middle" fill={palette.ink} style={halo}>
-                  {o.name}
-                </text>
-              )}
             </g>
           );
         })}
@@ -238,9 +275,6 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
           <circle cx={X(origin.x)} cy={Y(origin.z)} r={fs * 0.45} fill="#fff" stroke={palette.oxide600} strokeWidth={sw * 1.5} />
           <line x1={X(origin.x) - fs * 0.8} x2={X(origin.x) + fs * 0.8} y1={Y(origin.z)} y2={Y(origin.z)} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
           <line x1={X(origin.x)} x2={X(origin.x)} y1={Y(origin.z) - fs * 0.8} y2={Y(origin.z) + fs * 0.8} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
-          <text x={X(origin.x) + fs * 0.8} y={Y(origin.z) + fs * 1.6} fontSize={fs * 0.8} fill={palette.oxide600} style={halo}>
-            crank origin {units.formatLength(origin.x)} back, {units.formatLength(origin.z)} up
-          </text>
         </g>
 
         {/* proposed placement */}
@@ -260,6 +294,16 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
           </g>
         )}
 
+        {/* names, placed clear of each other */}
+        <g data-testid="side-labels">
+          {scene.obstacles.map((o) => <g key={o.id}>{labelOf(`obstacle:${o.id}`, palette.ink)}</g>)}
+          {labelOf('hood', colors.hood)}
+          {labelOf('radiator', '#7d5d22')}
+          {labelOf('origin', palette.oxide600)}
+          {labelOf('axle', palette.inkMuted)}
+          {labelOf('ground', palette.inkMuted)}
+        </g>
+
         {/* dimensions of the tightest clearances */}
         {scene.dimensions.map((d) => {
           const c = statusColors[d.status].fg;
@@ -268,9 +312,6 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
           const x2 = X(d.to.x);
           const y2 = Y(d.to.z);
           const len = Math.hypot(x2 - x1, y2 - y1);
-          const mx = (x1 + x2) / 2;
-          const my = (y1 + y2) / 2;
-          const vertical = Math.abs(y2 - y1) >= Math.abs(x2 - x1);
           return (
             <g key={d.checkId} data-testid={`side-dim-${d.checkId}`} data-status={d.status}>
               <title>{`${d.title}: ${dimLabel(d)}`}</title>
@@ -279,17 +320,7 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
               ) : (
                 <circle cx={x1} cy={y1} r={fs * 0.25} fill={c} />
               )}
-              <text
-                x={vertical ? mx + fs * 0.5 : mx}
-                y={vertical ? my + fs * 0.35 : my - fs * 0.5}
-                textAnchor={vertical ? 'start' : 'middle'}
-                fontSize={fs}
-                fontWeight={700}
-                fill={c}
-                style={halo}
-              >
-                {dimLabel(d)}
-              </text>
+              {labelOf(`dim:${d.checkId}`, c, true)}
             </g>
           );
         })}

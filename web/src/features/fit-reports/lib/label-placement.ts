@@ -24,6 +24,7 @@ export type LabelRequest = {
 
 export type PlacedLabel = {
   id: string;
+  anchor: Point;
   box: Box;
   lines: readonly string[];
   fontSize: number;
@@ -42,7 +43,7 @@ export type PlacementOptions = {
   avoid?: readonly Box[];
   /** Gap between anchor and label, in drawing units (default: a third of the label's font size). */
   gap?: number;
-  /** How many rings of positions further out to try before settling for the least overlap (default 6). */
+  /** How many rings of positions further out to try before settling for the least overlap (default 12). */
   rings?: number;
 };
 
@@ -123,7 +124,7 @@ export function nearestOnBox(box: Box, p: Point): Point {
 
 /** Places the labels in the order given (put the most important first): none covers another where room allows. */
 export function placeLabels(requests: readonly LabelRequest[], options: PlacementOptions): PlacedLabel[] {
-  const { bounds, avoid = [], rings = 6 } = options;
+  const { bounds, avoid = [], rings = 12 } = options;
   const placed: PlacedLabel[] = [];
   const taken: Box[] = [];
 
@@ -151,6 +152,7 @@ export function placeLabels(requests: readonly LabelRequest[], options: Placemen
     const lineHeight = req.fontSize * LINE_HEIGHT;
     placed.push({
       id: req.id,
+      anchor: req.anchor,
       box,
       lines: req.lines,
       fontSize: req.fontSize,

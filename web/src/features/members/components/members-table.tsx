@@ -54,6 +54,8 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
       title: <span className="sr-only">Actions</span>,
       key: 'actions',
       align: 'right',
+      // stays in view when a narrow screen scrolls the table sideways
+      fixed: 'right',
       render: (_, m) =>
         m.userId === currentUserId ? null : (
           <Popconfirm

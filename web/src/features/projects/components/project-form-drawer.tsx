@@ -1,5 +1,5 @@
 import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
-import { BoundedNumberInput } from '@/components/bounded-number-input';
+import { BoundedNumberInput, plainNumberRule } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
@@ -9,8 +9,12 @@ import { useCreateProject } from '../api/create-project';
 import { useUpdateProject } from '../api/update-project';
 import { statusLabels, useLabels } from '../project-labels';
 import { projectStatuses, projectUses, type Project, type ProjectGoals, type ProjectStatus, type ProjectUse } from '../types';
+import { useDrawerSize } from '@/hooks/use-drawer-size';
 
 export type CustomerOption = { value: string; label: string };
+
+/** The API takes budgets up to 100,000,000.00 in the shop currency. */
+const MAX_BUDGET = 100_000_000;
 
 export type ProjectFormDrawerProps = {
   open: boolean;
@@ -53,6 +57,7 @@ export function ProjectFormDrawer({
   defaultCustomerId,
 }: ProjectFormDrawerProps) {
   const [form] = Form.useForm<ProjectFormValues>();
+  const drawerSize = useDrawerSize(520);
   const isEdit = Boolean(project);
   const powerUnit = unitSystem === 'in' ? 'hp' : 'kW';
   // the API takes 1 to 2,000 kW
@@ -113,7 +118,7 @@ export function ProjectFormDrawer({
       open={open}
       onClose={onClose}
       title={isEdit ? `Edit ${project?.title}` : 'New project'}
-      size={520}
+      size={drawerSize}
       destroyOnHidden
       footer={
         <Flex justify="flex-end" gap={8}>
@@ -175,8 +180,9 @@ export function ProjectFormDrawer({
           <Col span={12}>
             <Form.Item
               label={`Target power (${powerUnit})`}
+              validateFirst
               name="targetPower"
-              rules={[{ type: 'number', min: 1, max: maxPower, message: `Between 1 and ${maxPower.toLocaleString('en-US')} ${powerUnit}` }]}
+              rules={[plainNumberRule('Target power', `350`), { type: 'number', min: 1, max: maxPower, message: `Between 1 and ${maxPower.toLocaleString('en-US')} ${powerUnit}` }]}
             >
               <BoundedNumberInput style={{ width: '100%' }} min={1} max={maxPower} precision={0} suffix={powerUnit} aria-label="Target power" />
             </Form.Item>
@@ -184,17 +190,28 @@ export function ProjectFormDrawer({
           <Col span={12}>
             <Form.Item
               label="Planned rev limit"
+              validateFirst
               name="revLimitRpm"
-              rules={[{ type: 'number', min: 1000, max: 12000, message: 'Between 1,000 and 12,000 rpm' }]}
+              rules={[plainNumberRule('Planned rev limit', '5500'), { type: 'number', min: 1000, max: 12000, message: 'Between 1,000 and 12,000 rpm' }]}
             >
               <BoundedNumberInput style={{ width: '100%' }} min={1000} max={12000} step={100} precision={0} suffix="rpm" aria-label="Planned rev limit" />
             </Form.Item>
           </Col>
         </Row>
-        <Form.Item label="Budget" name="budget" rules={[{ type: 'number', min: 0, message: 'The budget cannot be negative' }]}>
+        <Form.Item
+          label="Budget"
+          validateFirst
+          name="budget"
+          rules={[
+            plainNumberRule('Budget', '18,500'),
+            { type: 'number', min: 0, message: 'The budget cannot be negative' },
+            { type: 'number', max: MAX_BUDGET, message: `Keep the budget at or under ${MAX_BUDGET.toLocaleString('en-US')}` },
+          ]}
+        >
           <BoundedNumberInput
             style={{ width: '100%' }}
             min={0}
+            max={MAX_BUDGET}
             step={500}
             precision={2}
             prefix={currency === 'USD' ? '$' : undefined}

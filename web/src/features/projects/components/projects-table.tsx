@@ -75,6 +75,7 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
       sorter: true,
       sortOrder: sortOrderFor('updatedAt', query.sort, query.order),
       render: formatDate,
+      responsive: ['sm'],
     },
   ];
 
@@ -117,6 +118,8 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
         pagination={serverPagination(query, page?.total)}
+        // a phone scrolls the table inside its card rather than the page sideways
+        scroll={{ x: 'max-content' }}
         locale={{
           emptyText: projects.isPending ? (
             ' '

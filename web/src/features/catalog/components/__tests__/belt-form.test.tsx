@@ -24,11 +24,11 @@ describe('belt form', () => {
     const ribs = screen.getByRole('spinbutton', { name: 'Ribs' }) as HTMLInputElement;
     expect(ribs.value).toBe('6');
     // 48.23 in × 25.4 = 1225.042 mm (1 in = 25.4 mm exactly, NIST SP 811 appendix B).
-    await userEvent.type(screen.getByRole('spinbutton', { name: 'Effective length' }), '48.23');
+    await userEvent.type(screen.getByRole('textbox', { name: 'Effective length' }), '48.23');
     // Source: ISO 9982:2019 (PK rib pitch 3.56 mm; designation ribs × profile × effective length)
     expect(screen.getByTestId('belt-designation').textContent).toBe('Designation: 6PK1225');
 
-    await userEvent.click(screen.getByRole('button', { name: 'Add serpentine belt' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Add accessory drive belt' }));
     await waitFor(() => expect(post).toHaveBeenCalledTimes(1));
     const [url, body] = post.mock.calls[0];
     expect(url).toBe('/catalog/belts');
@@ -45,9 +45,9 @@ describe('belt form', () => {
     const ribs = screen.getByRole('spinbutton', { name: 'Ribs' }) as HTMLInputElement;
     await userEvent.clear(ribs);
     await userEvent.type(ribs, '14');
-    await userEvent.type(screen.getByRole('spinbutton', { name: 'Effective length' }), '48');
+    await userEvent.type(screen.getByRole('textbox', { name: 'Effective length' }), '48');
     expect(ribs.value).toBe('12');
-    await userEvent.click(screen.getByRole('button', { name: 'Add serpentine belt' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Add accessory drive belt' }));
     await waitFor(() => expect(post).toHaveBeenCalledTimes(1));
     expect(post.mock.calls[0][1]).toMatchObject({ ribs: 12 });
   });

@@ -22,8 +22,8 @@ const pan: OutlinePoint[] = [
 describe('OutlineEditor', () => {
   it('shows stored millimetres in inches and keeps what is typed in millimetres', async () => {
     renderWithApp(<Harness initial={pan} />);
-    expect(screen.getByRole('columnheader', { name: 'u (in)' })).toBeInTheDocument();
-    const w2 = screen.getByRole('spinbutton', { name: 'Bottom profile: point 2 w' }) as HTMLInputElement;
+    expect(screen.getByRole('columnheader', { name: 'Forward (in)' })).toBeInTheDocument();
+    const w2 = screen.getByRole('textbox', { name: 'Bottom profile: point 2 height' }) as HTMLInputElement;
     expect(w2.value).toBe('-10.00');
     await userEvent.clear(w2);
     await userEvent.type(w2, '-5.5');
@@ -34,8 +34,8 @@ describe('OutlineEditor', () => {
   it('shows and takes millimetres when the person works in mm', async () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<Harness initial={pan} />);
-    expect(screen.getByRole('columnheader', { name: 'u (mm)' })).toBeInTheDocument();
-    const u1 = screen.getByRole('spinbutton', { name: 'Bottom profile: point 1 u' }) as HTMLInputElement;
+    expect(screen.getByRole('columnheader', { name: 'Forward (mm)' })).toBeInTheDocument();
+    const u1 = screen.getByRole('textbox', { name: 'Bottom profile: point 1 forward' }) as HTMLInputElement;
     expect(u1.value).toBe('600');
     await userEvent.clear(u1);
     await userEvent.type(u1, '590');
@@ -44,9 +44,9 @@ describe('OutlineEditor', () => {
 
   it('adds and removes rows', async () => {
     renderWithApp(<Harness initial={pan} />);
-    expect(screen.getAllByRole('spinbutton')).toHaveLength(4);
+    expect(screen.getAllByRole('textbox')).toHaveLength(4);
     await userEvent.click(screen.getByRole('button', { name: 'Add a point to Bottom profile' }));
-    expect(screen.getAllByRole('spinbutton')).toHaveLength(6);
+    expect(screen.getAllByRole('textbox')).toHaveLength(6);
     expect(latest).toHaveLength(3);
     expect(latest[2]).toEqual({ u: 330, w: -254 });
     await userEvent.click(screen.getByRole('button', { name: 'Remove point 1 of Bottom profile' }));
@@ -79,7 +79,7 @@ describe('CatalogItemDrawer', () => {
     };
     renderWithApp(<CatalogItemDrawer kind="oil-pans" open item={item} onClose={() => undefined} />);
     expect(((await screen.findByRole('textbox', { name: 'Rail pattern' })) as HTMLInputElement).value).toBe('R-V8');
-    expect((screen.getByRole('spinbutton', { name: 'Sump floor (w)' }) as HTMLInputElement).value).toBe('-10.00');
+    expect((screen.getByRole('textbox', { name: 'Sump floor height' }) as HTMLInputElement).value).toBe('-10.00');
     expect((screen.getByRole('spinbutton', { name: 'Capacity' }) as HTMLInputElement).value).toBe('5.7');
   });
 });

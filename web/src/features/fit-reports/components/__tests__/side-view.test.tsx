@@ -1,7 +1,7 @@
 import { computeFitWindow, runFitCheck } from '@swapwright/shared';
 import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '@swapwright/shared/fixtures';
 import { screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { FrontView } from '../front-view';
 import { SideView } from '../side-view';
@@ -46,5 +46,36 @@ describe('FrontView', () => {
     expect(within(view).getByText('rails 740 mm inside')).toBeInTheDocument();
     expect(within(view).getByTestId('front-steering-box')).toBeInTheDocument();
     expect(within(view).getByTestId('front-box-drive-cv60-truck')).toBeInTheDocument();
+  });
+});
+
+describe('drawing labels', () => {
+  const report = runFitCheck(DEMO_FIT_SPEC);
+  const boxOf = (el: Element) => {
+    const [x, y, w, h] = (el.getAttribute('data-box') ?? '').split(' ').map(Number);
+    return { x, y, w, h };
+  };
+  const overlap = (a: ReturnType<typeof boxOf>, b: ReturnType<typeof boxOf>) =>
+    Math.max(0, Math.min(a.x + a.w, b.x + b.w) - Math.max(a.x, b.x)) * Math.max(0, Math.min(a.y + a.h, b.y + b.h) - Math.max(a.y, b.y));
+
+  // a phone (the card inside a 390 px screen) and a desktop card
+  it.each([330, 700])('stay at least 11 px on screen and off each other in a %i px wide drawing', (widthPx) => {
+    vi.spyOn(HTMLElement.prototype, 'getBoundingClientRect').mockReturnValue({ width: widthPx, height: 300, x: 0, y: 0, top: 0, left: 0, right: widthPx, bottom: 300, toJSON: () => ({}) } as DOMRect);
+    renderWithApp(
+      <>
+        <SideView spec={DEMO_FIT_SPEC} findings={report.findings} />
+        <FrontView spec={DEMO_FIT_SPEC} />
+      </>,
+    );
+    for (const [testId, maxHeight] of [['side-view', 560], ['front-view', 420]] as const) {
+      const svg = screen.getByTestId(testId).querySelector('svg')!;
+      const [, , vbW, vbH] = svg.getAttribute('viewBox')!.split(' ').map(Number);
+      const scale = Math.min(widthPx / vbW, maxHeight / vbH);
+      const texts = [...svg.querySelectorAll('text')];
+      expect(texts.length).toBeGreaterThan(3);
+      for (const t of texts) expect(Number(t.getAttribute('font-size')) * scale).toBeGreaterThanOrEqual(11);
+      const boxes = [...svg.querySelectorAll('[data-box]')].map(boxOf);
+      for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(overlap(boxes[i], boxes[j])).toBe(0);
+    }
   });
 });
