@@ -109,7 +109,6 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
         dataSource={items.data?.items ?? []}
         locale={{ emptyText: `No ${def.label.toLowerCase()} in the catalog yet.` }}
         pagination={serverPagination(query, items.data?.total)}
-        scroll={{ x: 'max-content' }}
         onChange={(p) => onQueryChange({ page: p.current ?? 1, pageSize: p.pageSize ?? query.pageSize })}
       />
     </Flex>

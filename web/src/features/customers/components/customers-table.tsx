@@ -131,8 +131,6 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
         pagination={serverPagination(query, page?.total)}
-        // a phone scrolls the table inside its card rather than the page sideways
-        scroll={{ x: 'max-content' }}
         locale={{
           emptyText: customers.isPending ? (
             ' '

@@ -34,7 +34,7 @@ export function InvitationsTable() {
       empty={<EmptyState description="No invitations sent yet." />}
     >
       {(list) => (
-        <Table<Invitation> aria-label="Invitations" rowKey="id" size="small" columns={columns} dataSource={list} pagination={{ pageSize: 10, hideOnSinglePage: true }} scroll={{ x: 'max-content' }} />
+        <Table<Invitation> aria-label="Invitations" rowKey="id" size="small" columns={columns} dataSource={list} pagination={{ pageSize: 10, hideOnSinglePage: true }} />
       )}
     </QueryState>
   );

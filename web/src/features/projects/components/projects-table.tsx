@@ -118,8 +118,6 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
         onChange={onChange}
         sortDirections={['ascend', 'descend', 'ascend']}
         pagination={serverPagination(query, page?.total)}
-        // a phone scrolls the table inside its card rather than the page sideways
-        scroll={{ x: 'max-content' }}
         locale={{
           emptyText: projects.isPending ? (
             ' '
