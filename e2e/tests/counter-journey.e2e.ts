@@ -14,19 +14,17 @@ describe('the parts counter looks up the shop catalog', () => {
     await browser.close();
   });
 
-  it('sees on the home page what is coming and what can be done now', async () => {
+  it('lands on the counter itself, not a dead end', async () => {
     const { page } = browser;
-    const home = page.getByTestId('counter-placeholder');
-    await expectText(home, /Coming next/);
-    await expectVisible(home.getByRole('link', { name: 'Look up oil pans' }));
-    await expectVisible(home.getByRole('link', { name: 'Look up accessory drive belts' }));
+    await expectVisible(page.getByRole('tab', { name: 'Jobs' }));
+    await expectVisible(page.getByRole('tab', { name: 'Parts and stock' }));
     await saveScreenshot(page, 'counter-home');
   });
 
   it('finds the rear-sump swap pan among the oil pans', async () => {
     const { page } = browser;
-    await page.getByTestId('counter-placeholder').getByRole('link', { name: 'Look up oil pans' }).click();
-    expect(page.url()).toContain('kind=oil-pans');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Catalog' }).click();
+    await page.getByRole('tab', { name: /Oil pans/i }).click();
     expect(await page.getByRole('tab', { name: /Oil pans/i }).getAttribute('aria-selected')).toBe('true');
     const row = page.getByRole('row').filter({ hasText: 'Trailhand TR-4410 rear-sump swap pan' });
     await expectVisible(row);

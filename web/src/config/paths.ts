@@ -27,8 +27,5 @@ export const toProjectDetail = (projectId: string): string =>
 export const toProjectFit = (projectId: string): string =>
   paths.projectFit.replace(':projectId', encodeURIComponent(projectId));
 
-/** The catalog, opened on one kind of entry (a tab). */
-export const toCatalog = (kind?: string): string => (kind ? `${paths.catalog}?kind=${encodeURIComponent(kind)}` : paths.catalog);
-
 export const toSignIn = (next?: string): string =>
   next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;
