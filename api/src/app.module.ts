@@ -21,6 +21,7 @@ import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { LaborOperationsModule } from './labor-operations/labor-operations.module';
 import { MailModule } from './mail/mail.module';
+import { MeasurementsModule } from './measurements/measurements.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
 import { PaymentsModule } from './payments/payments.module';
@@ -72,6 +73,7 @@ import { UsersModule } from './users/users.module';
     ProjectsModule,
     CatalogModule,
     FitReportsModule,
+    MeasurementsModule,
     PartsModule,
     LaborOperationsModule,
     QuotesModule,

@@ -1,3 +1,4 @@
+import { MEASUREMENT_ENTITIES } from '../measurements/measurement-sheet.entity';
 import { RefreshToken } from '../auth/refresh-token.entity';
 import { CATALOG_ENTITIES } from '../catalog/catalog-item.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
@@ -22,4 +23,4 @@ import { User } from '../users/user.entity';
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
-  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent];
+  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES];

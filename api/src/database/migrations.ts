@@ -1,3 +1,4 @@
+import { CreateMeasurements1796240364406 } from './migrations/1796240364406-create-measurements';
 import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
 import { CreateCustomers1796100002000 } from './migrations/1796100002000-create-customers';
@@ -33,4 +34,5 @@ export const MIGRATIONS = [
   CreateQuotes1796236709687,
   CreateDepositPayments1796239097244,
   PendingSignUps1796239565848,
+  CreateMeasurements1796240364406,
 ];

@@ -1,4 +1,4 @@
-import type { CheckStatus, FitReport, FitSettings, FitSpec } from '@swapwright/shared';
+import type { ChassisInput, CheckStatus, FitReport, FitSettings, FitSpec } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 import type { User } from '../users/user.entity';
@@ -14,6 +14,8 @@ export interface FitReportInputs {
   placementSource: PlacementSource;
   /** Inputs the API filled in or left out, in words (e.g. a target power taken from the engine). */
   notes: string[];
+  /** Per measured chassis input, where its value came from (sheet: who and when; catalog) and whether it is flagged. Absent on reports run before measurement sheets. */
+  chassisInputs?: ChassisInput[];
 }
 
 /** A stored fit report: the whole input and the engine's answer, so a quote can name the run it was built on. */

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { CatalogModule } from '../catalog/catalog.module';
+import { MeasurementsModule } from '../measurements/measurements.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { FitReportRecord } from './fit-report-record.entity';
 import { FitReportsController, ProjectFitReportsController } from './fit-reports.controller';
@@ -14,7 +15,7 @@ import { ProjectFitSelection } from './project-fit-selection.entity';
 import { ShopFitSettings } from './shop-fit-settings.entity';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([FitReportRecord, ProjectFitSelection, ShopFitSettings]), CatalogModule, ProjectsModule],
+  imports: [TypeOrmModule.forFeature([FitReportRecord, ProjectFitSelection, ShopFitSettings]), CatalogModule, ProjectsModule, MeasurementsModule],
   controllers: [ProjectFitReportsController, FitReportsController, FitSelectionsController, FitSettingsController],
   providers: [FitReportsService, FitSelectionsService, FitSettingsService, FitSpecBuilderService],
   exports: [FitReportsService, FitSpecBuilderService, FitSettingsService],

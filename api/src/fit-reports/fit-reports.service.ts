@@ -62,7 +62,7 @@ export class FitReportsService {
       placementHeightMm: report.placement.heightMm,
       placementTiltDeg: report.placement.tiltDeg,
       placementSource: built.placementSource,
-      inputsSnapshot: { spec: built.spec, settingsOverrides, placementSource: built.placementSource, notes: built.notes },
+      inputsSnapshot: { spec: built.spec, settingsOverrides, placementSource: built.placementSource, notes: built.notes, chassisInputs: built.chassisInputs },
       results: report,
       totalCount: report.summary.total,
       okCount: report.summary.ok,

@@ -1,3 +1,4 @@
+import { MeasurementsService } from '../measurements/measurements.service';
 import { accessoryDriveBeltLayout, beltLengthWindow, type AccessoryDriveSpec, type EngineSpec, type SerpentineBeltSpec } from '@swapwright/shared';
 import { DEMO_CATALOG, DEMO_CATALOG_IDS } from '@swapwright/seed-data';
 import { Repository } from 'typeorm';
@@ -50,7 +51,7 @@ describe('FitSpecBuilderService.candidates', () => {
       kind === 'belts' ? belts.filter((belt) => where.ribs === undefined || belt.ribs === where.ribs) : [],
     );
     const catalog = { candidateSpecs } as unknown as CatalogService;
-    const builder = new FitSpecBuilderService(catalog, {} as Repository<ProjectFitSelection>);
+    const builder = new FitSpecBuilderService(catalog, {} as MeasurementsService, {} as Repository<ProjectFitSelection>);
     return { builder, candidateSpecs };
   }
 

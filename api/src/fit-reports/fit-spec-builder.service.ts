@@ -3,6 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { computeFitWindow, resolveFitSettings } from '@swapwright/shared';
 import type {
   AccessoryDriveSpec,
+  ChassisInput,
   BellhousingAdapterSpec,
   ChassisSpec,
   EngineControllerSpec,
@@ -24,13 +25,15 @@ import { chassisDefaultPlacement } from '../catalog/catalog-kinds';
 import { CatalogChassis } from '../catalog/catalog-item.entity';
 import { AuthUser } from '../common/tenant/auth-user';
 import { Project } from '../projects/project.entity';
-import { applyChassisOverrides, ChassisOverrides, NO_CHASSIS_OVERRIDES } from './chassis-overrides';
+import { MeasurementsService } from '../measurements/measurements.service';
 import { PlacementSource } from './fit-report-record.entity';
 import { FitReportErrors } from './fit-reports.errors';
 import { ProjectFitSelection } from './project-fit-selection.entity';
 
 export interface BuiltFitSpec {
   spec: FitSpec;
+  /** Per chassis input governed by a measurement point: its value's source (sheet or catalog) and deviation. */
+  chassisInputs: ChassisInput[];
   placementSource: PlacementSource;
   notes: string[];
 }
@@ -46,6 +49,7 @@ type Shop = Pick<AuthUser, 'shopId'>;
 export class FitSpecBuilderService {
   constructor(
     private readonly catalog: CatalogService,
+    private readonly measurements: MeasurementsService,
     @InjectRepository(ProjectFitSelection) private readonly selections: Repository<ProjectFitSelection>,
   ) {}
 
@@ -75,7 +79,18 @@ export class FitSpecBuilderService {
     if (project.transmissionId && !transmission) notes.push("The project's transmission is no longer in the catalog; drivetrain checks are unknown.");
     if (!project.transmissionId) notes.push('No transmission selected; drivetrain checks are unknown.');
 
-    const chassis = applyChassisOverrides(chassisRow.spec as ChassisSpec, await this.chassisOverrides(user, project));
+    // The measurement sheet's values replace the catalog's where measured (see docs/fit-spec.md, "Measured chassis").
+    const measured = await this.measurements.appliedFor(user, project);
+    const chassis = measured?.chassis ?? (chassisRow.spec as ChassisSpec);
+    const chassisInputs = measured?.inputs ?? [];
+    const fromSheet = chassisInputs.filter((input) => input.source.kind === 'sheet');
+    if (fromSheet.length > 0) {
+      const flagged = fromSheet.filter((input) => input.flagged).length;
+      notes.push(
+        `${fromSheet.length} chassis input${fromSheet.length === 1 ? '' : 's'} from the measurement sheet in place of the catalog` +
+          (flagged ? `; ${flagged} far from the catalog, worth a second look.` : '.'),
+      );
+    }
     const selection = await this.selections.findOne({ where: { projectId: project.id, shopId: user.shopId } });
     const [oilPan, oilPickup, oilPump, controller] = await Promise.all([
       this.catalog.findSpec<OilPanSpec>('oil-pans', user, selection?.oilPanId),
@@ -104,7 +119,7 @@ export class FitSpecBuilderService {
     };
     const placed = this.placement(project, partial, chassisRow, settingsOverrides, needed);
     if (needed.length > 0 || !goals || !placed) throw FitReportErrors.notReady(needed);
-    return { spec: { ...partial, placement: placed.placement }, placementSource: placed.source, notes };
+    return { spec: { ...partial, placement: placed.placement }, placementSource: placed.source, notes, chassisInputs };
   }
 
   /**
@@ -132,11 +147,6 @@ export class FitSpecBuilderService {
       controllers,
       ...(stockBeltLengthsMm.length > 0 && { stockBeltLengthsMm }),
     };
-  }
-
-  /** Measured chassis values of this project; none until the measurement module provides them. */
-  private async chassisOverrides(_user: Shop, _project: Project): Promise<ChassisOverrides> {
-    return NO_CHASSIS_OVERRIDES;
   }
 
   private goals(

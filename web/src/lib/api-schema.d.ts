@@ -774,6 +774,150 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{id}/measurement-sheet": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MeasurementsController_sheet"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{id}/measurement-sheet/values/{pointId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["MeasurementsController_setValue"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{id}/measurement-sheet/sign-off": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MeasurementsController_signOff"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{id}/measurement-sheet/photos": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MeasurementsController_addPhotos"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/measurement-photos/{id}/file": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MeasurementsController_photoFile"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/measurement-photos/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["MeasurementsController_deletePhoto"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/measurement-photos/{id}/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["MeasurementsController_acceptPhoto"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/chassis/{chassisId}/measurement-template": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MeasurementsController_template"];
+        put: operations["MeasurementsController_putTemplate"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/measurement-settings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["MeasurementsController_settings"];
+        put: operations["MeasurementsController_putSettings"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/parts": {
         parameters: {
             query?: never;
@@ -2561,6 +2705,26 @@ export interface components {
             caution: string;
             safety: string[];
         };
+        ChassisInputSourceDto: {
+            /** @enum {string} */
+            kind: "sheet" | "catalog";
+            measuredBy?: string;
+            measuredAt?: string;
+        };
+        ChassisInputDto: {
+            pointId: string;
+            label: string;
+            field: string;
+            /** @enum {string} */
+            unit: "mm" | "deg";
+            catalogValue: number | null;
+            measuredValue: number | null;
+            deviation: number | null;
+            flagged: boolean;
+            source: components["schemas"]["ChassisInputSourceDto"];
+            /** @description Fit checks that read this input. */
+            checks: string[];
+        };
         DriveshaftSpecDto: {
             outerDiameterMm: number;
             wallMm: number;
@@ -2715,6 +2879,8 @@ export interface components {
             railClearanceFabricationHours?: number;
         };
         FitReportInputsResponseDto: {
+            /** @description Chassis inputs governed by measurement points and their source. */
+            chassisInputs?: components["schemas"]["ChassisInputDto"][];
             spec: components["schemas"]["FitSpecDto"];
             settingsOverrides: components["schemas"]["FitSettingsOverridesDto"];
             /** @enum {string} */
@@ -2870,6 +3036,123 @@ export interface components {
         UpdateFitSettingsDto: {
             /** @description Replaces the shop’s overrides; an empty object returns to the defaults */
             overrides: components["schemas"]["FitSettingsOverridesDto"];
+        };
+        MeasurementPointResponseDto: {
+            id: string;
+            /** @enum {string} */
+            kind: "ride-height" | "obstacle-top" | "obstacle-bottom" | "obstacle-front-face" | "obstacle-rear-face" | "rail-inside-width" | "rail-bottom" | "mount-pad-height" | "mount-pad-setback" | "mount-pad-spacing" | "radiator-core-face" | "radiator-core-top" | "radiator-core-bottom" | "hood-line" | "transmission-crossmember-setback" | "transmission-crossmember-height" | "pinion-height" | "pinion-angle";
+            label: string;
+            howTo: string;
+            target?: string;
+            atX?: number;
+            catalogValue: number | null;
+            required: boolean;
+            /** @enum {string} */
+            view: "side" | "front";
+            /** @enum {string} */
+            unit: "mm" | "deg";
+            /** @description How the reading is taken (floor, front-axle-behind, front-axle-ahead, across, level). */
+            reference: string;
+        };
+        MeasurementValueResponseDto: {
+            pointId: string;
+            /** @description mm, or degrees for an angle */
+            value: number;
+            tolerance: number | null;
+            note: string | null;
+            measuredBy: string;
+            measuredAt: string;
+            /** @description Reading minus what the catalog predicts on this truck. */
+            deviation: number | null;
+            flagged: boolean;
+        };
+        MeasurementPhotoResponseDto: {
+            id: string;
+            pointId: string | null;
+            /** @enum {string} */
+            contentType: "image/jpeg" | "image/png" | "image/webp";
+            bytes: number;
+            widthPx: number;
+            heightPx: number;
+            /** @enum {string} */
+            status: "accepted" | "pending";
+            uploadedBy: string;
+            uploadedById: string;
+            createdAt: string;
+            /** @description GET this path (with the bearer token) for the file. */
+            url: string;
+        };
+        MeasurementEventResponseDto: {
+            /** @enum {string} */
+            kind: "value" | "sign-off";
+            pointId: string | null;
+            oldValue: number | null;
+            newValue: number | null;
+            reason: string | null;
+            by: string;
+            at: string;
+        };
+        MeasurementGroundResponseDto: {
+            zAtFrontAxleMm: number;
+            zAtRearAxleMm: number;
+            pitchDeg: number;
+        };
+        MeasurementSheetResponseDto: {
+            projectId: string;
+            chassisId: string | null;
+            signedOffAt: string | null;
+            points: components["schemas"]["MeasurementPointResponseDto"][];
+            values: components["schemas"]["MeasurementValueResponseDto"][];
+            /** @description Required points still without a value. */
+            missing: string[];
+            photos: components["schemas"]["MeasurementPhotoResponseDto"][];
+            history: components["schemas"]["MeasurementEventResponseDto"][];
+            ground: components["schemas"]["MeasurementGroundResponseDto"] | null;
+        };
+        SetMeasurementValueDto: {
+            /**
+             * @description What the tape says: `12 1/2"`, `12.5 in`, `317.5 mm`, or a bare number in `unit`; degrees for an angle.
+             * @example 12 1/2"
+             */
+            value: string;
+            /**
+             * @description Unit of a bare number (default mm).
+             * @enum {string}
+             */
+            unit?: "mm" | "in";
+            /** @description Plus or minus, same units as the value (e.g. `1/8"`). */
+            tolerance?: string;
+            note?: string;
+            /** @description Required once the sheet is signed off. */
+            reason?: string;
+        };
+        MeasurementTemplateResponseDto: {
+            chassisId: string;
+            points: components["schemas"]["MeasurementPointResponseDto"][];
+        };
+        MeasurementPointDto: {
+            id: string;
+            /** @enum {string} */
+            kind: "ride-height" | "obstacle-top" | "obstacle-bottom" | "obstacle-front-face" | "obstacle-rear-face" | "rail-inside-width" | "rail-bottom" | "mount-pad-height" | "mount-pad-setback" | "mount-pad-spacing" | "radiator-core-face" | "radiator-core-top" | "radiator-core-bottom" | "hood-line" | "transmission-crossmember-setback" | "transmission-crossmember-height" | "pinion-height" | "pinion-angle";
+            label: string;
+            howTo: string;
+            target?: string;
+            atX?: number;
+            catalogValue: number | null;
+            required: boolean;
+        };
+        PutMeasurementTemplateDto: {
+            points: components["schemas"]["MeasurementPointDto"][];
+        };
+        MeasurementSettingsResponseDto: {
+            deviationLimitMm: number;
+            deviationLimitDeg: number;
+        };
+        MeasurementSettingsDto: {
+            /** @description Flag a measured length further than this from the catalog (mm). */
+            deviationLimitMm: number;
+            /** @description Flag a measured angle further than this from the catalog (degrees). */
+            deviationLimitDeg: number;
         };
         TorqueSpecDto: {
             fastener: string;
@@ -6690,6 +6973,254 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_sheet: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementSheetResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_setValue: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+                pointId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SetMeasurementValueDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementSheetResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_signOff: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementSheetResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_addPhotos: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    photos: string[];
+                    pointId?: string;
+                    replacesPhotoId?: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementPhotoResponseDto"][];
+                };
+            };
+        };
+    };
+    MeasurementsController_photoFile: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "image/jpeg": string;
+                    "image/png": string;
+                    "image/webp": string;
+                };
+            };
+        };
+    };
+    MeasurementsController_deletePhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurementsController_acceptPhoto: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementPhotoResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_template: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                chassisId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementTemplateResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_putTemplate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                chassisId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutMeasurementTemplateDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementTemplateResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_settings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementSettingsResponseDto"];
+                };
+            };
+        };
+    };
+    MeasurementsController_putSettings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MeasurementSettingsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurementSettingsResponseDto"];
                 };
             };
         };

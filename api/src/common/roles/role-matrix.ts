@@ -32,6 +32,11 @@ import { Role } from './role';
  * | GET/PUT /quote-settings              | yes   | read      | -                 | -       | -          |
  * | GET work orders                      | yes   | yes       | yes               | -       | -          |
  * | record a work-order check            | yes   | yes       | yes               | -       | -          |
+ * | GET measurement sheet, photo files   | yes   | yes       | yes               | yes     | own only   |
+ * | PUT sheet values, sign-off, template | yes   | -         | yes               | -       | -          |
+ * | POST sheet photos, DELETE own photo  | yes   | -         | yes               | -       | own project (pending) |
+ * | GET template, measurement settings   | yes   | yes       | yes               | yes     | -          |
+ * | PUT measurement-settings             | yes   | -         | -                 | -       | -          |
  */
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];
@@ -65,3 +70,9 @@ export const QUOTE_SETTINGS_READERS: Role[] = ['owner', 'estimator'];
 export const QUOTE_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
 export const WORK_ORDER_READERS: Role[] = ['owner', 'estimator', 'fabricator'];
 export const WORK_ORDER_RECORDERS: Role[] = ['owner', 'estimator', 'fabricator'];
+export const MEASUREMENT_READERS: Role[] = STAFF;
+export const MEASUREMENT_WRITERS: Role[] = ['owner', 'fabricator'];
+/** Customers see the sheet and photos of their own projects only (the projects service scopes them). */
+export const MEASUREMENT_PHOTO_READERS: Role[] = ALL_ROLES;
+export const MEASUREMENT_PHOTO_ADDERS: Role[] = ['owner', 'fabricator', 'customer'];
+export const MEASUREMENT_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;

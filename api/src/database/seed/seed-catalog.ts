@@ -1,7 +1,10 @@
 import { DEMO_CATALOG, DEMO_FIT_SELECTIONS, DEMO_PROJECTS, DEMO_SHOP } from '@swapwright/seed-data';
+import { generateMeasurementTemplate } from '@swapwright/shared';
+import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In, IsNull } from 'typeorm';
 import { CATALOG_KINDS, CatalogKind } from '../../catalog/catalog-kinds';
 import { ProjectFitSelection } from '../../fit-reports/project-fit-selection.entity';
+import { MeasurementTemplate } from '../../measurements/measurement-sheet.entity';
 import { Project } from '../../projects/project.entity';
 
 export interface CatalogSeedResult {
@@ -93,6 +96,18 @@ export async function seedCatalog(dataSource: DataSource): Promise<CatalogSeedRe
         tireDiameterMm: selection.tireDiameterMm,
         axleRatio: selection.axleRatio,
         continuousPowerKw: selection.continuousPowerKw,
+        updatedById: null,
+      });
+      inserted += 1;
+    }
+    // The demo chassis come with their measurement templates (generated from the catalog figures).
+    for (const chassis of DEMO_CATALOG.chassis) {
+      if (await manager.exists(MeasurementTemplate, { where: { shopId: DEMO_SHOP.id, chassisId: chassis.spec.id } })) continue;
+      await manager.insert(MeasurementTemplate, {
+        id: randomUUID(),
+        shopId: DEMO_SHOP.id,
+        chassisId: chassis.spec.id,
+        points: generateMeasurementTemplate(chassis.spec),
         updatedById: null,
       });
       inserted += 1;

@@ -125,7 +125,28 @@ export class FitReportSummaryResponseDto {
   @ApiProperty() createdAt: string;
 }
 
+export class ChassisInputSourceDto {
+  @ApiProperty({ enum: ['sheet', 'catalog'] }) kind: 'sheet' | 'catalog';
+  @ApiPropertyOptional() measuredBy?: string;
+  @ApiPropertyOptional() measuredAt?: string;
+}
+
+export class ChassisInputDto {
+  @ApiProperty() pointId: string;
+  @ApiProperty() label: string;
+  @ApiProperty() field: string;
+  @ApiProperty({ enum: ['mm', 'deg'] }) unit: 'mm' | 'deg';
+  @ApiProperty({ type: Number, nullable: true }) catalogValue: number | null;
+  @ApiProperty({ type: Number, nullable: true }) measuredValue: number | null;
+  @ApiProperty({ type: Number, nullable: true }) deviation: number | null;
+  @ApiProperty() flagged: boolean;
+  @ApiProperty({ type: ChassisInputSourceDto }) source: ChassisInputSourceDto;
+  @ApiProperty({ type: [String], description: 'Fit checks that read this input.' }) checks: string[];
+}
+
 export class FitReportInputsResponseDto {
+  @ApiPropertyOptional({ type: [ChassisInputDto], description: 'Chassis inputs governed by measurement points and their source.' })
+  chassisInputs?: ChassisInputDto[];
   @ApiProperty({ type: FitSpecDto }) spec: FitSpecDto;
   @ApiProperty({ type: FitSettingsOverridesDto }) settingsOverrides: FitSettingsOverridesDto;
   @ApiProperty({ enum: PLACEMENT_SOURCES }) placementSource: PlacementSource;

@@ -1,0 +1,33 @@
+import { AppError } from '../common/errors/app-error';
+import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_REQUEST } from './photo-limits';
+
+export const MeasurementErrors = {
+  noChassis: () =>
+    new AppError(409, 'measurement_no_chassis', 'Choose the chassis model of the project first: the measurement points come from it.'),
+  unknownPoint: (pointId: string) =>
+    new AppError(404, 'measurement_point_not_found', `"${pointId}" is not a point of this chassis's measurement template.`),
+  badValue: (message: string) => new AppError(400, 'validation_failed', message, [message]),
+  reasonRequired: () =>
+    new AppError(409, 'measurement_reason_required', 'The sheet is signed off: say why the value changes (reason) to change it.'),
+  incomplete: (labels: string[]) =>
+    new AppError(409, 'measurement_sheet_incomplete', `Measure these points before signing off: ${labels.join('; ')}.`, labels),
+  alreadySignedOff: () => new AppError(409, 'measurement_sheet_signed_off', 'The sheet is already signed off.'),
+  photoNotFound: () => new AppError(404, 'photo_not_found', 'That photo does not exist in your shop.'),
+  photoNoFiles: () => new AppError(400, 'photo_missing', 'Attach at least one photo (field "photos").'),
+  photoEmpty: (name: string) => new AppError(400, 'photo_empty', `"${safeName(name)}" is empty (0 bytes): take the photo again.`),
+  photoNotImage: (name: string) =>
+    new AppError(415, 'photo_not_image', `"${safeName(name)}" is not a JPEG, PNG or WebP photo (its content was read, not its name).`),
+  photoTruncated: (name: string) =>
+    new AppError(400, 'photo_truncated', `"${safeName(name)}" is cut short (the upload did not finish): send it again.`),
+  photoTooManyPixels: (name: string, width: number, height: number) =>
+    new AppError(400, 'photo_too_many_pixels', `"${safeName(name)}" is ${width} × ${height} pixels; send a photo of at most 100 megapixels.`),
+  photoForbidden: () => new AppError(403, 'forbidden', 'Only the person who added a photo or the shop owner may delete it.'),
+  photoNotPending: () => new AppError(409, 'photo_not_pending', 'Only a photo a customer added waits to be accepted.'),
+  limits: () => `Up to ${MAX_PHOTOS_PER_REQUEST} photos of at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB each per upload.`,
+};
+
+/** A client's file name, echoed in a message only: no path, no control characters, bounded. */
+function safeName(name: string): string {
+  const base = String(name ?? '').split(/[\\/]/).pop() ?? '';
+  return base.replace(/[^\w .()-]/g, '_').slice(0, 80) || 'photo';
+}

@@ -1,0 +1,209 @@
+import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
+import exifr from 'exifr';
+import { readdir, readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const piexif = require('piexifjs');
+import { OTHER_SHOP } from './fixtures/other-shop.fixture';
+import { bearer, countRows, Session, signIn, startSignedInApp, TestApp } from './helpers/test-app';
+import { makeJpeg, makePng, makeWebp, pngTextChunk } from './helpers/test-images';
+import { seedCatalog } from '../src/database/seed/seed-catalog';
+import { MAX_PHOTO_BYTES } from '../src/measurements/photo-limits';
+
+const PROJECT = DEMO_PROJECT_IDS.ridgeback;
+const OTHER_CUSTOMERS_PROJECT = DEMO_PROJECT_IDS.stag;
+const SHEET = `/api/projects/${PROJECT}/measurement-sheet`;
+
+/** A JPEG carrying a GPS position, written with piexifjs (binary strings, JPEG only). */
+function jpegWithGps(): Buffer {
+  const gps = {
+    [piexif.GPSIFD.GPSLatitudeRef]: 'N',
+    [piexif.GPSIFD.GPSLatitude]: [[51, 1], [30, 1], [0, 1]],
+    [piexif.GPSIFD.GPSLongitudeRef]: 'W',
+    [piexif.GPSIFD.GPSLongitude]: [[0, 1], [7, 1], [0, 1]],
+  };
+  const exif = piexif.dump({ '0th': {}, Exif: {}, GPS: gps });
+  return Buffer.from(piexif.insert(exif, makeJpeg(64, 48).toString('binary')), 'binary');
+}
+
+describe('measurement sheets and photos', () => {
+  let t: TestApp;
+  let s: Record<'owner' | 'estimator' | 'fabricator' | 'counter' | 'customer', Session>;
+  const uploadDir = () => join(process.env.UPLOAD_DIR!, 'measurement-photos');
+  const storedFiles = async (): Promise<string[]> => readdir(uploadDir()).catch(() => []);
+
+  beforeAll(async () => {
+    ({ t, s } = await startSignedInApp());
+    await seedCatalog(t.dataSource);
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  const setValue = (who: Session, pointId: string, body: object) => t.http.put(`${SHEET}/values/${pointId}`).set(...bearer(who)).send(body);
+  const upload = (who: Session, files: Array<{ data: Buffer; name: string }>, projectId: string = PROJECT) => {
+    const req = t.http.post(`/api/projects/${projectId}/measurement-sheet/photos`).set(...bearer(who));
+    for (const file of files) req.attach('photos', file.data, file.name);
+    return req;
+  };
+
+  it('the demo chassis comes with its template; the sheet lists what is missing', async () => {
+    const res = await t.http.get(SHEET).set(...bearer(s.fabricator)).expect(200);
+    expect(res.body.points.map((p: { id: string }) => p.id)).toContain('front-crossmember.top');
+    expect(res.body.missing).toContain('front-crossmember.top');
+    expect(res.body.signedOffAt).toBeNull();
+  });
+
+  it('12 1/2", 12.5 in and 317.5 mm store the same value; history keeps who, old and new', async () => {
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly.
+    for (const value of ['12 1/2"', '12.5 in', '317.5 mm']) {
+      const res = await setValue(s.fabricator, 'pinion.height', { value }).expect(200);
+      expect(res.body.values.find((v: { pointId: string }) => v.pointId === 'pinion.height').value).toBe(317.5);
+    }
+    const res = await setValue(s.fabricator, 'pinion.height', { value: '370', unit: 'mm', tolerance: '1/8"', note: 'yoke centre' }).expect(200);
+    const value = res.body.values.find((v: { pointId: string }) => v.pointId === 'pinion.height');
+    expect(value).toMatchObject({ value: 370, tolerance: 3.18, note: 'yoke centre', measuredBy: s.fabricator.user.name });
+    const history = res.body.history.filter((e: { pointId: string }) => e.pointId === 'pinion.height');
+    expect(history).toHaveLength(4);
+    expect(history[0]).toMatchObject({ oldValue: 317.5, newValue: 370, by: s.fabricator.user.name });
+    expect(history[3]).toMatchObject({ oldValue: null, newValue: 317.5 });
+  });
+
+  it('refuses what it cannot read, an unknown point, and roles that may not write', async () => {
+    expect((await setValue(s.fabricator, 'pinion.height', { value: 'abc' }).expect(400)).body.message).toMatch(/not a length/);
+    await setValue(s.fabricator, 'pinion.angle', { value: '3 in' }).expect(400);
+    await setValue(s.fabricator, 'no-such-point', { value: '3' }).expect(404);
+    await setValue(s.estimator, 'pinion.height', { value: '370' }).expect(403);
+    await setValue(s.customer, 'pinion.height', { value: '370' }).expect(403);
+    await t.http.get(SHEET).set(...bearer(s.estimator)).expect(200);
+  });
+
+  it('sign-off needs every required point; afterwards a change needs a reason, and both are logged', async () => {
+    const incomplete = await t.http.post(`${SHEET}/sign-off`).set(...bearer(s.fabricator)).expect(409);
+    expect(incomplete.body.code).toBe('measurement_sheet_incomplete');
+    const sheet = await t.http.get(SHEET).set(...bearer(s.fabricator)).expect(200);
+    for (const id of sheet.body.missing as string[]) {
+      const point = sheet.body.points.find((p: { id: string }) => p.id === id);
+      await setValue(s.fabricator, id, { value: String(point.catalogValue) }).expect(200);
+    }
+    const signed = await t.http.post(`${SHEET}/sign-off`).set(...bearer(s.fabricator)).expect(200);
+    expect(signed.body.signedOffAt).not.toBeNull();
+    expect(signed.body.missing).toEqual([]);
+    const refused = await setValue(s.fabricator, 'pinion.height', { value: '372' }).expect(409);
+    expect(refused.body.code).toBe('measurement_reason_required');
+    const changed = await setValue(s.fabricator, 'pinion.height', { value: '372', reason: 'Re-measured with the truck on the lift pads removed' }).expect(200);
+    expect(changed.body.history[0]).toMatchObject({ kind: 'value', oldValue: 370, newValue: 372, reason: 'Re-measured with the truck on the lift pads removed' });
+    expect(changed.body.history.some((e: { kind: string }) => e.kind === 'sign-off')).toBe(true);
+  });
+
+  it('fit link: the crossmember measured 20 mm lower moves the sump-to-crossmember result by 20 mm, named as from the sheet', async () => {
+    const run = async () => (await t.http.post(`/api/projects/${PROJECT}/fit-reports`).set(...bearer(s.estimator)).expect(201)).body;
+    await setValue(s.fabricator, 'front-crossmember.top', { value: '355 mm', reason: 'catalog figure confirmed' }).expect(200);
+    const before = await run();
+    // Derived: the catalog top is 355 mm; read 335 mm (ride height as catalog): the outline moves down 20 mm and the
+    // pan-to-crossmember gap (vertical where the pan's flat floor sits over the flat top) grows by 20 mm.
+    await setValue(s.fabricator, 'front-crossmember.top', { value: '335 mm', reason: 'crossmember sits lower than the book' }).expect(200);
+    const after = await run();
+    const gap = (report: { report: { findings: Array<{ checkId: string; measured: number | null }> } }) =>
+      report.report.findings.find((f) => f.checkId === 'envelope.sump-crossmember')!.measured!;
+    // Each reported figure is rounded to 0.1 mm, so the difference is 20 within 0.1.
+    expect(Math.abs(gap(after) - gap(before) - 20)).toBeLessThanOrEqual(0.1 + 1e-9);
+    const input = after.inputs.chassisInputs.find((i: { pointId: string }) => i.pointId === 'front-crossmember.top');
+    expect(input).toMatchObject({ source: { kind: 'sheet', measuredBy: s.fabricator.user.name }, measuredValue: 335, deviation: -20, flagged: true });
+    expect(input.checks).toContain('envelope.sump-crossmember');
+    expect(after.inputs.notes.join(' ')).toMatch(/from the measurement sheet/);
+  });
+
+  it('accepts JPEG, PNG and WebP by content and serves them with the right type and nosniff', async () => {
+    const res = await upload(s.fabricator, [
+      { data: makeJpeg(64, 48), name: 'crossmember.jpg' },
+      { data: makePng(40, 30), name: 'rails.png' },
+      { data: makeWebp(20, 10), name: 'pinion.webp' },
+    ]).expect(201);
+    expect(res.body.map((p: { contentType: string; widthPx: number; heightPx: number }) => [p.contentType, p.widthPx, p.heightPx])).toEqual([
+      ['image/jpeg', 64, 48],
+      ['image/png', 40, 30],
+      ['image/webp', 20, 10],
+    ]);
+    const file = await t.http.get(res.body[1].url).set(...bearer(s.customer)).expect(200);
+    expect(file.headers['content-type']).toBe('image/png');
+    expect(file.headers['x-content-type-options']).toBe('nosniff');
+    // Generated names only.
+    expect((await storedFiles()).every((name) => /^[0-9a-f-]{36}\.(jpg|png|webp)$/.test(name))).toBe(true);
+  });
+
+  it('refuses a renamed non-image, truncated, empty, over-size, too many and absurd pixel counts; nothing stored', async () => {
+    const filesBefore = (await storedFiles()).length;
+    const rowsBefore = await countRows(t.dataSource, 'measurement_photos');
+    const pdf = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
+    const jpeg = makeJpeg(64, 48);
+    expect((await upload(s.fabricator, [{ data: pdf, name: 'photo.jpg' }]).expect(415)).body.code).toBe('photo_not_image');
+    expect((await upload(s.fabricator, [{ data: jpeg.subarray(0, jpeg.length - 40), name: 'cut.jpg' }]).expect(400)).body.code).toBe('photo_truncated');
+    const png = makePng(40, 30);
+    expect((await upload(s.fabricator, [{ data: png.subarray(0, png.length - 20), name: 'cut.png' }]).expect(400)).body.code).toBe('photo_truncated');
+    expect((await upload(s.fabricator, [{ data: Buffer.alloc(0), name: 'empty.jpg' }])).status).toBeGreaterThanOrEqual(400);
+    await upload(s.fabricator, [{ data: Buffer.concat([jpeg, Buffer.alloc(MAX_PHOTO_BYTES)]), name: 'huge.jpg' }]).expect(413);
+    await upload(s.fabricator, Array.from({ length: 6 }, (_, i) => ({ data: makePng(4, 4), name: `p${i}.png` }))).expect(400);
+    // A header claiming 30000 × 30000 pixels (900 megapixels): a decompression trap.
+    expect((await upload(s.fabricator, [{ data: makeWebp(16000, 16000), name: 'trap.webp' }]).expect(400)).body.code).toBe('photo_too_many_pixels');
+    // A path in the client's name never reaches the disk: the file gets a generated name.
+    const traversal = await upload(s.fabricator, [{ data: makePng(8, 8), name: '../../../etc/passwd.png' }]).expect(201);
+    // One good and one bad file in the same request: neither is kept.
+    await upload(s.fabricator, [{ data: makePng(8, 8), name: 'ok.png' }, { data: pdf, name: 'bad.png' }]).expect(415);
+    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(rowsBefore + 1);
+    expect((await storedFiles()).length).toBe(filesBefore + 1);
+    await t.http.delete(`/api/measurement-photos/${traversal.body[0].id}`).set(...bearer(s.fabricator)).expect(204);
+  });
+
+  it('a JPEG with its GPS position is stored without it; PNG text and WebP EXIF/XMP are removed too', async () => {
+    const tagged = jpegWithGps();
+    // The fixture really carries a position (read back with exifr).
+    expect((await exifr.gps(tagged))?.latitude).toBeCloseTo(51.5, 6);
+    const res = await upload(s.fabricator, [
+      { data: tagged, name: 'gps.jpg' },
+      { data: makePng(10, 10, [pngTextChunk('GPSLatitude', '51.5')]), name: 'gps.png' },
+      { data: makeWebp(10, 10, { exif: Buffer.from('Exif\0\0GPSLatitude 51.5'), xmp: Buffer.from('<x:xmpmeta>GPS 51.5</x:xmpmeta>') }), name: 'gps.webp' },
+    ]).expect(201);
+    const [jpg, png, webp] = await Promise.all(
+      res.body.map(async (photo: { url: string }) => (await t.http.get(photo.url).set(...bearer(s.fabricator)).buffer(true).expect(200)).body as Buffer),
+    );
+    expect(await exifr.gps(jpg).catch(() => undefined)).toBeUndefined();
+    expect(jpg.includes(Buffer.from('Exif\0'))).toBe(false);
+    expect(png.includes(Buffer.from('GPSLatitude'))).toBe(false);
+    expect(webp.includes(Buffer.from('EXIF'))).toBe(false);
+    expect(webp.includes(Buffer.from('GPS'))).toBe(false);
+    // The stored files on disk are the stripped ones.
+    for (const name of await storedFiles()) expect((await readFile(join(uploadDir(), name))).includes(Buffer.from('GPS'))).toBe(false);
+  });
+
+  it('customers add photos to their own project (pending until a fabricator accepts or replaces them), not to others', async () => {
+    const added = await upload(s.customer, [{ data: makePng(12, 12), name: 'before-arrival.png' }]).expect(201);
+    expect(added.body[0].status).toBe('pending');
+    await upload(s.customer, [{ data: makePng(12, 12), name: 'x.png' }], OTHER_CUSTOMERS_PROJECT).expect(404);
+    await t.http.post(`/api/measurement-photos/${added.body[0].id}/accept`).set(...bearer(s.fabricator)).expect(200);
+    const second = await upload(s.customer, [{ data: makePng(12, 12), name: 'again.png' }]).expect(201);
+    const replaced = await t.http
+      .post(`${SHEET}/photos`)
+      .set(...bearer(s.fabricator))
+      .field('replacesPhotoId', second.body[0].id)
+      .attach('photos', makeJpeg(32, 32), 'better.jpg')
+      .expect(201);
+    expect(replaced.body[0].status).toBe('accepted');
+    await t.http.get(`/api/measurement-photos/${second.body[0].id}/file`).set(...bearer(s.fabricator)).expect(404);
+  });
+
+  it('another shop and an unrelated customer cannot read or delete a photo (404); only uploader or owner delete', async () => {
+    const res = await upload(s.fabricator, [{ data: makePng(8, 8), name: 'a.png' }], OTHER_CUSTOMERS_PROJECT).expect(201);
+    const url = res.body[0].url as string;
+    const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+    await t.http.get(url).set(...bearer(other)).expect(404);
+    await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(other)).expect(404);
+    // The demo customer is not this project's customer.
+    await t.http.get(url).set(...bearer(s.customer)).expect(404);
+    await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.customer)).expect(404);
+    await t.http.get(url).set(...bearer(s.counter)).expect(200);
+    await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.counter)).expect(403);
+    await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.owner)).expect(204);
+    await t.http.get(url).set(...bearer(s.fabricator)).expect(404);
+  });
+});
