@@ -22,7 +22,7 @@ export function ReportSummaryCard({ stored, shown, isPreview }: ReportSummaryCar
           <span>{isPreview ? 'Preview at the new placement' : 'Report'}</span>
           {isPreview ? <Tag color="gold">Preview, not saved</Tag> : <Tag>Stored {formatDateTime(stored.createdAt)}</Tag>}
           <Typography.Text type="secondary" style={{ fontSize: 12, fontWeight: 400 }}>
-            engine {shown.engineVersion}
+            rules v{shown.engineVersion}
           </Typography.Text>
         </Flex>
       }

@@ -86,9 +86,9 @@ describe('fit page by role', () => {
     const get = mockApi();
     renderFitPage('customer');
     await screen.findByText('Every check', undefined, { timeout: 20_000 });
-    expect(screen.getByText(/Shortfalls \(/)).toBeTruthy();
-    expect(screen.getByText('Side view')).toBeTruthy();
-    expect(screen.getByText('Front view: widths')).toBeTruthy();
+    expect(screen.getByText(/Shortfalls \(/)).toBeInTheDocument();
+    expect(screen.getByText('Side view')).toBeInTheDocument();
+    expect(screen.getByText('Front view: widths')).toBeInTheDocument();
     expect(screen.queryByText('Not part of your role')).toBeNull();
     expect(screen.queryByRole('button', { name: 'Run fit check' })).toBeNull();
     expect(screen.queryByText('What goes in')).toBeNull();
@@ -102,8 +102,8 @@ describe('fit page by role', () => {
     mockApi();
     renderFitPage('estimator');
     await screen.findByText('Every check', undefined, { timeout: 20_000 });
-    expect(screen.getByRole('button', { name: 'Run fit check' })).toBeTruthy();
-    expect(screen.getByText('What goes in')).toBeTruthy();
-    await waitFor(() => expect(screen.getByRole('button', { name: 'Save placement' })).toBeTruthy());
+    expect(screen.getByRole('button', { name: 'Run fit check' })).toBeInTheDocument();
+    expect(screen.getByText('What goes in')).toBeInTheDocument();
+    await waitFor(() => expect(screen.getByRole('button', { name: 'Save placement' })).toBeInTheDocument());
   });
 });
