@@ -1,4 +1,4 @@
-import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
+import { DEMO_CATALOG_IDS, DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS } from '@swapwright/seed-data';
 import exifr from 'exifr';
 import { readdir, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
@@ -47,8 +47,13 @@ describe('measurement sheets and photos', () => {
     return req;
   };
 
-  it('the demo chassis comes with its template; the sheet lists what is missing', async () => {
+  it('the demo chassis comes with its template; the demo sheet is started and lists what is missing', async () => {
     const res = await t.http.get(SHEET).set(...bearer(s.fabricator)).expect(200);
+    const measured = res.body.values.map((v: { pointId: string }) => v.pointId);
+    expect(measured).toEqual(expect.arrayContaining(['ride-height.front-left', 'front-crossmember.bottom', 'mount-pad.spacing']));
+    expect(res.body.values.every((v: { flagged: boolean }) => !v.flagged)).toBe(true);
+    expect(res.body.history).toHaveLength(measured.length);
+    expect(res.body.missing).toEqual(['front-crossmember.top', 'pinion.height', 'pinion.angle']);
     expect(res.body.points.map((p: { id: string }) => p.id)).toContain('front-crossmember.top');
     expect(res.body.missing).toContain('front-crossmember.top');
     expect(res.body.signedOffAt).toBeNull();
@@ -205,5 +210,118 @@ describe('measurement sheets and photos', () => {
     await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.counter)).expect(403);
     await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.owner)).expect(204);
     await t.http.get(url).set(...bearer(s.fabricator)).expect(404);
+  });
+});
+
+describe('measurement templates, settings and a project without a catalog chassis', () => {
+  let t: TestApp;
+  let s: Record<'owner' | 'estimator' | 'fabricator' | 'counter' | 'customer', Session>;
+  const STAG = DEMO_PROJECT_IDS.stag;
+  const STAG_TEMPLATE = `/api/chassis/${DEMO_CATALOG_IDS.chassis.stag84}/measurement-template`;
+  const stagValue = (pointId: string, value: string) =>
+    t.http.put(`/api/projects/${STAG}/measurement-sheet/values/${pointId}`).set(...bearer(s.fabricator)).send({ value });
+  /** A template point as the PUT takes it (the response adds the view, unit and reference). */
+  const editable = ({ view: _v, unit: _u, reference: _r, ...point }: Record<string, unknown>) => point;
+
+  beforeAll(async () => {
+    ({ t, s } = await startSignedInApp());
+    await seedCatalog(t.dataSource);
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it('the fabricator edits a template; a crossmember the catalog lacks is described by the sheet alone', async () => {
+    const template = (await t.http.get(STAG_TEMPLATE).set(...bearer(s.estimator)).expect(200)).body;
+    const aux = (kind: string, suffix: string, label: string, atX?: number) => ({
+      id: `aux-crossmember.${suffix}`,
+      kind,
+      target: 'aux-crossmember',
+      label: `Added crossmember: ${label}`,
+      howTo: 'The crossmember a previous owner welded in under the sump.',
+      catalogValue: null,
+      required: true,
+      ...(atX !== undefined && { atX }),
+    });
+    const extra = [
+      aux('obstacle-top', 'top', 'top', 1200),
+      aux('obstacle-bottom', 'bottom', 'bottom', 1200),
+      aux('obstacle-front-face', 'front-face', 'front face'),
+      aux('obstacle-rear-face', 'rear-face', 'rear face'),
+    ];
+    const points = [...template.points.map(editable), ...extra];
+    points[0] = { ...points[0], label: 'Ride height, front left (at the spring hanger)' };
+
+    await t.http.put(STAG_TEMPLATE).set(...bearer(s.estimator)).send({ points }).expect(403);
+    const twice = await t.http.put(STAG_TEMPLATE).set(...bearer(s.fabricator)).send({ points: [...points, extra[0]] }).expect(400);
+    expect(twice.body.message).toMatch(/appears twice/);
+    await t.http.put(STAG_TEMPLATE).set(...bearer(s.fabricator)).send({ points: [{ ...extra[0], kind: 'tape-guess' }] }).expect(400);
+    const unknown = `/api/chassis/${'0'.repeat(8)}-0000-4000-8000-${'0'.repeat(12)}/measurement-template`;
+    expect((await t.http.get(unknown).set(...bearer(s.fabricator)).expect(404)).body.code).toBe('measurement_chassis_not_found');
+    await t.http.put(unknown).set(...bearer(s.fabricator)).send({ points }).expect(404);
+
+    const saved = await t.http.put(STAG_TEMPLATE).set(...bearer(s.fabricator)).send({ points }).expect(200);
+    expect(saved.body.points).toHaveLength(template.points.length + 4);
+    const sheet = (await t.http.get(`/api/projects/${STAG}/measurement-sheet`).set(...bearer(s.fabricator)).expect(200)).body;
+    expect(sheet.points[0].label).toBe('Ride height, front left (at the spring hanger)');
+    expect(sheet.missing).toEqual(expect.arrayContaining(extra.map((p) => p.id)));
+
+    for (const [id, value] of [
+      ['aux-crossmember.top', '380 mm'],
+      ['aux-crossmember.bottom', '300 mm'],
+      ['aux-crossmember.front-face', '1150 mm'],
+      ['aux-crossmember.rear-face', '1250 mm'],
+    ]) await stagValue(id, value).expect(200);
+    const report = (await t.http.post(`/api/projects/${STAG}/fit-reports`).set(...bearer(s.estimator)).expect(201)).body;
+    // Derived by hand: no ride height is measured on this sheet, so the floor is the catalog ground (z 0) and each
+    // floor reading is the frame z; the faces are x behind the front axle line. The box is the four faces' rectangle.
+    const box = report.inputs.spec.chassis.obstacles.find((o: { id: string }) => o.id === 'aux-crossmember');
+    expect(box).toMatchObject({ kind: 'crossmember', outline: [{ x: 1150, z: 300 }, { x: 1250, z: 300 }, { x: 1250, z: 380 }, { x: 1150, z: 380 }] });
+    const top = report.inputs.chassisInputs.find((i: { pointId: string }) => i.pointId === 'aux-crossmember.top');
+    expect(top).toMatchObject({ source: { kind: 'sheet', measuredBy: s.fabricator.user.name }, catalogValue: null, measuredValue: 380, deviation: null, flagged: false });
+  });
+
+  it('the shop sets how far from the catalog a reading is flagged (owner only, within sane bounds)', async () => {
+    const SETTINGS = '/api/measurement-settings';
+    // Common practice (no published source): 15 mm and 1° by default.
+    expect((await t.http.get(SETTINGS).set(...bearer(s.counter)).expect(200)).body).toEqual({ deviationLimitMm: 15, deviationLimitDeg: 1 });
+    await t.http.get(SETTINGS).set(...bearer(s.customer)).expect(403);
+    await t.http.put(SETTINGS).set(...bearer(s.fabricator)).send({ deviationLimitMm: 5, deviationLimitDeg: 0.5 }).expect(403);
+    await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 0, deviationLimitDeg: 0.5 }).expect(400);
+    await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5 }).expect(400);
+    await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5, deviationLimitDeg: 0.5, extra: 1 }).expect(400);
+
+    const angle = (await t.http.get(`/api/projects/${STAG}/measurement-sheet`).set(...bearer(s.fabricator)).expect(200)).body.points.find(
+      (p: { id: string }) => p.id === 'pinion.angle',
+    );
+    const flaggedNow = async () =>
+      (await t.http.get(`/api/projects/${STAG}/measurement-sheet`).set(...bearer(s.fabricator)).expect(200)).body.values.find(
+        (v: { pointId: string }) => v.pointId === 'pinion.angle',
+      ).flagged;
+    // 0.8° off the catalog: within the default 1°, beyond a limit of 0.5°.
+    await stagValue('pinion.angle', String(angle.catalogValue + 0.8)).expect(200);
+    expect(await flaggedNow()).toBe(false);
+    expect((await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5, deviationLimitDeg: 0.5 }).expect(200)).body).toEqual({
+      deviationLimitMm: 5,
+      deviationLimitDeg: 0.5,
+    });
+    expect(await flaggedNow()).toBe(true);
+    expect((await t.http.get(SETTINGS).set(...bearer(s.estimator)).expect(200)).body).toEqual({ deviationLimitMm: 5, deviationLimitDeg: 0.5 });
+  });
+
+  it('a project whose chassis is not chosen from the catalog: the sheet is empty and a reading is refused with what to do', async () => {
+    const created = await t.http
+      .post('/api/projects')
+      .set(...bearer(s.estimator))
+      .send({ customerId: DEMO_CUSTOMER_IDS.juno, title: 'Bare frame build, chassis not in the catalog' })
+      .expect(201);
+    const sheetPath = `/api/projects/${created.body.id}/measurement-sheet`;
+    const sheet = (await t.http.get(sheetPath).set(...bearer(s.fabricator)).expect(200)).body;
+    expect(sheet).toMatchObject({ chassisId: null, points: [], values: [], missing: [], signedOffAt: null, ground: null });
+    const refused = await t.http.put(`${sheetPath}/values/pinion.height`).set(...bearer(s.fabricator)).send({ value: '370 mm' }).expect(409);
+    expect(refused.body).toMatchObject({ code: 'measurement_no_chassis', message: expect.stringMatching(/Choose the chassis model/) });
+    expect((await t.http.post(`${sheetPath}/sign-off`).set(...bearer(s.fabricator)).expect(409)).body.code).toBe('measurement_no_chassis');
+    // Photos can come before the chassis is chosen (a customer's pictures before the truck arrives).
+    await t.http.post(`${sheetPath}/photos`).set(...bearer(s.customer)).attach('photos', makePng(8, 8), 'frame.png').expect(201);
   });
 });

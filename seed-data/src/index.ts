@@ -4,3 +4,4 @@ export * from './demo-customers';
 export * from './demo-projects';
 export * from './catalog';
 export * from './demo-labor-operations';
+export * from './demo-measurements';

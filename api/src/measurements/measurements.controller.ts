@@ -122,7 +122,7 @@ export class MeasurementsController {
   @Roles(...MEASUREMENT_READERS)
   @ApiOkResponse({ type: MeasurementTemplateResponseDto })
   async template(@CurrentUser() user: AuthUser, @Param('chassisId', ParseIdPipe) chassisId: string): Promise<MeasurementTemplateResponseDto> {
-    return { chassisId, points: (await this.measurements.template(user, chassisId)).map(mapMeasurementPoint) };
+    return { chassisId, points: (await this.measurements.chassisTemplate(user, chassisId)).map(mapMeasurementPoint) };
   }
 
   @Put('chassis/:chassisId/measurement-template')

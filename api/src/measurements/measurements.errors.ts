@@ -4,6 +4,8 @@ import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_REQUEST } from './photo-limits';
 export const MeasurementErrors = {
   noChassis: () =>
     new AppError(409, 'measurement_no_chassis', 'Choose the chassis model of the project first: the measurement points come from it.'),
+  chassisNotFound: () =>
+    new AppError(404, 'measurement_chassis_not_found', "That chassis model is not in your shop's catalog: pick one from the catalog's chassis list."),
   unknownPoint: (pointId: string) =>
     new AppError(404, 'measurement_point_not_found', `"${pointId}" is not a point of this chassis's measurement template.`),
   badValue: (message: string) => new AppError(400, 'validation_failed', message, [message]),

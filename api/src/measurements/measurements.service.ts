@@ -62,18 +62,26 @@ export class MeasurementsService {
     private readonly storage: PhotoStorage,
   ) {}
 
-  /** The chassis model's points: the shop's edited template, else generated from the catalog chassis. */
-  async template(user: Shop, chassisId: string): Promise<MeasurementPoint[]> {
+  /**
+   * The chassis model's points: the shop's edited template, else generated from the catalog chassis. A chassis id
+   * that is not in the catalog is `notFound` (a project whose chassis is gone: choose one first).
+   */
+  async template(user: Shop, chassisId: string, notFound: () => Error = MeasurementErrors.noChassis): Promise<MeasurementPoint[]> {
     const stored = await this.templates.findOne({ where: { shopId: user.shopId, chassisId } });
     if (stored) return stored.points;
     const chassis = await this.catalog.findSpec<ChassisSpec>('chassis', user, chassisId);
-    if (!chassis) throw MeasurementErrors.noChassis();
+    if (!chassis) throw notFound();
     return generateMeasurementTemplate(chassis);
+  }
+
+  /** A catalog chassis model's template (404 when the chassis is not in the shop's catalog). */
+  chassisTemplate(user: Shop, chassisId: string): Promise<MeasurementPoint[]> {
+    return this.template(user, chassisId, MeasurementErrors.chassisNotFound);
   }
 
   async putTemplate(user: AuthUser, chassisId: string, points: MeasurementPoint[]): Promise<MeasurementPoint[]> {
     const chassis = await this.catalog.findSpec<ChassisSpec>('chassis', user, chassisId);
-    if (!chassis) throw MeasurementErrors.noChassis();
+    if (!chassis) throw MeasurementErrors.chassisNotFound();
     const ids = new Set<string>();
     for (const point of points) {
       if (ids.has(point.id)) throw MeasurementErrors.badValue(`Point id "${point.id}" appears twice.`);
