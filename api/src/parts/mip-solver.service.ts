@@ -1,4 +1,4 @@
-import { Injectable, OnModuleDestroy } from '@nestjs/common';
+import { Injectable, OnApplicationBootstrap, OnModuleDestroy } from '@nestjs/common';
 import type { MipSolution, MipSolverOptions } from '@swapwright/shared';
 import { Worker } from 'node:worker_threads';
 
@@ -21,7 +21,7 @@ parentPort.on('message', async ({ id, lp, options }) => {
 
 /** Runs the MIP solver (highs, synchronous) in a worker thread so the API keeps answering while it works. */
 @Injectable()
-export class MipSolverService implements OnModuleDestroy {
+export class MipSolverService implements OnApplicationBootstrap, OnModuleDestroy {
   private worker: Worker | null = null;
   private nextId = 0;
   private readonly pending = new Map<number, { resolve: (s: MipSolution) => void; reject: (e: Error) => void }>();
@@ -55,6 +55,11 @@ export class MipSolverService implements OnModuleDestroy {
       this.pending.set(id, { resolve, reject });
       worker.postMessage({ id, lp, options });
     });
+  }
+
+  /** Keeps the worker warm: the solver is loaded and compiled before the first plan asks for it. */
+  onApplicationBootstrap(): void {
+    this.solve('Minimize\n obj: x\nSubject To\n r0: x >= 0\nBinary\n x\nEnd', { output_flag: false }).catch(() => undefined);
   }
 
   async onModuleDestroy(): Promise<void> {

@@ -119,8 +119,12 @@ export interface PlanModel {
   rows: PlanRow[];
   /** Why a part was left out before solving (unary rules, stock, supersession, missing requirements). */
   filtered: Map<string, string>;
-  /** Dominated duplicates: a cheaper part with the same fit in the same slot. */
+  /** Parts that agree with no part the plan can use in a slot they must agree with. */
+  disagreeing: Map<string, string>;
+  /** Dominated parts: another part of the slot fits at least as well for no more. */
   dominated: Map<string, string>;
+  /** Every catalog part by category (for explanations). */
+  byCategory: Map<string, PlanPart[]>;
   shortfalls: ResolvableShortfall[];
   /** Shortfalls the shop wants resolved that no catalog part or operation can resolve. */
   hopeless: Array<{ shortfall: PlanShortfall; partRemedies: PartRemedy[]; reason: string }>;
@@ -198,6 +202,14 @@ export function describeRemedyNeed(remedy: PartRemedy): string {
   return `${PART_CATEGORY_LABELS[remedy.category]}${figures.length > 0 ? ` with ${figures.join(', ')}` : ''}`;
 }
 
+/** Attribute values as `name value` pairs, lists joined with slashes. */
+export function describeAttributes(attributes: PartAttributes, names: string[]): string {
+  return names
+    .filter((name) => attributes[name] !== undefined)
+    .map((name) => `${name} ${Array.isArray(attributes[name]) ? (attributes[name] as string[]).join('/') : String(attributes[name])}`)
+    .join(', ');
+}
+
 function fittedWithEngineDipstick(input: PlanInput): Partial<Record<PlanSlot, FittedPart>> {
   const fitted = { ...input.fitted };
   if (!fitted.dipstick) fitted.dipstick = { name: `the engine's ${input.engine.dipstickLocation} dipstick`, attributes: { location: input.engine.dipstickLocation } };
@@ -217,10 +229,7 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
   const fitted = fittedWithEngineDipstick(input);
   const filtered = new Map<string, string>();
   const dominated = new Map<string, string>();
-
-  // Supersession: a replaced SKU is not offered while the part that replaces it is in the catalog.
-  const replacedBy = new Map<string, PlanPart>();
-  for (const part of input.parts) for (const sku of part.replaces) replacedBy.set(sku, part);
+  const disagreeing = new Map<string, string>();
 
   const remediesOf = (s: PlanShortfall) => ({
     parts: s.remedies.filter((r): r is PartRemedy => r.kind === 'part'),
@@ -241,64 +250,75 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     }
   }
 
+  // One pass over the catalog: SKUs, supersession, which SKUs the rules name, and the parts by category.
+  const bySku = new Map<string, PlanPart>();
+  const replacedBy = new Map<string, PlanPart>();
+  const requiredSkus = new Set<string>();
+  const excludedSkus = new Set<string>();
+  const byCategory = new Map<string, PlanPart[]>();
+  for (const part of input.parts) {
+    if (part.replaces.length > 0) for (const sku of part.replaces) replacedBy.set(sku, part);
+    if (part.requires.length > 0) for (const sku of part.requires) requiredSkus.add(sku);
+    if (part.excludes.length > 0) for (const sku of part.excludes) excludedSkus.add(sku);
+    const same = byCategory.get(part.category);
+    if (same) same.push(part);
+    else byCategory.set(part.category, [part]);
+  }
+  // Only the SKUs a rule names are ever looked up.
+  if (requiredSkus.size > 0) for (const part of input.parts) if (requiredSkus.has(part.sku)) bySku.set(part.sku, part);
+
   const fittedSpecIds = new Set(Object.values(fitted).map((f) => f?.fitSpecId).filter((id): id is string => !!id));
   const eligible = new Map<string, PlanPart>();
-  for (const part of input.parts) {
-    const slot = isPlanSlot(part.category) ? part.category : null;
-    if (slot ? !inPlay.has(slot) : !remedyCategories.has(part.category)) continue;
-    if (slot && part.fitSpecId && fittedSpecIds.has(part.fitSpecId) && fitted[slot]?.fitSpecId === part.fitSpecId) {
-      filtered.set(part.id, 'already fitted: kept at no cost');
-      continue;
-    }
+  // Supersession, the rules a part must meet on its own, and stock: why a part cannot be used at all.
+  const ruleOrStockRefusal = (part: PlanPart, slot: PlanSlot | null): string | null =>
+    unaryRefusal(input, slot, part.attributes, fuel) ?? (input.objective === 'in-stock' && part.available < 1 ? 'not in stock now' : null);
+  const ownRefusal = (part: PlanPart, slot: PlanSlot | null): string | null => {
     const superseding = replacedBy.get(part.sku);
-    if (superseding && superseding.id !== part.id) {
-      filtered.set(part.id, `superseded by ${superseding.sku}`);
-      continue;
+    if (superseding && superseding.id !== part.id) return `superseded by ${superseding.sku}`;
+    return ruleOrStockRefusal(part, slot);
+  };
+  for (const [category, parts] of byCategory) {
+    const slot = isPlanSlot(category) ? category : null;
+    if (slot ? !inPlay.has(slot) : !remedyCategories.has(category)) continue;
+    for (const part of parts) {
+      if (slot && part.fitSpecId && fittedSpecIds.has(part.fitSpecId) && fitted[slot]?.fitSpecId === part.fitSpecId) {
+        filtered.set(part.id, 'already fitted: kept at no cost');
+        continue;
+      }
+      const refusal = ownRefusal(part, slot);
+      if (refusal) filtered.set(part.id, refusal);
+      else eligible.set(part.id, part);
     }
-    const refusal = unaryRefusal(input, slot, part.attributes, fuel);
-    if (refusal) {
-      filtered.set(part.id, refusal);
-      continue;
-    }
-    if (input.objective === 'in-stock' && part.available < 1) {
-      filtered.set(part.id, 'not in stock now');
-      continue;
-    }
-    eligible.set(part.id, part);
   }
   // Parts that `requires` brings in, whatever their category.
-  const bySku = new Map<string, PlanPart>();
-  for (const part of input.parts) bySku.set(part.sku, part);
-  const queue = [...eligible.values()];
+  const queue = [...eligible.values()].filter((part) => part.requires.length > 0);
   while (queue.length > 0) {
     const part = queue.pop()!;
     for (const sku of part.requires) {
       const needed = bySku.get(sku);
       if (!needed || eligible.has(needed.id) || filtered.has(needed.id)) continue;
       const slot = isPlanSlot(needed.category) ? needed.category : null;
-      const refusal = unaryRefusal(input, slot, needed.attributes, fuel) ?? (input.objective === 'in-stock' && needed.available < 1 ? 'not in stock now' : null);
+      const refusal = ruleOrStockRefusal(needed, slot);
       if (refusal) {
         filtered.set(needed.id, refusal);
         continue;
       }
       if (slot) inPlay.add(slot);
       eligible.set(needed.id, needed);
-      queue.push(needed);
+      if (needed.requires.length > 0) queue.push(needed);
     }
   }
-  // A part whose every required SKU is out of the model cannot be chosen; repeat until nothing changes.
-  const keptSkus = new Set(Object.values(fitted).map((f) => f?.sku).filter((sku): sku is string => !!sku));
-  for (let changed = true; changed; ) {
-    changed = false;
-    for (const part of [...eligible.values()]) {
-      const missing = part.requires.filter((sku) => !keptSkus.has(sku) && !([...eligible.values()].some((p) => p.sku === sku)));
-      if (part.requires.length > 0 && missing.length === part.requires.length) {
-        eligible.delete(part.id);
-        const sku = part.requires[0];
-        filtered.set(part.id, `needs ${part.requires.join(' or ')}, and ${bySku.has(sku) ? `${sku} ${filtered.get(bySku.get(sku)!.id) ?? 'cannot be used'}` : `${sku} is not in the catalog`}`);
-        changed = true;
-      }
-    }
+
+  // Fitted parts the plan may keep: in play and meeting the rules on their own.
+  const keptFitted = new Map<PlanSlot, FittedPart>();
+  const refusedFitted: PlanModel['refusedFitted'] = [];
+  for (const slot of PLAN_SLOTS) {
+    const part = fitted[slot];
+    if (!part || !inPlay.has(slot)) continue;
+    const refusal = unaryRefusal(input, slot, part.attributes, fuel);
+    // A fitted part that breaks a rule must go: the slot takes exactly one replacement when the catalog has one.
+    if (refusal) refusedFitted.push({ slot, name: part.name, reason: refusal });
+    else keptFitted.set(slot, part);
   }
 
   // Which shortfalls each part resolves.
@@ -306,36 +326,88 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
   const resolvesOf = (part: PlanPart): number[] =>
     targetedInfo.flatMap((info, index) => (info.parts.some((remedy) => partMeetsRemedy(part, remedy)) ? [index] : []));
 
-  // Dominance: in a slot, of parts with the same keys, the same shortfalls and no rules, only the cheapest stays.
-  const rulesSkus = new Set<string>();
-  for (const part of input.parts) for (const sku of [...part.requires, ...part.excludes]) rulesSkus.add(sku);
-  const best = new Map<string, PlanPart>();
+  // Dominance: in a slot, among parts with the same agreement keys, a part is dropped when another costs no more,
+  // resolves every shortfall it resolves (and, for the fewest-fabrication plan, needs no more fabrication hours),
+  // and carries no rules of its own. A part another part requires always stays.
   const rate = input.laborRateCents;
   const costOf = (part: PlanPart) => part.priceCents + laborCentsOf(part.laborHours, rate);
-  const better = (a: PlanPart, b: PlanPart) => {
-    if (input.objective === 'least-fabrication') {
-      const fa = numberAttr(a.attributes, 'fabricationHours');
-      const fb = numberAttr(b.attributes, 'fabricationHours');
-      if (fa !== fb) return fa < fb;
-    }
-    return costOf(a) < costOf(b) || (costOf(a) === costOf(b) && a.sku < b.sku);
-  };
-  for (const part of [...eligible.values()]) {
+  const fabricationOf = (part: PlanPart) => (input.objective === 'least-fabrication' ? numberAttr(part.attributes, 'fabricationHours') : 0);
+  const free = (part: PlanPart) => part.requires.length === 0 && part.excludes.length === 0 && !excludedSkus.has(part.sku);
+  const groups = new Map<string, PlanPart[]>();
+  for (const part of eligible.values()) {
     const slot = isPlanSlot(part.category) ? part.category : null;
-    if (!slot || part.requires.length > 0 || part.excludes.length > 0 || rulesSkus.has(part.sku)) continue;
-    const keys = AGREEMENT_RULES.filter((rule) => rule.a === slot || rule.b === slot).map((rule) =>
-      rule.a === slot ? JSON.stringify(rule.keysA(part.attributes)) : JSON.stringify(rule.keyB(part.attributes)),
-    );
-    const signature = [slot, ...keys, resolvesOf(part).join(','), numberAttr(part.attributes, 'fabricationHours')].join('#');
-    const current = best.get(signature);
-    if (!current) best.set(signature, part);
-    else if (better(part, current)) {
-      eligible.delete(current.id);
-      dominated.set(current.id, `the same fit as ${part.sku} at a higher total`);
-      best.set(signature, part);
-    } else {
+    if (!slot) continue;
+    let signature: string = slot;
+    for (const rule of AGREEMENT_RULES) {
+      if (rule.a === slot) signature += `#${(rule.keysA(part.attributes) ?? []).join('/')}`;
+      if (rule.b === slot) signature += `#${rule.keyB(part.attributes) ?? ''}`;
+    }
+    const group = groups.get(signature);
+    if (group) group.push(part);
+    else groups.set(signature, [part]);
+  }
+  for (const group of groups.values()) {
+    if (group.length < 2) continue;
+    const ranked = group
+      .map((part) => ({ part, cost: costOf(part), fabrication: fabricationOf(part), resolves: resolvesOf(part) }))
+      .sort((a, b) => a.cost - b.cost || a.fabrication - b.fabrication || (a.part.sku < b.part.sku ? -1 : a.part.sku > b.part.sku ? 1 : 0));
+    const leaders: typeof ranked = [];
+    for (const entry of ranked) {
+      const leader = requiredSkus.has(entry.part.sku)
+        ? undefined
+        : leaders.find((l) => l.fabrication <= entry.fabrication && entry.resolves.every((s) => l.resolves.includes(s)));
+      if (leader) {
+        eligible.delete(entry.part.id);
+        dominated.set(entry.part.id, `fits no better than ${leader.part.sku}, which costs ${leader.cost < entry.cost ? 'less' : 'the same'}`);
+      } else if (free(entry.part)) {
+        leaders.push(entry);
+      }
+    }
+  }
+
+  // Prune until nothing changes: a part whose every required SKU is out of the model, and a part that agrees with
+  // no part the plan can use in a slot it must agree with (a pickup no pan takes, a pan no pickup fits), cannot be chosen.
+  const keptSkus = new Set([...keptFitted.values()].map((f) => f.sku).filter((sku): sku is string => !!sku));
+  const label = (slot: PlanSlot) => PART_CATEGORY_LABELS[slot].toLowerCase();
+  for (let changed = true; changed; ) {
+    changed = false;
+    const eligibleSkus = new Set([...eligible.values()].map((part) => part.sku));
+    for (const part of eligible.values()) {
+      if (part.requires.length === 0 || part.requires.some((sku) => keptSkus.has(sku) || eligibleSkus.has(sku))) continue;
       eligible.delete(part.id);
-      dominated.set(part.id, `the same fit as ${current.sku} at a higher total`);
+      const sku = part.requires[0];
+      filtered.set(part.id, `needs ${part.requires.join(' or ')}, and ${bySku.has(sku) ? `${sku} ${filtered.get(bySku.get(sku)!.id) ?? disagreeing.get(bySku.get(sku)!.id) ?? 'cannot be used'}` : `${sku} is not in the catalog`}`);
+      changed = true;
+    }
+    for (const rule of AGREEMENT_RULES) {
+      const aValues = new Set<string>();
+      const bValues = new Set<string>();
+      const keptA = keptFitted.get(rule.a);
+      const keptB = keptFitted.get(rule.b);
+      for (const key of keptA ? rule.keysA(keptA.attributes) ?? [] : []) aValues.add(key);
+      const keptKeyB = keptB ? rule.keyB(keptB.attributes) : null;
+      if (keptKeyB !== null) bValues.add(keptKeyB);
+      for (const part of eligible.values()) {
+        if (part.category === rule.a) for (const key of rule.keysA(part.attributes) ?? []) aValues.add(key);
+        if (part.category === rule.b) {
+          const key = rule.keyB(part.attributes);
+          if (key !== null) bValues.add(key);
+        }
+      }
+      for (const part of eligible.values()) {
+        let reason: string | null = null;
+        if (part.category === rule.b) {
+          const key = rule.keyB(part.attributes);
+          if (key !== null && !aValues.has(key)) reason = `does not agree with any ${label(rule.a)} the plan can use (${describeAttributes(part.attributes, rule.attributes)})`;
+        }
+        if (rule.newANeedsB && part.category === rule.a && (rule.keysA(part.attributes) ?? []).some((key) => !bValues.has(key))) {
+          reason = `no ${label(rule.b)} the plan can use agrees with it (${describeAttributes(part.attributes, rule.attributes)})`;
+        }
+        if (!reason) continue;
+        eligible.delete(part.id);
+        disagreeing.set(part.id, reason);
+        changed = true;
+      }
     }
   }
 
@@ -347,16 +419,7 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
   const slotColumns = new Map<PlanSlot, number[]>();
   const pushSlot = (slot: PlanSlot, index: number) => slotColumns.set(slot, [...(slotColumns.get(slot) ?? []), index]);
   const slotExactlyOne = new Set<PlanSlot>();
-  const refusedFitted: PlanModel['refusedFitted'] = [];
-  for (const slot of PLAN_SLOTS) {
-    const part = fitted[slot];
-    if (!part || !inPlay.has(slot)) continue;
-    const refusal = unaryRefusal(input, slot, part.attributes, fuel);
-    if (refusal) {
-      // A fitted part that breaks a rule must go: the slot takes exactly one replacement when the catalog has one.
-      refusedFitted.push({ slot, name: part.name, reason: refusal });
-      continue;
-    }
+  for (const [slot, part] of keptFitted) {
     pushSlot(slot, add({ kind: 'keep', slot, fitted: part, attributes: part.attributes, laborCents: 0, costCents: 0, fabricationHours: 0 }));
     slotExactlyOne.add(slot);
   }
@@ -463,12 +526,12 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     }
     const resolvers = [...new Set([...cover.filter((i) => columns[i].kind !== 'kit'), ...(cover.some((i) => columns[i].kind === 'kit') ? kitGroups.flat() : [])])];
     if (cover.length === 0) {
-      const blocked = input.parts.filter((part) => info.parts.some((remedy) => partMeetsRemedy(part, remedy)));
+      const blocked = info.parts.flatMap((remedy) => (byCategory.get(remedy.category) ?? []).filter((part) => partMeetsRemedy(part, remedy)));
       const reason =
         info.parts.length === 0 && info.fabrication.length === 0
           ? 'no part or fabrication remedy: see the placement changes in the fit report'
           : blocked.length > 0
-            ? `the catalog's candidates cannot be used: ${blocked.slice(0, 3).map((part) => `${part.sku} ${filtered.get(part.id) ?? dominated.get(part.id) ?? 'is refused by a rule'}`).join('; ')}`
+            ? `the catalog's candidates cannot be used: ${blocked.slice(0, 3).map((part) => `${part.sku} ${filtered.get(part.id) ?? disagreeing.get(part.id) ?? dominated.get(part.id) ?? 'is refused by a rule'}`).join('; ')}`
             : 'no catalog part meets it';
       hopeless.push({ shortfall: info.shortfall, partRemedies: info.parts, reason });
       return;
@@ -486,7 +549,7 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     else bound += column.costCents;
   }
   for (const value of slotMax.values()) bound += value;
-  return { columns, rows, filtered, dominated, shortfalls, hopeless, skipped, slotColumns, slotExactlyOne, penalty: bound + 1, refusedFitted };
+  return { columns, rows, filtered, disagreeing, dominated, byCategory, shortfalls, hopeless, skipped, slotColumns, slotExactlyOne, penalty: bound + 1, refusedFitted };
 }
 
 function formatTerms(terms: Array<[number, string]>): string {
@@ -503,22 +566,39 @@ function formatTerms(terms: Array<[number, string]>): string {
   return lines.join('\n ');
 }
 
+function rowLines(model: Pick<PlanModel, 'columns'>, rows: PlanRow[], from: number): string[] {
+  // Row names stay plain (r0, r1, ...): LP readers refuse some characters in names.
+  return rows.map((r, k) => ` r${from + k}: ${formatTerms(r.terms.map(([coef, i]) => [coef, model.columns[i].name]))} ${r.sense} ${r.rhs}`);
+}
+
+/** The constraint rows and the Binary section of a model as LP text, written once per model and reused by each solve. */
+const lpTextOfModel = new WeakMap<object, { rows: string; binary: string; usesZero: boolean }>();
+
+function modelText(model: Pick<PlanModel, 'columns' | 'rows'>): { rows: string; binary: string; usesZero: boolean } {
+  const cached = lpTextOfModel.get(model);
+  if (cached) return cached;
+  const names = model.columns.map((c) => c.name);
+  const binary: string[] = [];
+  for (let i = 0; i < names.length; i += 40) binary.push(` ${names.slice(i, i + 40).join(' ')}`);
+  const text = {
+    rows: rowLines(model, model.rows, 0).join('\n'),
+    binary: binary.join('\n'),
+    usesZero: model.columns.length === 0 || model.rows.some((r) => r.terms.length === 0),
+  };
+  lpTextOfModel.set(model, text);
+  return text;
+}
+
 /** The model as CPLEX LP text with a Binary section, for a MIP solver. */
 export function toLpText(model: Pick<PlanModel, 'columns' | 'rows'>, objective: number[], extraRows: PlanRow[] = []): string {
+  const text = modelText(model);
   const out: string[] = ['Minimize', ` obj: ${formatTerms(model.columns.map((c, i) => [objective[i] ?? 0, c.name]))}`, 'Subject To'];
-  const all = [...model.rows, ...extraRows];
-  let usesZero = model.columns.length === 0;
-  for (const [index, r] of all.entries()) {
-    if (r.terms.length === 0) usesZero = true;
-    // Row names stay plain (r0, r1, ...): LP readers refuse some characters in names.
-    out.push(` r${index}: ${formatTerms(r.terms.map(([coef, i]) => [coef, model.columns[i].name]))} ${r.sense} ${r.rhs}`);
-  }
+  if (text.rows) out.push(text.rows);
+  out.push(...rowLines(model, extraRows, model.rows.length));
   out.push('Bounds');
-  if (usesZero) out.push(' c_zero = 0');
+  if (text.usesZero || extraRows.some((r) => r.terms.length === 0)) out.push(' c_zero = 0');
   out.push('Binary');
-  const names = model.columns.map((c) => c.name);
-  for (let i = 0; i < names.length; i += 40) out.push(` ${names.slice(i, i + 40).join(' ')}`);
+  if (text.binary) out.push(text.binary);
   out.push('End');
   return out.join('\n');
 }
-

@@ -2,6 +2,7 @@ import { PART_CATEGORY_LABELS } from './part-categories';
 import {
   AGREEMENT_RULES,
   buildPlanModel,
+  describeAttributes,
   describeRemedyNeed,
   toLpText,
   type PlanColumn,
@@ -83,44 +84,44 @@ async function solveModel(model: PlanModel, input: PlanInput, solve: MipSolve): 
 
 const SLOT_WORD = (slot: PlanSlot | null, category: string): string => PART_CATEGORY_LABELS[(slot ?? category) as keyof typeof PART_CATEGORY_LABELS].toLowerCase();
 
-function describeValues(attributes: Record<string, unknown>, names: string[]): string {
-  return names
-    .filter((name) => attributes[name] !== undefined)
-    .map((name) => `${name} ${Array.isArray(attributes[name]) ? (attributes[name] as unknown[]).join('/') : String(attributes[name])}`)
-    .join(', ');
-}
-
 function columnLabel(column: PlanColumn): string {
   if (column.part) return `${column.part.description} (${column.part.sku})`;
   if (column.fitted) return `the fitted ${column.fitted.name}`;
   return column.operation?.operation ?? '';
 }
 
+/** How a part disagrees with a chosen part of a slot it must agree with, or null when it agrees. */
+function agreementReason(model: PlanModel, chosen: Set<number>, part: PlanPart, slot: PlanSlot | null): string | null {
+  const chosenColumns = [...chosen].map((i) => model.columns[i]);
+  for (const rule of AGREEMENT_RULES) {
+    if (rule.b === slot) {
+      const partner = chosenColumns.find((c) => c.slot === rule.a);
+      const key = rule.keyB(part.attributes);
+      if (partner && key !== null && !(rule.keysA(partner.attributes) ?? []).includes(key)) {
+        return `does not agree with ${columnLabel(partner)}: ${describeAttributes(part.attributes, rule.attributes)} against ${describeAttributes(partner.attributes, rule.attributes)}`;
+      }
+    }
+    if (rule.a === slot) {
+      const partner = chosenColumns.find((c) => c.slot === rule.b);
+      const key = partner ? rule.keyB(partner.attributes) : null;
+      if (partner && key !== null && !(rule.keysA(part.attributes) ?? []).includes(key)) {
+        return `does not agree with ${columnLabel(partner)} (${describeAttributes(part.attributes, rule.attributes)} against ${describeAttributes(partner.attributes, rule.attributes)}), and changing that as well costs more`;
+      }
+    }
+  }
+  return null;
+}
+
 /** Why a cheaper part was not chosen, judged against the plan that was. */
 function rejectionReason(model: PlanModel, chosen: Set<number>, part: PlanPart, pick: PlanColumn, pickResolves: number[]): string {
   const filtered = model.filtered.get(part.id) ?? model.dominated.get(part.id);
   if (filtered) return filtered;
-  const slot = pick.slot;
+  const disagreeing = model.disagreeing.get(part.id);
+  if (disagreeing) return agreementReason(model, chosen, part, pick.slot) ?? disagreeing;
   const missed = pickResolves.filter((s) => !model.shortfalls[s].resolvers.some((i) => model.columns[i].part?.id === part.id));
   if (missed.length > 0) return `does not resolve ${model.shortfalls[missed[0]].shortfall.title.toLowerCase()}`;
-  for (const rule of AGREEMENT_RULES) {
-    if (rule.b === slot) {
-      const partner = [...chosen].map((i) => model.columns[i]).find((c) => c.slot === rule.a);
-      if (!partner) continue;
-      const key = rule.keyB(part.attributes);
-      if (key !== null && !(rule.keysA(partner.attributes) ?? []).includes(key)) {
-        return `does not agree with ${columnLabel(partner)}: ${describeValues(part.attributes, rule.attributes)} against ${describeValues(partner.attributes, rule.attributes)}`;
-      }
-    }
-    if (rule.a === slot) {
-      const partner = [...chosen].map((i) => model.columns[i]).find((c) => c.slot === rule.b);
-      if (!partner) continue;
-      const key = rule.keyB(partner.attributes);
-      if (key !== null && !(rule.keysA(part.attributes) ?? []).includes(key)) {
-        return `does not agree with ${columnLabel(partner)} (${describeValues(part.attributes, rule.attributes)} against ${describeValues(partner.attributes, rule.attributes)}), and changing that as well costs more`;
-      }
-    }
-  }
+  const disagreement = agreementReason(model, chosen, part, pick.slot);
+  if (disagreement) return disagreement;
   const chosenSkus = new Set([...chosen].map((i) => model.columns[i].part?.sku ?? model.columns[i].fitted?.sku).filter((s): s is string => !!s));
   const clash = part.excludes.find((sku) => chosenSkus.has(sku));
   if (clash) return `cannot be used with ${clash}`;
@@ -165,16 +166,16 @@ function explainPlan(model: PlanModel, input: PlanInput, chosen: Set<number>): O
       if (rule.b !== column.slot) continue;
       const partner = [...chosen].map((i) => model.columns[i]).find((c) => c.slot === rule.a);
       if (partner?.kind === 'part') {
-        broughtInBy.push(`agrees with the chosen ${SLOT_WORD(rule.a, rule.a)} ${partner.part!.sku} (${describeValues(partner.attributes, rule.attributes)})`);
+        broughtInBy.push(`agrees with the chosen ${SLOT_WORD(rule.a, rule.a)} ${partner.part!.sku} (${describeAttributes(partner.attributes, rule.attributes)})`);
       } else if (partner?.kind === 'keep' && resolvesIdx.length === 0) {
-        broughtInBy.push(`agrees with ${columnLabel(partner)} (${describeValues(partner.attributes, rule.attributes)})`);
+        broughtInBy.push(`agrees with ${columnLabel(partner)} (${describeAttributes(partner.attributes, rule.attributes)})`);
       }
     }
     for (const other of chosenParts) {
       if (other.part && other.part.requires.includes(part.sku)) broughtInBy.push(`${other.part.sku} requires it`);
     }
-    const candidates = input.parts.filter(
-      (p) => p.id !== part.id && p.category === part.category && p.priceCents + Math.round(p.laborHours * input.laborRateCents) < column.costCents,
+    const candidates = (model.byCategory.get(part.category) ?? []).filter(
+      (p) => p.id !== part.id && p.priceCents + Math.round(p.laborHours * input.laborRateCents) < column.costCents,
     );
     candidates.sort((a, b) => b.priceCents - a.priceCents);
     const rejected: PlanCandidateRejection[] = candidates
