@@ -147,10 +147,11 @@ describe('role matrix', () => {
 
   it('shows the shop rates to staff only; a customer gets id, name, units and currency', async () => {
     const customer = await t.http.get('/api/shops/current').set(...bearer(sessions.customer)).expect(200);
-    expect(Object.keys(customer.body).sort()).toEqual(['currency', 'id', 'name', 'unitSystem']);
+    expect(Object.keys(customer.body).sort()).toEqual(['currency', 'id', 'name', 'unitSystem', 'view']);
+    expect(customer.body.view).toBe('summary');
     for (const role of STAFF) {
       const staff = await t.http.get('/api/shops/current').set(...bearer(sessions[role])).expect(200);
-      expect(staff.body).toMatchObject({ id: customer.body.id, laborRatePerHour: expect.any(Number), taxRatePercent: expect.any(Number) });
+      expect(staff.body).toMatchObject({ view: 'full', id: customer.body.id, laborRatePerHour: expect.any(Number), taxRatePercent: expect.any(Number) });
     }
   });
 

@@ -3,6 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { AppConfigService } from '../config/app-config';
+import { CustomersModule } from '../customers/customers.module';
 import { MembershipsModule } from '../memberships/memberships.module';
 import { ShopsModule } from '../shops/shops.module';
 import { UsersModule } from '../users/users.module';
@@ -10,6 +11,7 @@ import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JwtStrategy } from './jwt.strategy';
 import { MemberResolverService } from './member-resolver.service';
+import { PasswordHasher } from './password-hasher';
 import { PasswordResetService } from './password-reset.service';
 import { SessionsService } from './sessions.service';
 import { SignUpService } from './sign-up.service';
@@ -28,9 +30,10 @@ import { SignUpService } from './sign-up.service';
     UsersModule,
     ShopsModule,
     MembershipsModule,
+    CustomersModule,
   ],
   controllers: [AuthController],
-  providers: [AuthService, SignUpService, SessionsService, PasswordResetService, MemberResolverService, JwtStrategy],
-  exports: [SessionsService, AuthService],
+  providers: [AuthService, SignUpService, SessionsService, PasswordResetService, MemberResolverService, PasswordHasher, JwtStrategy],
+  exports: [SessionsService, AuthService, PasswordHasher],
 })
 export class AuthModule {}

@@ -1,24 +1,24 @@
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource, EntityManager } from 'typeorm';
+import { EntityManager } from 'typeorm';
 import { AuthUser } from '../common/tenant/auth-user';
-import { Customer } from '../customers/customer.entity';
-import { Membership } from '../memberships/membership.entity';
+import { CustomersService } from '../customers/customers.service';
+import { MembershipsService } from '../memberships/memberships.service';
 
 /** Turns a membership id into the AuthUser every guard, decorator and service works with. */
 @Injectable()
 export class MemberResolverService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly memberships: MembershipsService,
+    private readonly customers: CustomersService,
+  ) {}
 
-  async resolve(membershipId: string, manager: EntityManager = this.dataSource.manager): Promise<AuthUser | null> {
-    const membership = await manager.findOne(Membership, { where: { id: membershipId }, relations: { user: true } });
+  /** Pass the manager of an open transaction when the membership was created in it. */
+  async resolve(membershipId: string, manager?: EntityManager): Promise<AuthUser | null> {
+    const membership = await this.memberships.findWithUser(membershipId, manager);
     if (!membership?.user) return null;
     let customerId: string | null = null;
     if (membership.role === 'customer') {
-      const customer = await manager.findOne(Customer, {
-        where: { shopId: membership.shopId, userId: membership.userId },
-        select: { id: true },
-      });
+      const customer = await this.customers.linkedTo(membership.shopId, membership.userId, manager);
       customerId = customer?.id ?? null;
     }
     return {

@@ -4,11 +4,12 @@ import { EnvironmentVariables } from '../config/env.validation';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan } from 'typeorm';
+import { MailTemplates } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
 import { UsersService } from '../users/users.service';
 import { PASSWORD_RESET_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
-import { hashPassword } from './auth.service';
+import { PasswordHasher } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
 import { SessionsService } from './sessions.service';
 import { hashToken, newOpaqueToken } from './token-hash';
@@ -21,6 +22,7 @@ export class PasswordResetService {
     private readonly mail: MailService,
     private readonly sessions: SessionsService,
     private readonly config: ConfigService<EnvironmentVariables, true>,
+    private readonly passwords: PasswordHasher,
   ) {}
 
   /** Always succeeds from the caller's point of view, so nobody can probe which e-mails have accounts. */
@@ -41,22 +43,11 @@ export class PasswordResetService {
     });
     const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
     const link = `${appUrl}/reset-password?token=${encodeURIComponent(token)}`;
-    await this.mail.sendOrLog({
-      to: user.email,
-      subject: 'Reset your Swapwright password',
-      text:
-        `Hello ${user.name},\n\nSomeone (hopefully you) asked to reset the password of your Swapwright account.\n` +
-        `Open this link within 30 minutes to choose a new one; it works once:\n\n${link}\n\n` +
-        `If you did not ask for this, ignore this e-mail: your password stays as it is.\n`,
-      html:
-        `<p>Hello ${escapeHtml(user.name)},</p><p>Someone (hopefully you) asked to reset the password of your Swapwright account.</p>` +
-        `<p><a href="${link}">Choose a new password</a> within 30 minutes; the link works once.</p>` +
-        `<p>If you did not ask for this, ignore this e-mail: your password stays as it is.</p>`,
-    });
+    await this.mail.sendOrLog({ to: user.email, ...MailTemplates.passwordReset({ name: user.name, link }) });
   }
 
   async confirm(token: string, password: string): Promise<void> {
-    const passwordHash = await hashPassword(password);
+    const passwordHash = await this.passwords.hash(password);
     await this.dataSource.transaction(async (manager) => {
       const stored = await manager.findOne(PasswordResetToken, { where: { tokenHash: hashToken(token) } });
       if (!stored) throw AuthErrors.resetTokenInvalid();
@@ -72,8 +63,4 @@ export class PasswordResetService {
       await this.sessions.revokeAllForUser(stored.userId, manager);
     });
   }
-}
-
-export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (char) => `&#${char.charCodeAt(0)};`);
 }

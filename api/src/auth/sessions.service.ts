@@ -3,7 +3,7 @@ import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Not } from 'typeorm';
-import { Shop } from '../shops/shop.entity';
+import { ShopsService } from '../shops/shops.service';
 import { UsersService } from '../users/users.service';
 import { ACCESS_TOKEN_TTL_SECONDS, AccessTokenPayload, REFRESH_TOKEN_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
@@ -20,6 +20,7 @@ export class SessionsService {
     private readonly jwt: JwtService,
     private readonly members: MemberResolverService,
     private readonly users: UsersService,
+    private readonly shops: ShopsService,
   ) {}
 
   /**
@@ -35,7 +36,7 @@ export class SessionsService {
     if (!user) throw AuthErrors.memberGone();
     const sessionVersion = await this.users.sessionVersionOf(user.userId, manager);
     if (sessionVersion === null) throw AuthErrors.memberGone();
-    const shop = await manager.findOneOrFail(Shop, { where: { id: user.shopId } });
+    const shop = await this.shops.getById(user.shopId, manager);
     const refresh = newOpaqueToken();
     await manager.insert(RefreshToken, {
       id: randomUUID(),

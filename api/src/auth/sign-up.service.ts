@@ -4,16 +4,16 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan } from 'typeorm';
 import { EnvironmentVariables } from '../config/env.validation';
+import { MailTemplates } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
 import { MembershipsService } from '../memberships/memberships.service';
 import { ShopsService } from '../shops/shops.service';
 import { normalizeEmail, UsersService } from '../users/users.service';
 import { SIGN_UP_LINK_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
-import { hashPassword } from './auth.service';
 import { SessionResponseDto } from './dto/session-response.dto';
 import { SignUpDto } from './dto/sign-up.dto';
-import { escapeHtml } from './password-reset.service';
+import { PasswordHasher } from './password-hasher';
 import { PendingSignUp } from './pending-sign-up.entity';
 import { SessionsService } from './sessions.service';
 import { hashToken, newOpaqueToken } from './token-hash';
@@ -32,25 +32,22 @@ export class SignUpService {
     private readonly sessions: SessionsService,
     private readonly mail: MailService,
     private readonly config: ConfigService<EnvironmentVariables, true>,
+    private readonly passwords: PasswordHasher,
   ) {}
 
   async request(input: SignUpDto): Promise<void> {
     const email = normalizeEmail(input.email);
     // Hashed on both paths, so the answer takes as long either way.
-    const passwordHash = await hashPassword(input.password);
+    const passwordHash = await this.passwords.hash(input.password);
     const existing = await this.users.findByEmail(email);
     if (existing) {
       await this.mail.sendOrLog({
         to: existing.email,
-        subject: 'Someone tried to create a Swapwright account with your address',
-        text:
-          `Hello ${existing.name},\n\nSomeone (perhaps you) tried to create a new Swapwright account with this e-mail address, ` +
-          `which already has one. Nothing was changed.\n\nSign in: ${this.link('/sign-in')}\n` +
-          `Forgot the password? Reset it: ${this.link('/reset-password')}\n\nIf it was not you, you can ignore this e-mail.\n`,
-        html:
-          `<p>Hello ${escapeHtml(existing.name)},</p><p>Someone (perhaps you) tried to create a new Swapwright account with this ` +
-          `e-mail address, which already has one. Nothing was changed.</p><p><a href="${this.link('/sign-in')}">Sign in</a>, or ` +
-          `<a href="${this.link('/reset-password')}">reset the password</a> if you forgot it.</p><p>If it was not you, you can ignore this e-mail.</p>`,
+        ...MailTemplates.signUpAlreadyRegistered({
+          name: existing.name,
+          signInLink: this.link('/sign-in'),
+          resetLink: this.link('/reset-password'),
+        }),
       });
       return;
     }
@@ -66,16 +63,7 @@ export class SignUpService {
       usedAt: null,
     });
     const link = this.link(`/sign-up?token=${encodeURIComponent(token)}`);
-    await this.mail.sendOrLog({
-      to: email,
-      subject: 'Finish creating your Swapwright shop',
-      text:
-        `Hello ${input.name.trim()},\n\nOpen this link within 24 hours to create your shop "${input.shopName.trim()}" on Swapwright; ` +
-        `it works once:\n\n${link}\n\nIf you did not sign up, ignore this e-mail: no account is created.\n`,
-      html:
-        `<p>Hello ${escapeHtml(input.name.trim())},</p><p><a href="${link}">Create your shop “${escapeHtml(input.shopName.trim())}”</a> ` +
-        `within 24 hours; the link works once.</p><p>If you did not sign up, ignore this e-mail: no account is created.</p>`,
-    });
+    await this.mail.sendOrLog({ to: email, ...MailTemplates.signUpLink({ name: input.name.trim(), shopName: input.shopName.trim(), link }) });
   }
 
   /** Opens the e-mailed link: the person, their one-person shop and the owner membership, in one transaction. */

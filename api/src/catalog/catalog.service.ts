@@ -9,16 +9,12 @@ import { CatalogErrors } from './catalog.errors';
 import { CATALOG_KINDS, CatalogExtras, CatalogKind, CatalogKindDefinition } from './catalog-kinds';
 import { CatalogItem } from './catalog-item.entity';
 import { CATALOG_FILTERS, ListCatalogQueryDto } from './dto/list-catalog-query.dto';
+import { jsonCopy } from '../common/json/json-copy';
 
 type Shop = Pick<AuthUser, 'shopId'>;
 
 /** How many candidates of one kind a fit run considers; a shop catalog is far smaller in practice. */
 export const MAX_CANDIDATES_PER_KIND = 200;
-
-/** Class instances from the validation pipe to plain JSON (drops undefined fields). */
-function plain(body: object): Record<string, unknown> {
-  return JSON.parse(JSON.stringify(body)) as Record<string, unknown>;
-}
 
 @Injectable()
 export class CatalogService {
@@ -61,7 +57,7 @@ export class CatalogService {
 
   async create(kind: CatalogKind, user: Shop, body: object): Promise<CatalogItem> {
     const definition = CATALOG_KINDS[kind];
-    const { spec, extras } = this.split(definition, plain(body));
+    const { spec, extras } = this.split(definition, jsonCopy(body as Record<string, unknown>));
     const id = randomUUID();
     const name = String(spec.name).trim();
     if (name === '') throw CatalogErrors.nameMissing();
@@ -80,7 +76,7 @@ export class CatalogService {
   async update(kind: CatalogKind, user: Shop, id: string, body: object): Promise<CatalogItem> {
     const definition = CATALOG_KINDS[kind];
     const row = await this.get(kind, user, id);
-    const { spec: changes, extras } = this.split(definition, plain(body));
+    const { spec: changes, extras } = this.split(definition, jsonCopy(body as Record<string, unknown>));
     if (changes.name !== undefined && String(changes.name).trim() === '') throw CatalogErrors.nameMissing();
     const merged: Record<string, unknown> = { ...(row.spec as Record<string, unknown>), ...changes, id: row.id };
     const name = String(merged.name).trim();
@@ -119,6 +115,13 @@ export class CatalogService {
       where: { shopId: user.shopId, id: In(ids) },
     });
     return new Set(rows.map((row) => row.id));
+  }
+
+  /** The specs of the given ids that exist in the caller's shop, by id. */
+  async specsByIds<TSpec>(kind: CatalogKind, user: Shop, ids: string[]): Promise<Map<string, TSpec>> {
+    if (ids.length === 0) return new Map();
+    const rows = await this.scoped(kind).repository.find({ where: { shopId: user.shopId, id: In(ids) } });
+    return new Map(rows.map((row) => [row.id, row.spec as TSpec]));
   }
 
   /** Candidate specs of one kind, optionally restricted by filter columns, in name order. */

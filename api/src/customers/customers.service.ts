@@ -1,17 +1,22 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { DataSource, Repository } from 'typeorm';
+import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CommonErrors } from '../common/errors/app-error';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
-import { Project } from '../projects/project.entity';
 import { Customer } from './customer.entity';
 import { CustomerErrors } from './customers.errors';
 import { CreateCustomerDto } from './dto/create-customer.dto';
 import { ListCustomersQueryDto } from './dto/list-customers-query.dto';
 import { UpdateCustomerDto } from './dto/update-customer.dto';
+
+/**
+ * Counts a customer's projects inside the removal's transaction. The projects module owns that table and hands
+ * this in when it starts (projects depend on customers, so customers cannot ask the projects service directly).
+ */
+export type CustomerProjectCounter = (manager: EntityManager, shopId: string, customerId: string) => Promise<number>;
 
 function clean(value: string | null | undefined): string | null | undefined {
   if (value === undefined || value === null) return value;
@@ -22,6 +27,7 @@ function clean(value: string | null | undefined): string | null | undefined {
 @Injectable()
 export class CustomersService {
   private readonly scoped: TenantRepository<Customer>;
+  private projectCounter: CustomerProjectCounter | null = null;
 
   constructor(
     @InjectRepository(Customer) customers: Repository<Customer>,
@@ -79,6 +85,31 @@ export class CustomersService {
     return this.get(user, id);
   }
 
+  countProjectsWith(counter: CustomerProjectCounter): void {
+    this.projectCounter = counter;
+  }
+
+  /** A customer of the shop, or null (for modules that refer to customers and answer with their own error). */
+  findInShop(shopId: string, id: string): Promise<Customer | null> {
+    return this.scoped.repository.findOne({ where: { id, shopId } });
+  }
+
+  /** The customer record a customer's login is linked to in a shop, if any. */
+  linkedTo(shopId: string, userId: string, manager: EntityManager = this.scoped.repository.manager): Promise<Customer | null> {
+    return manager.findOne(Customer, { where: { shopId, userId } });
+  }
+
+  /** Links a login to a customer record that has none yet; false when it has one meanwhile. Inside the caller's transaction. */
+  async linkLogin(manager: EntityManager, shopId: string, customerId: string, userId: string): Promise<boolean> {
+    const linked = await manager.update(Customer, { id: customerId, shopId, userId: IsNull() }, { userId });
+    return linked.affected === 1;
+  }
+
+  /** The login leaves the shop: its customer records keep their data and lose the link. Inside the caller's transaction. */
+  async unlinkLogin(manager: EntityManager, shopId: string, userId: string): Promise<void> {
+    await manager.update(Customer, { shopId, userId }, { userId: null });
+  }
+
   async remove(user: AuthUser, id: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
       const customer = await manager.findOne(Customer, {
@@ -86,7 +117,8 @@ export class CustomersService {
         lock: { mode: 'pessimistic_write' },
       });
       if (!customer) throw CustomerErrors.notFound();
-      const projects = await manager.count(Project, { where: { customerId: id, shopId: user.shopId } });
+      if (!this.projectCounter) throw new Error('No project counter: the projects module registers one when it starts');
+      const projects = await this.projectCounter(manager, user.shopId, id);
       if (projects > 0) throw CustomerErrors.hasProjects(projects);
       await manager.delete(Customer, { id, shopId: user.shopId });
     });

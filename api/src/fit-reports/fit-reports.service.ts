@@ -9,12 +9,10 @@ import {
   type FitSpec,
 } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
-import { DataSource, In, Repository, SelectQueryBuilder } from 'typeorm';
-import { AppError } from '../common/errors/app-error';
+import { DataSource, Repository, SelectQueryBuilder } from 'typeorm';
 import { Page, PageQueryDto, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
-import { Project, ProjectStatus } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import { User } from '../users/user.entity';
 import { FitReportComparisonResponseDto } from './dto/fit-report-response.dto';
@@ -24,14 +22,7 @@ import { FitReportRecord } from './fit-report-record.entity';
 import { FitReportErrors } from './fit-reports.errors';
 import { FitSettingsService } from './fit-settings.service';
 import { FitSpecBuilderService } from './fit-spec-builder.service';
-
-/** Running a check moves a project that is still being set up on to the checking stage. */
-const BEFORE_CHECKING: ProjectStatus[] = ['intake', 'measuring'];
-
-/** Class instances from the validation pipe to the plain JSON the engine would get from any other caller. */
-function plain<T>(value: T): T {
-  return JSON.parse(JSON.stringify(value)) as T;
-}
+import { jsonCopy } from '../common/json/json-copy';
 
 @Injectable()
 export class FitReportsService {
@@ -73,11 +64,8 @@ export class FitReportsService {
     });
     await this.dataSource.transaction(async (manager) => {
       await manager.insert(FitReportRecord, record);
-      await manager.update(
-        Project,
-        { id: project.id, shopId: user.shopId, status: In(BEFORE_CHECKING) },
-        { status: 'checking' as ProjectStatus },
-      );
+      // Running a check moves a project that is still being set up on to the checking stage.
+      await this.projects.advanceStatus(user.shopId, project.id, 'checking', manager);
     });
     return this.get(user, record.id);
   }
@@ -102,13 +90,7 @@ export class FitReportsService {
   /** One report of the caller's shop; a customer only sees reports of their own projects. */
   async get(user: AuthUser, id: string): Promise<FitReportRecord> {
     const record = await this.withAuthorName(this.scoped.query(user, 'report')).andWhere('report.id = :id', { id }).getOne();
-    if (!record) throw FitReportErrors.notFound();
-    try {
-      await this.projects.get(user, record.projectId);
-    } catch (error) {
-      if (error instanceof AppError && error.getStatus() === 404) throw FitReportErrors.notFound();
-      throw error;
-    }
+    if (!record || !(await this.projects.isReadableBy(user, record.projectId))) throw FitReportErrors.notFound();
     return record;
   }
 
@@ -124,7 +106,7 @@ export class FitReportsService {
 
   /** Runs the engine on a spec as given, with the shop's thresholds under the request's own; nothing is stored. */
   async whatIf(user: AuthUser, input: WhatIfDto): Promise<FitReport> {
-    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesFor(user)), ...plain(input.settings ?? {}) };
-    return runFitCheck(plain(input.spec) as FitSpec, overrides);
+    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesFor(user)), ...jsonCopy(input.settings ?? {}) };
+    return runFitCheck(jsonCopy(input.spec) as FitSpec, overrides);
   }
 }

@@ -6,6 +6,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { FitSettingsResponseDto } from './dto/fit-report-response.dto';
 import { FitSettingsOverridesDto } from './dto/fit-settings-overrides.dto';
 import { ShopFitSettings } from './shop-fit-settings.entity';
+import { jsonCopy } from '../common/json/json-copy';
 
 @Injectable()
 export class FitSettingsService {
@@ -23,7 +24,7 @@ export class FitSettingsService {
   }
 
   async replace(user: AuthUser, overrides: FitSettingsOverridesDto): Promise<FitSettingsResponseDto> {
-    const plain = JSON.parse(JSON.stringify(overrides)) as Partial<FitSettings>;
+    const plain = jsonCopy(overrides) as Partial<FitSettings>;
     await this.settings.upsert({ shopId: user.shopId, overrides: plain, updatedById: user.userId }, ['shopId']);
     return this.get(user);
   }

@@ -4,18 +4,17 @@ import { EnvironmentVariables } from '../config/env.validation';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan, Repository } from 'typeorm';
-import { hashPassword } from '../auth/auth.service';
 import { SessionResponseDto } from '../auth/dto/session-response.dto';
-import { escapeHtml } from '../auth/password-reset.service';
+import { PasswordHasher } from '../auth/password-hasher';
 import { SessionsService } from '../auth/sessions.service';
 import { hashToken, newOpaqueToken } from '../auth/token-hash';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
-import { Customer } from '../customers/customer.entity';
+import { CustomersService } from '../customers/customers.service';
+import { MailTemplates } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
 import { MembershipsService } from '../memberships/memberships.service';
-import { Shop } from '../shops/shop.entity';
-import { User } from '../users/user.entity';
+import { ShopsService } from '../shops/shops.service';
 import { normalizeEmail, UsersService } from '../users/users.service';
 import { AcceptInvitationDto } from './dto/accept-invitation.dto';
 import { CreateInvitationDto } from './dto/create-invitation.dto';
@@ -36,6 +35,9 @@ export class InvitationsService {
     private readonly sessions: SessionsService,
     private readonly mail: MailService,
     private readonly config: ConfigService<EnvironmentVariables, true>,
+    private readonly passwords: PasswordHasher,
+    private readonly customers: CustomersService,
+    private readonly shops: ShopsService,
   ) {
     this.scoped = new TenantRepository(invitations);
   }
@@ -48,7 +50,7 @@ export class InvitationsService {
     const email = normalizeEmail(input.email);
     if (input.customerId && input.role !== 'customer') throw InvitationErrors.customerOnlyForCustomerRole();
     if (input.customerId) {
-      const customer = await this.dataSource.manager.findOne(Customer, { where: { id: input.customerId, shopId: user.shopId } });
+      const customer = await this.customers.findInShop(user.shopId, input.customerId);
       if (!customer) throw InvitationErrors.customerNotFound();
       if (customer.userId) throw InvitationErrors.customerHasLogin();
     }
@@ -66,14 +68,14 @@ export class InvitationsService {
       invitedByUserId: user.userId,
     });
     await this.scoped.repository.insert(invitation);
-    const shop = await this.dataSource.manager.findOneByOrFail(Shop, { id: user.shopId });
+    const shop = await this.shops.getCurrent(user);
     await this.sendInvitation(email, shop.name, user.name, input.role, token);
     return this.scoped.repository.findOneByOrFail({ id: invitation.id });
   }
 
   /** Creates the login and the membership (and links the customer record) in one transaction. */
   async accept(input: AcceptInvitationDto): Promise<SessionResponseDto> {
-    const passwordHash = await hashPassword(input.password);
+    const passwordHash = await this.passwords.hash(input.password);
     return this.dataSource.transaction(async (manager) => {
       const now = new Date();
       const invitation = await manager.findOne(Invitation, { where: { tokenHash: hashToken(input.token) } });
@@ -84,7 +86,7 @@ export class InvitationsService {
         { acceptedAt: now },
       );
       if (claimed.affected !== 1) throw InvitationErrors.invalid();
-      if (await manager.exists(User, { where: { email: invitation.email } })) throw InvitationErrors.emailTaken();
+      if (await this.users.emailTaken(invitation.email, manager)) throw InvitationErrors.emailTaken();
       const user = await this.users.create(manager, { email: invitation.email, name: input.name, passwordHash });
       const membership = await this.memberships.create(manager, {
         shopId: invitation.shopId,
@@ -92,12 +94,8 @@ export class InvitationsService {
         role: invitation.role,
       });
       if (invitation.customerId) {
-        const linked = await manager.update(
-          Customer,
-          { id: invitation.customerId, shopId: invitation.shopId, userId: IsNull() },
-          { userId: user.id },
-        );
-        if (linked.affected !== 1) throw InvitationErrors.customerHasLogin();
+        const linked = await this.customers.linkLogin(manager, invitation.shopId, invitation.customerId, user.id);
+        if (!linked) throw InvitationErrors.customerHasLogin();
       }
       return this.sessions.issue(membership.id, manager);
     });
@@ -106,15 +104,6 @@ export class InvitationsService {
   private async sendInvitation(email: string, shopName: string, inviter: string, role: string, token: string) {
     const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
     const link = `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
-    await this.mail.sendOrLog({
-      to: email,
-      subject: `${shopName} invites you to Swapwright`,
-      text:
-        `${inviter} invites you to join ${shopName} on Swapwright as ${role}.\n\n` +
-        `Open this link within 7 days to choose your name and password:\n\n${link}\n`,
-      html:
-        `<p>${escapeHtml(inviter)} invites you to join <strong>${escapeHtml(shopName)}</strong> on Swapwright as ${escapeHtml(role)}.</p>` +
-        `<p><a href="${link}">Accept the invitation</a> within 7 days to choose your name and password.</p>`,
-    });
+    await this.mail.sendOrLog({ to: email, ...MailTemplates.invitation({ inviter, shopName, role, link }) });
   }
 }

@@ -28,6 +28,7 @@ import {
 import { MeasurementErrors } from './measurements.errors';
 import { checkImage, stripLocationMetadata } from './photo-image';
 import { PhotoStorage } from './photo-storage';
+import { jsonCopy } from '../common/json/json-copy';
 
 type Shop = Pick<AuthUser, 'shopId'>;
 
@@ -87,7 +88,7 @@ export class MeasurementsService {
       if (ids.has(point.id)) throw MeasurementErrors.badValue(`Point id "${point.id}" appears twice.`);
       ids.add(point.id);
     }
-    const clean = points.map((p) => JSON.parse(JSON.stringify(p)) as MeasurementPoint);
+    const clean = points.map((p) => jsonCopy<MeasurementPoint>(p));
     const existing = await this.templates.findOne({ where: { shopId: user.shopId, chassisId } });
     await this.templates.save({ id: existing?.id ?? randomUUID(), shopId: user.shopId, chassisId, points: clean, updatedById: user.userId });
     return clean;

@@ -5,7 +5,7 @@ import { DataSource, EntityManager, Repository } from 'typeorm';
 import { Role } from '../common/roles/role';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
-import { Customer } from '../customers/customer.entity';
+import { CustomersService } from '../customers/customers.service';
 import { Membership } from './membership.entity';
 import { MembershipErrors } from './memberships.errors';
 
@@ -16,6 +16,7 @@ export class MembershipsService {
   constructor(
     @InjectRepository(Membership) private readonly memberships: Repository<Membership>,
     @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly customers: CustomersService,
   ) {
     this.scoped = new TenantRepository(memberships);
   }
@@ -38,7 +39,7 @@ export class MembershipsService {
     await this.dataSource.transaction(async (manager) => {
       const membership = await this.lockInShop(manager, user, id);
       if (membership.role === 'owner') await this.assertAnotherOwner(manager, user, id);
-      await manager.update(Customer, { shopId: user.shopId, userId: membership.userId }, { userId: null });
+      await this.customers.unlinkLogin(manager, user.shopId, membership.userId);
       // Refresh tokens of this membership go with it (ON DELETE CASCADE); access tokens stop at the next request.
       await manager.delete(Membership, { id: membership.id, shopId: user.shopId });
     });
@@ -47,6 +48,11 @@ export class MembershipsService {
   /** Inside the sign-up or invitation transaction. */
   create(manager: EntityManager, input: { shopId: string; userId: string; role: Role }): Promise<Membership> {
     return manager.save(manager.create(Membership, { id: randomUUID(), ...input }));
+  }
+
+  /** A membership with its user (for turning a token into the caller); pass the manager of an open transaction. */
+  findWithUser(id: string, manager: EntityManager = this.memberships.manager): Promise<Membership | null> {
+    return manager.findOne(Membership, { where: { id }, relations: { user: true } });
   }
 
   /** The membership a sign-in lands in: the oldest one of the user. */

@@ -26,7 +26,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { FitSettingsService } from '../fit-reports/fit-settings.service';
 import { FitSpecBuilderService } from '../fit-reports/fit-spec-builder.service';
 import { ProjectsService } from '../projects/projects.service';
-import { Shop } from '../shops/shop.entity';
+import { ShopsService } from '../shops/shops.service';
 import { MipSolverService } from './mip-solver.service';
 import { CounterLine, Part, PartStock, PartsPlanRecord } from './part.entity';
 import { PartsErrors } from './parts.errors';
@@ -50,6 +50,7 @@ export class PartsPlansService {
     private readonly settings: FitSettingsService,
     private readonly catalog: CatalogService,
     private readonly solver: MipSolverService,
+    private readonly shops: ShopsService,
   ) {}
 
   /** The planner's catalog: every part of the shop (but engines and transmissions) with its free stock and fit-spec attributes. */
@@ -68,8 +69,7 @@ export class PartsPlansService {
     const byKind = new Map<string, string[]>();
     for (const part of parts) if (part.fitKind && part.fitSpecId) byKind.set(part.fitKind, [...(byKind.get(part.fitKind) ?? []), part.fitSpecId]);
     for (const [kind, ids] of byKind) {
-      const rows = await this.dataSource.getRepository(this.catalog.definition(kind as CatalogKind).entity).find({ where: { shopId: user.shopId, id: In(ids) } });
-      for (const row of rows) specs.set(row.id, row.spec);
+      for (const [id, spec] of await this.catalog.specsByIds(kind as CatalogKind, user, ids)) specs.set(id, spec);
     }
     return parts
       .filter((part) => isPartCategory(part.category))
@@ -99,7 +99,7 @@ export class PartsPlansService {
     const spec = built.spec;
     const report = runFitCheck(spec, overrides);
     const parts = await this.planParts(user);
-    const shop = await this.dataSource.getRepository(Shop).findOneByOrFail({ id: user.shopId });
+    const shop = await this.shops.getCurrent(user);
     const skuOfSpec = new Map(parts.filter((p) => p.fitSpecId).map((p) => [p.fitSpecId!, p.sku]));
     const fitted: Partial<Record<PlanSlot, FittedPart>> = {};
     const fit = (slot: PlanSlot, kind: FitSpecKind, item: { id: string; name: string } | undefined) => {

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { ShopsModule } from '../shops/shops.module';
 import { CatalogModule } from '../catalog/catalog.module';
 import { FitReportsModule } from '../fit-reports/fit-reports.module';
 import { ProjectsModule } from '../projects/projects.module';
@@ -13,7 +14,7 @@ import { PartsPlansService } from './parts-plans.service';
 import { PartsService } from './parts.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature(PARTS_ENTITIES), CatalogModule, ProjectsModule, FitReportsModule],
+  imports: [TypeOrmModule.forFeature(PARTS_ENTITIES), CatalogModule, ProjectsModule, FitReportsModule, ShopsModule],
   controllers: [PartsController, SuppliersController, PartsPlansController],
   providers: [PartsService, PartsImportService, PartsPlansService, CounterService, MipSolverService],
   exports: [PartsPlansService, MipSolverService],

@@ -5,10 +5,12 @@ import { DataSource, EntityManager, In } from 'typeorm';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains } from '../common/tenant/tenant-repository';
-import { CATALOG_KINDS, CatalogKind } from '../catalog/catalog-kinds';
+import { CatalogService } from '../catalog/catalog.service';
+import { CatalogKind } from '../catalog/catalog-kinds';
 import { CreatePartDto, CreateSupplierDto, ListPartsQueryDto, SetStockDto, UpdatePartDto, UpdateSupplierDto } from './dto/part.dto';
 import { Part, PartStock, Supplier } from './part.entity';
 import { PartsErrors } from './parts.errors';
+import { jsonCopy } from '../common/json/json-copy';
 
 type Shop = Pick<AuthUser, 'shopId'>;
 
@@ -16,11 +18,6 @@ export interface PartWithStock {
   part: Part;
   stock: PartStock[];
   supplierName: string | null;
-}
-
-/** Class instances from the validation pipe to plain JSON (drops undefined fields). */
-function plain<T extends object>(body: T): Partial<T> {
-  return JSON.parse(JSON.stringify(body)) as Partial<T>;
 }
 
 export function checkAttributes(attributes: Record<string, unknown> | undefined): void {
@@ -37,7 +34,10 @@ export function checkAttributes(attributes: Record<string, unknown> | undefined)
 /** The catalog's parts, suppliers and stock of one shop. */
 @Injectable()
 export class PartsService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly catalog: CatalogService,
+  ) {}
 
   async list(user: Shop, query: ListPartsQueryDto): Promise<Page<PartWithStock>> {
     const builder = this.dataSource.getRepository(Part).createQueryBuilder('part').where('part.shopId = :shopId', { shopId: user.shopId });
@@ -84,13 +84,12 @@ export class PartsService {
     const fitSpecId = body.fitSpecId !== undefined ? body.fitSpecId : current?.fitSpecId ?? null;
     if ((fitKind === null) !== (fitSpecId === null)) throw PartsErrors.fitSpecIncomplete();
     if (fitKind && fitSpecId) {
-      const entity = CATALOG_KINDS[fitKind as CatalogKind].entity;
-      if (!(await this.dataSource.getRepository(entity).exists({ where: { id: fitSpecId, shopId: user.shopId } }))) throw PartsErrors.fitSpecMissing(fitKind);
+      if (!(await this.catalog.existing(fitKind as CatalogKind, user, [fitSpecId])).has(fitSpecId)) throw PartsErrors.fitSpecMissing(fitKind);
     }
   }
 
   async create(user: Shop, input: CreatePartDto): Promise<PartWithStock> {
-    const body = plain(input);
+    const body: Partial<typeof input> = jsonCopy(input);
     await this.checkReferences(user, body);
     if (await this.dataSource.getRepository(Part).exists({ where: { shopId: user.shopId, sku: input.sku } })) throw PartsErrors.skuTaken(input.sku);
     const id = randomUUID();
@@ -119,7 +118,7 @@ export class PartsService {
 
   async update(user: Shop, id: string, input: UpdatePartDto): Promise<PartWithStock> {
     const { part } = await this.get(user, id);
-    const body = plain(input);
+    const body: Partial<typeof input> = jsonCopy(input);
     await this.checkReferences(user, body, part);
     if (body.sku && body.sku !== part.sku && (await this.dataSource.getRepository(Part).exists({ where: { shopId: user.shopId, sku: body.sku } }))) {
       throw PartsErrors.skuTaken(body.sku);
@@ -172,7 +171,7 @@ export class PartsService {
   async updateSupplier(user: Shop, id: string, input: UpdateSupplierDto): Promise<Supplier> {
     const row = await this.dataSource.getRepository(Supplier).findOne({ where: { id, shopId: user.shopId } });
     if (!row) throw PartsErrors.supplierNotFound();
-    await this.dataSource.getRepository(Supplier).update({ id, shopId: user.shopId }, plain(input) as object);
+    await this.dataSource.getRepository(Supplier).update({ id, shopId: user.shopId }, jsonCopy(input) as object);
     return this.dataSource.getRepository(Supplier).findOneByOrFail({ id });
   }
 

@@ -1,7 +1,7 @@
 import { Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
 import { AuthUser } from '../common/tenant/auth-user';
-import { Customer } from '../customers/customer.entity';
+import { CustomersService } from '../customers/customers.service';
 import { Project } from './project.entity';
 import { assertFieldsAllowed, ProjectsService } from './projects.service';
 
@@ -30,6 +30,10 @@ function repositoryMock<T extends object>(overrides: Partial<Record<keyof Reposi
   return { create: jest.fn((value) => value), insert: jest.fn(), exists: jest.fn(), ...overrides } as unknown as Repository<T>;
 }
 
+function customersWith(found: boolean) {
+  return { findInShop: jest.fn().mockResolvedValue(found ? { id: 'c-1' } : null) } as unknown as CustomersService;
+}
+
 function catalogMock(known: string[] = []) {
   return { definition: () => ({ singular: 'part' }), existing: jest.fn(async (_kind: string, _user: unknown, ids: string[]) => new Set(ids.filter((id) => known.includes(id)))) } as unknown as CatalogService;
 }
@@ -55,13 +59,13 @@ describe('assertFieldsAllowed', () => {
 describe('ProjectsService.create', () => {
   it("refuses a customer outside the caller's shop before writing", async () => {
     const projects = repositoryMock<Project>();
-    const customers = repositoryMock<Customer>({ exists: jest.fn().mockResolvedValue(false) });
+    const customers = customersWith(false);
     const service = new ProjectsService(projects, customers, catalogMock());
 
     await expect(service.create(userStub.estimator, { customerId: 'c-other', title: 'Swap' })).rejects.toMatchObject({
       code: 'customer_not_found',
     });
-    expect(customers.exists).toHaveBeenCalledWith({ where: { id: 'c-other', shopId: 'shop-a' } });
+    expect(customers.findInShop).toHaveBeenCalledWith('shop-a', 'c-other');
     expect(projects.insert).not.toHaveBeenCalled();
   });
 });
@@ -69,7 +73,7 @@ describe('ProjectsService.create', () => {
 describe('ProjectsService catalog references', () => {
   it('refuses an engine id that is not in the shop catalog, naming the field, before writing', async () => {
     const projects = repositoryMock<Project>();
-    const customers = repositoryMock<Customer>({ exists: jest.fn().mockResolvedValue(true) });
+    const customers = customersWith(true);
     const catalog = catalogMock(['chassis-1']);
     const service = new ProjectsService(projects, customers, catalog);
 

@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, OnModuleInit } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { EntityManager, In, Repository, SelectQueryBuilder } from 'typeorm';
@@ -8,7 +8,7 @@ import { CatalogKind } from '../catalog/catalog-kinds';
 import { FABRICATOR_PROJECT_FIELDS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
-import { Customer } from '../customers/customer.entity';
+import { CustomersService } from '../customers/customers.service';
 import { CreateProjectDto, ProjectPlacementDto } from './dto/create-project.dto';
 import { ListProjectsQueryDto } from './dto/list-projects-query.dto';
 import { UpdateProjectDto } from './dto/update-project.dto';
@@ -40,15 +40,20 @@ function placementColumns(placement: ProjectPlacementDto | null | undefined): Pa
 }
 
 @Injectable()
-export class ProjectsService {
+export class ProjectsService implements OnModuleInit {
   private readonly scoped: TenantRepository<Project>;
 
   constructor(
     @InjectRepository(Project) projects: Repository<Project>,
-    @InjectRepository(Customer) private readonly customers: Repository<Customer>,
+    private readonly customers: CustomersService,
     private readonly catalog: CatalogService,
   ) {
     this.scoped = new TenantRepository(projects);
+  }
+
+  onModuleInit(): void {
+    // A customer with projects cannot be removed; this module owns the projects table, so it counts them.
+    this.customers.countProjectsWith((manager, shopId, customerId) => this.countForCustomer(shopId, customerId, manager));
   }
 
   /** Shop scope for everyone; a customer additionally sees only the projects of their own customer record. */
@@ -82,6 +87,16 @@ export class ProjectsService {
     const project = await this.visible(user).andWhere('project.id = :id', { id }).getOne();
     if (!project) throw ProjectErrors.notFound();
     return project;
+  }
+
+  /** Whether the caller may read this project (their shop's; a customer's own). For modules that hold rows of a project. */
+  async isReadableBy(user: AuthUser, id: string): Promise<boolean> {
+    return (await this.visible(user).andWhere('project.id = :id', { id }).getCount()) > 0;
+  }
+
+  /** How many projects of the shop belong to this customer (pass the manager of an open transaction to count inside it). */
+  countForCustomer(shopId: string, customerId: string, manager?: EntityManager): Promise<number> {
+    return (manager ?? this.scoped.repository.manager).count(Project, { where: { customerId, shopId } });
   }
 
   async create(user: AuthUser, input: CreateProjectDto): Promise<Project> {
@@ -168,7 +183,6 @@ export class ProjectsService {
   }
 
   private async assertCustomerInShop(user: AuthUser, customerId: string): Promise<void> {
-    const exists = await this.customers.exists({ where: { id: customerId, shopId: user.shopId } });
-    if (!exists) throw ProjectErrors.customerNotFound();
+    if (!(await this.customers.findInShop(user.shopId, customerId))) throw ProjectErrors.customerNotFound();
   }
 }

@@ -8,6 +8,7 @@ import { FitReportsModule } from '../fit-reports/fit-reports.module';
 import { LaborOperationsModule } from '../labor-operations/labor-operations.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { ShopsModule } from '../shops/shops.module';
+import { UsersModule } from '../users/users.module';
 import { QuoteLinksService } from './quote-links.service';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuotePdfService } from './quote-pdf.service';
@@ -35,6 +36,7 @@ import { QuotesService } from './quotes.service';
     LaborOperationsModule,
     CatalogModule,
     ShopsModule,
+    UsersModule,
   ],
   controllers: [ProjectQuotesController, QuotesController, QuoteLinksController, QuoteSettingsController],
   providers: [QuotesService, QuoteSettingsService, QuoteLinksService, QuotePdfService],

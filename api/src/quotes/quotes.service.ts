@@ -17,6 +17,7 @@ import { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
+import { UsersService } from '../users/users.service';
 import { AnswerQuoteDto, CreateQuoteDto, QuoteLineInputDto, UpdateQuoteDto } from './dto/quote-input.dto';
 import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromReport } from './quote-draft.builder';
 import { QuoteLinksService } from './quote-links.service';
@@ -88,6 +89,7 @@ export class QuotesService {
     private readonly operations: LaborOperationsService,
     private readonly catalog: CatalogService,
     private readonly shops: ShopsService,
+    private readonly users: UsersService,
     private readonly settings: QuoteSettingsService,
     private readonly links: QuoteLinksService,
     private readonly pdf: QuotePdfService,
@@ -471,10 +473,10 @@ export class QuotesService {
 
   private async mailEstimator(view: QuoteView, answer: string, reason: string): Promise<void> {
     if (!view.quote.sentById) return;
-    const [row] = await this.dataSource.query('SELECT email FROM users WHERE id = ?', [view.quote.sentById]);
-    if (!row?.email) return;
+    const estimator = await this.users.findById(view.quote.sentById);
+    if (!estimator?.email) return;
     await this.mail.sendOrLog({
-      to: row.email,
+      to: estimator.email,
       subject: `Quote ${quoteLabel(view.quote)} ${answer} by ${view.project.customer?.name ?? 'the customer'}`,
       text:
         `${view.project.customer?.name ?? 'The customer'} ${answer} quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}".` +

@@ -3,11 +3,11 @@ import { ApiBearerAuth, ApiExtraModels, ApiForbiddenResponse, ApiOkResponse, Api
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
-import { SHOP_ADMINS, SHOP_RATE_READERS } from '../common/roles/role-matrix';
+import { SHOP_ADMINS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
-import { ShopResponseDto, ShopSummaryResponseDto } from './dto/shop-response.dto';
+import { CurrentShopResponseDto, ShopResponseDto, ShopSummaryResponseDto } from './dto/shop-response.dto';
 import { UpdateShopDto } from './dto/update-shop.dto';
-import { mapShop, mapShopSummary } from './shop.mapper';
+import { mapShop, mapShopFor } from './shop.mapper';
 import { ShopsService } from './shops.service';
 
 @ApiTags('shops')
@@ -19,12 +19,17 @@ export class ShopsController {
 
   @Get()
   @ApiOkResponse({
-    description: 'Staff get the shop with its rates; customers only its name, units and currency',
-    schema: { oneOf: [{ $ref: getSchemaPath(ShopResponseDto) }, { $ref: getSchemaPath(ShopSummaryResponseDto) }] },
+    description: 'Staff who may read rates get the full view (`view: "full"`, with the rates); everyone else the summary (`view: "summary"`)',
+    schema: {
+      oneOf: [{ $ref: getSchemaPath(ShopResponseDto) }, { $ref: getSchemaPath(ShopSummaryResponseDto) }],
+      discriminator: {
+        propertyName: 'view',
+        mapping: { full: getSchemaPath(ShopResponseDto), summary: getSchemaPath(ShopSummaryResponseDto) },
+      },
+    },
   })
-  async get(@CurrentUser() user: AuthUser): Promise<ShopResponseDto | ShopSummaryResponseDto> {
-    const shop = await this.shops.getCurrent(user);
-    return SHOP_RATE_READERS.includes(user.role) ? mapShop(shop) : mapShopSummary(shop);
+  async get(@CurrentUser() user: AuthUser): Promise<CurrentShopResponseDto> {
+    return mapShopFor(user.role, await this.shops.getCurrent(user));
   }
 
   @Patch()

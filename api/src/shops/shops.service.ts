@@ -17,6 +17,13 @@ export class ShopsService {
     return shop;
   }
 
+  /** The shop by id; pass the manager of an open transaction (sign-up creates the shop in the same one). */
+  async getById(shopId: string, manager: EntityManager = this.shops.manager): Promise<Shop> {
+    const shop = await manager.findOne(Shop, { where: { id: shopId } });
+    if (!shop) throw ShopErrors.notFound();
+    return shop;
+  }
+
   async updateCurrent(user: Pick<AuthUser, 'shopId'>, changes: UpdateShopDto): Promise<Shop> {
     const shop = await this.getCurrent(user);
     Object.assign(shop, changes, changes.name !== undefined ? { name: changes.name.trim() } : {});

@@ -21,10 +21,14 @@ export class UsersService {
     return this.users.findOne({ where: { id } });
   }
 
+  emailTaken(email: string, manager: EntityManager = this.users.manager): Promise<boolean> {
+    return manager.exists(User, { where: { email: normalizeEmail(email) } });
+  }
+
   /** Inside the caller's transaction: sign-up and invitation acceptance create more rows with it. */
   async create(manager: EntityManager, input: { email: string; name: string; passwordHash: string }): Promise<User> {
     const email = normalizeEmail(input.email);
-    if (await manager.exists(User, { where: { email } })) throw UserErrors.emailTaken();
+    if (await this.emailTaken(email, manager)) throw UserErrors.emailTaken();
     const user = manager.create(User, { id: randomUUID(), email, name: input.name.trim(), passwordHash: input.passwordHash });
     return manager.save(user);
   }

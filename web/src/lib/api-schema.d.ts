@@ -69,6 +69,38 @@ export interface paths {
         patch: operations["MembershipsController_update"];
         trace?: never;
     };
+    "/api/customers": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["CustomersController_list"];
+        put?: never;
+        post: operations["CustomersController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/customers/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["CustomersController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["CustomersController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["CustomersController_update"];
+        trace?: never;
+    };
     "/api/auth/sign-up": {
         parameters: {
             query?: never;
@@ -227,38 +259,6 @@ export interface paths {
         options?: never;
         head?: never;
         patch?: never;
-        trace?: never;
-    };
-    "/api/customers": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["CustomersController_list"];
-        put?: never;
-        post: operations["CustomersController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
-    "/api/customers/{id}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["CustomersController_get"];
-        put?: never;
-        post?: never;
-        delete: operations["CustomersController_remove"];
-        options?: never;
-        head?: never;
-        patch: operations["CustomersController_update"];
         trace?: never;
     };
     "/api/projects": {
@@ -1555,6 +1555,11 @@ export interface components {
              * @example USD
              */
             currency: string;
+            /**
+             * @description Tells this view apart from the summary (enum property replaced by openapi-typescript)
+             * @enum {string}
+             */
+            view: "full";
             /** @description Shop labor rate in the shop currency per hour */
             laborRatePerHour: number;
             taxRatePercent: number;
@@ -1571,6 +1576,11 @@ export interface components {
              * @example USD
              */
             currency: string;
+            /**
+             * @description Tells this view apart from the full one (enum property replaced by openapi-typescript)
+             * @enum {string}
+             */
+            view: "summary";
         };
         UpdateShopDto: {
             name?: string;
@@ -1596,6 +1606,43 @@ export interface components {
         UpdateMembershipDto: {
             /** @enum {string} */
             role: "owner" | "estimator" | "fabricator" | "counter" | "customer";
+        };
+        PageMetaResponseDto: {
+            /** @description Items matching the filters, across all pages */
+            total: number;
+            page: number;
+            pageSize: number;
+        };
+        CustomerResponseDto: {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            email: string | null;
+            phone: string | null;
+            notes: string | null;
+            /**
+             * Format: uuid
+             * @description The login of this customer, if invited
+             */
+            userId: string | null;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateCustomerDto: {
+            /** @example Odile Straker */
+            name: string;
+            email?: string | null;
+            /** @example +1 555 0142 */
+            phone?: string | null;
+            notes?: string | null;
+        };
+        UpdateCustomerDto: {
+            /** @example Odile Straker */
+            name?: string;
+            email?: string | null;
+            /** @example +1 555 0142 */
+            phone?: string | null;
+            notes?: string | null;
         };
         SignUpDto: {
             /** @example builder@example.test */
@@ -1683,43 +1730,6 @@ export interface components {
             token: string;
             name: string;
             password: string;
-        };
-        PageMetaResponseDto: {
-            /** @description Items matching the filters, across all pages */
-            total: number;
-            page: number;
-            pageSize: number;
-        };
-        CustomerResponseDto: {
-            /** Format: uuid */
-            id: string;
-            name: string;
-            email: string | null;
-            phone: string | null;
-            notes: string | null;
-            /**
-             * Format: uuid
-             * @description The login of this customer, if invited
-             */
-            userId: string | null;
-            createdAt: string;
-            updatedAt: string;
-        };
-        CreateCustomerDto: {
-            /** @example Odile Straker */
-            name: string;
-            email?: string | null;
-            /** @example +1 555 0142 */
-            phone?: string | null;
-            notes?: string | null;
-        };
-        UpdateCustomerDto: {
-            /** @example Odile Straker */
-            name?: string;
-            email?: string | null;
-            /** @example +1 555 0142 */
-            phone?: string | null;
-            notes?: string | null;
         };
         ProjectCustomerRefDto: {
             /** Format: uuid */
@@ -3758,7 +3768,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description Staff get the shop with its rates; customers only its name, units and currency */
+            /** @description Staff who may read rates get the full view (`view: "full"`, with the rates); everyone else the summary (`view: "summary"`) */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -3859,6 +3869,130 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["MembershipResponseDto"];
+                };
+            };
+        };
+    };
+    CustomersController_list: {
+        parameters: {
+            query?: {
+                page?: number;
+                pageSize?: number;
+                order?: "asc" | "desc";
+                /** @description Matches inside the main text fields. */
+                search?: string;
+                sort?: "name" | "email" | "createdAt" | "updatedAt";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["CustomerResponseDto"][];
+                    };
+                };
+            };
+        };
+    };
+    CustomersController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateCustomerDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CustomerResponseDto"];
+                };
+            };
+        };
+    };
+    CustomersController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CustomerResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    CustomersController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CustomersController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateCustomerDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CustomerResponseDto"];
                 };
             };
         };
@@ -4186,130 +4320,6 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["SessionResponseDto"];
-                };
-            };
-        };
-    };
-    CustomersController_list: {
-        parameters: {
-            query?: {
-                page?: number;
-                pageSize?: number;
-                order?: "asc" | "desc";
-                /** @description Matches inside the main text fields. */
-                search?: string;
-                sort?: "name" | "email" | "createdAt" | "updatedAt";
-            };
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
-                        items: components["schemas"]["CustomerResponseDto"][];
-                    };
-                };
-            };
-        };
-    };
-    CustomersController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateCustomerDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CustomerResponseDto"];
-                };
-            };
-        };
-    };
-    CustomersController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CustomerResponseDto"];
-                };
-            };
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ErrorResponseDto"];
-                };
-            };
-        };
-    };
-    CustomersController_remove: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
-    };
-    CustomersController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateCustomerDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CustomerResponseDto"];
                 };
             };
         };
