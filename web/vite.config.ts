@@ -1,9 +1,14 @@
 import { fileURLToPath, URL } from 'node:url';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vite';
+import { compression } from 'vite-plugin-compression2';
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [
+    react(),
+    // Brotli and gzip copies of every text asset beside the original; the API sends the one the browser accepts.
+    compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024 }),
+  ],
   resolve: {
     alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
   },

@@ -1,7 +1,6 @@
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
-import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
@@ -28,6 +27,7 @@ import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
 import { ShopsModule } from './shops/shops.module';
 import { UsersModule } from './users/users.module';
+import { WebStaticModule } from './web-static/web-static.module';
 
 @Module({
   imports: [
@@ -55,14 +55,6 @@ import { UsersModule } from './users/users.module';
         ],
       }),
     }),
-    ServeStaticModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: AppConfigService) => {
-        const rootPath = config.get('WEB_DIST_DIR', { infer: true });
-        // Every non-/api path gets the web app's index.html (client-side routing).
-        return rootPath ? [{ rootPath, exclude: ['/api', '/api/{*rest}'] }] : [];
-      },
-    }),
     MailModule,
     UsersModule,
     ShopsModule,
@@ -79,6 +71,8 @@ import { UsersModule } from './users/users.module';
     QuotesModule,
     PaymentsModule,
     HealthModule,
+    // Last: the built web app for every non-API path.
+    WebStaticModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

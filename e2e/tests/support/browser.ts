@@ -6,7 +6,7 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 export const BASE_URL = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:3100';
 export const ARTIFACTS_DIR = join(__dirname, '..', '..', 'test-results');
 
-const CHROMIUM_ARGS = [
+export const CHROMIUM_ARGS = [
   '--no-sandbox',
   '--disable-gpu',
   '--disable-quic',

@@ -1,15 +1,27 @@
-import { Card, Typography } from 'antd';
 import { Suspense } from 'react';
 import { Outlet } from 'react-router-dom';
 import { palette, spacing } from '@/config/theme';
 import { Logo } from '@/components/logo';
-import { LoadingState } from '@/components/query-state';
 
 const points = [
   'Measure the chassis once, with photos, and keep the figures with the job.',
   'See what fits, what is tight and what fails before a part is ordered.',
   'Turn the plan into a quote your customer can approve online.',
 ];
+
+/**
+ * The sign-in pages are the first load: plain markup for the frame (no antd Card, Typography or Skeleton), so the
+ * first JavaScript holds only what the forms need.
+ */
+const cardStyle = {
+  width: '100%',
+  maxWidth: 420,
+  padding: spacing.xl,
+  background: palette.white,
+  border: `1px solid ${palette.line}`,
+  borderRadius: 8,
+  boxSizing: 'border-box',
+} as const;
 
 export function AuthLayout() {
   return (
@@ -28,9 +40,9 @@ export function AuthLayout() {
       >
         <Logo tone="light" size={34} />
         <div style={{ maxWidth: 440 }}>
-          <Typography.Title level={1} style={{ color: palette.white, fontWeight: 600, fontSize: 34, lineHeight: 1.15 }}>
+          <h1 style={{ color: palette.white, fontWeight: 600, fontSize: 34, lineHeight: 1.15, margin: '0 0 0.5em' }}>
             Plan the swap. Check the fit. Quote it right.
-          </Typography.Title>
+          </h1>
           <ul style={{ paddingInlineStart: 20, margin: 0, color: '#cfe0de', fontSize: 16, lineHeight: 1.6 }}>
             {points.map((p) => (
               <li key={p} style={{ marginBottom: 6 }}>
@@ -39,16 +51,20 @@ export function AuthLayout() {
             ))}
           </ul>
         </div>
-        <Typography.Text style={{ color: '#8fb0ad', fontSize: 13 }}>
-          A planning aid for shops and owner-builders. Measure before you cut.
-        </Typography.Text>
+        <span style={{ color: '#8fb0ad', fontSize: 13 }}>A planning aid for shops and owner-builders. Measure before you cut.</span>
       </aside>
       <main style={{ flex: '1 1 420px', display: 'grid', placeItems: 'center', padding: spacing.lg }}>
-        <Card style={{ width: '100%', maxWidth: 420 }} styles={{ body: { padding: spacing.xl } }}>
-          <Suspense fallback={<LoadingState rows={5} />}>
+        <section style={cardStyle}>
+          <Suspense
+            fallback={
+              <div data-testid="loading" aria-busy="true" aria-live="polite" style={{ color: palette.inkMuted }}>
+                Loading…
+              </div>
+            }
+          >
             <Outlet />
           </Suspense>
-        </Card>
+        </section>
       </main>
     </div>
   );

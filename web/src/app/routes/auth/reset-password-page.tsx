@@ -1,4 +1,3 @@
-import { Typography } from 'antd';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { ResetConfirmForm } from '@/features/auth/components/reset-confirm-form';
@@ -27,9 +26,9 @@ export function ResetPasswordPage() {
     <>
       <AuthHeading title="Reset your password" />
       <ResetRequestForm onBack={() => navigate(paths.signIn)} />
-      <Typography.Paragraph style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
+      <p style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
         <Link to={paths.signIn}>Back to sign in</Link>
-      </Typography.Paragraph>
+      </p>
     </>
   );
 }

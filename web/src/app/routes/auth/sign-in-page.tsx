@@ -1,4 +1,4 @@
-import { Divider, Typography } from 'antd';
+import { Divider } from 'antd';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
@@ -14,13 +14,13 @@ export function SignInPage() {
     <RedirectIfSignedIn>
       <AuthHeading title="Sign in" subtitle="Welcome back to the shop." />
       <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
-      <Typography.Paragraph style={{ marginTop: 12, textAlign: 'center' }}>
+      <p style={{ marginTop: 12, textAlign: 'center' }}>
         <Link to={paths.resetPassword}>Forgot your password?</Link>
-      </Typography.Paragraph>
+      </p>
       <Divider plain>New here?</Divider>
-      <Typography.Paragraph style={{ textAlign: 'center', margin: 0 }}>
+      <p style={{ textAlign: 'center', margin: 0 }}>
         <Link to={paths.signUp}>Create a shop</Link> — free for a one-person garage.
-      </Typography.Paragraph>
+      </p>
     </RedirectIfSignedIn>
   );
 }

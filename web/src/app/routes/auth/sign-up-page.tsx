@@ -1,4 +1,4 @@
-import { Alert, Spin, Typography } from 'antd';
+import { Alert, Spin } from 'antd';
 import { useEffect, useRef } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
@@ -24,9 +24,9 @@ function FinishSignUp({ token }: { token: string }) {
       <>
         <AuthHeading title="Create your shop" />
         <Alert type="error" showIcon role="alert" title={getErrorMessage(confirm.error)} />
-        <Typography.Paragraph style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
+        <p style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
           <Link to={paths.signUp}>Sign up again</Link> or <Link to={paths.signIn}>sign in</Link>
-        </Typography.Paragraph>
+        </p>
       </>
     );
   }
@@ -47,9 +47,9 @@ export function SignUpPage() {
     <RedirectIfSignedIn>
       <AuthHeading title="Create your shop" subtitle="You will be its owner and can invite your crew later. We e-mail you a link to finish." />
       <SignUpForm onBack={() => navigate(paths.signIn)} />
-      <Typography.Paragraph style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
+      <p style={{ marginTop: 16, textAlign: 'center', marginBottom: 0 }}>
         Already have an account? <Link to={paths.signIn}>Sign in</Link>
-      </Typography.Paragraph>
+      </p>
     </RedirectIfSignedIn>
   );
 }

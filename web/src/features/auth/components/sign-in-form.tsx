@@ -1,4 +1,8 @@
-import { Button, Form, Input } from 'antd';
+import { Button, Form } from 'antd';
+// The input and password modules alone: the antd Input entry also pulls in TextArea, Search and OTP, which the first
+// load (this form) does not use.
+import Input from 'antd/es/input/Input';
+import Password from 'antd/es/input/Password';
 import type { Session } from '@/types/api';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useSignIn, type SignInInput } from '../api/sign-in';
@@ -31,7 +35,7 @@ export function SignInForm({ onSignedIn, initialEmail }: SignInFormProps) {
         <Input type="email" autoComplete="email" autoFocus placeholder="you@yourshop.example" />
       </Form.Item>
       <Form.Item label="Password" name="password" rules={[{ required: true, message: 'Enter your password' }]}>
-        <Input.Password autoComplete="current-password" />
+        <Password autoComplete="current-password" />
       </Form.Item>
       <Button type="primary" htmlType="submit" block loading={signIn.isPending}>
         Sign in
