@@ -62,6 +62,17 @@ describe('parts catalog, plans and counter', () => {
     expect(pickup.rejected.find((r) => r.sku === 'BR-220')?.reason).toMatch(/does not agree/);
     expect(res.body.recheck.resolved).toContain('envelope.sump-crossmember');
     expect(res.body.version).toBe(1);
+    // The plan names the stored fit report it answers, and a plan can be built again from that same report.
+    const report = await t.http.get(`/api/fit-reports/${res.body.fitReportId}`).set(...bearer(demo.estimator));
+    expect(report.status).toBe(200);
+    expect(report.body.projectId).toBe(ridgeback);
+    const again = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({ fitReportId: res.body.fitReportId });
+    expect(again.status).toBe(201);
+    expect(again.body).toMatchObject({ fitReportId: res.body.fitReportId, version: 2, totalCents: res.body.totalCents });
+    const otherReport = await t.http.post(`/api/projects/${DEMO_PROJECT_IDS.stag}/fit-reports`).set(...bearer(demo.estimator)).send({});
+    const mixed = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({ fitReportId: otherReport.body.id });
+    expect(mixed.status).toBe(400);
+    expect(mixed.body.message).toMatch(/fitReportId must be a fit report of this project/);
     const customer = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.customer)).send({});
     expect(customer.status).toBe(403);
   });

@@ -15,6 +15,7 @@ import { CreateParts1796236436524 } from './migrations/1796236436524-create-part
 import { CreateQuotes1796236709687 } from './migrations/1796236709687-create-quotes';
 import { CreateDepositPayments1796239097244 } from './migrations/1796239097244-create-deposit-payments';
 import { PendingSignUps1796239565848 } from './migrations/1796239565848-pending-sign-ups';
+import { PartsPlansFitReport1796252953356 } from './migrations/1796252953356-parts-plans-fit-report';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -35,4 +36,5 @@ export const MIGRATIONS = [
   CreateDepositPayments1796239097244,
   PendingSignUps1796239565848,
   CreateMeasurements1796240364406,
+  PartsPlansFitReport1796252953356,
 ];

@@ -1,4 +1,4 @@
-import type { CatalogPartCategory, FitSpecKind, PartAttributes } from '@swapwright/shared';
+import type { CatalogPartCategory, CheckStatus, FitSpecKind, PartAttributes, PartsPlanResult } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 
@@ -128,6 +128,13 @@ export class PartStock {
 
 export type PlanStatus = 'draft' | 'locked';
 
+/** What the fit check says once the plan's parts are fitted. */
+export interface PlanRecheck {
+  summary: { ok: number; tight: number; fails: number; unknown: number };
+  resolved: string[];
+  remaining: Array<{ checkId: string; title: string; status: CheckStatus; message: string }>;
+}
+
 @Entity('parts_plans')
 export class PartsPlanRecord {
   @PrimaryColumn({ type: 'char', length: 36 })
@@ -152,10 +159,10 @@ export class PartsPlanRecord {
   fitReportId: string | null;
 
   @Column({ type: 'json' })
-  result: object;
+  result: PartsPlanResult;
 
   @Column({ type: 'json' })
-  recheck: object;
+  recheck: PlanRecheck;
 
   @Column({ type: 'int', unsigned: true })
   totalCents: number;

@@ -10,12 +10,13 @@ export function mapPlan(plan: PartsPlanRecord): PartsPlanResponseDto {
     version: plan.version,
     objective: plan.objective,
     status: plan.status,
+    fitReportId: plan.fitReportId,
     totalCents: plan.totalCents,
     solveMs: plan.solveMs,
     lockedAt: plan.lockedAt ? plan.lockedAt.toISOString() : null,
     createdAt: plan.createdAt.toISOString(),
-    result: plan.result as Record<string, unknown>,
-    recheck: plan.recheck as Record<string, unknown>,
+    result: plan.result,
+    recheck: plan.recheck,
   };
 }
 

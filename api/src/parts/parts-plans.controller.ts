@@ -31,7 +31,7 @@ export class PartsPlansController {
   @ApiCreatedResponse({ type: PartsPlanResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
   async build(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string, @Body() body: BuildPlanDto): Promise<PartsPlanResponseDto> {
-    return mapPlan(await this.plans.build(user, projectId, body.objective ?? 'lowest-cost', body.resolve));
+    return mapPlan(await this.plans.build(user, projectId, body.objective ?? 'lowest-cost', body.resolve, body.fitReportId));
   }
 
   @Get('projects/:projectId/parts-plans')

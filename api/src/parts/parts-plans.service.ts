@@ -23,20 +23,12 @@ import { DataSource, In, Not } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
 import { CatalogKind } from '../catalog/catalog-kinds';
 import { AuthUser } from '../common/tenant/auth-user';
-import { FitSettingsService } from '../fit-reports/fit-settings.service';
-import { FitSpecBuilderService } from '../fit-reports/fit-spec-builder.service';
+import { FitReportsService } from '../fit-reports/fit-reports.service';
 import { ProjectsService } from '../projects/projects.service';
 import { ShopsService } from '../shops/shops.service';
 import { MipSolverService } from './mip-solver.service';
-import { CounterLine, Part, PartStock, PartsPlanRecord } from './part.entity';
+import { CounterLine, Part, PartStock, PartsPlanRecord, type PlanRecheck } from './part.entity';
 import { PartsErrors } from './parts.errors';
-
-/** What the fit check says once the plan's parts are fitted. */
-export interface PlanRecheck {
-  summary: { ok: number; tight: number; fails: number; unknown: number };
-  resolved: string[];
-  remaining: Array<{ checkId: string; title: string; status: string; message: string }>;
-}
 
 const NOT_PLANNED = new Set(['engine', 'transmission']);
 
@@ -46,8 +38,7 @@ export class PartsPlansService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly projects: ProjectsService,
-    private readonly builder: FitSpecBuilderService,
-    private readonly settings: FitSettingsService,
+    private readonly fitReports: FitReportsService,
     private readonly catalog: CatalogService,
     private readonly solver: MipSolverService,
     private readonly shops: ShopsService,
@@ -92,12 +83,17 @@ export class PartsPlansService {
       }));
   }
 
-  async build(user: AuthUser, projectId: string, objective: PlanObjective, resolve?: string[]): Promise<PartsPlanRecord> {
+  /**
+   * A new plan version from a stored fit report of the project (the given one, or a fit check run and stored now),
+   * so the plan names the report whose shortfalls it answers.
+   */
+  async build(user: AuthUser, projectId: string, objective: PlanObjective, resolve?: string[], fitReportId?: string): Promise<PartsPlanRecord> {
     const project = await this.projects.get(user, projectId);
-    const overrides = await this.settings.overridesFor(user);
-    const built = await this.builder.build(user, project, overrides);
-    const spec = built.spec;
-    const report = runFitCheck(spec, overrides);
+    const stored = fitReportId ? await this.fitReports.get(user, fitReportId) : await this.fitReports.run(user, project.id);
+    if (stored.projectId !== project.id) throw PartsErrors.fitReportNotOfProject();
+    const spec = stored.inputsSnapshot.spec;
+    const overrides = stored.inputsSnapshot.settingsOverrides;
+    const report = stored.results;
     const parts = await this.planParts(user);
     const shop = await this.shops.getCurrent(user);
     const skuOfSpec = new Map(parts.filter((p) => p.fitSpecId).map((p) => [p.fitSpecId!, p.sku]));
@@ -147,9 +143,9 @@ export class PartsPlansService {
         version: Number(latest.v) + 1,
         objective,
         status: 'draft',
-        fitReportId: null,
-        result: result as unknown as object,
-        recheck: recheck as unknown as object,
+        fitReportId: stored.id,
+        result,
+        recheck,
         totalCents: result.totals.totalCents,
         solveMs,
         lockedAt: null,

@@ -12,6 +12,10 @@ export const PartsErrors = {
   fitSpecIncomplete: () =>
     new AppError(400, 'validation_failed', 'fitKind and fitSpecId go together: give both or neither', ['fitKind and fitSpecId go together: give both or neither']),
   fitSpecMissing: (kind: string) => new AppError(400, 'bad_reference', `The linked fit spec is not in your shop's ${kind} catalog.`),
+  fitReportNotOfProject: () =>
+    new AppError(400, 'validation_failed', 'fitReportId must be a fit report of this project; leave it out to plan from a new fit check.', [
+      'fitReportId must be a fit report of this project',
+    ]),
   planNotFound: () => new AppError(404, 'parts_plan_not_found', 'That parts plan does not exist in your shop.'),
   planLocked: (version: number) => new AppError(409, 'parts_plan_locked', `Plan version ${version} is locked for a quote; build a new version to change it.`),
   lineNotFound: () => new AppError(404, 'counter_line_not_found', 'That parts line does not exist in your shop.'),

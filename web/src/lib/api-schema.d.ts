@@ -3253,12 +3253,12 @@ export interface components {
             /** @description What the shop pays, integer cents. */
             costCents?: number;
             /** Format: uuid */
-            supplierId?: Record<string, never> | null;
-            supplierSku?: Record<string, never> | null;
+            supplierId?: string | null;
+            supplierSku?: string | null;
             /** @description Install labor, hours to a tenth. */
             laborHours?: number;
             torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
-            instructions?: Record<string, never> | null;
+            instructions?: string | null;
             /** @description Fitment attributes: sumpPosition, pickupMount, pumpInlet, railPattern, location (dipstick), crankSignals, camSignals, flowLph, pressurePsi, ratedKw, inletSide, outletSide, type, fabricationHours, ... */
             attributes?: {
                 [key: string]: string | number | boolean | string[];
@@ -3275,7 +3275,7 @@ export interface components {
              */
             fitKind?: "engines" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts" | null;
             /** Format: uuid */
-            fitSpecId?: Record<string, never> | null;
+            fitSpecId?: string | null;
         };
         UpdatePartDto: {
             /** @example TR-4410 */
@@ -3288,12 +3288,12 @@ export interface components {
             /** @description What the shop pays, integer cents. */
             costCents?: number;
             /** Format: uuid */
-            supplierId?: Record<string, never> | null;
-            supplierSku?: Record<string, never> | null;
+            supplierId?: string | null;
+            supplierSku?: string | null;
             /** @description Install labor, hours to a tenth. */
             laborHours?: number;
             torqueSpecs?: components["schemas"]["TorqueSpecDto"][];
-            instructions?: Record<string, never> | null;
+            instructions?: string | null;
             /** @description Fitment attributes: sumpPosition, pickupMount, pumpInlet, railPattern, location (dipstick), crankSignals, camSignals, flowLph, pressurePsi, ratedKw, inletSide, outletSide, type, fabricationHours, ... */
             attributes?: {
                 [key: string]: string | number | boolean | string[];
@@ -3310,7 +3310,7 @@ export interface components {
              */
             fitKind?: "engines" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts" | null;
             /** Format: uuid */
-            fitSpecId?: Record<string, never> | null;
+            fitSpecId?: string | null;
         };
         SetStockDto: {
             /** @example Main store */
@@ -3334,15 +3334,15 @@ export interface components {
         };
         CreateSupplierDto: {
             name: string;
-            contact?: Record<string, never> | null;
-            email?: Record<string, never> | null;
-            phone?: Record<string, never> | null;
+            contact?: string | null;
+            email?: string | null;
+            phone?: string | null;
         };
         UpdateSupplierDto: {
             name?: string;
-            contact?: Record<string, never> | null;
-            email?: Record<string, never> | null;
-            phone?: Record<string, never> | null;
+            contact?: string | null;
+            email?: string | null;
+            phone?: string | null;
         };
         BuildPlanDto: {
             /**
@@ -3352,6 +3352,114 @@ export interface components {
             objective?: "lowest-cost" | "least-fabrication" | "in-stock";
             /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
             resolve?: string[];
+            /**
+             * Format: uuid
+             * @description A stored fit report of this project to plan from; a new fit check is run and stored when absent.
+             */
+            fitReportId?: string;
+        };
+        PlanShortfallRefDto: {
+            checkId: string;
+            title: string;
+        };
+        PlanCandidateRejectionDto: {
+            partId: string;
+            sku: string;
+            description: string;
+            /** @description Price plus install labor at the shop rate, cents. */
+            totalCents: number;
+            /** @description Why it was not chosen. */
+            reason: string;
+        };
+        PlanPartPickDto: {
+            partId: string;
+            sku: string;
+            description: string;
+            /** @enum {string} */
+            category: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+            quantity: number;
+            priceCents: number;
+            laborHours: number;
+            laborCents: number;
+            totalCents: number;
+            fabricationHours: number;
+            /** @description Units free to reserve when the plan was built. */
+            available: number;
+            fitSpecId: string | null;
+            /** @description The shortfalls this part resolves. */
+            resolves: components["schemas"]["PlanShortfallRefDto"][];
+            /** @description The rules that brought it in. */
+            broughtInBy: string[];
+            /** @description Cheaper parts of the same kind and why each was not chosen. */
+            rejected: components["schemas"]["PlanCandidateRejectionDto"][];
+            explanation: string;
+        };
+        PlanOperationPickDto: {
+            operation: string;
+            laborHours: number;
+            laborCents: number;
+            resolves: components["schemas"]["PlanShortfallRefDto"][];
+            explanation: string;
+        };
+        PlanKeptPartDto: {
+            /** @enum {string} */
+            slot: "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "throttle-pedal" | "mount-adapter" | "bellhousing-adapter" | "fuel-pump" | "fuel-regulator" | "radiator" | "accessory-drive" | "cam-timing-set";
+            name: string;
+            note: string;
+        };
+        PlanUnresolvedDto: {
+            checkId: string;
+            title: string;
+            message: string;
+            /** @description What the catalog would need to hold for the plan to resolve it. */
+            catalogNeeds: string[];
+            reason: string;
+        };
+        PlanTotalsDto: {
+            partsCents: number;
+            laborHours: number;
+            laborCents: number;
+            fabricationHours: number;
+            totalCents: number;
+        };
+        PlanModelSizeDto: {
+            columns: number;
+            rows: number;
+            /** @description Solver runs (two for the fewest-fabrication plan). */
+            solves: number;
+        };
+        PartsPlanResultDto: {
+            /** @enum {string} */
+            objective: "lowest-cost" | "least-fabrication" | "in-stock";
+            /** @enum {string} */
+            status: "optimal" | "feasible" | "infeasible";
+            picks: components["schemas"]["PlanPartPickDto"][];
+            operations: components["schemas"]["PlanOperationPickDto"][];
+            kept: components["schemas"]["PlanKeptPartDto"][];
+            unresolved: components["schemas"]["PlanUnresolvedDto"][];
+            totals: components["schemas"]["PlanTotalsDto"];
+            notes: string[];
+            model: components["schemas"]["PlanModelSizeDto"];
+        };
+        PlanRecheckSummaryDto: {
+            ok: number;
+            tight: number;
+            fails: number;
+            unknown: number;
+        };
+        PlanRecheckRemainingDto: {
+            checkId: string;
+            title: string;
+            /** @enum {string} */
+            status: "ok" | "tight" | "fails" | "unknown";
+            message: string;
+        };
+        PlanRecheckDto: {
+            summary: components["schemas"]["PlanRecheckSummaryDto"];
+            /** @description Check ids the chosen parts resolve. */
+            resolved: string[];
+            /** @description Shortfalls still there with the chosen parts fitted. */
+            remaining: components["schemas"]["PlanRecheckRemainingDto"][];
         };
         PartsPlanResponseDto: {
             id: string;
@@ -3361,19 +3469,17 @@ export interface components {
             objective: "lowest-cost" | "least-fabrication" | "in-stock";
             /** @enum {string} */
             status: "draft" | "locked";
+            /** @description The stored fit report the plan was built from (null only on plans built before plans named their report). */
+            fitReportId: string | null;
             totalCents: number;
             /** @description Model build and solve time, ms. */
             solveMs: number;
             lockedAt: string | null;
             createdAt: string;
             /** @description Picks (each explained), operations, kept parts, unresolved shortfalls, totals. */
-            result: {
-                [key: string]: unknown;
-            };
+            result: components["schemas"]["PartsPlanResultDto"];
             /** @description The fit check run again with the chosen parts. */
-            recheck: {
-                [key: string]: unknown;
-            };
+            recheck: components["schemas"]["PlanRecheckDto"];
         };
         PlanSummaryResponseDto: {
             id: string;

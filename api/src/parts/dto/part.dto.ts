@@ -80,12 +80,12 @@ export class CreatePartDto {
   @Max(MAX_PRICE_CENTS)
   costCents?: number;
 
-  @ApiPropertyOptional({ format: 'uuid', nullable: true })
+  @ApiPropertyOptional({ type: String, format: 'uuid', nullable: true })
   @IsOptional()
   @IsUUID()
   supplierId?: string | null;
 
-  @ApiPropertyOptional({ maxLength: 64, nullable: true })
+  @ApiPropertyOptional({ type: String, maxLength: 64, nullable: true })
   @IsOptional()
   @IsString()
   @MaxLength(64)
@@ -106,7 +106,7 @@ export class CreatePartDto {
   @Type(() => TorqueSpecDto)
   torqueSpecs?: TorqueSpecDto[];
 
-  @ApiPropertyOptional({ maxLength: 4000, nullable: true })
+  @ApiPropertyOptional({ type: String, maxLength: 4000, nullable: true })
   @IsOptional()
   @IsString()
   @MaxLength(4000)
@@ -150,7 +150,7 @@ export class CreatePartDto {
   @IsIn(FIT_KINDS)
   fitKind?: (typeof FIT_KINDS)[number] | null;
 
-  @ApiPropertyOptional({ format: 'uuid', nullable: true })
+  @ApiPropertyOptional({ type: String, format: 'uuid', nullable: true })
   @IsOptional()
   @IsUUID()
   fitSpecId?: string | null;
@@ -246,19 +246,19 @@ export class CreateSupplierDto {
   @MaxLength(120)
   name: string;
 
-  @ApiPropertyOptional({ maxLength: 120, nullable: true })
+  @ApiPropertyOptional({ type: String, maxLength: 120, nullable: true })
   @IsOptional()
   @IsString()
   @MaxLength(120)
   contact?: string | null;
 
-  @ApiPropertyOptional({ maxLength: 254, nullable: true })
+  @ApiPropertyOptional({ type: String, maxLength: 254, nullable: true })
   @IsOptional()
   @IsString()
   @MaxLength(254)
   email?: string | null;
 
-  @ApiPropertyOptional({ maxLength: 40, nullable: true })
+  @ApiPropertyOptional({ type: String, maxLength: 40, nullable: true })
   @IsOptional()
   @IsString()
   @MaxLength(40)

@@ -1,6 +1,24 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { PLAN_OBJECTIVES, type PlanObjective } from '@swapwright/shared';
-import { ArrayMaxSize, IsArray, IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import {
+  CHECK_STATUSES,
+  PART_CATEGORIES,
+  PLAN_OBJECTIVES,
+  PLAN_SLOTS,
+  type CatalogPartCategory,
+  type CheckStatus,
+  type PartsPlanResult,
+  type PlanCandidateRejection,
+  type PlanKeptPart,
+  type PlanObjective,
+  type PlanOperationPick,
+  type PlanPartPick,
+  type PlanShortfallRef,
+  type PlanSlot,
+  type PlanTotals,
+  type PlanUnresolved,
+} from '@swapwright/shared';
+import { ArrayMaxSize, IsArray, IsIn, IsNotEmpty, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
+import type { PlanRecheck } from '../part.entity';
 import { Trim } from '../../common/decorators/trim.decorator';
 import { COUNTER_STATUSES } from '../part.entity';
 import { StockResponseDto } from './part.dto';
@@ -17,6 +35,111 @@ export class BuildPlanDto {
   @ArrayMaxSize(100)
   @IsString({ each: true })
   resolve?: string[];
+
+  @ApiPropertyOptional({ format: 'uuid', description: "A stored fit report of this project to plan from; a new fit check is run and stored when absent." })
+  @IsOptional()
+  @IsUUID('all', { message: 'fitReportId must be the id of a fit report of this project' })
+  fitReportId?: string;
+}
+
+export class PlanShortfallRefDto implements PlanShortfallRef {
+  @ApiProperty() checkId: string;
+  @ApiProperty() title: string;
+}
+
+export class PlanCandidateRejectionDto implements PlanCandidateRejection {
+  @ApiProperty() partId: string;
+  @ApiProperty() sku: string;
+  @ApiProperty() description: string;
+  @ApiProperty({ description: 'Price plus install labor at the shop rate, cents.' }) totalCents: number;
+  @ApiProperty({ description: 'Why it was not chosen.' }) reason: string;
+}
+
+export class PlanPartPickDto implements PlanPartPick {
+  @ApiProperty() partId: string;
+  @ApiProperty() sku: string;
+  @ApiProperty() description: string;
+  @ApiProperty({ enum: PART_CATEGORIES }) category: CatalogPartCategory;
+  @ApiProperty() quantity: number;
+  @ApiProperty() priceCents: number;
+  @ApiProperty() laborHours: number;
+  @ApiProperty() laborCents: number;
+  @ApiProperty() totalCents: number;
+  @ApiProperty() fabricationHours: number;
+  @ApiProperty({ description: 'Units free to reserve when the plan was built.' }) available: number;
+  @ApiProperty({ type: String, nullable: true }) fitSpecId: string | null;
+  @ApiProperty({ type: [PlanShortfallRefDto], description: 'The shortfalls this part resolves.' }) resolves: PlanShortfallRefDto[];
+  @ApiProperty({ type: [String], description: 'The rules that brought it in.' }) broughtInBy: string[];
+  @ApiProperty({ type: [PlanCandidateRejectionDto], description: 'Cheaper parts of the same kind and why each was not chosen.' }) rejected: PlanCandidateRejectionDto[];
+  @ApiProperty() explanation: string;
+}
+
+export class PlanOperationPickDto implements PlanOperationPick {
+  @ApiProperty() operation: string;
+  @ApiProperty() laborHours: number;
+  @ApiProperty() laborCents: number;
+  @ApiProperty({ type: [PlanShortfallRefDto] }) resolves: PlanShortfallRefDto[];
+  @ApiProperty() explanation: string;
+}
+
+export class PlanKeptPartDto implements PlanKeptPart {
+  @ApiProperty({ enum: PLAN_SLOTS }) slot: PlanSlot;
+  @ApiProperty() name: string;
+  @ApiProperty() note: string;
+}
+
+export class PlanUnresolvedDto implements PlanUnresolved {
+  @ApiProperty() checkId: string;
+  @ApiProperty() title: string;
+  @ApiProperty() message: string;
+  @ApiProperty({ type: [String], description: 'What the catalog would need to hold for the plan to resolve it.' }) catalogNeeds: string[];
+  @ApiProperty() reason: string;
+}
+
+export class PlanTotalsDto implements PlanTotals {
+  @ApiProperty() partsCents: number;
+  @ApiProperty() laborHours: number;
+  @ApiProperty() laborCents: number;
+  @ApiProperty() fabricationHours: number;
+  @ApiProperty() totalCents: number;
+}
+
+export class PlanModelSizeDto {
+  @ApiProperty() columns: number;
+  @ApiProperty() rows: number;
+  @ApiProperty({ description: 'Solver runs (two for the fewest-fabrication plan).' }) solves: number;
+}
+
+export class PartsPlanResultDto implements PartsPlanResult {
+  @ApiProperty({ enum: PLAN_OBJECTIVES }) objective: PlanObjective;
+  @ApiProperty({ enum: ['optimal', 'feasible', 'infeasible'] }) status: 'optimal' | 'feasible' | 'infeasible';
+  @ApiProperty({ type: [PlanPartPickDto] }) picks: PlanPartPickDto[];
+  @ApiProperty({ type: [PlanOperationPickDto] }) operations: PlanOperationPickDto[];
+  @ApiProperty({ type: [PlanKeptPartDto] }) kept: PlanKeptPartDto[];
+  @ApiProperty({ type: [PlanUnresolvedDto] }) unresolved: PlanUnresolvedDto[];
+  @ApiProperty({ type: PlanTotalsDto }) totals: PlanTotalsDto;
+  @ApiProperty({ type: [String] }) notes: string[];
+  @ApiProperty({ type: PlanModelSizeDto }) model: PlanModelSizeDto;
+}
+
+export class PlanRecheckSummaryDto {
+  @ApiProperty() ok: number;
+  @ApiProperty() tight: number;
+  @ApiProperty() fails: number;
+  @ApiProperty() unknown: number;
+}
+
+export class PlanRecheckRemainingDto {
+  @ApiProperty() checkId: string;
+  @ApiProperty() title: string;
+  @ApiProperty({ enum: CHECK_STATUSES }) status: CheckStatus;
+  @ApiProperty() message: string;
+}
+
+export class PlanRecheckDto implements PlanRecheck {
+  @ApiProperty({ type: PlanRecheckSummaryDto }) summary: PlanRecheckSummaryDto;
+  @ApiProperty({ type: [String], description: 'Check ids the chosen parts resolve.' }) resolved: string[];
+  @ApiProperty({ type: [PlanRecheckRemainingDto], description: 'Shortfalls still there with the chosen parts fitted.' }) remaining: PlanRecheckRemainingDto[];
 }
 
 export class PartsPlanResponseDto {
@@ -25,14 +148,16 @@ export class PartsPlanResponseDto {
   @ApiProperty() version: number;
   @ApiProperty({ enum: PLAN_OBJECTIVES }) objective: string;
   @ApiProperty({ enum: ['draft', 'locked'] }) status: string;
+  @ApiProperty({ type: String, nullable: true, description: 'The stored fit report the plan was built from (null only on plans built before plans named their report).' })
+  fitReportId: string | null;
   @ApiProperty() totalCents: number;
   @ApiProperty({ description: 'Model build and solve time, ms.' }) solveMs: number;
   @ApiProperty({ nullable: true, type: String }) lockedAt: string | null;
   @ApiProperty() createdAt: string;
-  @ApiProperty({ type: 'object', additionalProperties: true, description: 'Picks (each explained), operations, kept parts, unresolved shortfalls, totals.' })
-  result: Record<string, unknown>;
-  @ApiProperty({ type: 'object', additionalProperties: true, description: 'The fit check run again with the chosen parts.' })
-  recheck: Record<string, unknown>;
+  @ApiProperty({ type: PartsPlanResultDto, description: 'Picks (each explained), operations, kept parts, unresolved shortfalls, totals.' })
+  result: PartsPlanResultDto;
+  @ApiProperty({ type: PlanRecheckDto, description: 'The fit check run again with the chosen parts.' })
+  recheck: PlanRecheckDto;
 }
 
 export class PlanSummaryResponseDto {

@@ -3,14 +3,16 @@ import { PageHeader } from '@/components/page-header';
 import { CounterBoard } from '@/features/counter/components/counter-board';
 import { PartsImport } from '@/features/parts/components/parts-import';
 import { PartsTable } from '@/features/parts/components/parts-table';
+import { SuppliersTable } from '@/features/parts/components/suppliers-table';
 
-/** The parts counter: jobs' matched parts lists, the parts with stock and bins, and supplier file import. */
+/** The parts counter (owner and counter staff, who keep the catalog): jobs' matched parts lists, parts with stock and bins, suppliers, and supplier file import. */
 export function PartsCounterBody() {
   return (
     <Tabs
       items={[
         { key: 'jobs', label: 'Jobs', children: <CounterBoard /> },
-        { key: 'parts', label: 'Parts and stock', children: <PartsTable /> },
+        { key: 'parts', label: 'Parts and stock', children: <PartsTable canEdit /> },
+        { key: 'suppliers', label: 'Suppliers', children: <SuppliersTable canEdit /> },
         { key: 'import', label: 'Import CSV', children: <PartsImport /> },
       ]}
     />

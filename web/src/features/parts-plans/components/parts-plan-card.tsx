@@ -1,7 +1,8 @@
 import { Alert, Button, Card, Descriptions, Empty, List, Select, Space, Table, Tag, Typography } from 'antd';
-import type { PartsPlanResult, PlanObjective, PlanPartPick } from '@swapwright/shared';
+import type { PlanObjective } from '@swapwright/shared';
 import { PLAN_OBJECTIVES } from '@swapwright/shared';
 import { useState } from 'react';
+import type { Schemas } from '@/lib/api-types';
 import { formatMoneyCents } from '@/lib/units';
 import { useBuildPartsPlan } from '../api/build-parts-plan';
 import { useProjectPartsPlans } from '../api/get-project-parts-plans';
@@ -22,7 +23,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
   const lock = useLockPartsPlan();
   const [objective, setObjective] = useState<PlanObjective>('lowest-cost');
   const latest = plans.data?.[0];
-  const result = latest?.result as unknown as PartsPlanResult | undefined;
+  const result = latest?.result;
   const money = (cents: number) => formatMoneyCents(cents, currency);
 
   return (
@@ -67,7 +68,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
           {result.notes.map((note) => (
             <Alert key={note} type="info" showIcon message={note} />
           ))}
-          <Table<PlanPartPick>
+          <Table<Schemas['PlanPartPickDto']>
             size="small"
             rowKey="partId"
             pagination={false}
@@ -126,7 +127,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             />
           )}
           <Typography.Text type="secondary">
-            Re-checked with the chosen parts: {String((latest.recheck as { summary?: { fails?: number } }).summary?.fails ?? 0)} checks still fail. Fuel
+            Re-checked with the chosen parts: {latest.recheck.summary.fails} checks still fail. Fuel
             system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
           </Typography.Text>
           {canBuild && latest.status !== 'locked' && (

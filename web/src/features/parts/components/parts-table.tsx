@@ -5,11 +5,15 @@ import { serverPagination } from '@/lib/table';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPartsCsv } from '../api/download-parts-csv';
 import { type Part, type PartListQuery, useParts } from '../api/get-parts';
+import { useSuppliers } from '../api/get-suppliers';
+import { PartFormDrawer } from './part-form-drawer';
 
-/** The shop's parts with stock and bins: server-side paging, search and filters. */
-export function PartsTable() {
+/** The shop's parts with stock and bins: server-side paging, search and filters; add and edit parts in a drawer. */
+export function PartsTable({ canEdit = false }: { canEdit?: boolean }) {
   const [query, setQuery] = useState<PartListQuery>({ page: 1, pageSize: 20 });
   const parts = useParts(query);
+  const suppliers = useSuppliers({ page: 1, pageSize: 100 });
+  const [editing, setEditing] = useState<Part | null | undefined>(undefined);
   return (
     <Space direction="vertical" style={{ width: '100%' }}>
       <Space wrap>
@@ -17,22 +21,35 @@ export function PartsTable() {
           aria-label="Search parts"
           placeholder="SKU, description or supplier SKU"
           allowClear
-          style={{ width: 280 }}
+          style={{ width: 280, maxWidth: '100%' }}
           onSearch={(search) => setQuery((q) => ({ ...q, page: 1, search: search || undefined }))}
         />
         <Select<CatalogPartCategory>
           aria-label="Category"
           allowClear
           placeholder="Every category"
-          style={{ width: 220 }}
+          style={{ width: 220, maxWidth: '100%' }}
           options={PART_CATEGORIES.map((value) => ({ value, label: PART_CATEGORY_LABELS[value] }))}
           onChange={(category) => setQuery((q) => ({ ...q, page: 1, category }))}
+        />
+        <Select<string>
+          aria-label="Supplier"
+          allowClear
+          placeholder="Every supplier"
+          style={{ width: 200, maxWidth: '100%' }}
+          options={(suppliers.data?.items ?? []).map((s) => ({ value: s.id, label: s.name }))}
+          onChange={(supplierId) => setQuery((q) => ({ ...q, page: 1, supplierId }))}
         />
         <Space>
           <Switch aria-label="In stock only" onChange={(inStock) => setQuery((q) => ({ ...q, page: 1, inStock: inStock || undefined }))} />
           <Typography.Text>In stock only</Typography.Text>
         </Space>
         <Button onClick={() => void downloadPartsCsv()}>Export CSV</Button>
+        {canEdit && (
+          <Button type="primary" onClick={() => setEditing(null)}>
+            New part
+          </Button>
+        )}
       </Space>
       <Table<Part>
         size="small"
@@ -51,8 +68,12 @@ export function PartsTable() {
           { title: 'On hand', dataIndex: 'onHand', align: 'right' },
           { title: 'Free', dataIndex: 'available', align: 'right' },
           { title: 'Bins', key: 'bins', render: (_, p) => p.stock.map((s) => `${s.location} ${s.bin}`.trim()).join(', ') || '—' },
+          ...(canEdit
+            ? [{ title: '', key: 'edit', width: 70, render: (_: unknown, p: Part) => <Button size="small" aria-label={`Edit ${p.sku}`} onClick={() => setEditing(p)}>Edit</Button> }]
+            : []),
         ]}
       />
+      <PartFormDrawer open={editing !== undefined} part={editing} onClose={() => setEditing(undefined)} />
     </Space>
   );
 }
