@@ -4,6 +4,7 @@
 #   test      the same set-up on a fresh test database, then every suite; exits non-zero on any failure
 #   reset     stop everything and wipe the local data folder (.local/)
 #   services  start the test services only and leave them running (for working on the API); prints the env file
+#   bench     build, start a private MariaDB, the fakes and the API on fresh demo data, print the bench table, stop them
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "$0")/.." && pwd)"
@@ -295,6 +296,28 @@ cmd_test() {
   echo "tests: $totals"
 }
 
+cmd_bench() {
+  rm -rf "$LOCAL/bench"; mkdir -p "$LOCAL/bench"
+  NEED_CHROMIUM=1 ensure_debian_packages
+  ensure_node_modules
+  build_all
+  FRESH_DB=1 db_start bench 3337 swapwright_bench
+  mail_start bench 2555
+  API_PID=""
+  local api_port; api_port="$(free_port 3300)"
+  payment_start bench 12141 "$api_port"
+  trap 'kill $API_PID 2>/dev/null || true; wait $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
+  # Production settings, as a shop would run it; the sign-in limit stays out of the way of the bench's own sign-ins.
+  NODE_ENV_VALUE=production AUTH_RATE_LIMIT_VALUE=1000 write_env bench swapwright_bench "$api_port"
+  migrate_and_seed
+  say "Starting the API (log: .local/bench/api.log)"
+  node api/dist/main.js >"$LOCAL/bench/api.log" 2>&1 &
+  API_PID=$!
+  wait_for_api
+  say "Measuring (about three minutes)"
+  BENCH_BASE_URL="http://127.0.0.1:$PORT" CHROMIUM_PATH=/usr/bin/chromium node --import tsx scripts/bench/bench.ts
+}
+
 cmd_services() {
   mkdir -p "$LOCAL/test"
   ensure_debian_packages
@@ -324,6 +347,7 @@ case "${1:-}" in
   test) cmd_test ;;
   reset) cmd_reset ;;
   services) cmd_services ;;
+  bench) cmd_bench ;;
   stop-services) cmd_stop_services ;;
-  *) echo "usage: stack.sh start|test|reset|services|stop-services" >&2; exit 2 ;;
+  *) echo "usage: stack.sh start|test|reset|services|stop-services|bench" >&2; exit 2 ;;
 esac

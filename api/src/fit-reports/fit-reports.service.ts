@@ -63,9 +63,11 @@ export class FitReportsService {
       worstStatus: worstStatus(report.summary),
     });
     await this.dataSource.transaction(async (manager) => {
-      await manager.insert(FitReportRecord, record);
-      // Running a check moves a project that is still being set up on to the checking stage.
+      // Running a check moves a project that is still being set up on to the checking stage. The project's row is
+      // locked first: inserting the report first takes a shared lock on it (the foreign key), and two runs on one
+      // project that both then ask to update it deadlock.
       await this.projects.advanceStatus(user.shopId, project.id, 'checking', manager);
+      await manager.insert(FitReportRecord, record);
     });
     return this.get(user, record.id);
   }
