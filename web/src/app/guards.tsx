@@ -4,7 +4,7 @@ import { paths, toSignIn } from '@/config/paths';
 import { getStatus } from '@/lib/api-error';
 import { tokenStorage } from '@/lib/token-storage';
 import { useCurrentUser } from '@/features/auth/api/get-current-user';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 import { FullPageSplash } from './splash';
 
 // Lazy so the first chunk carries no antd Result artwork.

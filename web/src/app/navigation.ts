@@ -1,5 +1,5 @@
 import { paths } from '@/config/paths';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 
 export type NavItem = {
   key: string;

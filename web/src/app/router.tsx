@@ -2,7 +2,7 @@ import { lazy, Suspense, type ComponentType, type ReactNode } from 'react';
 import { createBrowserRouter, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { paths, toSignIn } from '@/config/paths';
 import { setUnauthorizedHandler } from '@/lib/api-client';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 import { RequireAuth, RequireRole } from './guards';
 import { sectionRoles } from './navigation';
 import { FullPageSplash } from './splash';

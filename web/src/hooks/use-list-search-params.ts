@@ -1,6 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import type { SortOrder } from '@/types/api';
+import type { SortOrder } from '@/lib/api-types';
 
 export type ListParams<TSort extends string> = {
   page: number;

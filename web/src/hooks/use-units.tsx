@@ -1,6 +1,6 @@
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
 import { displayToMm, formatLength, mmToDisplay, parseLength, unitLabels } from '@/lib/units';
-import type { UnitSystem } from '@/types/api';
+import type { UnitSystem } from '@swapwright/shared';
 
 const OVERRIDE_KEY = 'swapwright.unitSystem';
 

@@ -4,7 +4,7 @@ import { paths, toSignIn } from '@/config/paths';
 import { getErrorMessage, getApiErrorBody } from '@/lib/api-error';
 import { notifyError } from '@/lib/notifier';
 import { tokenStorage } from '@/lib/token-storage';
-import type { Session } from '@/types/api';
+import type { Session } from '@/lib/api-types';
 
 declare module 'axios' {
   interface AxiosRequestConfig {

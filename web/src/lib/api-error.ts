@@ -1,5 +1,8 @@
 import { isAxiosError } from 'axios';
-import type { ApiErrorBody } from '@/types/api';
+import type { Schemas } from '@/lib/api-types';
+
+/** The API's error answer (every 4xx/5xx the API itself sends). */
+export type ApiErrorBody = Schemas['ErrorResponseDto'];
 
 export function getApiErrorBody(error: unknown): ApiErrorBody | null {
   if (!isAxiosError(error)) return null;
@@ -10,8 +13,8 @@ export function getApiErrorBody(error: unknown): ApiErrorBody | null {
       error: data.error ?? '',
       code: data.code ?? 'unknown',
       message: data.message,
-      details: data.details,
-      correlationId: data.correlationId,
+      details: data.details ?? [],
+      correlationId: data.correlationId ?? '',
     };
   }
   return null;

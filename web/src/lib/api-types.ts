@@ -28,3 +28,12 @@ export type RequestBodyOf<P extends keyof paths, M extends keyof paths[P]> =
 /** The query parameters of a route, e.g. `QueryOf<'/api/customers', 'get'>`. */
 export type QueryOf<P extends keyof paths, M extends keyof paths[P]> =
   Operation<P, M> extends { parameters: { query?: infer Q } } ? NonNullable<Q> : never;
+
+/** A paged list's query parameters as the web sends them: page and size always (the tables keep them in the URL). */
+export type PagedQueryOf<P extends keyof paths> = QueryOf<P, 'get' & keyof paths[P]> & { page: number; pageSize: number };
+
+/** Names for the shapes that more than one part of the web uses (features keep their own beside their api/). */
+export type CurrentUser = Schemas['CurrentUserResponseDto'];
+export type Session = Schemas['SessionResponseDto'];
+/** Sort direction of every paged list (`order=asc|desc`). */
+export type SortOrder = NonNullable<QueryOf<'/api/customers', 'get'>['order']>;

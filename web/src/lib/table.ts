@@ -1,6 +1,6 @@
 import type { TablePaginationConfig } from 'antd';
 import type { SorterResult } from 'antd/es/table/interface';
-import type { SortOrder } from '@/types/api';
+import type { SortOrder } from '@/lib/api-types';
 import { PAGE_SIZES } from '@/hooks/use-list-search-params';
 
 export type TableSort<TSort extends string> = { sort?: TSort; order?: SortOrder };

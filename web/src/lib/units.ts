@@ -1,5 +1,5 @@
 import { inchesToMm, kwToHp, mmToInches, parseLengthResult } from '@swapwright/shared';
-import type { UnitSystem } from '@/types/api';
+import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
 

@@ -1,4 +1,5 @@
-import type { CurrentUser, Page, Role, Session } from '@/types/api';
+import type { Role } from '@swapwright/shared';
+import type { CurrentUser, Schemas, Session } from '@/lib/api-types';
 import type { Customer } from '@/features/customers/types';
 
 export const shopStub = { id: 'shop-ironbark', name: 'Ironbark Swap Works', unitSystem: 'in' as const };
@@ -44,6 +45,6 @@ export const customerStubs: Customer[] = [
   },
 ];
 
-export function pageOf<T>(items: T[], page = 1, pageSize = 20, total = items.length): Page<T> {
+export function pageOf<T>(items: T[], page = 1, pageSize = 20, total = items.length): { items: T[] } & Schemas['PageMetaResponseDto'] {
   return { items, total, page, pageSize };
 }

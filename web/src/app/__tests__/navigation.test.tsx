@@ -1,7 +1,7 @@
 import { render, screen, within } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 import { activeNavKey, navItemsFor } from '../navigation';
 import { AppNav } from '../routes/app/app-nav';
 

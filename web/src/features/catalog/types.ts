@@ -1,17 +1,15 @@
+import type { CatalogKind } from '@swapwright/shared';
+import type { PagedQueryOf, RequestBodyOf, ResponseOf } from '@/lib/api-types';
+
 export { CATALOG_KIND_NAMES as catalogKinds, type CatalogKind } from '@swapwright/shared';
 
-export type CatalogSpec = Record<string, unknown>;
+/** One catalog entry of a kind as the API answers it (`/api/catalog/<kind>/{id}`). */
+export type CatalogItemOf<K extends CatalogKind> = ResponseOf<`/api/catalog/${K}/{id}`, 'get'>;
+/** An entry of any kind (the table and the form treat every kind alike). */
+export type CatalogItem = CatalogItemOf<CatalogKind>;
+export type CatalogPageOf<K extends CatalogKind> = ResponseOf<`/api/catalog/${K}`, 'get'>;
+export type CatalogItemInputOf<K extends CatalogKind> = RequestBodyOf<`/api/catalog/${K}`, 'post'>;
+export type CatalogItemChangesOf<K extends CatalogKind> = RequestBodyOf<`/api/catalog/${K}/{id}`, 'patch'>;
 
-/** One catalog entry: `spec` is the shared fit-spec type of its kind. */
-export type CatalogItem<S = CatalogSpec> = {
-  id: string;
-  name: string;
-  spec: S;
-  createdAt?: string;
-  updatedAt?: string;
-};
-
-export type CatalogListQuery = { page: number; pageSize: number; search?: string };
-
-/** The body of a create or update: the spec itself without its id (the server assigns it). */
-export type CatalogItemInput = CatalogSpec & { name: string };
+/** The list's query (every kind takes the same paging and search; page and size always sent). */
+export type CatalogListQuery = Pick<PagedQueryOf<'/api/catalog/engines'>, 'page' | 'pageSize' | 'search'>;

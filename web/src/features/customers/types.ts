@@ -1,24 +1,11 @@
-export type Customer = {
-  id: string;
-  name: string;
-  email: string | null;
-  phone: string | null;
-  notes: string | null;
-  userId: string | null;
-  createdAt: string;
-  updatedAt: string;
-};
+import type { PagedQueryOf, RequestBodyOf, ResponseOf, Schemas } from '@/lib/api-types';
 
-export type CustomerSort = 'name' | 'email' | 'createdAt' | 'updatedAt';
+export type Customer = Schemas['CustomerResponseDto'];
+export type CustomerPage = ResponseOf<'/api/customers', 'get'>;
+export type CustomerListQuery = PagedQueryOf<'/api/customers'>;
+export type CustomerSort = NonNullable<CustomerListQuery['sort']>;
+export type CustomerInput = RequestBodyOf<'/api/customers', 'post'>;
+export type CustomerChanges = RequestBodyOf<'/api/customers/{id}', 'patch'>;
 
+/** The columns the table lets a person sort by (all of them the API sorts by). */
 export const customerSortFields: readonly CustomerSort[] = ['name', 'email', 'createdAt', 'updatedAt'];
-
-export type CustomerListQuery = {
-  page: number;
-  pageSize: number;
-  sort?: CustomerSort;
-  order?: 'asc' | 'desc';
-  search?: string;
-};
-
-export type CustomerInput = { name: string; email?: string; phone?: string; notes?: string };

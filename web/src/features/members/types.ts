@@ -1,10 +1,10 @@
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
+import type { RequestBodyOf, Schemas } from '@/lib/api-types';
 
-export type Membership = { id: string; userId: string; email: string; name: string; role: Role; createdAt: string };
-
-export type Invitation = { id: string; email: string; role: Role; expiresAt: string; acceptedAt: string | null };
-
-export type CreateInvitationInput = { email: string; role: Role; customerId?: string };
+export type Membership = Schemas['MembershipResponseDto'];
+export type Invitation = Schemas['InvitationResponseDto'];
+export type CreateInvitationInput = RequestBodyOf<'/api/invitations', 'post'>;
+export type MembershipChanges = RequestBodyOf<'/api/memberships/{id}', 'patch'>;
 
 export const roleLabels: Record<Role, string> = {
   owner: 'Owner',

@@ -1,57 +1,17 @@
-import type { ProjectStatus, SwapUse as ProjectUse } from '@swapwright/shared';
+import type { PagedQueryOf, RequestBodyOf, ResponseOf, Schemas } from '@/lib/api-types';
 
 export { PROJECT_STATUSES as projectStatuses, SWAP_USES as projectUses, type ProjectStatus, type SwapUse as ProjectUse } from '@swapwright/shared';
 
-export type ProjectGoals = {
-  use: ProjectUse;
-  targetPowerKw: number | null;
-  revLimitRpm: number | null;
-  budgetCents: number | null;
-};
+export type Project = Schemas['ProjectResponseDto'];
+/** The use, target power, rev limit and budget the swap is planned for. */
+export type ProjectGoals = Schemas['ProjectGoalsResponseDto'];
+/** Where the engine sits (null until someone sets it; the fit check then proposes one). */
+export type ProjectPlacement = Schemas['ProjectPlacementResponseDto'];
+export type ProjectPage = ResponseOf<'/api/projects', 'get'>;
+export type ProjectListQuery = PagedQueryOf<'/api/projects'>;
+export type ProjectSort = NonNullable<ProjectListQuery['sort']>;
+export type CreateProjectInput = RequestBodyOf<'/api/projects', 'post'>;
+export type UpdateProjectInput = RequestBodyOf<'/api/projects/{id}', 'patch'>;
 
-export type ProjectPlacement = { setbackMm: number; heightMm: number; tiltDeg: number };
-
-export type Project = {
-  id: string;
-  title: string;
-  status: ProjectStatus;
-  customerId: string;
-  customer: { id: string; name: string };
-  vehicleDescription: string;
-  chassisModelId: string | null;
-  engineProfileId: string | null;
-  transmissionId: string | null;
-  goals: ProjectGoals;
-  placement: ProjectPlacement | null;
-  createdAt: string;
-  updatedAt: string;
-};
-
-export type ProjectSort = 'title' | 'status' | 'createdAt' | 'updatedAt';
-
+/** The columns the table lets a person sort by (all of them the API sorts by). */
 export const projectSortFields: readonly ProjectSort[] = ['title', 'status', 'createdAt', 'updatedAt'];
-
-export type ProjectListQuery = {
-  page: number;
-  pageSize: number;
-  sort?: ProjectSort;
-  order?: 'asc' | 'desc';
-  status?: ProjectStatus;
-  customerId?: string;
-  search?: string;
-};
-
-export type CreateProjectInput = {
-  title: string;
-  customerId: string;
-  vehicleDescription: string;
-  goals: ProjectGoals;
-};
-
-export type UpdateProjectInput = Partial<CreateProjectInput> & {
-  engineProfileId?: string | null;
-  chassisModelId?: string | null;
-  transmissionId?: string | null;
-  status?: ProjectStatus;
-  placement?: ProjectPlacement | null;
-};

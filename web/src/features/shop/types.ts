@@ -1,13 +1,12 @@
-import type { UnitSystem } from '@/types/api';
+import type { RequestBodyOf, ResponseOf, Schemas } from '@/lib/api-types';
 
-export type Shop = {
-  id: string;
-  name: string;
-  unitSystem: UnitSystem;
-  laborRatePerHour: number;
-  taxRatePercent: number;
-  shopSuppliesPercent: number;
-  currency: string;
-};
+/** What `GET /api/shops/current` answers: staff get the shop with its rates, customers only its summary. */
+export type CurrentShop = ResponseOf<'/api/shops/current', 'get'>;
+/** The shop with its rates (staff; what an update answers). */
+export type Shop = Schemas['ShopResponseDto'];
+export type UpdateShopInput = RequestBodyOf<'/api/shops/current', 'patch'>;
 
-export type UpdateShopInput = Partial<Omit<Shop, 'id'>>;
+/** Whether the answer holds the shop's rates (it does for staff). */
+export function hasShopRates(shop: CurrentShop): shop is Shop {
+  return 'laborRatePerHour' in shop;
+}

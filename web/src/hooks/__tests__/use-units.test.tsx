@@ -1,7 +1,7 @@
 import { act, renderHook } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { describe, expect, it } from 'vitest';
-import type { UnitSystem } from '@/types/api';
+import type { UnitSystem } from '@swapwright/shared';
 import { UnitsProvider, useUnits } from '../use-units';
 
 function wrapperFor(shopSystem: UnitSystem) {

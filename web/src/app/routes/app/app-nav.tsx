@@ -1,7 +1,7 @@
 import { Menu } from 'antd';
 import type { MenuProps } from 'antd';
 import { Link, useLocation } from 'react-router-dom';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 import { activeNavKey, navItemsFor } from '../../navigation';
 
 export type AppNavProps = { role: Role; onNavigate?: () => void };

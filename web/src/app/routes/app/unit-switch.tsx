@@ -1,6 +1,6 @@
 import { Segmented, Tooltip } from 'antd';
 import { useUnits } from '@/hooks/use-units';
-import { unitSystems, type UnitSystem } from '@/types/api';
+import { UNIT_SYSTEMS as unitSystems, type UnitSystem } from '@swapwright/shared';
 
 export function UnitSwitch() {
   const { system, shopSystem, setOverride } = useUnits();

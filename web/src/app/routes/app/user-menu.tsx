@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { palette } from '@/config/theme';
 import { useSignOut } from '@/features/auth/api/sign-out';
-import type { CurrentUser } from '@/types/api';
+import type { CurrentUser } from '@/lib/api-types';
 
 const roleNames: Record<CurrentUser['role'], string> = {
   owner: 'Owner',

@@ -1,8 +1,10 @@
+import { Alert } from 'antd';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useShop } from '@/features/shop/api/get-shop';
 import { ShopSettingsForm } from '@/features/shop/components/shop-settings-form';
+import { hasShopRates } from '@/features/shop/types';
 
 export function ShopSettingsPage() {
   const user = useSignedInUser();
@@ -14,8 +16,10 @@ export function ShopSettingsPage() {
         <LoadingState rows={8} />
       ) : shop.isError ? (
         <ErrorState error={shop.error} onRetry={() => void shop.refetch()} />
-      ) : (
+      ) : hasShopRates(shop.data) ? (
         <ShopSettingsForm shop={shop.data} canEdit={user.role === 'owner'} />
+      ) : (
+        <Alert type="info" showIcon title="The shop's rates are shown to its staff only." />
       )}
     </>
   );

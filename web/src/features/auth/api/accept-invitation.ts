@@ -1,9 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Session } from '@/types/api';
+import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
 
-export type AcceptInvitationInput = { token: string; name: string; password: string };
+export type AcceptInvitationInput = RequestBodyOf<'/api/invitations/accept', 'post'>;
 
 export async function acceptInvitation(input: AcceptInvitationInput): Promise<Session> {
   const { data } = await apiClient.post<Session>('/invitations/accept', input, {

@@ -1,7 +1,8 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
+import type { RequestBodyOf } from '@/lib/api-types';
 
-export type PasswordResetConfirmInput = { token: string; password: string };
+export type PasswordResetConfirmInput = RequestBodyOf<'/api/auth/password-reset/confirm', 'post'>;
 
 export async function confirmPasswordReset(input: PasswordResetConfirmInput): Promise<void> {
   await apiClient.post('/auth/password-reset/confirm', input, { skipAuthRefresh: true, skipErrorNotification: true });

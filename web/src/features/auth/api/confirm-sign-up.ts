@@ -1,11 +1,12 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Session } from '@/types/api';
+import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
 
 /** Opens the e-mailed sign-up link: creates the shop and signs its owner in. */
 export async function confirmSignUp(token: string): Promise<Session> {
-  const { data } = await apiClient.post<Session>('/auth/sign-up/confirm', { token }, { skipAuthRefresh: true, skipErrorNotification: true });
+  const body: RequestBodyOf<'/api/auth/sign-up/confirm', 'post'> = { token };
+  const { data } = await apiClient.post<Session>('/auth/sign-up/confirm', body, { skipAuthRefresh: true, skipErrorNotification: true });
   return data;
 }
 

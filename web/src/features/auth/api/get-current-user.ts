@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 import { tokenStorage } from '@/lib/token-storage';
-import type { CurrentUser } from '@/types/api';
+import type { CurrentUser } from '@/lib/api-types';
 import { authKeys } from './auth-keys';
 
 export async function getCurrentUser(): Promise<CurrentUser> {

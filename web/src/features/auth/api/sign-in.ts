@@ -1,9 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Session } from '@/types/api';
+import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
 
-export type SignInInput = { email: string; password: string };
+export type SignInInput = RequestBodyOf<'/api/auth/sign-in', 'post'>;
 
 export async function signIn(input: SignInInput): Promise<Session> {
   const { data } = await apiClient.post<Session>('/auth/sign-in', input, {

@@ -1,9 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
+import type { RequestBodyOf } from '@/lib/api-types';
 import { tokenStorage } from '@/lib/token-storage';
 
 export async function signOut(refreshToken: string): Promise<void> {
-  await apiClient.post('/auth/sign-out', { refreshToken }, { skipAuthRefresh: true, skipErrorNotification: true });
+  const body: RequestBodyOf<'/api/auth/sign-out', 'post'> = { refreshToken };
+  await apiClient.post('/auth/sign-out', body, { skipAuthRefresh: true, skipErrorNotification: true });
 }
 
 export function useSignOut({ onSettled }: { onSettled?: () => void } = {}) {

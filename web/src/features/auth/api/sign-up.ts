@@ -1,9 +1,10 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { components } from '@/lib/api-schema';
+import type { RequestBodyOf, Schemas } from '@/lib/api-types';
 
-export type SignUpInput = components['schemas']['SignUpDto'];
-export type SignUpAccepted = components['schemas']['SignUpAcceptedResponseDto'];
+export type SignUpInput = RequestBodyOf<'/api/auth/sign-up', 'post'>;
+/** The route answers 202 Accepted (the shop is created from the e-mailed link). */
+export type SignUpAccepted = Schemas['SignUpAcceptedResponseDto'];
 
 /** Always answers alike (a registered address is not revealed): the shop is created from the e-mailed link. */
 export async function signUp(input: SignUpInput): Promise<SignUpAccepted> {

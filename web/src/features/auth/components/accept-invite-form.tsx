@@ -1,5 +1,5 @@
 import { Button, Form, Input } from 'antd';
-import type { Session } from '@/types/api';
+import type { Session } from '@/lib/api-types';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import { confirmPasswordRules, passwordRules } from './password-rules';

@@ -3,7 +3,7 @@ import { Button, Form } from 'antd';
 // load (this form) does not use.
 import Input from 'antd/es/input/Input';
 import Password from 'antd/es/input/Password';
-import type { Session } from '@/types/api';
+import type { Session } from '@/lib/api-types';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useSignIn, type SignInInput } from '../api/sign-in';
 import { emailRules } from './password-rules';

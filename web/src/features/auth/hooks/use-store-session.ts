@@ -1,7 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { tokenStorage } from '@/lib/token-storage';
-import type { Session } from '@/types/api';
+import type { Session } from '@/lib/api-types';
 import { authKeys } from '../api/auth-keys';
 
 export function useStoreSession(): (session: Session) => void {

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { CatalogItem, CatalogItemInput, CatalogKind } from '../types';
+import type { CatalogItem, CatalogItemInputOf, CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
 
-export type CreateCatalogItemArgs = { kind: CatalogKind; input: CatalogItemInput };
+/** The form builds the body from the kind's field list, so it is typed by the kind only where the caller knows it. */
+export type CreateCatalogItemArgs<K extends CatalogKind = CatalogKind> = { kind: K; input: CatalogItemInputOf<K> };
 
 export async function createCatalogItem({ kind, input }: CreateCatalogItemArgs): Promise<CatalogItem> {
   const { data } = await apiClient.post<CatalogItem>(`/catalog/${kind}`, input, { skipErrorNotification: true });

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { CatalogItem, CatalogItemInput, CatalogKind } from '../types';
+import type { CatalogItem, CatalogItemChangesOf, CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
 
-export type UpdateCatalogItemArgs = { kind: CatalogKind; id: string; changes: Partial<CatalogItemInput> };
+export type UpdateCatalogItemArgs<K extends CatalogKind = CatalogKind> = { kind: K; id: string; changes: CatalogItemChangesOf<K> };
 
 export async function updateCatalogItem({ kind, id, changes }: UpdateCatalogItemArgs): Promise<CatalogItem> {
   const { data } = await apiClient.patch<CatalogItem>(`/catalog/${kind}/${encodeURIComponent(id)}`, changes, { skipErrorNotification: true });

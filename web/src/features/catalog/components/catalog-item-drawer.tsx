@@ -5,7 +5,7 @@ import { FormErrorAlert } from '@/components/form-error-alert';
 import { useCreateCatalogItem } from '../api/create-catalog-item';
 import { useUpdateCatalogItem } from '../api/update-catalog-item';
 import { kindDefinitions, type JsonField, type ScalarField } from '../lib/catalog-kinds';
-import type { CatalogItem, CatalogKind } from '../types';
+import type { CatalogItem, CatalogItemInputOf, CatalogKind } from '../types';
 import { LengthInput, readableLengthRule } from '@/components/length-input';
 import { useUnits } from '@/hooks/use-units';
 import { FrameDiagram } from './frame-diagram';
@@ -43,7 +43,7 @@ function toFormValues(kind: CatalogKind, item: CatalogItem | null | undefined): 
   if (def.obstacles) values.obstacles = spec.obstacles ?? [];
   for (const j of def.json) values[jsonKey(j.name)] = spec[j.name] === undefined || spec[j.name] === null ? '' : JSON.stringify(spec[j.name], null, 2);
   if (kind === 'chassis') {
-    const dp = (item as (CatalogItem & { defaultPlacement?: unknown }) | null | undefined)?.defaultPlacement;
+    const dp = item && 'defaultPlacement' in item ? item.defaultPlacement : null;
     values[jsonKey('defaultPlacement')] = dp ? JSON.stringify(dp, null, 2) : '';
   }
   return values;
@@ -143,10 +143,11 @@ export function CatalogItemDrawer({ kind, open, item, onClose }: CatalogItemDraw
 
   const submit = async (values: FormValues) => {
     setError(null);
-    const body = toBody(kind, values);
+    // built from the kind's field list; the API validates it against the kind's own body schema
+    const body = toBody(kind, values) as CatalogItemInputOf<CatalogKind>;
     try {
       if (item) await update.mutateAsync({ kind, id: item.id, changes: body });
-      else await create.mutateAsync({ kind, input: body as FormValues });
+      else await create.mutateAsync({ kind, input: body });
     } catch (e) {
       setError(e);
     }

@@ -52,7 +52,7 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
     ...def.columns.map((c) => ({
       title: def.fields.find((f) => f.name === c)?.label ?? def.columnLabels?.[c] ?? c,
       key: c,
-      render: (_: unknown, item: CatalogItem) => show(c, item.spec?.[c]),
+      render: (_: unknown, item: CatalogItem) => show(c, (item.spec as Record<string, unknown> | undefined)?.[c]),
       responsive: ['md' as const],
     })),
     { title: 'Last change', key: 'updatedAt', render: (_, item) => formatDate(item.updatedAt), responsive: ['lg'] },

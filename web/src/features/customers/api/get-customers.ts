@@ -1,11 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Page } from '@/types/api';
-import type { Customer, CustomerListQuery } from '../types';
+import type { CustomerListQuery, CustomerPage } from '../types';
 import { customerKeys } from './customer-keys';
 
-export async function getCustomers(query: CustomerListQuery, signal?: AbortSignal): Promise<Page<Customer>> {
-  const { data } = await apiClient.get<Page<Customer>>('/customers', { params: query, signal });
+export async function getCustomers(query: CustomerListQuery, signal?: AbortSignal): Promise<CustomerPage> {
+  const { data } = await apiClient.get<CustomerPage>('/customers', { params: query, signal });
   return data;
 }
 

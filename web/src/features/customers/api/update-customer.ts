@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Customer, CustomerInput } from '../types';
+import type { Customer, CustomerChanges } from '../types';
 import { customerKeys } from './customer-keys';
 
-export type UpdateCustomerInput = { id: string; changes: Partial<CustomerInput> };
+export type UpdateCustomerInput = { id: string; changes: CustomerChanges };
 
 export async function updateCustomer({ id, changes }: UpdateCustomerInput): Promise<Customer> {
   const { data } = await apiClient.patch<Customer>(`/customers/${encodeURIComponent(id)}`, changes, {

@@ -17,7 +17,7 @@ export type CustomerFormDrawerProps = {
 };
 
 function clean(values: CustomerInput): CustomerInput {
-  const trim = (v?: string) => (v?.trim() ? v.trim() : undefined);
+  const trim = (v?: string | null) => (v?.trim() ? v.trim() : undefined);
   return { name: values.name.trim(), email: trim(values.email), phone: trim(values.phone), notes: trim(values.notes) };
 }
 

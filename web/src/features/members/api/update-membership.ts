@@ -1,10 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Role } from '@/types/api';
-import type { Membership } from '../types';
+import type { Membership, MembershipChanges } from '../types';
 import { memberKeys } from './member-keys';
 
-export type UpdateMembershipInput = { id: string; role: Role };
+export type UpdateMembershipInput = { id: string } & MembershipChanges;
 
 export async function updateMembership({ id, role }: UpdateMembershipInput): Promise<Membership> {
   const { data } = await apiClient.patch<Membership>(`/memberships/${encodeURIComponent(id)}`, { role });

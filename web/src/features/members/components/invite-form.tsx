@@ -1,7 +1,7 @@
 import { Button, Form, Input, Select } from 'antd';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
-import { roles, type Role } from '@/types/api';
+import { ROLES as roles, type Role } from '@swapwright/shared';
 import { useCreateInvitation } from '../api/create-invitation';
 import { roleHints, roleLabels, type CreateInvitationInput } from '../types';
 

@@ -2,7 +2,7 @@ import { Button, Popconfirm, Select, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { EmptyState, QueryState } from '@/components/query-state';
 import { formatDate } from '@/lib/dates';
-import { roles, type Role } from '@/types/api';
+import { ROLES as roles, type Role } from '@swapwright/shared';
 import { useDeleteMembership } from '../api/delete-membership';
 import { useMemberships } from '../api/get-memberships';
 import { useUpdateMembership } from '../api/update-membership';

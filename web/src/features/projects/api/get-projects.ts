@@ -1,11 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Page } from '@/types/api';
-import type { Project, ProjectListQuery } from '../types';
+import type { ProjectListQuery, ProjectPage } from '../types';
 import { projectKeys } from './project-keys';
 
-export async function getProjects(query: ProjectListQuery, signal?: AbortSignal): Promise<Page<Project>> {
-  const { data } = await apiClient.get<Page<Project>>('/projects', { params: query, signal });
+export async function getProjects(query: ProjectListQuery, signal?: AbortSignal): Promise<ProjectPage> {
+  const { data } = await apiClient.get<ProjectPage>('/projects', { params: query, signal });
   return data;
 }
 

@@ -4,7 +4,7 @@ import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
 import { hpToKw, kwToHp } from '@/lib/units';
-import type { UnitSystem } from '@/types/api';
+import type { UnitSystem } from '@swapwright/shared';
 import { useCreateProject } from '../api/create-project';
 import { useUpdateProject } from '../api/update-project';
 import { statusLabels, useLabels } from '../project-labels';

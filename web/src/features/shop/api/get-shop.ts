@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { Shop } from '../types';
+import type { CurrentShop } from '../types';
 import { shopKeys } from './shop-keys';
 
-export async function getShop(signal?: AbortSignal): Promise<Shop> {
-  const { data } = await apiClient.get<Shop>('/shops/current', { signal });
+export async function getShop(signal?: AbortSignal): Promise<CurrentShop> {
+  const { data } = await apiClient.get<CurrentShop>('/shops/current', { signal });
   return data;
 }
 

@@ -9,7 +9,7 @@ import { authKeys } from '@/features/auth/api/auth-keys';
 import { previewFitCheck } from '@/features/fit-reports/lib/fit-engine';
 import type { FitReportListItem, StoredFitReport } from '@/features/fit-reports/types';
 import type { Project } from '@/features/projects/types';
-import type { Role } from '@/types/api';
+import type { Role } from '@swapwright/shared';
 import { RequireRole } from '../../../guards';
 import { sectionRoles } from '../../../navigation';
 import { ProjectFitPage } from '../project-fit-page';

@@ -3,12 +3,14 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
 import { renderWithApp } from '@/test/render';
-import type { CatalogItem } from '../../types';
+import type { CatalogItemOf } from '../../types';
 import { CatalogItemDrawer } from '../catalog-item-drawer';
 
-const stockBelt: CatalogItem = {
+const stockBelt: CatalogItemOf<'belts'> = {
   id: 'belt-1',
   name: 'Ironbark stock 6PK1225',
+  createdAt: '2026-11-02T09:00:00.000Z',
+  updatedAt: '2026-11-02T09:00:00.000Z',
   spec: { id: 'belt-1', name: 'Ironbark stock 6PK1225', ribs: 6, profile: 'PK', effectiveLengthMm: 1225, designation: '6PK1225', stockOnHand: 4 },
 };
 

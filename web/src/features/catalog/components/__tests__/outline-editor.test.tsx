@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { parseJsonField } from '../catalog-item-drawer';
 import { OutlineEditor, type OutlinePoint } from '../outline-editor';
+import type { CatalogItemOf } from '../../types';
 
 let latest: OutlinePoint[] = [];
 
@@ -14,7 +15,7 @@ function Harness({ initial }: { initial: OutlinePoint[] }) {
   return <OutlineEditor axes={['u', 'w']} label="Bottom profile" closed value={points} onChange={setPoints} />;
 }
 
-const pan: OutlinePoint[] = [
+const pan: Array<{ u: number; w: number }> = [
   { u: 600, w: -75 },
   { u: 330, w: -254 },
 ];
@@ -72,9 +73,11 @@ describe('parseJsonField', () => {
 describe('CatalogItemDrawer', () => {
   it('fills the form from the stored spec, lengths in the person’s unit', async () => {
     const { CatalogItemDrawer } = await import('../catalog-item-drawer');
-    const item = {
+    const item: CatalogItemOf<'oil-pans'> = {
       id: 'pan-1',
       name: 'Rear-sump pan R1',
+      createdAt: '2026-11-02T09:00:00.000Z',
+      updatedAt: '2026-11-02T09:00:00.000Z',
       spec: { id: 'pan-1', name: 'Rear-sump pan R1', railPattern: 'R-V8', sumpPosition: 'rear', pickupMount: 'pump-bolted', sumpCenterU: 254, sumpFloorW: -254, capacityL: 5.7, dipstickProvision: [], bottomProfile: pan },
     };
     renderWithApp(<CatalogItemDrawer kind="oil-pans" open item={item} onClose={() => undefined} />);
