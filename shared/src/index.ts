@@ -55,6 +55,7 @@ export * from './checks/envelope/pan-clearance';
 export * from './checks/envelope/sump-crossmember';
 export * from './checks/envelope/sump-steering-linkage';
 export * from './checks/envelope/sump-axle';
+export * from './checks/envelope/pan-checks';
 export * from './checks/envelope/ground-clearance';
 export * from './checks/envelope/hood';
 export * from './checks/envelope/fan-radiator';

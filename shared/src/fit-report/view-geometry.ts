@@ -3,7 +3,7 @@ import { GROUND_CLEARANCE_ID } from '../checks/envelope/ground-clearance';
 import { groundZAt } from '../geometry/ground-line';
 import { FIREWALL_KINDS, HEADS_FIREWALL_ID } from '../checks/envelope/heads-firewall';
 import { HOOD_ID, measureHood } from '../checks/envelope/hood';
-import { PAN_OBSTACLE_KINDS } from '../checks/envelope/pan-clearance';
+import { PAN_CHECKS } from '../checks/envelope/pan-checks';
 import { lowestPoint, obstaclesOfKinds, placedForSpec, type PlacedEngine, type PlacedWidthBox } from '../checks/envelope/placed-engine';
 import { measureRailWidth, RAIL_WIDTH_ID } from '../checks/envelope/rail-width';
 import { measureSteeringBox, STEERING_BOX_ID } from '../checks/envelope/steering-box';
@@ -74,12 +74,7 @@ export function sideViewGeometry(spec: FitSpec, settingsOverrides: Partial<FitSe
   const push = (d: DimensionSegment | null): void => {
     if (d) dims.push(d);
   };
-  const panIds: Array<[string, readonly ChassisObstacle['kind'][]]> = [
-    ['envelope.sump-crossmember', PAN_OBSTACLE_KINDS.crossmember],
-    ['envelope.sump-steering-linkage', PAN_OBSTACLE_KINDS.steering],
-    ['envelope.sump-axle', PAN_OBSTACLE_KINDS.axle],
-  ];
-  for (const [id, kinds] of panIds) push(outlineDimension(id, placed.pan, true, obstaclesOfKinds(spec, kinds), settings.minGapBelowMm, 'up'));
+  for (const check of PAN_CHECKS) push(outlineDimension(check.id, placed.pan, true, obstaclesOfKinds(spec, check.obstacleKinds), settings.minGapBelowMm, 'up'));
   push(outlineDimension(HEADS_FIREWALL_ID, placed.rearProfile, false, obstaclesOfKinds(spec, [...FIREWALL_KINDS]), settings.minFirewallGapMm, 'forward'));
   push(outlineDimension(TRANSMISSION_TUNNEL_ID, placed.transmission, true, obstaclesOfKinds(spec, [...TUNNEL_KINDS]), settings.minFirewallGapMm, 'down'));
   if (placed.pan) {

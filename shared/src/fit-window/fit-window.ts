@@ -8,7 +8,7 @@ import type { CheckStatus } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
 
 /**
- * Fit window: for each setback (at one tilt) the crank-centreline heights z_e where every clearance check
+ * Fit window: for each setback (at one tilt) the crank-centreline heights where every clearance check
  * (the envelope group) passes. Mounts and the transmission mount are not part of it: they are bridged by
  * adapters, spacers or brackets rather than bounding where the engine can go.
  */
@@ -19,8 +19,8 @@ export interface FitWindowOptions {
   stepMm?: number;
   tiltDeg?: number;
   /** Heights searched (crank centreline above the ground). */
-  zMinMm?: number;
-  zMaxMm?: number;
+  lowestHeightMm?: number;
+  highestHeightMm?: number;
 }
 
 export type { WindowBound } from '../checks/envelope/window-terms';
@@ -32,7 +32,7 @@ export interface FitWindowInterval {
   highBoundBy: WindowBound;
 }
 
-/** One column of the picture: at this setback the engine fits for lowMm ≤ z_e ≤ highMm. */
+/** One column of the picture: at this setback the engine fits for lowMm ≤ crank height ≤ highMm. */
 export interface FitWindowColumn {
   setbackMm: number;
   feasible: boolean;
@@ -77,9 +77,28 @@ export const WINDOW_RANGE: WindowBound = { checkId: 'window.range', against: 'se
 interface Constraint {
   bound: WindowBound;
   trend: 'rises' | 'falls' | 'any';
-  margin: (z: number) => number;
-  /** Exact: margin = a + slope·z. */
-  linear?: { a: number; slope: 1 | -1 };
+  marginAt: (heightMm: number) => number;
+  /** Exact: margin = intercept + slope · height. */
+  linear?: { intercept: number; slope: 1 | -1 };
+}
+
+/** A constraint's key in the warm start: the check and what it is measured against. */
+const constraintKey = (bound: WindowBound): string => `${bound.checkId}|${bound.against}`;
+
+/**
+ * What one column of the window hands the next (neighbouring columns have nearly the same bounds): each
+ * monotone constraint's last boundary height, and which constraints set the low and the high end.
+ */
+export interface WindowWarmStart {
+  boundaryHeightMm: Map<string, number>;
+  /** Index (in the column model's constraints) of the constraint that set the last column's low end. */
+  lowSetBy?: number;
+  /** Index of the constraint that set the last column's high end. */
+  highSetBy?: number;
+}
+
+export function newWarmStart(): WindowWarmStart {
+  return { boundaryHeightMm: new Map() };
 }
 
 export interface ColumnModel {
@@ -87,7 +106,7 @@ export interface ColumnModel {
   constraints: Constraint[];
   bands: Array<{ from: number; to: number; bound: WindowBound }>;
   /** Margins of the width checks at a height (for the best placement score). */
-  widthMargins: (z: number) => Array<{ bound: WindowBound; margin: number }>;
+  widthMargins: (heightMm: number) => Array<{ bound: WindowBound; margin: number }>;
 }
 
 /** The column's terms, collected from every envelope check's own window terms (see window-terms.ts). */
@@ -99,76 +118,78 @@ function buildColumn(spec: FitSpec, settings: FitSettings, base: PlacedEngine): 
   for (const check of ENVELOPE_CHECKS) {
     const terms = check.windowTerms?.(spec, settings, base);
     if (!terms) continue;
-    for (const c of terms.constraints ?? []) {
-      constraints.push({ bound: c.bound, trend: c.trend, margin: c.marginAt, linear: c.linear ? { a: c.linear.intercept, slope: c.linear.slope } : undefined });
+    for (const term of terms.constraints ?? []) {
+      constraints.push({ bound: term.bound, trend: term.trend, marginAt: term.marginAt, linear: term.linear });
     }
     constant.push(...(terms.constants ?? []));
     for (const band of terms.bands ?? []) bands.push({ from: band.fromMm, to: band.toMm, bound: band.bound });
     if (terms.marginsAt) marginReaders.push(terms.marginsAt);
   }
-  const widthMargins = (z: number): Array<{ bound: WindowBound; margin: number }> => marginReaders.flatMap((read) => read(z));
+  const widthMargins = (heightMm: number): Array<{ bound: WindowBound; margin: number }> => marginReaders.flatMap((read) => read(heightMm));
   return { constant, constraints, bands, widthMargins };
 }
 
-function rank(e: { c: Constraint; i: number }, lastLow: number | undefined, lastHigh: number | undefined): number {
-  if (e.c.linear) return 0;
-  if (e.i === lastLow || e.i === lastHigh) return 1;
+/** Solving order: exact (linear) constraints first, then the ones that set the last column's ends, then the rest. */
+function solvingRank(entry: { constraint: Constraint; index: number }, warm: WindowWarmStart): number {
+  if (entry.constraint.linear) return 0;
+  if (entry.index === warm.lowSetBy || entry.index === warm.highSetBy) return 1;
   return 2;
 }
 
-/** Boundary of a monotone constraint: the lowest passing z for `rises`, the highest for `falls`; ±Infinity when it never binds in range. */
-function monotoneBound(c: Constraint, z0: number, zMin: number, zMax: number): number {
-  const rises = c.trend === 'rises';
-  if (c.linear) return rises ? -c.linear.a : c.linear.a;
-  const m0 = c.margin(z0);
-  const passing = m0 >= 0;
-  const dir: 1 | -1 = rises ? (passing ? -1 : 1) : passing ? 1 : -1;
-  const travel = dir === 1 ? zMax - z0 : z0 - zMin;
-  const z = findBoundary(c.margin, z0, dir, { maxTravel: Math.max(travel, 0) + 1, tolerance: 1e-4, monotone: true });
-  if (z === null) {
+/** Boundary of a monotone constraint: the lowest passing height for `rises`, the highest for `falls`; ±Infinity when it never binds in range. */
+function monotoneBoundary(constraint: Constraint, startMm: number, lowestMm: number, highestMm: number): number {
+  const rises = constraint.trend === 'rises';
+  if (constraint.linear) return rises ? -constraint.linear.intercept : constraint.linear.intercept;
+  const passing = constraint.marginAt(startMm) >= 0;
+  const direction: 1 | -1 = rises ? (passing ? -1 : 1) : passing ? 1 : -1;
+  const travelMm = direction === 1 ? highestMm - startMm : startMm - lowestMm;
+  const boundaryMm = findBoundary(constraint.marginAt, startMm, direction, { maxTravel: Math.max(travelMm, 0) + 1, tolerance: 1e-4, monotone: true });
+  if (boundaryMm === null) {
     // Never met within range: passing all the way (not binding) or failing all the way (closes the column).
     if (passing) return rises ? -Infinity : Infinity;
     return rises ? Infinity : -Infinity;
   }
-  return z;
+  return boundaryMm;
 }
 
-/** Passing sub-intervals of [lo, hi] for a 1-Lipschitz margin, by stepping |m| at a time. */
-function passingIntervals(m: (z: number) => number, lo: number, hi: number, tol = 1e-4): Array<[number, number]> {
+/** Passing sub-intervals of [fromMm, toMm] for a 1-Lipschitz margin, stepping |margin| at a time. */
+function passingIntervals(marginAt: (heightMm: number) => number, fromMm: number, toMm: number, toleranceMm = 1e-4): Array<[number, number]> {
   const out: Array<[number, number]> = [];
-  let z = lo;
-  let start: number | null = null;
+  const searchSpan = { maxTravel: toMm - fromMm + 1, tolerance: toleranceMm };
+  let height = fromMm;
+  let passingFrom: number | null = null;
   let guard = 0;
-  while (z <= hi && guard++ < 10000) {
-    const v = m(z);
-    if (v >= 0) {
-      if (start === null) start = z;
-      const next = z + Math.max(v, tol);
-      if (next > hi) {
-        if (m(hi) >= 0) {
-          out.push([start, hi]);
+  while (height <= toMm && guard++ < 10000) {
+    const margin = marginAt(height);
+    if (margin >= 0) {
+      if (passingFrom === null) passingFrom = height;
+      // a 1-Lipschitz margin stays ≥ 0 for at least `margin` further
+      const next = height + Math.max(margin, toleranceMm);
+      if (next > toMm) {
+        if (marginAt(toMm) >= 0) {
+          out.push([passingFrom, toMm]);
           return out;
         }
-        z = Math.min(next, hi);
-        const end = findBoundary(m, z - Math.max(v, tol), 1, { maxTravel: hi - lo + 1, tolerance: tol });
-        out.push([start, end ?? z]);
-        start = null;
-        z = (end ?? z) + tol;
+        height = Math.min(next, toMm);
+        const end = findBoundary(marginAt, height - Math.max(margin, toleranceMm), 1, searchSpan);
+        out.push([passingFrom, end ?? height]);
+        passingFrom = null;
+        height = (end ?? height) + toleranceMm;
         continue;
       }
-      if (m(next) < 0) {
-        const end = findBoundary(m, z, 1, { maxTravel: hi - lo + 1, tolerance: tol }) ?? z;
-        out.push([start, end]);
-        start = null;
-        z = end + tol;
+      if (marginAt(next) < 0) {
+        const end = findBoundary(marginAt, height, 1, searchSpan) ?? height;
+        out.push([passingFrom, end]);
+        passingFrom = null;
+        height = end + toleranceMm;
         continue;
       }
-      z = next;
+      height = next;
     } else {
-      z += Math.max(-v, tol);
+      height += Math.max(-margin, toleranceMm);
     }
   }
-  if (start !== null) out.push([start, hi]);
+  if (passingFrom !== null) out.push([passingFrom, toMm]);
   return out;
 }
 
@@ -179,13 +200,13 @@ function subtractBands(
   let current = intervals;
   for (const band of bands) {
     const next: FitWindowInterval[] = [];
-    for (const iv of current) {
-      if (band.to <= iv.lowMm || band.from >= iv.highMm) {
-        next.push(iv);
+    for (const interval of current) {
+      if (band.to <= interval.lowMm || band.from >= interval.highMm) {
+        next.push(interval);
         continue;
       }
-      if (band.from > iv.lowMm) next.push({ ...iv, highMm: band.from, highBoundBy: band.bound });
-      if (band.to < iv.highMm) next.push({ ...iv, lowMm: band.to, lowBoundBy: band.bound });
+      if (band.from > interval.lowMm) next.push({ ...interval, highMm: band.from, highBoundBy: band.bound });
+      if (band.to < interval.highMm) next.push({ ...interval, lowMm: band.to, lowBoundBy: band.bound });
     }
     current = next;
   }
@@ -196,22 +217,23 @@ export interface WindowContext {
   spec: FitSpec;
   settings: FitSettings;
   tiltDeg: number;
-  zMin: number;
-  zMax: number;
+  /** Heights searched (crank centreline above the ground). */
+  lowestMm: number;
+  highestMm: number;
 }
 
-/** One column of the window. `warm` carries each monotone constraint's last bound between columns. */
-export function windowColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, number> = new Map()): FitWindowColumn {
-  return columnWithModel(ctx, setbackMm, warm).column;
+/** One column of the window. `warm` carries the last column's boundaries to the next (see {@link WindowWarmStart}). */
+export function windowColumn(context: WindowContext, setbackMm: number, warm: WindowWarmStart = newWarmStart()): FitWindowColumn {
+  return columnWithModel(context, setbackMm, warm).column;
 }
 
-export function columnWithModel(ctx: WindowContext, setbackMm: number, warm: Map<string, number>): { column: FitWindowColumn; model: ColumnModel } {
-  const column = solveColumn(ctx, setbackMm, warm, buildColumn(ctx.spec, ctx.settings, placeEngine(ctx.spec, { setbackMm, heightMm: 0, tiltDeg: ctx.tiltDeg })));
-  return column;
+export function columnWithModel(context: WindowContext, setbackMm: number, warm: WindowWarmStart): { column: FitWindowColumn; model: ColumnModel } {
+  const base = placeEngine(context.spec, { setbackMm, heightMm: 0, tiltDeg: context.tiltDeg });
+  return solveColumn(context, setbackMm, warm, buildColumn(context.spec, context.settings, base));
 }
 
-function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, number>, model: ColumnModel): { column: FitWindowColumn; model: ColumnModel } {
-  const { spec, zMin, zMax } = ctx;
+function solveColumn(context: WindowContext, setbackMm: number, warm: WindowWarmStart, model: ColumnModel): { column: FitWindowColumn; model: ColumnModel } {
+  const { spec, lowestMm, highestMm } = context;
   const blocked = (bound: WindowBound): { column: FitWindowColumn; model: ColumnModel } => ({ model, column: {
     setbackMm,
     feasible: false,
@@ -222,163 +244,174 @@ function solveColumn(ctx: WindowContext, setbackMm: number, warm: Map<string, nu
     intervals: [],
     blockedBy: bound,
   } });
-  for (const c of model.constant) if (c.margin < 0) return blocked(c.bound);
-  let low = zMin;
+  for (const fixed of model.constant) if (fixed.margin < 0) return blocked(fixed.bound);
+  let lowMm = lowestMm;
   let lowBy = WINDOW_RANGE;
-  let high = zMax;
+  let highMm = highestMm;
   let highBy = WINDOW_RANGE;
-  const general: Constraint[] = [];
-  // Exact (linear) bounds first, then the constraint that bound the previous column, then the rest: a
-  // monotone margin already ≥ 0 at the current low (high) cannot raise (lower) it, which costs one evaluation.
-  const lastLow = warm.get('|low');
-  const lastHigh = warm.get('|high');
+  const nonMonotone: Constraint[] = [];
+  // A monotone margin already ≥ 0 at the current low (high) end cannot raise (lower) it, which costs one
+  // evaluation; solving the likely binding constraints first makes that skip common.
   const order = model.constraints
-    .map((c, i) => ({ c, i, key: `${c.bound.checkId}|${c.bound.against}` }))
-    .sort((a, b) => rank(a, lastLow, lastHigh) - rank(b, lastLow, lastHigh) || a.i - b.i);
-  for (const { c, key, i } of order) {
-    if (c.trend === 'any') {
-      general.push(c);
+    .map((constraint, index) => ({ constraint, index }))
+    .sort((a, b) => solvingRank(a, warm) - solvingRank(b, warm) || a.index - b.index);
+  for (const { constraint, index } of order) {
+    if (constraint.trend === 'any') {
+      nonMonotone.push(constraint);
       continue;
     }
-    if (c.trend === 'rises' && !c.linear && low > zMin && c.margin(low) >= 0) continue;
-    if (c.trend === 'falls' && !c.linear && high < zMax && c.margin(high) >= 0) continue;
-    const z0 = Math.min(zMax, Math.max(zMin, warm.get(key) ?? spec.placement.heightMm));
-    const b = monotoneBound(c, z0, zMin, zMax);
-    if (Number.isFinite(b)) warm.set(key, b);
-    if (c.trend === 'rises' && b > low) {
-      low = b;
-      lowBy = c.bound;
-      warm.set('|low', i);
+    if (constraint.trend === 'rises' && !constraint.linear && lowMm > lowestMm && constraint.marginAt(lowMm) >= 0) continue;
+    if (constraint.trend === 'falls' && !constraint.linear && highMm < highestMm && constraint.marginAt(highMm) >= 0) continue;
+    const key = constraintKey(constraint.bound);
+    const startMm = Math.min(highestMm, Math.max(lowestMm, warm.boundaryHeightMm.get(key) ?? spec.placement.heightMm));
+    const boundaryMm = monotoneBoundary(constraint, startMm, lowestMm, highestMm);
+    if (Number.isFinite(boundaryMm)) warm.boundaryHeightMm.set(key, boundaryMm);
+    if (constraint.trend === 'rises' && boundaryMm > lowMm) {
+      lowMm = boundaryMm;
+      lowBy = constraint.bound;
+      warm.lowSetBy = index;
     }
-    if (c.trend === 'falls' && b < high) {
-      high = b;
-      highBy = c.bound;
-      warm.set('|high', i);
+    if (constraint.trend === 'falls' && boundaryMm < highMm) {
+      highMm = boundaryMm;
+      highBy = constraint.bound;
+      warm.highSetBy = index;
     }
   }
-  if (low > high) return blocked(low > zMax ? lowBy : high < zMin ? highBy : lowBy);
-  let intervals: FitWindowInterval[] = [{ lowMm: low, highMm: high, lowBoundBy: lowBy, highBoundBy: highBy }];
+  if (lowMm > highMm) return blocked(lowMm > highestMm ? lowBy : highMm < lowestMm ? highBy : lowBy);
+  let intervals: FitWindowInterval[] = [{ lowMm, highMm, lowBoundBy: lowBy, highBoundBy: highBy }];
   let emptiedBy: WindowBound | null = null;
-  for (const c of general) {
+  for (const constraint of nonMonotone) {
     const next: FitWindowInterval[] = [];
-    for (const iv of intervals) {
+    for (const interval of intervals) {
       // 1-Lipschitz: a margin of at least the interval's length at its low end holds over all of it.
-      if (c.margin(iv.lowMm) >= iv.highMm - iv.lowMm) {
-        next.push(iv);
+      if (constraint.marginAt(interval.lowMm) >= interval.highMm - interval.lowMm) {
+        next.push(interval);
         continue;
       }
-      for (const [a, b] of passingIntervals(c.margin, iv.lowMm, iv.highMm)) {
+      for (const [fromMm, toMm] of passingIntervals(constraint.marginAt, interval.lowMm, interval.highMm)) {
         next.push({
-          lowMm: a,
-          highMm: b,
-          lowBoundBy: a > iv.lowMm + 1e-3 ? c.bound : iv.lowBoundBy,
-          highBoundBy: b < iv.highMm - 1e-3 ? c.bound : iv.highBoundBy,
+          lowMm: fromMm,
+          highMm: toMm,
+          lowBoundBy: fromMm > interval.lowMm + 1e-3 ? constraint.bound : interval.lowBoundBy,
+          highBoundBy: toMm < interval.highMm - 1e-3 ? constraint.bound : interval.highBoundBy,
         });
       }
     }
-    if (next.length === 0 && intervals.length > 0) emptiedBy = c.bound;
+    if (next.length === 0 && intervals.length > 0) emptiedBy = constraint.bound;
     intervals = next;
   }
   // Each bound is pulled 1e-6 mm inside, so rounding between the window's frame (height 0 plus z) and a check
   // placed at that height cannot turn a bound into a failure.
   intervals = subtractBands(intervals, model.bands)
-    .map((iv) => ({
-      ...iv,
-      lowMm: iv.lowBoundBy === WINDOW_RANGE ? iv.lowMm : iv.lowMm + BOUND_INSET_MM,
-      highMm: iv.highBoundBy === WINDOW_RANGE ? iv.highMm : iv.highMm - BOUND_INSET_MM,
+    .map((interval) => ({
+      ...interval,
+      lowMm: interval.lowBoundBy === WINDOW_RANGE ? interval.lowMm : interval.lowMm + BOUND_INSET_MM,
+      highMm: interval.highBoundBy === WINDOW_RANGE ? interval.highMm : interval.highMm - BOUND_INSET_MM,
     }))
-    .filter((iv) => iv.highMm >= iv.lowMm)
+    .filter((interval) => interval.highMm >= interval.lowMm)
     .sort((a, b) => b.highMm - b.lowMm - (a.highMm - a.lowMm));
   if (intervals.length === 0) return blocked(emptiedBy ?? model.bands[0]?.bound ?? lowBy);
-  const w = intervals[0];
+  const widest = intervals[0];
   return {
     model,
-    column: { setbackMm, feasible: true, lowMm: w.lowMm, highMm: w.highMm, lowBoundBy: w.lowBoundBy, highBoundBy: w.highBoundBy, intervals, blockedBy: null },
+    column: {
+      setbackMm,
+      feasible: true,
+      lowMm: widest.lowMm,
+      highMm: widest.highMm,
+      lowBoundBy: widest.lowBoundBy,
+      highBoundBy: widest.highBoundBy,
+      intervals,
+      blockedBy: null,
+    },
   };
 }
 
 /** Smallest margin over every envelope constraint at a height (the best-placement objective). */
-export function scoreAt(model: ColumnModel, z: number): { score: number; by: WindowBound } {
+export function scoreAt(model: ColumnModel, heightMm: number): { score: number; by: WindowBound } {
   let score = Infinity;
   let by = WINDOW_RANGE;
-  for (const c of model.constant) if (c.margin < score) ({ margin: score, bound: by } = c);
-  for (const c of model.constraints) {
-    const m = c.margin(z);
-    if (m < score) {
-      score = m;
-      by = c.bound;
+  for (const fixed of model.constant) if (fixed.margin < score) ({ margin: score, bound: by } = fixed);
+  for (const constraint of model.constraints) {
+    const margin = constraint.marginAt(heightMm);
+    if (margin < score) {
+      score = margin;
+      by = constraint.bound;
     }
   }
-  for (const c of model.widthMargins(z)) if (c.margin < score) ({ margin: score, bound: by } = c);
+  for (const width of model.widthMargins(heightMm)) if (width.margin < score) ({ margin: score, bound: by } = width);
   return { score, by };
 }
 
-function maximiseOnInterval(model: ColumnModel, lo: number, hi: number): { z: number; score: number; by: WindowBound } {
-  const { z } = goldenSectionMax((height) => scoreAt(model, height).score, lo, hi);
-  return { z, ...scoreAt(model, z) };
+function maximiseOnInterval(model: ColumnModel, fromMm: number, toMm: number): { heightMm: number; score: number; by: WindowBound } {
+  const { at: heightMm } = goldenSectionMax((height) => scoreAt(model, height).score, fromMm, toMm);
+  return { heightMm, ...scoreAt(model, heightMm) };
 }
 
 /** Margins of the envelope checks at a placement, from the check functions themselves. */
 export function envelopeMargins(spec: FitSpec, settings: FitSettings, placement: Placement): WindowMargin[] {
   const placed = { ...spec, placement };
   return ENVELOPE_CHECKS.map((check) => check.run({ spec: placed, settings }))
-    .filter((f) => f.margin !== null)
-    .map((f) => ({ checkId: f.checkId, against: f.against ?? '', marginMm: f.margin as number, status: f.status }));
+    .filter((finding) => finding.margin !== null)
+    .map((finding) => ({ checkId: finding.checkId, against: finding.against ?? '', marginMm: finding.margin as number, status: finding.status }));
 }
 
 export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, settingsOverrides: Partial<FitSettings> = {}): FitWindow {
   const settings = resolveFitSettings(settingsOverrides);
   const tiltDeg = options.tiltDeg ?? settings.defaultTiltDeg;
   const stepMm = options.stepMm ?? 5;
-  const from = options.setbackFromMm ?? spec.placement.setbackMm - 150;
-  const to = options.setbackToMm ?? spec.placement.setbackMm + 150;
-  const ctx: WindowContext = { spec, settings, tiltDeg, zMin: options.zMinMm ?? 0, zMax: options.zMaxMm ?? 2000 };
+  const fromMm = options.setbackFromMm ?? spec.placement.setbackMm - 150;
+  const toMm = options.setbackToMm ?? spec.placement.setbackMm + 150;
+  const context: WindowContext = { spec, settings, tiltDeg, lowestMm: options.lowestHeightMm ?? 0, highestMm: options.highestHeightMm ?? 2000 };
   const columns: FitWindowColumn[] = [];
   const models: ColumnModel[] = [];
-  const warm = new Map<string, number>();
-  const n = Math.max(0, Math.floor((to - from) / stepMm + 1e-9));
-  for (let i = 0; i <= n; i++) {
-    const { column, model } = columnWithModel(ctx, from + i * stepMm, warm);
+  const warm = newWarmStart();
+  const steps = Math.max(0, Math.floor((toMm - fromMm) / stepMm + 1e-9));
+  for (let step = 0; step <= steps; step++) {
+    const { column, model } = columnWithModel(context, fromMm + step * stepMm, warm);
     columns.push(column);
     models.push(model);
   }
 
   // Best placement: score the middle of every passing interval once, then refine the most promising few
   // by golden-section search on the smallest margin (ties: the wider interval, then the nearer setback).
-  const candidates: Array<{ setbackMm: number; lo: number; hi: number; model: ColumnModel; mid: number }> = [];
-  for (let i = 0; i < columns.length; i++) {
-    const col = columns[i];
-    if (!col.feasible) continue;
-    for (const iv of col.intervals) {
-      candidates.push({ setbackMm: col.setbackMm, lo: iv.lowMm, hi: iv.highMm, model: models[i], mid: scoreAt(models[i], (iv.lowMm + iv.highMm) / 2).score });
+  const candidates: Array<{ setbackMm: number; lowMm: number; highMm: number; model: ColumnModel; scoreAtMiddle: number }> = [];
+  columns.forEach((column, index) => {
+    if (!column.feasible) return;
+    for (const interval of column.intervals) {
+      const scoreAtMiddle = scoreAt(models[index], (interval.lowMm + interval.highMm) / 2).score;
+      candidates.push({ setbackMm: column.setbackMm, lowMm: interval.lowMm, highMm: interval.highMm, model: models[index], scoreAtMiddle });
     }
-  }
-  const here = spec.placement.setbackMm;
+  });
+  const currentSetbackMm = spec.placement.setbackMm;
   candidates.sort(
-    (a, b) => b.mid - a.mid || b.hi - b.lo - (a.hi - a.lo) || Math.abs(a.setbackMm - here) - Math.abs(b.setbackMm - here),
+    (a, b) =>
+      b.scoreAtMiddle - a.scoreAtMiddle ||
+      b.highMm - b.lowMm - (a.highMm - a.lowMm) ||
+      Math.abs(a.setbackMm - currentSetbackMm) - Math.abs(b.setbackMm - currentSetbackMm),
   );
   let best: BestPlacement | null = null;
   let bestScore = -Infinity;
-  for (const cand of candidates.slice(0, 6)) {
-    const r = maximiseOnInterval(cand.model, cand.lo, cand.hi);
-    if (r.score > bestScore + 1e-9) {
-      bestScore = r.score;
-      const placement = { setbackMm: cand.setbackMm, heightMm: Math.round(r.z * 10) / 10, tiltDeg };
-      best = { placement, smallestMarginMm: r.score, limitedBy: r.by, margins: [] };
+  for (const candidate of candidates.slice(0, 6)) {
+    const refined = maximiseOnInterval(candidate.model, candidate.lowMm, candidate.highMm);
+    if (refined.score > bestScore + 1e-9) {
+      bestScore = refined.score;
+      const placement = { setbackMm: candidate.setbackMm, heightMm: Math.round(refined.heightMm * 10) / 10, tiltDeg };
+      best = { placement, smallestMarginMm: refined.score, limitedBy: refined.by, margins: [] };
     }
   }
   if (best) {
     // Rounded to 0.1 mm for the shop floor; keep it inside the window it came from.
     best.margins = envelopeMargins(spec, settings, best.placement);
-    const smallest = best.margins.reduce((m, x) => (x.marginMm < m.marginMm ? x : m), best.margins[0]);
+    const smallest = best.margins.reduce((tightest, margin) => (margin.marginMm < tightest.marginMm ? margin : tightest), best.margins[0]);
     if (smallest) {
       best.smallestMarginMm = smallest.marginMm;
       best.limitedBy = { checkId: smallest.checkId, against: smallest.against };
     }
   }
   const notChecked = ENVELOPE_CHECKS.map((c) => c.run({ spec, settings }))
-    .filter((f) => f.status === 'unknown')
-    .map((f) => f.checkId);
+    .filter((finding) => finding.status === 'unknown')
+    .map((finding) => finding.checkId);
   return { tiltDeg, stepMm, columns, best, notChecked };
 }
 

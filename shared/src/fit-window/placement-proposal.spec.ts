@@ -44,6 +44,6 @@ describe('proposePlacement (setback, height and tilt, driveline weighed)', () =>
 
   it('returns null when nothing clears in the searched range', () => {
     // Common practice (no published source): a window that is empty everywhere has no proposal.
-    expect(proposePlacement(DEMO_FIT_SPEC, { setbackFromMm: 660, setbackToMm: 660, zMinMm: 0, zMaxMm: 10 })).toBeNull();
+    expect(proposePlacement(DEMO_FIT_SPEC, { setbackFromMm: 660, setbackToMm: 660, lowestHeightMm: 0, highestHeightMm: 10 })).toBeNull();
   }, 60_000);
 });

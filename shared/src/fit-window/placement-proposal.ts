@@ -1,10 +1,10 @@
-import { uJointRoom } from '../checks/drivetrain/u-joint-angles';
+import { U_JOINT_ANGLES_ID, uJointRoom } from '../checks/drivetrain/u-joint-angles';
 import { withPlacement } from '../checks/envelope/placed-engine';
 import { goldenSectionMax } from '../geometry/golden-section';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
 import type { CheckStatus } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
-import { columnWithModel, envelopeMargins, scoreAt, type ColumnModel, type WindowBound, type WindowContext } from './fit-window';
+import { columnWithModel, envelopeMargins, newWarmStart, scoreAt, type ColumnModel, type WindowBound, type WindowContext } from './fit-window';
 
 /**
  * The best placement over setback, height AND tilt, weighing the driveline as well as the clearances: tilt
@@ -27,8 +27,8 @@ export interface PlacementProposalOptions {
   setbackToMm?: number;
   stepMm?: number;
   /** Heights searched (crank centreline above the ground). */
-  zMinMm?: number;
-  zMaxMm?: number;
+  lowestHeightMm?: number;
+  highestHeightMm?: number;
 }
 
 /** One check's room at the proposed placement. */
@@ -76,11 +76,12 @@ function drivelineRoom(spec: FitSpec, settings: FitSettings, placement: Placemen
 interface Candidate {
   tiltDeg: number;
   setbackMm: number;
-  lo: number;
-  hi: number;
+  /** The passing interval of heights it came from. */
+  lowMm: number;
+  highMm: number;
   model: ColumnModel;
   score: number;
-  z: number;
+  heightMm: number;
 }
 
 /**
@@ -91,37 +92,37 @@ export function proposePlacement(spec: FitSpec, options: PlacementProposalOption
   const settings = resolveFitSettings(settingsOverrides);
   const tilts = options.tiltsDeg ?? DEFAULT_PROPOSAL_TILTS_DEG;
   const stepMm = options.stepMm ?? 10;
-  const from = options.setbackFromMm ?? spec.placement.setbackMm - 150;
-  const to = options.setbackToMm ?? spec.placement.setbackMm + 150;
-  const zMin = options.zMinMm ?? 0;
-  const zMax = options.zMaxMm ?? 2000;
+  const fromMm = options.setbackFromMm ?? spec.placement.setbackMm - 150;
+  const toMm = options.setbackToMm ?? spec.placement.setbackMm + 150;
+  const lowestMm = options.lowestHeightMm ?? 0;
+  const highestMm = options.highestHeightMm ?? 2000;
   const envelopeBand = settings.tightBandMm;
   const drivelineBand = settings.uJointTightBandDeg;
   const hasDriveline = Boolean(spec.transmission);
 
-  const objective = (tiltDeg: number, setbackMm: number, model: ColumnModel, z: number): number => {
-    const envelope = scoreAt(model, z).score / envelopeBand;
+  const objective = (tiltDeg: number, setbackMm: number, model: ColumnModel, heightMm: number): number => {
+    const envelope = scoreAt(model, heightMm).score / envelopeBand;
     if (!hasDriveline) return envelope;
-    const room = drivelineRoom(spec, settings, { setbackMm, heightMm: z, tiltDeg });
+    const room = drivelineRoom(spec, settings, { setbackMm, heightMm, tiltDeg });
     return room ? Math.min(envelope, room.marginDeg / drivelineBand) : envelope;
   };
 
   // Coarse: every tilt × setback column of the window, each passing interval scored at its middle.
   const candidates: Candidate[] = [];
   const tiltScores = new Map<number, number | null>();
-  const columns = Math.max(0, Math.floor((to - from) / stepMm + 1e-9));
+  const steps = Math.max(0, Math.floor((toMm - fromMm) / stepMm + 1e-9));
   for (const tiltDeg of tilts) {
-    const ctx: WindowContext = { spec, settings, tiltDeg, zMin, zMax };
-    const warm = new Map<string, number>();
+    const context: WindowContext = { spec, settings, tiltDeg, lowestMm, highestMm };
+    const warm = newWarmStart();
     let bestHere: number | null = null;
-    for (let i = 0; i <= columns; i++) {
-      const setbackMm = from + i * stepMm;
-      const { column, model } = columnWithModel(ctx, setbackMm, warm);
+    for (let step = 0; step <= steps; step++) {
+      const setbackMm = fromMm + step * stepMm;
+      const { column, model } = columnWithModel(context, setbackMm, warm);
       if (!column.feasible) continue;
       for (const interval of column.intervals) {
-        const z = (interval.lowMm + interval.highMm) / 2;
-        const score = objective(tiltDeg, setbackMm, model, z);
-        candidates.push({ tiltDeg, setbackMm, lo: interval.lowMm, hi: interval.highMm, model, score, z });
+        const heightMm = (interval.lowMm + interval.highMm) / 2;
+        const score = objective(tiltDeg, setbackMm, model, heightMm);
+        candidates.push({ tiltDeg, setbackMm, lowMm: interval.lowMm, highMm: interval.highMm, model, score, heightMm });
         if (bestHere === null || score > bestHere) bestHere = score;
       }
     }
@@ -139,18 +140,18 @@ export function proposePlacement(spec: FitSpec, options: PlacementProposalOption
   );
   let best = candidates[0];
   for (const candidate of candidates.slice(0, 6)) {
-    const refined = goldenSectionMax((z) => objective(candidate.tiltDeg, candidate.setbackMm, candidate.model, z), candidate.lo, candidate.hi);
-    if (refined.score > best.score + 1e-9) best = { ...candidate, z: refined.z, score: refined.score };
+    const refined = goldenSectionMax((heightMm) => objective(candidate.tiltDeg, candidate.setbackMm, candidate.model, heightMm), candidate.lowMm, candidate.highMm);
+    if (refined.score > best.score + 1e-9) best = { ...candidate, heightMm: refined.at, score: refined.score };
   }
 
-  const placement: Placement = { setbackMm: best.setbackMm, heightMm: Math.round(best.z * 10) / 10, tiltDeg: best.tiltDeg };
+  const placement: Placement = { setbackMm: best.setbackMm, heightMm: Math.round(best.heightMm * 10) / 10, tiltDeg: best.tiltDeg };
   const margins = boundsAt(spec, settings, placement);
-  const score = margins.length ? Math.min(...margins.map((m) => m.normalizedMargin)) : best.score;
+  const score = margins.length ? Math.min(...margins.map((bound) => bound.normalizedMargin)) : best.score;
   return {
     placement,
-    allPass: margins.every((m) => m.margin >= 0),
+    allPass: margins.every((bound) => bound.margin >= 0),
     score,
-    boundedBy: margins.filter((m) => m.normalizedMargin <= score + 1),
+    boundedBy: margins.filter((bound) => bound.normalizedMargin <= score + 1),
     margins,
     tilts: tilts.map((tiltDeg) => ({ tiltDeg, score: tiltScores.get(tiltDeg) ?? null })),
   };
@@ -158,19 +159,19 @@ export function proposePlacement(spec: FitSpec, options: PlacementProposalOption
 
 /** The envelope margins and the U-joint margin at a placement, from the checks themselves, tightest first. */
 function boundsAt(spec: FitSpec, settings: FitSettings, placement: Placement): ProposalBound[] {
-  const out: ProposalBound[] = envelopeMargins(spec, settings, placement).map((m) => ({
-    checkId: m.checkId,
-    against: m.against,
-    margin: m.marginMm,
+  const out: ProposalBound[] = envelopeMargins(spec, settings, placement).map((margin) => ({
+    checkId: margin.checkId,
+    against: margin.against,
+    margin: margin.marginMm,
     unit: 'mm' as const,
-    status: m.status,
-    normalizedMargin: m.marginMm / settings.tightBandMm,
+    status: margin.status,
+    normalizedMargin: margin.marginMm / settings.tightBandMm,
   }));
   if (spec.transmission) {
     const room = drivelineRoom(spec, settings, placement);
     if (room) {
       out.push({
-        checkId: 'drivetrain.u-joint-angles',
+        checkId: U_JOINT_ANGLES_ID,
         against: 'driveline',
         margin: room.marginDeg,
         unit: 'deg',

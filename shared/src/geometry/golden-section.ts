@@ -1,34 +1,35 @@
 /**
- * Golden-section search for the largest value of `f` on [lo, hi] (unimodal in practice: a minimum of rising and
- * falling margins); the ends and the middle are kept as fall-backs.
+ * Golden-section search for the largest value of `objective` on [from, to] (unimodal in practice: a minimum of
+ * rising and falling margins); the ends and the middle are kept as fall-backs. Answers where (`at`) and how
+ * large (`score`).
  */
-export function goldenSectionMax(f: (z: number) => number, lo: number, hi: number): { z: number; score: number } {
+export function goldenSectionMax(objective: (at: number) => number, from: number, to: number): { at: number; score: number } {
   const ratio = (Math.sqrt(5) - 1) / 2;
-  let a = lo;
-  let b = hi;
-  let c = b - ratio * (b - a);
-  let d = a + ratio * (b - a);
-  let fc = f(c);
-  let fd = f(d);
-  for (let i = 0; i < 30 && b - a > 1e-2; i++) {
-    if (fc >= fd) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - ratio * (b - a);
-      fc = f(c);
+  let low = from;
+  let high = to;
+  let lowerProbe = high - ratio * (high - low);
+  let upperProbe = low + ratio * (high - low);
+  let lowerScore = objective(lowerProbe);
+  let upperScore = objective(upperProbe);
+  for (let step = 0; step < 30 && high - low > 1e-2; step++) {
+    if (lowerScore >= upperScore) {
+      high = upperProbe;
+      upperProbe = lowerProbe;
+      upperScore = lowerScore;
+      lowerProbe = high - ratio * (high - low);
+      lowerScore = objective(lowerProbe);
     } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + ratio * (b - a);
-      fd = f(d);
+      low = lowerProbe;
+      lowerProbe = upperProbe;
+      lowerScore = upperScore;
+      upperProbe = low + ratio * (high - low);
+      upperScore = objective(upperProbe);
     }
   }
-  let best = { z: (a + b) / 2, score: f((a + b) / 2) };
-  for (const z of [lo, hi, (lo + hi) / 2]) {
-    const score = f(z);
-    if (score > best.score) best = { z, score };
+  let best = { at: (low + high) / 2, score: objective((low + high) / 2) };
+  for (const at of [from, to, (from + to) / 2]) {
+    const score = objective(at);
+    if (score > best.score) best = { at, score };
   }
   return best;
 }

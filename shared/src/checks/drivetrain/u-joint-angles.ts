@@ -7,8 +7,10 @@ import type { CheckStatus } from '../../types/finding';
 import type { FitSpec } from '../../types/fit-spec';
 import { formatDegrees } from '../../units/figure-format';
 
+export const U_JOINT_ANGLES_ID = 'drivetrain.u-joint-angles';
+
 const FIELDS: FindingFields = {
-  checkId: 'drivetrain.u-joint-angles',
+  checkId: U_JOINT_ANGLES_ID,
   group: 'drivetrain',
   title: 'U-joint operating angles',
   unit: 'deg',

@@ -168,9 +168,15 @@ export function runPanCheck(context: CheckContext, config: PanCheckConfig): Find
   return measuredFinding({ ...fields, against: worst.obstacle.id }, fig, message, remedies);
 }
 
-export function panCheck(config: PanCheckConfig): CheckDefinition {
+/** A pan check states which obstacle kinds it measures against, so drawings dimension the same obstacles. */
+export interface PanCheckDefinition extends CheckDefinition {
+  obstacleKinds: readonly ChassisObstacle['kind'][];
+}
+
+export function panCheck(config: PanCheckConfig): PanCheckDefinition {
   return {
     id: config.id,
+    obstacleKinds: config.kinds,
     group: 'envelope',
     title: config.title,
     dependsOnPlacement: true,

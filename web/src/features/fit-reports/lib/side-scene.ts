@@ -1,4 +1,17 @@
-import { placeEngineOutline, placeEnginePoint, type ChassisObstacle, type Finding, type FitSpec, type Placement } from '@swapwright/shared';
+import {
+  FAN_RADIATOR_ID,
+  GROUND_CLEARANCE_ID,
+  HEADS_FIREWALL_ID,
+  HOOD_ID,
+  PAN_CHECK_IDS,
+  placeEngineOutline,
+  placeEnginePoint,
+  TRANSMISSION_TUNNEL_ID,
+  type ChassisObstacle,
+  type Finding,
+  type FitSpec,
+  type Placement,
+} from '@swapwright/shared';
 import { boundsOf, insidePolygon, nearestPoints, zAt, type Bounds, type Pt } from './scene-geometry';
 
 export type GapDimension = {
@@ -31,12 +44,12 @@ export type SideScene = {
 type Source = 'pan' | 'top' | 'rear' | 'transmission' | 'fan' | 'lowest';
 
 function sourceOf(checkId: string): Source | null {
-  if (checkId.startsWith('envelope.sump-')) return 'pan';
-  if (checkId === 'envelope.hood') return 'top';
-  if (checkId === 'envelope.heads-firewall') return 'rear';
-  if (checkId === 'envelope.transmission-tunnel') return 'transmission';
-  if (checkId === 'envelope.fan-radiator') return 'fan';
-  if (checkId === 'envelope.ground-clearance') return 'lowest';
+  if (PAN_CHECK_IDS.includes(checkId)) return 'pan';
+  if (checkId === HOOD_ID) return 'top';
+  if (checkId === HEADS_FIREWALL_ID) return 'rear';
+  if (checkId === TRANSMISSION_TUNNEL_ID) return 'transmission';
+  if (checkId === FAN_RADIATOR_ID) return 'fan';
+  if (checkId === GROUND_CLEARANCE_ID) return 'lowest';
   return null;
 }
 
