@@ -6,7 +6,7 @@ export type CurrentShop = ResponseOf<'/api/shops/current', 'get'>;
 export type Shop = Schemas['ShopResponseDto'];
 export type UpdateShopInput = RequestBodyOf<'/api/shops/current', 'patch'>;
 
-/** Whether the answer holds the shop's rates (it does for staff). */
+/** Whether the answer is the full view with the shop's rates (it is for staff who may read them). */
 export function hasShopRates(shop: CurrentShop): shop is Shop {
-  return 'laborRatePerHour' in shop;
+  return shop.view === 'full';
 }
