@@ -43,9 +43,14 @@ describe('the estimator fits the demo engine and clears the crossmember with a r
   it('switches to the rear-sump pan the remedy suggests and the check clears', async () => {
     const { page } = browser;
     const shortfall = page.getByTestId(`shortfall-${SUMP_CHECK}`);
-    const saved = page.waitForResponse((r) => r.url().endsWith('/fit-selections') && r.request().method() === 'PUT');
+    const saved = page.waitForResponse((r) => r.url().endsWith('/fit-selections') && r.request().method() === 'PATCH');
     await shortfall.getByRole('button', { name: /^Use this pan: .*rear-sump/ }).first().click();
-    expect((await saved).status()).toBe(200);
+    const response = await saved;
+    expect(response.status()).toBe(200);
+    // Only what changes goes to the server (the pan, and the pickup it needs), never the whole selection.
+    const sent = Object.keys(response.request().postDataJSON() as object);
+    expect(sent).toContain('oilPanId');
+    expect(sent.every((field) => field === 'oilPanId' || field === 'oilPickupId')).toBe(true);
     await runFitCheck(page);
 
     const check = page.getByTestId(`check-${SUMP_CHECK}`);

@@ -1,7 +1,7 @@
 import { FitSelectionsResponseDto } from './dto/fit-selections.dto';
-import { ProjectFitSelection } from './project-fit-selection.entity';
+import type { ProjectSelections } from './fit-selections.service';
 
-export function mapFitSelections(projectId: string, row: ProjectFitSelection | null): FitSelectionsResponseDto {
+export function mapFitSelections({ projectId, row }: ProjectSelections): FitSelectionsResponseDto {
   const hasShaft = row !== null && row.driveshaftOuterDiameterMm !== null && row.driveshaftWallMm !== null;
   return {
     projectId,

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Put } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Put } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiBearerAuth, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
@@ -6,7 +6,8 @@ import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { FIT_SELECTION_READERS, FIT_SELECTION_WRITERS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
-import { FitSelectionsResponseDto, UpdateFitSelectionsDto } from './dto/fit-selections.dto';
+import { FitSelectionsResponseDto, PatchFitSelectionsDto, UpdateFitSelectionsDto } from './dto/fit-selections.dto';
+import { mapFitSelections } from './fit-selection.mapper';
 import { FitSelectionsService } from './fit-selections.service';
 
 @ApiTags('fit-reports')
@@ -20,8 +21,8 @@ export class FitSelectionsController {
   @ApiOperation({ summary: "The parts and figures the project's fit check uses besides its engine, chassis and transmission" })
   @ApiOkResponse({ type: FitSelectionsResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<FitSelectionsResponseDto> {
-    return this.selections.get(user, id);
+  async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<FitSelectionsResponseDto> {
+    return mapFitSelections(await this.selections.get(user, id));
   }
 
   @Put()
@@ -30,11 +31,25 @@ export class FitSelectionsController {
   @ApiOkResponse({ type: FitSelectionsResponseDto })
   @ApiBadRequestResponse({ type: ErrorResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
-  replace(
+  async replace(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateFitSelectionsDto,
   ): Promise<FitSelectionsResponseDto> {
-    return this.selections.replace(user, id, body);
+    return mapFitSelections(await this.selections.replace(user, id, body));
+  }
+
+  @Patch()
+  @Roles(...FIT_SELECTION_WRITERS)
+  @ApiOperation({ summary: 'Change the fit selections given (fields left out stay as stored; null clears one)' })
+  @ApiOkResponse({ type: FitSelectionsResponseDto })
+  @ApiBadRequestResponse({ type: ErrorResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
+  async patch(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIdPipe) id: string,
+    @Body() body: PatchFitSelectionsDto,
+  ): Promise<FitSelectionsResponseDto> {
+    return mapFitSelections(await this.selections.patch(user, id, body));
   }
 }

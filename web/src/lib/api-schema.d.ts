@@ -753,7 +753,8 @@ export interface paths {
         delete?: never;
         options?: never;
         head?: never;
-        patch?: never;
+        /** Change the fit selections given (fields left out stay as stored; null clears one) */
+        patch: operations["FitSelectionsController_patch"];
         trace?: never;
     };
     "/api/fit-settings": {
@@ -2999,6 +3000,44 @@ export interface components {
             updatedAt: string | null;
         };
         UpdateFitSelectionsDto: {
+            /**
+             * Format: uuid
+             * @description An oil pan of the shop's catalog
+             */
+            oilPanId?: string | null;
+            /**
+             * Format: uuid
+             * @description An oil pickup of the shop's catalog
+             */
+            oilPickupId?: string | null;
+            /**
+             * Format: uuid
+             * @description An oil pump of the shop's catalog
+             */
+            oilPumpId?: string | null;
+            /**
+             * Format: uuid
+             * @description An engine controller of the shop's catalog
+             */
+            controllerId?: string | null;
+            /**
+             * Format: uuid
+             * @description A mount adapter of the shop's catalog
+             */
+            mountAdapterId?: string | null;
+            /** @description One of the engine's accessory drives (spec.accessoryDrives[].id) */
+            accessoryDriveId?: string | null;
+            driveshaft?: components["schemas"]["DriveshaftSpecDto"] | null;
+            /** @description Degrees the cam is set advanced at the timing set (0 = marks aligned) */
+            timingSetAdvanceDeg?: number | null;
+            /** @description Planned top speed, for the driveshaft critical-speed check */
+            topSpeedKph?: number | null;
+            tireDiameterMm?: number | null;
+            axleRatio?: number | null;
+            /** @description Power held for long periods (towing); sizes the radiator */
+            continuousPowerKw?: number | null;
+        };
+        PatchFitSelectionsDto: {
             /**
              * Format: uuid
              * @description An oil pan of the shop's catalog
@@ -7014,6 +7053,47 @@ export interface operations {
         requestBody: {
             content: {
                 "application/json": components["schemas"]["UpdateFitSelectionsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FitSelectionsResponseDto"];
+                };
+            };
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    FitSelectionsController_patch: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PatchFitSelectionsDto"];
             };
         };
         responses: {

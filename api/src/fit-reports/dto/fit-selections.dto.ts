@@ -51,6 +51,12 @@ export class UpdateFitSelectionsDto {
   @OptionalFigure(1, 2000, 'Power held for long periods (towing); sizes the radiator') continuousPowerKw?: number | null;
 }
 
+/**
+ * PATCH changes only the fields given: a field left out keeps its stored value, `null` clears it. `driveshaft`
+ * is one field: given, it replaces the whole shaft.
+ */
+export class PatchFitSelectionsDto extends UpdateFitSelectionsDto {}
+
 export class DriveshaftResponseDto {
   @ApiProperty() outerDiameterMm: number;
   @ApiProperty() wallMm: number;

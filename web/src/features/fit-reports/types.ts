@@ -22,8 +22,8 @@ export type StoredFitReport = Omit<Schemas['FitReportResponseDto'], 'report' | '
 /** The parts and figures the project's fit check uses besides its engine, chassis and transmission. */
 export type FitSelections = Schemas['FitSelectionsResponseDto'];
 
-/** What the selections route takes. */
-export type FitSelectionsInput = RequestBodyOf<'/api/projects/{id}/fit-selections', 'put'>;
+/** What the selections PATCH takes: only the fields to change (a field left out stays as stored, null clears it). */
+export type FitSelectionsInput = RequestBodyOf<'/api/projects/{id}/fit-selections', 'patch'>;
 
 export type FitSelectionKey = 'oilPanId' | 'oilPickupId' | 'oilPumpId' | 'controllerId' | 'accessoryDriveId' | 'mountAdapterId';
 

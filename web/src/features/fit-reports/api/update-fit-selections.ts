@@ -3,10 +3,11 @@ import { apiClient } from '@/lib/api-client';
 import type { FitSelections, FitSelectionsInput } from '../types';
 import { fitReportKeys } from './fit-report-keys';
 
-export type UpdateFitSelectionsArgs = { projectId: string; selections: FitSelectionsInput };
+/** `changes` holds only the fields to change: the server merges them into the stored selection under a row lock. */
+export type UpdateFitSelectionsArgs = { projectId: string; changes: FitSelectionsInput };
 
-export async function updateFitSelections({ projectId, selections }: UpdateFitSelectionsArgs): Promise<FitSelections> {
-  const { data } = await apiClient.put<FitSelections>(`/projects/${encodeURIComponent(projectId)}/fit-selections`, selections);
+export async function updateFitSelections({ projectId, changes }: UpdateFitSelectionsArgs): Promise<FitSelections> {
+  const { data } = await apiClient.patch<FitSelections>(`/projects/${encodeURIComponent(projectId)}/fit-selections`, changes);
   return data;
 }
 

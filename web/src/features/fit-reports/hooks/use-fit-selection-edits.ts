@@ -5,31 +5,6 @@ import { useUpdateFitSelections } from '../api/update-fit-selections';
 import { selectionKeyFor } from '../lib/remedies';
 import type { FitSelections, FitSelectionsInput } from '../types';
 
-/** The fields the selections PUT accepts; it replaces the whole selection, so every one is sent. */
-const SELECTION_FIELDS = [
-  'oilPanId',
-  'oilPickupId',
-  'oilPumpId',
-  'controllerId',
-  'accessoryDriveId',
-  'mountAdapterId',
-  'driveshaft',
-  'timingSetAdvanceDeg',
-  'topSpeedKph',
-  'tireDiameterMm',
-  'axleRatio',
-  'continuousPowerKw',
-] as const;
-
-function selectionBody(current: FitSelections | undefined, patch: FitSelectionsInput): FitSelectionsInput {
-  const body: FitSelectionsInput = {};
-  for (const f of SELECTION_FIELDS) {
-    const v = f in patch ? patch[f] : current?.[f];
-    if (v !== undefined) Object.assign(body, { [f]: v });
-  }
-  return body;
-}
-
 export type FitSelectionEditsOptions = {
   projectId: string;
   selections: FitSelections | undefined;
@@ -47,8 +22,9 @@ export function useFitSelectionEdits({ projectId, selections, spec, catalogPans,
   const update = useUpdateFitSelections({ onSuccess: () => onSaved?.() });
   const [busyPartId, setBusyPartId] = useState<string | null>(null);
 
-  const save = async (patch: FitSelectionsInput) => {
-    await update.mutateAsync({ projectId, selections: selectionBody(selections, patch) });
+  /** Sends only the fields that change; the server merges them, so two quick edits of different fields both stay. */
+  const save = async (changes: FitSelectionsInput) => {
+    await update.mutateAsync({ projectId, changes });
   };
 
   const choosePart = async (remedy: PartRemedy, partId: string) => {
