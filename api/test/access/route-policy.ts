@@ -101,6 +101,7 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/fit-reports/:id': ALL,
   'GET /api/projects/:id/fit-selections': STAFF,
   'PUT /api/projects/:id/fit-selections': BUILDERS,
+  'PATCH /api/projects/:id/fit-selections': BUILDERS,
   'GET /api/fit-settings': STAFF,
   'PUT /api/fit-settings': OWNER,
 
