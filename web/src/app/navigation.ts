@@ -56,6 +56,8 @@ export const sectionRoles = {
   projectDetail: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
   // customers read their own project's stored reports (read-only)
   projectFit: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
+  // customers see their own project's sheet and add photos; the API scopes them
+  projectMeasurements: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
   workOrders: ['owner', 'fabricator'],
@@ -71,5 +73,9 @@ export const canEditProjects = (role: Role): boolean => role === 'owner' || role
 export const isFitReadOnly = (role: Role): boolean => role === 'customer';
 /** Run fit checks, change fit selections and save the placement. */
 export const canRunFitCheck = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'fabricator';
+/** Enter readings, sign the sheet off, edit measurement templates, accept customers' photos (as the API allows). */
+export const canMeasure = (role: Role): boolean => role === 'owner' || role === 'fabricator';
+/** Add photos to a sheet: the measurers and the project's customer. */
+export const canAddMeasurementPhotos = (role: Role): boolean => canMeasure(role) || role === 'customer';
 /** Catalog writers, as the API allows: owner, estimator and counter (the fabricator reads). */
 export const canEditCatalog = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'counter';

@@ -21,6 +21,7 @@ const AcceptInvitePage = lazyNamed(() => import('./routes/auth/accept-invite-pag
 const HomePage = lazyNamed(() => import('./routes/home/home-page'), 'HomePage');
 const ProjectsPage = lazyNamed(() => import('./routes/projects/projects-page'), 'ProjectsPage');
 const ProjectDetailPage = lazyNamed(() => import('./routes/projects/project-detail-page'), 'ProjectDetailPage');
+const MeasurementSheetPage = lazyNamed(() => import('./routes/measurements/measurement-sheet-page'), 'MeasurementSheetPage');
 const MyProjectsPage = lazyNamed(() => import('./routes/projects/my-projects-page'), 'MyProjectsPage');
 const CustomersPage = lazyNamed(() => import('./routes/customers/customers-page'), 'CustomersPage');
 const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'MembersPage');
@@ -108,6 +109,7 @@ export const routes: RouteObject[] = [
           section(paths.projects, sectionRoles.projects, 'Projects', ProjectsPage, { customer: paths.myProjects }),
           section(paths.projectDetail, sectionRoles.projectDetail, 'the project', ProjectDetailPage),
           section(paths.projectFit, sectionRoles.projectFit, 'the fit check', FitReportRoute),
+          section(paths.projectMeasurements, sectionRoles.projectMeasurements, 'the measurement sheet', MeasurementSheetPage),
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
           section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),

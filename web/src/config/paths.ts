@@ -10,6 +10,7 @@ export const paths = {
   projects: '/projects',
   projectDetail: '/projects/:projectId',
   projectFit: '/projects/:projectId/fit',
+  projectMeasurements: '/projects/:projectId/measurements',
   myProjects: '/my-projects',
   customers: '/customers',
   workOrders: '/work-orders',
@@ -26,6 +27,9 @@ export const toProjectDetail = (projectId: string): string =>
 
 export const toProjectFit = (projectId: string): string =>
   paths.projectFit.replace(':projectId', encodeURIComponent(projectId));
+
+export const toProjectMeasurements = (projectId: string): string =>
+  paths.projectMeasurements.replace(':projectId', encodeURIComponent(projectId));
 
 export const toSignIn = (next?: string): string =>
   next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;

@@ -3,7 +3,8 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
-import { toProjectDetail } from '@/config/paths';
+import { toProjectDetail, toProjectMeasurements } from '@/config/paths';
+import { useUnits } from '@/hooks/use-units';
 import { getErrorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notifier';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
@@ -22,6 +23,7 @@ import { SideViewCard } from '@/features/fit-reports/components/side-view-card';
 import { useFitSelectionEdits } from '@/features/fit-reports/hooks/use-fit-selection-edits';
 import { useOpenReport } from '@/features/fit-reports/hooks/use-open-report';
 import { usePlacementPreview } from '@/features/fit-reports/hooks/use-placement-preview';
+import { ReportInputSources } from '@/features/measurements/components/report-input-sources';
 import { useProject } from '@/features/projects/api/get-project';
 import { useUpdateProject } from '@/features/projects/api/update-project';
 import type { Project } from '@/features/projects/types';
@@ -34,6 +36,7 @@ const roundTo100th = (v: number) => Math.round(v * 100) / 100;
 export function ProjectFitPage() {
   const { projectId = '' } = useParams();
   const user = useSignedInUser();
+  const units = useUnits();
   const canRun = canRunFitCheck(user.role);
   // customers get the stored report only; the catalog and selections answer them 403
   const readOnly = isFitReadOnly(user.role);
@@ -198,6 +201,15 @@ export function ProjectFitPage() {
 
             <Card title="Every check" className="fit-checks-card">
               <ChecksTable findings={shown.findings} />
+            </Card>
+
+            <Card title="Where the chassis figures came from" className="fit-sources-card">
+              <ReportInputSources
+                inputs={stored.inputs.chassisInputs}
+                checks={stored.report.findings}
+                formatLength={(mm) => units.formatLength(mm)}
+                sheetLink={<Link to={toProjectMeasurements(p.id)}>Open the measurement sheet</Link>}
+              />
             </Card>
           </>
         )}

@@ -1,6 +1,6 @@
 import { Alert, Card, Col, Row } from 'antd';
 import { Link } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { paths, toProjectMeasurements } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { ProjectsPanel } from '@/features/projects/components/projects-panel';
@@ -20,6 +20,7 @@ export function FabricatorHome() {
               limit={10}
               emptyText="No chassis is waiting to be measured."
               moreTo={`${paths.projects}?status=measuring`}
+              rowLink={{ label: 'Open sheet', to: toProjectMeasurements }}
             />
           </Card>
         </Col>

@@ -1,7 +1,7 @@
 import { Button, Col, Flex, Popconfirm, Row, Space, Card, Typography } from 'antd';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { paths, toProjectFit } from '@/config/paths';
+import { paths, toProjectFit, toProjectMeasurements } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
@@ -57,6 +57,7 @@ export function ProjectDetailPage() {
         subtitle={`${p.vehicleDescription} · opened ${formatDate(p.createdAt)} · last change ${formatDate(p.updatedAt)}`}
         extra={
           <Space>
+            <Button onClick={() => navigate(toProjectMeasurements(p.id))}>{isCustomer ? 'Measurements and photos' : 'Measurement sheet'}</Button>
             <Button onClick={() => navigate(toProjectFit(p.id))}>{isCustomer ? 'Fit report' : 'Fit check'}</Button>
             {canEdit && (
               <>

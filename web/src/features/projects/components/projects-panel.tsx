@@ -1,3 +1,4 @@
+import { Flex } from 'antd';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { toProjectDetail } from '@/config/paths';
@@ -17,10 +18,12 @@ export type ProjectsPanelProps = {
   showCustomer?: boolean;
   /** Where the full list lives, shown when there are more than `limit`. */
   moreTo?: string;
+  /** A second link per project (e.g. straight to its measurement sheet). */
+  rowLink?: { label: string; to: (projectId: string) => string };
 };
 
 /** A short list of projects for a home page panel. */
-export function ProjectsPanel({ label, status, limit = 6, emptyText, emptyAction, showCustomer = true, moreTo }: ProjectsPanelProps) {
+export function ProjectsPanel({ label, status, limit = 6, emptyText, emptyAction, showCustomer = true, moreTo, rowLink }: ProjectsPanelProps) {
   const query = useProjects({ page: 1, pageSize: limit, status, sort: 'updatedAt', order: 'desc' });
   return (
     <QueryState
@@ -39,7 +42,16 @@ export function ProjectsPanel({ label, status, limit = 6, emptyText, emptyAction
               description: [showCustomer ? p.customer?.name : null, p.vehicleDescription, `changed ${formatDate(p.updatedAt)}`]
                 .filter(Boolean)
                 .join(' · '),
-              extra: <ProjectStatusTag status={p.status} />,
+              extra: rowLink ? (
+                <Flex vertical align="flex-end" gap={4}>
+                  <ProjectStatusTag status={p.status} />
+                  <Link to={rowLink.to(p.id)} aria-label={`${rowLink.label}: ${p.title}`}>
+                    {rowLink.label}
+                  </Link>
+                </Flex>
+              ) : (
+                <ProjectStatusTag status={p.status} />
+              ),
             }))}
           />
           {moreTo && page.total > page.items.length && (

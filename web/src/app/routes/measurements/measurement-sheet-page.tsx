@@ -1,0 +1,137 @@
+import { Alert, Button, Card, Flex, Typography } from 'antd';
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
+import { toProjectDetail, toProjectFit } from '@/config/paths';
+import { useUnits } from '@/hooks/use-units';
+import { notifySuccess } from '@/lib/notifier';
+import { useSignedInUser } from '@/features/auth/api/get-current-user';
+import { useAcceptMeasurementPhoto } from '@/features/measurements/api/accept-measurement-photo';
+import { useDeleteMeasurementPhoto } from '@/features/measurements/api/delete-measurement-photo';
+import { useMeasurementSheet } from '@/features/measurements/api/get-measurement-sheet';
+import { useSetMeasurementValue } from '@/features/measurements/api/set-measurement-value';
+import { useSignOffMeasurementSheet } from '@/features/measurements/api/sign-off-measurement-sheet';
+import { MeasurementPointCard } from '@/features/measurements/components/measurement-point-card';
+import { MeasurementSafety } from '@/features/measurements/components/measurement-safety';
+import { PhotoStrip, type PhotoActions } from '@/features/measurements/components/photo-strip';
+import { missingLabelsOf, SheetOverview } from '@/features/measurements/components/sheet-overview';
+import { TemplateEditorDrawer } from '@/features/measurements/components/template-editor-drawer';
+import { usePhotoUploads } from '@/features/measurements/hooks/use-photo-uploads';
+import { filterRows, generalPhotos, initialFilter, sheetCounts, sheetRows, signOffEvent, type SheetFilter } from '@/features/measurements/lib/sheet-state';
+import { useProject } from '@/features/projects/api/get-project';
+import { canAddMeasurementPhotos, canMeasure, canRunFitCheck } from '../../navigation';
+
+/** The fabricator's sheet at the truck: phone first, one card per point, the camera beside each reading. */
+export function MeasurementSheetPage() {
+  const { projectId = '' } = useParams();
+  const user = useSignedInUser();
+  const units = useUnits();
+  const project = useProject(projectId);
+  const sheet = useMeasurementSheet(projectId);
+  const setValue = useSetMeasurementValue(projectId);
+  const signOff = useSignOffMeasurementSheet(projectId);
+  const deletePhoto = useDeleteMeasurementPhoto(projectId);
+  const acceptPhoto = useAcceptMeasurementPhoto(projectId);
+  const uploads = usePhotoUploads(projectId);
+  const [filter, setFilter] = useState<SheetFilter | null>(null);
+  const [editingTemplate, setEditingTemplate] = useState(false);
+  const canEdit = canMeasure(user.role);
+
+  const rows = useMemo(() => (sheet.data ? sheetRows(sheet.data) : []), [sheet.data]);
+  const counts = useMemo(() => sheetCounts(rows), [rows]);
+
+  if (project.isPending || sheet.isPending) return <LoadingState rows={10} />;
+  if (project.isError) return <ErrorState error={project.error} onRetry={() => void project.refetch()} />;
+  if (sheet.isError) return <ErrorState error={sheet.error} onRetry={() => void sheet.refetch()} />;
+  const p = project.data;
+  const s = sheet.data;
+  const shown = filterRows(rows, filter ?? initialFilter(counts));
+
+  const photoActions: PhotoActions = {
+    canAdd: canAddMeasurementPhotos(user.role),
+    canDelete: (photo) => photo.uploadedById === user.id || user.role === 'owner',
+    canReview: canEdit,
+    onAdd: uploads.add,
+    onRetry: uploads.retry,
+    onDismiss: uploads.dismiss,
+    onDelete: (photo) => deletePhoto.mutateAsync(photo.id),
+    onAccept: (photo) => acceptPhoto.mutate(photo.id),
+  };
+  const uploadsFor = (pointId: string | null) => uploads.uploads.filter((u) => u.pointId === pointId && u.replacesPhotoId === null);
+  const general = generalPhotos(s);
+  const replacing = uploads.uploads.filter((u) => u.replacesPhotoId !== null);
+
+  return (
+    <div style={{ maxWidth: 760, margin: '0 auto' }}>
+      <Typography.Text>
+        <Link to={toProjectDetail(p.id)}>← {p.title}</Link>
+      </Typography.Text>
+      <PageHeader
+        eyebrow={p.customer?.name}
+        title="Measurement sheet"
+        subtitle={p.vehicleDescription}
+        extra={
+          <>
+            {canEdit && s.chassisId && <Button onClick={() => setEditingTemplate(true)}>Edit points</Button>}
+            {canRunFitCheck(user.role) && <Link to={toProjectFit(p.id)}>Fit check</Link>}
+          </>
+        }
+      />
+      <Flex vertical gap={12}>
+        <MeasurementSafety />
+        {!s.chassisId ? (
+          <Alert
+            type="info"
+            showIcon
+            title="No chassis model chosen yet"
+            description="The points to measure come from the project's chassis model. Choose one from the catalog on the project page first; photos can be added already."
+          />
+        ) : (
+          <SheetOverview
+            counts={counts}
+            filter={filter ?? initialFilter(counts)}
+            onFilter={setFilter}
+            missingLabels={missingLabelsOf(s.points, s.missing)}
+            signedOffAt={s.signedOffAt}
+            signOff={signOffEvent(s)}
+            canSignOff={canEdit}
+            signingOff={signOff.isPending}
+            onSignOff={() =>
+              void signOff.mutateAsync().then(() => notifySuccess({ title: 'Sheet signed off', description: 'The next fit check runs on these readings.' }))
+            }
+          />
+        )}
+        {shown.length === 0 && s.chassisId && (
+          <Card>
+            <EmptyState description={filter === 'flagged' ? 'No reading is far from the catalog.' : 'Nothing in this list.'} />
+          </Card>
+        )}
+        {shown.map((row) => (
+          <MeasurementPointCard
+            key={row.point.id}
+            row={row}
+            system={units.system}
+            formatLength={(mm) => units.formatLength(mm)}
+            signedOff={s.signedOffAt !== null}
+            canEdit={canEdit}
+            onSave={async (pointId, body) => {
+              await setValue.mutateAsync({ pointId, body });
+              notifySuccess({ title: 'Reading saved', key: 'reading-saved' });
+            }}
+            uploads={uploadsFor(row.point.id)}
+            uploadedIds={uploads.uploadedIds}
+            photoActions={photoActions}
+          />
+        ))}
+        <Card size="small" title="Other photos" data-testid="general-photos">
+          <Typography.Paragraph type="secondary" style={{ fontSize: 13 }}>
+            The truck as it arrived, the customer's own pictures, anything not tied to one point.
+          </Typography.Paragraph>
+          <PhotoStrip label="the truck" pointId={null} photos={general} uploads={[...uploadsFor(null), ...replacing]} uploadedIds={uploads.uploadedIds} actions={photoActions} />
+        </Card>
+      </Flex>
+      {canEdit && s.chassisId && <TemplateEditorDrawer chassisId={s.chassisId} open={editingTemplate} onClose={() => setEditingTemplate(false)} />}
+    </div>
+  );
+}

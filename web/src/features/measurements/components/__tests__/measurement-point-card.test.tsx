@@ -1,0 +1,102 @@
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it, vi } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import { sheetRows } from '../../lib/sheet-state';
+import { sheetStub } from '../../lib/__tests__/sheet-fixture';
+import { MeasurementPointCard, type MeasurementPointCardProps } from '../measurement-point-card';
+import { SheetOverview } from '../sheet-overview';
+
+const noPhotos: MeasurementPointCardProps['photoActions'] = {
+  canAdd: true,
+  canDelete: () => false,
+  canReview: false,
+  onAdd: () => undefined,
+  onRetry: () => undefined,
+  onDismiss: () => undefined,
+  onDelete: async () => undefined,
+  onAccept: () => undefined,
+};
+
+function renderCard(props: Partial<MeasurementPointCardProps> = {}) {
+  const onSave = vi.fn(async () => undefined);
+  const row = sheetRows(sheetStub()).find((r) => r.point.id === 'front-crossmember.top')!;
+  renderWithApp(
+    <MeasurementPointCard
+      row={row}
+      system="in"
+      formatLength={(mm) => `${mm} mm`}
+      signedOff={false}
+      canEdit
+      onSave={onSave}
+      uploads={[]}
+      uploadedIds={new Set()}
+      photoActions={noPhotos}
+      {...props}
+    />,
+  );
+  return { onSave };
+}
+
+describe('a point of the sheet', () => {
+  it('reads 12 1/2" through the shared parser and saves it in millimetres', async () => {
+    const { onSave } = renderCard();
+    const box = screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' });
+    fireEvent.change(box, { target: { value: '12 1/2"' } });
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly.
+    expect(screen.getByTestId('reading-preview')).toHaveTextContent('317.5 mm');
+    fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
+    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '317.5', unit: 'mm' }));
+    expect(screen.getByRole('img', { name: 'Where to measure: Front crossmember: top' })).toBeInTheDocument();
+    expect(screen.getByText('Missing')).toBeInTheDocument();
+  });
+
+  it('will not save what it cannot read', () => {
+    renderCard();
+    fireEvent.change(screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' }), { target: { value: 'twelve' } });
+    expect(screen.getByRole('alert')).toHaveTextContent(/twelve/);
+    expect(screen.getByRole('button', { name: 'Save reading' })).toBeDisabled();
+  });
+
+  it('after sign-off asks for a reason and sends it with the change', async () => {
+    const { onSave } = renderCard({ signedOff: true });
+    fireEvent.change(screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' }), { target: { value: '335 mm' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
+    const ok = await screen.findByRole('button', { name: 'Save with this reason' });
+    expect(onSave).not.toHaveBeenCalled();
+    expect(ok).toBeDisabled();
+    fireEvent.change(screen.getByRole('textbox', { name: 'Reason for the change' }), { target: { value: 'Crossmember sits lower than the book' } });
+    expect(ok).toBeEnabled();
+    fireEvent.click(ok);
+    await waitFor(() =>
+      expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '335', unit: 'mm', reason: 'Crossmember sits lower than the book' }),
+    );
+  });
+
+  it('a flagged reading says to take a second look', () => {
+    const row = sheetRows(sheetStub()).find((r) => r.point.id === 'front-crossmember.front-face')!;
+    renderCard({ row });
+    expect(screen.getByText('Far from the catalog: take a second look')).toBeInTheDocument();
+    expect(screen.getByTestId('measured-by')).toHaveTextContent('Measured by Sefa Lindqvist-Moro');
+  });
+});
+
+describe('the sheet overview', () => {
+  it('lists what is missing and holds sign-off until it is measured', () => {
+    renderWithApp(
+      <SheetOverview
+        counts={{ total: 4, required: 3, requiredMeasured: 1, missing: 2, measured: 1, flagged: 1 }}
+        filter="missing"
+        onFilter={() => undefined}
+        missingLabels={['Front crossmember: top', 'Pinion: angle']}
+        signedOffAt={null}
+        signOff={null}
+        canSignOff
+        signingOff={false}
+        onSignOff={() => undefined}
+      />,
+    );
+    expect(screen.getByTestId('sheet-counts')).toHaveTextContent('1 of 3 required points measured');
+    expect(screen.getByTestId('missing-list')).toHaveTextContent('Still to measure: Front crossmember: top; Pinion: angle.');
+    expect(screen.getByRole('button', { name: 'Sign off (measure 2 more first)' })).toBeDisabled();
+  });
+});

@@ -1,0 +1,233 @@
+import { Alert, Button, Card, Collapse, Flex, Input, Tag, Typography } from 'antd';
+import { useState } from 'react';
+import { formatDateTime } from '@/lib/dates';
+import { getErrorMessage } from '@/lib/api-error';
+import type { PhotoUpload } from '../hooks/use-photo-uploads';
+import { formatDeviation, formatReading, readEntry, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
+import type { SetMeasurementValueBody } from '../types';
+import { PhotoStrip, type PhotoActions } from './photo-strip';
+import { PointDrawing } from './point-drawing';
+import { ReasonModal } from './reason-modal';
+
+export type MeasurementPointCardProps = {
+  row: SheetRow;
+  system: UnitSystem;
+  formatLength: (mm: number) => string;
+  signedOff: boolean;
+  canEdit: boolean;
+  onSave: (pointId: string, body: SetMeasurementValueBody) => Promise<unknown>;
+  uploads: PhotoUpload[];
+  uploadedIds: ReadonlySet<string>;
+  photoActions: PhotoActions;
+};
+
+function ReadingPreview({ text, reading, fmt }: { text: string; reading: ReturnType<typeof readEntry>; fmt: (v: number, unit: 'mm' | 'deg') => string }) {
+  if (reading.ok === null) return null;
+  if (reading.ok === false) {
+    return (
+      <Typography.Text type="danger" role="alert" style={{ fontSize: 13 }}>
+        {reading.message}
+      </Typography.Text>
+    );
+  }
+  return (
+    <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reading-preview">
+      “{text.trim()}” reads as {fmt(reading.value, reading.unit)}
+      {reading.unit === 'mm' && ` (${Math.round(reading.value * 10) / 10} mm)`}
+    </Typography.Text>
+  );
+}
+
+/** One point of the sheet: where and how to measure it, a big box for the reading, its history and its photos. */
+export function MeasurementPointCard({ row, system, formatLength, signedOff, canEdit, onSave, uploads, uploadedIds, photoActions }: MeasurementPointCardProps) {
+  const { point, value } = row;
+  const [text, setText] = useState('');
+  const [tolerance, setTolerance] = useState('');
+  const [note, setNote] = useState('');
+  const [askReason, setAskReason] = useState(false);
+  const [saving, setSaving] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const fmt = (v: number, unit: 'mm' | 'deg') => formatReading(v, unit, formatLength);
+  const reading = readEntry(text, point, system);
+  const toleranceReading = readEntry(tolerance, point, system);
+  const unitHint = point.unit === 'deg' ? 'degrees, e.g. 2.5 or -1.5°' : system === 'in' ? 'e.g. 12 1/2", 12.5 in or 318 mm' : 'e.g. 318 mm, 12 1/2" or 12.5 in';
+
+  const save = async (reason?: string) => {
+    if (reading.ok !== true) return;
+    if (toleranceReading.ok === false) return;
+    setSaving(true);
+    setError(null);
+    try {
+      await onSave(
+        point.id,
+        valueBody(reading, { toleranceMm: toleranceReading.ok ? Math.abs(toleranceReading.value) : null, note, reason }),
+      );
+      setText('');
+      setTolerance('');
+      setNote('');
+      setAskReason(false);
+    } catch (e) {
+      setError(getErrorMessage(e));
+      setAskReason(false);
+    } finally {
+      setSaving(false);
+    }
+  };
+
+  const status = row.flagged ? (
+    <Tag color="red">Far from catalog</Tag>
+  ) : value ? (
+    <Tag color="green">Measured</Tag>
+  ) : row.missing ? (
+    <Tag color="orange">Missing</Tag>
+  ) : (
+    <Tag>Optional</Tag>
+  );
+
+  return (
+    <Card
+      size="small"
+      data-testid="point-card"
+      data-point-id={point.id}
+      title={
+        <Flex justify="space-between" align="center" gap={8}>
+          <span style={{ whiteSpace: 'normal', lineHeight: 1.3, padding: '6px 0' }}>{point.label}</span>
+          {status}
+        </Flex>
+      }
+    >
+      <Flex vertical gap={10}>
+        <Flex gap={12} wrap align="flex-start">
+          <PointDrawing point={point} />
+          <Typography.Paragraph type="secondary" style={{ flex: '1 1 160px', margin: 0, fontSize: 13 }}>
+            {point.howTo}
+          </Typography.Paragraph>
+        </Flex>
+
+        <Flex gap={16} wrap>
+          <div>
+            <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+              Reading
+            </Typography.Text>
+            <div style={{ fontSize: 22, fontWeight: 600 }} data-testid="point-value">
+              {value ? fmt(value.value, point.unit) : '—'}
+              {value?.tolerance !== null && value?.tolerance !== undefined && (
+                <span style={{ fontSize: 14, fontWeight: 400 }}> ± {fmt(value.tolerance, point.unit)}</span>
+              )}
+            </div>
+          </div>
+          {point.catalogValue !== null && (
+            <div>
+              <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+                Catalog
+              </Typography.Text>
+              <div style={{ fontSize: 16, paddingTop: 4 }}>{fmt(point.catalogValue, point.unit)}</div>
+            </div>
+          )}
+        </Flex>
+        {value && (
+          <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="measured-by">
+            Measured by {value.measuredBy}, {formatDateTime(value.measuredAt)}
+            {value.deviation !== null && ` · ${formatDeviation(value.deviation, point.unit, formatLength)} from the catalog`}
+            {value.note && ` · ${value.note}`}
+          </Typography.Text>
+        )}
+        {row.flagged && value?.deviation !== null && value?.deviation !== undefined && (
+          <Alert
+            type="warning"
+            showIcon
+            title="Far from the catalog: take a second look"
+            description={`This reading is ${formatDeviation(value.deviation, point.unit, formatLength)} from what the catalog predicts for this truck. Measure it again before cutting or ordering; if it holds, the fit check uses it.`}
+          />
+        )}
+
+        {canEdit && (
+          <Flex vertical gap={6}>
+            <Input
+              size="large"
+              inputMode="text"
+              autoComplete="off"
+              aria-label={`Reading: ${point.label}`}
+              placeholder={value ? `New reading (${unitHint})` : unitHint}
+              value={text}
+              status={reading.ok === false ? 'error' : undefined}
+              onChange={(e) => setText(e.target.value)}
+              onPressEnter={() => (signedOff ? setAskReason(true) : void save())}
+              style={{ fontSize: 20, height: 52 }}
+            />
+            <ReadingPreview text={text} reading={reading} fmt={fmt} />
+            <Flex gap={8} wrap>
+              <Input
+                aria-label={`Tolerance: ${point.label}`}
+                placeholder={point.unit === 'deg' ? '± degrees' : '± tolerance'}
+                value={tolerance}
+                status={toleranceReading.ok === false ? 'error' : undefined}
+                onChange={(e) => setTolerance(e.target.value)}
+                style={{ flex: '1 1 110px', height: 44 }}
+              />
+              <Input
+                aria-label={`Note: ${point.label}`}
+                placeholder="Note"
+                maxLength={500}
+                value={note}
+                onChange={(e) => setNote(e.target.value)}
+                style={{ flex: '2 1 160px', height: 44 }}
+              />
+            </Flex>
+            {toleranceReading.ok === false && (
+              <Typography.Text type="danger" style={{ fontSize: 13 }}>
+                Tolerance: {toleranceReading.message}
+              </Typography.Text>
+            )}
+            {error && <Alert type="error" showIcon title="Not saved" description={error} />}
+            <Button
+              type="primary"
+              size="large"
+              block
+              disabled={reading.ok !== true || toleranceReading.ok === false}
+              loading={saving && !askReason}
+              onClick={() => (signedOff ? setAskReason(true) : void save())}
+              style={{ height: 48 }}
+            >
+              {value ? 'Save new reading' : 'Save reading'}
+            </Button>
+          </Flex>
+        )}
+
+        <PhotoStrip label={point.label} pointId={point.id} photos={row.photos} uploads={uploads} uploadedIds={uploadedIds} actions={photoActions} />
+
+        {row.history.length > 0 && (
+          <Collapse
+            size="small"
+            ghost
+            items={[
+              {
+                key: 'history',
+                label: `History (${row.history.length})`,
+                children: (
+                  <ul style={{ margin: 0, paddingLeft: 18 }} aria-label={`History: ${point.label}`}>
+                    {row.history.map((e, i) => (
+                      <li key={`${e.at}-${i}`} style={{ fontSize: 13 }}>
+                        {e.oldValue === null ? 'First reading' : `${fmt(e.oldValue, point.unit)} →`} {e.newValue !== null && fmt(e.newValue, point.unit)}, {e.by},{' '}
+                        {formatDateTime(e.at)}
+                        {e.reason && <> · reason: {e.reason}</>}
+                      </li>
+                    ))}
+                  </ul>
+                ),
+              },
+            ]}
+          />
+        )}
+      </Flex>
+      <ReasonModal
+        open={askReason}
+        pointLabel={point.label}
+        change={`${value ? fmt(value.value, point.unit) : '—'} → ${reading.ok === true ? fmt(reading.value, reading.unit) : '—'}`}
+        saving={saving}
+        onCancel={() => setAskReason(false)}
+        onConfirm={(reason) => void save(reason)}
+      />
+    </Card>
+  );
+}

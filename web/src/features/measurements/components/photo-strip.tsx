@@ -1,0 +1,205 @@
+import { Button, Flex, Image, Popconfirm, Progress, Tag, Typography } from 'antd';
+import { useRef, type ReactNode } from 'react';
+import { formatDateTime } from '@/lib/dates';
+import { useMeasurementPhotoUrl } from '../api/get-measurement-photo-file';
+import type { PhotoUpload } from '../hooks/use-photo-uploads';
+import type { MeasurementPhoto } from '../types';
+
+const THUMB = 88;
+
+export type PhotoActions = {
+  canAdd: boolean;
+  /** Whether this person may delete the photo (its uploader or the owner). */
+  canDelete: (photo: MeasurementPhoto) => boolean;
+  /** Accept or replace a customer's photo (fabricator or owner). */
+  canReview: boolean;
+  onAdd: (files: File[], target: { pointId?: string | null; replacesPhotoId?: string | null }) => void;
+  onRetry: (key: string) => void;
+  onDismiss: (key: string) => void;
+  onDelete: (photo: MeasurementPhoto) => Promise<unknown>;
+  onAccept: (photo: MeasurementPhoto) => void;
+};
+
+function CameraIcon() {
+  return (
+    <svg width={18} height={18} viewBox="0 0 24 24" aria-hidden="true" style={{ verticalAlign: '-3px' }} fill="none" stroke="currentColor" strokeWidth={2}>
+      <path d="M4 8h3l2-3h6l2 3h3v11H4z" />
+      <circle cx={12} cy={13} r={3.5} />
+    </svg>
+  );
+}
+
+/** The hidden file box behind a camera button: on a phone `capture` opens the rear camera. */
+function CameraButton({ label, onFiles, children, size = 'large' }: { label: string; onFiles: (files: File[]) => void; children: ReactNode; size?: 'large' | 'middle' }) {
+  const input = useRef<HTMLInputElement>(null);
+  return (
+    <>
+      <input
+        ref={input}
+        type="file"
+        accept="image/*"
+        capture="environment"
+        multiple
+        aria-label={label}
+        style={{ display: 'none' }}
+        onChange={(e) => {
+          const files = Array.from(e.target.files ?? []);
+          e.target.value = '';
+          if (files.length > 0) onFiles(files);
+        }}
+      />
+      <Button size={size} onClick={() => input.current?.click()}>
+        {children}
+      </Button>
+    </>
+  );
+}
+
+function Tile({ children, footer, testId }: { children: ReactNode; footer: ReactNode; testId: string }) {
+  return (
+    <Flex vertical gap={4} style={{ width: THUMB }} data-testid={testId}>
+      <div style={{ width: THUMB, height: THUMB, borderRadius: 6, overflow: 'hidden', background: '#f0f0f0' }}>{children}</div>
+      {footer}
+    </Flex>
+  );
+}
+
+function StoredPhoto({ photo, alt, actions }: { photo: MeasurementPhoto; alt: string; actions: PhotoActions }) {
+  const { url, isError } = useMeasurementPhotoUrl(photo.id);
+  return (
+    <Tile
+      testId="photo-thumb"
+      footer={
+        <Flex vertical gap={2}>
+          {photo.status === 'pending' && <Tag color="gold">From the customer</Tag>}
+          <Typography.Text type="secondary" style={{ fontSize: 11, lineHeight: 1.2 }}>
+            {photo.uploadedBy}, {formatDateTime(photo.createdAt)}
+          </Typography.Text>
+          {photo.status === 'pending' && actions.canReview && (
+            <Flex gap={4} wrap>
+              <Button size="small" onClick={() => actions.onAccept(photo)}>
+                Accept
+              </Button>
+              <CameraButton size="middle" label={`Replace the customer's photo ${photo.id}`} onFiles={(files) => actions.onAdd(files.slice(0, 1), { replacesPhotoId: photo.id })}>
+                Replace
+              </CameraButton>
+            </Flex>
+          )}
+          {actions.canDelete(photo) && (
+            <Popconfirm title="Delete this photo?" okText="Delete" okButtonProps={{ danger: true }} onConfirm={() => actions.onDelete(photo)}>
+              <Button size="small" danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start' }}>
+                Delete
+              </Button>
+            </Popconfirm>
+          )}
+        </Flex>
+      }
+    >
+      {url ? (
+        <Image src={url} alt={alt} width={THUMB} height={THUMB} style={{ objectFit: 'cover' }} />
+      ) : (
+        <Flex align="center" justify="center" style={{ height: '100%' }}>
+          <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+            {isError ? 'Not available' : 'Loading…'}
+          </Typography.Text>
+        </Flex>
+      )}
+    </Tile>
+  );
+}
+
+function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string; actions: PhotoActions }) {
+  const stored = upload.stored;
+  return (
+    <Tile
+      testId={upload.status === 'done' ? 'photo-thumb' : 'photo-upload'}
+      footer={
+        <Flex vertical gap={2}>
+          <Progress
+            percent={upload.percent}
+            size="small"
+            status={upload.status === 'failed' ? 'exception' : upload.status === 'done' ? 'success' : 'active'}
+            aria-label={`Upload of ${upload.file.name}`}
+          />
+          {upload.status === 'done' && (
+            <Typography.Text type="secondary" style={{ fontSize: 11 }}>
+              Uploaded
+            </Typography.Text>
+          )}
+          {upload.status === 'failed' && (
+            <>
+              <Typography.Text type="danger" style={{ fontSize: 11, lineHeight: 1.2 }} role="alert">
+                {upload.error}
+              </Typography.Text>
+              <Flex gap={4}>
+                <Button size="small" type="primary" onClick={() => actions.onRetry(upload.key)}>
+                  Retry
+                </Button>
+                <Button size="small" onClick={() => actions.onDismiss(upload.key)}>
+                  Drop
+                </Button>
+              </Flex>
+            </>
+          )}
+          {stored && actions.canDelete(stored) && (
+            <Popconfirm
+              title="Delete this photo?"
+              okText="Delete"
+              okButtonProps={{ danger: true }}
+              onConfirm={async () => {
+                await actions.onDelete(stored);
+                actions.onDismiss(upload.key);
+              }}
+            >
+              <Button size="small" danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start' }}>
+                Delete
+              </Button>
+            </Popconfirm>
+          )}
+        </Flex>
+      }
+    >
+      <Image src={upload.previewUrl} alt={alt} width={THUMB} height={THUMB} style={{ objectFit: 'cover', opacity: upload.status === 'done' ? 1 : 0.6 }} />
+    </Tile>
+  );
+}
+
+export type PhotoStripProps = {
+  /** What the photos show, for the camera button and the thumbnails' text. */
+  label: string;
+  pointId: string | null;
+  photos: MeasurementPhoto[];
+  uploads: PhotoUpload[];
+  /** Stored photos shown through their upload tile. */
+  uploadedIds: ReadonlySet<string>;
+  actions: PhotoActions;
+};
+
+/** A point's photos: thumbnails (tap for the full-size viewer), uploads with progress and retry, and the camera button. */
+export function PhotoStrip({ label, pointId, photos, uploads, uploadedIds, actions }: PhotoStripProps) {
+  const stored = photos.filter((p) => !uploadedIds.has(p.id));
+  const alt = `Photo: ${label}`;
+  return (
+    <Flex vertical gap={8}>
+      {(stored.length > 0 || uploads.length > 0) && (
+        <Image.PreviewGroup>
+          <Flex gap={10} wrap>
+            {stored.map((photo) => (
+              <StoredPhoto key={photo.id} photo={photo} alt={alt} actions={actions} />
+            ))}
+            {uploads.map((upload) => (
+              <UploadTile key={upload.key} upload={upload} alt={alt} actions={actions} />
+            ))}
+          </Flex>
+        </Image.PreviewGroup>
+      )}
+      {actions.canAdd && (
+        <div>
+          <CameraButton label={`Take or add photos: ${label}`} onFiles={(files) => actions.onAdd(files, { pointId })}>
+            <CameraIcon /> Add photo
+          </CameraButton>
+        </div>
+      )}
+    </Flex>
+  );
+}

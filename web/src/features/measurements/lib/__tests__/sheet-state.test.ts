@@ -1,0 +1,86 @@
+import { describe, expect, it } from 'vitest';
+import { filterRows, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, valueBody } from '../sheet-state';
+import type { MeasurementPhoto } from '../../types';
+import { POINTS, sheetStub } from './sheet-fixture';
+
+const length = POINTS[0];
+const angle = POINTS[2];
+
+describe('reading what was typed at the truck', () => {
+  it('takes fractions, decimal inches and millimetres to the same value', () => {
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly, so 12 1/2 in = 317.5 mm.
+    for (const text of ['12 1/2"', '12.5 in', '317.5 mm', '12 1/2']) {
+      expect(readEntry(text, length, 'in')).toEqual({ ok: true, value: 317.5, unit: 'mm' });
+    }
+    // A bare number is in the person's unit.
+    expect(readEntry('318', length, 'mm')).toEqual({ ok: true, value: 318, unit: 'mm' });
+    // Source: NIST SP 811 (2008) B.8: 12.5 in × 25.4 = 317.5 mm; a decimal comma reads as a point.
+    expect(readEntry('317,5', length, 'mm')).toEqual({ ok: true, value: 317.5, unit: 'mm' });
+  });
+
+  it('reads angles in degrees and refuses what it cannot read, with a sentence', () => {
+    expect(readEntry('-1.5°', angle, 'in')).toEqual({ ok: true, value: -1.5, unit: 'deg' });
+    expect(readEntry('3 in', angle, 'in')).toMatchObject({ ok: false, message: expect.stringMatching(/not an angle/) });
+    expect(readEntry('abc', length, 'in')).toMatchObject({ ok: false, message: expect.any(String) });
+    // A floor height cannot be negative or longer than the truck.
+    expect(readEntry('-3 mm', length, 'mm').ok).toBe(false);
+    expect(readEntry('20000 mm', length, 'mm').ok).toBe(false);
+    expect(readEntry('  ', length, 'mm')).toEqual({ ok: null });
+  });
+
+  it('sends the figure in millimetres, with the tolerance, note and reason when given', () => {
+    expect(valueBody({ value: 317.5 })).toEqual({ value: '317.5', unit: 'mm' });
+    expect(valueBody({ value: 317.5 }, { toleranceMm: 3.18, note: ' yoke centre ', reason: '  re-measured ' })).toEqual({
+      value: '317.5',
+      unit: 'mm',
+      tolerance: '3.18',
+      note: 'yoke centre',
+      reason: 're-measured',
+    });
+  });
+});
+
+describe('what is still missing', () => {
+  it('counts required points measured, missing and flagged, and opens on the missing list', () => {
+    const rows = sheetRows(sheetStub());
+    const counts = sheetCounts(rows);
+    expect(counts).toEqual({ total: 4, required: 3, requiredMeasured: 1, missing: 2, measured: 1, flagged: 1 });
+    expect(initialFilter(counts)).toBe('missing');
+    expect(filterRows(rows, 'missing').map((r) => r.point.id)).toEqual(['front-crossmember.top', 'pinion.angle']);
+    expect(filterRows(rows, 'flagged').map((r) => r.point.id)).toEqual(['front-crossmember.front-face']);
+    expect(filterRows(rows, 'measured').map((r) => r.point.id)).toEqual(['front-crossmember.front-face']);
+    expect(filterRows(rows, 'all')).toHaveLength(4);
+    // an optional point without a value is not missing
+    expect(rows.find((r) => r.point.id === 'hood@400')).toMatchObject({ missing: false, value: null });
+  });
+
+  it('keeps each point its own history, newest first, and its own photos', () => {
+    const photo: MeasurementPhoto = { id: 'ph-1', pointId: 'pinion.angle', contentType: 'image/jpeg', bytes: 10, widthPx: 4, heightPx: 3, status: 'accepted', uploadedBy: 'A', uploadedById: 'u', createdAt: '2026-11-30T08:00:00.000Z', url: '/x' };
+    const loose: MeasurementPhoto = { ...photo, id: 'ph-2', pointId: null };
+    const sheet = sheetStub({ photos: [photo, loose] });
+    const rows = sheetRows(sheet);
+    expect(rows.find((r) => r.point.id === 'front-crossmember.front-face')!.history.map((e) => e.newValue)).toEqual([110, 90]);
+    expect(rows.find((r) => r.point.id === 'pinion.angle')!.photos.map((p) => p.id)).toEqual(['ph-1']);
+    expect(generalPhotos(sheet).map((p) => p.id)).toEqual(['ph-2']);
+  });
+
+  it('opens on every point once nothing is missing', () => {
+    const rows = sheetRows(sheetStub({ missing: [] }));
+    expect(initialFilter(sheetCounts(rows))).toBe('all');
+  });
+});
+
+describe('sign-off', () => {
+  it('after sign-off a change needs a reason of a few words', () => {
+    expect(needsReason(sheetStub())).toBe(false);
+    const signed = sheetStub({
+      signedOffAt: '2026-11-30T10:00:00.000Z',
+      history: [{ kind: 'sign-off', pointId: null, oldValue: null, newValue: null, reason: null, by: 'Sefa Lindqvist-Moro', at: '2026-11-30T10:00:00.000Z' }],
+    });
+    expect(needsReason(signed)).toBe(true);
+    expect(signOffEvent(signed)?.by).toBe('Sefa Lindqvist-Moro');
+    expect(reasonProblem('  ')).toMatch(/why/);
+    expect(reasonProblem('ok')).not.toBeNull();
+    expect(reasonProblem('re-measured at ride height')).toBeNull();
+  });
+});

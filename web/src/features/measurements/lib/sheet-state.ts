@@ -1,0 +1,140 @@
+import { parseMeasurementEntry } from '@swapwright/shared';
+import type { MeasurementEvent, MeasurementPhoto, MeasurementPoint, MeasurementSheet, MeasurementValue, SetMeasurementValueBody } from '../types';
+
+export type UnitSystem = 'in' | 'mm';
+
+/** Which points the sheet lists. */
+export const SHEET_FILTERS = ['missing', 'flagged', 'measured', 'all'] as const;
+export type SheetFilter = (typeof SHEET_FILTERS)[number];
+
+/** One point of the sheet with everything recorded against it. */
+export interface SheetRow {
+  point: MeasurementPoint;
+  value: MeasurementValue | null;
+  /** Required and not yet measured. */
+  missing: boolean;
+  /** Measured further from the catalog than the shop's limit. */
+  flagged: boolean;
+  photos: MeasurementPhoto[];
+  /** Newest first. */
+  history: MeasurementEvent[];
+}
+
+export function sheetRows(sheet: MeasurementSheet): SheetRow[] {
+  const values = new Map(sheet.values.map((v) => [v.pointId, v]));
+  const missing = new Set(sheet.missing);
+  return sheet.points.map((point) => {
+    const value = values.get(point.id) ?? null;
+    return {
+      point,
+      value,
+      missing: missing.has(point.id),
+      flagged: value?.flagged ?? false,
+      photos: sheet.photos.filter((p) => p.pointId === point.id),
+      history: sheet.history.filter((e) => e.kind === 'value' && e.pointId === point.id),
+    };
+  });
+}
+
+export interface SheetCounts {
+  total: number;
+  required: number;
+  /** Required points with a reading. */
+  requiredMeasured: number;
+  missing: number;
+  measured: number;
+  flagged: number;
+}
+
+export function sheetCounts(rows: readonly SheetRow[]): SheetCounts {
+  const required = rows.filter((r) => r.point.required);
+  return {
+    total: rows.length,
+    required: required.length,
+    requiredMeasured: required.filter((r) => r.value !== null).length,
+    missing: rows.filter((r) => r.missing).length,
+    measured: rows.filter((r) => r.value !== null).length,
+    flagged: rows.filter((r) => r.flagged).length,
+  };
+}
+
+export function filterRows(rows: readonly SheetRow[], filter: SheetFilter): SheetRow[] {
+  switch (filter) {
+    case 'missing':
+      return rows.filter((r) => r.missing);
+    case 'flagged':
+      return rows.filter((r) => r.flagged);
+    case 'measured':
+      return rows.filter((r) => r.value !== null);
+    default:
+      return [...rows];
+  }
+}
+
+/** The list to open on: what is still missing while anything is, else everything. */
+export function initialFilter(counts: SheetCounts): SheetFilter {
+  return counts.missing > 0 ? 'missing' : 'all';
+}
+
+export type EntryReading = { ok: true; value: number; unit: 'mm' | 'deg' } | { ok: false; message: string } | { ok: null };
+
+/**
+ * Reads what was typed for a point with the same parser the API uses: `12 1/2"`, `12.5 in`, `318 mm`, or a bare
+ * number in the person's unit; degrees for an angle. `{ ok: null }` while the box is empty.
+ */
+export function readEntry(text: string, point: Pick<MeasurementPoint, 'kind'>, system: UnitSystem): EntryReading {
+  if (text.trim() === '') return { ok: null };
+  // a lone comma with no point is a decimal comma ("317,5")
+  const normalised = !text.includes('.') && text.split(',').length === 2 ? text.replace(',', '.') : text;
+  return parseMeasurementEntry(normalised, point.kind, system);
+}
+
+/** A change to a signed-off sheet needs a reason (the API refuses it without one). */
+export function needsReason(sheet: Pick<MeasurementSheet, 'signedOffAt'>): boolean {
+  return sheet.signedOffAt !== null;
+}
+
+/** The shortest reason the API takes. */
+export const MIN_REASON_LENGTH = 3;
+
+export function reasonProblem(reason: string): string | null {
+  return reason.trim().length >= MIN_REASON_LENGTH ? null : `Say in a few words why the reading changes (at least ${MIN_REASON_LENGTH} characters).`;
+}
+
+/** What the value route takes for a reading that `readEntry` accepted: the figure in mm (or degrees) as read. */
+export function valueBody(
+  reading: { value: number },
+  extras: { toleranceMm?: number | null; note?: string; reason?: string } = {},
+): SetMeasurementValueBody {
+  return {
+    value: String(reading.value),
+    unit: 'mm',
+    ...(extras.toleranceMm !== undefined && extras.toleranceMm !== null && { tolerance: String(extras.toleranceMm) }),
+    ...(extras.note?.trim() && { note: extras.note.trim() }),
+    ...(extras.reason?.trim() && { reason: extras.reason.trim() }),
+  };
+}
+
+/** Who signed the sheet off and when (the newest sign-off in the history). */
+export function signOffEvent(sheet: Pick<MeasurementSheet, 'history'>): MeasurementEvent | null {
+  return sheet.history.find((e) => e.kind === 'sign-off') ?? null;
+}
+
+/** Photos not tied to a point (a general view, or a customer's before the truck arrived). */
+export function generalPhotos(sheet: Pick<MeasurementSheet, 'photos' | 'points'>): MeasurementPhoto[] {
+  const ids = new Set(sheet.points.map((p) => p.id));
+  return sheet.photos.filter((p) => p.pointId === null || !ids.has(p.pointId));
+}
+
+/** A stored reading for people: a length in their unit, an angle in degrees. */
+export function formatReading(value: number | null | undefined, unit: 'mm' | 'deg', formatLength: (mm: number) => string): string {
+  if (value === null || value === undefined) return '—';
+  if (unit === 'deg') return `${Math.round(value * 100) / 100}°`;
+  return formatLength(value);
+}
+
+/** A signed difference for people: "+3 mm", "−1.2°" (in their unit for lengths). */
+export function formatDeviation(value: number, unit: 'mm' | 'deg', formatLength: (mm: number) => string): string {
+  const sign = value > 0 ? '+' : value < 0 ? '−' : '±';
+  return `${sign}${formatReading(Math.abs(value), unit, formatLength)}`;
+}
