@@ -1,4 +1,4 @@
-import { Button, Card, Empty, Select, Space, Table, Tag, Typography } from 'antd';
+import { Button, Card, Empty, Flex, Select, Space, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPickList } from '../api/download-pick-list';
@@ -38,32 +38,30 @@ export function CounterBoard() {
   };
 
   return (
-    <Card
-      className="pick-list"
-      title={
-        <Space wrap>
-          <span>Parts list for</span>
+    <Card className="pick-list">
+      <Flex wrap gap={8} align="center" justify="space-between" style={{ marginBottom: 16 }}>
+        <Flex wrap gap={8} align="center" style={{ flex: '1 1 320px', minWidth: 0 }}>
+          <Typography.Text strong>Parts list for</Typography.Text>
           <Select
             aria-label="Job"
             className="no-print"
-            style={{ minWidth: 320 }}
+            style={{ flex: '1 1 260px', minWidth: 0, maxWidth: 440 }}
             loading={plans.isLoading}
             value={planId}
             onChange={setChosen}
             options={(plans.data ?? []).map((p) => ({ value: p.id, label: `${p.projectTitle} · plan v${p.version}` }))}
           />
-          <span className="print-only">{plan ? `${plan.projectTitle} · plan v${plan.version}` : ''}</span>
-        </Space>
-      }
-      extra={
-        planId && (
-          <Space className="no-print">
+          <Typography.Text strong className="print-only">
+            {plan ? `${plan.projectTitle} · plan v${plan.version}` : ''}
+          </Typography.Text>
+        </Flex>
+        {planId && (
+          <Space className="no-print" wrap>
             <Button onClick={() => window.print()}>Print pick list</Button>
             <Button onClick={() => void downloadPickList(planId)}>Export CSV</Button>
           </Space>
-        )
-      }
-    >
+        )}
+      </Flex>
       <Table<CounterLine>
         size="small"
         rowKey="id"
@@ -72,7 +70,7 @@ export function CounterBoard() {
         dataSource={lines.data ?? []}
         scroll={{ x: true }}
         columns={[
-          { title: 'SKU', dataIndex: 'sku' },
+          { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
           { title: 'Part', dataIndex: 'description' },
           { title: 'Qty', dataIndex: 'quantity', align: 'right' },
           { title: 'On hand', dataIndex: 'onHand', align: 'right' },

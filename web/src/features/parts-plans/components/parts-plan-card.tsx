@@ -1,4 +1,4 @@
-import { Alert, Button, Card, Descriptions, Empty, List, Select, Space, Table, Tag, Typography } from 'antd';
+import { Alert, Button, Card, Descriptions, Empty, Grid, List, Select, Space, Table, Tag, Typography } from 'antd';
 import type { PlanObjective } from '@swapwright/shared';
 import { PLAN_OBJECTIVES } from '@swapwright/shared';
 import { useState } from 'react';
@@ -14,6 +14,25 @@ const OBJECTIVE_LABELS: Record<PlanObjective, string> = {
   'in-stock': 'Only what is on the shelf now',
 };
 
+type Pick = Schemas['PlanPartPickDto'];
+
+/** Why a part is in the plan: what it resolves, which rule brought it in, and the cheaper parts not chosen. */
+function PickReasons({ pick, money }: { pick: Pick; money: (cents: number) => string }) {
+  return (
+    <div data-testid={`pick-${pick.sku}`}>
+      {pick.resolves.length > 0 && <div>Resolves: {pick.resolves.map((r) => r.title).join(', ')}</div>}
+      {pick.broughtInBy.map((why) => (
+        <div key={why}>Brought in: {why}</div>
+      ))}
+      {pick.rejected.length > 0 && (
+        <Typography.Text type="secondary">
+          Cheaper, not chosen: {pick.rejected.map((r) => `${r.sku} (${money(r.totalCents)}) ${r.reason}`).join('; ')}
+        </Typography.Text>
+      )}
+    </div>
+  );
+}
+
 export type PartsPlanCardProps = { projectId: string; canBuild: boolean; currency?: string };
 
 /** The project's parts plan: build a version, see each pick explained, what stays unresolved, lock it for a quote. */
@@ -25,6 +44,9 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
   const latest = plans.data?.[0];
   const result = latest?.result;
   const money = (cents: number) => formatMoneyCents(cents, currency);
+  const narrow = Grid.useBreakpoint().md === false;
+  const claimed = new Set([...(result?.picks ?? []), ...(result?.operations ?? [])].flatMap((p) => p.resolves.map((r) => r.checkId)));
+  const stillShort = latest?.recheck.remaining.filter((r) => !claimed.has(r.checkId)) ?? [];
 
   return (
     <Card
@@ -68,36 +90,41 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
           {result.notes.map((note) => (
             <Alert key={note} type="info" showIcon message={note} />
           ))}
-          <Table<Schemas['PlanPartPickDto']>
-            size="small"
-            rowKey="partId"
-            pagination={false}
-            dataSource={result.picks}
-            scroll={{ x: true }}
-            columns={[
-              { title: 'SKU', dataIndex: 'sku' },
-              { title: 'Part', dataIndex: 'description' },
-              { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => money(v) },
-              { title: 'Labor', dataIndex: 'laborHours', align: 'right', render: (v: number) => `${v} h` },
-              {
-                title: 'Why',
-                key: 'why',
-                render: (_, pick) => (
-                  <div data-testid={`pick-${pick.sku}`}>
-                    {pick.resolves.length > 0 && <div>Resolves: {pick.resolves.map((r) => r.title).join(', ')}</div>}
-                    {pick.broughtInBy.map((why) => (
-                      <div key={why}>Brought in: {why}</div>
-                    ))}
-                    {pick.rejected.length > 0 && (
-                      <Typography.Text type="secondary">
-                        Cheaper, not chosen: {pick.rejected.map((r) => `${r.sku} (${money(r.totalCents)}) ${r.reason}`).join('; ')}
-                      </Typography.Text>
-                    )}
-                  </div>
-                ),
-              },
-            ]}
-          />
+          {narrow ? (
+            <List<Pick>
+              size="small"
+              bordered
+              dataSource={result.picks}
+              rowKey="partId"
+              renderItem={(pick) => (
+                <List.Item>
+                  <Space direction="vertical" size={2} style={{ width: '100%' }}>
+                    <Typography.Text strong>
+                      {pick.sku} · {pick.description}
+                    </Typography.Text>
+                    <Typography.Text>
+                      {money(pick.priceCents)} · {pick.laborHours} h labor
+                    </Typography.Text>
+                    <PickReasons pick={pick} money={money} />
+                  </Space>
+                </List.Item>
+              )}
+            />
+          ) : (
+            <Table<Pick>
+              size="small"
+              rowKey="partId"
+              pagination={false}
+              dataSource={result.picks}
+              columns={[
+                { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
+                { title: 'Part', dataIndex: 'description', width: 200 },
+                { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => money(v) },
+                { title: 'Labor', dataIndex: 'laborHours', align: 'right', onCell: () => ({ style: { whiteSpace: 'nowrap' } }), render: (v: number) => `${v} h` },
+                { title: 'Why', key: 'why', render: (_, pick) => <PickReasons pick={pick} money={money} /> },
+              ]}
+            />
+          )}
           {result.operations.length > 0 && (
             <List
               size="small"
@@ -127,7 +154,11 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             />
           )}
           <Typography.Text type="secondary">
-            Re-checked with the chosen parts: {latest.recheck.summary.fails} checks still fail. Fuel
+            Fit check run again with the chosen parts: {latest.recheck.resolved.length} shortfalls cleared.{' '}
+            {stillShort.length > 0
+              ? `Still short, answered by nothing above: ${stillShort.map((r) => r.title).join(', ')}.`
+              : 'Every other shortfall is answered by a part or an operation above.'}{' '}
+            Fuel
             system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
           </Typography.Text>
           {canBuild && latest.status !== 'locked' && (

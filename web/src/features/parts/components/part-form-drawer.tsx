@@ -51,6 +51,7 @@ function StockSection({ part }: { part: Part }) {
         form={form}
         layout="vertical"
         aria-label="Stock at a location"
+        requiredMark="optional"
         style={{ marginTop: 12 }}
         onFinish={(values) => setStock.mutate({ id: part.id, stock: { location: values.location.trim(), bin: values.bin?.trim() || undefined, onHand: values.onHand } })}
       >
@@ -223,6 +224,7 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
         <Divider titlePlacement="start">Fitment attributes</Divider>
         <Typography.Paragraph type="secondary">
           What the plan's rules compare: e.g. sumpPosition rear, pickupMount pump-bolted, pumpInlet, flowLph. A list is typed with commas.
+          {part?.fitKind && ' This part also carries a fit spec from the shop catalog; its figures count as attributes and need not be typed here.'}
         </Typography.Paragraph>
         <Form.List name="attributes">
           {(fields, { add, remove }) => (

@@ -60,12 +60,12 @@ export function PartsTable({ canEdit = false }: { canEdit?: boolean }) {
         onChange={(pagination) => setQuery((q) => ({ ...q, page: pagination.current ?? 1, pageSize: pagination.pageSize ?? 20 }))}
         scroll={{ x: true }}
         columns={[
-          { title: 'SKU', dataIndex: 'sku' },
+          { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
           { title: 'Description', dataIndex: 'description' },
-          { title: 'Category', dataIndex: 'category', render: (c: CatalogPartCategory) => PART_CATEGORY_LABELS[c] ?? c },
+          { title: 'Category', dataIndex: 'category', responsive: ['md'], render: (c: CatalogPartCategory) => PART_CATEGORY_LABELS[c] ?? c },
           { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => formatMoneyCents(v) },
-          { title: 'Supplier', dataIndex: 'supplierName', render: (v: string | null, p) => (v ? `${v}${p.supplierSku ? ` · ${p.supplierSku}` : ''}` : '—') },
-          { title: 'On hand', dataIndex: 'onHand', align: 'right' },
+          { title: 'Supplier', dataIndex: 'supplierName', responsive: ['md'], render: (v: string | null, p) => (v ? `${v}${p.supplierSku ? ` · ${p.supplierSku}` : ''}` : '—') },
+          { title: 'On hand', dataIndex: 'onHand', align: 'right', responsive: ['md'] },
           { title: 'Free', dataIndex: 'available', align: 'right' },
           { title: 'Bins', key: 'bins', render: (_, p) => p.stock.map((s) => `${s.location} ${s.bin}`.trim()).join(', ') || '—' },
           ...(canEdit
