@@ -26,6 +26,12 @@ export const CommonErrors = {
     new AppError(400, 'bad_reference', 'The request refers to a record that does not exist in your shop.'),
   stillReferenced: () =>
     new AppError(409, 'still_referenced', 'This record is still used by other records; remove those first.'),
+  databaseUnavailable: () =>
+    new AppError(
+      503,
+      'database_unavailable',
+      'The database is not reachable right now, so nothing was read or saved. Try again in a moment.',
+    ),
   internal: () =>
     new AppError(
       500,

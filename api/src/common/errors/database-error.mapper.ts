@@ -6,8 +6,42 @@ interface DriverError {
   errno?: number;
 }
 
-/** Maps the MariaDB errors a request can cause to a client error; anything else stays unknown (null). */
+/**
+ * Driver errors that mean the database server cannot be reached (stopped, restarting, network gone, out of
+ * connections): the request is answered 503 and the pool reconnects by itself once the server is back.
+ */
+const UNREACHABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'EHOSTUNREACH',
+  'ENOTFOUND',
+  'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_SEQUENCE_TIMEOUT',
+  'PROTOCOL_ENQUEUE_AFTER_FATAL_ERROR',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CON_COUNT_ERROR',
+  'ER_CONNECTION_KILLED',
+  'ER_QUERY_INTERRUPTED',
+]);
+
+/** True when `error` (a TypeORM QueryFailedError or a raw driver/pool error) says the database is unreachable. */
+export function isDatabaseUnreachable(error: unknown): boolean {
+  if (!error || typeof error !== 'object') return false;
+  const candidates = [error, (error as { driverError?: unknown }).driverError, (error as { cause?: unknown }).cause];
+  return candidates.some((candidate) => {
+    if (!candidate || typeof candidate !== 'object') return false;
+    const { code, fatal, message } = candidate as { code?: unknown; fatal?: unknown; message?: unknown };
+    if (typeof code === 'string' && UNREACHABLE_CODES.has(code)) return true;
+    if (fatal === true && typeof code === 'string') return true;
+    return typeof message === 'string' && /Pool is closed|connect ECONNREFUSED|Connection lost/.test(message);
+  });
+}
+
+/** Maps the MariaDB errors a request can cause to a client error (or a 503 when unreachable); anything else stays unknown (null). */
 export function mapDatabaseError(error: unknown): AppError | null {
+  if (isDatabaseUnreachable(error)) return CommonErrors.databaseUnavailable();
   if (!(error instanceof QueryFailedError)) return null;
   const driverError = (error as QueryFailedError & { driverError?: DriverError }).driverError ?? {};
   switch (driverError.code) {

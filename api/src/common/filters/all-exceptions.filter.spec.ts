@@ -23,6 +23,17 @@ describe('AllExceptionsFilter', () => {
     expect(JSON.stringify(body)).not.toMatch(/secretColumn/);
   });
 
+  it('answers 503 with what to do when the database cannot be reached, whichever way the driver says it', () => {
+    const refused = Object.assign(new Error('connect ECONNREFUSED 127.0.0.1:3317'), { code: 'ECONNREFUSED', errno: -111 });
+    const lost = new QueryFailedError('SELECT 1', [], Object.assign(new Error('Connection lost: The server closed the connection.'), { code: 'PROTOCOL_CONNECTION_LOST', fatal: true }));
+    const shutdown = new QueryFailedError('SELECT 1', [], Object.assign(new Error('Server shutdown in progress'), { code: 'ER_SERVER_SHUTDOWN', errno: 1053 }));
+    for (const error of [refused, lost, shutdown]) {
+      const body = filter.toBody(error, 'cid-db');
+      expect(body).toMatchObject({ statusCode: 503, code: 'database_unavailable' });
+      expect(body.message).toMatch(/Try again in a moment/);
+    }
+  });
+
   it('maps a duplicate key to 409 without naming the index', () => {
     const body = filter.toBody(errorStub.duplicate, 'cid-2');
     expect(body).toMatchObject({ statusCode: 409, code: 'duplicate' });

@@ -50,6 +50,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const correlationId = correlationIdOf(request, response);
     const body = this.toBody(exception, correlationId, request);
     if (response.headersSent) return;
+    if (body.statusCode === 503) response.setHeader('Retry-After', '5');
     response.status(body.statusCode).json(body);
   }
 

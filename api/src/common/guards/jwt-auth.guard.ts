@@ -2,6 +2,7 @@ import { ExecutionContext, Injectable } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { CommonErrors } from '../errors/app-error';
+import { isDatabaseUnreachable } from '../errors/database-error.mapper';
 import { IS_PUBLIC_KEY } from '../decorators/public.decorator';
 
 /** Global: every route needs a valid access token unless marked `@Public()`. */
@@ -18,6 +19,8 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   }
 
   handleRequest<TUser>(error: unknown, user: TUser, info: unknown): TUser {
+    // A database that cannot be reached while the session is checked is our outage (503), not a bad token (401).
+    if (error && isDatabaseUnreachable(error)) throw CommonErrors.databaseUnavailable();
     if (error) throw error instanceof Error && 'getStatus' in error ? error : CommonErrors.unauthorized();
     if (!user) {
       if (info instanceof Error && info.name === 'TokenExpiredError') throw CommonErrors.sessionExpired();
