@@ -13,6 +13,7 @@ import { JwtStrategy } from './jwt.strategy';
 import { MemberResolverService } from './member-resolver.service';
 import { PasswordHasher } from './password-hasher';
 import { PasswordResetService } from './password-reset.service';
+import { RequestMemberService } from './request-member.service';
 import { SessionsService } from './sessions.service';
 import { SignUpService } from './sign-up.service';
 
@@ -33,7 +34,7 @@ import { SignUpService } from './sign-up.service';
     CustomersModule,
   ],
   controllers: [AuthController],
-  providers: [AuthService, SignUpService, SessionsService, PasswordResetService, MemberResolverService, PasswordHasher, JwtStrategy],
+  providers: [AuthService, SignUpService, SessionsService, PasswordResetService, MemberResolverService, RequestMemberService, PasswordHasher, JwtStrategy],
   exports: [SessionsService, AuthService, PasswordHasher],
 })
 export class AuthModule {}

@@ -7,6 +7,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { AccessTokenPayload } from './auth.constants';
 import { AuthErrors } from './auth.errors';
 import { MemberResolverService } from './member-resolver.service';
+import { RequestMemberService } from './request-member.service';
 import { SessionsService } from './sessions.service';
 
 /**
@@ -19,6 +20,7 @@ export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
     config: ConfigService<EnvironmentVariables, true>,
     private readonly members: MemberResolverService,
     private readonly sessions: SessionsService,
+    private readonly requestMembers: RequestMemberService,
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
@@ -29,6 +31,9 @@ export class JwtStrategy extends PassportStrategy(Strategy, 'jwt') {
   }
 
   async validate(payload: AccessTokenPayload): Promise<AuthUser> {
+    // The usual case in one query; a refusal takes the path below, which tells why.
+    const current = await this.requestMembers.currentMember(payload);
+    if (current) return current;
     if (!(await this.sessions.isCurrent(payload))) throw AuthErrors.sessionEnded();
     const user = typeof payload.mid === 'string' ? await this.members.resolve(payload.mid) : null;
     if (!user || user.userId !== payload.sub) throw AuthErrors.memberGone();

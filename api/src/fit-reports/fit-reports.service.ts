@@ -108,7 +108,7 @@ export class FitReportsService {
 
   /** Runs the engine on a spec as given, with the shop's thresholds under the request's own; nothing is stored. */
   async whatIf(user: AuthUser, input: WhatIfDto): Promise<FitReport> {
-    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesFor(user)), ...jsonCopy(input.settings ?? {}) };
+    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesForPreview(user)), ...jsonCopy(input.settings ?? {}) };
     return runFitCheck(jsonCopy(input.spec) as FitSpec, overrides);
   }
 }

@@ -1,5 +1,6 @@
 import { ArgumentMetadata, ValidationError, ValidationPipe } from '@nestjs/common';
 import { AppError, CommonErrors } from '../errors/app-error';
+import { compiledValidatorFor, hasCompiledValidation } from '../validation/compiled-body-validator';
 import { nullFieldProblems } from '../validation/null-fields';
 
 interface Problem {
@@ -52,6 +53,11 @@ export function validationMessages(errors: ValidationError[]): string[] {
  */
 class AppValidationPipe extends ValidationPipe {
   async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
+    // Large bodies marked @CompiledValidation(): a body the compiled schema accepts is valid by construction and goes
+    // on as the plain JSON it is; anything else takes the full run below for its messages.
+    if (metadata.type === 'body' && hasCompiledValidation(metadata.metatype) && compiledValidatorFor(metadata.metatype)(value)) {
+      return value;
+    }
     const nullProblems = metadata.type === 'body' && metadata.metatype ? nullFieldProblems(metadata.metatype, value) : [];
     let result: unknown;
     try {
