@@ -1,14 +1,10 @@
 // Upload time of a 10 MB phone-sized JPEG through POST /api/projects/:id/measurement-sheet/photos.
 // Needs the test services and a built API: `bash scripts/stack.sh services && source .local/test/env.sh`,
 // `npm run build -w api`, demo data loaded (the test suites or `npm run seed -w api`). Run: node api/bench/photo-upload.bench.js
-require('reflect-metadata');
-const { NestFactory } = require('@nestjs/core');
-const { AppModule } = require('../dist/app.module');
-const { configureApp } = require('../dist/app-setup');
+const { startBenchApp, signInDemo } = require('./bench-app');
 const { seedDemo } = require('../dist/database/seed/seed-demo');
 const { seedCatalog } = require('../dist/database/seed/seed-catalog');
-const { DataSource } = require('typeorm');
-const { DEMO_PROJECT_IDS, DEMO_SIGN_INS, DEMO_PASSWORD } = require('@swapwright/seed-data');
+const { DEMO_PROJECT_IDS } = require('@swapwright/seed-data');
 
 function segment(marker, data) {
   const head = Buffer.from([0xff, marker, 0, 0]);
@@ -33,14 +29,9 @@ function bigJpeg(bytes) {
 }
 
 async function main() {
-  const app = await NestFactory.create(AppModule, { logger: ['error'] });
-  configureApp(app);
-  await app.listen(0, '127.0.0.1');
-  const base = `http://127.0.0.1:${app.getHttpServer().address().port}/api`;
-  const ds = app.get(DataSource);
-  await seedDemo(ds); await seedCatalog(ds);
-  const fab = DEMO_SIGN_INS.find((d) => d.role === 'fabricator');
-  const session = await (await fetch(`${base}/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: fab.email, password: DEMO_PASSWORD }) })).json();
+  const { app, base, dataSource } = await startBenchApp();
+  await seedDemo(dataSource); await seedCatalog(dataSource);
+  const session = await signInDemo(base, 'fabricator');
   const photo = bigJpeg(10 * 1024 * 1024);
   const times = [];
   for (let i = 0; i < 6; i += 1) {

@@ -324,7 +324,9 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
   // Which shortfalls each part resolves.
   const targetedInfo = targeted.map((shortfall) => ({ shortfall, ...remediesOf(shortfall) }));
   const resolvesOf = (part: PlanPart): number[] =>
-    targetedInfo.flatMap((info, index) => (info.parts.some((remedy) => partMeetsRemedy(part, remedy)) ? [index] : []));
+    remedyCategories.has(part.category)
+      ? targetedInfo.flatMap((info, index) => (info.parts.some((remedy) => partMeetsRemedy(part, remedy)) ? [index] : []))
+      : [];
 
   // Dominance: in a slot, among parts with the same agreement keys, a part is dropped when another costs no more,
   // resolves every shortfall it resolves (and, for the fewest-fabrication plan, needs no more fabrication hours),
