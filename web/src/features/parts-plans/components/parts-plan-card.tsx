@@ -154,7 +154,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             />
           )}
           <Typography.Text type="secondary">
-            Fit check run again with the chosen parts: {latest.recheck.resolved.length} shortfalls cleared.{' '}
+            Fit check run again with the chosen parts: {latest.recheck.resolved.length} {latest.recheck.resolved.length === 1 ? 'shortfall' : 'shortfalls'} cleared.{' '}
             {stillShort.length > 0
               ? `Still short, answered by nothing above: ${stillShort.map((r) => r.title).join(', ')}.`
               : 'Every other shortfall is answered by a part or an operation above.'}{' '}

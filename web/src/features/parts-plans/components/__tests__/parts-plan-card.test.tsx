@@ -1,0 +1,59 @@
+import { screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import type { Schemas } from '@/lib/api-types';
+import { createTestQueryClient, renderWithApp } from '@/test/render';
+import { partsPlanKeys } from '../../api/parts-plan-keys';
+import { PartsPlanCard } from '../parts-plan-card';
+
+const PROJECT = '5a0b1c2d-0000-4000-8000-000000000401';
+const ref = (checkId: string, title: string) => ({ checkId, title });
+
+const plan: Schemas['PartsPlanResponseDto'] = {
+  id: 'plan-1',
+  projectId: PROJECT,
+  version: 2,
+  objective: 'lowest-cost',
+  status: 'draft',
+  fitReportId: 'report-1',
+  totalCents: 47_400,
+  solveMs: 40,
+  lockedAt: null,
+  createdAt: '2026-12-02T20:00:00.000Z',
+  result: {
+    objective: 'lowest-cost',
+    status: 'optimal',
+    picks: [
+      {
+        partId: 'p1', sku: 'TR-4410', description: 'Rear-sump swap pan', category: 'oil-pan', quantity: 1, priceCents: 32_900, laborHours: 3,
+        laborCents: 40_500, totalCents: 73_400, fabricationHours: 0, available: 1, fitSpecId: 'pan-tr-4410-rear',
+        resolves: [ref('envelope.sump-crossmember', 'Oil pan to front crossmember')], broughtInBy: [],
+        rejected: [{ partId: 'p2', sku: 'TR-4480', description: 'Deep pan', totalCents: 69_400, reason: 'does not resolve oil pan to front crossmember' }],
+        explanation: '',
+      },
+    ],
+    operations: [],
+    kept: [{ slot: 'oil-pump', name: 'Stock oil pump', note: 'kept' }],
+    unresolved: [],
+    totals: { partsCents: 32_900, laborHours: 3, laborCents: 40_500, fabricationHours: 0, totalCents: 73_400 },
+    notes: [],
+    model: { columns: 10, rows: 5, solves: 1 },
+  },
+  recheck: {
+    summary: { ok: 30, tight: 1, fails: 1, unknown: 0 },
+    resolved: ['envelope.sump-crossmember'],
+    remaining: [{ checkId: 'cooling.hose-sides', title: 'Coolant hose sides', status: 'fails', message: 'Hoses cross the belt.' }],
+  },
+};
+
+describe('PartsPlanCard', () => {
+  it('explains each pick and names what the plan leaves short once the fit check runs again', async () => {
+    const queryClient = createTestQueryClient();
+    queryClient.setQueryData(partsPlanKeys.project(PROJECT), [plan]);
+    renderWithApp(<PartsPlanCard projectId={PROJECT} canBuild />, { queryClient });
+    const pick = await screen.findByTestId('pick-TR-4410');
+    expect(pick).toHaveTextContent('Resolves: Oil pan to front crossmember');
+    expect(pick).toHaveTextContent(/TR-4480 \(\$694\.00\) does not resolve oil pan to front crossmember/);
+    expect(screen.getByText(/1 shortfall cleared\. Still short, answered by nothing above: Coolant hose sides\./)).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Lock version 2 for a quote' })).toBeInTheDocument();
+  });
+});
