@@ -45,8 +45,11 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
   const result = latest?.result;
   const money = (cents: number) => formatMoneyCents(cents, currency);
   const narrow = Grid.useBreakpoint().md === false;
-  const claimed = new Set([...(result?.picks ?? []), ...(result?.operations ?? [])].flatMap((p) => p.resolves.map((r) => r.checkId)));
-  const stillShort = latest?.recheck.remaining.filter((r) => !claimed.has(r.checkId)) ?? [];
+  // The re-check fits the picks that carry a fit spec; what parts without one and operations resolve it cannot see.
+  const unseen = new Set(
+    [...(result?.picks.filter((p) => !p.fitSpecId) ?? []), ...(result?.operations ?? [])].flatMap((p) => p.resolves.map((r) => r.checkId)),
+  );
+  const stillShort = latest?.recheck.remaining.filter((r) => !unseen.has(r.checkId)) ?? [];
 
   return (
     <Card
@@ -156,7 +159,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
           <Typography.Text type="secondary">
             Fit check run again with the chosen parts: {latest.recheck.resolved.length} {latest.recheck.resolved.length === 1 ? 'shortfall' : 'shortfalls'} cleared.{' '}
             {stillShort.length > 0
-              ? `Still short, answered by nothing above: ${stillShort.map((r) => r.title).join(', ')}.`
+              ? `Still short with the chosen parts: ${stillShort.map((r) => `${r.title} (${r.status})`).join(', ')}.`
               : 'Every other shortfall is answered by a part or an operation above.'}{' '}
             Fuel
             system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.

@@ -31,7 +31,7 @@ const plan: Schemas['PartsPlanResponseDto'] = {
         explanation: '',
       },
     ],
-    operations: [],
+    operations: [{ operation: 'Fit a bigger pump by hand', laborHours: 1, laborCents: 13_500, resolves: [ref('fuel.pump-flow', 'Fuel pump flow')], explanation: '' }],
     kept: [{ slot: 'oil-pump', name: 'Stock oil pump', note: 'kept' }],
     unresolved: [],
     totals: { partsCents: 32_900, laborHours: 3, laborCents: 40_500, fabricationHours: 0, totalCents: 73_400 },
@@ -41,7 +41,10 @@ const plan: Schemas['PartsPlanResponseDto'] = {
   recheck: {
     summary: { ok: 30, tight: 1, fails: 1, unknown: 0 },
     resolved: ['envelope.sump-crossmember'],
-    remaining: [{ checkId: 'cooling.hose-sides', title: 'Coolant hose sides', status: 'fails', message: 'Hoses cross the belt.' }],
+    remaining: [
+      { checkId: 'cooling.hose-sides', title: 'Coolant hose sides', status: 'fails', message: 'Hoses cross the belt.' },
+      { checkId: 'fuel.pump-flow', title: 'Fuel pump flow', status: 'fails', message: 'The pump is short.' },
+    ],
   },
 };
 
@@ -53,7 +56,8 @@ describe('PartsPlanCard', () => {
     const pick = await screen.findByTestId('pick-TR-4410');
     expect(pick).toHaveTextContent('Resolves: Oil pan to front crossmember');
     expect(pick).toHaveTextContent(/TR-4480 \(\$694\.00\) does not resolve oil pan to front crossmember/);
-    expect(screen.getByText(/1 shortfall cleared\. Still short, answered by nothing above: Coolant hose sides\./)).toBeInTheDocument();
+    // The pump flow is answered by an operation the fit check cannot model; the hoses by nothing.
+    expect(screen.getByText(/1 shortfall cleared\. Still short with the chosen parts: Coolant hose sides \(fails\)\./)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Lock version 2 for a quote' })).toBeInTheDocument();
   });
 });
