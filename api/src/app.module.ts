@@ -3,6 +3,7 @@ import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
 import { AuthModule } from './auth/auth.module';
 import { CatalogModule } from './catalog/catalog.module';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
@@ -23,6 +24,7 @@ import { MailModule } from './mail/mail.module';
 import { MeasurementsModule } from './measurements/measurements.module';
 import { MembershipsModule } from './memberships/memberships.module';
 import { ProjectsModule } from './projects/projects.module';
+import { MariaDbThrottlerStorage } from './rate-limits/mariadb-throttler.storage';
 import { PaymentsModule } from './payments/payments.module';
 import { QuotesModule } from './quotes/quotes.module';
 import { ShopsModule } from './shops/shops.module';
@@ -41,15 +43,17 @@ import { WebStaticModule } from './web-static/web-static.module';
           DB_USER: config.get('DB_USER', { infer: true }),
           DB_PASSWORD: config.get('DB_PASSWORD', { infer: true }),
           DB_NAME: config.get('DB_NAME', { infer: true }),
+          DB_REPLICA_HOSTS: config.get('DB_REPLICA_HOSTS', { infer: true }),
         }),
         retryAttempts: 3,
         retryDelay: 1000,
       }),
     }),
-    // Used by @AuthRateLimited() routes only (no global throttling).
+    // Used by @AuthRateLimited() routes only (no global throttling); counted in MariaDB, shared by every instance.
     ThrottlerModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: AppConfigService) => ({
+      inject: [ConfigService, DataSource],
+      useFactory: (config: AppConfigService, dataSource: DataSource) => ({
+        storage: new MariaDbThrottlerStorage(dataSource),
         throttlers: [
           { ttl: config.get('AUTH_RATE_WINDOW_SECONDS', { infer: true }) * 1000, limit: config.get('AUTH_RATE_LIMIT', { infer: true }) },
         ],

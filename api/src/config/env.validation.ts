@@ -8,12 +8,15 @@ import {
   IsOptional,
   IsString,
   IsUrl,
+  Matches,
   Max,
   Min,
   MinLength,
   validateSync,
   ValidationError,
 } from 'class-validator';
+
+const REPLICA_HOSTS = /^\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*(,\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*)*$/;
 
 export type NodeEnv = 'development' | 'test' | 'production';
 export const NODE_ENVS: NodeEnv[] = ['development', 'test', 'production'];
@@ -40,6 +43,14 @@ export class DatabaseEnvironment {
   @IsString()
   @IsNotEmpty()
   DB_NAME: string;
+
+  /**
+   * Read replicas of the MariaDB primary, `host[:port]` separated by commas (same user, password and database).
+   * Plain reads outside a transaction go to a replica; writes, transactions and raw queries to the primary (DB_HOST).
+   */
+  @IsOptional()
+  @Matches(REPLICA_HOSTS, { message: 'DB_REPLICA_HOSTS must be host[:port] entries separated by commas, e.g. db-r1:3306,db-r2' })
+  DB_REPLICA_HOSTS?: string;
 }
 
 export class EnvironmentVariables extends DatabaseEnvironment {

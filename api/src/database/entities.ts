@@ -17,10 +17,12 @@ import { Membership } from '../memberships/membership.entity';
 import { PARTS_ENTITIES } from '../parts/part.entity';
 import { DepositPayment, PaymentEvent } from '../payments/deposit-payment.entity';
 import { Project } from '../projects/project.entity';
+import { ThrottleCounter } from '../rate-limits/throttle-counter.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
-  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES];
+  LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES,
+  ThrottleCounter];

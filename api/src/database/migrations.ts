@@ -16,6 +16,7 @@ import { CreateQuotes1796236709687 } from './migrations/1796236709687-create-quo
 import { CreateDepositPayments1796239097244 } from './migrations/1796239097244-create-deposit-payments';
 import { PendingSignUps1796239565848 } from './migrations/1796239565848-pending-sign-ups';
 import { PartsPlansFitReport1796252953356 } from './migrations/1796252953356-parts-plans-fit-report';
+import { ThrottleCounters1796256137273 } from './migrations/1796256137273-throttle-counters';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -37,4 +38,5 @@ export const MIGRATIONS = [
   PendingSignUps1796239565848,
   CreateMeasurements1796240364406,
   PartsPlansFitReport1796252953356,
+  ThrottleCounters1796256137273,
 ];
