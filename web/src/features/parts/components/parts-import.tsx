@@ -101,7 +101,7 @@ export function PartsImport() {
               loading={run.isPending}
               onClick={() => run.mutate({ file, mapping, onProgress: setProgress })}
             >
-              Import {result.validCount} rows
+              Import {result.validCount} {result.validCount === 1 ? 'row' : 'rows'}
             </Button>
             {run.data && (
               <Typography.Text data-testid="import-done">
