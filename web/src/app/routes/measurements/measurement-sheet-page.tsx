@@ -1,6 +1,6 @@
 import { Alert, Button, Card, Flex, Typography } from 'antd';
 import { useMemo, useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { toProjectDetail, toProjectFit } from '@/config/paths';
@@ -26,6 +26,7 @@ import { canAddMeasurementPhotos, canMeasure, canRunFitCheck } from '../../navig
 export function MeasurementSheetPage() {
   const { projectId = '' } = useParams();
   const user = useSignedInUser();
+  const navigate = useNavigate();
   const units = useUnits();
   const project = useProject(projectId);
   const sheet = useMeasurementSheet(projectId);
@@ -74,7 +75,7 @@ export function MeasurementSheetPage() {
         extra={
           <>
             {canEdit && s.chassisId && <Button onClick={() => setEditingTemplate(true)}>Edit points</Button>}
-            {canRunFitCheck(user.role) && <Link to={toProjectFit(p.id)}>Fit check</Link>}
+            <Button onClick={() => navigate(toProjectFit(p.id))}>{canRunFitCheck(user.role) ? 'Fit check' : 'Fit report'}</Button>
           </>
         }
       />

@@ -21,7 +21,7 @@ export type MeasurementPointCardProps = {
   photoActions: PhotoActions;
 };
 
-function ReadingPreview({ text, reading, fmt }: { text: string; reading: ReturnType<typeof readEntry>; fmt: (v: number, unit: 'mm' | 'deg') => string }) {
+function ReadingPreview({ reading, fmt }: { reading: ReturnType<typeof readEntry>; fmt: (v: number, unit: 'mm' | 'deg') => string }) {
   if (reading.ok === null) return null;
   if (reading.ok === false) {
     return (
@@ -32,7 +32,7 @@ function ReadingPreview({ text, reading, fmt }: { text: string; reading: ReturnT
   }
   return (
     <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reading-preview">
-      “{text.trim()}” reads as {fmt(reading.value, reading.unit)}
+      Reads as {fmt(reading.value, reading.unit)}
       {reading.unit === 'mm' && ` (${Math.round(reading.value * 10) / 10} mm)`}
     </Typography.Text>
   );
@@ -155,7 +155,7 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               onPressEnter={() => (signedOff ? setAskReason(true) : void save())}
               style={{ fontSize: 20, height: 52 }}
             />
-            <ReadingPreview text={text} reading={reading} fmt={fmt} />
+            <ReadingPreview reading={reading} fmt={fmt} />
             <Flex gap={8} wrap>
               <Input
                 aria-label={`Tolerance: ${point.label}`}

@@ -66,7 +66,6 @@ export function ReportInputSources({ inputs, checks, formatLength, sheetLink }: 
       )}
       <Collapse
         size="small"
-        defaultActiveKey={groups.filter((g) => g.flagged > 0).map((g) => g.checkId)}
         items={groups.map((g) => ({
           key: g.checkId,
           label: (
