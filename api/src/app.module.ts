@@ -30,6 +30,7 @@ import { QuotesModule } from './quotes/quotes.module';
 import { ShopsModule } from './shops/shops.module';
 import { UsersModule } from './users/users.module';
 import { WebStaticModule } from './web-static/web-static.module';
+import { WorkOrdersModule } from './work-orders/work-orders.module';
 
 @Module({
   imports: [
@@ -73,6 +74,7 @@ import { WebStaticModule } from './web-static/web-static.module';
     PartsModule,
     LaborOperationsModule,
     QuotesModule,
+    WorkOrdersModule,
     PaymentsModule,
     HealthModule,
     // Last: the built web app for every non-API path.

@@ -73,7 +73,7 @@ describe('fit reports', () => {
     expect(finding(direct, SUMP).margin).toBeCloseTo(sump.margin, 9);
 
     const [project] = await t.dataSource.query('SELECT status FROM projects WHERE id = ?', [RIDGEBACK]);
-    expect(project.status).toBe('checking');
+    expect(project.status).toBe('fit-checked');
   });
 
   it("picks a stock belt from the shop's belts with the truck drive's rib count: the belt check is ok", async () => {

@@ -1,22 +1,14 @@
 import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import Stripe from 'stripe';
-import { bearer, countRows, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
+import { startAppWithPayments, until } from './helpers/app-with-payments';
+import { bearer, countRows, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
-import { freePort, RunningPaymentFake, startPaymentFakeProcess } from './helpers/payment-fake-process';
+import { RunningPaymentFake } from './helpers/payment-fake-process';
 
 const LINES = [
   { kind: 'part', description: 'Rear-sump oil pan', quantity: 1, pricing: 'list', unitPriceCents: 28995 },
   { kind: 'labor', description: 'Install pan and pickup', hours: 2.5 },
 ];
-
-async function until<T>(read: () => Promise<T>, done: (value: T) => boolean, what: string): Promise<T> {
-  for (let attempt = 0; attempt < 60; attempt++) {
-    const value = await read();
-    if (done(value)) return value;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`timed out waiting for ${what}`);
-}
 
 describe('deposit payments through the provider SDK and its local fake', () => {
   let t: TestApp;
@@ -24,24 +16,10 @@ describe('deposit payments through the provider SDK and its local fake', () => {
   let fake: RunningPaymentFake;
   let token: string;
   let quoteId: string;
-  const saved = { ...process.env };
+  let stop: () => Promise<void>;
 
   beforeAll(async () => {
-    // The fake the test services run (scripts/stack.sh) sends its events to PORT; without it, start one here.
-    const { PAYMENT_API_URL, PAYMENT_SECRET_KEY, PAYMENT_WEBHOOK_SECRET, PORT } = process.env;
-    let appPort: number;
-    if (PAYMENT_API_URL && PAYMENT_SECRET_KEY && PAYMENT_WEBHOOK_SECRET && PORT) {
-      appPort = Number(PORT);
-      fake = { url: PAYMENT_API_URL, secretKey: PAYMENT_SECRET_KEY, webhookSecret: PAYMENT_WEBHOOK_SECRET, stop: async () => undefined };
-    } else {
-      appPort = await freePort();
-      fake = await startPaymentFakeProcess(`http://127.0.0.1:${appPort}/api/payments/webhook`);
-      process.env.PAYMENT_API_URL = fake.url;
-      process.env.PAYMENT_SECRET_KEY = fake.secretKey;
-      process.env.PAYMENT_WEBHOOK_SECRET = fake.webhookSecret;
-    }
-    t = await createTestApp();
-    await t.app.listen(appPort, '127.0.0.1');
+    ({ t, fake, stop } = await startAppWithPayments());
     await resetData(t.dataSource);
     demo = await signInAllRoles(t.http);
     const created = await t.http.post(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES });
@@ -52,11 +30,7 @@ describe('deposit payments through the provider SDK and its local fake', () => {
     token = /\/quote-answer\/([A-Za-z0-9_\-.]+)/.exec(mail.text)![1];
   });
 
-  afterAll(async () => {
-    await t.close();
-    await fake.stop();
-    process.env = saved;
-  });
+  afterAll(() => stop());
 
   const quoteByLink = async () => (await t.http.get(`/api/quote-links/${token}`)).body;
   const webhook = (body: string, signature: string) =>

@@ -125,7 +125,7 @@ describe('labor operations and quotes', () => {
       expect(text).toContain('Ironbark Swap Works');
       token = tokenOf(mail.text);
       const project = await t.http.get(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.estimator));
-      expect(project.body.status).toBe('quoting');
+      expect(project.body.status).toBe('quote-sent');
     });
 
     it('opens the quote through the link; a tampered or expired link is refused', async () => {

@@ -101,13 +101,6 @@ const CASES: RouteCase[] = [
     allowed: ['owner', 'estimator', 'fabricator'],
   },
   {
-    group: 'projects (status)',
-    method: 'patch',
-    path: () => `/api/projects/${DEMO_PROJECT_IDS.ridgeback}`,
-    body: () => ({ status: 'measuring' }),
-    allowed: ['owner', 'estimator', 'fabricator'],
-  },
-  {
     group: 'projects (other fields)',
     method: 'patch',
     path: () => `/api/projects/${DEMO_PROJECT_IDS.ridgeback}`,

@@ -22,7 +22,8 @@ describe('validation', () => {
     { what: 'a missing name', table: 'customers', path: '/api/customers', body: { email: 'x@example.test' }, message: /name/ },
     { what: 'a bad e-mail', table: 'customers', path: '/api/customers', body: { name: 'Ok', email: 'not-an-email' }, message: /email must be an e-mail address/ },
     { what: 'a too long name', table: 'customers', path: '/api/customers', body: { name: 'x'.repeat(121) }, message: /name must be shorter than or equal to 120 characters/ },
-    { what: 'an unknown status', table: 'projects', path: '/api/projects', body: { ...validProject, status: 'finished' }, message: /status must be one of/ },
+    { what: 'an unknown status', table: 'projects', path: '/api/projects', body: { ...validProject, status: 'finished' }, message: /status is not set by hand/ },
+    { what: 'a stage set by hand', table: 'projects', path: '/api/projects', body: { ...validProject, status: 'done' }, message: /moves by itself when the sheet is signed off/ },
     { what: 'an out-of-range rev limit', table: 'projects', path: '/api/projects', body: { ...validProject, goals: { use: 'tow', revLimitRpm: 25000 } }, message: /revLimitRpm must not be greater than 12000/ },
     { what: 'an unknown nested field', table: 'projects', path: '/api/projects', body: { ...validProject, goals: { use: 'tow', torque: 5 } }, message: /torque should not exist/ },
     { what: 'an unknown use', table: 'projects', path: '/api/projects', body: { ...validProject, goals: { use: 'racing' } }, message: /goals.use must be one of/ },
@@ -74,7 +75,7 @@ describe('validation', () => {
     expect(after.body).toEqual(before.body);
   });
 
-  it('refuses a fabricator changing more than placement and status, and changes nothing', async () => {
+  it('refuses a fabricator changing more than the placement, and changes nothing', async () => {
     const before = await t.http.get(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`).set(...bearer(s.owner)).expect(200);
     const response = await t.http
       .patch(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`)
@@ -83,6 +84,16 @@ describe('validation', () => {
       .expect(403);
     expect(response.body.code).toBe('project_fields_forbidden');
     expect(response.body.message).toMatch(/title/);
+    const after = await t.http.get(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`).set(...bearer(s.owner)).expect(200);
+    expect(after.body).toEqual(before.body);
+  });
+
+  it('refuses a stage set by hand on an update, for every role, and changes nothing', async () => {
+    const before = await t.http.get(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`).set(...bearer(s.owner)).expect(200);
+    for (const role of ['owner', 'estimator', 'fabricator'] as const) {
+      const response = await t.http.patch(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`).set(...bearer(s[role])).send({ status: 'done' }).expect(400);
+      expect(response.body.message).toMatch(/status is not set by hand/);
+    }
     const after = await t.http.get(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}`).set(...bearer(s.owner)).expect(200);
     expect(after.body).toEqual(before.body);
   });

@@ -14,11 +14,11 @@ describe('the fabricator checks the chassis waiting to be measured', () => {
     await browser.close();
   });
 
-  it('opens the projects in measuring and runs a fit check on one', async () => {
+  it('opens the projects waiting to be measured and runs a fit check on one', async () => {
     const { page } = browser;
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
     await page.getByRole('table', { name: 'Projects' }).waitFor();
-    expect(page.url()).toContain('status=measuring');
+    expect(page.url()).toContain('status=intake');
     await saveScreenshot(page, 'fabricator-projects');
     // Another journey may already have moved the demo project on to the fit-check stage.
     await page.goto('/projects');

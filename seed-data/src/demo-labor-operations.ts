@@ -14,7 +14,7 @@ export interface DemoLaborOperation {
   matches: string[];
   hazards: DemoHazard[];
   torqueSpecs: { fastener: string; lbfFt: number; sequence: string | null }[];
-  checks: { key: string; label: string; unit: string | null; min: number | null; max: number | null }[];
+  checks: { key: string; label: string; unit: string | null; min: number | null; max: number | null; fitCheckId?: string }[];
 }
 
 const id = (n: number) => `5a0b1c2d-0000-4000-8000-0000000007${String(n).padStart(2, '0')}`;
@@ -42,7 +42,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     torqueSpecs: [{ fastener: 'Cam sprocket bolts', lbfFt: 25, sequence: 'Alternate bolts, in two stages (snug, then full torque)' }],
     checks: [
       { key: 'cam-turns', label: 'Camshaft turns by hand after the cam bearings go in', unit: null, min: null, max: null },
-      { key: 'cam-marks', label: 'Cam installed with the timing marks aligned (advance ground into the cam)', unit: null, min: null, max: null },
+      { key: 'cam-marks', label: 'Cam installed with the timing marks aligned (advance ground into the cam)', unit: null, min: null, max: null, fitCheckId: 'cam.timing-advance' },
     ],
   },
   {
@@ -87,7 +87,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
       { fastener: 'Bellhousing to block bolts', lbfFt: 35, sequence: 'Alternate sides, in two stages' },
       { fastener: 'Engine mount through-bolts', lbfFt: 55, sequence: null },
     ],
-    checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap with the engine on its mounts', unit: 'mm', min: 13, max: null }],
+    checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap with the engine on its mounts', unit: 'mm', min: 13, max: null, fitCheckId: 'envelope.sump-crossmember' }],
   },
   {
     id: id(6),

@@ -1,7 +1,7 @@
 import { DEMO_CATALOG_IDS } from './catalog/demo-catalog-ids';
 import { DEMO_CUSTOMER_IDS } from './demo-customers';
 
-export type DemoProjectStatus = 'intake' | 'measuring' | 'checking' | 'quoting' | 'approved' | 'building' | 'done';
+export type DemoProjectStatus = 'intake' | 'measured' | 'fit-checked' | 'parts-planned' | 'quote-sent' | 'approved' | 'deposit-paid' | 'in-the-bay' | 'done';
 export type DemoProjectUse = 'street' | 'tow' | 'off-road' | 'strip';
 
 export interface DemoProject {
@@ -28,7 +28,7 @@ export const DEMO_PROJECTS: DemoProject[] = [
     id: DEMO_PROJECT_IDS.ridgeback,
     customerId: DEMO_CUSTOMER_IDS.juno,
     title: 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap',
-    status: 'measuring',
+    status: 'intake',
     vehicleDescription: 'Harlan Ridgeback 1978 half-ton pickup, long bed, original inline six removed; frame straight, light surface rust.',
     chassisModelId: DEMO_CATALOG_IDS.chassis.ridgeback78,
     engineProfileId: DEMO_CATALOG_IDS.engines.kestrel53,

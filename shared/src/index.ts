@@ -78,3 +78,7 @@ export * from './measurements/apply-measurement-sheet';
 export * from './oiling/pickup-for-pan';
 export * from './units/unit-format';
 export * from './fit-window/placement-proposal';
+export * from './work-order/torque';
+export * from './work-order/check-result';
+export * from './work-order/work-steps';
+export * from './work-order/work-cautions';

@@ -17,6 +17,8 @@ import { CreateDepositPayments1796239097244 } from './migrations/1796239097244-c
 import { PendingSignUps1796239565848 } from './migrations/1796239565848-pending-sign-ups';
 import { PartsPlansFitReport1796252953356 } from './migrations/1796252953356-parts-plans-fit-report';
 import { ThrottleCounters1796256137273 } from './migrations/1796256137273-throttle-counters';
+import { ProjectStages1796257248657 } from './migrations/1796257248657-project-stages';
+import { CreateWorkOrders1796257248658 } from './migrations/1796257248658-create-work-orders';
 
 /** Every migration in the order it runs. A new feature module appends its own (one per module, hand-reviewed). */
 export const MIGRATIONS = [
@@ -39,4 +41,6 @@ export const MIGRATIONS = [
   CreateMeasurements1796240364406,
   PartsPlansFitReport1796252953356,
   ThrottleCounters1796256137273,
+  ProjectStages1796257248657,
+  CreateWorkOrders1796257248658,
 ];

@@ -63,10 +63,10 @@ export class FitReportsService {
       worstStatus: worstStatus(report.summary),
     });
     await this.dataSource.transaction(async (manager) => {
-      // Running a check moves a project that is still being set up on to the checking stage. The project's row is
+      // Running a check moves a project that is still being set up on to the fit-checked stage. The project's row is
       // locked first: inserting the report first takes a shared lock on it (the foreign key), and two runs on one
       // project that both then ask to update it deadlock.
-      await this.projects.advanceStatus(user.shopId, project.id, 'checking', manager);
+      await this.projects.advanceStatus(user.shopId, project.id, 'fit-checked', manager);
       await manager.insert(FitReportRecord, record);
     });
     return this.get(user, record.id);

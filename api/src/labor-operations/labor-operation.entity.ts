@@ -1,9 +1,9 @@
+import type { WorkHazard } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 
 /** Hazards a step carries; each prints its usual caution on the quote and the work order. */
-export const WORK_HAZARDS = ['lifting', 'support', 'fuel', 'welding', 'steering', 'brakes'] as const;
-export type WorkHazard = (typeof WORK_HAZARDS)[number];
+export { WORK_HAZARDS, type WorkHazard } from '@swapwright/shared';
 
 /** A fastener's torque as the part's data gives it (lbf·ft), with its tightening sequence in words. */
 export interface TorqueSpec {
@@ -20,6 +20,8 @@ export interface CheckTemplate {
   unit: string | null;
   min: number | null;
   max: number | null;
+  /** The fit check whose result this check confirms on the vehicle (e.g. `cam.timing-advance`). */
+  fitCheckId?: string | null;
 }
 
 /** One of the shop's labor operations: book hours, where it sits in the build and what the bay must watch and record. */

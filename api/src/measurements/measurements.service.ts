@@ -198,6 +198,7 @@ export class MeasurementsService {
       if (missing.length > 0) throw MeasurementErrors.incomplete(missing.map((p) => p.label));
       await manager.update(MeasurementSheet, { id: sheet.id }, { signedOffAt: new Date(), signedOffById: user.userId });
       await manager.insert(MeasurementSheetEvent, this.event(user, sheet, { kind: 'sign-off' }));
+      await this.projects.advanceStatus(user.shopId, project.id, 'measured', manager);
     });
   }
 

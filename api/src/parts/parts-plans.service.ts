@@ -169,6 +169,7 @@ export class PartsPlansService {
           })),
         );
       }
+      await this.projects.advanceStatus(user.shopId, project.id, 'parts-planned', manager);
     });
     return this.get(user, id);
   }

@@ -1,14 +1,16 @@
 import { Injectable } from '@nestjs/common';
 import { QuoteActor, QuotesService } from '../quotes/quotes.service';
+import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { DepositPaymentResponseDto } from './dto/deposit.dto';
 import { PaymentsService } from './payments.service';
 
-/** The deposit use cases: pay a quote's deposit (signed in or by link), and settle it when the provider's event arrives. */
+/** The deposit use cases: pay a quote's deposit (signed in or by link), and settle it when the provider's event arrives (opening the work order). */
 @Injectable()
 export class DepositsService {
   constructor(
     private readonly quotes: QuotesService,
     private readonly payments: PaymentsService,
+    private readonly workOrders: WorkOrdersService,
   ) {}
 
   async pay(actor: QuoteActor, idOrToken: string, paymentMethod: string): Promise<DepositPaymentResponseDto> {
@@ -24,6 +26,8 @@ export class DepositsService {
       if (!marked) return;
       const view = await this.quotes.viewInShop(payment.shopId, payment.quoteId);
       await this.quotes.notifyDepositPaid(manager, view);
+      // The bay's work order opens with the settlement, in the same transaction: both happen once, or neither.
+      await this.workOrders.openForQuote(manager, view);
     });
   }
 }

@@ -24,7 +24,7 @@ export class Project {
   @Column({ type: 'varchar', length: 160 })
   title: string;
 
-  @Column({ type: 'varchar', length: 16, default: 'intake' })
+  @Column({ type: 'varchar', length: 20, default: 'intake' })
   status: ProjectStatus;
 
   @Column({ type: 'varchar', length: 500, default: '' })

@@ -8,7 +8,7 @@ export const ProjectErrors = {
     new AppError(
       403,
       'project_fields_forbidden',
-      `Your role may change only the placement and status of a project, not: ${fields.join(', ')}.`,
+      `Your role may change only the placement of a project, not: ${fields.join(', ')}.`,
     ),
   catalogRefNotFound: (field: string, singular: string) => {
     const message = `${field} must be the id of ${withArticle(singular)} in your shop's catalog`;

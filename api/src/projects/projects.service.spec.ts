@@ -39,16 +39,16 @@ function catalogMock(known: string[] = []) {
 }
 
 describe('assertFieldsAllowed', () => {
-  it('lets a fabricator change placement and status', () => {
-    expect(() => assertFieldsAllowed(userStub.fabricator, { placement: null, status: 'checking' })).not.toThrow();
+  it('lets a fabricator change the placement', () => {
+    expect(() => assertFieldsAllowed(userStub.fabricator, { placement: null })).not.toThrow();
   });
 
   it('refuses any other field for a fabricator, naming it', () => {
-    expect(() => assertFieldsAllowed(userStub.fabricator, { status: 'checking', title: 'x' })).toThrow(/title/);
+    expect(() => assertFieldsAllowed(userStub.fabricator, { placement: null, title: 'x' })).toThrow(/title/);
   });
 
   it('ignores fields that are present but undefined', () => {
-    expect(() => assertFieldsAllowed(userStub.fabricator, { title: undefined, status: 'done' })).not.toThrow();
+    expect(() => assertFieldsAllowed(userStub.fabricator, { title: undefined, placement: null })).not.toThrow();
   });
 
   it('does not limit an estimator', () => {

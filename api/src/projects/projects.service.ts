@@ -107,7 +107,7 @@ export class ProjectsService implements OnModuleInit {
       shopId: user.shopId,
       customerId: input.customerId,
       title: input.title.trim(),
-      status: input.status ?? 'intake',
+      status: 'intake',
       vehicleDescription: input.vehicleDescription?.trim() ?? '',
       chassisModelId: input.chassisModelId ?? null,
       engineProfileId: input.engineProfileId ?? null,
@@ -124,7 +124,7 @@ export class ProjectsService implements OnModuleInit {
 
   async update(user: AuthUser, id: string, input: UpdateProjectDto): Promise<Project> {
     assertFieldsAllowed(user, input);
-    for (const field of ['customerId', 'title', 'status', 'vehicleDescription'] as const) {
+    for (const field of ['customerId', 'title', 'vehicleDescription'] as const) {
       if (input[field] === null) throw ProjectErrors.notNullable(field);
     }
     if (input.goals && input.goals.use === null) throw ProjectErrors.notNullable('goals.use');
@@ -136,7 +136,6 @@ export class ProjectsService implements OnModuleInit {
     const changes: Partial<Project> = {
       ...(input.customerId !== undefined && { customerId: input.customerId }),
       ...(input.title !== undefined && { title: input.title.trim() }),
-      ...(input.status !== undefined && { status: input.status }),
       ...(input.vehicleDescription !== undefined && { vehicleDescription: input.vehicleDescription.trim() }),
       ...(input.chassisModelId !== undefined && { chassisModelId: input.chassisModelId }),
       ...(input.engineProfileId !== undefined && { engineProfileId: input.engineProfileId }),
@@ -155,7 +154,8 @@ export class ProjectsService implements OnModuleInit {
 
   /**
    * Moves a project forward to `to` when it is at an earlier stage; never back. The one way other modules change
-   * a project's status (pass the transaction's manager when the move belongs with other writes).
+   * a project's stage, each on its event (pass the transaction's manager when the move belongs with other writes);
+   * nobody sets it by hand.
    */
   async advanceStatus(shopId: string, projectId: string, to: ProjectStatus, manager?: EntityManager): Promise<void> {
     const earlier = PROJECT_STATUSES.slice(0, PROJECT_STATUSES.indexOf(to));

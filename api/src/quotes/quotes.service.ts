@@ -288,7 +288,7 @@ export class QuotesService {
           { id: view.quote.id, shopId: user.shopId },
           { status: 'awaiting-answer', sentRevision: latest.number, sentById: user.userId, answeredAt: null, declineReason: null, depositState: 'not-due' },
         );
-        await this.projects.advanceStatus(user.shopId, view.project.id, 'quoting', manager);
+        await this.projects.advanceStatus(user.shopId, view.project.id, 'quote-sent', manager);
       });
     }
     const sent = await this.get(user, id);
@@ -330,7 +330,10 @@ export class QuotesService {
   /** Marks the deposit of an approved quote paid; false when it already was (so an event applies once). */
   async markDepositPaid(manager: EntityManager, shopId: string, quoteId: string, paidAt: Date): Promise<boolean> {
     const changed = await manager.update(Quote, { id: quoteId, shopId, status: 'approved', depositState: 'due' }, { depositState: 'paid', depositPaidAt: paidAt });
-    return Boolean(changed.affected);
+    if (!changed.affected) return false;
+    const quote = await manager.findOneByOrFail(Quote, { id: quoteId, shopId });
+    await this.projects.advanceStatus(shopId, quote.projectId, 'deposit-paid', manager);
+    return true;
   }
 
   async notifyDepositPaid(manager: EntityManager, view: QuoteView): Promise<void> {

@@ -84,8 +84,26 @@ export type Role = (typeof ROLES)[number];
 export const UNIT_SYSTEMS = ['in', 'mm'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
-export const PROJECT_STATUSES = ['intake', 'measuring', 'checking', 'quoting', 'approved', 'building', 'done'] as const;
+/**
+ * The job's stages in order. Each is reached by an event, never set by hand: the measurement sheet signed off
+ * (measured), a fit report run (fit-checked), a parts plan saved (parts-planned), a quote sent (quote-sent), the
+ * customer's approval (approved), the deposit settled (deposit-paid), the work order started (in-the-bay) and
+ * finished (done). A project only moves forward.
+ */
+export const PROJECT_STATUSES = ['intake', 'measured', 'fit-checked', 'parts-planned', 'quote-sent', 'approved', 'deposit-paid', 'in-the-bay', 'done'] as const;
 export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
+
+/** Hazards a labor operation carries; each prints its usual caution on the quote and the work order. */
+export const WORK_HAZARDS = ['lifting', 'support', 'fuel', 'welding', 'steering', 'brakes'] as const;
+export type WorkHazard = (typeof WORK_HAZARDS)[number];
+
+/** A work order is opened when the deposit is paid, started when the bay takes the job, finished when it is built. */
+export const WORK_ORDER_STATES = ['ready', 'in-the-bay', 'finished'] as const;
+export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
+
+/** A recorded check: a confirmation (done / not done) or a measured value judged against its allowed range. */
+export const CHECK_RESULTS = ['pass', 'fail'] as const;
+export type CheckResult = (typeof CHECK_RESULTS)[number];
 
 // ---------------------------------------------------------------- findings
 

@@ -19,7 +19,7 @@ const navDefinitions: readonly NavDefinition[] = [
     key: 'projects',
     label: 'Projects',
     // the fabricator's list opens on what is waiting to be measured
-    to: (role) => (role === 'fabricator' ? `${paths.projects}?status=measuring` : paths.projects),
+    to: (role) => (role === 'fabricator' ? `${paths.projects}?status=intake` : paths.projects),
     match: [paths.projects],
     roles: ['owner', 'estimator', 'fabricator'],
     group: 'work',
@@ -61,6 +61,8 @@ export const sectionRoles = {
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
   workOrders: ['owner', 'fabricator'],
+  // the estimator opens a project's work order from the project page
+  workOrderDetail: ['owner', 'estimator', 'fabricator'],
   partsCounter: ['owner', 'counter'],
   catalog: ['owner', 'estimator', 'fabricator', 'counter'],
   members: ['owner'],
@@ -68,6 +70,8 @@ export const sectionRoles = {
 } as const satisfies Record<string, readonly Role[]>;
 
 export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';
+/** Start a work order, record its checks and finish it, as the API allows. */
+export const canWorkOrders = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'fabricator';
 export const canEditProjects = (role: Role): boolean => role === 'owner' || role === 'estimator';
 /** Customers only read stored fit reports: no catalog, selections or placement. */
 export const isFitReadOnly = (role: Role): boolean => role === 'customer';

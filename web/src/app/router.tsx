@@ -26,7 +26,8 @@ const MyProjectsPage = lazyNamed(() => import('./routes/projects/my-projects-pag
 const CustomersPage = lazyNamed(() => import('./routes/customers/customers-page'), 'CustomersPage');
 const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'MembersPage');
 const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings-page'), 'ShopSettingsPage');
-const WorkOrdersPage = lazyNamed(() => import('./routes/placeholders/placeholder-pages'), 'WorkOrdersPage');
+const WorkOrdersPage = lazyNamed(() => import('./routes/work-orders/work-orders-page'), 'WorkOrdersPage');
+const WorkOrderPage = lazyNamed(() => import('./routes/work-orders/work-order-page'), 'WorkOrderPage');
 const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
 const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
 const FitReportRoute = lazyNamed(() => import('./routes/fit/fit-report-route'), 'FitReportRoute');
@@ -113,6 +114,7 @@ export const routes: RouteObject[] = [
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
           section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),
+          section(paths.workOrderDetail, sectionRoles.workOrderDetail, 'the work order', WorkOrderPage),
           section(paths.partsCounter, sectionRoles.partsCounter, 'Parts counter', PartsCounterPage),
           section(paths.catalog, sectionRoles.catalog, 'Catalog', CatalogPage),
           section(paths.members, sectionRoles.members, 'Members', MembersPage),

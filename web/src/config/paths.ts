@@ -14,6 +14,7 @@ export const paths = {
   myProjects: '/my-projects',
   customers: '/customers',
   workOrders: '/work-orders',
+  workOrderDetail: '/work-orders/:workOrderId',
   partsCounter: '/parts-counter',
   catalog: '/catalog',
   members: '/members',
@@ -30,6 +31,9 @@ export const toProjectFit = (projectId: string): string =>
 
 export const toProjectMeasurements = (projectId: string): string =>
   paths.projectMeasurements.replace(':projectId', encodeURIComponent(projectId));
+
+export const toWorkOrder = (workOrderId: string): string =>
+  paths.workOrderDetail.replace(':workOrderId', encodeURIComponent(workOrderId));
 
 export const toSignIn = (next?: string): string =>
   next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;

@@ -1455,6 +1455,102 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/work-orders": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkOrdersController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/work-orders/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkOrdersController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/work-orders/{id}/start": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WorkOrdersController_start"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/work-orders/{id}/checks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WorkOrdersController_recordCheck"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/work-orders/{id}/finish": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WorkOrdersController_finish"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/work-order": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ProjectWorkOrderController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/quotes/{id}/deposit": {
         parameters: {
             query?: never;
@@ -1754,7 +1850,7 @@ export interface components {
             id: string;
             title: string;
             /** @enum {string} */
-            status: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
+            status: "intake" | "measured" | "fit-checked" | "parts-planned" | "quote-sent" | "approved" | "deposit-paid" | "in-the-bay" | "done";
             /** Format: uuid */
             customerId: string;
             customer: components["schemas"]["ProjectCustomerRefDto"];
@@ -1788,11 +1884,6 @@ export interface components {
             /** Format: uuid */
             customerId: string;
             title: string;
-            /**
-             * @default intake
-             * @enum {string}
-             */
-            status?: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
             vehicleDescription?: string;
             /** @description Defaults to use street with no targets */
             goals?: components["schemas"]["ProjectGoalsDto"];
@@ -1814,11 +1905,6 @@ export interface components {
             /** Format: uuid */
             customerId?: string;
             title?: string;
-            /**
-             * @default intake
-             * @enum {string}
-             */
-            status?: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
             vehicleDescription?: string;
             placement?: components["schemas"]["ProjectPlacementDto"] | null;
             /** @description Only the given goal fields change */
@@ -3832,6 +3918,125 @@ export interface components {
             defaultMarkupPercent?: number;
             terms?: string;
         };
+        WorkProgressResponseDto: {
+            total: number;
+            passed: number;
+            failed: number;
+            open: number;
+        };
+        WorkOrderSummaryResponseDto: {
+            id: string;
+            /** @example W-0007 */
+            label: string;
+            /** @enum {string} */
+            state: "ready" | "in-the-bay" | "finished";
+            projectId: string;
+            projectTitle: string;
+            customerName: string | null;
+            createdAt: string;
+            progress: components["schemas"]["WorkProgressResponseDto"];
+        };
+        WorkPartResponseDto: {
+            sku: string;
+            description: string;
+            quantity: number;
+        };
+        WorkTorqueResponseDto: {
+            fastener: string;
+            /** @description lbf·ft, to a tenth */
+            lbfFt: number;
+            /** @description N·m, to a tenth (exact factor 1.3558179483314004, NIST SP 811) */
+            newtonMetres: number;
+            /** @description Tightening sequence in words */
+            sequence: string | null;
+            /** @description The part whose data gives it; null for the operation's own figure */
+            partSku: string | null;
+        };
+        FitFindingRefResponseDto: {
+            checkId: string;
+            title: string;
+            /** @enum {string} */
+            status: "ok" | "tight" | "fails" | "unknown";
+            message: string;
+        };
+        RecordedCheckResponseDto: {
+            id: string;
+            /** @enum {string} */
+            result: "pass" | "fail";
+            value: number | null;
+            note: string;
+            recordedByName: string;
+            recordedAt: string;
+        };
+        WorkCheckResponseDto: {
+            key: string;
+            label: string;
+            /** @description Measured (a value against a range) or confirmed (done or not) */
+            measured: boolean;
+            unit: string | null;
+            min: number | null;
+            max: number | null;
+            /** @description The allowed range in words */
+            range: string | null;
+            /** @description The SKU whose data gives the range; null for the operation's default */
+            rangeFrom: string | null;
+            /** @description The fit check's result this check confirms */
+            fitFinding: components["schemas"]["FitFindingRefResponseDto"] | null;
+            /** @description The newest recording; null while open */
+            latest: components["schemas"]["RecordedCheckResponseDto"] | null;
+            /** @description How many times it was recorded */
+            recordings: number;
+        };
+        WorkStepResponseDto: {
+            key: string;
+            operationId: string | null;
+            name: string;
+            buildOrder: number;
+            hours: number;
+            hazards: ("lifting" | "support" | "fuel" | "welding" | "steering" | "brakes")[];
+            parts: components["schemas"]["WorkPartResponseDto"][];
+            torque: components["schemas"]["WorkTorqueResponseDto"][];
+            instructions: string[];
+            checks: components["schemas"]["WorkCheckResponseDto"][];
+        };
+        WorkCautionResponseDto: {
+            /** @enum {string} */
+            hazard: "lifting" | "support" | "fuel" | "welding" | "steering" | "brakes";
+            caution: string;
+        };
+        WorkOrderResponseDto: {
+            id: string;
+            /** @example W-0007 */
+            label: string;
+            /** @enum {string} */
+            state: "ready" | "in-the-bay" | "finished";
+            projectId: string;
+            projectTitle: string;
+            customerName: string | null;
+            createdAt: string;
+            progress: components["schemas"]["WorkProgressResponseDto"];
+            vehicleDescription: string;
+            quoteId: string;
+            /** @example Q-0007 */
+            quoteLabel: string;
+            quoteRevision: number;
+            fitReportId: string | null;
+            partsPlanVersion: number | null;
+            startedAt: string | null;
+            finishedAt: string | null;
+            steps: components["schemas"]["WorkStepResponseDto"][];
+            cautions: components["schemas"]["WorkCautionResponseDto"][];
+            deference: string;
+        };
+        RecordCheckDto: {
+            /** @example oil-pan-pickup.screen-height */
+            checkKey: string;
+            /** @description Measured checks: the value read, in the check's unit */
+            value?: number;
+            /** @description Confirmations: true when done as described, false when not */
+            passed?: boolean;
+            note?: string;
+        };
         PayDepositDto: {
             /**
              * @description The payment method the provider's card form returned (in test: pm_card_visa pays, pm_card_chargeDeclined is declined)
@@ -4478,7 +4683,7 @@ export interface operations {
                 /** @description Matches inside the main text fields. */
                 search?: string;
                 sort?: "title" | "status" | "createdAt" | "updatedAt";
-                status?: "intake" | "measuring" | "checking" | "quoting" | "approved" | "building" | "done";
+                status?: "intake" | "measured" | "fit-checked" | "parts-planned" | "quote-sent" | "approved" | "deposit-paid" | "in-the-bay" | "done";
                 customerId?: string;
             };
             header?: never;
@@ -8530,6 +8735,139 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["QuoteSettingsResponseDto"];
+                };
+            };
+        };
+    };
+    WorkOrdersController_list: {
+        parameters: {
+            query?: {
+                state?: "ready" | "in-the-bay" | "finished";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderSummaryResponseDto"][];
+                };
+            };
+        };
+    };
+    WorkOrdersController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
+    WorkOrdersController_start: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The job is in the bay; the project moves to its in-the-bay stage */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
+    WorkOrdersController_recordCheck: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RecordCheckDto"];
+            };
+        };
+        responses: {
+            /** @description The check is recorded with who and when; a measured value is judged against its range */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
+    WorkOrdersController_finish: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Every check passed; the project moves to done */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
+    ProjectWorkOrderController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
                 };
             };
         };

@@ -49,7 +49,7 @@ export const PROJECT_READERS: Role[] = ALL_ROLES;
 export const PROJECT_WRITERS: Role[] = ['owner', 'estimator'];
 export const PROJECT_EDITORS: Role[] = ['owner', 'estimator', 'fabricator'];
 /** Fields a fabricator may change on a project; the rest of a PATCH is refused for them. */
-export const FABRICATOR_PROJECT_FIELDS = ['placement', 'status'] as const;
+export const FABRICATOR_PROJECT_FIELDS = ['placement'] as const;
 export const CATALOG_READERS: Role[] = STAFF;
 export const CATALOG_WRITERS: Role[] = ['owner', 'estimator', 'counter'];
 export const FIT_SELECTION_READERS: Role[] = STAFF;

@@ -1,6 +1,7 @@
-import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { ApiHideProperty, ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
+  Equals,
   IsIn,
   IsInt,
   IsNotEmpty,
@@ -11,15 +12,20 @@ import {
   Max,
   MaxLength,
   Min,
+  ValidateIf,
   ValidateNested,
 } from 'class-validator';
-import { PROJECT_STATUSES, PROJECT_USES, ProjectStatus, ProjectUse } from '../project.entity';
+import { PROJECT_STATUSES, PROJECT_USES, ProjectUse } from '../project.entity';
 import { Trim } from '../../common/decorators/trim.decorator';
 
 /**
  * Targets of an engine swap in kW: 10 kW (about 13 hp) is below any road engine, 2000 kW (about 2,680 hp) above any
  * the shop fits. Source for the hp figures: NIST SP 811 (2008), Appendix B.9, 1 hp (550 ft·lbf/s) = 745.6999 W.
  */
+export const STATUS_BY_EVENTS_MESSAGE =
+  `status is not set by hand: the job's stage (${PROJECT_STATUSES.join(', ')}) moves by itself when the sheet is signed off, ` +
+  'a fit report is run, a parts plan is saved, a quote is sent or answered, the deposit is paid and the work order is started or finished';
+
 const TARGET_POWER_KW = { min: 10, max: 2000 } as const;
 const TARGET_POWER_MESSAGE = `goals.targetPowerKw must be between ${TARGET_POWER_KW.min} and ${TARGET_POWER_KW.max} kW (about 13 to 2,680 hp); send power in kW as a number`;
 /** 100 million in the shop's currency, in cents: a larger budget is a typing slip. Common practice (no published source). */
@@ -109,10 +115,11 @@ export class CreateProjectDto extends CatalogRefs {
   @MaxLength(160)
   title: string;
 
-  @ApiPropertyOptional({ enum: PROJECT_STATUSES, default: 'intake' })
-  @IsOptional()
-  @IsIn(PROJECT_STATUSES, { message: `status must be one of: ${PROJECT_STATUSES.join(', ')}` })
-  status?: ProjectStatus;
+  /** Not in the contract: the stage moves with the job's events; a status sent by hand is refused with that reason. */
+  @ApiHideProperty()
+  @ValidateIf(() => true)
+  @Equals(undefined, { message: STATUS_BY_EVENTS_MESSAGE })
+  status?: never;
 
   @ApiPropertyOptional({ maxLength: 500 })
   @IsOptional()

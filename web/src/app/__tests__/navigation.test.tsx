@@ -38,9 +38,9 @@ describe('role navigation', () => {
     }
   });
 
-  it('the fabricator’s Projects link opens on projects in measuring', () => {
+  it('the fabricator’s Projects link opens on projects waiting to be measured', () => {
     const nav = renderNav('fabricator');
-    expect(nav.getByRole('link', { name: 'Projects' }).getAttribute('href')).toBe('/projects?status=measuring');
+    expect(nav.getByRole('link', { name: 'Projects' }).getAttribute('href')).toBe('/projects?status=intake');
   });
 
   it('marks the current section, including detail pages below it', () => {

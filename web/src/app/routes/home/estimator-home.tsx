@@ -24,20 +24,28 @@ export function EstimatorHome() {
       />
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={14}>
-          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=quoting`}>All</Link>} style={{ marginBottom: 16 }}>
+          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=parts-planned`}>All</Link>} style={{ marginBottom: 16 }}>
             <ProjectsPanel
               label="Projects needing a quote"
-              status="quoting"
+              status="parts-planned"
               emptyText="No project is waiting for a quote."
-              moreTo={`${paths.projects}?status=quoting`}
+              moreTo={`${paths.projects}?status=parts-planned`}
             />
           </Card>
-          <Card title="Fit check under way" extra={<Link to={`${paths.projects}?status=checking`}>All</Link>}>
+          <Card title="Fit checked, needs a parts plan" extra={<Link to={`${paths.projects}?status=fit-checked`}>All</Link>} style={{ marginBottom: 16 }}>
             <ProjectsPanel
-              label="Projects in fit check"
-              status="checking"
-              emptyText="No fit check in progress."
-              moreTo={`${paths.projects}?status=checking`}
+              label="Projects with a fit report and no parts plan"
+              status="fit-checked"
+              emptyText="No fit report waiting for a parts plan."
+              moreTo={`${paths.projects}?status=fit-checked`}
+            />
+          </Card>
+          <Card title="Quotes with the customer" extra={<Link to={`${paths.projects}?status=quote-sent`}>All</Link>}>
+            <ProjectsPanel
+              label="Projects awaiting the customer's answer"
+              status="quote-sent"
+              emptyText="No quote is waiting for an answer."
+              moreTo={`${paths.projects}?status=quote-sent`}
             />
           </Card>
         </Col>

@@ -24,13 +24,23 @@ export function OwnerHome() {
       />
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>
-          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=quoting`}>All</Link>}>
-            <ProjectsPanel label="Projects needing a quote" status="quoting" limit={5} emptyText="Nothing waiting for a quote." moreTo={`${paths.projects}?status=quoting`} />
+          <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=parts-planned`}>All</Link>}>
+            <ProjectsPanel label="Projects needing a quote" status="parts-planned" limit={5} emptyText="Nothing waiting for a quote." moreTo={`${paths.projects}?status=parts-planned`} />
           </Card>
         </Col>
         <Col xs={24} xl={12}>
-          <Card title="On the measuring stand" extra={<Link to={`${paths.projects}?status=measuring`}>All</Link>}>
-            <ProjectsPanel label="Projects in measuring" status="measuring" limit={5} emptyText="No chassis waiting to be measured." moreTo={`${paths.projects}?status=measuring`} />
+          <Card title="Waiting to be measured" extra={<Link to={`${paths.projects}?status=intake`}>All</Link>}>
+            <ProjectsPanel label="Projects waiting to be measured" status="intake" limit={5} emptyText="No chassis waiting to be measured." moreTo={`${paths.projects}?status=intake`} />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card title="In the bay" extra={<Link to={`${paths.projects}?status=in-the-bay`}>All</Link>}>
+            <ProjectsPanel label="Projects in the bay" status="in-the-bay" limit={5} emptyText="No job in the bay." moreTo={`${paths.projects}?status=in-the-bay`} />
+          </Card>
+        </Col>
+        <Col xs={24} xl={12}>
+          <Card title="Deposit paid, ready for the bay" extra={<Link to={`${paths.projects}?status=deposit-paid`}>All</Link>}>
+            <ProjectsPanel label="Projects ready for the bay" status="deposit-paid" limit={5} emptyText="No paid job waiting for the bay." moreTo={`${paths.projects}?status=deposit-paid`} />
           </Card>
         </Col>
         <Col xs={24} xl={12}>

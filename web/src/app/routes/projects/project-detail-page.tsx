@@ -1,7 +1,7 @@
 import { Button, Col, Flex, Popconfirm, Row, Space, Card, Typography } from 'antd';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { paths, toProjectFit, toProjectMeasurements } from '@/config/paths';
+import { paths, toProjectFit, toProjectMeasurements, toWorkOrder } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
@@ -15,8 +15,9 @@ import { ProjectStageSteps } from '@/features/projects/components/project-stage-
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
 import { PartsPlanCard } from '@/features/parts-plans/components/parts-plan-card';
 import { ProjectQuotesCard } from '@/features/quotes/components/project-quotes-card';
+import { ProjectWorkOrderCard } from '@/features/work-orders/components/project-work-order-card';
 import { useShop } from '@/features/shop/api/get-shop';
-import { canEditProjects, canRunFitCheck } from '../../navigation';
+import { canEditProjects, canRunFitCheck, canWorkOrders } from '../../navigation';
 import { useCustomerOptions } from '../shared/use-customer-options';
 import { useProjectPartNames } from './use-project-part-names';
 
@@ -82,6 +83,7 @@ export function ProjectDetailPage() {
       <Card style={{ marginBottom: 16 }} title="Stage">
         <ProjectStageSteps status={p.status} />
       </Card>
+      {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} />}
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>
           <ProjectGoalsCard project={p} currency={currency} />

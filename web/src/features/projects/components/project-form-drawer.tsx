@@ -7,8 +7,8 @@ import { hpToKw, kwToHp } from '@/lib/units';
 import type { UnitSystem } from '@swapwright/shared';
 import { useCreateProject } from '../api/create-project';
 import { useUpdateProject } from '../api/update-project';
-import { statusLabels, useLabels } from '../project-labels';
-import { projectStatuses, projectUses, type Project, type ProjectGoals, type ProjectStatus, type ProjectUse } from '../types';
+import { useLabels } from '../project-labels';
+import { projectUses, type Project, type ProjectGoals, type ProjectUse } from '../types';
 import { useDrawerSize } from '@/hooks/use-drawer-size';
 
 export type CustomerOption = { value: string; label: string };
@@ -40,7 +40,6 @@ type ProjectFormValues = {
   targetPower?: number | null;
   revLimitRpm?: number | null;
   budget?: number | null;
-  status?: ProjectStatus;
 };
 
 export function ProjectFormDrawer({
@@ -84,7 +83,6 @@ export function ProjectFormDrawer({
       targetPower: g?.targetPowerKw != null ? Math.round(unitSystem === 'in' ? kwToHp(g.targetPowerKw) : g.targetPowerKw) : null,
       revLimitRpm: g?.revLimitRpm ?? null,
       budget: g?.budgetCents != null ? g.budgetCents / 100 : null,
-      status: project?.status,
     });
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [open, project]);
@@ -103,7 +101,7 @@ export function ProjectFormDrawer({
       vehicleDescription: v.vehicleDescription.trim(),
       goals,
     };
-    if (project) update.mutate({ id: project.id, changes: { ...base, status: v.status } });
+    if (project) update.mutate({ id: project.id, changes: base });
     else create.mutate(base);
   };
 
@@ -219,11 +217,6 @@ export function ProjectFormDrawer({
             aria-label="Budget"
           />
         </Form.Item>
-        {isEdit && (
-          <Form.Item label="Stage" name="status">
-            <Select options={projectStatuses.map((s) => ({ value: s, label: statusLabels[s] }))} aria-label="Stage" />
-          </Form.Item>
-        )}
       </Form>
     </Drawer>
   );

@@ -17,7 +17,7 @@ import { ProjectFitPage } from '../project-fit-page';
 const project: Project = {
   id: 'p1',
   title: 'Shop truck swap',
-  status: 'checking',
+  status: 'fit-checked',
   customerId: 'cust-1',
   customer: { id: 'cust-1', name: 'A customer' },
   vehicleDescription: 'Long-bed pickup',

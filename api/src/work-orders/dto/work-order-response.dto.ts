@@ -1,0 +1,96 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { CHECK_RESULTS, CHECK_STATUSES, WORK_HAZARDS, WORK_ORDER_STATES, type CheckResult, type CheckStatus, type WorkHazard, type WorkOrderState } from '@swapwright/shared';
+
+export class WorkPartResponseDto {
+  @ApiProperty() sku: string;
+  @ApiProperty() description: string;
+  @ApiProperty() quantity: number;
+}
+
+export class WorkTorqueResponseDto {
+  @ApiProperty() fastener: string;
+  @ApiProperty({ description: 'lbf·ft, to a tenth' }) lbfFt: number;
+  @ApiProperty({ description: 'N·m, to a tenth (exact factor 1.3558179483314004, NIST SP 811)' }) newtonMetres: number;
+  @ApiProperty({ type: String, nullable: true, description: 'Tightening sequence in words' }) sequence: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The part whose data gives it; null for the operation\'s own figure' }) partSku: string | null;
+}
+
+export class FitFindingRefResponseDto {
+  @ApiProperty() checkId: string;
+  @ApiProperty() title: string;
+  @ApiProperty({ enum: CHECK_STATUSES }) status: CheckStatus;
+  @ApiProperty() message: string;
+}
+
+export class RecordedCheckResponseDto {
+  @ApiProperty() id: string;
+  @ApiProperty({ enum: CHECK_RESULTS }) result: CheckResult;
+  @ApiProperty({ type: Number, nullable: true }) value: number | null;
+  @ApiProperty() note: string;
+  @ApiProperty() recordedByName: string;
+  @ApiProperty() recordedAt: string;
+}
+
+export class WorkCheckResponseDto {
+  @ApiProperty() key: string;
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'Measured (a value against a range) or confirmed (done or not)' }) measured: boolean;
+  @ApiProperty({ type: String, nullable: true }) unit: string | null;
+  @ApiProperty({ type: Number, nullable: true }) min: number | null;
+  @ApiProperty({ type: Number, nullable: true }) max: number | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The allowed range in words' }) range: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The SKU whose data gives the range; null for the operation\'s default' }) rangeFrom: string | null;
+  @ApiProperty({ type: FitFindingRefResponseDto, nullable: true, description: 'The fit check\'s result this check confirms' }) fitFinding: FitFindingRefResponseDto | null;
+  @ApiProperty({ type: RecordedCheckResponseDto, nullable: true, description: 'The newest recording; null while open' }) latest: RecordedCheckResponseDto | null;
+  @ApiProperty({ description: 'How many times it was recorded' }) recordings: number;
+}
+
+export class WorkStepResponseDto {
+  @ApiProperty() key: string;
+  @ApiProperty({ type: String, nullable: true }) operationId: string | null;
+  @ApiProperty() name: string;
+  @ApiProperty() buildOrder: number;
+  @ApiProperty() hours: number;
+  @ApiProperty({ enum: WORK_HAZARDS, isArray: true }) hazards: WorkHazard[];
+  @ApiProperty({ type: [WorkPartResponseDto] }) parts: WorkPartResponseDto[];
+  @ApiProperty({ type: [WorkTorqueResponseDto] }) torque: WorkTorqueResponseDto[];
+  @ApiProperty({ type: [String] }) instructions: string[];
+  @ApiProperty({ type: [WorkCheckResponseDto] }) checks: WorkCheckResponseDto[];
+}
+
+export class WorkCautionResponseDto {
+  @ApiProperty({ enum: WORK_HAZARDS }) hazard: WorkHazard;
+  @ApiProperty() caution: string;
+}
+
+export class WorkProgressResponseDto {
+  @ApiProperty() total: number;
+  @ApiProperty() passed: number;
+  @ApiProperty() failed: number;
+  @ApiProperty() open: number;
+}
+
+export class WorkOrderSummaryResponseDto {
+  @ApiProperty() id: string;
+  @ApiProperty({ example: 'W-0007' }) label: string;
+  @ApiProperty({ enum: WORK_ORDER_STATES }) state: WorkOrderState;
+  @ApiProperty() projectId: string;
+  @ApiProperty() projectTitle: string;
+  @ApiProperty({ type: String, nullable: true }) customerName: string | null;
+  @ApiProperty() createdAt: string;
+  @ApiProperty({ type: WorkProgressResponseDto }) progress: WorkProgressResponseDto;
+}
+
+export class WorkOrderResponseDto extends WorkOrderSummaryResponseDto {
+  @ApiProperty() vehicleDescription: string;
+  @ApiProperty() quoteId: string;
+  @ApiProperty({ example: 'Q-0007' }) quoteLabel: string;
+  @ApiProperty() quoteRevision: number;
+  @ApiProperty({ type: String, nullable: true }) fitReportId: string | null;
+  @ApiProperty({ type: Number, nullable: true }) partsPlanVersion: number | null;
+  @ApiProperty({ type: String, nullable: true }) startedAt: string | null;
+  @ApiProperty({ type: String, nullable: true }) finishedAt: string | null;
+  @ApiProperty({ type: [WorkStepResponseDto] }) steps: WorkStepResponseDto[];
+  @ApiProperty({ type: [WorkCautionResponseDto] }) cautions: WorkCautionResponseDto[];
+  @ApiProperty() deference: string;
+}

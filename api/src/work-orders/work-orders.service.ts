@@ -1,0 +1,216 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import {
+  buildWorkSteps,
+  measuredCheckResult,
+  type FitReport,
+  type WorkCheck,
+  type WorkOperationInput,
+  type WorkOrderState,
+  type WorkPartInput,
+} from '@swapwright/shared';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager, In, Repository } from 'typeorm';
+import { AuthUser } from '../common/tenant/auth-user';
+import { TenantRepository } from '../common/tenant/tenant-repository';
+import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
+import { LaborOperation } from '../labor-operations/labor-operation.entity';
+import { Part } from '../parts/part.entity';
+import type { Project } from '../projects/project.entity';
+import { ProjectsService } from '../projects/projects.service';
+import type { Quote } from '../quotes/quote.entity';
+import type { QuoteRevision } from '../quotes/quote-revision.entity';
+import { RecordCheckDto } from './dto/record-check.dto';
+import { WorkOrder, WorkOrderCheck } from './work-order.entity';
+import { WorkOrderErrors } from './work-orders.errors';
+
+/** A work order with what its views need. */
+export interface WorkOrderView {
+  order: WorkOrder;
+  project: Project;
+  records: WorkOrderCheck[];
+}
+
+/** The quote a work order is opened from: the approved quote and the revision the customer approved. */
+export interface ApprovedQuote {
+  quote: Quote;
+  revision: QuoteRevision;
+}
+
+/** Opens work orders when deposits settle, and runs them in the bay: start, record checks, finish. */
+@Injectable()
+export class WorkOrdersService {
+  private readonly orders: TenantRepository<WorkOrder>;
+
+  constructor(
+    @InjectRepository(WorkOrder) orders: Repository<WorkOrder>,
+    @InjectRepository(WorkOrderCheck) private readonly checks: Repository<WorkOrderCheck>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly projects: ProjectsService,
+  ) {
+    this.orders = new TenantRepository(orders);
+  }
+
+  // ------------------------------------------------------------------ opening (inside the deposit's transaction)
+
+  /**
+   * Opens the work order of an approved quote, in the transaction that settles its deposit; a second call for the same
+   * quote changes nothing (one work order per quote, by a unique key). Returns whether one was opened.
+   */
+  async openForQuote(manager: EntityManager, approved: ApprovedQuote): Promise<boolean> {
+    const { quote, revision } = approved;
+    const shopId = quote.shopId;
+    const operationIds = revision.lines.map((line) => line.laborOperationId).filter((id): id is string => Boolean(id));
+    const operations = operationIds.length ? await manager.find(LaborOperation, { where: { shopId, id: In(operationIds) } }) : [];
+    const operationInputs: WorkOperationInput[] = [];
+    revision.lines.forEach((line, index) => {
+      if (line.kind !== 'labor') return;
+      const operation = operations.find((candidate) => candidate.id === line.laborOperationId);
+      if (operation) {
+        operationInputs.push({ ...operation, hours: line.hours ?? operation.bookHours, checks: operation.checks, torqueSpecs: operation.torqueSpecs });
+      } else {
+        operationInputs.push({ id: null, code: `line-${index + 1}`, name: line.description, buildOrder: 900 + index, hours: line.hours ?? 0, matches: [], hazards: [], torqueSpecs: [], checks: [] });
+      }
+    });
+    const parts: WorkPartInput[] = [];
+    for (const line of revision.lines) {
+      if (line.kind !== 'part') continue;
+      const part = await this.partOfLine(manager, shopId, line.catalogKind, line.catalogItemId);
+      parts.push(
+        part
+          ? { sku: part.sku, description: part.description, category: part.category, quantity: line.quantity, torqueSpecs: part.torqueSpecs, instructions: part.instructions, attributes: part.attributes }
+          : { sku: '', description: line.description, category: '', quantity: line.quantity, torqueSpecs: [], instructions: null, attributes: {} },
+      );
+    }
+    const report = revision.fitReportId ? await manager.findOne(FitReportRecord, { where: { shopId, id: revision.fitReportId } }) : null;
+    const findings = (report?.results as FitReport | undefined)?.findings ?? [];
+    const result = await manager
+      .createQueryBuilder()
+      .insert()
+      .into(WorkOrder)
+      .values({
+        id: randomUUID(),
+        shopId,
+        projectId: quote.projectId,
+        quoteId: quote.id,
+        quoteRevision: revision.number,
+        number: quote.number,
+        state: 'ready',
+        steps: buildWorkSteps(operationInputs, parts, findings),
+        fitReportId: revision.fitReportId,
+        partsPlanVersion: revision.partsPlanVersion,
+        startedAt: null,
+        startedById: null,
+        finishedAt: null,
+        finishedById: null,
+      })
+      .orIgnore()
+      .execute();
+    return (result.raw as { affectedRows?: number }).affectedRows === 1;
+  }
+
+  /** The shop's part a quote line prices: a part row itself (`parts`), or the part carrying that fit spec. */
+  private async partOfLine(manager: EntityManager, shopId: string, kind: string | null, id: string | null): Promise<Part | null> {
+    if (!kind || !id) return null;
+    if (kind === 'parts') return manager.findOne(Part, { where: { shopId, id } });
+    return manager.findOne(Part, { where: { shopId, fitKind: kind as NonNullable<Part['fitKind']>, fitSpecId: id }, order: { priceCents: 'ASC' } });
+  }
+
+  // ------------------------------------------------------------------ reading
+
+  async list(user: AuthUser, state?: WorkOrderState): Promise<WorkOrderView[]> {
+    const orders = await this.orders.repository.find({ where: this.orders.where(user, state ? { state } : {}), order: { createdAt: 'DESC' }, take: 100 });
+    const views: WorkOrderView[] = [];
+    for (const order of orders) views.push(await this.viewOf(user, order));
+    return views;
+  }
+
+  async get(user: AuthUser, id: string): Promise<WorkOrderView> {
+    const order = await this.orders.findById(user, id);
+    if (!order) throw WorkOrderErrors.notFound();
+    return this.viewOf(user, order);
+  }
+
+  async forProject(user: AuthUser, projectId: string): Promise<WorkOrderView> {
+    const project = await this.projects.get(user, projectId);
+    const order = await this.orders.repository.findOne({ where: this.orders.where(user, { projectId: project.id }), order: { createdAt: 'DESC' } });
+    if (!order) throw WorkOrderErrors.noneForProject();
+    return this.viewOf(user, order, project);
+  }
+
+  // ------------------------------------------------------------------ in the bay
+
+  /** The bay takes the job: the project moves to its in-the-bay stage in the same transaction. */
+  async start(user: AuthUser, id: string): Promise<WorkOrderView> {
+    const { order } = await this.get(user, id);
+    if (order.state !== 'ready') throw order.state === 'finished' ? WorkOrderErrors.finished() : WorkOrderErrors.alreadyStarted();
+    await this.dataSource.transaction(async (manager) => {
+      const changed = await manager.update(WorkOrder, { id: order.id, shopId: user.shopId, state: 'ready' }, { state: 'in-the-bay', startedAt: new Date(), startedById: user.userId });
+      if (!changed.affected) throw WorkOrderErrors.alreadyStarted();
+      await this.projects.advanceStatus(user.shopId, order.projectId, 'in-the-bay', manager);
+    });
+    return this.get(user, id);
+  }
+
+  /** Records one check with who and when; a measured value is judged against the check's range here, not by the caller. */
+  async recordCheck(user: AuthUser, id: string, input: RecordCheckDto): Promise<WorkOrderView> {
+    const { order } = await this.get(user, id);
+    if (order.state === 'ready') throw WorkOrderErrors.notStarted();
+    if (order.state === 'finished') throw WorkOrderErrors.finished();
+    const check = this.checkOf(order, input.checkKey);
+    let result: 'pass' | 'fail';
+    let value: number | null = null;
+    if (check.measured) {
+      if (input.value === undefined) throw WorkOrderErrors.valueRequired(check.label, check.range ?? '');
+      value = Math.round(input.value * 100) / 100;
+      result = measuredCheckResult(value, check);
+    } else {
+      if (input.passed === undefined) throw WorkOrderErrors.passedRequired(check.label);
+      result = input.passed ? 'pass' : 'fail';
+    }
+    await this.checks.insert({
+      id: randomUUID(),
+      shopId: user.shopId,
+      workOrderId: order.id,
+      checkKey: check.key,
+      result,
+      value,
+      note: input.note ?? '',
+      recordedById: user.userId,
+      recordedByName: user.name.slice(0, 120),
+    });
+    return this.get(user, id);
+  }
+
+  /** The job is built: every check's newest recording must be a pass. The project moves to done with it. */
+  async finish(user: AuthUser, id: string): Promise<WorkOrderView> {
+    const view = await this.get(user, id);
+    const { order } = view;
+    if (order.state === 'ready') throw WorkOrderErrors.notStarted();
+    if (order.state === 'finished') throw WorkOrderErrors.finished();
+    const latest = new Map(view.records.map((record) => [record.checkKey, record.result]));
+    const outstanding = order.steps.flatMap((step) => step.checks).filter((check) => latest.get(check.key) !== 'pass');
+    if (outstanding.length > 0) throw WorkOrderErrors.checksOutstanding(outstanding.map((check) => check.label));
+    await this.dataSource.transaction(async (manager) => {
+      const changed = await manager.update(WorkOrder, { id: order.id, shopId: user.shopId, state: 'in-the-bay' }, { state: 'finished', finishedAt: new Date(), finishedById: user.userId });
+      if (!changed.affected) throw WorkOrderErrors.finished();
+      await this.projects.advanceStatus(user.shopId, order.projectId, 'done', manager);
+    });
+    return this.get(user, id);
+  }
+
+  // ------------------------------------------------------------------ helpers
+
+  private checkOf(order: WorkOrder, key: string): WorkCheck {
+    for (const step of order.steps) {
+      const check = step.checks.find((candidate) => candidate.key === key);
+      if (check) return check;
+    }
+    throw WorkOrderErrors.unknownCheck(key);
+  }
+
+  private async viewOf(user: AuthUser, order: WorkOrder, project?: Project): Promise<WorkOrderView> {
+    const records = await this.checks.find({ where: { shopId: user.shopId, workOrderId: order.id }, order: { recordedAt: 'ASC', id: 'ASC' } });
+    return { order, project: project ?? (await this.projects.get(user, order.projectId)), records };
+  }
+}

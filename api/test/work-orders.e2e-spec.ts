@@ -1,0 +1,156 @@
+import { DEMO_LABOR_OPERATIONS, DEMO_PARTS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import Stripe from 'stripe';
+import { seedCatalog } from '../src/database/seed/seed-catalog';
+import { seedParts } from '../src/database/seed/seed-parts';
+import { startAppWithPayments, until } from './helpers/app-with-payments';
+import { bearer, countRows, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
+import { lastMailId, waitForMail } from './helpers/mail-fake';
+import { RunningPaymentFake } from './helpers/payment-fake-process';
+
+const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
+const operation = (code: string) => DEMO_LABOR_OPERATIONS.find((candidate) => candidate.code === code)!;
+const part = (sku: string) => DEMO_PARTS.find((candidate) => candidate.sku === sku)!;
+
+/** A quote as an estimator builds it from the plan: shop operations and catalog parts. */
+const LINES = [
+  { kind: 'labor', description: operation('oil-pan-pickup').name, laborOperationId: operation('oil-pan-pickup').id, hours: 2.5 },
+  { kind: 'labor', description: operation('cam-timing-set').name, laborOperationId: operation('cam-timing-set').id, hours: 3 },
+  { kind: 'part', description: part('TR-4410').description, catalogKind: 'parts', catalogItemId: part('TR-4410').id, quantity: 1, pricing: 'list', unitPriceCents: 32900 },
+  { kind: 'part', description: part('TR-4411').description, catalogKind: 'parts', catalogItemId: part('TR-4411').id, quantity: 1, pricing: 'list', unitPriceCents: 6400 },
+  { kind: 'part', description: part('TR-OP-HV').description, catalogKind: 'parts', catalogItemId: part('TR-OP-HV').id, quantity: 1, pricing: 'list', unitPriceCents: 13900 },
+];
+
+type Check = { key: string; label: string; measured: boolean; range: string | null; rangeFrom: string | null; latest: { result: string; value: number | null; recordedByName: string; recordedAt: string } | null; fitFinding: { checkId: string } | null };
+type Step = { key: string; name: string; torque: { fastener: string; lbfFt: number; newtonMetres: number; sequence: string | null; partSku: string | null }[]; checks: Check[] };
+
+describe('job stages and the work order, from the first fit check to the finished build', () => {
+  let t: TestApp;
+  let demo: Record<DemoRole, Session>;
+  let fake: RunningPaymentFake;
+  let token: string;
+  let quoteId: string;
+  let workOrderId: string;
+
+  const stage = async () => (await t.http.get(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.estimator)).expect(200)).body.status as string;
+  const workOrder = async (session: Session = demo.fabricator) => (await t.http.get(`/api/work-orders/${workOrderId}`).set(...bearer(session)).expect(200)).body;
+  const checkOf = (order: { steps: Step[] }, key: string) => order.steps.flatMap((step) => step.checks).find((check) => check.key === key)!;
+  const record = (body: object, session: Session = demo.fabricator) => t.http.post(`/api/work-orders/${workOrderId}/checks`).set(...bearer(session)).send(body);
+  let stop: () => Promise<void>;
+
+  beforeAll(async () => {
+    ({ t, fake, stop } = await startAppWithPayments());
+    await resetData(t.dataSource);
+    await seedCatalog(t.dataSource);
+    await seedParts(t.dataSource);
+    demo = await signInAllRoles(t.http);
+  });
+
+  afterAll(() => stop());
+
+  it('moves the stage with each event: fit report run, parts plan saved, quote sent, approved', async () => {
+    expect(await stage()).toBe('intake');
+    await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.fabricator)).expect(201);
+    expect(await stage()).toBe('fit-checked');
+    await t.http.post(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.estimator)).send({ objective: 'lowest-cost' }).expect(201);
+    expect(await stage()).toBe('parts-planned');
+    const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES }).expect(201);
+    quoteId = created.body.id;
+    expect(await stage()).toBe('parts-planned');
+    const before = await lastMailId();
+    await t.http.post(`/api/quotes/${quoteId}/send`).set(...bearer(demo.estimator)).expect(200);
+    expect(await stage()).toBe('quote-sent');
+    const mail = await waitForMail('customer@ironbark.test', /quote Q-/, before);
+    token = /\/quote-answer\/([A-Za-z0-9_\-.]+)/.exec(mail.text)![1];
+    await t.http.post(`/api/quote-links/${token}/answer`).send({ answer: 'accept' }).expect(200);
+    expect(await stage()).toBe('approved');
+    // No work order before the deposit is paid.
+    const none = await t.http.get(`/api/projects/${RIDGEBACK}/work-order`).set(...bearer(demo.fabricator)).expect(404);
+    expect(none.body.message).toMatch(/deposit is paid/);
+  });
+
+  it('the settled deposit opens the work order exactly once, in build order, with torques in both units', async () => {
+    await t.http.post(`/api/quote-links/${token}/deposit`).send({ paymentMethod: 'pm_card_visa' }).expect(200);
+    const order = await until(
+      async () => t.http.get(`/api/projects/${RIDGEBACK}/work-order`).set(...bearer(demo.estimator)),
+      (response) => response.status === 200,
+      'the work order',
+    );
+    workOrderId = order.body.id;
+    expect(await stage()).toBe('deposit-paid');
+    expect(order.body).toMatchObject({ state: 'ready', quoteId, progress: { total: 5, passed: 0, failed: 0, open: 5 } });
+    expect(order.body.steps.map((step: Step) => step.key)).toEqual(['cam-timing-set', 'oil-pan-pickup']);
+    const pan = order.body.steps[1] as Step;
+    // Source: NIST SP 811 (2008), Appendix B.9: 1 lbf·ft = 1.355 817 948 331 4004 N·m, so 18 lbf·ft ≈ 24.4 N·m.
+    expect(pan.torque).toContainEqual({ fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null, partSku: null });
+    expect(pan.torque).toContainEqual(expect.objectContaining({ fastener: 'Oil pump to rear main cap bolts (M8)', lbfFt: 18, newtonMetres: 24.4, partSku: 'TR-OP-HV' }));
+    const panBolts = pan.torque.find((spec) => spec.partSku === 'TR-4410' && /pan bolts/.test(spec.fastener))!;
+    expect(panBolts.sequence).toMatch(/crisscross from the centre out, in two stages/);
+    expect(checkOf(order.body, 'oil-pan-pickup.screen-height')).toMatchObject({ measured: true, range: '6–9 mm', rangeFrom: 'TR-4411', latest: null });
+    expect(checkOf(order.body, 'cam-timing-set.cam-marks').fitFinding).toMatchObject({ checkId: 'cam.timing-advance' });
+    expect(order.body.cautions.map((c: { hazard: string }) => c.hazard)).toEqual(['lifting', 'support', 'fuel', 'welding']);
+    expect(order.body.deference).toMatch(/licensed practice/);
+
+    // The same settlement event again (redelivered, then replayed freshly signed) opens nothing more.
+    const events = (await (await fetch(`${fake.url}/_fake/events`)).json()) as Stripe.Event[];
+    const succeeded = events.filter((event) => event.type === 'payment_intent.succeeded').at(-1)!;
+    await fetch(`${fake.url}/_fake/events/${succeeded.id}/deliver`, { method: 'POST' });
+    const payload = JSON.stringify(succeeded);
+    await t.http.post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', Stripe.webhooks.generateTestHeaderString({ payload, secret: fake.webhookSecret })).send(payload).expect(200);
+    expect(await countRows(t.dataSource, 'work_orders')).toBe(1);
+  });
+
+  it('lets only the shop staff who build read it, and refuses checks before the job is in the bay', async () => {
+    expect((await t.http.get(`/api/work-orders/${workOrderId}`).set(...bearer(demo.counter))).status).toBe(403);
+    expect((await t.http.get(`/api/work-orders/${workOrderId}`).set(...bearer(demo.customer))).status).toBe(403);
+    const early = await record({ checkKey: 'oil-pan-pickup.screen-height', value: 8 });
+    expect(early.status).toBe(409);
+    expect(early.body.message).toMatch(/Start the work order first/);
+  });
+
+  it('starting the work order moves the stage to in the bay', async () => {
+    const started = await t.http.post(`/api/work-orders/${workOrderId}/start`).set(...bearer(demo.fabricator)).expect(200);
+    expect(started.body.state).toBe('in-the-bay');
+    expect(started.body.startedAt).not.toBeNull();
+    expect(await stage()).toBe('in-the-bay');
+    expect((await t.http.post(`/api/work-orders/${workOrderId}/start`).set(...bearer(demo.fabricator))).status).toBe(409);
+  });
+
+  it('records checks with who and when; a value outside its range shows as failed', async () => {
+    // Common practice (no published source): the pickup screen sits 6–10 mm above the sump floor; this pickup's data says 6–9 mm.
+    const inRange = await record({ checkKey: 'oil-pan-pickup.screen-height', value: 8 }).expect(200);
+    expect(checkOf(inRange.body, 'oil-pan-pickup.screen-height').latest).toMatchObject({ result: 'pass', value: 8, recordedByName: expect.any(String) });
+    const outside = await record({ checkKey: 'oil-pan-pickup.screen-height', value: 9.5, note: 'screen sits high' }).expect(200);
+    const latest = checkOf(outside.body, 'oil-pan-pickup.screen-height').latest!;
+    expect(latest).toMatchObject({ result: 'fail', value: 9.5 });
+    expect(Date.parse(latest.recordedAt)).not.toBeNaN();
+    expect(outside.body.progress).toEqual({ total: 5, passed: 0, failed: 1, open: 4 });
+    const rolled = await record({ checkKey: 'oil-pan-pickup.rear-main-lip', passed: false }).expect(200);
+    expect(checkOf(rolled.body, 'oil-pan-pickup.rear-main-lip').latest!.result).toBe('fail');
+  });
+
+  it('refuses a check recorded the wrong way, with a message that says what to send', async () => {
+    expect((await record({ checkKey: 'oil-pan-pickup.screen-height', passed: true })).body.message).toMatch(/is measured: send value \(allowed 6–9 mm\)/);
+    expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', value: 3 })).body.message).toMatch(/send passed true or false/);
+    expect((await record({ checkKey: 'no-such.check', passed: true })).status).toBe(400);
+    expect((await record({ checkKey: 'oil-pan-pickup.screen-height', value: 'eight' })).status).toBe(400);
+    expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', passed: true }, demo.counter)).status).toBe(403);
+  });
+
+  it('finishing needs every check passed, then moves the stage to done; the stage never moves back', async () => {
+    const refused = await t.http.post(`/api/work-orders/${workOrderId}/finish`).set(...bearer(demo.fabricator)).expect(409);
+    expect(refused.body.message).toMatch(/Still open or failed: .*Camshaft turns by hand/);
+    await record({ checkKey: 'oil-pan-pickup.screen-height', value: 7.5 }).expect(200);
+    for (const checkKey of ['oil-pan-pickup.pickup-tabs', 'oil-pan-pickup.rear-main-lip', 'cam-timing-set.cam-turns', 'cam-timing-set.cam-marks']) {
+      await record({ checkKey, passed: true }).expect(200);
+    }
+    const finished = await t.http.post(`/api/work-orders/${workOrderId}/finish`).set(...bearer(demo.fabricator)).expect(200);
+    expect(finished.body).toMatchObject({ state: 'finished', progress: { total: 5, passed: 5, failed: 0, open: 0 } });
+    expect(await stage()).toBe('done');
+    expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', passed: false })).status).toBe(409);
+    await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.fabricator)).expect(201);
+    expect(await stage()).toBe('done');
+    const list = await t.http.get('/api/work-orders?state=finished').set(...bearer(demo.owner)).expect(200);
+    expect(list.body.map((o: { id: string }) => o.id)).toEqual([workOrderId]);
+    expect((await t.http.get('/api/work-orders?state=parked').set(...bearer(demo.owner))).status).toBe(400);
+  });
+});

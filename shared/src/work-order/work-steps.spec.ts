@@ -1,0 +1,75 @@
+import type { Finding } from '../types/finding';
+import { buildWorkSteps, OTHER_PARTS_STEP, type WorkOperationInput, type WorkPartInput } from './work-steps';
+import { workOrderCautions } from './work-cautions';
+
+const panOperation: WorkOperationInput = {
+  id: 'op-pan',
+  code: 'oil-pan-pickup',
+  name: 'Install swap oil pan, pickup and pump',
+  buildOrder: 30,
+  hours: 2.5,
+  matches: ['oil-pan', 'oil-pickup', 'oil-pump'],
+  hazards: ['support'],
+  torqueSpecs: [{ fastener: 'Oil pump to rear main cap', lbfFt: 18, sequence: null }],
+  checks: [
+    { key: 'pickup-tabs', label: 'Pickup bolted at both tabs', unit: null, min: null, max: null },
+    { key: 'screen-height', label: 'Screen height above the sump floor', unit: 'mm', min: 6, max: 10 },
+  ],
+};
+const camOperation: WorkOperationInput = {
+  id: 'op-cam',
+  code: 'cam-timing-set',
+  name: 'Install camshaft and timing set',
+  buildOrder: 20,
+  hours: 3,
+  matches: ['cam', 'timing set'],
+  hazards: [],
+  torqueSpecs: [],
+  checks: [{ key: 'cam-marks', label: 'Marks aligned', unit: null, min: null, max: null, fitCheckId: 'cam.timing-advance' }],
+};
+const pan: WorkPartInput = {
+  sku: 'TR-4410',
+  description: 'Rear-sump swap pan',
+  category: 'oil-pan',
+  quantity: 1,
+  torqueSpecs: [{ fastener: 'Oil pan bolts (M6)', newtonMetres: 12, sequence: 'Crisscross from the centre out, in two stages' }],
+  instructions: 'Fit the pickup before the pan.',
+  attributes: {},
+};
+const pickup: WorkPartInput = { ...pan, sku: 'TR-4411', description: 'Rear-sump pickup', category: 'oil-pickup', instructions: null, torqueSpecs: [], attributes: { 'screen-height.min': 7, 'screen-height.max': 9 } };
+const flexplate: WorkPartInput = { ...pan, sku: 'FX-KS', description: 'Flexplate', category: 'flexplate-flywheel', instructions: null, torqueSpecs: [{ fastener: 'Flexplate to crank', newtonMetres: 100 }] };
+
+describe('work order steps', () => {
+  const camFinding = { checkId: 'cam.timing-advance', title: 'Cam timing', status: 'ok', message: 'Advance 4° of 4° recommended.' } as Finding;
+  const steps = buildWorkSteps([panOperation, camOperation], [pan, pickup, flexplate], [camFinding]);
+
+  it('orders the operations by build order and puts parts no operation installs last', () => {
+    expect(steps.map((step) => step.key)).toEqual(['cam-timing-set', 'oil-pan-pickup', OTHER_PARTS_STEP.code]);
+    expect(steps[1].parts.map((part) => part.sku)).toEqual(['TR-4410', 'TR-4411']);
+    expect(steps[2].parts.map((part) => part.sku)).toEqual(['FX-KS']);
+  });
+
+  it('gives every torque in both units with its sequence and the part it comes from', () => {
+    // Source: NIST SP 811 (2008), Appendix B.9 (1 lbf·ft = 1.355 817 948 331 4004 N·m): 18 lbf·ft ≈ 24.4 N·m; 12 N·m ≈ 8.9 lbf·ft.
+    expect(steps[1].torque).toEqual([
+      { fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null, partSku: null },
+      { fastener: 'Oil pan bolts (M6)', lbfFt: 8.9, newtonMetres: 12, sequence: 'Crisscross from the centre out, in two stages', partSku: 'TR-4410' },
+    ]);
+    expect(steps[1].instructions).toEqual(['TR-4410: Fit the pickup before the pan.']);
+  });
+
+  it('takes a measured check range from the part installed, and a confirmation has none', () => {
+    const [tabs, screen] = steps[1].checks;
+    expect(tabs).toMatchObject({ key: 'oil-pan-pickup.pickup-tabs', measured: false, range: null });
+    expect(screen).toMatchObject({ key: 'oil-pan-pickup.screen-height', measured: true, min: 7, max: 9, range: '7–9 mm', rangeFrom: 'TR-4411' });
+  });
+
+  it('shows the fit check result beside the check that confirms it', () => {
+    expect(steps[0].checks[0].fitFinding).toEqual({ checkId: 'cam.timing-advance', title: 'Cam timing', status: 'ok', message: 'Advance 4° of 4° recommended.' });
+  });
+
+  it('always carries the lifting, support, fuel and welding cautions, each deferring to practice', () => {
+    const cautions = workOrderCautions(['support', 'brakes']);
+    expect(cautions.map((c) => c.hazard)).toEqual(['lifting', 'support', 'fuel', 'welding', 'brakes']);
+  });
+});

@@ -1,0 +1,144 @@
+import type { Finding } from '../types/finding';
+import type { CheckStatus, WorkHazard } from '../types/value-lists';
+import { type CheckRange, describeRange } from './check-result';
+import { torqueInBothUnits } from './torque';
+
+/** One of the shop's labor operations as the work order reads it. */
+export interface WorkOperationInput {
+  /** null for a labor line without a shop operation (e.g. a fabrication remedy's own words). */
+  id: string | null;
+  code: string;
+  name: string;
+  buildOrder: number;
+  hours: number;
+  /** Words of part categories and remedies the operation answers (see the labor operations). */
+  matches: string[];
+  hazards: WorkHazard[];
+  torqueSpecs: { fastener: string; lbfFt: number; sequence: string | null }[];
+  checks: { key: string; label: string; unit: string | null; min: number | null; max: number | null; fitCheckId?: string | null }[];
+}
+
+/** A part the job installs, with the tightening data of its catalog row. */
+export interface WorkPartInput {
+  sku: string;
+  description: string;
+  category: string;
+  quantity: number;
+  torqueSpecs: { fastener: string; newtonMetres: number; sequence?: string | null }[];
+  instructions: string | null;
+  /** A part may narrow a check's range: `<check key>.min` / `<check key>.max` numbers in its attributes. */
+  attributes: Record<string, unknown>;
+}
+
+export interface WorkTorque {
+  fastener: string;
+  lbfFt: number;
+  newtonMetres: number;
+  sequence: string | null;
+  /** The part's SKU whose data gives it, or null for the operation's own figure. */
+  partSku: string | null;
+}
+
+export interface WorkCheck {
+  /** `<step key>.<check key>`, unique in the work order. */
+  key: string;
+  label: string;
+  /** Measured checks have a unit and a range; the others are confirmed done or not. */
+  measured: boolean;
+  unit: string | null;
+  min: number | null;
+  max: number | null;
+  /** The range in words ("6–10 mm"), null for a confirmation. */
+  range: string | null;
+  /** Where the range comes from: a part's SKU, or null for the operation's default. */
+  rangeFrom: string | null;
+  /** The fit check's result this check confirms on the vehicle (e.g. the cam timing), when there is one. */
+  fitFinding: { checkId: string; title: string; status: CheckStatus; message: string } | null;
+}
+
+export interface WorkStep {
+  key: string;
+  operationId: string | null;
+  name: string;
+  buildOrder: number;
+  hours: number;
+  hazards: WorkHazard[];
+  parts: { sku: string; description: string; quantity: number }[];
+  torque: WorkTorque[];
+  instructions: string[];
+  checks: WorkCheck[];
+}
+
+export const OTHER_PARTS_STEP = { code: 'other-parts', name: 'Fit the other parts of the plan' } as const;
+
+/** The first operation in build order that installs a part of this category: an exact category word first, then a word it contains. */
+function installerOf(operations: readonly WorkOperationInput[], category: string): WorkOperationInput | null {
+  const exact = operations.find((operation) => operation.matches.some((word) => word.toLowerCase() === category));
+  if (exact) return exact;
+  return operations.find((operation) => operation.matches.some((word) => word && category.includes(word.toLowerCase()))) ?? null;
+}
+
+function rangeFor(check: WorkOperationInput['checks'][number], parts: readonly WorkPartInput[]): CheckRange & { from: string | null } {
+  for (const part of parts) {
+    const min = part.attributes[`${check.key}.min`];
+    const max = part.attributes[`${check.key}.max`];
+    if (typeof min === 'number' || typeof max === 'number') {
+      return { min: typeof min === 'number' ? min : check.min, max: typeof max === 'number' ? max : check.max, from: part.sku };
+    }
+  }
+  return { min: check.min, max: check.max, from: null };
+}
+
+/**
+ * The work order's steps: the quoted operations in build order, each with the parts it installs, the tightening
+ * torques (the operation's and its parts', in lbf·ft and N·m) with their sequences, its hazards and the checks the bay
+ * records (a part's data may narrow a measured check's range; a check tied to a fit check carries that result).
+ * Parts no quoted operation installs go to a last step of their own.
+ */
+export function buildWorkSteps(operations: readonly WorkOperationInput[], parts: readonly WorkPartInput[], findings: readonly Finding[] = []): WorkStep[] {
+  const ordered = [...operations].sort((a, b) => a.buildOrder - b.buildOrder);
+  const partsOf = new Map<WorkOperationInput | null, WorkPartInput[]>();
+  for (const part of parts) {
+    const installer = installerOf(ordered.filter((operation) => operation.id !== null), part.category);
+    partsOf.set(installer, [...(partsOf.get(installer) ?? []), part]);
+  }
+  const step = (operation: WorkOperationInput, installed: WorkPartInput[]): WorkStep => ({
+    key: operation.code,
+    operationId: operation.id,
+    name: operation.name,
+    buildOrder: operation.buildOrder,
+    hours: operation.hours,
+    hazards: [...operation.hazards],
+    parts: installed.map((part) => ({ sku: part.sku, description: part.description, quantity: part.quantity })),
+    torque: [
+      ...operation.torqueSpecs.map((spec) => ({ fastener: spec.fastener, ...torqueInBothUnits({ lbfFt: spec.lbfFt }), sequence: spec.sequence, partSku: null })),
+      ...installed.flatMap((part) =>
+        part.torqueSpecs.map((spec) => ({ fastener: spec.fastener, ...torqueInBothUnits({ newtonMetres: spec.newtonMetres }), sequence: spec.sequence ?? null, partSku: part.sku })),
+      ),
+    ],
+    instructions: installed.filter((part) => part.instructions).map((part) => `${part.sku}: ${part.instructions}`),
+    checks: operation.checks.map((check) => {
+      const range = rangeFor(check, installed);
+      const measured = range.min !== null || range.max !== null;
+      const finding = check.fitCheckId ? findings.find((candidate) => candidate.checkId === check.fitCheckId) : undefined;
+      return {
+        key: `${operation.code}.${check.key}`,
+        label: check.label,
+        measured,
+        unit: check.unit,
+        min: range.min,
+        max: range.max,
+        range: measured ? describeRange(range, check.unit) : null,
+        rangeFrom: measured ? range.from : null,
+        fitFinding: finding ? { checkId: finding.checkId, title: finding.title, status: finding.status, message: finding.message } : null,
+      };
+    }),
+  });
+  const steps = ordered.map((operation) => step(operation, partsOf.get(operation) ?? []));
+  const leftOver = partsOf.get(null) ?? [];
+  if (leftOver.length > 0) {
+    const last = steps.reduce((max, s) => Math.max(max, s.buildOrder), 0);
+    steps.push(step({ id: null, code: OTHER_PARTS_STEP.code, name: OTHER_PARTS_STEP.name, buildOrder: last + 10, hours: 0, matches: [], hazards: [], torqueSpecs: [], checks: [] }, leftOver));
+  }
+  return steps;
+}
