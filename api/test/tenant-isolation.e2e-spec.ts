@@ -154,6 +154,7 @@ describe("tenant isolation of every object route, generated from the router", ()
       'counter-lines:id': shop.counterLineId,
       'labor-operations:id': shop.laborOperationId,
       'quotes:id': shop.quoteId,
+      'work-orders:id': shop.workOrderId,
     };
     return ids[`${segment.split('/').pop()}:${param}`];
   }

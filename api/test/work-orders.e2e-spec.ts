@@ -53,6 +53,19 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(await stage()).toBe('fit-checked');
     await t.http.post(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.estimator)).send({ objective: 'lowest-cost' }).expect(201);
     expect(await stage()).toBe('parts-planned');
+
+    // A draft without lines is drawn from the plan (parts at cost plus the shop's markup, the operations that install
+    // them) and names the plan version and the fit report it was built on.
+    const drafted = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({}).expect(201);
+    const plan = (await t.http.get(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.estimator))).body[0];
+    expect(drafted.body.revision).toMatchObject({ partsPlanId: plan.id, partsPlanVersion: plan.version, fitReportId: expect.any(String) });
+    const draftLines = drafted.body.revision.lines as { kind: string; source: string; catalogKind: string | null; catalogItemId: string | null; laborOperationId: string | null; pricing: string; markupPercent: number | null }[];
+    const planParts = draftLines.filter((line) => line.kind === 'part');
+    expect(planParts.map((line) => line.catalogItemId).sort()).toEqual(plan.result.picks.map((pick: { partId: string }) => pick.partId).sort());
+    expect(planParts.every((line) => line.source === 'plan' && line.catalogKind === 'parts' && line.pricing === 'cost-plus' && line.markupPercent !== null)).toBe(true);
+    const laborOperations = draftLines.filter((line) => line.kind === 'labor').map((line) => line.laborOperationId);
+    expect(laborOperations).toEqual(expect.arrayContaining([operation('engine-remove-install').id, operation('oil-pan-pickup').id]));
+
     const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES }).expect(201);
     quoteId = created.body.id;
     expect(await stage()).toBe('parts-planned');

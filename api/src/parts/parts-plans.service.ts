@@ -200,6 +200,21 @@ export class PartsPlansService {
     return this.dataSource.getRepository(PartsPlanRecord).find({ where: { shopId: user.shopId, projectId: project.id }, order: { version: 'DESC' }, take: 50 });
   }
 
+  /** The plan a quote is drawn from: the newest locked version, else the newest version; null when the project has none. */
+  async forQuote(user: Pick<AuthUser, 'shopId'>, projectId: string): Promise<PartsPlanRecord | null> {
+    const plans = this.dataSource.getRepository(PartsPlanRecord);
+    return (
+      (await plans.findOne({ where: { shopId: user.shopId, projectId, status: 'locked' }, order: { version: 'DESC' } })) ??
+      (await plans.findOne({ where: { shopId: user.shopId, projectId }, order: { version: 'DESC' } }))
+    );
+  }
+
+  /** The shop's part rows by id (for prices, costs and install data). */
+  async partsByIds(user: Pick<AuthUser, 'shopId'>, ids: string[]): Promise<Part[]> {
+    if (ids.length === 0) return [];
+    return this.dataSource.getRepository(Part).find({ where: { shopId: user.shopId, id: In(ids) } });
+  }
+
   async get(user: Pick<AuthUser, 'shopId'>, id: string): Promise<PartsPlanRecord> {
     const plan = await this.dataSource.getRepository(PartsPlanRecord).findOne({ where: { id, shopId: user.shopId } });
     if (!plan) throw PartsErrors.planNotFound();

@@ -1,4 +1,4 @@
-import type { FitReport, PartCategory } from '@swapwright/shared';
+import type { FitReport, PartCategory, PartsPlanResult } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import type { LaborOperation } from '../labor-operations/labor-operation.entity';
 import type { QuoteLineInputDto } from './dto/quote-input.dto';
@@ -41,6 +41,16 @@ export function catalogPriceCents(spec: Record<string, unknown>): number | null 
   return null;
 }
 
+/** Adds a labor line for a shop operation at its book hours, once per operation. */
+function operationAdder(lines: DraftLine[]): (operation: LaborOperation, source: LineSource) => void {
+  const used = new Set<string>();
+  return (operation, source) => {
+    if (used.has(operation.id)) return;
+    used.add(operation.id);
+    lines.push({ key: randomUUID(), kind: 'labor', source, description: operation.name, laborOperationId: operation.id, hours: operation.bookHours });
+  };
+}
+
 /**
  * The first draft of a quote, drawn from the fit report: the base operations, a parts line for the first
  * catalog part of each part remedy (with the shop operation that installs it), and a labor line for each
@@ -48,14 +58,9 @@ export function catalogPriceCents(spec: Record<string, unknown>): number | null 
  */
 export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
   const lines: DraftLine[] = [];
-  const usedOperations = new Set<string>();
   const match = (text: string) =>
     inputs.operations.find((operation) => operation.matches.some((word) => word && text.toLowerCase().includes(word.toLowerCase()))) ?? null;
-  const addOperation = (operation: LaborOperation, source: LineSource) => {
-    if (usedOperations.has(operation.id)) return;
-    usedOperations.add(operation.id);
-    lines.push({ key: randomUUID(), kind: 'labor', source, description: operation.name, laborOperationId: operation.id, hours: operation.bookHours });
-  };
+  const addOperation = operationAdder(lines);
   for (const code of inputs.baseOperationCodes) {
     const operation = inputs.operations.find((candidate) => candidate.code === code);
     if (operation) addOperation(operation, 'manual');
@@ -86,6 +91,81 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
         const operation = match(remedy.operation);
         if (operation) addOperation(operation, 'fit-remedy');
         else lines.push({ key: randomUUID(), kind: 'labor', source: 'fit-remedy', description: remedy.operation.slice(0, 200), hours: Math.round(remedy.laborHours * 10) / 10 });
+      }
+    }
+  }
+  return lines;
+}
+
+/** A part the plan picked, with the catalog's figures the quote prices it from. */
+export interface PlanPartForQuote {
+  partId: string;
+  description: string;
+  category: string;
+  quantity: number;
+  priceCents: number;
+  /** 0 when the shop has not entered a cost: the line is then priced from the list. */
+  costCents: number;
+}
+
+export interface PlanDraftInputs {
+  plan: Pick<PartsPlanResult, 'operations'>;
+  parts: PlanPartForQuote[];
+  report: FitReport | null;
+  operations: LaborOperation[];
+  baseOperationCodes: readonly string[];
+  defaultMarkupPercent: number;
+}
+
+/**
+ * The first draft of a quote drawn from the parts plan: a parts line per pick (priced from its cost with the shop's
+ * markup when a cost is known, else at its list price), the shop operation that installs each pick's category, the
+ * plan's own operations, and the fit report's fabrication remedies (the shop's operation when one matches, else the
+ * remedy's own hours). Every line keeps where it came from.
+ */
+export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
+  const lines: DraftLine[] = [];
+  const words = (operation: LaborOperation) => operation.matches.filter(Boolean).map((word) => word.toLowerCase());
+  const ordered = [...inputs.operations].sort((a, b) => a.buildOrder - b.buildOrder);
+  const installerOf = (category: string) =>
+    ordered.find((operation) => words(operation).includes(category)) ?? ordered.find((operation) => words(operation).some((word) => category.includes(word))) ?? null;
+  const matchText = (text: string) => ordered.find((operation) => words(operation).some((word) => text.toLowerCase().includes(word))) ?? null;
+  const addOperation = operationAdder(lines);
+  for (const code of inputs.baseOperationCodes) {
+    const operation = inputs.operations.find((candidate) => candidate.code === code);
+    if (operation) addOperation(operation, 'plan');
+  }
+  for (const part of inputs.parts) {
+    const fromCost = part.costCents > 0;
+    lines.push({
+      key: randomUUID(),
+      kind: 'part',
+      source: 'plan',
+      description: part.description.slice(0, 200),
+      catalogKind: 'parts',
+      catalogItemId: part.partId,
+      quantity: part.quantity,
+      ...(fromCost
+        ? { pricing: 'cost-plus' as const, unitCostCents: part.costCents, markupPercent: inputs.defaultMarkupPercent }
+        : { pricing: 'list' as const, unitPriceCents: part.priceCents }),
+    });
+    const installer = installerOf(part.category);
+    if (installer) addOperation(installer, 'plan');
+  }
+  for (const planned of inputs.plan.operations) {
+    const operation = matchText(planned.operation);
+    if (operation) addOperation(operation, 'plan');
+    else lines.push({ key: randomUUID(), kind: 'labor', source: 'plan', description: planned.operation.slice(0, 200), hours: Math.round(planned.laborHours * 10) / 10 });
+  }
+  const described = new Set(lines.map((line) => line.description.toLowerCase()));
+  for (const finding of inputs.report?.shortfalls ?? []) {
+    for (const remedy of finding.remedies) {
+      if (remedy.kind !== 'fabrication') continue;
+      const operation = matchText(remedy.operation);
+      if (operation) addOperation(operation, 'fit-remedy');
+      else if (!described.has(remedy.operation.toLowerCase())) {
+        described.add(remedy.operation.toLowerCase());
+        lines.push({ key: randomUUID(), kind: 'labor', source: 'fit-remedy', description: remedy.operation.slice(0, 200), hours: Math.round(remedy.laborHours * 10) / 10 });
       }
     }
   }

@@ -6,6 +6,7 @@ import { CatalogModule } from '../catalog/catalog.module';
 import { AppConfigService } from '../config/app-config';
 import { FitReportsModule } from '../fit-reports/fit-reports.module';
 import { LaborOperationsModule } from '../labor-operations/labor-operations.module';
+import { PartsModule } from '../parts/parts.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { ShopsModule } from '../shops/shops.module';
 import { UsersModule } from '../users/users.module';
@@ -34,6 +35,7 @@ import { QuotesService } from './quotes.service';
     ProjectsModule,
     FitReportsModule,
     LaborOperationsModule,
+    PartsModule,
     CatalogModule,
     ShopsModule,
     UsersModule,

@@ -1,7 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, type FitReport, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -12,6 +12,8 @@ import { EnvironmentVariables } from '../config/env.validation';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { FitReportsService } from '../fit-reports/fit-reports.service';
 import { LaborOperationsService } from '../labor-operations/labor-operations.service';
+import { PartsPlanRecord } from '../parts/part.entity';
+import { PartsPlansService } from '../parts/parts-plans.service';
 import { MailService } from '../mail/mail.service';
 import { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
@@ -19,7 +21,7 @@ import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
 import { UsersService } from '../users/users.service';
 import { AnswerQuoteDto, CreateQuoteDto, QuoteLineInputDto, UpdateQuoteDto } from './dto/quote-input.dto';
-import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromReport } from './quote-draft.builder';
+import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromPlan, draftLinesFromReport } from './quote-draft.builder';
 import { QuoteLinksService } from './quote-links.service';
 import { priceRevision, UnpricedLine } from './quote-money.adapter';
 import { QuoteNotification } from './quote-notification.entity';
@@ -87,6 +89,7 @@ export class QuotesService {
     private readonly projects: ProjectsService,
     private readonly fitReports: FitReportsService,
     private readonly operations: LaborOperationsService,
+    private readonly partsPlans: PartsPlansService,
     private readonly catalog: CatalogService,
     private readonly shops: ShopsService,
     private readonly users: UsersService,
@@ -178,7 +181,13 @@ export class QuotesService {
     const project = await this.projects.get(user, projectId);
     const report = await this.reportFor(user, project, input.fitReportId);
     const [shop, settings] = await Promise.all([this.shops.getCurrent(user), this.settings.forShop(user)]);
-    const lines = input.lines ? await this.linesFromInput(user, input.lines, []) : await this.draftLines(user, report?.results ?? null, settings.defaultMarkupPercent);
+    // The quote names the plan version and fit report it is built on; without lines it is drawn from them.
+    const plan = await this.partsPlans.forQuote(user, project.id);
+    const lines = input.lines
+      ? await this.linesFromInput(user, input.lines, [])
+      : plan
+        ? await this.draftLinesFromPlan(user, plan, report?.results ?? null, settings.defaultMarkupPercent)
+        : await this.draftLines(user, report?.results ?? null, settings.defaultMarkupPercent);
     const quoteId = randomUUID();
     const revision: Omit<QuoteRevision, 'lines' | 'totals' | 'createdAt'> & { lines: UnpricedLine[] } = {
       id: randomUUID(),
@@ -186,8 +195,8 @@ export class QuotesService {
       quoteId,
       number: 1,
       fitReportId: report?.id ?? null,
-      partsPlanId: null,
-      partsPlanVersion: null,
+      partsPlanId: plan?.id ?? null,
+      partsPlanVersion: plan?.version ?? null,
       validUntil: input.validUntil ?? addDays(todayIso(), settings.validityDays),
       currency: shop.currency,
       laborRateCents: Math.round(shop.laborRatePerHour * 100),
@@ -400,6 +409,27 @@ export class QuotesService {
       report,
       operations,
       catalogRow: (kind, id) => rows.get(`${kind}:${id}`) ?? null,
+      baseOperationCodes: BASE_OPERATION_CODES,
+      defaultMarkupPercent,
+    });
+    return drafted.map((line) => this.toUnpriced(line, line.source));
+  }
+
+  private async draftLinesFromPlan(user: AuthUser, plan: PartsPlanRecord, report: FitReport | null, defaultMarkupPercent: number): Promise<UnpricedLine[]> {
+    const result = plan.result as unknown as PartsPlanResult;
+    const rows = new Map((await this.partsPlans.partsByIds(user, result.picks.map((pick) => pick.partId))).map((part) => [part.id, part]));
+    const drafted = draftLinesFromPlan({
+      plan: result,
+      parts: result.picks.map((pick) => ({
+        partId: pick.partId,
+        description: pick.description,
+        category: pick.category,
+        quantity: pick.quantity,
+        priceCents: rows.get(pick.partId)?.priceCents ?? pick.priceCents,
+        costCents: rows.get(pick.partId)?.costCents ?? 0,
+      })),
+      report,
+      operations: await this.operations.list(user),
       baseOperationCodes: BASE_OPERATION_CODES,
       defaultMarkupPercent,
     });

@@ -169,6 +169,14 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'POST /api/quote-links/:token/deposit': 'public',
   // Signed by the payment provider (checked against PAYMENT_WEBHOOK_SECRET).
   'POST /api/payments/webhook': 'public',
+
+  // Work orders: the people who build (start, record checks, finish) read and run them.
+  'GET /api/work-orders': BUILDERS,
+  'GET /api/work-orders/:id': BUILDERS,
+  'POST /api/work-orders/:id/start': BUILDERS,
+  'POST /api/work-orders/:id/checks': BUILDERS,
+  'POST /api/work-orders/:id/finish': BUILDERS,
+  'GET /api/projects/:projectId/work-order': BUILDERS,
 };
 
 export const DEMO_ROLES: readonly DemoRole[] = ALL;
