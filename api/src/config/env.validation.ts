@@ -9,6 +9,7 @@ import {
   IsString,
   IsUrl,
   Matches,
+  ValidateIf,
   Max,
   Min,
   MinLength,
@@ -17,6 +18,9 @@ import {
 } from 'class-validator';
 
 const REPLICA_HOSTS = /^\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*(,\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*)*$/;
+
+export const STORAGE_DRIVERS = ['local', 's3'] as const;
+export type StorageDriver = (typeof STORAGE_DRIVERS)[number];
 
 export type NodeEnv = 'development' | 'test' | 'production';
 export const NODE_ENVS: NodeEnv[] = ['development', 'test', 'production'];
@@ -135,6 +139,32 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @IsOptional()
   @IsString()
   UPLOAD_DIR?: string;
+
+  /** Where photos go: `local` (UPLOAD_DIR, the default) or `s3` (an S3-compatible object store, below). */
+  @IsIn(STORAGE_DRIVERS, { message: `STORAGE_DRIVER must be one of: ${STORAGE_DRIVERS.join(', ')}` })
+  STORAGE_DRIVER: StorageDriver = 'local';
+
+  @ValidateIf((env: EnvironmentVariables) => env.STORAGE_DRIVER === 's3')
+  @IsString()
+  @IsNotEmpty({ message: 'S3_BUCKET must be set when STORAGE_DRIVER is s3' })
+  S3_BUCKET?: string;
+
+  @IsOptional()
+  @IsString()
+  S3_REGION?: string;
+
+  /** An S3-compatible endpoint (MinIO, Ceph, the local fake); leave empty for AWS S3 itself. */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true })
+  S3_ENDPOINT?: string;
+
+  @IsOptional()
+  @IsString()
+  S3_ACCESS_KEY_ID?: string;
+
+  @IsOptional()
+  @IsString()
+  S3_SECRET_ACCESS_KEY?: string;
 }
 
 export class ConfigValidationError extends Error {

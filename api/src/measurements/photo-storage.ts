@@ -17,6 +17,11 @@ export abstract class PhotoStorage {
 
 const KEY_PATTERN = /^[0-9a-f-]{36}\.(jpg|png|webp)$/;
 
+/** Generated keys only: anything else never reaches a file system or a bucket. */
+export function assertGeneratedKey(key: string): void {
+  if (!KEY_PATTERN.test(key)) throw new Error(`Refusing a storage key that was not generated here: ${key}`);
+}
+
 /** Files under `UPLOAD_DIR/measurement-photos` (the private data folder; never served statically). */
 @Injectable()
 export class LocalDiskPhotoStorage extends PhotoStorage {
@@ -29,8 +34,7 @@ export class LocalDiskPhotoStorage extends PhotoStorage {
   }
 
   private path(key: string): string {
-    // Generated keys only: anything else never reaches the file system.
-    if (!KEY_PATTERN.test(key)) throw new Error(`Refusing a storage key that was not generated here: ${key}`);
+    assertGeneratedKey(key);
     return join(this.root, key);
   }
 
