@@ -1,4 +1,4 @@
-import type { Finding, Remedy } from '../types/finding';
+import type { FigureUnit, Finding, Remedy } from '../types/finding';
 import type { UnitSystem } from '../types/value-lists';
 import { MM_PER_INCH } from './length';
 import { KG_PER_LB, KPA_PER_PSI, KW_PER_HP, L_PER_US_GAL } from './quantities';
@@ -72,6 +72,63 @@ export function formatQuantity(value: number, quantity: Quantity, system: UnitSy
   return shown.space ? `${number} ${shown.unit}` : `${number}${shown.unit}`;
 }
 
+/** The quantity of each finding unit that converts between systems (the rest read alike in both). */
+const FIGURE_QUANTITY: Partial<Record<FigureUnit, Quantity>> = {
+  mm: 'length',
+  deg: 'angle',
+  psi: 'pressure',
+  'lb/h': 'mass-flow',
+  'L/h': 'volume-flow',
+  kW: 'power',
+};
+
+/** Decimals of each finding unit, in its stored unit. */
+const FIGURE_DECIMALS: Record<FigureUnit, number> = { mm: 1, deg: 2, rpm: 0, 'lb/h': 1, 'cc/min': 0, 'L/h': 1, psi: 1, kW: 0, count: 0, none: 1 };
+const PLAIN_SUFFIX: Partial<Record<FigureUnit, string>> = { rpm: ' rpm', 'cc/min': ' cc/min' };
+
+export interface FigureFormatOptions {
+  signed?: boolean;
+  /** Shown as a rule's threshold ({@link formatThreshold}). */
+  threshold?: boolean;
+}
+
+/**
+ * A finding's figure (measured, required, margin) in the reader's system: `formatFindingFigure(11.6, 'mm', 'in')`
+ * → `0.46 in`, `(58, 'psi', 'mm')` → `399.9 kPa`, `(298.3, 'kW', 'in')` → `400 hp`, `(3200, 'rpm', …)` → `3200 rpm`.
+ */
+export function formatFindingFigure(value: number, unit: FigureUnit, system: UnitSystem, options: FigureFormatOptions = {}): string {
+  const quantity = FIGURE_QUANTITY[unit];
+  const format = { decimals: FIGURE_DECIMALS[unit], signed: options.signed };
+  if (quantity) return options.threshold ? formatThreshold(value, quantity, system, format) : formatQuantity(value, quantity, system, format);
+  return `${formatNumber(value, format.decimals, options.signed)}${PLAIN_SUFFIX[unit] ?? ''}`;
+}
+
+/**
+ * Inch steps tried for a threshold set in whole millimetres, coarsest first. Such a threshold (10 mm, 100 mm)
+ * only claims the half millimetre it was rounded to, so any inch figure within ±0.5 mm of it states the rule as
+ * well as any other; the roundest one is easiest to read off a rule: 10 mm reads 0.40 in (not 0.39 in), 100 mm
+ * reads 3.95 in (not 3.94 in), 25 mm reads 1.00 in. A threshold set in inches (12.7 mm) reads exactly (0.50 in).
+ * Common practice (no published source): shop rules are quoted in round figures of the shop's own unit.
+ */
+const THRESHOLD_INCH_STEPS = [0.25, 0.1, 0.05] as const;
+const WHOLE_MM_HALF_WIDTH = 0.5;
+
+/**
+ * A threshold (what a rule asks for) in the reader's system. Lengths set in whole millimetres are shown in
+ * inches at the roundest step that stays within the half millimetre the rule was rounded to (see
+ * {@link THRESHOLD_INCH_STEPS}); everything else as {@link formatQuantity}.
+ */
+export function formatThreshold(value: number, quantity: Quantity, system: UnitSystem, options: QuantityFormatOptions = {}): string {
+  const wholeMm = quantity === 'length' && system === 'in' && Math.abs(value - Math.round(value)) < 1e-9;
+  if (!wholeMm) return formatQuantity(value, quantity, system, options);
+  const inches = value / MM_PER_INCH;
+  for (const step of THRESHOLD_INCH_STEPS) {
+    const rounded = Math.round(inches / step) * step;
+    if (Math.abs(rounded * MM_PER_INCH - value) <= WHOLE_MM_HALF_WIDTH) return formatQuantity(rounded * MM_PER_INCH, quantity, system, options);
+  }
+  return formatQuantity(value, quantity, system, options);
+}
+
 /** A figure read back from an engine sentence: its stored value and how it was written. */
 export interface TextFigure {
   quantity: Quantity;
@@ -117,24 +174,39 @@ export function textParts(text: string): TextPart[] {
   return parts;
 }
 
-/** Writes parts in the reader's system. */
-export function renderText(parts: readonly TextPart[], system: UnitSystem): string {
+/** Writes parts in the reader's system; `isThreshold` picks the figures shown as a rule's threshold. */
+export function renderText(parts: readonly TextPart[], system: UnitSystem, isThreshold: (figure: TextFigure) => boolean = () => false): string {
   return parts
-    .map((part) => (typeof part === 'string' ? part : formatQuantity(part.value, part.quantity, system, { decimals: part.decimals, signed: part.signed })))
+    .map((part) => {
+      if (typeof part === 'string') return part;
+      const options = { decimals: part.decimals, signed: part.signed };
+      return isThreshold(part) ? formatThreshold(part.value, part.quantity, system, options) : formatQuantity(part.value, part.quantity, system, options);
+    })
     .join('');
 }
 
+/** The part of a finding its sentence is rendered from: the sentence, and the threshold figure it may quote. */
+export type FindingText = Pick<Finding, 'message'> & Partial<Pick<Finding, 'required' | 'unit'>>;
+
+/** A length figure of the sentence that quotes the finding's threshold (as written, to its decimals). */
+function quotesThreshold(finding: FindingText): (figure: TextFigure) => boolean {
+  const required = finding.required;
+  if (required === null || required === undefined || finding.unit !== 'mm') return () => false;
+  return (figure) => figure.quantity === 'length' && !figure.signed && figure.value === Number(required.toFixed(figure.decimals));
+}
+
 /** The finding's sentence as structured parts (figures in their stored units). */
-export function findingTextParts(finding: Pick<Finding, 'message'>): TextPart[] {
+export function findingTextParts(finding: FindingText): TextPart[] {
   return textParts(finding.message);
 }
 
 /**
  * The finding's sentence in the reader's unit system: every figure in that system's units, inches first in
- * inch mode, one minus sign. The stored report keeps the engine's own message.
+ * inch mode, one minus sign, and the rule's threshold (when the finding gives it) as {@link formatThreshold}
+ * shows thresholds. The stored report keeps the engine's own message.
  */
-export function renderFindingText(finding: Pick<Finding, 'message'>, system: UnitSystem): string {
-  return renderText(findingTextParts(finding), system);
+export function renderFindingText(finding: FindingText, system: UnitSystem): string {
+  return renderText(findingTextParts(finding), system, quotesThreshold(finding));
 }
 
 /** A remedy's note (or a fabrication's operation) in the reader's unit system. */

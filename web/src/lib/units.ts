@@ -1,4 +1,4 @@
-import { inchesToMm, kwToHp, mmToInches, parseLengthResult } from '@swapwright/shared';
+import { formatQuantity, inchesToMm, mmToInches, parseLengthResult } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -23,11 +23,10 @@ export function displayToMm(value: number, system: UnitSystem): number {
   return system === 'in' ? inchesToMm(value) : value;
 }
 
+/** A stored length in the person's system, through shared's one formatting path (0.01 in or 0.1 mm, one minus sign). */
 export function formatLength(mm: number | null | undefined, system: UnitSystem): string {
   if (mm === null || mm === undefined || Number.isNaN(mm)) return '—';
-  const value = mmToDisplay(mm, system);
-  const text = new Intl.NumberFormat('en-US', { maximumFractionDigits: lengthDecimals[system] }).format(value);
-  return `${text} ${unitLabels[system]}`;
+  return formatQuantity(mm, 'length', system);
 }
 
 export type ReadResult = { ok: true; value: number } | { ok: false; message: string };
@@ -62,10 +61,10 @@ export function readAngle(input: string): ReadResult {
   return { ok: true, value: Number(match[1].replace(',', '.')) };
 }
 
-/** Power in the unit people in that system usually quote: hp with inches, kW with millimetres. */
+/** Power in the unit people in that system quote: hp with inches, kW with millimetres (never both in one figure). */
 export function formatPower(kw: number | null | undefined, system: UnitSystem): string {
   if (kw === null || kw === undefined) return '—';
-  return system === 'in' ? `${Math.round(kwToHp(kw))} hp (${Math.round(kw)} kW)` : `${Math.round(kw)} kW`;
+  return formatQuantity(kw, 'power', system, { decimals: 0 });
 }
 
 export function formatMoneyCents(cents: number | null | undefined, currency = 'USD'): string {

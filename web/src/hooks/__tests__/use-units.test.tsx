@@ -15,7 +15,7 @@ describe('useUnits', () => {
     expect(result.current.parseLength('12.5')).toBeCloseTo(317.5, 10);
     expect(result.current.parseLength(12.5)).toBeCloseTo(317.5, 10);
     expect(result.current.fromDisplay(12.5)).toBeCloseTo(317.5, 10);
-    expect(result.current.formatLength(317.5)).toBe('12.5 in');
+    expect(result.current.formatLength(317.5)).toBe('12.50 in');
     expect(result.current.toDisplay(317.5)).toBe(12.5);
   });
 

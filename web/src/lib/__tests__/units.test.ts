@@ -13,7 +13,7 @@ describe('length units', () => {
   it('12.5 in is 317.5 mm (1 in = 25.4 mm exactly)', () => {
     expect(inchesToMm(12.5)).toBe(317.5);
     expect(parseLength('12.5 in', 'mm')).toBe(317.5);
-    expect(formatLength(317.5, 'in')).toBe('12.5 in');
+    expect(formatLength(317.5, 'in')).toBe('12.50 in');
   });
 
   it('reads fractions of an inch as a shop writes them', () => {
@@ -23,7 +23,8 @@ describe('length units', () => {
   });
 
   it('formats power in hp with inches and kW with millimetres', () => {
-    expect(formatPower(298, 'in')).toBe('400 hp (298 kW)');
+    // One system per figure: hp in inch mode, kW in millimetre mode (1 hp = 0.7457 kW, NIST SP 811).
+    expect(formatPower(298, 'in')).toBe('400 hp');
     expect(formatPower(298, 'mm')).toBe('298 kW');
   });
 });

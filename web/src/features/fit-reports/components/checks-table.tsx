@@ -1,4 +1,4 @@
-import type { CheckGroup, Finding } from '@swapwright/shared';
+import { renderFindingText, type CheckGroup, type Finding } from '@swapwright/shared';
 import { Flex, Table, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import type { HTMLAttributes } from 'react';
@@ -18,7 +18,7 @@ export function ChecksTable({ findings }: ChecksTableProps) {
   const ordered = [...groups.keys()].sort((a, b) => groupOrder.indexOf(a) - groupOrder.indexOf(b));
 
   const columns: ColumnsType<Finding> = [
-    { title: 'Status', key: 'status', width: 130, render: (_, f) => <CheckStatusTag status={f.status} /> },
+    { title: 'Status', key: 'status', width: 110, render: (_, f) => <CheckStatusTag status={f.status} /> },
     {
       title: 'Check',
       key: 'title',
@@ -26,14 +26,27 @@ export function ChecksTable({ findings }: ChecksTableProps) {
         <>
           <Typography.Text strong>{f.title}</Typography.Text>
           <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
-            {f.status === 'unknown' && f.missing.length ? `Missing: ${f.missing.map(missingInputLabel).join(', ')}` : f.message}
+            {f.status === 'unknown' && f.missing.length ? `Missing: ${f.missing.map(missingInputLabel).join(', ')}` : renderFindingText(f, units.system)}
           </Typography.Paragraph>
+          {/* On a phone the figure columns give way to this line (see global.css), so the sentence keeps its width. */}
+          {f.limit !== 'match' && f.measured !== null && (
+            <Typography.Text className="fit-check-figures-phone" style={{ fontSize: 13 }}>
+              Found {formatFigure(f.measured, f.unit, units)} · margin {formatMargin(f, units)}
+            </Typography.Text>
+          )}
         </>
       ),
     },
-    { title: 'Found', key: 'measured', width: 120, align: 'right', render: (_, f) => (f.limit === 'match' ? matchResult(f) : formatFigure(f.measured, f.unit, units)) },
+    {
+      title: 'Found',
+      key: 'measured',
+      width: 120,
+      align: 'right',
+      render: (_, f) => (f.limit === 'match' ? matchResult(f) : formatFigure(f.measured, f.unit, units)),
+      responsive: ['sm'],
+    },
     { title: 'Needs', key: 'required', width: 140, align: 'right', render: (_, f) => (f.limit === 'match' ? '—' : formatRequirement(f, units)), responsive: ['md'] },
-    { title: 'Margin', key: 'margin', width: 110, align: 'right', render: (_, f) => formatMargin(f, units) },
+    { title: 'Margin', key: 'margin', width: 110, align: 'right', render: (_, f) => formatMargin(f, units), responsive: ['sm'] },
     {
       title: 'Limit based on',
       key: 'source',

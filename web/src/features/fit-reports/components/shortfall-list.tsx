@@ -1,4 +1,4 @@
-import type { Finding, PartRemedy, PlacementRemedy, Remedy } from '@swapwright/shared';
+import { renderFindingText, renderRemedyText, renderText, textParts, type Finding, type PartRemedy, type PlacementRemedy, type Remedy } from '@swapwright/shared';
 import { Button, Empty, Flex, Space, Tag, Typography } from 'antd';
 import { useUnits } from '@/hooks/use-units';
 import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
@@ -28,7 +28,7 @@ function PartRemedyView({ remedy, parts, onUsePart, chosenIds, busyPartId }: { r
   return (
     <div>
       <Typography.Text strong>{categoryLabels[remedy.category] ?? remedy.category}</Typography.Text>
-      {remedy.note && <Typography.Text type="secondary">: {remedy.note}</Typography.Text>}
+      {remedy.note && <Typography.Text type="secondary">: {renderRemedyText(remedy, units.system)}</Typography.Text>}
       {remedy.partIds.length === 0 ? (
         <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
           No catalog part matches yet. Add one to the catalog with: {Object.entries(remedy.requires).map(([k, v]) => describeRequirement(k, v, units)).join(', ')}.
@@ -73,7 +73,7 @@ function RemedyView({ remedy, ...rest }: { remedy: Remedy } & Omit<ShortfallList
     return (
       <Flex gap={8} align="center" wrap>
         <Typography.Text strong>Move: {describePlacementRemedy(remedy, units)}</Typography.Text>
-        {remedy.note && <Typography.Text type="secondary">{remedy.note}</Typography.Text>}
+        {remedy.note && <Typography.Text type="secondary">{renderRemedyText(remedy, units.system)}</Typography.Text>}
         {rest.onTryPlacement && (
           <Button size="small" className="fit-control" onClick={() => rest.onTryPlacement?.(remedy)}>
             Preview this move
@@ -83,11 +83,11 @@ function RemedyView({ remedy, ...rest }: { remedy: Remedy } & Omit<ShortfallList
     );
   return (
     <div>
-      <Typography.Text strong>Fabricate: {remedy.operation}</Typography.Text>{' '}
+      <Typography.Text strong>Fabricate: {renderText(textParts(remedy.operation), units.system)}</Typography.Text>{' '}
       <Tag>{remedy.laborHours.toLocaleString('en-US', { maximumFractionDigits: 1 })} h labor</Tag>
       {remedy.note && (
         <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
-          {remedy.note}
+          {renderRemedyText(remedy, units.system)}
         </Typography.Paragraph>
       )}
     </div>
@@ -145,7 +145,7 @@ export function ShortfallList({ shortfalls, ...rest }: ShortfallListProps) {
               </Space>
             )}
           </Flex>
-          <Typography.Paragraph style={{ margin: '4px 0 0' }}>{f.message}</Typography.Paragraph>
+          <Typography.Paragraph style={{ margin: '4px 0 0' }}>{renderFindingText(f, units.system)}</Typography.Paragraph>
           {f.remedies.length > 0 && (
             <div className="fit-remedies" style={{ marginTop: 8, paddingLeft: 12, borderLeft: '3px solid #e6e7e1' }}>
               <Typography.Text type="secondary" style={{ fontSize: 12, textTransform: 'uppercase', letterSpacing: '0.06em' }}>

@@ -1,40 +1,23 @@
-import type { Finding, FigureUnit } from '@swapwright/shared';
+import { formatFindingFigure, type Finding, type FigureUnit } from '@swapwright/shared';
 import type { UnitsApi } from '@/hooks/use-units';
 
-const plainUnits: Partial<Record<FigureUnit, string>> = {
-  deg: '°',
-  rpm: ' rpm',
-  'lb/h': ' lb/h',
-  'cc/min': ' cc/min',
-  'L/h': ' L/h',
-  psi: ' psi',
-  kW: ' kW',
-  count: '',
-  none: '',
-};
+type Units = Pick<UnitsApi, 'system'>;
 
-const decimalsFor: Partial<Record<FigureUnit, number>> = { deg: 2, rpm: 0, count: 0, psi: 1, kW: 0 };
-
-/** A finding's figure in the person's units: lengths in inches or mm, the rest as the engine gives them. */
-export function formatFigure(value: number | null | undefined, unit: FigureUnit, units: Pick<UnitsApi, 'formatLength'>): string {
+/** A finding's figure in the person's unit system (shared's one formatting path: lengths, psi/kPa, lb/h/kg/h, hp/kW). */
+export function formatFigure(value: number | null | undefined, unit: FigureUnit, units: Units): string {
   if (value === null || value === undefined || Number.isNaN(value)) return '—';
-  if (unit === 'mm') return units.formatLength(value);
-  const decimals = decimalsFor[unit] ?? 1;
-  const text = new Intl.NumberFormat('en-US', { maximumFractionDigits: decimals }).format(value);
-  return `${text}${plainUnits[unit] ?? ''}`;
+  return formatFindingFigure(value, unit, units.system);
 }
 
-/** "at least 0.5 in", "at most 3°", "must match". */
-export function formatRequirement(finding: Pick<Finding, 'required' | 'limit' | 'unit'>, units: Pick<UnitsApi, 'formatLength'>): string {
+/** "at least 0.50 in", "at most 3.00°", "must match": the threshold shown as thresholds are (round-mm rules at round inches). */
+export function formatRequirement(finding: Pick<Finding, 'required' | 'limit' | 'unit'>, units: Units): string {
   if (finding.limit === 'match') return 'must match';
   if (finding.required === null) return '—';
-  return `${finding.limit === 'max' ? 'at most' : 'at least'} ${formatFigure(finding.required, finding.unit, units)}`;
+  return `${finding.limit === 'max' ? 'at most' : 'at least'} ${formatFindingFigure(finding.required, finding.unit, units.system, { threshold: true })}`;
 }
 
-/** The margin with a sign: "+0.25 in" or "−0.5 in". */
-export function formatMargin(finding: Pick<Finding, 'margin' | 'unit' | 'limit'>, units: Pick<UnitsApi, 'formatLength'>): string {
+/** The margin with a sign: "+0.25 in" or "−0.50 in" (one minus sign, U+2212, as every figure). */
+export function formatMargin(finding: Pick<Finding, 'margin' | 'unit' | 'limit'>, units: Units): string {
   if (finding.margin === null || finding.limit === 'match') return '—';
-  const text = formatFigure(Math.abs(finding.margin), finding.unit, units);
-  if (Math.abs(finding.margin) < 1e-9) return text;
-  return finding.margin < 0 ? `−${text}` : `+${text}`;
+  return formatFindingFigure(finding.margin, finding.unit, units.system, { signed: true });
 }

@@ -1,4 +1,4 @@
-import type { Finding } from '@swapwright/shared';
+import { formatFindingFigure, type FigureUnit, type Finding } from '@swapwright/shared';
 import type { UnitsApi } from '@/hooks/use-units';
 
 /** Plain words for the inputs a check names as missing; unknown paths show as they come. */
@@ -76,24 +76,25 @@ export const requirementLabels: Record<string, string> = {
   transmissionPattern: 'transmission bolt pattern',
 };
 
-const suffixUnits: Array<[RegExp, string]> = [
-  [/Kw$/, ' kW'],
-  [/Psi$/, ' psi'],
-  [/Lbh$/, ' lb/h'],
-  [/Lph$/, ' L/h'],
-  [/Rpm$/, ' rpm'],
-  [/Deg$/, '°'],
+const suffixUnits: Array<[RegExp, FigureUnit]> = [
+  [/Kw$/, 'kW'],
+  [/Psi$/, 'psi'],
+  [/Lbh$/, 'lb/h'],
+  [/Lph$/, 'L/h'],
+  [/Rpm$/, 'rpm'],
+  [/Deg$/, 'deg'],
 ];
 
 /** "inlet side left", "length at least 1,214 mm" for one attribute a part must have. */
-export function describeRequirement(key: string, value: string | number | boolean, units: Pick<UnitsApi, 'formatLength'>): string {
+export function describeRequirement(key: string, value: string | number | boolean, units: Pick<UnitsApi, 'formatLength' | 'system'>): string {
   const label = requirementLabels[key] ?? key;
   let shown: string;
   if (typeof value === 'boolean') shown = value ? 'yes' : 'no';
   else if (typeof value === 'number' && /Mm$/.test(key)) shown = units.formatLength(value);
   else if (typeof value === 'number') {
-    const unit = suffixUnits.find(([re]) => re.test(key))?.[1] ?? '';
-    shown = `${value.toLocaleString('en-US')}${unit}`;
+    // in the person's system, as every figure: a rating asked in kW reads in hp in inch mode
+    const unit = suffixUnits.find(([re]) => re.test(key))?.[1];
+    shown = unit ? formatFindingFigure(value, unit, units.system) : value.toLocaleString('en-US');
   } else shown = String(value);
   return `${label} ${shown}`;
 }

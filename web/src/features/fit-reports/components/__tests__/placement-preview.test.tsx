@@ -26,14 +26,14 @@ describe('placement preview', () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<PreviewHarness />);
     const row = () => screen.getByTestId('shortfall-envelope.sump-crossmember');
-    expect(within(row()).getByText('-96 mm')).toBeInTheDocument();
+    expect(within(row()).getByText('−96.0 mm')).toBeInTheDocument();
     expect(row().getAttribute('data-status')).toBe('fails');
     expect(screen.queryByTestId('preview-badge')).toBeNull();
 
     const height = screen.getByRole('spinbutton', { name: 'Crank height' });
     fireEvent.change(height, { target: { value: '560' } });
 
-    await waitFor(() => expect(within(row()).getByText('-36 mm')).toBeInTheDocument());
+    await waitFor(() => expect(within(row()).getByText('−36.0 mm')).toBeInTheDocument());
     expect(screen.getByTestId('preview-badge').textContent).toBe('Preview, not saved');
   });
 
@@ -43,6 +43,6 @@ describe('placement preview', () => {
     expect((height as HTMLInputElement).value).toBe('19.69');
     fireEvent.change(height, { target: { value: '22.05' } });
     // 22.05 in = 560.07 mm: the pan still overlaps the crossmember by about 1.4 in
-    await waitFor(() => expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('-1.41 in')).toBeInTheDocument());
+    await waitFor(() => expect(within(screen.getByTestId('shortfall-envelope.sump-crossmember')).getByText('−1.41 in')).toBeInTheDocument());
   });
 });

@@ -53,11 +53,11 @@ describe('ShortfallList', () => {
   it('shows the figures in inches (1 in = 25.4 mm exactly, NIST SP 811)', () => {
     renderWithApp(<ShortfallList shortfalls={[badlyBlocked, close]} />);
     const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
-    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-1 in');
-    expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−1.5 in');
-    expect(within(row).getByText('at least 0.5 in')).toBeInTheDocument();
+    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('−1.00 in');
+    expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−1.50 in');
+    expect(within(row).getByText('at least 0.50 in')).toBeInTheDocument();
     expect(within(screen.getByTestId('shortfall-envelope.hood')).getByTestId('shortfall-measured').textContent).toBe('0.63 in');
-    expect(within(row).getByText('Move: Raise the engine 1.5 in')).toBeInTheDocument();
+    expect(within(row).getByText('Move: Raise the engine 1.50 in')).toBeInTheDocument();
     expect(within(row).getByText('8 h labor')).toBeInTheDocument();
   });
 
@@ -65,9 +65,40 @@ describe('ShortfallList', () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
     renderWithApp(<ShortfallList shortfalls={[badlyBlocked]} />);
     const row = screen.getByTestId('shortfall-envelope.sump-crossmember');
-    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('-25.4 mm');
+    expect(within(row).getByTestId('shortfall-measured').textContent).toBe('−25.4 mm');
     expect(within(row).getByTestId('shortfall-margin').textContent).toBe('−38.1 mm');
     expect(within(row).getByText('at least 12.7 mm')).toBeInTheDocument();
+  });
+
+  it('writes the sentence and remedy notes in the person’s system, inches first, the round-mm threshold at a round inch', () => {
+    // Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm. Derived: 96.0 mm = 3.78 in; a 100 mm rule reads
+    // 3.95 in (within the half millimetre the rule was rounded to); 126.2 L/h = 33.3 US gal/h; 58.0 psi = 399.9 kPa.
+    const ground = finding({
+      checkId: 'envelope.ground-clearance',
+      title: 'Ground clearance under the engine',
+      measured: 96,
+      required: 100,
+      margin: -4,
+      message: 'The lowest point sits 96.0 mm (3.78 in) above the ground; at least 100.0 mm (3.94 in) is required.',
+      remedies: [{ kind: 'fabrication', operation: 'Raise the crossmember 4.0 mm (0.16 in)', laborHours: 2, note: 'A pump giving 126.2 L/h at 58.0 psi.' }],
+    });
+    renderWithApp(<ShortfallList shortfalls={[ground]} />);
+    const row = screen.getByTestId('shortfall-envelope.ground-clearance');
+    expect(within(row).getByText('The lowest point sits 3.78 in above the ground; at least 3.95 in is required.')).toBeInTheDocument();
+    expect(within(row).getByText('at least 3.95 in')).toBeInTheDocument();
+    expect(within(row).getByText('Fabricate: Raise the crossmember 0.16 in')).toBeInTheDocument();
+    expect(within(row).getByText('A pump giving 33.3 gal/h at 58.0 psi.')).toBeInTheDocument();
+    expect(row.textContent).not.toMatch(/\d mm\b|L\/h|kPa/);
+  });
+
+  it('writes the sentence in millimetres, kPa and L/h for a person who works in mm', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'mm');
+    const pump = finding({ checkId: 'fuel.pump-flow', group: 'fuel', unit: 'L/h', measured: 0, required: 126.2, margin: -126.2, message: 'The pump must deliver at least 126.2 L/h at 58.0 psi.' });
+    renderWithApp(<ShortfallList shortfalls={[pump]} />);
+    const row = screen.getByTestId('shortfall-fuel.pump-flow');
+    expect(within(row).getByText('The pump must deliver at least 126.2 L/h at 399.9 kPa.')).toBeInTheDocument();
+    expect(row.textContent).not.toMatch(/psi|gal\/h|lb\/h/);
+    window.localStorage.removeItem('swapwright.unitSystem');
   });
 
   it('offers the matching catalog part with a "Use" button', async () => {

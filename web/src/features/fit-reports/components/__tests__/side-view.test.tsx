@@ -43,7 +43,7 @@ describe('FrontView', () => {
     renderWithApp(<FrontView spec={DEMO_FIT_SPEC} />);
     const view = screen.getByTestId('front-view');
     expect(within(view).getByTestId('front-rails')).toBeInTheDocument();
-    expect(within(view).getByText('rails 740 mm inside')).toBeInTheDocument();
+    expect(within(view).getByText('rails 740.0 mm inside')).toBeInTheDocument();
     expect(within(view).getByTestId('front-steering-box')).toBeInTheDocument();
     expect(within(view).getByTestId('front-box-drive-cv60-truck')).toBeInTheDocument();
   });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { describeRequirement, matchResult, missingInputLabel } from '../labels';
 import { categoryLabels } from '../remedies';
 
-const mm = { formatLength: (v: number | null | undefined) => `${v} mm` };
+const mm = { formatLength: (v: number | null | undefined) => `${v} mm`, system: 'mm' as const };
 
 describe('fit report labels', () => {
   it('names every part category', () => {
