@@ -57,7 +57,8 @@ export function ProjectDetailPage() {
         }
         subtitle={`${p.vehicleDescription} · opened ${formatDate(p.createdAt)} · last change ${formatDate(p.updatedAt)}`}
         extra={
-          <Space>
+          // wraps on a phone: four buttons do not fit 390 px in one row
+          <Space wrap>
             <Button onClick={() => navigate(toProjectMeasurements(p.id))}>{isCustomer ? 'Measurements and photos' : 'Measurement sheet'}</Button>
             <Button onClick={() => navigate(toProjectFit(p.id))}>{isCustomer ? 'Fit report' : 'Fit check'}</Button>
             {canEdit && (
