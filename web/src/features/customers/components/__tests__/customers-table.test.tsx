@@ -70,7 +70,7 @@ describe('CustomersTable', () => {
     vi.spyOn(apiClient, 'get').mockResolvedValue({ data: pageOf([], 1, 20, 0) });
     const onCreate = vi.fn();
     renderWithApp(<CustomersTable query={{ page: 1, pageSize: 20 }} onQueryChange={vi.fn()} canEdit onCreate={onCreate} />);
-    await userEvent.click(await screen.findByRole('button', { name: 'Add a customer' }));
+    await userEvent.click(await screen.findByRole('button', { name: 'Add a customer' }, { timeout: 10_000 }));
     expect(onCreate).toHaveBeenCalled();
   });
 });
