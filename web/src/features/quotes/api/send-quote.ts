@@ -12,6 +12,10 @@ export function useSendQuote(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: sendQuote,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) }),
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) });
+      // Sending moves the project's stage on.
+      void queryClient.invalidateQueries({ queryKey: ['projects'] });
+    },
   });
 }

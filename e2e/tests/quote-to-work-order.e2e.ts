@@ -1,0 +1,126 @@
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { demoSignIn, signInAs } from './support/session';
+
+const DEMO_PROJECT = 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap';
+
+interface CapturedMail {
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+async function capturedMails(page: BrowserSession['page']): Promise<CapturedMail[]> {
+  // The local mail fake's own endpoint (scripts/stack.sh exports MAIL_FAKE_URL).
+  if (!process.env.MAIL_FAKE_URL) throw new Error('MAIL_FAKE_URL is not set: source .local/test/env.sh first.');
+  return (await (await page.request.get(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
+}
+
+describe('from the quote to the work order: estimator, customer, fabricator', () => {
+  let estimator: BrowserSession;
+  let quoteLabel: string;
+  let workOrderPath: string;
+
+  beforeAll(async () => {
+    estimator = await openBrowser();
+    await signInAs(estimator.page, 'estimator');
+  });
+
+  afterAll(async () => {
+    await estimator.close();
+  });
+
+  it('the estimator plans the parts, drafts the quote from the plan and sends it', async () => {
+    const { page } = estimator;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('link', { name: DEMO_PROJECT }).click();
+    // The plan needs a stored fit report first.
+    await page.getByRole('button', { name: 'Fit check' }).click();
+    const ran = page.waitForResponse((r) => /\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Run fit check' }).click();
+    expect((await ran).status()).toBe(201);
+    await page.goBack();
+    const plan = page.getByTestId('parts-plan-card');
+    const built = page.waitForResponse((r) => /\/parts-plans$/.test(r.url()) && r.request().method() === 'POST');
+    await plan.getByRole('button', { name: 'Build plan' }).click();
+    expect((await built).status()).toBe(201);
+    const drafted = page.waitForResponse((r) => /\/quotes$/.test(r.url()) && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Draft a quote' }).click();
+    const draft = await (await drafted).json();
+    quoteLabel = draft.label;
+    expect(draft.revision.partsPlanVersion).not.toBeNull();
+    const item = page.getByTestId(`quote-${quoteLabel}`);
+    await item.getByRole('button', { name: 'Send to customer' }).click();
+    await expectText(item, /Awaiting the customer/);
+    await expectText(page.locator('[aria-label="Project stage"]'), /Quote sent/);
+    await saveScreenshot(page, 'estimator-quote-sent');
+
+    // The customer opens the link in the e-mail, accepts and pays the deposit on the local payment fake.
+    let mail: CapturedMail | undefined;
+    for (let attempt = 0; attempt < 50 && !mail; attempt++) {
+      mail = (await capturedMails(page)).find((m) => m.to.includes(demoSignIn('customer').email) && m.subject.includes(quoteLabel));
+      if (!mail) await page.waitForTimeout(200);
+    }
+    expect(mail).toBeDefined();
+    const link = /https?:\/\/\S+\/quote-answer\/[A-Za-z0-9_\-.]+/.exec(mail!.text)?.[0];
+    expect(link).toBeDefined();
+    const customer = await openBrowser();
+    try {
+      const answerPage = customer.page;
+      await answerPage.goto(new URL(link!).pathname);
+      await expectVisible(answerPage.getByTestId('quote-total'));
+      await answerPage.getByRole('button', { name: 'Accept this quote' }).click();
+      await answerPage.getByLabel('Card number (local test payment service)').fill('4242 4242 4242 4242');
+      await saveScreenshot(answerPage, 'customer-quote-accepted');
+      await answerPage.getByRole('button', { name: 'Pay the deposit' }).click();
+      await expectVisible(answerPage.getByText('Deposit paid. Thank you'));
+      await saveScreenshot(answerPage, 'customer-deposit-paid');
+    } finally {
+      await customer.close();
+    }
+  });
+
+  it('the estimator sees the stage move on and opens the work order', async () => {
+    const { page } = estimator;
+    await page.reload();
+    await expectText(page.locator('[aria-label="Project stage"]'), /Deposit paid/);
+    const card = page.getByTestId('project-work-order');
+    await card.getByRole('link', { name: /Open work order/ }).click();
+    await expectVisible(page.getByRole('list', { name: 'Operations in build order' }));
+    await expectText(page.getByTestId('work-order-cautions'), /rated stands|axle stands/);
+    // Source: NIST SP 811 (2008), Appendix B.9: 18 lbf·ft ≈ 24.4 N·m.
+    await expectText(page.getByTestId('step-oil-pan-pickup').getByTestId('torque-specs'), /18\.0 lbf·ft · 24\.4 N·m/);
+    await expectText(page.getByTestId('step-oil-pan-pickup').getByTestId('torque-specs'), /crisscross from the centre out/i);
+    workOrderPath = new URL(page.url()).pathname;
+    await saveScreenshot(page, 'estimator-work-order');
+  });
+
+  it('the fabricator records two checks at the bench on a phone: one in range passes, one outside shows failed', async () => {
+    const fabricator = await openBrowser();
+    try {
+      const { page } = fabricator;
+      await signInAs(page, 'fabricator');
+      await page.setViewportSize({ width: 390, height: 844 });
+      await page.goto(workOrderPath);
+      await page.getByRole('button', { name: 'Start in the bay' }).click();
+      await expectText(page.getByRole('heading', { level: 2 }), /In the bay/);
+
+      const tabs = page.getByTestId('check-oil-pan-pickup.pickup-tabs');
+      await tabs.getByRole('button', { name: 'Done as described' }).click();
+      await expectText(tabs.getByTestId('check-result'), /^Pass$/);
+      await expectText(tabs, /Recorded by/);
+
+      // Common practice (no published source): the pickup screen sits 6–10 mm above the sump floor; 14 mm is outside.
+      const screen = page.getByTestId('check-oil-pan-pickup.screen-height');
+      await screen.getByRole('spinbutton', { name: /Value for/ }).fill('14');
+      await screen.getByRole('button', { name: 'Record value' }).click();
+      await expectText(screen.getByTestId('check-result'), /Failed · 14 mm/);
+      await expectText(page.getByTestId('work-order-progress'), /1 failed/);
+      await screen.scrollIntoViewIfNeeded();
+      await expectFitsWidth(page);
+      await saveScreenshot(page, 'fabricator-work-order-phone');
+    } finally {
+      await fabricator.close();
+    }
+  });
+});
