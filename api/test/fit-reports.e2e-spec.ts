@@ -33,8 +33,6 @@ describe('fit reports', () => {
   let t: TestApp;
   let demo: Record<DemoRole, Session>;
   let other: Session;
-  let stockReportId: string;
-  let rearReportId: string;
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -46,11 +44,40 @@ describe('fit reports', () => {
 
   afterAll(() => t.close());
 
+  // Every case starts from the demo state: the demo selections, no threshold overrides, no stored reports, the
+  // projects at their demo stage. A case that needs a report runs one itself.
+  beforeEach(async () => {
+    await t.dataSource.query('DELETE FROM fit_reports WHERE projectId IN (?, ?)', [RIDGEBACK, STAG]);
+    await t.dataSource.query("UPDATE projects SET status = 'measuring' WHERE id = ?", [RIDGEBACK]);
+    await t.dataSource.query("UPDATE projects SET status = 'intake' WHERE id = ?", [STAG]);
+    await t.http.put(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(demo.owner)).send(selectionBody()).expect(200);
+    await t.http.put('/api/fit-settings').set(...bearer(demo.owner)).send({ overrides: {} }).expect(200);
+  });
+
+  /** Runs the fit check on the Ridgeback as the fabricator (the demo selections: the stock front-sump pan); its id. */
+  async function runStockReport(): Promise<string> {
+    const response = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.fabricator));
+    expect(response.status).toBe(201);
+    expect(response.body.inputs.spec.oilPan.id).toBe(DEMO_CATALOG_IDS.oilPans.kestrelStockFront);
+    return response.body.id;
+  }
+
+  /** Puts the rear-sump pan and its pickup on the Ridgeback and runs the check; its id. */
+  async function runRearReport(): Promise<string> {
+    await t.http
+      .put(`/api/projects/${RIDGEBACK}/fit-selections`)
+      .set(...bearer(demo.estimator))
+      .send(selectionBody({ oilPanId: DEMO_CATALOG_IDS.oilPans.kestrelRearSwap, oilPickupId: DEMO_CATALOG_IDS.oilPickups.kestrelRear }))
+      .expect(200);
+    const response = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner));
+    expect(response.status).toBe(201);
+    return response.body.id;
+  }
+
   it('runs the demo project on the stock pan: the sump fails against the crossmember, stored with its inputs', async () => {
     const response = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.fabricator));
     expect(response.status).toBe(201);
     const body = response.body;
-    stockReportId = body.id;
     const sump = body.report.shortfalls.find((f: FindingBody) => f.checkId === SUMP);
     expect(sump).toMatchObject({ status: 'fails', unit: 'mm' });
     expect(sump.margin).toBeLessThan(0);
@@ -77,6 +104,7 @@ describe('fit reports', () => {
   });
 
   it("picks a stock belt from the shop's belts with the truck drive's rib count: the belt check is ok", async () => {
+    const stockReportId = await runStockReport();
     const response = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.counter));
     expect(response.status).toBe(200);
     // Only the 6-rib belts: the seeded 5PK1223 is nearer the computed length but is the wrong width.
@@ -89,6 +117,7 @@ describe('fit reports', () => {
   });
 
   it('switching to the rear-sump pan clears the crossmember; compare shows the change', async () => {
+    const stockReportId = await runStockReport();
     const put = await t.http
       .put(`/api/projects/${RIDGEBACK}/fit-selections`)
       .set(...bearer(demo.estimator))
@@ -98,7 +127,7 @@ describe('fit reports', () => {
 
     const run = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner));
     expect(run.status).toBe(201);
-    rearReportId = run.body.id;
+    const rearReportId = run.body.id;
     expect(['ok', 'tight']).toContain(finding(run.body.report, SUMP).status);
     expect(run.body.report.shortfalls.map((f: FindingBody) => f.checkId)).not.toContain(SUMP);
 
@@ -111,6 +140,8 @@ describe('fit reports', () => {
   });
 
   it('lists the project reports newest first as summaries', async () => {
+    const stockReportId = await runStockReport();
+    const rearReportId = await runRearReport();
     const response = await t.http.get(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.counter));
     expect(response.status).toBe(200);
     expect(response.body.total).toBe(2);
@@ -120,6 +151,8 @@ describe('fit reports', () => {
   });
 
   it("names each report's author in the summaries and the full report, null once the author is gone", async () => {
+    const stockReportId = await runStockReport();
+    await runRearReport();
     const names = new Map(Object.values(demo).map((session) => [session.user.id, session.user.name]));
     const list = await t.http.get(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner)).expect(200);
     for (const item of list.body.items as { createdById: string; createdByName: string | null }[]) {
@@ -177,6 +210,7 @@ describe('fit reports', () => {
   });
 
   it('lets a customer read their own project reports, not run checks or what-if', async () => {
+    const stockReportId = await runStockReport();
     const own = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.customer));
     expect(own.status).toBe(200);
     expect(own.body.report.caution).toMatch(/planning aid/);
@@ -187,6 +221,7 @@ describe('fit reports', () => {
   });
 
   it("answers 404 to a customer for another customer's project report", async () => {
+    const stockReportId = await runStockReport();
     const run = await t.http.post(`/api/projects/${STAG}/fit-reports`).set(...bearer(demo.estimator));
     expect(run.status).toBe(201);
     // The Stag has no placement: the fit window proposes one, or the chassis's stock placement is used.
@@ -200,6 +235,7 @@ describe('fit reports', () => {
   });
 
   it("answers 404 for another shop's reports and projects", async () => {
+    const stockReportId = await runStockReport();
     expect((await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(other))).status).toBe(404);
     expect((await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(other))).status).toBe(404);
     expect((await t.http.get(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(other))).status).toBe(404);
@@ -216,6 +252,7 @@ describe('fit reports', () => {
   });
 
   it('validates fit selections: unknown parts, other-shop parts and bad drives are refused', async () => {
+    await runRearReport();
     const otherPan = await t.http.post('/api/catalog/oil-pans').set(...bearer(other)).send({ ...DEMO_REAR_SUMP_PAN, id: undefined });
     expect(otherPan.status).toBe(201);
     const cases = [
@@ -236,6 +273,7 @@ describe('fit reports', () => {
   });
 
   it('choosing the demo mount adapter takes up the mount offsets; an unknown adapter is refused, nothing written', async () => {
+    const stockReportId = await runStockReport();
     const before = await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(demo.counter));
     for (const id of MOUNTS) expect(finding(before.body.report, id).status).toBe('fails');
     expect(before.body.inputs.spec.mountAdapterId).toBeUndefined();

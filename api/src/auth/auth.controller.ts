@@ -17,6 +17,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { AuthService } from './auth.service';
 import { PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password-reset.dto';
 import { RefreshTokenDto } from './dto/refresh-token.dto';
+import { mapCurrentUser, mapSession } from './current-user.mapper';
 import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
 import { SignInDto } from './dto/sign-in.dto';
 import { SignUpAcceptedResponseDto, SignUpConfirmDto, SignUpDto } from './dto/sign-up.dto';
@@ -51,8 +52,8 @@ export class AuthController {
   @Post('sign-up/confirm')
   @ApiCreatedResponse({ type: SessionResponseDto, description: 'The shop is created and its owner signed in' })
   @ApiBadRequestResponse({ type: ErrorResponseDto })
-  confirmSignUp(@Body() body: SignUpConfirmDto): Promise<SessionResponseDto> {
-    return this.signUps.confirm(body.token);
+  async confirmSignUp(@Body() body: SignUpConfirmDto): Promise<SessionResponseDto> {
+    return mapSession(await this.signUps.confirm(body.token));
   }
 
   @Public()
@@ -61,8 +62,8 @@ export class AuthController {
   @HttpCode(200)
   @ApiOkResponse({ type: SessionResponseDto })
   @ApiUnauthorizedResponse({ type: ErrorResponseDto })
-  signIn(@Body() body: SignInDto): Promise<SessionResponseDto> {
-    return this.auth.signIn(body);
+  async signIn(@Body() body: SignInDto): Promise<SessionResponseDto> {
+    return mapSession(await this.auth.signIn(body));
   }
 
   @Public()
@@ -70,8 +71,8 @@ export class AuthController {
   @HttpCode(200)
   @ApiOkResponse({ type: SessionResponseDto })
   @ApiUnauthorizedResponse({ type: ErrorResponseDto })
-  refresh(@Body() body: RefreshTokenDto): Promise<SessionResponseDto> {
-    return this.auth.refresh(body.refreshToken);
+  async refresh(@Body() body: RefreshTokenDto): Promise<SessionResponseDto> {
+    return mapSession(await this.auth.refresh(body.refreshToken));
   }
 
   // Public so a client whose access token has lapsed can still end its session.
@@ -86,8 +87,9 @@ export class AuthController {
   @Get('me')
   @ApiBearerAuth()
   @ApiOkResponse({ type: CurrentUserResponseDto })
-  me(@CurrentUser() user: AuthUser): Promise<CurrentUserResponseDto> {
-    return this.auth.me(user);
+  async me(@CurrentUser() user: AuthUser): Promise<CurrentUserResponseDto> {
+    const { member, shop } = await this.auth.me(user);
+    return mapCurrentUser(member, shop);
   }
 
   @Public()

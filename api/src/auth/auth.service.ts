@@ -1,14 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { AuthUser } from '../common/tenant/auth-user';
 import { MembershipsService } from '../memberships/memberships.service';
+import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
 import { UsersService } from '../users/users.service';
 import { AuthErrors } from './auth.errors';
-import { mapCurrentUser } from './current-user.mapper';
-import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
 import { SignInDto } from './dto/sign-in.dto';
 import { PasswordHasher } from './password-hasher';
-import { SessionsService } from './sessions.service';
+import { IssuedSession, SessionsService } from './sessions.service';
 
 @Injectable()
 export class AuthService {
@@ -20,7 +19,7 @@ export class AuthService {
     private readonly passwords: PasswordHasher,
   ) {}
 
-  async signIn(input: SignInDto): Promise<SessionResponseDto> {
+  async signIn(input: SignInDto): Promise<IssuedSession> {
     const user = await this.users.findByEmail(input.email);
     const matches = await this.passwords.matches(input.password, user?.passwordHash);
     if (!user || !matches) throw AuthErrors.invalidCredentials();
@@ -29,7 +28,7 @@ export class AuthService {
     return this.sessions.issue(membership.id);
   }
 
-  refresh(refreshToken: string): Promise<SessionResponseDto> {
+  refresh(refreshToken: string): Promise<IssuedSession> {
     return this.sessions.rotate(refreshToken);
   }
 
@@ -37,7 +36,8 @@ export class AuthService {
     return this.sessions.revoke(refreshToken);
   }
 
-  async me(user: AuthUser): Promise<CurrentUserResponseDto> {
-    return mapCurrentUser(user, await this.shops.getCurrent(user));
+  /** The caller and their shop. */
+  async me(user: AuthUser): Promise<{ member: AuthUser; shop: Shop }> {
+    return { member: user, shop: await this.shops.getCurrent(user) };
   }
 }

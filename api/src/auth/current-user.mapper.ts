@@ -1,6 +1,7 @@
 import { AuthUser } from '../common/tenant/auth-user';
 import { Shop } from '../shops/shop.entity';
-import { CurrentUserResponseDto } from './dto/session-response.dto';
+import { CurrentUserResponseDto, SessionResponseDto } from './dto/session-response.dto';
+import type { IssuedSession } from './sessions.service';
 
 export function mapCurrentUser(user: AuthUser, shop: Pick<Shop, 'id' | 'name' | 'unitSystem'>): CurrentUserResponseDto {
   return {
@@ -10,5 +11,14 @@ export function mapCurrentUser(user: AuthUser, shop: Pick<Shop, 'id' | 'name' | 
     role: user.role,
     shop: { id: shop.id, name: shop.name, unitSystem: shop.unitSystem },
     customerId: user.customerId,
+  };
+}
+
+export function mapSession(session: IssuedSession): SessionResponseDto {
+  return {
+    accessToken: session.accessToken,
+    refreshToken: session.refreshToken,
+    expiresIn: session.expiresIn,
+    user: mapCurrentUser(session.member, session.shop),
   };
 }

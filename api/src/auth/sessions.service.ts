@@ -3,15 +3,24 @@ import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Not } from 'typeorm';
+import { AuthUser } from '../common/tenant/auth-user';
+import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
 import { UsersService } from '../users/users.service';
 import { ACCESS_TOKEN_TTL_SECONDS, AccessTokenPayload, REFRESH_TOKEN_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
-import { mapCurrentUser } from './current-user.mapper';
-import { SessionResponseDto } from './dto/session-response.dto';
 import { MemberResolverService } from './member-resolver.service';
 import { RefreshToken } from './refresh-token.entity';
 import { hashToken, newOpaqueToken } from './token-hash';
+
+/** A signed-in session: its tokens, the member it acts as and that member's shop. */
+export interface IssuedSession {
+  accessToken: string;
+  refreshToken: string;
+  expiresIn: number;
+  member: AuthUser;
+  shop: Shop;
+}
 
 @Injectable()
 export class SessionsService {
@@ -31,7 +40,7 @@ export class SessionsService {
     membershipId: string,
     manager: EntityManager = this.dataSource.manager,
     sessionId: string = randomUUID(),
-  ): Promise<SessionResponseDto> {
+  ): Promise<IssuedSession> {
     const user = await this.members.resolve(membershipId, manager);
     if (!user) throw AuthErrors.memberGone();
     const sessionVersion = await this.users.sessionVersionOf(user.userId, manager);
@@ -50,11 +59,11 @@ export class SessionsService {
     });
     const payload: AccessTokenPayload = { sub: user.userId, mid: user.membershipId, sid: sessionId, sv: sessionVersion };
     const accessToken = await this.jwt.signAsync(payload, { expiresIn: ACCESS_TOKEN_TTL_SECONDS });
-    return { accessToken, refreshToken: refresh.token, expiresIn: ACCESS_TOKEN_TTL_SECONDS, user: mapCurrentUser(user, shop) };
+    return { accessToken, refreshToken: refresh.token, expiresIn: ACCESS_TOKEN_TTL_SECONDS, member: user, shop };
   }
 
   /** Exchanges a refresh token for a new session; the presented token stops working. */
-  async rotate(refreshToken: string): Promise<SessionResponseDto> {
+  async rotate(refreshToken: string): Promise<IssuedSession> {
     const stored = await this.dataSource.manager.findOne(RefreshToken, { where: { tokenHash: hashToken(refreshToken) } });
     if (!stored) throw AuthErrors.refreshTokenInvalid();
     if (stored.revokedAt) {

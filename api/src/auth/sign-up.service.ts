@@ -11,11 +11,10 @@ import { ShopsService } from '../shops/shops.service';
 import { normalizeEmail, UsersService } from '../users/users.service';
 import { SIGN_UP_LINK_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
-import { SessionResponseDto } from './dto/session-response.dto';
 import { SignUpDto } from './dto/sign-up.dto';
 import { PasswordHasher } from './password-hasher';
 import { PendingSignUp } from './pending-sign-up.entity';
-import { SessionsService } from './sessions.service';
+import { IssuedSession, SessionsService } from './sessions.service';
 import { hashToken, newOpaqueToken } from './token-hash';
 
 /**
@@ -67,7 +66,7 @@ export class SignUpService {
   }
 
   /** Opens the e-mailed link: the person, their one-person shop and the owner membership, in one transaction. */
-  async confirm(token: string): Promise<SessionResponseDto> {
+  async confirm(token: string): Promise<IssuedSession> {
     return this.dataSource.transaction(async (manager) => {
       const pending = await manager.findOne(PendingSignUp, { where: { tokenHash: hashToken(token) } });
       if (!pending) throw AuthErrors.signUpLinkInvalid();

@@ -1,5 +1,6 @@
-import { FitReportResponseDto, FitReportSummaryResponseDto } from './dto/fit-report-response.dto';
+import { FitReportComparisonResponseDto, FitReportResponseDto, FitReportSummaryResponseDto } from './dto/fit-report-response.dto';
 import { FitReportRecord } from './fit-report-record.entity';
+import type { FitReportComparison } from './fit-reports.service';
 
 export function mapFitReportSummary(record: FitReportRecord): FitReportSummaryResponseDto {
   return {
@@ -29,4 +30,8 @@ export function mapFitReport(record: FitReportRecord): FitReportResponseDto {
     report: record.results as unknown as FitReportResponseDto['report'],
     inputs: record.inputsSnapshot as unknown as FitReportResponseDto['inputs'],
   };
+}
+
+export function mapFitReportComparison(comparison: FitReportComparison): FitReportComparisonResponseDto {
+  return { a: mapFitReportSummary(comparison.a), b: mapFitReportSummary(comparison.b), changes: comparison.changes };
 }

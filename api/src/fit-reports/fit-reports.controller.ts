@@ -26,7 +26,7 @@ import {
   FitReportSummaryResponseDto,
 } from './dto/fit-report-response.dto';
 import { WhatIfDto } from './dto/what-if.dto';
-import { mapFitReport, mapFitReportSummary } from './fit-report.mapper';
+import { mapFitReport, mapFitReportComparison, mapFitReportSummary } from './fit-report.mapper';
 import { FitReportsService } from './fit-reports.service';
 
 @ApiTags('fit-reports')
@@ -77,8 +77,8 @@ export class FitReportsController {
   @ApiOperation({ summary: 'What changed, check by check, from report a to report b' })
   @ApiOkResponse({ type: FitReportComparisonResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
-  compare(@CurrentUser() user: AuthUser, @Query() query: CompareFitReportsQueryDto): Promise<FitReportComparisonResponseDto> {
-    return this.reports.compare(user, query.a.toLowerCase(), query.b.toLowerCase());
+  async compare(@CurrentUser() user: AuthUser, @Query() query: CompareFitReportsQueryDto): Promise<FitReportComparisonResponseDto> {
+    return mapFitReportComparison(await this.reports.compare(user, query.a.toLowerCase(), query.b.toLowerCase()));
   }
 
   @Post('what-if')

@@ -15,14 +15,19 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { ProjectsService } from '../projects/projects.service';
 import { User } from '../users/user.entity';
-import { FitReportComparisonResponseDto } from './dto/fit-report-response.dto';
 import { WhatIfDto } from './dto/what-if.dto';
-import { mapFitReportSummary } from './fit-report.mapper';
 import { FitReportRecord } from './fit-report-record.entity';
 import { FitReportErrors } from './fit-reports.errors';
 import { FitSettingsService } from './fit-settings.service';
 import { FitSpecBuilderService } from './fit-spec-builder.service';
 import { jsonCopy } from '../common/json/json-copy';
+
+/** Two stored reports of the caller's shop and what changed, check by check, from a to b. */
+export interface FitReportComparison {
+  a: FitReportRecord;
+  b: FitReportRecord;
+  changes: ReturnType<typeof compareFitReports>;
+}
 
 @Injectable()
 export class FitReportsService {
@@ -96,14 +101,10 @@ export class FitReportsService {
     return record;
   }
 
-  async compare(user: AuthUser, aId: string, bId: string): Promise<FitReportComparisonResponseDto> {
+  async compare(user: AuthUser, aId: string, bId: string): Promise<FitReportComparison> {
     if (aId === bId) throw FitReportErrors.compareSameReport();
     const [a, b] = await Promise.all([this.get(user, aId), this.get(user, bId)]);
-    return {
-      a: mapFitReportSummary(a),
-      b: mapFitReportSummary(b),
-      changes: compareFitReports(a.results, b.results),
-    };
+    return { a, b, changes: compareFitReports(a.results, b.results) };
   }
 
   /** Runs the engine on a spec as given, with the shop's thresholds under the request's own; nothing is stored. */

@@ -7,6 +7,7 @@ import { FIT_SETTINGS_READERS, FIT_SETTINGS_WRITERS } from '../common/roles/role
 import { AuthUser } from '../common/tenant/auth-user';
 import { FitSettingsResponseDto } from './dto/fit-report-response.dto';
 import { UpdateFitSettingsDto } from './dto/what-if.dto';
+import { mapFitSettings } from './fit-settings.mapper';
 import { FitSettingsService } from './fit-settings.service';
 
 @ApiTags('fit-reports')
@@ -19,8 +20,8 @@ export class FitSettingsController {
   @Roles(...FIT_SETTINGS_READERS)
   @ApiOperation({ summary: "The shop's fit-check thresholds: its overrides and the effective values" })
   @ApiOkResponse({ type: FitSettingsResponseDto })
-  get(@CurrentUser() user: AuthUser): Promise<FitSettingsResponseDto> {
-    return this.settings.get(user);
+  async get(@CurrentUser() user: AuthUser): Promise<FitSettingsResponseDto> {
+    return mapFitSettings(await this.settings.get(user));
   }
 
   @Put()
@@ -28,7 +29,7 @@ export class FitSettingsController {
   @ApiOperation({ summary: "Replace the shop's threshold overrides (later fit reports use them)" })
   @ApiOkResponse({ type: FitSettingsResponseDto })
   @ApiBadRequestResponse({ type: ErrorResponseDto })
-  replace(@CurrentUser() user: AuthUser, @Body() body: UpdateFitSettingsDto): Promise<FitSettingsResponseDto> {
-    return this.settings.replace(user, body.overrides);
+  async replace(@CurrentUser() user: AuthUser, @Body() body: UpdateFitSettingsDto): Promise<FitSettingsResponseDto> {
+    return mapFitSettings(await this.settings.replace(user, body.overrides));
   }
 }

@@ -1,9 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { resolveFitSettings, type FitSettings } from '@swapwright/shared';
+import type { FitSettings } from '@swapwright/shared';
 import { Repository } from 'typeorm';
 import { AuthUser } from '../common/tenant/auth-user';
-import { FitSettingsResponseDto } from './dto/fit-report-response.dto';
 import { FitSettingsOverridesDto } from './dto/fit-settings-overrides.dto';
 import { ShopFitSettings } from './shop-fit-settings.entity';
 import { jsonCopy } from '../common/json/json-copy';
@@ -39,13 +38,12 @@ export class FitSettingsService {
     return row?.overrides ?? {};
   }
 
-  async get(user: Pick<AuthUser, 'shopId'>): Promise<FitSettingsResponseDto> {
-    const row = await this.settings.findOne({ where: { shopId: user.shopId } });
-    const overrides = row?.overrides ?? {};
-    return { overrides, effective: resolveFitSettings(overrides), updatedAt: row?.updatedAt.toISOString() ?? null };
+  /** The shop's stored overrides, or null before the owner first sets any. */
+  get(user: Pick<AuthUser, 'shopId'>): Promise<ShopFitSettings | null> {
+    return this.settings.findOne({ where: { shopId: user.shopId } });
   }
 
-  async replace(user: AuthUser, overrides: FitSettingsOverridesDto): Promise<FitSettingsResponseDto> {
+  async replace(user: AuthUser, overrides: FitSettingsOverridesDto): Promise<ShopFitSettings | null> {
     const plain = jsonCopy(overrides) as Partial<FitSettings>;
     await this.settings.upsert({ shopId: user.shopId, overrides: plain, updatedById: user.userId }, ['shopId']);
     this.previewCache.delete(user.shopId);

@@ -1,5 +1,6 @@
 import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { mapSession } from '../auth/current-user.mapper';
 import { SessionResponseDto } from '../auth/dto/session-response.dto';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -37,7 +38,7 @@ export class InvitationsController {
   @Post('accept')
   @HttpCode(200)
   @ApiOkResponse({ type: SessionResponseDto })
-  accept(@Body() body: AcceptInvitationDto): Promise<SessionResponseDto> {
-    return this.invitations.accept(body);
+  async accept(@Body() body: AcceptInvitationDto): Promise<SessionResponseDto> {
+    return mapSession(await this.invitations.accept(body));
   }
 }

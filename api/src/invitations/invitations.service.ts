@@ -4,9 +4,8 @@ import { EnvironmentVariables } from '../config/env.validation';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan, Repository } from 'typeorm';
-import { SessionResponseDto } from '../auth/dto/session-response.dto';
 import { PasswordHasher } from '../auth/password-hasher';
-import { SessionsService } from '../auth/sessions.service';
+import { IssuedSession, SessionsService } from '../auth/sessions.service';
 import { hashToken, newOpaqueToken } from '../auth/token-hash';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
@@ -74,7 +73,7 @@ export class InvitationsService {
   }
 
   /** Creates the login and the membership (and links the customer record) in one transaction. */
-  async accept(input: AcceptInvitationDto): Promise<SessionResponseDto> {
+  async accept(input: AcceptInvitationDto): Promise<IssuedSession> {
     const passwordHash = await this.passwords.hash(input.password);
     return this.dataSource.transaction(async (manager) => {
       const now = new Date();
