@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
+import { AuditModule } from './audit/audit.module';
 import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
@@ -61,6 +62,7 @@ import { WorkOrdersModule } from './work-orders/work-orders.module';
       }),
     }),
     MailModule,
+    AuditModule,
     UsersModule,
     ShopsModule,
     MembershipsModule,

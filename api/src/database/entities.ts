@@ -1,3 +1,4 @@
+import { AuditEvent } from '../audit/audit-event.entity';
 import { MEASUREMENT_ENTITIES } from '../measurements/measurement-sheet.entity';
 import { RefreshToken } from '../auth/refresh-token.entity';
 import { CATALOG_ENTITIES } from '../catalog/catalog-item.entity';
@@ -26,4 +27,4 @@ import { WorkOrder, WorkOrderCheck } from '../work-orders/work-order.entity';
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
   LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES,
-  ThrottleCounter, WorkOrder, WorkOrderCheck];
+  ThrottleCounter, WorkOrder, WorkOrderCheck, AuditEvent];

@@ -1,3 +1,4 @@
+import { CreateAuditEvents1796257768745 } from './migrations/1796257768745-create-audit-events';
 import { CreateMeasurements1796240364406 } from './migrations/1796240364406-create-measurements';
 import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
@@ -43,4 +44,5 @@ export const MIGRATIONS = [
   ThrottleCounters1796256137273,
   ProjectStages1796257248657,
   CreateWorkOrders1796257248658,
+  CreateAuditEvents1796257768745,
 ];

@@ -13,6 +13,7 @@ import {
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
@@ -61,6 +62,7 @@ export class MeasurementsService {
     private readonly projects: ProjectsService,
     private readonly catalog: CatalogService,
     private readonly storage: PhotoStorage,
+    private readonly audit: AuditService,
   ) {}
 
   /**
@@ -196,6 +198,16 @@ export class MeasurementsService {
       const measured = await manager.find(MeasurementValue, { where: { sheetId: sheet.id } });
       const missing = missingPoints(points, new Set(measured.map((v) => v.pointId)));
       if (missing.length > 0) throw MeasurementErrors.incomplete(missing.map((p) => p.label));
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'sign-off',
+        action: 'sheet.signed-off',
+        subjectId: sheet.id,
+        summary: `Measurement sheet of ${project.title} signed off with ${measured.length} readings.`,
+        before: { signedOffAt: null },
+        after: { signedOffAt: new Date().toISOString(), signedOffById: user.userId, readings: measured.length },
+      });
       await manager.update(MeasurementSheet, { id: sheet.id }, { signedOffAt: new Date(), signedOffById: user.userId });
       await manager.insert(MeasurementSheetEvent, this.event(user, sheet, { kind: 'sign-off' }));
       await this.projects.advanceStatus(user.shopId, project.id, 'measured', manager);

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { Role } from '../common/roles/role';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
@@ -17,6 +18,7 @@ export class MembershipsService {
     @InjectRepository(Membership) private readonly memberships: Repository<Membership>,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly customers: CustomersService,
+    private readonly audit: AuditService,
   ) {
     this.scoped = new TenantRepository(memberships);
   }
@@ -29,6 +31,18 @@ export class MembershipsService {
     return this.dataSource.transaction(async (manager) => {
       const membership = await this.lockInShop(manager, user, id);
       if (membership.role === 'owner' && role !== 'owner') await this.assertAnotherOwner(manager, user, id);
+      if (membership.role !== role) {
+        await this.audit.record(manager, {
+          shopId: user.shopId,
+          actor: user,
+          kind: 'membership',
+          action: 'membership.role-changed',
+          subjectId: membership.id,
+          summary: `Role of ${membership.user?.email ?? 'a member'} changed from ${membership.role} to ${role}.`,
+          before: { role: membership.role, userId: membership.userId },
+          after: { role, userId: membership.userId },
+        });
+      }
       membership.role = role;
       await manager.save(membership);
       return membership;
@@ -39,6 +53,16 @@ export class MembershipsService {
     await this.dataSource.transaction(async (manager) => {
       const membership = await this.lockInShop(manager, user, id);
       if (membership.role === 'owner') await this.assertAnotherOwner(manager, user, id);
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'membership',
+        action: 'membership.removed',
+        subjectId: membership.id,
+        summary: `${membership.user?.email ?? 'A member'} (${membership.role}) was removed from the shop.`,
+        before: { role: membership.role, userId: membership.userId },
+        after: null,
+      });
       await this.customers.unlinkLogin(manager, user.shopId, membership.userId);
       // Refresh tokens of this membership go with it (ON DELETE CASCADE); access tokens stop at the next request.
       await manager.delete(Membership, { id: membership.id, shopId: user.shopId });

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { escapeFormula } from './csv-cells';
 import { CounterLine, CounterStatus, PartStock } from './part.entity';
@@ -25,6 +26,7 @@ export class CounterService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly plans: PartsPlansService,
+    private readonly audit: AuditService,
   ) {}
 
   async lines(user: Pick<AuthUser, 'shopId'>, planId: string): Promise<CounterLineView[]> {
@@ -61,6 +63,16 @@ export class CounterService {
       const best = usable.sort((a, b) => b.onHand - b.reserved - (a.onHand - a.reserved))[0];
       const free = best ? best.onHand - best.reserved : 0;
       if (!best || free < line.quantity) throw PartsErrors.outOfStock(line.sku, free, line.quantity);
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.reserved',
+        subjectId: line.id,
+        summary: `${line.quantity} × ${line.sku} reserved at ${best.location}.`,
+        before: { status: line.status, location: best.location, onHand: best.onHand, reserved: best.reserved },
+        after: { status: 'reserved', location: best.location, onHand: best.onHand, reserved: best.reserved + line.quantity },
+      });
       await manager.update(PartStock, { id: best.id }, { reserved: best.reserved + line.quantity });
       await manager.update(CounterLine, { id: line.id }, { status: 'reserved', stockId: best.id, updatedById: user.userId });
     });
@@ -72,6 +84,16 @@ export class CounterService {
       const line = await this.lockedLine(manager, user, id);
       if ((line.status !== 'reserved' && line.status !== 'received') || !line.stockId) throw PartsErrors.lineState(line.sku, line.status, 'released');
       const stock = await manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id', { id: line.stockId }).getOne();
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.released',
+        subjectId: line.id,
+        summary: `${line.quantity} × ${line.sku} released${stock ? ` at ${stock.location}` : ''}.`,
+        before: { status: line.status, ...(stock && { location: stock.location, onHand: stock.onHand, reserved: stock.reserved }) },
+        after: { status: 'open', ...(stock && { location: stock.location, onHand: stock.onHand, reserved: Math.max(0, stock.reserved - line.quantity) }) },
+      });
       if (stock) await manager.update(PartStock, { id: stock.id }, { reserved: Math.max(0, stock.reserved - line.quantity) });
       await manager.update(CounterLine, { id: line.id }, { status: 'open', stockId: null, updatedById: user.userId });
     });
@@ -99,6 +121,16 @@ export class CounterService {
         .setLock('pessimistic_write')
         .where('s.partId = :partId AND s.location = :location', { partId: line.partId, location })
         .getOne();
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.received',
+        subjectId: line.id,
+        summary: `${line.quantity} × ${line.sku} received at ${location} and set aside for the job.`,
+        before: { status: line.status, location, onHand: stock?.onHand ?? 0, reserved: stock?.reserved ?? 0 },
+        after: { status: 'received', location, onHand: (stock?.onHand ?? 0) + line.quantity, reserved: (stock?.reserved ?? 0) + line.quantity },
+      });
       let stockId = stock?.id;
       if (stock) {
         await manager.update(PartStock, { id: stock.id }, { onHand: stock.onHand + line.quantity, reserved: stock.reserved + line.quantity, ...(bin && { bin }) });

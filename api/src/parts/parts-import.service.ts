@@ -5,6 +5,7 @@ import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource } from 'typeorm';
 import { AppError } from '../common/errors/app-error';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { escapeFormula } from './csv-cells';
 import { MAX_PRICE_CENTS, SKU_PATTERN } from './dto/part.dto';
@@ -91,7 +92,10 @@ export function parseCents(text: string): number | null {
 /** Supplier catalogs and price files from CSV: preview with every row's errors, then one all-or-nothing upsert by SKU. */
 @Injectable()
 export class PartsImportService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
+  ) {}
 
   parse(csv: string, given?: ImportMapping): { preview: ImportPreview; rows: ParsedRow[] } {
     const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy', dynamicTyping: false });
@@ -172,7 +176,7 @@ export class PartsImportService {
   }
 
   /** All or nothing: any row error refuses the whole file; otherwise one transaction upserts every row by SKU. */
-  async import(user: Pick<AuthUser, 'shopId'>, csv: string, mapping?: ImportMapping): Promise<ImportPreview> {
+  async import(user: AuthUser, csv: string, mapping?: ImportMapping): Promise<ImportPreview> {
     const { preview, rows } = this.parse(csv, mapping);
     if (preview.unmapped.length > 0) {
       throw new AppError(400, 'csv_mapping', `Choose the file's columns for: ${preview.unmapped.join(', ')}.`, preview.unmapped.map((f) => `${f} has no column`));
@@ -199,6 +203,16 @@ export class PartsImportService {
       );
       const ids = rows.map((r) => existing.get(r.sku.toUpperCase()) ?? randomUUID());
       inserted = rows.filter((r) => !existing.has(r.sku.toUpperCase())).length;
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.imported',
+        subjectId: null,
+        summary: `Parts file imported: ${rows.length} rows, ${inserted} new parts, ${rows.length - inserted} updated.`,
+        before: { parts: existing.size },
+        after: { parts: existing.size + inserted, rows: rows.length, added: inserted, updated: rows.length - inserted },
+      });
       for (let start = 0; start < rows.length; start += 500) {
         const chunk = rows.slice(start, start + 500);
         const values: unknown[] = [];

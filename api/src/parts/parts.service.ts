@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In } from 'typeorm';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains } from '../common/tenant/tenant-repository';
 import { CatalogService } from '../catalog/catalog.service';
@@ -37,6 +38,7 @@ export class PartsService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly catalog: CatalogService,
+    private readonly audit: AuditService,
   ) {}
 
   async list(user: Shop, query: ListPartsQueryDto): Promise<Page<PartWithStock>> {
@@ -133,7 +135,7 @@ export class PartsService {
   }
 
   /** Sets the count on hand at one location (creating the location), never below what is reserved there. */
-  async setStock(user: Shop, id: string, input: SetStockDto): Promise<PartWithStock> {
+  async setStock(user: AuthUser, id: string, input: SetStockDto): Promise<PartWithStock> {
     const { part } = await this.get(user, id);
     await this.dataSource.transaction(async (manager) => {
       const existing = await manager
@@ -142,6 +144,16 @@ export class PartsService {
         .setLock('pessimistic_write')
         .where('s.partId = :partId AND s.location = :location', { partId: part.id, location: input.location })
         .getOne();
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.counted',
+        subjectId: part.id,
+        summary: `${part.sku} at ${input.location}: on hand ${existing?.onHand ?? 0} → ${input.onHand}.`,
+        before: existing ? { location: existing.location, onHand: existing.onHand, reserved: existing.reserved } : null,
+        after: { location: input.location, onHand: input.onHand, reserved: existing?.reserved ?? 0 },
+      });
       if (existing) {
         if (input.onHand < existing.reserved) {
           throw PartsErrors.outOfStock(part.sku, existing.onHand - existing.reserved, existing.reserved - input.onHand);

@@ -1,4 +1,5 @@
 import { Injectable } from '@nestjs/common';
+import { AuditService } from '../audit/audit.service';
 import { QuoteActor, QuotesService } from '../quotes/quotes.service';
 import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { DepositPaymentResponseDto } from './dto/deposit.dto';
@@ -11,6 +12,7 @@ export class DepositsService {
     private readonly quotes: QuotesService,
     private readonly payments: PaymentsService,
     private readonly workOrders: WorkOrdersService,
+    private readonly audit: AuditService,
   ) {}
 
   async pay(actor: QuoteActor, idOrToken: string, paymentMethod: string): Promise<DepositPaymentResponseDto> {
@@ -22,6 +24,16 @@ export class DepositsService {
   async receive(rawBody: Buffer | undefined, signature: string | undefined): Promise<boolean> {
     const event = this.payments.verify(rawBody, signature);
     return this.payments.apply(event, async (manager, payment, paidAt) => {
+      await this.audit.record(manager, {
+        shopId: payment.shopId,
+        actor: { userId: null, name: 'Payment provider' },
+        kind: 'money',
+        action: 'payment.settled',
+        subjectId: payment.quoteId,
+        summary: `Deposit of ${payment.amountCents} cents (${payment.currency}) settled by the payment provider (event ${event.id}).`,
+        before: { state: payment.state },
+        after: { state: 'paid', amountCents: payment.amountCents, currency: payment.currency, eventId: event.id },
+      });
       const marked = await this.quotes.markDepositPaid(manager, payment.shopId, payment.quoteId, paidAt);
       if (!marked) return;
       const view = await this.quotes.viewInShop(payment.shopId, payment.quoteId);

@@ -6,6 +6,7 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
 import { CatalogKind } from '../catalog/catalog-kinds';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { EnvironmentVariables } from '../config/env.validation';
@@ -95,6 +96,7 @@ export class QuotesService {
     private readonly users: UsersService,
     private readonly settings: QuoteSettingsService,
     private readonly links: QuoteLinksService,
+    private readonly audit: AuditService,
     private readonly pdf: QuotePdfService,
     private readonly mail: MailService,
     private readonly config: ConfigService<EnvironmentVariables, true>,
@@ -292,6 +294,16 @@ export class QuotesService {
       await this.dataSource.transaction(async (manager) => {
         const frozen = await manager.update(QuoteRevision, { id: latest.id, shopId: user.shopId, sentAt: IsNull() }, { sentAt });
         if (!frozen.affected) throw QuoteErrors.nothingToSend();
+        await this.audit.record(manager, {
+          shopId: user.shopId,
+          actor: user,
+          kind: 'money',
+          action: 'quote.sent',
+          subjectId: view.quote.id,
+          summary: `Quote ${quoteLabel(view.quote)} revision ${latest.number} sent to ${view.project.customer?.email ?? 'the customer'}: total ${latest.totals.totalCents} cents.`,
+          before: { status: view.quote.status, sentRevision: view.quote.sentRevision ?? null },
+          after: { status: 'awaiting-answer', sentRevision: latest.number, totalCents: latest.totals.totalCents, depositCents: latest.totals.depositCents },
+        });
         await manager.update(
           Quote,
           { id: view.quote.id, shopId: user.shopId },
@@ -326,6 +338,16 @@ export class QuotesService {
         },
       );
       if (!changed.affected) throw QuoteErrors.notAwaitingAnswer('already answered');
+      await this.audit.record(manager, {
+        shopId,
+        actor: actor.kind === 'link' ? { userId: null, name: `${view.project.customer?.name ?? 'The customer'} (e-mailed link)` } : actor.user,
+        kind: 'money',
+        action: accepted ? 'quote.accepted' : 'quote.declined',
+        subjectId: view.quote.id,
+        summary: `Quote ${quoteLabel(view.quote)} revision ${view.revision.number} ${accepted ? 'accepted' : `declined: ${reason}`}.`,
+        before: { status: 'awaiting-answer' },
+        after: { status: accepted ? 'approved' : 'turned-down', revision: view.revision.number, totalCents: view.revision.totals.totalCents },
+      });
       if (accepted) await this.projects.advanceStatus(shopId, view.project.id, 'approved', manager);
       await this.notify(manager, view, accepted ? `${view.project.customer?.name ?? 'The customer'} approved quote ${quoteLabel(view.quote)} (revision ${view.revision.number}).` : `${view.project.customer?.name ?? 'The customer'} turned down quote ${quoteLabel(view.quote)}: ${reason}`);
     });

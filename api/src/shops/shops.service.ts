@@ -2,14 +2,21 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { EntityManager, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { UpdateShopDto } from './dto/update-shop.dto';
 import { Shop } from './shop.entity';
 import { ShopErrors } from './shops.errors';
 
+/** The shop fields that price work: their changes are audited. */
+const MONEY_FIELDS = ['laborRatePerHour', 'taxRatePercent', 'shopSuppliesPercent'] as const;
+
 @Injectable()
 export class ShopsService {
-  constructor(@InjectRepository(Shop) private readonly shops: Repository<Shop>) {}
+  constructor(
+    @InjectRepository(Shop) private readonly shops: Repository<Shop>,
+    private readonly audit: AuditService,
+  ) {}
 
   async getCurrent(user: Pick<AuthUser, 'shopId'>): Promise<Shop> {
     const shop = await this.shops.findOne({ where: { id: user.shopId } });
@@ -24,11 +31,36 @@ export class ShopsService {
     return shop;
   }
 
-  async updateCurrent(user: Pick<AuthUser, 'shopId'>, changes: UpdateShopDto): Promise<Shop> {
-    const shop = await this.getCurrent(user);
-    Object.assign(shop, changes, changes.name !== undefined ? { name: changes.name.trim() } : {});
-    if (changes.currency) shop.currency = changes.currency.toUpperCase();
-    return this.shops.save(shop);
+  /** Rate changes (labor, tax, shop supplies) go to the audit log in the same transaction as the change. */
+  async updateCurrent(user: AuthUser, changes: UpdateShopDto): Promise<Shop> {
+    return this.shops.manager.transaction(async (manager) => {
+      const shop = await manager.findOne(Shop, { where: { id: user.shopId }, lock: { mode: 'pessimistic_write' } });
+      if (!shop) throw ShopErrors.notFound();
+      const before: Record<string, number> = {};
+      const after: Record<string, number> = {};
+      for (const field of MONEY_FIELDS) {
+        const next = changes[field];
+        if (next !== undefined && Number(next) !== Number(shop[field])) {
+          before[field] = Number(shop[field]);
+          after[field] = Number(next);
+        }
+      }
+      if (Object.keys(after).length > 0) {
+        await this.audit.record(manager, {
+          shopId: user.shopId,
+          actor: user,
+          kind: 'money',
+          action: 'shop.rates-changed',
+          subjectId: shop.id,
+          summary: `Shop rates changed: ${Object.keys(after).map((field) => `${field} ${before[field]} → ${after[field]}`).join(', ')}.`,
+          before,
+          after,
+        });
+      }
+      Object.assign(shop, changes, changes.name !== undefined ? { name: changes.name.trim() } : {});
+      if (changes.currency) shop.currency = changes.currency.toUpperCase();
+      return manager.save(shop);
+    });
   }
 
   /** Inside the sign-up transaction. */

@@ -77,6 +77,7 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/invitations': OWNER,
   'POST /api/invitations': OWNER,
   'GET /api/dev/mail': OWNER,
+  'GET /api/audit-events': OWNER,
 
   'GET /api/customers': STAFF,
   'POST /api/customers': SALES,

@@ -120,3 +120,7 @@ export type PlacementAxis = (typeof PLACEMENT_AXES)[number];
 export function isOneOf<T extends string>(list: readonly T[], value: unknown): value is T {
   return typeof value === 'string' && (list as readonly string[]).includes(value);
 }
+
+/** What an audit event is about: money (quotes, payments, labor rates), stock, sheet sign-off, membership. */
+export const AUDIT_KINDS = ['money', 'stock', 'sign-off', 'membership'] as const;
+export type AuditKind = (typeof AUDIT_KINDS)[number];

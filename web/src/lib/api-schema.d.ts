@@ -21,6 +21,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/audit-events": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AuditController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/shops/current": {
         parameters: {
             query?: never;
@@ -1641,6 +1657,35 @@ export interface components {
             /** @example 6f1c0d3e-2a8b-4c5d-9e0f-1a2b3c4d5e6f */
             correlationId: string;
         };
+        PageMetaResponseDto: {
+            /** @description Items matching the filters, across all pages */
+            total: number;
+            page: number;
+            pageSize: number;
+        };
+        AuditEventResponseDto: {
+            id: string;
+            /** @enum {string} */
+            kind: "money" | "stock" | "sign-off" | "membership";
+            /** @description What happened, e.g. quote.sent, stock.reserved, membership.role-changed */
+            action: string;
+            /** @description The member who made the change; null for the payment provider or a customer link */
+            actorUserId: string | null;
+            actorName: string;
+            /** @description The record changed */
+            subjectId: string | null;
+            summary: string;
+            /** @description The changed fields before */
+            before: {
+                [key: string]: unknown;
+            } | null;
+            /** @description The changed fields after */
+            after: {
+                [key: string]: unknown;
+            } | null;
+            /** Format: date-time */
+            createdAt: string;
+        };
         ShopResponseDto: {
             /** Format: uuid */
             id: string;
@@ -1703,12 +1748,6 @@ export interface components {
         UpdateMembershipDto: {
             /** @enum {string} */
             role: "owner" | "estimator" | "fabricator" | "counter" | "customer";
-        };
-        PageMetaResponseDto: {
-            /** @description Items matching the filters, across all pages */
-            total: number;
-            page: number;
-            pageSize: number;
         };
         CustomerResponseDto: {
             /** Format: uuid */
@@ -4105,6 +4144,36 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    AuditController_list: {
+        parameters: {
+            query?: {
+                page?: number;
+                pageSize?: number;
+                order?: "asc" | "desc";
+                /** @description Matches inside the main text fields. */
+                search?: string;
+                /** @description Only events of this kind */
+                kind?: "money" | "stock" | "sign-off" | "membership";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Changes to money, stock, sign-offs and memberships, newest first */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PageMetaResponseDto"] & {
+                        items: components["schemas"]["AuditEventResponseDto"][];
+                    };
                 };
             };
         };

@@ -37,6 +37,7 @@ import { Role } from './role';
  * | POST sheet photos, DELETE own photo  | yes   | -         | yes               | -       | own project (pending) |
  * | GET template, measurement settings   | yes   | yes       | yes               | yes     | -          |
  * | PUT measurement-settings             | yes   | -         | -                 | -       | -          |
+ * | GET /audit-events                    | yes   | -         | -                 | -       | -          |
  */
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];
@@ -76,3 +77,5 @@ export const MEASUREMENT_WRITERS: Role[] = ['owner', 'fabricator'];
 export const MEASUREMENT_PHOTO_READERS: Role[] = ALL_ROLES;
 export const MEASUREMENT_PHOTO_ADDERS: Role[] = ['owner', 'fabricator', 'customer'];
 export const MEASUREMENT_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
+/** GET /audit-events: the shop's audit log of money, stock, sign-off and membership changes. */
+export const AUDIT_READERS: Role[] = SHOP_ADMINS;

@@ -1,6 +1,7 @@
 import { Alert } from 'antd';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
+import { AuditLogTable } from '@/features/audit/components/audit-log-table';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useShop } from '@/features/shop/api/get-shop';
 import { ShopSettingsForm } from '@/features/shop/components/shop-settings-form';
@@ -20,6 +21,11 @@ export function ShopSettingsPage() {
         <ShopSettingsForm shop={shop.data} canEdit={user.role === 'owner'} />
       ) : (
         <Alert type="info" showIcon title="The shop's rates are shown to its staff only." />
+      )}
+      {user.role === 'owner' && (
+        <div style={{ marginTop: 24 }}>
+          <AuditLogTable />
+        </div>
       )}
     </>
   );
