@@ -1,6 +1,6 @@
 import { runFitCheck } from '@swapwright/shared';
 import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '@swapwright/shared/fixtures';
-import { DEMO_CATALOG_IDS, DEMO_FIT_SELECTIONS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_CATALOG_IDS, DEMO_FIT_SELECTIONS, DEMO_PROJECT_IDS, DEMO_PROJECTS, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
 import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
@@ -48,8 +48,7 @@ describe('fit reports', () => {
   // projects at their demo stage. A case that needs a report runs one itself.
   beforeEach(async () => {
     await t.dataSource.query('DELETE FROM fit_reports WHERE projectId IN (?, ?)', [RIDGEBACK, STAG]);
-    await t.dataSource.query("UPDATE projects SET status = 'measuring' WHERE id = ?", [RIDGEBACK]);
-    await t.dataSource.query("UPDATE projects SET status = 'intake' WHERE id = ?", [STAG]);
+    for (const project of DEMO_PROJECTS) await t.dataSource.query('UPDATE projects SET status = ? WHERE id = ?', [project.status, project.id]);
     await t.http.put(`/api/projects/${RIDGEBACK}/fit-selections`).set(...bearer(demo.owner)).send(selectionBody()).expect(200);
     await t.http.put('/api/fit-settings').set(...bearer(demo.owner)).send({ overrides: {} }).expect(200);
   });

@@ -39,20 +39,20 @@ describe('FitReportsService', () => {
 
   afterAll(() => t.close());
 
-  it('stores the report with its counts and moves a project still being set up on to checking', async () => {
-    expect(await statusOf(RIDGEBACK)).toBe('measuring');
+  it('stores the report with its counts and moves a project still being set up on to fit-checked', async () => {
+    expect(await statusOf(RIDGEBACK)).toBe('intake');
     const record = await reports.run(as.fabricator, RIDGEBACK);
     expect(record.totalCount).toBe(record.results.summary.total);
     expect(record.failsCount).toBe(record.results.summary.fails);
     expect(record.worstStatus).toBe('fails');
     expect(record.createdBy?.name).toBe(as.fabricator.name);
-    expect(await statusOf(RIDGEBACK)).toBe('checking');
+    expect(await statusOf(RIDGEBACK)).toBe('fit-checked');
   });
 
-  it('never moves a project back: a project already quoting stays quoting', async () => {
-    await t.dataSource.query("UPDATE projects SET status = 'quoting' WHERE id = ?", [RIDGEBACK]);
+  it('never moves a project back: a project whose quote went out stays there', async () => {
+    await t.dataSource.query("UPDATE projects SET status = 'quote-sent' WHERE id = ?", [RIDGEBACK]);
     await reports.run(as.estimator, RIDGEBACK);
-    expect(await statusOf(RIDGEBACK)).toBe('quoting');
+    expect(await statusOf(RIDGEBACK)).toBe('quote-sent');
   });
 
   it("hides a report of another customer's project from a customer as not found", async () => {
