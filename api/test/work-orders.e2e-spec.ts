@@ -5,6 +5,7 @@ import { seedParts } from '../src/database/seed/seed-parts';
 import { startAppWithPayments, until } from './helpers/app-with-payments';
 import { bearer, countRows, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
+import { pdfText } from './helpers/pdf-text';
 import { RunningPaymentFake } from './helpers/payment-fake-process';
 
 const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
@@ -65,6 +66,10 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(planParts.every((line) => line.source === 'plan' && line.catalogKind === 'parts' && line.pricing === 'cost-plus' && line.markupPercent !== null)).toBe(true);
     const laborOperations = draftLines.filter((line) => line.kind === 'labor').map((line) => line.laborOperationId);
     expect(laborOperations).toEqual(expect.arrayContaining([operation('engine-remove-install').id, operation('oil-pan-pickup').id]));
+    const pdf = await t.http.get(`/api/quotes/${drafted.body.id}/pdf`).set(...bearer(demo.estimator)).responseType('blob').expect(200);
+    const text = await pdfText(pdf.body as Buffer);
+    expect(text).toMatch(new RegExp(`Fit report ${drafted.body.revision.fitReportId.slice(0, 8)}`));
+    expect(text).toContain(`Parts from parts plan version ${plan.version}.`);
 
     const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES }).expect(201);
     quoteId = created.body.id;

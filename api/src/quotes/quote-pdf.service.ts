@@ -94,7 +94,7 @@ export class QuotePdfService {
     if (!report) {
       doc.fillColor(MUTED).text('No fit report was stored when this quote was written; the lines are the estimate of the shop.', 50);
     } else {
-      this.fitSummary(doc, report.results, report, revision.lines, width);
+      this.fitSummary(doc, report.results, report, revision, width);
     }
 
     // Lines
@@ -129,10 +129,12 @@ export class QuotePdfService {
     return done;
   }
 
-  private fitSummary(doc: PDFKit.PDFDocument, results: FitReport, record: FitReportRecord, lines: QuoteView['revision']['lines'], width: number): void {
+  private fitSummary(doc: PDFKit.PDFDocument, results: FitReport, record: FitReportRecord, revision: QuoteView['revision'], width: number): void {
     const { summary } = results;
+    const lines = revision.lines;
+    const plan = revision.partsPlanVersion !== null ? ` Parts from parts plan version ${revision.partsPlanVersion}.` : '';
     doc.fillColor(MUTED).fontSize(9).text(
-      `Fit report ${record.id.slice(0, 8)} of ${record.createdAt.toISOString().slice(0, 10)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.`,
+      `Fit report ${record.id.slice(0, 8)} of ${record.createdAt.toISOString().slice(0, 10)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.${plan}`,
       50,
       doc.y,
       { width },

@@ -130,7 +130,9 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               )}
               {step.torque.length > 0 && (
                 <>
-                  <Typography.Text strong>Tightening</Typography.Text>
+                  <Typography.Text strong style={{ display: 'block' }}>
+                    Tightening
+                  </Typography.Text>
                   <ul className="work-order-torque" data-testid="torque-specs">
                     {step.torque.map((spec) => (
                       <li key={`${spec.partSku ?? 'op'}-${spec.fastener}`}>
@@ -156,7 +158,9 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               )}
               {step.checks.length > 0 && (
                 <div style={{ marginTop: 8 }}>
-                  <Typography.Text strong>Checks to record</Typography.Text>
+                  <Typography.Text strong style={{ display: 'block' }}>
+                    Checks to record
+                  </Typography.Text>
                   {step.checks.map((check) => (
                     <CheckRecorder key={check.key} workOrderId={order.id} check={check} canRecord={canWork && inBay} />
                   ))}
