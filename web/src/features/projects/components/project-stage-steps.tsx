@@ -12,6 +12,7 @@ export function ProjectStageSteps({ status }: ProjectStageStepsProps) {
       current={current}
       status={status === 'done' ? 'finish' : 'process'}
       aria-label="Project stage"
+      titlePlacement="vertical"
       items={projectStatuses.map((s, i) => ({
         title: statusLabels[s],
         content: i === current ? statusHints[s] : undefined,
