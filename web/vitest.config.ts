@@ -9,7 +9,7 @@ export default mergeConfig(
       setupFiles: ['./src/test/setup.ts'],
       include: ['src/**/*.test.{ts,tsx}'],
       css: false,
-      testTimeout: 15000,
+      testTimeout: 60000,
     },
   }),
 );

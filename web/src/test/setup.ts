@@ -1,6 +1,9 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
+
+// antd renders slowly in jsdom on a busy 2-core machine; findBy/waitFor get room beyond the 1 s default.
+configure({ asyncUtilTimeout: 5000 });
 
 // jsdom lacks these browser APIs that antd relies on.
 if (!window.matchMedia) {
