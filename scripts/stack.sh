@@ -329,6 +329,23 @@ cmd_services() {
   echo "Services running. Use: source .local/test/env.sh   (stop: bash scripts/stack.sh stop-services)"
 }
 
+# Runs chosen e2e journeys (or all) against a fresh e2e database, with the services `services` starts.
+cmd_e2e() {
+  cmd_services >/dev/null
+  build_all
+  # shellcheck disable=SC1091
+  source "$LOCAL/test/env.sh"
+  mariadb --no-defaults --socket="$LOCAL/test/mariadb/mysqld.sock" -uroot \
+    -e "DROP DATABASE IF EXISTS swapwright_e2e; CREATE DATABASE swapwright_e2e CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+  export DB_NAME=swapwright_e2e
+  migrate_and_seed >/dev/null
+  node api/dist/main.js >"$LOCAL/test/api-e2e.log" 2>&1 &
+  API_PID=$!
+  trap 'kill $API_PID 2>/dev/null || true' EXIT
+  wait_for_api
+  (cd e2e && E2E_BASE_URL="http://127.0.0.1:$PORT" CHROMIUM_PATH=/usr/bin/chromium npx jest --ci --runInBand "$@")
+}
+
 cmd_stop_services() {
   stop_pid_file "$LOCAL/test/mail/pid"
   stop_pid_file "$LOCAL/test/payments/pid"
@@ -349,5 +366,6 @@ case "${1:-}" in
   services) cmd_services ;;
   bench) cmd_bench ;;
   stop-services) cmd_stop_services ;;
-  *) echo "usage: stack.sh start|test|reset|services|stop-services|bench" >&2; exit 2 ;;
+  e2e) shift; cmd_e2e "$@" ;;
+  *) echo "usage: stack.sh start|test|reset|services|stop-services|bench|e2e [journey files]" >&2; exit 2 ;;
 esac

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { restoreDemoFitSelections } from './support/demo-state';
 import { signInAs } from './support/session';
 
 const SUMP_CHECK = 'envelope.sump-crossmember';
@@ -15,6 +16,7 @@ describe('the estimator fits the demo engine and clears the crossmember with a r
   let browser: BrowserSession;
 
   beforeAll(async () => {
+    await restoreDemoFitSelections();
     browser = await openBrowser();
     await signInAs(browser.page, 'estimator');
   });

@@ -1,10 +1,16 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { restoreDemoFitSelections } from './support/demo-state';
 import { signInAs } from './support/session';
 
 const DEMO_PROJECT = 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap';
 
 describe('parts plan: the estimator plans, the counter reserves and prints', () => {
   let browser: BrowserSession;
+
+  beforeAll(async () => {
+    // Another journey may have fitted the rear-sump pan already; this one starts from the demo's stock pan.
+    await restoreDemoFitSelections();
+  });
 
   afterEach(async () => {
     await browser?.close();

@@ -48,6 +48,7 @@ export async function saveScreenshot(page: Page, name: string): Promise<string> 
   const dir = join(ARTIFACTS_DIR, 'screenshots');
   mkdirSync(dir, { recursive: true });
   const path = join(dir, `${name}.png`);
-  await page.screenshot({ path, fullPage: true });
+  // A full-page capture of a long report can take a while on a busy 2-core machine.
+  await page.screenshot({ path, fullPage: true, timeout: 60_000 });
   return path;
 }
