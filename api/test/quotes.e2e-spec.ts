@@ -182,6 +182,71 @@ describe('labor operations and quotes', () => {
       expect(compared.body.totals).toContainEqual(expect.objectContaining({ field: 'partsDiscountCents', beforeCents: 0, afterCents: 2008 }));
     });
 
+    it('edits lines of the working revision by key: quantity, hours, part number, a line removed and one added; compare names before and after', async () => {
+      type Line = { key: string; kind: 'part' | 'labor'; description: string; sku: string | null; quantity: number; pricing: string; unitPriceCents: number; unitCostCents: number | null; markupPercent: number | null; hours: number | null; lineTotalCents: number };
+      const asInput = (line: Line) =>
+        line.kind === 'labor'
+          ? { key: line.key, kind: line.kind, description: line.description, hours: line.hours }
+          : line.pricing === 'cost-plus'
+            ? { key: line.key, kind: line.kind, description: line.description, sku: line.sku, quantity: line.quantity, pricing: line.pricing, unitCostCents: line.unitCostCents, markupPercent: line.markupPercent }
+            : { key: line.key, kind: line.kind, description: line.description, sku: line.sku, quantity: line.quantity, pricing: line.pricing, unitPriceCents: line.unitPriceCents };
+      const working = await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.estimator));
+      const [pan, pickup, engine, install] = working.body.revision.lines as Line[];
+      expect(pan.sku).toBeNull();
+      const edited = await t.http
+        .patch(`/api/quotes/${quoteId}`)
+        .set(...bearer(demo.estimator))
+        .send({
+          lines: [
+            { ...asInput(pan), sku: 'TR-4410' },
+            { ...asInput(pickup), quantity: 3 },
+            { ...asInput(engine), hours: 9 },
+            { kind: 'part', description: 'Pan gasket set', sku: 'GS-100', quantity: 1, pricing: 'list', unitPriceCents: 2450 },
+          ],
+        });
+      expect(edited.status).toBe(200);
+      // Still the working revision 2 (it was never sent): edits change it in place.
+      expect(edited.body.latestRevision).toBe(2);
+      const lines = edited.body.revision.lines as Line[];
+      expect(lines.map((line) => line.key).slice(0, 3)).toEqual([pan.key, pickup.key, engine.key]);
+      expect(lines[0].sku).toBe('TR-4410');
+      // Worked by hand: pickup 41.37 x 1.35 = 55.8495 -> 55.85, x 3 = 167.55; engine 9.0 h x 135.00 = 1215.00.
+      expect(lines[1].lineTotalCents).toBe(16755);
+      expect(lines[2].lineTotalCents).toBe(121500);
+      expect(lines[3]).toMatchObject({ sku: 'GS-100', source: 'manual', lineTotalCents: 2450 });
+      // parts 289.95 + 167.55 + 24.50 = 482.00; labor 1215.00 (the 1.3 h line removed)
+      expect(edited.body.revision.totals).toMatchObject({ partsSubtotalCents: 48200, laborSubtotalCents: 121500 });
+
+      const compared = await t.http.get(`/api/quotes/${quoteId}/compare?from=1&to=2`).set(...bearer(demo.estimator));
+      expect(compared.status).toBe(200);
+      const byKey = new Map(compared.body.lines.map((line: { key: string }) => [line.key, line]));
+      expect(byKey.get(pickup.key)).toMatchObject({
+        change: 'changed',
+        fields: ['quantity', 'lineTotalCents'],
+        before: { quantity: 2, hours: null, unitPriceCents: 5585, lineTotalCents: 11170 },
+        after: { quantity: 3, hours: null, unitPriceCents: 5585, lineTotalCents: 16755 },
+      });
+      expect(byKey.get(engine.key)).toMatchObject({ change: 'changed', fields: ['hours', 'lineTotalCents'], before: { hours: 8.5, lineTotalCents: 114750 }, after: { hours: 9, lineTotalCents: 121500 } });
+      expect(byKey.get(install.key)).toMatchObject({ change: 'removed', before: { hours: 1.3, lineTotalCents: 17550 }, after: null });
+      expect(compared.body.lines).toContainEqual(expect.objectContaining({ change: 'added', description: 'Pan gasket set', before: null, after: expect.objectContaining({ lineTotalCents: 2450 }) }));
+      // The part number alone is not a priced change.
+      expect(byKey.has(pan.key)).toBe(false);
+      expect(compared.body.totals).toContainEqual(expect.objectContaining({ field: 'partsSubtotalCents', beforeCents: 40165, afterCents: 48200 }));
+
+      const unpriced = await t.http
+        .patch(`/api/quotes/${quoteId}`)
+        .set(...bearer(demo.estimator))
+        .send({ lines: [{ kind: 'part', description: 'Mystery part', quantity: 1 }] });
+      expect(unpriced.status).toBe(400);
+      expect(unpriced.body.message).toMatch(/line 1 \(part\) needs unitPriceCents/);
+      const tooLongSku = await t.http
+        .patch(`/api/quotes/${quoteId}`)
+        .set(...bearer(demo.estimator))
+        .send({ lines: [{ kind: 'part', description: 'x', sku: 'S'.repeat(61), unitPriceCents: 100 }] });
+      expect(tooLongSku.status).toBe(400);
+      expect((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.estimator))).body.revision.totals.partsSubtotalCents).toBe(48200);
+    });
+
     it('declining needs a reason; accepting through the link approves it and tells the estimator by mail and in the app', async () => {
       const noReason = await t.http.post(`/api/quote-links/${token}/answer`).send({ answer: 'decline' });
       expect(noReason.status).toBe(400);

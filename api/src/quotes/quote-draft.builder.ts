@@ -100,6 +100,7 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
 /** A part the plan picked, with the catalog's figures the quote prices it from. */
 export interface PlanPartForQuote {
   partId: string;
+  sku?: string | null;
   description: string;
   category: string;
   quantity: number;
@@ -142,6 +143,7 @@ export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
       kind: 'part',
       source: 'plan',
       description: part.description.slice(0, 200),
+      sku: part.sku ?? null,
       catalogKind: 'parts',
       catalogItemId: part.partId,
       quantity: part.quantity,

@@ -11,6 +11,8 @@ export interface QuoteLine {
   kind: 'part' | 'labor';
   source: LineSource;
   description: string;
+  /** Part lines: the part number the shop orders by (absent on lines stored before it was kept). */
+  sku?: string | null;
   /** Part lines: the catalog row it prices (kind and id), when it came from one. */
   catalogKind: string | null;
   catalogItemId: string | null;

@@ -1,7 +1,8 @@
-import { QUOTE_ROUNDING_RULE, type RevisionDiff } from '@swapwright/shared';
+import { QUOTE_ROUNDING_RULE, type ComparableLine, type RevisionDiff } from '@swapwright/shared';
 import {
   QuoteNotificationResponseDto,
   QuoteResponseDto,
+  QuoteRevisionDiffLineSideDto,
   QuoteRevisionDiffResponseDto,
   QuoteRevisionResponseDto,
   QuoteSettingsResponseDto,
@@ -34,7 +35,7 @@ export function mapQuoteRevision(revision: QuoteRevision): QuoteRevisionResponse
     depositAmountCents: revision.depositAmountCents,
     terms: revision.terms,
     notes: revision.notes,
-    lines: revision.lines.map((line) => ({ ...line })),
+    lines: revision.lines.map((line) => ({ ...line, sku: line.sku ?? null })),
     totals: { ...revision.totals },
     createdAt: revision.createdAt.toISOString(),
   };
@@ -61,6 +62,10 @@ export function mapQuote(view: QuoteView): QuoteResponseDto {
   };
 }
 
+function diffSide(line: ComparableLine): QuoteRevisionDiffLineSideDto {
+  return { quantity: line.quantity, hours: line.hours, unitPriceCents: line.unitPriceCents, lineTotalCents: line.lineTotalCents };
+}
+
 export function mapRevisionDiff(diff: RevisionDiff): QuoteRevisionDiffResponseDto {
   return {
     fromNumber: diff.fromNumber,
@@ -73,6 +78,8 @@ export function mapRevisionDiff(diff: RevisionDiff): QuoteRevisionDiffResponseDt
       ...(line.change === 'changed' && { fields: line.fields }),
       beforeCents: line.change === 'added' ? null : line.before.lineTotalCents,
       afterCents: line.change === 'removed' ? null : line.after.lineTotalCents,
+      before: line.change === 'added' ? null : diffSide(line.before),
+      after: line.change === 'removed' ? null : diffSide(line.after),
     })),
     totals: diff.totals,
   };

@@ -164,7 +164,7 @@ export class QuotesService {
     const find = (number: number) => {
       const revision = view.revisions.find((candidate) => candidate.number === number);
       if (!revision) throw QuoteErrors.revisionNotFound(number);
-      return { number, totals: revision.totals, lines: revision.lines.map((line) => ({ ...line, quantity: line.kind === 'labor' ? (line.hours ?? 0) : line.quantity })) };
+      return { number, totals: revision.totals, lines: revision.lines };
     };
     return diffRevisions(find(from), find(to));
   }
@@ -444,6 +444,7 @@ export class QuotesService {
       plan: result,
       parts: result.picks.map((pick) => ({
         partId: pick.partId,
+        sku: pick.sku,
         description: pick.description,
         category: pick.category,
         quantity: pick.quantity,
@@ -483,6 +484,7 @@ export class QuotesService {
       kind: line.kind,
       source,
       description: line.description,
+      sku: line.kind === 'part' ? (line.sku || null) : null,
       catalogKind: line.catalogKind ?? null,
       catalogItemId: line.catalogItemId ?? null,
       laborOperationId: line.laborOperationId ?? null,

@@ -5,7 +5,11 @@ export interface ComparableLine {
   key: string;
   kind: 'part' | 'labor';
   description: string;
+  /** Part lines: whole units (labor lines: 1). */
   quantity: number;
+  /** Labor lines: hours to a tenth (part lines: null). */
+  hours: number | null;
+  unitPriceCents: number;
   lineTotalCents: number;
 }
 
@@ -34,7 +38,7 @@ export interface RevisionDiff {
   totals: TotalChange[];
 }
 
-const COMPARED_FIELDS = ['description', 'quantity', 'lineTotalCents'] as const;
+const COMPARED_FIELDS = ['description', 'quantity', 'hours', 'unitPriceCents', 'lineTotalCents'] as const;
 
 /** What changed from one revision to another: lines added, removed or changed (by key), and every total that moved. */
 export function diffRevisions(from: ComparableRevision, to: ComparableRevision): RevisionDiff {

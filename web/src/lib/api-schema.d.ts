@@ -3758,6 +3758,8 @@ export interface components {
             /** @enum {string} */
             source: "plan" | "fit-remedy" | "manual";
             description: string;
+            /** @description Part lines: the part number the shop orders by */
+            sku: string | null;
             catalogKind: string | null;
             catalogItemId: string | null;
             laborOperationId: string | null;
@@ -3843,6 +3845,8 @@ export interface components {
             /** @enum {string} */
             kind: "part" | "labor";
             description: string;
+            /** @description Part lines: the part number the shop orders by */
+            sku?: string | null;
             catalogKind?: string | null;
             catalogItemId?: string | null;
             laborOperationId?: string | null;
@@ -3918,6 +3922,14 @@ export interface components {
             /** @description Why the quote is declined (asked for when declining) */
             reason?: string;
         };
+        QuoteRevisionDiffLineSideDto: {
+            /** @description Part lines: whole units; labor lines: 1 */
+            quantity: number;
+            /** @description Labor lines: hours to a tenth */
+            hours: number | null;
+            unitPriceCents: number;
+            lineTotalCents: number;
+        };
         QuoteRevisionDiffLineDto: {
             /** @enum {string} */
             change: "added" | "removed" | "changed";
@@ -3928,6 +3940,10 @@ export interface components {
             fields?: string[];
             beforeCents?: number | null;
             afterCents?: number | null;
+            /** @description The line in the older revision (null when added) */
+            before: components["schemas"]["QuoteRevisionDiffLineSideDto"] | null;
+            /** @description The line in the newer revision (null when removed) */
+            after: components["schemas"]["QuoteRevisionDiffLineSideDto"] | null;
         };
         QuoteRevisionDiffTotalDto: {
             field: string;

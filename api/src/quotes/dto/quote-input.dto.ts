@@ -39,6 +39,13 @@ export class QuoteLineInputDto {
   @MaxLength(200)
   description: string;
 
+  @ApiPropertyOptional({ type: String, nullable: true, maxLength: 60, description: 'Part lines: the part number the shop orders by' })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @MaxLength(60)
+  sku?: string | null;
+
   @ApiPropertyOptional({ type: String, nullable: true })
   @IsOptional()
   @IsString()

@@ -8,6 +8,7 @@ export class QuoteLineResponseDto {
   @ApiProperty({ enum: ['part', 'labor'] }) kind: 'part' | 'labor';
   @ApiProperty({ enum: LINE_SOURCES }) source: LineSource;
   @ApiProperty() description: string;
+  @ApiProperty({ type: String, nullable: true, description: 'Part lines: the part number the shop orders by' }) sku: string | null;
   @ApiProperty({ type: String, nullable: true }) catalogKind: string | null;
   @ApiProperty({ type: String, nullable: true }) catalogItemId: string | null;
   @ApiProperty({ type: String, nullable: true }) laborOperationId: string | null;
@@ -102,6 +103,14 @@ export class QuoteSettingsResponseDto {
   @ApiProperty() terms: string;
 }
 
+/** One side of a compared line: its figures in one revision. */
+export class QuoteRevisionDiffLineSideDto {
+  @ApiProperty({ description: 'Part lines: whole units; labor lines: 1' }) quantity: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'Labor lines: hours to a tenth' }) hours: number | null;
+  @ApiProperty() unitPriceCents: number;
+  @ApiProperty() lineTotalCents: number;
+}
+
 export class QuoteRevisionDiffLineDto {
   @ApiProperty({ enum: ['added', 'removed', 'changed'] }) change: 'added' | 'removed' | 'changed';
   @ApiProperty() key: string;
@@ -110,6 +119,10 @@ export class QuoteRevisionDiffLineDto {
   @ApiPropertyOptional({ type: [String] }) fields?: string[];
   @ApiPropertyOptional({ type: Number, nullable: true }) beforeCents?: number | null;
   @ApiPropertyOptional({ type: Number, nullable: true }) afterCents?: number | null;
+  @ApiProperty({ type: QuoteRevisionDiffLineSideDto, nullable: true, description: 'The line in the older revision (null when added)' })
+  before: QuoteRevisionDiffLineSideDto | null;
+  @ApiProperty({ type: QuoteRevisionDiffLineSideDto, nullable: true, description: 'The line in the newer revision (null when removed)' })
+  after: QuoteRevisionDiffLineSideDto | null;
 }
 
 export class QuoteRevisionDiffTotalDto {
