@@ -43,7 +43,8 @@ describe('measurement sheets and photos', () => {
   const setValue = (who: Session, pointId: string, body: object) => t.http.put(`${SHEET}/values/${pointId}`).set(...bearer(who)).send(body);
   const upload = (who: Session, files: Array<{ data: Buffer; name: string }>, projectId: string = PROJECT) => {
     const req = t.http.post(`/api/projects/${projectId}/measurement-sheet/photos`).set(...bearer(who));
-    for (const file of files) req.attach('photos', file.data, file.name);
+    // form-data cuts `filename` to its last part; `filepath` sends the name as given (folders and all)
+    for (const file of files) req.attach('photos', file.data, { filepath: file.name });
     return req;
   };
 
@@ -146,18 +147,20 @@ describe('measurement sheets and photos', () => {
     expect((await upload(s.fabricator, [{ data: jpeg.subarray(0, jpeg.length - 40), name: 'cut.jpg' }]).expect(400)).body.code).toBe('photo_truncated');
     const png = makePng(40, 30);
     expect((await upload(s.fabricator, [{ data: png.subarray(0, png.length - 20), name: 'cut.png' }]).expect(400)).body.code).toBe('photo_truncated');
-    expect((await upload(s.fabricator, [{ data: Buffer.alloc(0), name: 'empty.jpg' }])).status).toBeGreaterThanOrEqual(400);
-    await upload(s.fabricator, [{ data: Buffer.concat([jpeg, Buffer.alloc(MAX_PHOTO_BYTES)]), name: 'huge.jpg' }]).expect(413);
-    await upload(s.fabricator, Array.from({ length: 6 }, (_, i) => ({ data: makePng(4, 4), name: `p${i}.png` }))).expect(400);
+    expect((await upload(s.fabricator, [{ data: Buffer.alloc(0), name: 'empty.jpg' }]).expect(400)).body.code).toBe('photo_empty');
+    expect((await upload(s.fabricator, [{ data: Buffer.concat([jpeg, Buffer.alloc(MAX_PHOTO_BYTES)]), name: 'huge.jpg' }]).expect(413)).body.message).toMatch(/15 MB/);
+    expect((await upload(s.fabricator, Array.from({ length: 6 }, (_, i) => ({ data: makePng(4, 4), name: `p${i}.png` }))).expect(400)).body.message).toMatch(/Up to 5 photos/);
     // A header claiming 30000 × 30000 pixels (900 megapixels): a decompression trap.
     expect((await upload(s.fabricator, [{ data: makeWebp(16000, 16000), name: 'trap.webp' }]).expect(400)).body.code).toBe('photo_too_many_pixels');
-    // A path in the client's name never reaches the disk: the file gets a generated name.
-    const traversal = await upload(s.fabricator, [{ data: makePng(8, 8), name: '../../../etc/passwd.png' }]).expect(201);
+    // A name with a folder path is refused (a browser sends the bare file name), with or without a good image.
+    for (const name of ['../../../etc/passwd.png', '..\\..\\boot.png', 'sub/dir.png']) {
+      expect((await upload(s.fabricator, [{ data: makePng(8, 8), name }]).expect(400)).body.code).toBe('photo_bad_name');
+    }
     // One good and one bad file in the same request: neither is kept.
     await upload(s.fabricator, [{ data: makePng(8, 8), name: 'ok.png' }, { data: pdf, name: 'bad.png' }]).expect(415);
-    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(rowsBefore + 1);
-    expect((await storedFiles()).length).toBe(filesBefore + 1);
-    await t.http.delete(`/api/measurement-photos/${traversal.body[0].id}`).set(...bearer(s.fabricator)).expect(204);
+    await upload(s.fabricator, [{ data: makePng(8, 8), name: 'ok.png' }, { data: makePng(8, 8), name: '../up.png' }]).expect(400);
+    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(rowsBefore);
+    expect(await storedFiles()).toHaveLength(filesBefore);
   });
 
   it('a JPEG with its GPS position is stored without it; PNG text and WebP EXIF/XMP are removed too', async () => {
@@ -187,6 +190,10 @@ describe('measurement sheets and photos', () => {
     await upload(s.customer, [{ data: makePng(12, 12), name: 'x.png' }], OTHER_CUSTOMERS_PROJECT).expect(404);
     await t.http.post(`/api/measurement-photos/${added.body[0].id}/accept`).set(...bearer(s.fabricator)).expect(200);
     const second = await upload(s.customer, [{ data: makePng(12, 12), name: 'again.png' }]).expect(201);
+    // A customer cannot replace a photo, not even their own; a fabricator accepts or replaces it.
+    const byCustomer = await t.http.post(`${SHEET}/photos`).set(...bearer(s.customer)).field('replacesPhotoId', second.body[0].id).attach('photos', makePng(8, 8), 'mine.png');
+    expect(byCustomer.status).toBe(403);
+    expect(byCustomer.body.message).toMatch(/fabricator or owner may replace/);
     const replaced = await t.http
       .post(`${SHEET}/photos`)
       .set(...bearer(s.fabricator))
@@ -287,7 +294,13 @@ describe('measurement templates, settings and a project without a catalog chassi
     expect((await t.http.get(SETTINGS).set(...bearer(s.counter)).expect(200)).body).toEqual({ deviationLimitMm: 15, deviationLimitDeg: 1 });
     await t.http.get(SETTINGS).set(...bearer(s.customer)).expect(403);
     await t.http.put(SETTINGS).set(...bearer(s.fabricator)).send({ deviationLimitMm: 5, deviationLimitDeg: 0.5 }).expect(403);
-    await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 0, deviationLimitDeg: 0.5 }).expect(400);
+    expect((await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 0, deviationLimitDeg: 0.5 }).expect(400)).body.message).toMatch(
+      /deviationLimitMm must be at least 0.5 mm/,
+    );
+    expect((await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5, deviationLimitDeg: 45 }).expect(400)).body.message).toMatch(
+      /deviationLimitDeg must be at most 20°/,
+    );
+    await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: '5 mm', deviationLimitDeg: 0.5 }).expect(400);
     await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5 }).expect(400);
     await t.http.put(SETTINGS).set(...bearer(s.owner)).send({ deviationLimitMm: 5, deviationLimitDeg: 0.5, extra: 1 }).expect(400);
 

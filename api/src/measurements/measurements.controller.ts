@@ -1,5 +1,4 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Res, UploadedFiles, UseInterceptors } from '@nestjs/common';
-import { FilesInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiNoContentResponse, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -22,11 +21,8 @@ import {
 import { MeasurementSettingsDto, PutMeasurementTemplateDto, SetMeasurementValueDto, UploadPhotosDto } from './dto/measurement.dto';
 import { mapMeasurementPhoto, mapMeasurementPoint, mapMeasurementSheet } from './measurement.mapper';
 import { MeasurementsService, UploadedPhotoFile } from './measurements.service';
-import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_REQUEST } from './photo-limits';
+import { PhotoUploadInterceptor } from './photo-upload.interceptor';
 
-const UPLOAD = FilesInterceptor('photos', MAX_PHOTOS_PER_REQUEST, {
-  limits: { fileSize: MAX_PHOTO_BYTES, files: MAX_PHOTOS_PER_REQUEST, fields: 10, parts: MAX_PHOTOS_PER_REQUEST + 10 },
-});
 
 @ApiTags('measurements')
 @ApiBearerAuth()
@@ -65,7 +61,7 @@ export class MeasurementsController {
 
   @Post('projects/:id/measurement-sheet/photos')
   @Roles(...MEASUREMENT_PHOTO_ADDERS)
-  @UseInterceptors(UPLOAD)
+  @UseInterceptors(PhotoUploadInterceptor)
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {

@@ -23,9 +23,24 @@ export const MeasurementErrors = {
     new AppError(400, 'photo_truncated', `"${safeName(name)}" is cut short (the upload did not finish): send it again.`),
   photoTooManyPixels: (name: string, width: number, height: number) =>
     new AppError(400, 'photo_too_many_pixels', `"${safeName(name)}" is ${width} × ${height} pixels; send a photo of at most 100 megapixels.`),
+  photoBadName: (name: string) =>
+    new AppError(
+      400,
+      'photo_bad_name',
+      `"${safeName(name)}" has a folder path or control characters in its name: send the photo file itself (a plain name such as crossmember.jpg).`,
+    ),
   photoForbidden: () => new AppError(403, 'forbidden', 'Only the person who added a photo or the shop owner may delete it.'),
+  photoReplaceForbidden: () => new AppError(403, 'forbidden', "Only the shop's fabricator or owner may replace a customer's photo."),
   photoNotPending: () => new AppError(409, 'photo_not_pending', 'Only a photo a customer added waits to be accepted.'),
-  limits: () => `Up to ${MAX_PHOTOS_PER_REQUEST} photos of at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB each per upload.`,
+  photoTooLarge: () =>
+    new AppError(
+      413,
+      'photo_too_large',
+      `A photo is over ${MAX_PHOTO_BYTES / 1024 / 1024} MB: send it at the camera's normal size (not RAW or a video), one photo at a time.`,
+    ),
+  photoTooMany: () =>
+    new AppError(400, 'photo_too_many', `Up to ${MAX_PHOTOS_PER_REQUEST} photos per upload: send the rest in another upload.`),
+  photoWrongField: () => new AppError(400, 'photo_wrong_field', 'Send the photos in the form field "photos".'),
 };
 
 /** A client's file name, echoed in a message only: no path, no control characters, bounded. */

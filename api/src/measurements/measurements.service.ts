@@ -27,7 +27,7 @@ import {
   MeasurementValue,
 } from './measurement-sheet.entity';
 import { MeasurementErrors } from './measurements.errors';
-import { checkImage, stripLocationMetadata } from './photo-image';
+import { checkClientName, checkImage, stripLocationMetadata } from './photo-image';
 import { PhotoStorage } from './photo-storage';
 import { jsonCopy } from '../common/json/json-copy';
 
@@ -222,6 +222,8 @@ export class MeasurementsService {
     const project = await this.projects.get(user, projectId);
     if (!files || files.length === 0) throw MeasurementErrors.photoNoFiles();
     if (input.pointId) await this.pointOf(user, project, input.pointId);
+    if (input.replacesPhotoId && user.role === 'customer') throw MeasurementErrors.photoReplaceForbidden();
+    for (const file of files) checkClientName(file.originalname);
     const prepared = await Promise.all(
       files.map(async (file) => {
         const image = checkImage(file.buffer, file.originalname);
@@ -235,7 +237,6 @@ export class MeasurementsService {
       const rows = await this.dataSource.transaction(async (manager) => {
         const sheet = await this.sheetFor(manager, user, project.id);
         if (input.replacesPhotoId) {
-          if (user.role === 'customer') throw MeasurementErrors.photoForbidden();
           replaced = await manager.findOne(MeasurementPhoto, { where: { id: input.replacesPhotoId.toLowerCase(), sheetId: sheet.id } });
           if (!replaced) throw MeasurementErrors.photoNotFound();
           if (replaced.status !== 'pending') throw MeasurementErrors.photoNotPending();

@@ -16,6 +16,16 @@ export interface CheckedImage {
   height: number;
 }
 
+/**
+ * A client's file name as sent (multer keeps the path: `preservePath`). A browser sends the bare name of the file; a
+ * name with a folder part (`../`, `/`, `\\`), a NUL or another control character was made by hand, and is refused
+ * (the stored file gets a generated name either way).
+ */
+export function checkClientName(name: string): void {
+  // eslint-disable-next-line no-control-regex
+  if (/[\\/\u0000-\u001f\u007f]/.test(name) || name === '..') throw MeasurementErrors.photoBadName(name);
+}
+
 /** Reads the header (not the name): JPEG, PNG or WebP with a sane pixel count and a complete file, else a 4xx. */
 export function checkImage(data: Buffer, originalName: string): CheckedImage {
   if (data.length === 0) throw MeasurementErrors.photoEmpty(originalName);

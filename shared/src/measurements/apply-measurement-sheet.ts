@@ -19,6 +19,15 @@ export interface DeviationLimits {
 /** Common practice (no published source): a tape reading 15 mm or an angle 1° off the book is worth a second look. */
 export const DEFAULT_DEVIATION_LIMITS: DeviationLimits = { lengthMm: 15, angleDeg: 1 };
 
+/**
+ * What a shop may set. Common practice (no published source): below half a millimetre or a tenth of a degree every
+ * tape or angle-finder reading would be flagged; beyond 500 mm or 20° nothing a tape can get wrong ever would.
+ */
+export const DEVIATION_LIMIT_BOUNDS = {
+  lengthMm: { min: 0.5, max: 500 },
+  angleDeg: { min: 0.1, max: 20 },
+} as const;
+
 export type InputSource = { kind: 'sheet'; measuredBy: string; measuredAt: string } | { kind: 'catalog' };
 
 /** One input of the fit check that a measurement point governs, and where its value came from. */

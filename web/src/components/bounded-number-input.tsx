@@ -15,6 +15,15 @@ export const plainNumberRule = (label: string, example: string) => ({
   },
 });
 
+/** Form rule: a figure inside [min, max], the bounds said as `shown` writes them ("at least 0.02 in (0.5 mm)"). */
+export const rangeRule = (label: string, bounds: { min?: number; max?: number }, shown: (v: number) => string = String) => ({
+  validator: async (_: unknown, v: unknown) => {
+    if (typeof v !== 'number' || Number.isNaN(v)) return;
+    if (bounds.min !== undefined && v < bounds.min) throw new Error(`${label} must be at least ${shown(bounds.min)}.`);
+    if (bounds.max !== undefined && v > bounds.max) throw new Error(`${label} must be at most ${shown(bounds.max)}.`);
+  },
+});
+
 /**
  * A number box for forms: `min`/`max` bound the arrows, but a typed figure outside them is passed on as typed
  * (not pulled to the nearest limit), so the Form.Item rules can say what is wrong. Text that is not a plain number

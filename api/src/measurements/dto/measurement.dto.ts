@@ -15,7 +15,7 @@ import {
   MinLength,
   ValidateNested,
 } from 'class-validator';
-import { MEASUREMENT_POINT_KINDS, type MeasurementPointKind } from '@swapwright/shared';
+import { DEVIATION_LIMIT_BOUNDS, MEASUREMENT_POINT_KINDS, type MeasurementPointKind } from '@swapwright/shared';
 
 export const ENTRY_UNITS = ['mm', 'in'] as const;
 
@@ -86,15 +86,23 @@ export class UploadPhotosDto {
 }
 
 export class MeasurementSettingsDto {
-  @ApiProperty({ description: 'Flag a measured length further than this from the catalog (mm).' })
-  @IsNumber()
-  @Min(0.5)
-  @Max(500)
+  @ApiProperty({
+    description: 'Flag a measured length further than this from the catalog (mm).',
+    minimum: DEVIATION_LIMIT_BOUNDS.lengthMm.min,
+    maximum: DEVIATION_LIMIT_BOUNDS.lengthMm.max,
+  })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'deviationLimitMm must be a number of millimetres' })
+  @Min(DEVIATION_LIMIT_BOUNDS.lengthMm.min, { message: `deviationLimitMm must be at least ${DEVIATION_LIMIT_BOUNDS.lengthMm.min} mm` })
+  @Max(DEVIATION_LIMIT_BOUNDS.lengthMm.max, { message: `deviationLimitMm must be at most ${DEVIATION_LIMIT_BOUNDS.lengthMm.max} mm` })
   deviationLimitMm: number;
 
-  @ApiProperty({ description: 'Flag a measured angle further than this from the catalog (degrees).' })
-  @IsNumber()
-  @Min(0.1)
-  @Max(20)
+  @ApiProperty({
+    description: 'Flag a measured angle further than this from the catalog (degrees).',
+    minimum: DEVIATION_LIMIT_BOUNDS.angleDeg.min,
+    maximum: DEVIATION_LIMIT_BOUNDS.angleDeg.max,
+  })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'deviationLimitDeg must be a number of degrees' })
+  @Min(DEVIATION_LIMIT_BOUNDS.angleDeg.min, { message: `deviationLimitDeg must be at least ${DEVIATION_LIMIT_BOUNDS.angleDeg.min}°` })
+  @Max(DEVIATION_LIMIT_BOUNDS.angleDeg.max, { message: `deviationLimitDeg must be at most ${DEVIATION_LIMIT_BOUNDS.angleDeg.max}°` })
   deviationLimitDeg: number;
 }

@@ -2,6 +2,7 @@ import { formatBeltDesignation } from '@swapwright/shared';
 import { Button, Checkbox, Divider, Drawer, Flex, Form, Input, InputNumber, Select, Typography, type FormInstance } from 'antd';
 import { useEffect, useState } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
+import { rangeRule } from '@/components/bounded-number-input';
 import { useCreateCatalogItem } from '../api/create-catalog-item';
 import { useUpdateCatalogItem } from '../api/update-catalog-item';
 import { kindDefinitions, type JsonField, type ScalarField } from '../lib/catalog-kinds';
@@ -100,13 +101,7 @@ function fieldRules(field: ScalarField, formatLength: (mm: number) => string) {
   if (field.type === 'length') rules.push(readableLengthRule(field.label));
   const shown = (v: number) => (field.type === 'length' ? formatLength(v) : `${v}${field.suffix ? ` ${field.suffix}` : ''}`);
   if ((field.type === 'number' || field.type === 'length') && (field.min !== undefined || field.max !== undefined))
-    rules.push({
-      validator: async (_: unknown, v: unknown) => {
-        if (typeof v !== 'number' || Number.isNaN(v)) return;
-        if (field.min !== undefined && v < field.min) throw new Error(`${field.label} must be at least ${shown(field.min)}.`);
-        if (field.max !== undefined && v > field.max) throw new Error(`${field.label} must be at most ${shown(field.max)}.`);
-      },
-    });
+    rules.push(rangeRule(field.label, field, shown));
   return rules;
 }
 
