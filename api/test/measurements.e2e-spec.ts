@@ -43,8 +43,9 @@ describe('measurement sheets and photos', () => {
   const setValue = (who: Session, pointId: string, body: object) => t.http.put(`${SHEET}/values/${pointId}`).set(...bearer(who)).send(body);
   const upload = (who: Session, files: Array<{ data: Buffer; name: string }>, projectId: string = PROJECT) => {
     const req = t.http.post(`/api/projects/${projectId}/measurement-sheet/photos`).set(...bearer(who));
-    // form-data cuts `filename` to its last part; `filepath` sends the name as given (folders and all)
-    for (const file of files) req.attach('photos', file.data, { filepath: file.name });
+    // form-data cuts `filename` to its last part; its `filepath` option (not in superagent's types) sends the name as
+    // given, folders and all
+    for (const file of files) req.attach('photos', file.data, { filepath: file.name } as { filename?: string });
     return req;
   };
 
