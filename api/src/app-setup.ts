@@ -3,11 +3,16 @@ import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
 import { createJsonBodyMiddleware } from './common/middleware/json-body.middleware';
 import { createSecurityHeadersMiddleware } from './common/middleware/security-headers.middleware';
+import { compileMarkedValidators } from './common/validation/compiled-body-validator';
 
 export const API_PREFIX = 'api';
 
 /** Everything main.ts and the e2e tests share, so tests run the app exactly as served. */
 export function configureApp(app: INestApplication): INestApplication {
+  // API answers are `Cache-Control: no-store`, so a weak ETag (a SHA-1 over every JSON body) would never be used.
+  // The built web app's files keep theirs: serve-static sets its own.
+  (app.getHttpAdapter().getInstance() as { set(name: string, value: unknown): void }).set('etag', false);
+  compileMarkedValidators();
   app.use(correlationIdMiddleware);
   app.use(createSecurityHeadersMiddleware());
   app.use(createJsonBodyMiddleware());

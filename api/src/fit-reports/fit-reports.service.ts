@@ -109,7 +109,10 @@ export class FitReportsService {
 
   /** Runs the engine on a spec as given, with the shop's thresholds under the request's own; nothing is stored. */
   async whatIf(user: AuthUser, input: WhatIfDto): Promise<FitReport> {
-    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesForPreview(user)), ...jsonCopy(input.settings ?? {}) };
-    return runFitCheck(jsonCopy(input.spec) as FitSpec, overrides);
+    // A body the compiled check accepted is still the plain JSON parsed from the request (no copy needed); one that
+    // took class-validator's run holds DTO instances, copied to plain JSON like any other engine input.
+    const plain = input instanceof WhatIfDto ? jsonCopy(input) : input;
+    const overrides: Partial<FitSettings> = { ...(await this.settings.overridesForPreview(user)), ...(plain.settings ?? {}) };
+    return runFitCheck(plain.spec as FitSpec, overrides);
   }
 }

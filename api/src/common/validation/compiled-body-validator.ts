@@ -22,11 +22,19 @@ const COMPILED = Symbol('compiledValidation');
 
 type ClassType = abstract new (...args: never[]) => unknown;
 
+const marked: ClassType[] = [];
+
 /** Marks a body DTO for the compiled fast path (worth it for large nested bodies such as a full fit spec). */
 export function CompiledValidation(): ClassDecorator {
   return (target) => {
     Reflect.defineMetadata(COMPILED, true, target);
+    marked.push(target as unknown as ClassType);
   };
+}
+
+/** Compiles every marked DTO's check now (at start-up), so the first request does not pay ajv's code generation. */
+export function compileMarkedValidators(): void {
+  for (const type of marked) compiledValidatorFor(type);
 }
 
 export function hasCompiledValidation(type: unknown): type is ClassType {
