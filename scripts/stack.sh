@@ -186,6 +186,8 @@ export DEV_MAIL_ENABLED=${DEV_MAIL_ENABLED_VALUE:-false}
 export AUTH_RATE_LIMIT=${AUTH_RATE_LIMIT_VALUE:-10}
 export AUTH_RATE_WINDOW_SECONDS=60
 export WEB_DIST_DIR=$ROOT/web/dist
+# API processes sharing the port (node:cluster): auto = one per CPU core. The test profile runs one.
+export API_WORKERS=${API_WORKERS:-${API_WORKERS_VALUE:-1}}
 export UPLOAD_DIR=$LOCAL/$profile/uploads
 ENV
   mkdir -p "$LOCAL/$profile/uploads"
@@ -230,7 +232,7 @@ cmd_start() {
   mail_start dev 2525
   local api_port; api_port="$(free_port "${SWAPWRIGHT_PORT:-3000}")"
   payment_start dev 12111 "$api_port"
-  write_env dev swapwright "$api_port"
+  API_WORKERS_VALUE=auto write_env dev swapwright "$api_port"
   trap 'say "Stopping"; kill $API_PID 2>/dev/null || true; wait $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"; echo "Stopped. Data kept in .local/dev (npm run reset wipes it)."' EXIT
   trap 'exit 0' INT TERM
   migrate_and_seed
@@ -308,7 +310,7 @@ cmd_bench() {
   payment_start bench 12141 "$api_port"
   trap 'kill $API_PID 2>/dev/null || true; wait $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
   # Production settings, as a shop would run it; the sign-in limit stays out of the way of the bench's own sign-ins.
-  NODE_ENV_VALUE=production AUTH_RATE_LIMIT_VALUE=1000 write_env bench swapwright_bench "$api_port"
+  NODE_ENV_VALUE=production AUTH_RATE_LIMIT_VALUE=1000 API_WORKERS_VALUE=auto write_env bench swapwright_bench "$api_port"
   migrate_and_seed
   say "Starting the API (log: .local/bench/api.log)"
   node api/dist/main.js >"$LOCAL/bench/api.log" 2>&1 &

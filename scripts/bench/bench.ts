@@ -29,6 +29,7 @@ interface Row {
   meets?: boolean;
 }
 const rows: Row[] = [];
+const loadAtStart = os.loadavg()[0];
 
 function add(row: Row): void {
   rows.push(row);
@@ -122,7 +123,10 @@ function printTable(): void {
   const widths = all[0].map((_, column) => Math.max(...all.map((line) => line[column].length)));
   const line = (values: string[]) => '| ' + values.map((v, i) => v.padEnd(widths[i])).join(' | ') + ' |';
   console.log();
-  console.log(`Swapwright bench — node ${process.version}, ${os.cpus().length} CPUs (${os.cpus()[0]?.model ?? 'unknown'}), load ${os.loadavg()[0].toFixed(2)} at the end`);
+  console.log(
+    `Swapwright bench — node ${process.version}, ${os.cpus().length} CPUs (${os.cpus()[0]?.model ?? 'unknown'}), ` +
+      `API_WORKERS=${process.env.API_WORKERS ?? '1'}, load ${loadAtStart.toFixed(2)} at the start and ${os.loadavg()[0].toFixed(2)} at the end`,
+  );
   console.log(line(all[0]));
   console.log('|' + widths.map((w) => '-'.repeat(w + 2)).join('|') + '|');
   for (const values of all.slice(1)) console.log(line(values));

@@ -51,4 +51,13 @@ describe('validateEnv', () => {
       /DEV_MAIL_ENABLED must not be true when NODE_ENV is production/,
     );
   });
+
+  it('takes API_WORKERS as auto or a whole number from 1 to 99 and refuses anything else, naming it', () => {
+    expect(validateEnv({ ...envStub.complete, API_WORKERS: 'auto' }).API_WORKERS).toBe('auto');
+    expect(validateEnv({ ...envStub.complete, API_WORKERS: '2' }).API_WORKERS).toBe('2');
+    expect(validateEnv(envStub.complete).API_WORKERS).toBeUndefined();
+    for (const bad of ['0', '-1', 'two', '1.5', '100']) {
+      expect(() => validateEnv({ ...envStub.complete, API_WORKERS: bad })).toThrow(/API_WORKERS must be auto or a whole number from 1 to 99/);
+    }
+  });
 });

@@ -115,6 +115,15 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @Max(86400)
   AUTH_RATE_WINDOW_SECONDS: number = 60;
 
+  /**
+   * How many API processes serve the port (node:cluster): a number, or `auto` for one per CPU core. The API keeps
+   * no state of its own between requests (sessions, rate-limit counters and jobs live in MariaDB), so workers are
+   * interchangeable like separate instances behind a load balancer. Unset: 1 (a single process, no cluster).
+   */
+  @IsOptional()
+  @Matches(/^(auto|[1-9]\d?)$/, { message: 'API_WORKERS must be auto or a whole number from 1 to 99' })
+  API_WORKERS?: string;
+
   /** The payment provider's API base (the local fake in development and test: http://127.0.0.1:<port>). */
   @IsOptional()
   @IsUrl({ require_tld: false, require_protocol: true })
