@@ -16,6 +16,34 @@ async function capturedMails(page: BrowserSession['page']): Promise<CapturedMail
   return (await (await page.request.get(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
 }
 
+interface DraftLine {
+  key: string;
+  kind: 'part' | 'labor';
+  description: string;
+  quantity: number;
+}
+
+const moneyText = (cents: number) => (cents / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+
+/** On the quote page: edits a part line's quantity and waits for the total the API priced to show. */
+async function changeQuantity(page: BrowserSession['page'], line: DraftLine, quantity: number): Promise<void> {
+  const total = page.getByTestId('quote-total');
+  await expectVisible(total);
+  const before = await total.innerText();
+  await page.getByTestId(`quote-line-${line.key}`).getByRole('button', { name: `Edit ${line.description}` }).click();
+  const form = page.getByRole('form', { name: 'Edit parts line' });
+  await form.getByRole('spinbutton', { name: 'Quantity' }).fill(String(quantity));
+  const saved = page.waitForResponse((r) => /\/quotes\/[^/]+$/.test(r.url()) && r.request().method() === 'PATCH');
+  await page.getByRole('button', { name: 'Save line' }).click();
+  const answer = await saved;
+  expect(answer.status()).toBe(200);
+  const quote = (await answer.json()) as { revision: { lines: DraftLine[]; totals: { totalCents: number } } };
+  expect(quote.revision.lines.find((candidate) => candidate.key === line.key)?.quantity).toBe(quantity);
+  await expectText(total, new RegExp(moneyText(quote.revision.totals.totalCents).replace(/[.,]/g, '\\$&')));
+  expect(await total.innerText()).not.toBe(before);
+  await expectText(page.getByTestId(`quote-line-${line.key}`), new RegExp(`\\b${quantity}\\b`));
+}
+
 describe('from the quote to the work order: estimator, customer, fabricator', () => {
   let estimator: BrowserSession;
   let quoteLabel: string;
@@ -50,15 +78,43 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
     quoteLabel = draft.label;
     expect(draft.revision.partsPlanVersion).not.toBeNull();
     const item = page.getByTestId(`quote-${quoteLabel}`);
+
+    // On the draft, the estimator changes a part line's quantity: the API prices it again and the page shows its total.
+    const part = (draft.revision.lines as DraftLine[]).find((line) => line.kind === 'part');
+    expect(part).toBeDefined();
+    await item.getByRole('link', { name: 'Edit lines' }).click();
+    await changeQuantity(page, part!, part!.quantity + 1);
+    await page.getByRole('button', { name: 'Back to the project' }).click();
+
     await item.getByRole('button', { name: 'Send to customer' }).click();
     await expectText(item, /Awaiting the customer/);
     await expectText(page.locator('[aria-label="Project stage"]'), /Quote sent/);
     await saveScreenshot(page, 'estimator-quote-sent');
 
+    // Revision 1 is frozen once sent: the estimator starts revision 2, changes the quantity again, compares and sends it.
+    await item.getByRole('link', { name: 'Open quote' }).click();
+    await expectText(page.getByTestId('quote-revision'), /Revision 1 \(sent, frozen\)/);
+    await page.getByRole('button', { name: 'Start revision 2' }).click();
+    await expectText(page.getByTestId('quote-revision'), /Revision 2 \(being written\)/);
+    await changeQuantity(page, part!, part!.quantity + 2);
+    const compare = page.getByTestId('revision-compare');
+    const changed = compare.getByRole('table', { name: 'Lines changed' }).getByRole('row').filter({ hasText: part!.description });
+    await expectText(changed, new RegExp(`Changed[\\s\\S]*${part!.quantity + 1} → ${part!.quantity + 2}`));
+    await expectVisible(compare.getByRole('table', { name: 'Totals changed' }).getByRole('row', { name: /^Total / }));
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await saveScreenshot(page, 'estimator-quote-revision-compare');
+    await page.setViewportSize({ width: 1366, height: 900 });
+    const resent = page.waitForResponse((r) => /\/quotes\/[^/]+\/send$/.test(r.url()));
+    await page.getByRole('button', { name: 'Send revision 2 to the customer' }).click();
+    expect((await resent).status()).toBe(200);
+    await expectText(page.getByTestId('quote-revision'), /Revision 2 \(sent, frozen\)/);
+    await page.getByRole('button', { name: 'Back to the project' }).click();
+
     // The customer opens the link in the e-mail, accepts and pays the deposit on the local payment fake.
     let mail: CapturedMail | undefined;
     for (let attempt = 0; attempt < 50 && !mail; attempt++) {
-      mail = (await capturedMails(page)).find((m) => m.to.includes(demoSignIn('customer').email) && m.subject.includes(quoteLabel));
+      // the newest revision's mail: the link in the first one is superseded by revision 2
+      mail = (await capturedMails(page)).find((m) => m.to.includes(demoSignIn('customer').email) && m.subject.includes(quoteLabel) && m.text.includes('(revision 2)'));
       if (!mail) await page.waitForTimeout(200);
     }
     expect(mail).toBeDefined();

@@ -69,6 +69,7 @@ export * from './fit-report/view-geometry';
 export * from './quoting/exact-money';
 export * from './quoting/quote-money';
 export * from './quoting/revision-diff';
+export * from './quoting/total-rows';
 export * from './parts-plan';
 export * from './geometry/ground-line';
 export * from './measurements/measurement-points';

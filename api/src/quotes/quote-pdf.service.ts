@@ -4,6 +4,7 @@ import {
   FIT_REPORT_SAFETY,
   formatCents,
   QUOTE_ROUNDING_RULE,
+  quoteTotalRows,
   sideViewGeometry,
   type ChassisPoint,
   type FitReport,
@@ -241,15 +242,7 @@ export class QuotePdfService {
   }
 
   private totals(doc: PDFKit.PDFDocument, totals: QuoteTotals, currency: string, width: number): void {
-    const rows: [string, number][] = [
-      ['Parts', totals.partsSubtotalCents],
-      ...(totals.partsDiscountCents ? [['Parts discount', -totals.partsDiscountCents] as [string, number]] : []),
-      ['Labor', totals.laborSubtotalCents],
-      ...(totals.laborDiscountCents ? [['Labor discount', -totals.laborDiscountCents] as [string, number]] : []),
-      ['Shop supplies', totals.suppliesCents],
-      ['Tax', totals.taxCents],
-    ];
-    for (const [name, cents] of rows) {
+    for (const { label: name, cents } of quoteTotalRows(totals)) {
       const y = doc.y;
       doc.font('body').fontSize(10).fillColor(INK).text(name, 50 + width - 300, y, { width: 150 });
       doc.text(money(cents, currency), 50 + width - 150, y, { width: 150, align: 'right' });

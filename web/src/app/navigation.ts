@@ -60,6 +60,8 @@ export const sectionRoles = {
   projectMeasurements: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
+  // the estimator opens a quote from the project page to write its lines
+  quoteDetail: ['owner', 'estimator'],
   workOrders: ['owner', 'fabricator'],
   // the estimator opens a project's work order from the project page
   workOrderDetail: ['owner', 'estimator', 'fabricator'],
@@ -72,6 +74,8 @@ export const sectionRoles = {
 export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';
 /** Start a work order, record its checks and finish it, as the API allows. */
 export const canWorkOrders = (role: Role): boolean => role === 'owner' || role === 'estimator' || role === 'fabricator';
+/** Write quote lines, start revisions and send quotes (as the API allows). */
+export const canWriteQuotes = (role: Role): boolean => role === 'owner' || role === 'estimator';
 export const canEditProjects = (role: Role): boolean => role === 'owner' || role === 'estimator';
 /** Customers only read stored fit reports: no catalog, selections or placement. */
 export const isFitReadOnly = (role: Role): boolean => role === 'customer';

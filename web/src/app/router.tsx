@@ -31,6 +31,7 @@ const WorkOrderPage = lazyNamed(() => import('./routes/work-orders/work-order-pa
 const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
 const CatalogPage = lazyNamed(() => import('./routes/catalog/catalog-page'), 'CatalogPage');
 const FitReportRoute = lazyNamed(() => import('./routes/fit/fit-report-route'), 'FitReportRoute');
+const QuotePage = lazyNamed(() => import('./routes/quotes/quote-page'), 'QuotePage');
 const QuoteAnswerPage = lazyNamed(() => import('./routes/quotes/quote-answer-page'), 'QuoteAnswerPage');
 const NotFoundPage = lazyNamed(() => import('./routes/not-found-page'), 'NotFoundPage');
 const RouteErrorBoundary = lazy(() =>
@@ -113,6 +114,7 @@ export const routes: RouteObject[] = [
           section(paths.projectMeasurements, sectionRoles.projectMeasurements, 'the measurement sheet', MeasurementSheetPage),
           section(paths.myProjects, sectionRoles.myProjects, 'My projects', MyProjectsPage),
           section(paths.customers, sectionRoles.customers, 'Customers', CustomersPage),
+          section(paths.quoteDetail, sectionRoles.quoteDetail, 'the quote', QuotePage),
           section(paths.workOrders, sectionRoles.workOrders, 'Work orders', WorkOrdersPage),
           section(paths.workOrderDetail, sectionRoles.workOrderDetail, 'the work order', WorkOrderPage),
           section(paths.partsCounter, sectionRoles.partsCounter, 'Parts counter', PartsCounterPage),

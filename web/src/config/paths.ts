@@ -13,6 +13,7 @@ export const paths = {
   projectMeasurements: '/projects/:projectId/measurements',
   myProjects: '/my-projects',
   customers: '/customers',
+  quoteDetail: '/quotes/:quoteId',
   workOrders: '/work-orders',
   workOrderDetail: '/work-orders/:workOrderId',
   partsCounter: '/parts-counter',
@@ -31,6 +32,8 @@ export const toProjectFit = (projectId: string): string =>
 
 export const toProjectMeasurements = (projectId: string): string =>
   paths.projectMeasurements.replace(':projectId', encodeURIComponent(projectId));
+
+export const toQuote = (quoteId: string): string => paths.quoteDetail.replace(':quoteId', encodeURIComponent(quoteId));
 
 export const toWorkOrder = (workOrderId: string): string =>
   paths.workOrderDetail.replace(':workOrderId', encodeURIComponent(workOrderId));

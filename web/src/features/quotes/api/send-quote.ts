@@ -14,6 +14,7 @@ export function useSendQuote(projectId: string) {
     mutationFn: sendQuote,
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) });
+      void queryClient.invalidateQueries({ queryKey: quoteKeys.details() });
       // Sending moves the project's stage on.
       void queryClient.invalidateQueries({ queryKey: ['projects'] });
     },

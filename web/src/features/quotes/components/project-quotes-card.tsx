@@ -1,5 +1,7 @@
 import { formatCents } from '@swapwright/shared';
 import { App, Button, Card, Empty, Flex, List, Space, Typography } from 'antd';
+import { Link } from 'react-router-dom';
+import { toQuote } from '@/config/paths';
 import { getErrorMessage } from '@/lib/api-error';
 import { useCreateQuote } from '../api/create-quote';
 import { useProjectQuotes } from '../api/get-project-quotes';
@@ -38,6 +40,11 @@ export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProp
           <List.Item
             data-testid={`quote-${quote.label}`}
             actions={[
+              canWrite && (
+                <Link key="open" to={toQuote(quote.id)}>
+                  {quote.latestRevision === quote.sentRevision || quote.status === 'approved' ? 'Open quote' : 'Edit lines'}
+                </Link>
+              ),
               canWrite && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
                 <Button
                   key="send"

@@ -1,0 +1,170 @@
+import { formatCents } from '@swapwright/shared';
+import { Alert, Button, Card, Select, Space, Typography } from 'antd';
+import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { ErrorState, LoadingState } from '@/components/query-state';
+import { toProjectDetail } from '@/config/paths';
+import { formatDate } from '@/lib/dates';
+import { getErrorMessage } from '@/lib/api-error';
+import { notifySuccess } from '@/lib/notifier';
+import { useQuote } from '../api/get-quote';
+import { useQuoteSettings } from '../api/get-quote-settings';
+import { useSendQuote } from '../api/send-quote';
+import { useUpdateQuote } from '../api/update-quote';
+import type { Quote } from '../types';
+import { QuoteLineEditor } from './quote-line-editor';
+import { QuoteLines } from './quote-lines';
+import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+import { QuoteTermsDrawer } from './quote-terms-drawer';
+import { RevisionCompare } from './revision-compare';
+
+export interface QuoteWorkspaceProps {
+  quoteId: string;
+  /** Owner and estimator write lines, start revisions and send. */
+  canWrite: boolean;
+}
+
+function revisionLabel(revision: Quote['revisions'][number], currency: string): string {
+  return `Revision ${revision.number} · ${revision.sentAt ? `sent ${formatDate(revision.sentAt)}` : 'being written'} · ${currency} ${formatCents(revision.totalCents)}`;
+}
+
+/** One quote for the shop: the working revision's lines (editable until sent), earlier revisions, and what changed between two. */
+export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
+  const working = useQuote(quoteId);
+  const [viewing, setViewing] = useState<number | undefined>(undefined);
+  const latestNumber = working.data?.latestRevision;
+  const shownNumber = viewing !== undefined && viewing !== latestNumber ? viewing : undefined;
+  const shown = useQuote(quoteId, shownNumber);
+  const settings = useQuoteSettings(canWrite);
+  const update = useUpdateQuote(quoteId);
+  const send = useSendQuote(working.data?.projectId ?? '');
+  const [termsOpen, setTermsOpen] = useState(false);
+  const navigate = useNavigate();
+
+  if (working.isPending) return <LoadingState rows={10} />;
+  if (working.isError) return <ErrorState error={working.error} onRetry={() => void working.refetch()} />;
+  const quote = working.data;
+  const revision = quote.revision;
+  const approved = quote.status === 'approved';
+  const editable = canWrite && !approved && !revision.sent && shownNumber === undefined;
+  const canSend = canWrite && !approved && !revision.sent && shownNumber === undefined;
+
+  const startRevision = () =>
+    update.mutate({}, { onSuccess: (next) => notifySuccess({ title: `Revision ${next.latestRevision} started`, description: 'Change its lines, then send it.' }) });
+  const sendQuote = () =>
+    send.mutate(quote.id, { onSuccess: (sent) => notifySuccess({ title: `Quote ${sent.label} sent`, description: `Revision ${sent.sentRevision} went to ${sent.customerName ?? 'the customer'}.` }) });
+
+  return (
+    <>
+      <PageHeader
+        eyebrow="Quote"
+        title={`${quote.label} · ${quote.projectTitle}`}
+        subtitle={
+          <Space wrap size={8}>
+            <span>For {quote.customerName ?? 'no customer'}</span>
+            <QuoteStatusTag status={quote.status} />
+            <DepositTag state={quote.depositState} />
+            <span>valid until {formatDate(revision.validUntil)}</span>
+          </Space>
+        }
+        extra={
+          <>
+            <Button onClick={() => navigate(toProjectDetail(quote.projectId))}>Back to the project</Button>
+            {canSend && (
+              <Button type="primary" loading={send.isPending} onClick={sendQuote}>
+                Send revision {revision.number} to the customer
+              </Button>
+            )}
+          </>
+        }
+      />
+      {send.isError && <Alert type="error" showIcon title={getErrorMessage(send.error)} style={{ marginBottom: 16 }} />}
+      <Card
+        data-testid="quote-revision"
+        title={shownNumber === undefined ? `Revision ${revision.number}${revision.sent ? ' (sent, frozen)' : ' (being written)'}` : `Revision ${shownNumber} (earlier)`}
+        extra={
+          quote.revisions.length > 1 && (
+            <Select
+              aria-label="Revision shown"
+              value={shownNumber ?? quote.latestRevision}
+              onChange={(number) => setViewing(number)}
+              options={quote.revisions.map((summary) => ({ value: summary.number, label: revisionLabel(summary, revision.currency) }))}
+              style={{ minWidth: 240 }}
+            />
+          )
+        }
+        style={{ marginBottom: 16 }}
+      >
+        {shownNumber !== undefined ? (
+          shown.data ? (
+            <QuoteLines quote={shown.data} />
+          ) : (
+            <LoadingState rows={4} />
+          )
+        ) : editable ? (
+          <>
+            <QuoteLineEditor
+              quote={quote}
+              defaultMarkupPercent={settings.data?.defaultMarkupPercent}
+              actions={
+                <Button
+                  onClick={() => {
+                    update.reset();
+                    setTermsOpen(true);
+                  }}
+                >
+                  Discount, deposit and validity
+                </Button>
+              }
+            />
+            <QuoteTermsDrawer
+              open={termsOpen}
+              revision={revision}
+              saving={update.isPending}
+              error={update.error}
+              onSubmit={(changes) => update.mutate(changes, { onSuccess: () => setTermsOpen(false) })}
+              onClose={() => setTermsOpen(false)}
+            />
+          </>
+        ) : (
+          <>
+            {revision.sent && (
+              <Alert
+                type="info"
+                showIcon
+                style={{ marginBottom: 12 }}
+                title={`Revision ${revision.number} was sent on ${formatDate(revision.sentAt)} and is frozen.`}
+                description={
+                  approved
+                    ? 'The customer approved it; an approved quote is not changed.'
+                    : canWrite
+                      ? `To change the quote, start revision ${revision.number + 1}: it begins as a copy you can edit and send.`
+                      : undefined
+                }
+                action={
+                  canWrite &&
+                  !approved && (
+                    <Button type="primary" loading={update.isPending} onClick={startRevision}>
+                      Start revision {revision.number + 1}
+                    </Button>
+                  )
+                }
+              />
+            )}
+            {update.isError && <Alert type="error" showIcon title={getErrorMessage(update.error)} style={{ marginBottom: 12 }} />}
+            <QuoteLines quote={quote} />
+          </>
+        )}
+      </Card>
+      {quote.revisions.length > 1 && (
+        <Card title="Compare revisions">
+          <RevisionCompare quote={quote} />
+        </Card>
+      )}
+      {quote.revisions.length <= 1 && (
+        <Typography.Paragraph type="secondary">Once a revision is sent and changed, the revisions can be compared here.</Typography.Paragraph>
+      )}
+    </>
+  );
+}
