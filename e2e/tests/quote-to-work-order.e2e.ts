@@ -41,7 +41,7 @@ async function changeQuantity(page: BrowserSession['page'], line: DraftLine, qua
   expect(quote.revision.lines.find((candidate) => candidate.key === line.key)?.quantity).toBe(quantity);
   await expectText(total, new RegExp(moneyText(quote.revision.totals.totalCents).replace(/[.,]/g, '\\$&')));
   expect(await total.innerText()).not.toBe(before);
-  await expectText(page.getByTestId(`quote-line-${line.key}`), new RegExp(`\\b${quantity}\\b`));
+  await expectVisible(page.getByTestId(`quote-line-${line.key}`).getByRole('cell', { name: String(quantity), exact: true }));
 }
 
 describe('from the quote to the work order: estimator, customer, fabricator', () => {
