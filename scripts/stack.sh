@@ -44,7 +44,7 @@ sources_changed() {
   for out in shared/dist seed-data/dist api/dist web/dist; do [ -d "$out" ] || return 0; done
   [ -n "$(find shared/src seed-data/src api/src web/src web/public web/index.html package-lock.json \
     shared/package.json seed-data/package.json api/package.json web/package.json \
-    shared/tsconfig*.json seed-data/tsconfig.json api/tsconfig*.json web/tsconfig.json web/vite.config.ts \
+    shared/tsconfig*.json seed-data/tsconfig.json api/tsconfig*.json web/tsconfig.json web/vite.config.ts web/scripts \
     -newer "$BUILD_STAMP" -print -quit 2>/dev/null)" ]
 }
 

@@ -2,10 +2,12 @@ import { fileURLToPath, URL } from 'node:url';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vite';
 import { compression } from 'vite-plugin-compression2';
+import { firstPaintPlugin } from './scripts/first-paint-plugin';
 
 export default defineConfig({
   plugins: [
     react(),
+    firstPaintPlugin(),
     // Brotli and gzip copies of every text asset beside the original; the API sends the one the browser accepts.
     compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024 }),
   ],

@@ -1,9 +1,13 @@
 /**
  * The web app's first load in headless Chromium (playwright-core with Debian's /usr/bin/chromium): the JavaScript
  * the sign-in page loads before it is usable, as transferred over the wire (compressed bytes, headers excluded),
- * and first contentful paint from the browser's own paint timing.
+ * and first contentful paint from the browser's own paint timing. Beside it, the paint floor of this machine at this
+ * moment: the same browser's first contentful paint of a bare one-line HTML page from a local server, measured in the
+ * same run (on a busy machine the browser's own start of rendering dominates both).
  */
 import { mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
@@ -14,17 +18,27 @@ export interface WebLoadFigures {
   javascriptTransferredBytes: number;
   javascriptDecodedBytes: number;
   firstContentfulPaintMs: number;
+  /** First contentful paint of a bare HTML page in the same conditions (see above). */
+  bareFirstContentfulPaintMs: number;
 }
 
-/** One cold load (fresh profile, empty cache) of `url`, waiting for the sign-in form. */
-export async function measureFirstLoad(url: string, executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium'): Promise<WebLoadFigures> {
+/** One cold load (fresh profile, empty cache) of `url`, waiting for the sign-in form unless `bare`. */
+export async function measureFirstLoad(
+  url: string,
+  bare = false,
+  executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+): Promise<Omit<WebLoadFigures, 'bareFirstContentfulPaintMs'>> {
   const profile = mkdtempSync(join(tmpdir(), 'swapwright-bench-'));
   const context = await chromium.launchPersistentContext(profile, { executablePath, headless: true, args: CHROMIUM_ARGS });
   try {
     const page = context.pages()[0] ?? (await context.newPage());
+    // The browser's own processes start first (a person's browser is already running); the page's cache stays empty.
+    await page.goto('about:blank');
     await page.goto(url, { waitUntil: 'load' });
-    await page.getByRole('button', { name: /sign in/i }).first().waitFor({ timeout: 30_000 });
-    await page.waitForLoadState('networkidle');
+    if (!bare) {
+      await page.getByRole('button', { name: /sign in/i }).first().waitFor({ timeout: 30_000 });
+      await page.waitForLoadState('networkidle');
+    }
     return await page.evaluate(() => {
       const scripts = (performance.getEntriesByType('resource') as PerformanceResourceTiming[]).filter((entry) =>
         /\.m?js(\?|$)/.test(new URL(entry.name).pathname),
@@ -43,10 +57,31 @@ export async function measureFirstLoad(url: string, executablePath = process.env
   }
 }
 
-/** The median of `runs` cold loads (each figure on its own). */
+/** Serves one line of HTML on 127.0.0.1 while `use` runs. */
+async function withBarePage<T>(use: (url: string) => Promise<T>): Promise<T> {
+  const server = createServer((_request, response) => {
+    response.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
+    response.end('<!doctype html><html lang="en"><title>Bare page</title><p>One line of text.</p></html>');
+  });
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  try {
+    return await use(`http://127.0.0.1:${(server.address() as AddressInfo).port}/`);
+  } finally {
+    await new Promise((resolve) => server.close(resolve));
+  }
+}
+
+/** The median of `runs` cold loads (each figure on its own), each followed by a load of the bare page. */
 export async function measureFirstLoads(url: string, runs = 5): Promise<WebLoadFigures> {
   const all: WebLoadFigures[] = [];
-  for (let run = 0; run < runs; run += 1) all.push(await measureFirstLoad(url));
+  await withBarePage(async (bareUrl) => {
+    for (let run = 0; run < runs; run += 1) {
+      const app = await measureFirstLoad(url);
+      const bare = await measureFirstLoad(bareUrl, true);
+      all.push({ ...app, bareFirstContentfulPaintMs: bare.firstContentfulPaintMs });
+      if (process.env.BENCH_VERBOSE) console.error(`first load ${run + 1}: ${app.firstContentfulPaintMs.toFixed(0)} ms, bare ${bare.firstContentfulPaintMs.toFixed(0)} ms`);
+    }
+  });
   const median = (pick: (f: WebLoadFigures) => number) => {
     const values = all.map(pick).sort((a, b) => a - b);
     return values[Math.floor(values.length / 2)];
@@ -56,6 +91,7 @@ export async function measureFirstLoads(url: string, runs = 5): Promise<WebLoadF
     javascriptTransferredBytes: median((f) => f.javascriptTransferredBytes),
     javascriptDecodedBytes: median((f) => f.javascriptDecodedBytes),
     firstContentfulPaintMs: median((f) => f.firstContentfulPaintMs),
+    bareFirstContentfulPaintMs: median((f) => f.bareFirstContentfulPaintMs),
   };
 }
 
