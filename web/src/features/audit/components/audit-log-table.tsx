@@ -2,7 +2,7 @@ import { AUDIT_KINDS } from '@swapwright/shared';
 import { Card, Segmented, Table, Tag, Typography } from 'antd';
 import type { TableProps } from 'antd';
 import { useState } from 'react';
-import { ErrorState } from '@/components/query-state';
+import { EmptyState, ErrorState } from '@/components/query-state';
 import { formatDateTime } from '@/lib/dates';
 import { serverPagination } from '@/lib/table';
 import { useAuditEvents } from '../api/get-audit-events';
@@ -67,6 +67,20 @@ export function AuditLogTable() {
           columns={columns}
           dataSource={events.data?.items ?? []}
           pagination={serverPagination(query, events.data?.total)}
+          scroll={{ x: 720 }}
+          locale={{
+            emptyText: events.isPending ? (
+              ' '
+            ) : (
+              <EmptyState
+                description={
+                  query.kind
+                    ? `No ${KIND_LABELS[query.kind].toLowerCase()} changes recorded yet.`
+                    : 'Nothing recorded yet. Sending or answering a quote, a deposit, a rate change, a stock count or reservation, a sheet sign-off or a member change each adds a line here.'
+                }
+              />
+            ),
+          }}
           onChange={(pagination) => {
             const pageSize = pagination.pageSize ?? query.pageSize;
             setQuery({ ...query, page: pageSize !== query.pageSize ? 1 : (pagination.current ?? 1), pageSize });

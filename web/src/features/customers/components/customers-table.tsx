@@ -1,4 +1,4 @@
-import { Button, Flex, Input, Popconfirm, Space, Table, Typography } from 'antd';
+import { Button, Flex, Grid, Input, Popconfirm, Space, Table, Typography } from 'antd';
 import type { ColumnsType, TableProps } from 'antd/es/table';
 import { ErrorState, EmptyState } from '@/components/query-state';
 import { formatDate, serverPagination, sorterToParams, sortOrderFor } from '@/lib/table';
@@ -17,6 +17,8 @@ export type CustomersTableProps = {
 export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, onCreate }: CustomersTableProps) {
   const customers = useCustomers(query);
   const remove = useDeleteCustomer();
+  // Below antd's md (768 px) email and phone ride under the name, so the name is not broken mid-word.
+  const narrow = Grid.useBreakpoint().md !== true;
 
   const columns: ColumnsType<Customer> = [
     {
@@ -25,14 +27,23 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       key: 'name',
       sorter: true,
       sortOrder: sortOrderFor('name', query.sort, query.order),
-      render: (name: string, c) =>
-        canEdit && onEdit ? (
-          <Typography.Link onClick={() => onEdit(c)} strong>
-            {name}
-          </Typography.Link>
-        ) : (
-          <Typography.Text strong>{name}</Typography.Text>
-        ),
+      render: (name: string, c) => (
+        <Flex vertical>
+          {canEdit && onEdit ? (
+            <Typography.Link onClick={() => onEdit(c)} strong>
+              {name}
+            </Typography.Link>
+          ) : (
+            <Typography.Text strong>{name}</Typography.Text>
+          )}
+          {narrow && c.email && (
+            <a href={`mailto:${c.email}`} style={{ fontSize: 13, overflowWrap: 'anywhere' }}>
+              {c.email}
+            </a>
+          )}
+          {narrow && c.phone && <a href={`tel:${c.phone.replace(/[^\d+]/g, '')}`} style={{ fontSize: 13 }}>{c.phone}</a>}
+        </Flex>
+      ),
     },
     {
       title: 'Email',
@@ -41,8 +52,9 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       sorter: true,
       sortOrder: sortOrderFor('email', query.sort, query.order),
       render: (email: string | null) => (email ? <a href={`mailto:${email}`}>{email}</a> : '—'),
+      responsive: ['md'],
     },
-    { title: 'Phone', dataIndex: 'phone', key: 'phone', render: (p: string | null) => p || '—', responsive: ['sm'] },
+    { title: 'Phone', dataIndex: 'phone', key: 'phone', render: (p: string | null) => p || '—', responsive: ['md'] },
     {
       title: 'Portal',
       key: 'portal',

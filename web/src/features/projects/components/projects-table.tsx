@@ -1,4 +1,4 @@
-import { Button, Flex, Input, Table, Typography } from 'antd';
+import { Button, Flex, Grid, Input, Select, Table, Typography } from 'antd';
 import type { ColumnsType, TableProps } from 'antd/es/table';
 import { Link } from 'react-router-dom';
 import { toProjectDetail } from '@/config/paths';
@@ -20,6 +20,9 @@ export type ProjectsTableProps = {
 
 export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCreate, emptyText }: ProjectsTableProps) {
   const projects = useProjects(query);
+  // Below antd's md (768 px) the customer rides under the title and the stage filter sits beside the search,
+  // so a phone shows two readable columns instead of a title squeezed to one word a line.
+  const narrow = Grid.useBreakpoint().md !== true;
 
   const columns: ColumnsType<Project> = [
     {
@@ -33,14 +36,15 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
           <Link to={toProjectDetail(p.id)} style={{ fontWeight: 600 }}>
             {title}
           </Link>
-          <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+          {showCustomer && narrow && p.customer?.name && <Typography.Text style={{ fontSize: 13 }}>{p.customer.name}</Typography.Text>}
+          <Typography.Paragraph type="secondary" style={{ fontSize: 13, margin: 0 }} ellipsis={narrow ? { rows: 2, tooltip: p.vehicleDescription } : false}>
             {p.vehicleDescription}
-          </Typography.Text>
+          </Typography.Paragraph>
         </Flex>
       ),
     },
     ...(showCustomer
-      ? ([{ title: 'Customer', key: 'customer', render: (_: unknown, p: Project) => p.customer?.name ?? '—' }] as ColumnsType<Project>)
+      ? ([{ title: 'Customer', key: 'customer', responsive: ['md'], render: (_: unknown, p: Project) => p.customer?.name ?? '—' }] as ColumnsType<Project>)
       : []),
     {
       title: 'Use',
@@ -100,14 +104,27 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
 
   return (
     <Flex vertical gap={12}>
-      <Input.Search
-        allowClear
-        placeholder="Search by project or vehicle"
-        aria-label="Search projects"
-        defaultValue={query.search}
-        onSearch={(value) => onQueryChange({ search: value.trim() || undefined, page: 1 })}
-        style={{ maxWidth: 360 }}
-      />
+      <Flex gap={8} wrap>
+        <Input.Search
+          allowClear
+          placeholder="Search by project or vehicle"
+          aria-label="Search projects"
+          defaultValue={query.search}
+          onSearch={(value) => onQueryChange({ search: value.trim() || undefined, page: 1 })}
+          style={{ maxWidth: 360, flex: '1 1 220px' }}
+        />
+        {narrow && (
+          <Select<ProjectStatus>
+            allowClear
+            aria-label="Stage"
+            placeholder="Any stage"
+            value={query.status}
+            onChange={(status) => onQueryChange({ status: status ?? undefined, page: 1 })}
+            options={projectStatuses.map((s) => ({ value: s, label: statusLabels[s] }))}
+            style={{ flex: '1 1 160px', maxWidth: 240 }}
+          />
+        )}
+      </Flex>
       <Table<Project>
         aria-label="Projects"
         data-testid="projects-table"

@@ -5,6 +5,7 @@ import { useListSearchParams } from '@/hooks/use-list-search-params';
 import { apiClient } from '@/lib/api-client';
 import { customerStubs, pageOf } from '@/test/fixtures';
 import { renderWithApp } from '@/test/render';
+import { setWindowWidth } from '@/test/viewport';
 import { customerSortFields } from '../../types';
 import { CustomersTable } from '../customers-table';
 
@@ -72,5 +73,27 @@ describe('CustomersTable', () => {
     renderWithApp(<CustomersTable query={{ page: 1, pageSize: 20 }} onQueryChange={vi.fn()} canEdit onCreate={onCreate} />);
     await userEvent.click(await screen.findByRole('button', { name: 'Add a customer' }, { timeout: 10_000 }));
     expect(onCreate).toHaveBeenCalled();
+  });
+
+  it('on a phone puts email and phone under the name instead of squeezing the name into a column', async () => {
+    setWindowWidth(390);
+    mockCustomersApi();
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers' });
+    const table = await screen.findByRole('table', { name: 'Customers' });
+    const nameCell = (await within(table).findByText('Marlo Penhallow')).closest('td') as HTMLElement;
+    expect(within(nameCell).getByRole('link', { name: 'marlo@example.com' }).getAttribute('href')).toBe('mailto:marlo@example.com');
+    expect(within(nameCell).getByRole('link', { name: '555-0142' }).getAttribute('href')).toBe('tel:5550142');
+    expect(within(table).queryByRole('columnheader', { name: /Email/ })).toBeNull();
+  });
+
+  it('on a wide screen keeps email and phone in their own columns', async () => {
+    setWindowWidth(1440);
+    mockCustomersApi();
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers' });
+    const table = await screen.findByRole('table', { name: 'Customers' });
+    const nameCell = (await within(table).findByText('Marlo Penhallow')).closest('td') as HTMLElement;
+    expect(within(nameCell).queryByText('marlo@example.com')).toBeNull();
+    expect(within(table).getByRole('columnheader', { name: /Email/ })).toBeInTheDocument();
+    expect(within(table).getByText('marlo@example.com')).toBeInTheDocument();
   });
 });
