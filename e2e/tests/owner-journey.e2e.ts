@@ -32,6 +32,28 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
     await saveScreenshot(page, 'owner-shop-settings');
   });
 
+  it('sets the deposit share on the quote terms, and it is there after a reload', async () => {
+    const { page } = owner;
+    const terms = page.getByRole('form', { name: 'Quote terms' });
+    const deposit = terms.getByRole('spinbutton', { name: 'Deposit' });
+    await deposit.waitFor();
+    const before = await deposit.inputValue();
+    const save = async (value: string) => {
+      await deposit.fill(value);
+      const saved = page.waitForResponse((r) => r.url().endsWith('/api/quote-settings') && r.request().method() === 'PUT');
+      await terms.getByRole('button', { name: 'Save quote terms' }).click();
+      expect((await saved).status()).toBe(200);
+    };
+    await save('35');
+    await page.reload();
+    await deposit.waitFor();
+    await page.waitForFunction(() => (document.querySelector('input[aria-label="Deposit"]') as HTMLInputElement | null)?.value === '35.00');
+    expect(await deposit.inputValue()).toBe('35.00');
+    await saveScreenshot(page, 'owner-quote-terms');
+    // other journeys quote with the demo shop's deposit
+    await save(before);
+  });
+
   it('invites an estimator, who joins through the e-mailed link', async () => {
     const { page } = owner;
     const email = `new.estimator.${Date.now()}@ironbark.test`;

@@ -10,3 +10,7 @@ export type UpdateShopInput = RequestBodyOf<'/api/shops/current', 'patch'>;
 export function hasShopRates(shop: CurrentShop): shop is Shop {
   return shop.view === 'full';
 }
+
+/** The shop's quote terms: labor tax, supplies cap, deposit, default markup, validity and printed terms. */
+export type QuoteSettings = Schemas['QuoteSettingsResponseDto'];
+export type UpdateQuoteSettingsInput = RequestBodyOf<'/api/quote-settings', 'put'>;

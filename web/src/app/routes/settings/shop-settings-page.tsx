@@ -5,6 +5,7 @@ import { AuditLogTable } from '@/features/audit/components/audit-log-table';
 import { DeviationLimitsForm } from '@/features/measurements/components/deviation-limits-form';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useShop } from '@/features/shop/api/get-shop';
+import { QuoteTermsForm } from '@/features/shop/components/quote-terms-form';
 import { ShopSettingsForm } from '@/features/shop/components/shop-settings-form';
 import { hasShopRates } from '@/features/shop/types';
 
@@ -22,6 +23,11 @@ export function ShopSettingsPage() {
         <ShopSettingsForm shop={shop.data} canEdit={user.role === 'owner'} />
       ) : (
         <Alert type="info" showIcon title="The shop's rates are shown to its staff only." />
+      )}
+      {user.role === 'owner' && (
+        <div style={{ marginTop: 16 }}>
+          <QuoteTermsForm canEdit currency={shop.data && hasShopRates(shop.data) ? shop.data.currency : undefined} />
+        </div>
       )}
       {user.role !== 'customer' && (
         <div style={{ marginTop: 16 }}>

@@ -1,10 +1,10 @@
 import { Button, Card, Col, Form, Input, Radio, Row, Typography } from 'antd';
-import { BoundedNumberInput } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
 import { useUpdateShop } from '../api/update-shop';
 import type { Shop, UpdateShopInput } from '../types';
+import { NumberField } from './number-field';
 
 export type ShopSettingsFormProps = { shop: Shop; canEdit: boolean };
 
@@ -78,41 +78,13 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
       <Card title="Rates for quotes" style={{ marginBottom: 16 }}>
         <Row gutter={16}>
           <Col xs={24} sm={8}>
-            <Form.Item
-              label="Labor rate per hour"
-              name="laborRatePerHour"
-              rules={[
-                { required: true, message: 'Enter the labor rate' },
-                { type: 'number', min: 0, max: 10000, message: 'Between 0 and 10,000' },
-              ]}
-            >
-              <BoundedNumberInput style={{ width: '100%' }} min={0} max={10000} precision={2} step={5} {...money} aria-label="Labor rate per hour" />
-            </Form.Item>
+            <NumberField label="Labor rate per hour" name="laborRatePerHour" requiredMessage="Enter the labor rate" min={0} max={10000} rangeMessage="Between 0 and 10,000" precision={2} step={5} {...money} />
           </Col>
           <Col xs={24} sm={8}>
-            <Form.Item
-              label="Sales tax"
-              name="taxRatePercent"
-              rules={[
-                { required: true, message: 'Enter the tax rate (0 if none)' },
-                { type: 'number', min: 0, max: 100, message: 'Between 0 and 100 %' },
-              ]}
-            >
-              <BoundedNumberInput style={{ width: '100%' }} min={0} max={100} precision={2} step={0.25} suffix="%" aria-label="Sales tax" />
-            </Form.Item>
+            <NumberField label="Sales tax" name="taxRatePercent" extra="On parts." requiredMessage="Enter the tax rate (0 if none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={0.25} suffix="%" />
           </Col>
           <Col xs={24} sm={8}>
-            <Form.Item
-              label="Shop supplies"
-              name="shopSuppliesPercent"
-              extra="Added to quotes for consumables."
-              rules={[
-                { required: true, message: 'Enter the shop supplies share (0 if none)' },
-                { type: 'number', min: 0, max: 50, message: 'Between 0 and 50 %' },
-              ]}
-            >
-              <BoundedNumberInput style={{ width: '100%' }} min={0} max={50} precision={2} step={0.5} suffix="%" aria-label="Shop supplies" />
-            </Form.Item>
+            <NumberField label="Shop supplies" name="shopSuppliesPercent" extra="Added to quotes for consumables." requiredMessage="Enter the shop supplies share (0 if none)" min={0} max={50} rangeMessage="Between 0 and 50 %" precision={2} step={0.5} suffix="%" />
           </Col>
         </Row>
         <Typography.Text type="secondary">

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { QuoteSettings, UpdateQuoteSettingsInput } from '../types';
+import { shopKeys } from './shop-keys';
+
+export async function updateQuoteSettings(changes: UpdateQuoteSettingsInput): Promise<QuoteSettings> {
+  const { data } = await apiClient.put<QuoteSettings>('/quote-settings', changes, { skipErrorNotification: true });
+  return data;
+}
+
+export function useUpdateQuoteSettings({ onSuccess }: { onSuccess?: (settings: QuoteSettings) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateQuoteSettings,
+    onSuccess: (settings) => {
+      queryClient.setQueryData(shopKeys.quoteSettings(), settings);
+      onSuccess?.(settings);
+    },
+  });
+}
