@@ -38,6 +38,7 @@ export function MeasurementSheetPage() {
   const [filter, setFilter] = useState<SheetFilter | null>(null);
   const [editingTemplate, setEditingTemplate] = useState(false);
   const canEdit = canMeasure(user.role);
+  const isCustomer = user.role === 'customer';
 
   const rows = useMemo(() => (sheet.data ? sheetRows(sheet.data) : []), [sheet.data]);
   const counts = useMemo(() => sheetCounts(rows), [rows]);
@@ -53,6 +54,7 @@ export function MeasurementSheetPage() {
     canAdd: canAddMeasurementPhotos(user.role),
     canDelete: (photo) => photo.uploadedById === user.id || user.role === 'owner',
     canReview: canEdit,
+    pendingLabel: user.role === 'customer' ? 'Waiting for the shop' : 'From the customer',
     onAdd: uploads.add,
     onRetry: uploads.retry,
     onDismiss: uploads.dismiss,
@@ -81,6 +83,21 @@ export function MeasurementSheetPage() {
       />
       <Flex vertical gap={12}>
         <MeasurementSafety />
+        {isCustomer ? (
+          <Alert
+            type="info"
+            showIcon
+            data-testid="customer-photo-help"
+            title="Photos help the shop before the truck arrives"
+            description="Add photos under a point (its drawing shows where) or under Other photos at the bottom. The shop's fabricator looks at each one and accepts it or takes a better one; until then it shows as waiting for the shop. The shop takes the readings itself."
+          />
+        ) : (
+          !canEdit && (
+            <Typography.Text type="secondary" data-testid="read-only-note">
+              Readings are taken and signed off by a fabricator or the owner; you see them here as they come in.
+            </Typography.Text>
+          )
+        )}
         {!s.chassisId ? (
           <Alert
             type="info"
@@ -127,7 +144,9 @@ export function MeasurementSheetPage() {
         ))}
         <Card size="small" title="Other photos" data-testid="general-photos">
           <Typography.Paragraph type="secondary" style={{ fontSize: 13 }}>
-            The truck as it arrived, the customer's own pictures, anything not tied to one point.
+            {isCustomer
+              ? 'Your truck as it is now, whole and from each side, and anything you want the shop to see.'
+              : "The truck as it arrived, the customer's own pictures, anything not tied to one point."}
           </Typography.Paragraph>
           <PhotoStrip label="the truck" pointId={null} photos={general} uploads={[...uploadsFor(null), ...replacing]} uploadedIds={uploads.uploadedIds} actions={photoActions} />
         </Card>

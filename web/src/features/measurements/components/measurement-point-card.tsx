@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
-import { formatDeviation, formatReading, readEntry, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
+import { formatDeviation, formatReading, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
 import type { SetMeasurementValueBody } from '../types';
 import { PhotoStrip, type PhotoActions } from './photo-strip';
 import { PointDrawing } from './point-drawing';
@@ -21,7 +21,9 @@ export type MeasurementPointCardProps = {
   photoActions: PhotoActions;
 };
 
-function ReadingPreview({ reading, fmt }: { reading: ReturnType<typeof readEntry>; fmt: (v: number, unit: 'mm' | 'deg') => string }) {
+type ReadingPreviewProps = { reading: ReturnType<typeof readEntry>; fmt: (v: number, unit: 'mm' | 'deg') => string; catalogValue: number | null; system: UnitSystem };
+
+function ReadingPreview({ reading, fmt, catalogValue, system }: ReadingPreviewProps) {
   if (reading.ok === null) return null;
   if (reading.ok === false) {
     return (
@@ -31,10 +33,18 @@ function ReadingPreview({ reading, fmt }: { reading: ReturnType<typeof readEntry
     );
   }
   return (
-    <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reading-preview">
-      Reads as {fmt(reading.value, reading.unit)}
-      {reading.unit === 'mm' && ` (${Math.round(reading.value * 10) / 10} mm)`}
-    </Typography.Text>
+    <>
+      <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reading-preview">
+        Reads as {fmt(reading.value, reading.unit)}
+        {reading.unit === 'mm' && ` (${Math.round(reading.value * 10) / 10} mm)`}
+      </Typography.Text>
+      {catalogValue !== null && unitSlip(reading, { catalogValue }) && (
+        <Typography.Text type="warning" style={{ fontSize: 13 }} data-testid="unit-slip">
+          That is far from the catalog&apos;s {fmt(catalogValue, 'mm')}: check the unit. A bare number is read in{' '}
+          {system === 'in' ? 'inches' : 'millimetres'}; add mm, in or ft after the figure to say which.
+        </Typography.Text>
+      )}
+    </>
   );
 }
 
@@ -155,7 +165,7 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               onPressEnter={() => (signedOff ? setAskReason(true) : void save())}
               style={{ fontSize: 20, height: 52 }}
             />
-            <ReadingPreview reading={reading} fmt={fmt} />
+            <ReadingPreview reading={reading} fmt={fmt} catalogValue={point.catalogValue} system={system} />
             <Flex gap={8} wrap>
               <Input
                 aria-label={`Tolerance: ${point.label}`}

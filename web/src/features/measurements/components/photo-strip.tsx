@@ -13,12 +13,38 @@ export type PhotoActions = {
   canDelete: (photo: MeasurementPhoto) => boolean;
   /** Accept or replace a customer's photo (fabricator or owner). */
   canReview: boolean;
+  /** What a customer's photo not yet accepted is called for this person ("Waiting for the shop" to the customer). */
+  pendingLabel: string;
   onAdd: (files: File[], target: { pointId?: string | null; replacesPhotoId?: string | null }) => void;
   onRetry: (key: string) => void;
   onDismiss: (key: string) => void;
   onDelete: (photo: MeasurementPhoto) => Promise<unknown>;
   onAccept: (photo: MeasurementPhoto) => void;
 };
+
+/** A finger-sized button height on a phone. */
+const TOUCH = 40;
+
+const uploadedAt = (photo: MeasurementPhoto) => `${photo.uploadedBy}, ${formatDateTime(photo.createdAt)}`;
+
+/** A customer's photo not accepted yet; the words wrap inside the narrow tile. */
+function PendingTag({ label }: { label: string }) {
+  return (
+    <Tag color="gold" style={{ whiteSpace: 'normal', lineHeight: 1.25, marginInlineEnd: 0, paddingBlock: 1, textAlign: 'center' }}>
+      {label}
+    </Tag>
+  );
+}
+
+function DeleteButton({ onConfirm }: { onConfirm: () => unknown }) {
+  return (
+    <Popconfirm title="Delete this photo?" okText="Delete" okButtonProps={{ danger: true }} onConfirm={onConfirm}>
+      <Button danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start', height: 32 }}>
+        Delete
+      </Button>
+    </Popconfirm>
+  );
+}
 
 function CameraIcon() {
   return (
@@ -30,7 +56,7 @@ function CameraIcon() {
 }
 
 /** The hidden file box behind a camera button: on a phone `capture` opens the rear camera. */
-function CameraButton({ label, onFiles, children, size = 'large' }: { label: string; onFiles: (files: File[]) => void; children: ReactNode; size?: 'large' | 'middle' }) {
+function CameraButton({ label, onFiles, children, block = false }: { label: string; onFiles: (files: File[]) => void; children: ReactNode; block?: boolean }) {
   const input = useRef<HTMLInputElement>(null);
   return (
     <>
@@ -48,7 +74,7 @@ function CameraButton({ label, onFiles, children, size = 'large' }: { label: str
           if (files.length > 0) onFiles(files);
         }}
       />
-      <Button size={size} onClick={() => input.current?.click()}>
+      <Button size={block ? 'middle' : 'large'} block={block} style={block ? { height: TOUCH } : undefined} onClick={() => input.current?.click()}>
         {children}
       </Button>
     </>
@@ -71,27 +97,25 @@ function StoredPhoto({ photo, alt, actions }: { photo: MeasurementPhoto; alt: st
       testId="photo-thumb"
       footer={
         <Flex vertical gap={2}>
-          {photo.status === 'pending' && <Tag color="gold">From the customer</Tag>}
+          {photo.status === 'pending' && <PendingTag label={actions.pendingLabel} />}
           <Typography.Text type="secondary" style={{ fontSize: 11, lineHeight: 1.2 }}>
-            {photo.uploadedBy}, {formatDateTime(photo.createdAt)}
+            {uploadedAt(photo)}
           </Typography.Text>
           {photo.status === 'pending' && actions.canReview && (
-            <Flex gap={4} wrap>
-              <Button size="small" onClick={() => actions.onAccept(photo)}>
+            <Flex vertical gap={6} style={{ marginTop: 2 }}>
+              <Button block style={{ height: TOUCH }} aria-label={`Accept the customer's photo (${uploadedAt(photo)})`} onClick={() => actions.onAccept(photo)}>
                 Accept
               </Button>
-              <CameraButton size="middle" label={`Replace the customer's photo ${photo.id}`} onFiles={(files) => actions.onAdd(files.slice(0, 1), { replacesPhotoId: photo.id })}>
+              <CameraButton
+                block
+                label={`Replace the customer's photo (${uploadedAt(photo)})`}
+                onFiles={(files) => actions.onAdd(files.slice(0, 1), { replacesPhotoId: photo.id })}
+              >
                 Replace
               </CameraButton>
             </Flex>
           )}
-          {actions.canDelete(photo) && (
-            <Popconfirm title="Delete this photo?" okText="Delete" okButtonProps={{ danger: true }} onConfirm={() => actions.onDelete(photo)}>
-              <Button size="small" danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start' }}>
-                Delete
-              </Button>
-            </Popconfirm>
-          )}
+          {actions.canDelete(photo) && <DeleteButton onConfirm={() => actions.onDelete(photo)} />}
         </Flex>
       }
     >
@@ -131,30 +155,24 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
               <Typography.Text type="danger" style={{ fontSize: 11, lineHeight: 1.2 }} role="alert">
                 {upload.error}
               </Typography.Text>
-              <Flex gap={4}>
-                <Button size="small" type="primary" onClick={() => actions.onRetry(upload.key)}>
+              <Flex vertical gap={6}>
+                <Button block type="primary" style={{ height: TOUCH }} onClick={() => actions.onRetry(upload.key)}>
                   Retry
                 </Button>
-                <Button size="small" onClick={() => actions.onDismiss(upload.key)}>
+                <Button block style={{ height: TOUCH }} onClick={() => actions.onDismiss(upload.key)}>
                   Drop
                 </Button>
               </Flex>
             </>
           )}
+          {stored?.status === 'pending' && <PendingTag label={actions.pendingLabel} />}
           {stored && actions.canDelete(stored) && (
-            <Popconfirm
-              title="Delete this photo?"
-              okText="Delete"
-              okButtonProps={{ danger: true }}
+            <DeleteButton
               onConfirm={async () => {
                 await actions.onDelete(stored);
                 actions.onDismiss(upload.key);
               }}
-            >
-              <Button size="small" danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start' }}>
-                Delete
-              </Button>
-            </Popconfirm>
+            />
           )}
         </Flex>
       }

@@ -89,6 +89,21 @@ export function readEntry(text: string, point: Pick<MeasurementPoint, 'kind'>, s
   return parseMeasurementEntry(normalised, point.kind, system);
 }
 
+/**
+ * A length reading more than five times or less than a fifth of what the catalog gives is a slip of the unit rather
+ * than a tired or modified truck: millimetres read as inches are 25.4 times too large, inches as millimetres 25.4
+ * times too small, feet for inches 12 times (NIST SP 811 (2008) B.8). The sheet says so before it is saved. The factor
+ * of five is common practice (no published source): no sag, lift or bent rail moves a point that far. Angles are left
+ * alone (a few degrees either way is normal).
+ */
+export function unitSlip(reading: EntryReading, point: Pick<MeasurementPoint, 'catalogValue'>): boolean {
+  if (reading.ok !== true || reading.unit !== 'mm') return false;
+  const catalog = point.catalogValue;
+  if (catalog === null || catalog <= 0 || reading.value <= 0) return false;
+  const ratio = reading.value / catalog;
+  return ratio > 5 || ratio < 0.2;
+}
+
 /** A change to a signed-off sheet needs a reason (the API refuses it without one). */
 export function needsReason(sheet: Pick<MeasurementSheet, 'signedOffAt'>): boolean {
   return sheet.signedOffAt !== null;

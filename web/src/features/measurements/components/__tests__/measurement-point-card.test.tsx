@@ -10,6 +10,7 @@ const noPhotos: MeasurementPointCardProps['photoActions'] = {
   canAdd: true,
   canDelete: () => false,
   canReview: false,
+  pendingLabel: 'From the customer',
   onAdd: () => undefined,
   onRetry: () => undefined,
   onDismiss: () => undefined,
@@ -48,6 +49,19 @@ describe('a point of the sheet', () => {
     await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '317.5', unit: 'mm' }));
     expect(screen.getByRole('img', { name: 'Where to measure: Front crossmember: top' })).toBeInTheDocument();
     expect(screen.getByText('Missing')).toBeInTheDocument();
+  });
+
+  it('warns, before saving, when a reading is most likely in the wrong unit', () => {
+    renderCard();
+    const box = screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' });
+    // Source: NIST SP 811 (2008) B.8: 1 ft = 304.8 mm; 12 1/2 ft = 3810 mm, ten times the catalog's crossmember top.
+    fireEvent.change(box, { target: { value: '12 1/2 ft' } });
+    expect(screen.getByTestId('reading-preview')).toHaveTextContent('3810 mm');
+    expect(screen.getByTestId('unit-slip')).toHaveTextContent(/check the unit\. A bare number is read in inches/);
+    // It still saves (the truck may really be that way): the warning only asks for a look.
+    expect(screen.getByRole('button', { name: 'Save reading' })).toBeEnabled();
+    fireEvent.change(box, { target: { value: '14' } });
+    expect(screen.queryByTestId('unit-slip')).not.toBeInTheDocument();
   });
 
   it('will not save what it cannot read', () => {

@@ -16,6 +16,7 @@ function Harness() {
     canAdd: true,
     canDelete: () => false,
     canReview: false,
+    pendingLabel: 'From the customer',
     onAdd: uploads.add,
     onRetry: uploads.retry,
     onDismiss: uploads.dismiss,

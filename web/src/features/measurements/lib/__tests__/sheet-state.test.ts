@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { filterRows, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, valueBody } from '../sheet-state';
+import { filterRows, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, unitSlip, valueBody } from '../sheet-state';
 import type { MeasurementPhoto } from '../../types';
 import { POINTS, sheetStub } from './sheet-fixture';
 
@@ -16,6 +16,24 @@ describe('reading what was typed at the truck', () => {
     expect(readEntry('318', length, 'mm')).toEqual({ ok: true, value: 318, unit: 'mm' });
     // Source: NIST SP 811 (2008) B.8: 12.5 in × 25.4 = 317.5 mm; a decimal comma reads as a point.
     expect(readEntry('317,5', length, 'mm')).toEqual({ ok: true, value: 317.5, unit: 'mm' });
+  });
+
+  it('notices a reading that is most likely in the wrong unit before it is saved', () => {
+    const top = { catalogValue: 355 };
+    // Source: NIST SP 811 (2008) B.8: 1 ft = 12 in = 304.8 mm and 1 in = 25.4 mm exactly.
+    // 12 1/2 ft = 3810 mm: over ten times the catalog's 355 mm.
+    expect(unitSlip(readEntry('12 1/2 ft', length, 'in'), top)).toBe(true);
+    // 355 typed with the inch setting = 9017 mm; 14 typed with the millimetre setting = 14 mm.
+    expect(unitSlip(readEntry('355', length, 'in'), top)).toBe(true);
+    expect(unitSlip(readEntry('14', length, 'mm'), top)).toBe(true);
+    // Common practice (no published source): within a fifth to five times the catalog is a real truck, not a slip,
+    // even a setback of 90 mm read as 200 mm.
+    expect(unitSlip(readEntry('14', length, 'in'), top)).toBe(false);
+    expect(unitSlip(readEntry('180 mm', length, 'in'), top)).toBe(false);
+    expect(unitSlip(readEntry('1700 mm', length, 'in'), top)).toBe(false);
+    expect(unitSlip(readEntry('200 mm', length, 'in'), { catalogValue: 90 })).toBe(false);
+    expect(unitSlip(readEntry('3°', angle, 'in'), { catalogValue: 1 })).toBe(false);
+    expect(unitSlip(readEntry('355', length, 'in'), { catalogValue: null })).toBe(false);
   });
 
   it('reads angles in degrees and refuses what it cannot read, with a sentence', () => {

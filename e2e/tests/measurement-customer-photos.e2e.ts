@@ -1,0 +1,104 @@
+import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
+import type { Page } from 'playwright-core';
+import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { signInAs } from './support/session';
+
+const PHONE = { width: 390, height: 844 };
+const PROJECT = DEMO_PROJECT_IDS.ridgeback;
+
+/** A small real JPEG drawn and encoded by the browser (a plain plate in the given shade, 320 × 240). */
+async function makeJpeg(page: Page, shade: string): Promise<Buffer> {
+  const base64 = await page.evaluate((fill) => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 320;
+    canvas.height = 240;
+    const ctx = canvas.getContext('2d')!;
+    ctx.fillStyle = fill;
+    ctx.fillRect(0, 0, 320, 240);
+    return canvas.toDataURL('image/jpeg', 0.8).split(',')[1];
+  }, shade);
+  return Buffer.from(base64, 'base64');
+}
+
+describe("the customer's own photos: added before the truck arrives, accepted or replaced by the fabricator", () => {
+  let browser: BrowserSession;
+
+  afterEach(async () => {
+    await browser?.close();
+  });
+
+  it('the customer adds two photos of the truck on a phone; they wait for the shop', async () => {
+    browser = await openBrowser();
+    const { page } = browser;
+    await signInAs(page, 'customer');
+    await page.setViewportSize(PHONE);
+    await page.goto('/my-projects');
+    await page.getByRole('link', { name: /Harlan Ridgeback 1978/ }).first().click();
+    await page.getByRole('button', { name: 'Measurements and photos' }).click();
+    await expectVisible(page.getByRole('heading', { name: 'Measurement sheet' }));
+    await expectText(page.getByTestId('customer-photo-help'), /accepts it or takes a better one/);
+
+    const general = page.getByTestId('general-photos');
+    let stored = 0;
+    page.on('response', (r) => {
+      if (r.url().endsWith('/measurement-sheet/photos') && r.request().method() === 'POST' && r.status() === 201) stored += 1;
+    });
+    await general.getByLabel('Take or add photos: the truck').setInputFiles([
+      { name: 'driver-side.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#7d8a94') },
+      { name: 'engine-bay.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#4a5560') },
+    ]);
+    // each photo goes up on its own, with its own progress, and ends as a thumbnail waiting for the shop
+    await general.getByTestId('photo-thumb').nth(1).waitFor();
+    await expectText(general.getByTestId('photo-thumb').nth(0), /Uploaded[\s\S]*Waiting for the shop/);
+    await expectText(general.getByTestId('photo-thumb').nth(1), /Uploaded[\s\S]*Waiting for the shop/);
+    expect(stored).toBe(2);
+    // only the shop accepts or replaces them
+    expect(await general.getByRole('button', { name: /^Accept/ }).count()).toBe(0);
+    await general.scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await expectFitsWidth(page);
+    await saveScreenshot(page, 'customer-photos-phone');
+  });
+
+  it('the fabricator accepts one photo and replaces the other with a better one', async () => {
+    browser = await openBrowser();
+    const { page } = browser;
+    await signInAs(page, 'fabricator');
+    await page.setViewportSize(PHONE);
+    await page.goto(`/projects/${PROJECT}/measurements`);
+    await expectVisible(page.getByRole('heading', { name: 'Measurement sheet' }));
+
+    const general = page.getByTestId('general-photos');
+    const pending = general.getByTestId('photo-thumb').filter({ hasText: 'From the customer' });
+    await pending.nth(1).waitFor();
+    expect(await pending.count()).toBe(2);
+    await general.scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await expectFitsWidth(page);
+    await saveScreenshot(page, 'customer-photos-review-phone');
+
+    const accepted = page.waitForResponse((r) => /\/measurement-photos\/[0-9a-f-]+\/accept$/.test(r.url()));
+    await pending.first().getByRole('button', { name: /^Accept the customer's photo/ }).click();
+    expect((await accepted).status()).toBe(200);
+    await general.getByTestId('photo-thumb').filter({ hasText: 'From the customer' }).nth(1).waitFor({ state: 'detached' });
+
+    const replaced = page.waitForResponse((r) => r.url().endsWith('/measurement-sheet/photos') && r.request().method() === 'POST');
+    await pending
+      .first()
+      .getByLabel(/^Replace the customer's photo/)
+      .setInputFiles({ name: 'engine-bay-from-the-lift.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#30363d') });
+    const response = await replaced;
+    expect(response.status()).toBe(201);
+    expect(((await response.json()) as Array<{ status: string }>)[0].status).toBe('accepted');
+    // the customer's photo is gone, the replacement and the accepted one stay, nothing waits any more
+    await pending.first().waitFor({ state: 'detached' });
+    await expectText(general, /Uploaded/);
+    expect(await general.getByTestId('photo-thumb').count()).toBe(2);
+
+    await page.reload();
+    await general.getByTestId('photo-thumb').nth(1).waitFor();
+    expect(await general.getByTestId('photo-thumb').count()).toBe(2);
+    expect(await general.getByText('From the customer').count()).toBe(0);
+  });
+});
