@@ -1,25 +1,11 @@
 import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
-import type { Page } from 'playwright-core';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { makeJpeg } from './support/images';
 import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 const PHONE = { width: 390, height: 844 };
 const PROJECT = DEMO_PROJECT_IDS.ridgeback;
-
-/** A small real JPEG drawn and encoded by the browser (a plain plate in the given shade, 320 × 240). */
-async function makeJpeg(page: Page, shade: string): Promise<Buffer> {
-  const base64 = await page.evaluate((fill) => {
-    const canvas = document.createElement('canvas');
-    canvas.width = 320;
-    canvas.height = 240;
-    const ctx = canvas.getContext('2d')!;
-    ctx.fillStyle = fill;
-    ctx.fillRect(0, 0, 320, 240);
-    return canvas.toDataURL('image/jpeg', 0.8).split(',')[1];
-  }, shade);
-  return Buffer.from(base64, 'base64');
-}
 
 describe("the customer's own photos: added before the truck arrives, accepted or replaced by the fabricator", () => {
   let browser: BrowserSession;
@@ -45,8 +31,8 @@ describe("the customer's own photos: added before the truck arrives, accepted or
       if (r.url().endsWith('/measurement-sheet/photos') && r.request().method() === 'POST' && r.status() === 201) stored += 1;
     });
     await general.getByLabel('Take or add photos: the truck').setInputFiles([
-      { name: 'driver-side.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#7d8a94') },
-      { name: 'engine-bay.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#4a5560') },
+      { name: 'driver-side.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, { shade: '#7d8a94', bar: false }) },
+      { name: 'engine-bay.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, { shade: '#4a5560' }) },
     ]);
     // each photo goes up on its own, with its own progress, and ends as a thumbnail waiting for the shop
     await general.getByTestId('photo-thumb').nth(1).waitFor();
@@ -87,7 +73,7 @@ describe("the customer's own photos: added before the truck arrives, accepted or
     await pending
       .first()
       .getByLabel(/^Replace the customer's photo/)
-      .setInputFiles({ name: 'engine-bay-from-the-lift.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, '#30363d') });
+      .setInputFiles({ name: 'engine-bay-from-the-lift.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, { shade: '#5b6670' }) });
     const response = await replaced;
     expect(response.status()).toBe(201);
     expect(((await response.json()) as Array<{ status: string }>)[0].status).toBe('accepted');

@@ -1,27 +1,12 @@
 import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
 import type { Page } from 'playwright-core';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { makeJpeg } from './support/images';
 import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
 import { demoSignIn, signInAs } from './support/session';
 
 const PHONE = { width: 390, height: 844 };
 const PROJECT = DEMO_PROJECT_IDS.ridgeback;
-
-/** A small real JPEG, drawn and encoded by the browser itself (a grey plate with a dark bar, 320 × 240). */
-async function makeJpeg(page: Page): Promise<Buffer> {
-  const base64 = await page.evaluate(() => {
-    const canvas = document.createElement('canvas');
-    canvas.width = 320;
-    canvas.height = 240;
-    const ctx = canvas.getContext('2d')!;
-    ctx.fillStyle = '#9aa3ab';
-    ctx.fillRect(0, 0, 320, 240);
-    ctx.fillStyle = '#30363d';
-    ctx.fillRect(40, 110, 240, 40);
-    return canvas.toDataURL('image/jpeg', 0.8).split(',')[1];
-  });
-  return Buffer.from(base64, 'base64');
-}
 
 async function enterReading(page: Page, label: string, text: string): Promise<void> {
   const card = page.getByTestId('point-card').filter({ hasText: label }).first();
