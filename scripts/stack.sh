@@ -65,6 +65,10 @@ build_all() {
 
 free_port() { node "$ROOT/scripts/free-port.js" "$1"; }
 
+# A test API port of this checkout's own (3100-3499, from its path), so checkouts side by side on one machine do not
+# all reach for 3100 and answer each other's journeys.
+test_api_port_base() { echo $((3100 + $(printf %s "$ROOT" | cksum | cut -d' ' -f1) % 400)); }
+
 random_secret() { node -e "console.log(require('node:crypto').randomBytes(24).toString('hex'))"; }
 
 # ---------------------------------------------------------------- private MariaDB
@@ -121,6 +125,8 @@ mail_start() {
   local profile=$1 default_port=$2
   MAIL_DIR="$LOCAL/$profile/mail"
   mkdir -p "$MAIL_DIR"
+  # a fake left by an earlier run of this profile goes first (each run starts its own)
+  stop_pid_file "$MAIL_DIR/pid"
   SMTP_PORT="$(free_port "$default_port")"
   MAIL_HTTP_PORT="$(free_port $((SMTP_PORT + 1)))"
   MAIL_FAKE_SMTP_PORT=$SMTP_PORT MAIL_FAKE_HTTP_PORT=$MAIL_HTTP_PORT \
@@ -141,6 +147,7 @@ payment_start() {
   local profile=$1 default_port=$2 api_port=$3
   PAYMENT_DIR="$LOCAL/$profile/payments"
   mkdir -p "$PAYMENT_DIR"
+  stop_pid_file "$PAYMENT_DIR/pid"
   PAYMENT_FAKE_PORT="$(free_port "$default_port")"
   [ -f "$PAYMENT_DIR/webhook-secret" ] || echo "whsec_$(random_secret)" >"$PAYMENT_DIR/webhook-secret"
   PAYMENT_SECRET_KEY="sk_test_local_$profile"
@@ -269,7 +276,7 @@ cmd_test() {
   FRESH_DB=1 db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
   API_PID=""
-  local api_port; api_port="$(free_port 3100)"
+  local api_port; api_port="$(free_port "$(test_api_port_base)")"
   payment_start test 12121 "$api_port"
   trap 'kill $API_PID 2>/dev/null || true; stop_pid_file "$MAIL_DIR/pid"; stop_pid_file "$PAYMENT_DIR/pid"; db_stop_dir "$DB_DIR"' EXIT
   NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$api_port"
@@ -325,7 +332,7 @@ cmd_services() {
   ensure_debian_packages
   db_start test 3317 swapwright_test swapwright_e2e
   mail_start test 2535
-  local api_port; api_port="$(free_port 3100)"
+  local api_port; api_port="$(free_port "$(test_api_port_base)")"
   payment_start test 12121 "$api_port"
   NODE_ENV_VALUE=test DEV_MAIL_ENABLED_VALUE=true AUTH_RATE_LIMIT_VALUE=10000 write_env test swapwright_test "$api_port"
   echo "Services running. Use: source .local/test/env.sh   (stop: bash scripts/stack.sh stop-services)"
@@ -345,6 +352,9 @@ cmd_e2e() {
   API_PID=$!
   trap 'kill $API_PID 2>/dev/null || true' EXIT
   wait_for_api
+  # another worktree's server may have taken the port meanwhile and answered the health check in our stead
+  sleep 1
+  kill -0 "$API_PID" 2>/dev/null || fail "the API could not listen on port $PORT (taken by another server since): run the same command again"
   (cd e2e && E2E_BASE_URL="http://127.0.0.1:$PORT" CHROMIUM_PATH=/usr/bin/chromium npx jest --ci --runInBand "$@")
 }
 
