@@ -101,6 +101,13 @@ describe('measurement sheets and photos', () => {
     const changed = await setValue(s.fabricator, 'pinion.height', { value: '372', reason: 'Re-measured with the truck on the lift pads removed' }).expect(200);
     expect(changed.body.history[0]).toMatchObject({ kind: 'value', oldValue: 370, newValue: 372, reason: 'Re-measured with the truck on the lift pads removed' });
     expect(changed.body.history.some((e: { kind: string }) => e.kind === 'sign-off')).toBe(true);
+    // Both go to the shop's audit log: the sign-off and the change after it, with its reason.
+    const audit = (await t.http.get('/api/audit-events?kind=sign-off').set(...bearer(s.owner)).expect(200)).body.items as Array<{ action: string; summary: string; after: Record<string, unknown> }>;
+    expect(audit.map((e) => e.action)).toEqual(expect.arrayContaining(['sheet.signed-off', 'sheet.changed-after-sign-off']));
+    expect(audit.find((e) => e.action === 'sheet.changed-after-sign-off')).toMatchObject({
+      summary: expect.stringMatching(/changed after sign-off: Re-measured with the truck on the lift pads removed/),
+      after: { pointId: 'pinion.height', value: 372, reason: 'Re-measured with the truck on the lift pads removed' },
+    });
   });
 
   it('fit link: the crossmember measured 20 mm lower moves the sump-to-crossmember result by 20 mm, named as from the sheet', async () => {

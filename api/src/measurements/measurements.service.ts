@@ -171,6 +171,19 @@ export class MeasurementsService {
       const reason = input.reason?.trim() || null;
       if (sheet.signedOffAt && !reason) throw MeasurementErrors.reasonRequired();
       const old = await manager.findOne(MeasurementValue, { where: { sheetId: sheet.id, pointId } });
+      if (sheet.signedOffAt) {
+        // a signed-off sheet changes only with a reason, and the change goes to the shop's audit log with it
+        await this.audit.record(manager, {
+          shopId: user.shopId,
+          actor: user,
+          kind: 'sign-off',
+          action: 'sheet.changed-after-sign-off',
+          subjectId: sheet.id,
+          summary: `${point.label} of ${project.title} changed after sign-off: ${reason}`,
+          before: { pointId, value: old?.value ?? null },
+          after: { pointId, value: parsed.value, reason },
+        });
+      }
       const row: MeasurementValue = {
         id: old?.id ?? randomUUID(),
         shopId: user.shopId,
