@@ -20,6 +20,7 @@ import { PartsModule } from './parts/parts.module';
 import { buildDataSourceOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
+import { JobsModule } from './jobs/jobs.module';
 import { LaborOperationsModule } from './labor-operations/labor-operations.module';
 import { MailModule } from './mail/mail.module';
 import { MeasurementsModule } from './measurements/measurements.module';
@@ -63,6 +64,7 @@ import { WorkOrdersModule } from './work-orders/work-orders.module';
     }),
     MailModule,
     AuditModule,
+    JobsModule,
     UsersModule,
     ShopsModule,
     MembershipsModule,

@@ -1,6 +1,6 @@
 import { DEMO_PASSWORD } from '@swapwright/seed-data';
-import { mailsTo, resetTokenFrom, signUpTokenFor } from './helpers/mail';
-import { bearer, countRows, createTestApp, resetData, Session, signIn, signUpThroughMail, TestApp } from './helpers/test-app';
+import { mailsNowTo, mailsTo, resetTokenFrom, signUpTokenFor } from './helpers/mail';
+import { bearer, countRows, createTestApp, jobsSettled, resetData, Session, signIn, signUpThroughMail, TestApp } from './helpers/test-app';
 
 describe('auth', () => {
   let t: TestApp;
@@ -48,6 +48,7 @@ describe('auth', () => {
       expect(response.body).toEqual({ message: fresh.body.message.replace('nobody.yet@example.test', 'owner@ironbark.test') });
       expect(await countRows(t.dataSource, 'shops')).toBe(before.shops);
       expect(await countRows(t.dataSource, 'users')).toBe(before.users);
+      await jobsSettled(t.dataSource);
       const [notice] = await mailsTo('owner@ironbark.test');
       expect(notice.subject).toMatch(/tried to create a Swapwright account with your address/);
       expect(notice.text).toMatch(/reset-password/);
@@ -177,7 +178,8 @@ describe('auth', () => {
 
     it('answers 202 for an unknown e-mail and sends nothing', async () => {
       await t.http.post('/api/auth/password-reset/request').send({ email: 'ghost@example.test' }).expect(202);
-      expect(await mailsTo('ghost@example.test')).toHaveLength(0);
+      await jobsSettled(t.dataSource);
+      expect(await mailsNowTo('ghost@example.test')).toHaveLength(0);
     });
 
     it('mails a link that works once', async () => {

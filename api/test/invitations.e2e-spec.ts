@@ -2,8 +2,13 @@ import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-
 import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
 
 async function invitationTokenFor(email: string): Promise<string> {
-  const mails = (await (await fetch(process.env.MAIL_FAKE_URL!)).json()) as Array<{ to: string[]; text: string }>;
-  const mail = mails.find((m) => m.to.includes(email));
+  // The background worker sends the invitation: wait up to 5 s for it.
+  let mail: { to: string[]; text: string } | undefined;
+  for (let attempt = 0; attempt < 50 && !mail; attempt++) {
+    const mails = (await (await fetch(process.env.MAIL_FAKE_URL!)).json()) as Array<{ to: string[]; text: string }>;
+    mail = mails.find((m) => m.to.includes(email));
+    if (!mail) await new Promise((resolve) => setTimeout(resolve, 100));
+  }
   const match = mail && /accept-invite\?token=([A-Za-z0-9_%-]+)/.exec(mail.text);
   if (!match) throw new Error(`no invitation mail for ${email}`);
   return decodeURIComponent(match[1]);

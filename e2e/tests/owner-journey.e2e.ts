@@ -70,8 +70,13 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
 
     // The local mail fake's own endpoint (scripts/stack.sh exports MAIL_FAKE_URL); /api/dev/mail is for owners only.
     if (!process.env.MAIL_FAKE_URL) throw new Error('MAIL_FAKE_URL is not set: source .local/test/env.sh first.');
-    const mails = (await (await page.request.get(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
-    const invitation = mails.find((mail) => mail.to.includes(email));
+    // The background worker sends it within moments.
+    let invitation: CapturedMail | undefined;
+    for (let attempt = 0; attempt < 50 && !invitation; attempt++) {
+      const mails = (await (await page.request.get(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
+      invitation = mails.find((mail) => mail.to.includes(email));
+      if (!invitation) await page.waitForTimeout(200);
+    }
     expect(invitation).toBeDefined();
     const link = /https?:\/\/\S+accept-invite\?token=[^\s"<>]+/.exec(invitation!.text)?.[0];
     expect(link).toBeDefined();

@@ -8,8 +8,13 @@ interface CapturedMail {
 
 async function mailsTo(email: string): Promise<CapturedMail[]> {
   if (!process.env.MAIL_FAKE_URL) throw new Error('MAIL_FAKE_URL is not set: source .local/test/env.sh first.');
-  const mails = (await (await fetch(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
-  return mails.filter((mail) => mail.to.includes(email));
+  // The background worker sends it within moments: wait up to 10 s for the first.
+  for (let attempt = 0; ; attempt++) {
+    const mails = (await (await fetch(process.env.MAIL_FAKE_URL)).json()) as CapturedMail[];
+    const found = mails.filter((mail) => mail.to.includes(email));
+    if (found.length > 0 || attempt >= 50) return found;
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
 }
 
 describe('a new owner signs up and finishes through the e-mailed link', () => {

@@ -8,6 +8,8 @@ import { simpleParser } from 'mailparser';
 
 interface CapturedMail {
   id: number;
+  /** The Message-ID header: every attempt of one background job sends the same one. */
+  messageId: string;
   to: string[];
   from: string;
   subject: string;
@@ -32,6 +34,7 @@ const smtp = new SMTPServer({
       .then((parsed) => {
         messages.unshift({
           id: nextId++,
+          messageId: parsed.messageId ?? '',
           to: session.envelope.rcptTo.map((rcpt) => rcpt.address),
           from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
           subject: parsed.subject ?? '',

@@ -5,7 +5,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan } from 'typeorm';
 import { MailTemplates } from '../mail/mail-templates';
-import { MailService } from '../mail/mail.service';
+import { MailQueue } from '../mail/mail-queue.service';
 import { UsersService } from '../users/users.service';
 import { PASSWORD_RESET_TTL_MS } from './auth.constants';
 import { AuthErrors } from './auth.errors';
@@ -19,7 +19,7 @@ export class PasswordResetService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly users: UsersService,
-    private readonly mail: MailService,
+    private readonly mail: MailQueue,
     private readonly sessions: SessionsService,
     private readonly config: ConfigService<EnvironmentVariables, true>,
     private readonly passwords: PasswordHasher,
@@ -30,20 +30,22 @@ export class PasswordResetService {
     const user = await this.users.findByEmail(email);
     if (!user) return;
     const { token, hash } = newOpaqueToken();
+    const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
+    const link = `${appUrl}/reset-password?token=${encodeURIComponent(token)}`;
+    const id = randomUUID();
     await this.dataSource.transaction(async (manager) => {
       // Only the newest link works.
       await manager.update(PasswordResetToken, { userId: user.id, usedAt: IsNull() }, { usedAt: new Date() });
       await manager.insert(PasswordResetToken, {
-        id: randomUUID(),
+        id,
         userId: user.id,
         tokenHash: hash,
         expiresAt: new Date(Date.now() + PASSWORD_RESET_TTL_MS),
         usedAt: null,
       });
+      // The link is mailed by the background worker; it is stored with the token, so it goes out exactly when the token exists.
+      await this.mail.enqueue(manager, `password-reset:${id}`, null, { to: user.email, ...MailTemplates.passwordReset({ name: user.name, link }) });
     });
-    const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
-    const link = `${appUrl}/reset-password?token=${encodeURIComponent(token)}`;
-    await this.mail.sendOrLog({ to: user.email, ...MailTemplates.passwordReset({ name: user.name, link }) });
   }
 
   async confirm(token: string, password: string): Promise<void> {

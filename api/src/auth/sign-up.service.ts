@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan } from 'typeorm';
 import { EnvironmentVariables } from '../config/env.validation';
 import { MailTemplates } from '../mail/mail-templates';
-import { MailService } from '../mail/mail.service';
+import { MailQueue } from '../mail/mail-queue.service';
 import { MembershipsService } from '../memberships/memberships.service';
 import { ShopsService } from '../shops/shops.service';
 import { normalizeEmail, UsersService } from '../users/users.service';
@@ -29,7 +29,7 @@ export class SignUpService {
     private readonly shops: ShopsService,
     private readonly memberships: MembershipsService,
     private readonly sessions: SessionsService,
-    private readonly mail: MailService,
+    private readonly mail: MailQueue,
     private readonly config: ConfigService<EnvironmentVariables, true>,
     private readonly passwords: PasswordHasher,
   ) {}
@@ -40,7 +40,7 @@ export class SignUpService {
     const passwordHash = await this.passwords.hash(input.password);
     const existing = await this.users.findByEmail(email);
     if (existing) {
-      await this.mail.sendOrLog({
+      await this.mail.enqueue(this.dataSource.manager, `sign-up-notice:${randomUUID()}`, null, {
         to: existing.email,
         ...MailTemplates.signUpAlreadyRegistered({
           name: existing.name,
@@ -51,18 +51,22 @@ export class SignUpService {
       return;
     }
     const { token, hash } = newOpaqueToken();
-    await this.dataSource.manager.insert(PendingSignUp, {
-      id: randomUUID(),
-      email,
-      name: input.name.trim(),
-      shopName: input.shopName.trim(),
-      passwordHash,
-      tokenHash: hash,
-      expiresAt: new Date(Date.now() + SIGN_UP_LINK_TTL_MS),
-      usedAt: null,
-    });
+    const id = randomUUID();
     const link = this.link(`/sign-up?token=${encodeURIComponent(token)}`);
-    await this.mail.sendOrLog({ to: email, ...MailTemplates.signUpLink({ name: input.name.trim(), shopName: input.shopName.trim(), link }) });
+    // The pending sign-up and its mail are stored together; the background worker sends the link.
+    await this.dataSource.transaction(async (manager) => {
+      await manager.insert(PendingSignUp, {
+        id,
+        email,
+        name: input.name.trim(),
+        shopName: input.shopName.trim(),
+        passwordHash,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + SIGN_UP_LINK_TTL_MS),
+        usedAt: null,
+      });
+      await this.mail.enqueue(manager, `sign-up:${id}`, null, { to: email, ...MailTemplates.signUpLink({ name: input.name.trim(), shopName: input.shopName.trim(), link }) });
+    });
   }
 
   /** Opens the e-mailed link: the person, their one-person shop and the owner membership, in one transaction. */

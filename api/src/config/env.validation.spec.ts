@@ -60,4 +60,15 @@ describe('validateEnv', () => {
       expect(() => validateEnv({ ...envStub.complete, API_WORKERS: bad })).toThrow(/API_WORKERS must be auto or a whole number from 1 to 99/);
     }
   });
+
+  it('runs the background worker unless JOBS_WORKER_ENABLED is false, and keeps the crash switch out of production', () => {
+    const env = validateEnv(envStub.complete);
+    expect(env).toMatchObject({ JOBS_WORKER_ENABLED: true, JOBS_POLL_MS: 250, JOBS_LEASE_MS: 30000, JOBS_MAX_ATTEMPTS: 8 });
+    expect(validateEnv({ ...envStub.complete, JOBS_WORKER_ENABLED: 'false' }).JOBS_WORKER_ENABLED).toBe(false);
+    expect(() => validateEnv({ ...envStub.complete, JOBS_WORKER_ENABLED: 'off' })).toThrow(/JOBS_WORKER_ENABLED must be true or false/);
+    expect(() => validateEnv({ ...envStub.complete, JOBS_POLL_MS: '5' })).toThrow(/JOBS_POLL_MS must not be less than 20/);
+    expect(validateEnv({ ...envStub.complete, JOBS_CRASH_BEFORE_COMMIT: 'payment.event' }).JOBS_CRASH_BEFORE_COMMIT).toBe('payment.event');
+    expect(() => validateEnv({ ...envStub.complete, JOBS_CRASH_BEFORE_COMMIT: 'everything' })).toThrow(/JOBS_CRASH_BEFORE_COMMIT must be one of/);
+    expect(() => validateEnv({ ...envStub.complete, NODE_ENV: 'production', JOBS_CRASH_BEFORE_COMMIT: 'mail' })).toThrow(/for tests only/);
+  });
 });

@@ -17,6 +17,8 @@ import {
   ValidationError,
 } from 'class-validator';
 
+import { JOB_KINDS, type JobKind } from '../jobs/job-kinds';
+
 const REPLICA_HOSTS = /^\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*(,\s*[A-Za-z0-9.-]+(:\d{1,5})?\s*)*$/;
 
 export const STORAGE_DRIVERS = ['local', 's3'] as const;
@@ -174,6 +176,57 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @IsOptional()
   @IsString()
   S3_SECRET_ACCESS_KEY?: string;
+
+  /**
+   * Runs the background-work loop (mail, quote PDFs by mail, payment events) in this process. On by default in every
+   * instance (claims use FOR UPDATE SKIP LOCKED, so instances never take the same job); `false` for a process that only
+   * answers requests, or a test that drives the queue itself.
+   */
+  @Transform(({ value }) => (value === undefined || value === '' ? true : value === 'true' ? true : value === 'false' ? false : value))
+  @IsBoolean({ message: 'JOBS_WORKER_ENABLED must be true or false' })
+  JOBS_WORKER_ENABLED: boolean = true;
+
+  /** How often an idle worker looks for due jobs (a job enqueued in this process wakes it at once). */
+  @Type(() => Number)
+  @IsInt()
+  @Min(20)
+  @Max(60000)
+  JOBS_POLL_MS: number = 250;
+
+  /** How long a claimed job stays with its worker before another instance may take it over (the worker died). */
+  @Type(() => Number)
+  @IsInt()
+  @Min(500)
+  @Max(3600000)
+  JOBS_LEASE_MS: number = 30000;
+
+  /** Jobs one instance runs at the same time. */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(16)
+  JOBS_CONCURRENCY: number = 2;
+
+  /** Attempts before a job is marked dead (with its last error); the wait between them doubles from JOBS_RETRY_BASE_MS. */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(50)
+  JOBS_MAX_ATTEMPTS: number = 8;
+
+  @Type(() => Number)
+  @IsInt()
+  @Min(10)
+  @Max(3600000)
+  JOBS_RETRY_BASE_MS: number = 2000;
+
+  /**
+   * Fault injection for the restart tests: the process kills itself (SIGKILL) after a job of this kind did its work
+   * and before its transaction commits. Refused together with NODE_ENV=production.
+   */
+  @IsOptional()
+  @IsIn(JOB_KINDS, { message: `JOBS_CRASH_BEFORE_COMMIT must be one of: ${JOB_KINDS.join(', ')}` })
+  JOBS_CRASH_BEFORE_COMMIT?: JobKind;
 }
 
 export class ConfigValidationError extends Error {
@@ -203,6 +256,9 @@ export function validateEnv(raw: Record<string, unknown>): EnvironmentVariables 
   const env = validateAs(EnvironmentVariables, raw);
   if (env.NODE_ENV === 'production' && env.DEV_MAIL_ENABLED) {
     throw new ConfigValidationError(['DEV_MAIL_ENABLED must not be true when NODE_ENV is production (captured mail holds password-reset links)']);
+  }
+  if (env.NODE_ENV === 'production' && env.JOBS_CRASH_BEFORE_COMMIT) {
+    throw new ConfigValidationError(['JOBS_CRASH_BEFORE_COMMIT is for tests only and must not be set when NODE_ENV is production']);
   }
   return env;
 }

@@ -9,6 +9,7 @@ import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { ProjectFitSelection } from '../fit-reports/project-fit-selection.entity';
 import { ShopFitSettings } from '../fit-reports/shop-fit-settings.entity';
 import { Invitation } from '../invitations/invitation.entity';
+import { Job } from '../jobs/job.entity';
 import { LaborOperation } from '../labor-operations/labor-operation.entity';
 import { QuoteNotification } from '../quotes/quote-notification.entity';
 import { QuoteRevision } from '../quotes/quote-revision.entity';
@@ -27,4 +28,4 @@ import { WorkOrder, WorkOrderCheck } from '../work-orders/work-order.entity';
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
   LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES,
-  ThrottleCounter, WorkOrder, WorkOrderCheck, AuditEvent];
+  ThrottleCounter, WorkOrder, WorkOrderCheck, AuditEvent, Job];

@@ -11,7 +11,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { CustomersService } from '../customers/customers.service';
 import { MailTemplates } from '../mail/mail-templates';
-import { MailService } from '../mail/mail.service';
+import { MailQueue } from '../mail/mail-queue.service';
 import { MembershipsService } from '../memberships/memberships.service';
 import { ShopsService } from '../shops/shops.service';
 import { normalizeEmail, UsersService } from '../users/users.service';
@@ -32,7 +32,7 @@ export class InvitationsService {
     private readonly users: UsersService,
     private readonly memberships: MembershipsService,
     private readonly sessions: SessionsService,
-    private readonly mail: MailService,
+    private readonly mail: MailQueue,
     private readonly config: ConfigService<EnvironmentVariables, true>,
     private readonly passwords: PasswordHasher,
     private readonly customers: CustomersService,
@@ -66,9 +66,15 @@ export class InvitationsService {
       acceptedAt: null,
       invitedByUserId: user.userId,
     });
-    await this.scoped.repository.insert(invitation);
     const shop = await this.shops.getCurrent(user);
-    await this.sendInvitation(email, shop.name, user.name, input.role, token);
+    // The invitation and its mail are stored together; the background worker sends it.
+    await this.dataSource.transaction(async (manager) => {
+      await manager.insert(Invitation, invitation);
+      await this.mail.enqueue(manager, `invitation:${invitation.id}`, user.shopId, {
+        to: email,
+        ...MailTemplates.invitation({ inviter: user.name, shopName: shop.name, role: input.role, link: this.acceptLink(token) }),
+      });
+    });
     return this.scoped.repository.findOneByOrFail({ id: invitation.id });
   }
 
@@ -100,9 +106,8 @@ export class InvitationsService {
     });
   }
 
-  private async sendInvitation(email: string, shopName: string, inviter: string, role: string, token: string) {
+  private acceptLink(token: string): string {
     const appUrl = this.config.get('APP_URL', { infer: true }).replace(/\/$/, '');
-    const link = `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
-    await this.mail.sendOrLog({ to: email, ...MailTemplates.invitation({ inviter, shopName, role, link }) });
+    return `${appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
   }
 }

@@ -3,8 +3,9 @@ import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import Stripe from 'stripe';
-import { DataSource, Not } from 'typeorm';
+import { DataSource, EntityManager, Not } from 'typeorm';
 import { EnvironmentVariables } from '../config/env.validation';
+import { insertOnce } from '../jobs/jobs.service';
 import { QuoteView } from '../quotes/quotes.service';
 import { DepositPayment, PaymentEvent } from './deposit-payment.entity';
 import { PaymentErrors } from './payments.errors';
@@ -14,13 +15,10 @@ export interface DepositOutcome {
   message: string;
 }
 
-function isDuplicateKey(error: unknown): boolean {
-  return (error as { code?: string; driverError?: { code?: string } })?.driverError?.code === 'ER_DUP_ENTRY' || (error as { code?: string })?.code === 'ER_DUP_ENTRY';
-}
-
 /**
  * Deposits through the provider's official SDK. A confirmed payment is only recorded as paid when the provider's
- * signed event arrives; each event id is applied once (a table of applied ids), so duplicates and replays change nothing.
+ * signed event arrives. The webhook only queues the event (a job keyed by the event id); the background worker applies
+ * it once (a table of applied ids, written in the job's transaction), so duplicates and replays change nothing.
  */
 @Injectable()
 export class PaymentsService {
@@ -118,33 +116,38 @@ export class PaymentsService {
   }
 
   /**
-   * Applies an event once. `onPaid` runs inside the same transaction (marks the quote's deposit paid and what follows);
-   * a second delivery of the event id hits the primary key and changes nothing.
+   * Applies an event once, with the manager of the caller's transaction (the background job's, which is marked done
+   * in it). `onPaid` runs in it too (marks the quote's deposit paid and what follows). The event id is recorded in
+   * the same transaction; an id already recorded changes nothing and answers false.
    */
   async apply(
+    manager: EntityManager,
     event: Stripe.Event,
-    onPaid: (manager: import('typeorm').EntityManager, payment: DepositPayment, paidAt: Date) => Promise<void>,
+    onPaid: (manager: EntityManager, payment: DepositPayment, paidAt: Date) => Promise<void>,
   ): Promise<boolean> {
     const intent = (event.data?.object ?? {}) as Partial<Stripe.PaymentIntent>;
     const intentId = typeof intent.id === 'string' ? intent.id : null;
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        await manager.insert(PaymentEvent, { eventId: event.id, type: event.type.slice(0, 60), intentId });
-        if (!intentId) return true;
-        const payment = await manager.findOne(DepositPayment, { where: { intentId }, lock: { mode: 'pessimistic_write' } });
-        if (!payment) return true;
-        if (event.type === 'payment_intent.succeeded' && payment.state !== 'paid') {
-          await manager.update(DepositPayment, { id: payment.id }, { state: 'paid', lastError: null });
-          await onPaid(manager, payment, new Date(event.created * 1000));
-        } else if (event.type === 'payment_intent.payment_failed') {
-          const message = intent.last_payment_error?.message ?? 'The card was declined.';
-          await manager.update(DepositPayment, { id: payment.id, state: Not('paid') }, { state: 'failed', lastError: message.slice(0, 300) });
-        }
-        return true;
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) return false;
-      throw error;
+    const recorded = await insertOnce(manager, 'INSERT IGNORE INTO `payment_events` (`eventId`, `type`, `intentId`) VALUES (?, ?, ?)', [
+      event.id,
+      event.type.slice(0, 60),
+      intentId,
+    ]);
+    if (!recorded) return false;
+    if (!intentId) return true;
+    const payment = await manager.findOne(DepositPayment, { where: { intentId }, lock: { mode: 'pessimistic_write' } });
+    if (!payment) return true;
+    if (event.type === 'payment_intent.succeeded' && payment.state !== 'paid') {
+      await manager.update(DepositPayment, { id: payment.id }, { state: 'paid', lastError: null });
+      await onPaid(manager, payment, new Date(event.created * 1000));
+    } else if (event.type === 'payment_intent.payment_failed') {
+      const message = intent.last_payment_error?.message ?? 'The card was declined.';
+      await manager.update(DepositPayment, { id: payment.id, state: Not('paid') }, { state: 'failed', lastError: message.slice(0, 300) });
     }
+    return true;
+  }
+
+  /** Whether an event id was already applied (a redelivery after its job finished). */
+  async wasApplied(eventId: string): Promise<boolean> {
+    return this.dataSource.getRepository(PaymentEvent).exists({ where: { eventId } });
   }
 }

@@ -94,7 +94,7 @@ export class QuotesController {
   @Post(':id/send')
   @HttpCode(200)
   @Roles(...QUOTE_WRITERS)
-  @ApiOkResponse({ type: QuoteResponseDto, description: 'Freezes the working revision and e-mails it with the PDF and an approval link.' })
+  @ApiOkResponse({ type: QuoteResponseDto, description: 'Freezes the working revision and queues its e-mail with the PDF and an approval link (sent by the background worker within moments).' })
   async send(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<QuoteResponseDto> {
     return mapQuote(await this.quotes.send(user, id));
   }

@@ -1,4 +1,4 @@
-import { Injectable, Logger } from '@nestjs/common';
+import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { diffRevisions, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
@@ -15,7 +15,10 @@ import { FitReportsService } from '../fit-reports/fit-reports.service';
 import { LaborOperationsService } from '../labor-operations/labor-operations.service';
 import { PartsPlanRecord } from '../parts/part.entity';
 import { PartsPlansService } from '../parts/parts-plans.service';
+import { MailQueue } from '../mail/mail-queue.service';
 import { MailService } from '../mail/mail.service';
+import { JobHandlers } from '../jobs/job-handlers';
+import { JobsService } from '../jobs/jobs.service';
 import { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import { Shop } from '../shops/shop.entity';
@@ -77,7 +80,7 @@ export const QUOTE_STATUS_WORDS: Record<QuoteStatus, string> = {
 };
 
 @Injectable()
-export class QuotesService {
+export class QuotesService implements OnModuleInit {
   private readonly logger = new Logger(QuotesService.name);
   private readonly quotes: TenantRepository<Quote>;
   private readonly revisions: TenantRepository<QuoteRevision>;
@@ -99,10 +102,26 @@ export class QuotesService {
     private readonly audit: AuditService,
     private readonly pdf: QuotePdfService,
     private readonly mail: MailService,
+    private readonly mailQueue: MailQueue,
+    private readonly jobs: JobsService,
+    private readonly jobHandlers: JobHandlers,
     private readonly config: ConfigService<EnvironmentVariables, true>,
   ) {
     this.quotes = new TenantRepository(quotes);
     this.revisions = new TenantRepository(revisions);
+  }
+
+  onModuleInit(): void {
+    // The quote's e-mail is rendered (PDF included) and sent by the background worker, from the revision that was sent.
+    this.jobHandlers.register('quote.mail', async (payload, { job }) => {
+      const { shopId, quoteId, revision } = payload as { shopId: string; quoteId: string; revision: number };
+      const view = await this.viewInShop(shopId, quoteId);
+      const sent = view.revisions.find((candidate) => candidate.number === revision);
+      if (!sent) throw new Error(`quote ${quoteId} has no sent revision ${revision}`);
+      const messageId = this.mailQueue.messageIdOf(job.id);
+      await this.mailQuote({ ...view, revision: sent }, messageId);
+      return messageId;
+    });
   }
 
   // ------------------------------------------------------------------ reading
@@ -280,7 +299,10 @@ export class QuotesService {
     return this.get(user, id);
   }
 
-  /** Freezes the working revision, e-mails it to the customer with the PDF and a signed link; again for the same revision re-sends the mail. */
+  /**
+   * Freezes the working revision and queues its e-mail to the customer (PDF and a signed link) in the same
+   * transaction; the background worker renders and sends it. Again for the same revision queues the mail again.
+   */
   async send(user: AuthUser, id: string): Promise<QuoteView> {
     const view = await this.get(user, id);
     if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
@@ -310,11 +332,12 @@ export class QuotesService {
           { status: 'awaiting-answer', sentRevision: latest.number, sentById: user.userId, answeredAt: null, declineReason: null, depositState: 'not-due' },
         );
         await this.projects.advanceStatus(user.shopId, view.project.id, 'quote-sent', manager);
+        await this.enqueueQuoteMail(manager, user.shopId, view.quote.id, latest.number, `${view.quote.id}:r${latest.number}`);
       });
+    } else {
+      await this.enqueueQuoteMail(this.dataSource.manager, user.shopId, view.quote.id, latest.number, `${view.quote.id}:r${latest.number}:again:${randomUUID()}`);
     }
-    const sent = await this.get(user, id);
-    await this.mailQuote(sent);
-    return sent;
+    return this.get(user, id);
   }
 
   /** The customer's answer (signed in, or through the link) to the revision they were sent. */
@@ -326,6 +349,7 @@ export class QuotesService {
     const reason = input.reason?.trim() ?? '';
     if (input.answer === 'decline' && !reason) throw QuoteErrors.reasonRequired();
     const accepted = input.answer === 'accept';
+    const estimator = view.quote.sentById ? await this.users.findById(view.quote.sentById) : null;
     await this.dataSource.transaction(async (manager) => {
       const changed = await manager.update(
         Quote,
@@ -350,9 +374,11 @@ export class QuotesService {
       });
       if (accepted) await this.projects.advanceStatus(shopId, view.project.id, 'approved', manager);
       await this.notify(manager, view, accepted ? `${view.project.customer?.name ?? 'The customer'} approved quote ${quoteLabel(view.quote)} (revision ${view.revision.number}).` : `${view.project.customer?.name ?? 'The customer'} turned down quote ${quoteLabel(view.quote)}: ${reason}`);
+      if (estimator?.email) {
+        await this.mailQueue.enqueue(manager, `quote-answer:${view.quote.id}:r${view.revision.number}`, shopId, this.estimatorMail(view, estimator.email, accepted ? 'approved' : 'turned down', reason));
+      }
     });
     const answered = await this.findQuote(shopId, view.quote.id);
-    await this.mailEstimator(view, accepted ? 'approved' : 'turned down', reason);
     return this.viewOf(shopReader(shopId), answered, view.project, true);
   }
 
@@ -511,35 +537,40 @@ export class QuotesService {
     return `${this.config.get('APP_URL', { infer: true })}/quote-answer/${token}`;
   }
 
-  private async mailQuote(view: QuoteView): Promise<void> {
+  private async enqueueQuoteMail(manager: EntityManager, shopId: string, quoteId: string, revision: number, idempotencyKey: string): Promise<void> {
+    await this.jobs.enqueue(manager, { kind: 'quote.mail', idempotencyKey, shopId, payload: { shopId, quoteId, revision } });
+  }
+
+  private async mailQuote(view: QuoteView, messageId: string): Promise<void> {
     const { fileName, content } = await this.renderPdf(view);
     const shop: Shop = await this.shops.getCurrent(shopReader(view.quote.shopId));
     const link = this.approvalLink(view);
-    const customer = view.project.customer!;
-    await this.mail.send({
-      to: customer.email!,
-      subject: `${shop.name}: quote ${quoteLabel(view.quote)} for ${view.project.title}`,
-      text:
-        `Hello ${customer.name},\n\n` +
-        `${shop.name} has prepared quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}". ` +
-        `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${view.revision.validUntil}):\n${link}\n\n` +
-        `This quote is a planning aid built on the figures measured so far; the shop confirms every measurement before cutting or ordering.\n`,
-      attachments: [{ filename: fileName, content, contentType: 'application/pdf' }],
-    });
+    const customer = view.project.customer;
+    if (!customer?.email) throw new Error('the customer of this quote has no e-mail address any more');
+    await this.mail.send(
+      {
+        to: customer.email,
+        subject: `${shop.name}: quote ${quoteLabel(view.quote)} for ${view.project.title}`,
+        text:
+          `Hello ${customer.name},\n\n` +
+          `${shop.name} has prepared quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}". ` +
+          `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${view.revision.validUntil}):\n${link}\n\n` +
+          `This quote is a planning aid built on the figures measured so far; the shop confirms every measurement before cutting or ordering.\n`,
+        attachments: [{ filename: fileName, content, contentType: 'application/pdf' }],
+      },
+      messageId,
+    );
   }
 
-  private async mailEstimator(view: QuoteView, answer: string, reason: string): Promise<void> {
-    if (!view.quote.sentById) return;
-    const estimator = await this.users.findById(view.quote.sentById);
-    if (!estimator?.email) return;
-    await this.mail.sendOrLog({
-      to: estimator.email,
+  private estimatorMail(view: QuoteView, to: string, answer: string, reason: string) {
+    return {
+      to,
       subject: `Quote ${quoteLabel(view.quote)} ${answer} by ${view.project.customer?.name ?? 'the customer'}`,
       text:
         `${view.project.customer?.name ?? 'The customer'} ${answer} quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}".` +
         (reason ? `\nReason given: ${reason}` : '') +
         `\n\nOpen the project: ${this.config.get('APP_URL', { infer: true })}/projects/${view.project.id}\n`,
-    });
+    };
   }
 
   private async notify(manager: EntityManager, view: QuoteView, message: string): Promise<void> {

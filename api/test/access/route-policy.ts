@@ -78,6 +78,7 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'POST /api/invitations': OWNER,
   'GET /api/dev/mail': OWNER,
   'GET /api/audit-events': OWNER,
+  'GET /api/jobs': OWNER,
 
   'GET /api/customers': STAFF,
   'POST /api/customers': SALES,

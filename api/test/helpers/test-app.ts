@@ -72,6 +72,19 @@ export function bearer(session: Pick<Session, 'accessToken'>): [string, string] 
   return ['Authorization', `Bearer ${session.accessToken}`];
 }
 
+/** Waits until no background job is due or running (the worker of the app under test has done its work). */
+export async function jobsSettled(dataSource: DataSource, timeoutMs = 10_000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const [row] = await dataSource.query(
+      "SELECT COUNT(*) AS n FROM `jobs` WHERE `state` = 'running' OR (`state` = 'queued' AND `runAt` <= UTC_TIMESTAMP(3))",
+    );
+    if (Number(row.n) === 0) return;
+    if (Date.now() > deadline) throw new Error(`background jobs still pending after ${timeoutMs} ms`);
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+}
+
 export async function countRows(dataSource: DataSource, table: string): Promise<number> {
   const [row] = await dataSource.query(`SELECT COUNT(*) AS n FROM \`${table}\``);
   return Number(row.n);

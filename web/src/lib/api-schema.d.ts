@@ -37,6 +37,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/jobs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["JobsController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/shops/current": {
         parameters: {
             query?: never;
@@ -1685,6 +1701,41 @@ export interface components {
             } | null;
             /** Format: date-time */
             createdAt: string;
+        };
+        JobResponseDto: {
+            id: string;
+            /** @enum {string} */
+            kind: "mail" | "quote.mail" | "payment.event";
+            /** @enum {string} */
+            state: "queued" | "running" | "done" | "dead";
+            attempts: number;
+            maxAttempts: number;
+            /** @description Why the last attempt failed */
+            lastError: string | null;
+            /**
+             * Format: date-time
+             * @description When it is (or was) due
+             */
+            runAt: string;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            doneAt: string | null;
+        };
+        JobCountsDto: {
+            queued: number;
+            running: number;
+            done: number;
+            dead: number;
+        };
+        JobPageResponseDto: {
+            /** @description Items matching the filters, across all pages */
+            total: number;
+            page: number;
+            pageSize: number;
+            items: components["schemas"]["JobResponseDto"][];
+            /** @description The shop's jobs by state */
+            counts: components["schemas"]["JobCountsDto"];
         };
         ShopResponseDto: {
             /** Format: uuid */
@@ -4110,7 +4161,7 @@ export interface components {
         };
         WebhookAnswerDto: {
             received: boolean;
-            /** @description False when the event was already applied (a duplicate or replay changes nothing) */
+            /** @description True when the event is new and was queued for the background worker, which applies it once; false for a duplicate or replay (it changes nothing) */
             applied: boolean;
         };
         HealthResponseDto: {
@@ -4190,6 +4241,34 @@ export interface operations {
                     "application/json": components["schemas"]["PageMetaResponseDto"] & {
                         items: components["schemas"]["AuditEventResponseDto"][];
                     };
+                };
+            };
+        };
+    };
+    JobsController_list: {
+        parameters: {
+            query?: {
+                page?: number;
+                pageSize?: number;
+                order?: "asc" | "desc";
+                /** @description Matches inside the main text fields. */
+                search?: string;
+                /** @description Only jobs in this state */
+                state?: "queued" | "running" | "done" | "dead";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The shop's background work (e-mails, payment events), newest first, with counts by state */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["JobPageResponseDto"];
                 };
             };
         };
@@ -8636,7 +8715,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description Freezes the working revision and e-mails it with the PDF and an approval link. */
+            /** @description Freezes the working revision and queues its e-mail with the PDF and an approval link (sent by the background worker within moments). */
             200: {
                 headers: {
                     [name: string]: unknown;

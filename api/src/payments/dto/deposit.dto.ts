@@ -19,5 +19,6 @@ export class DepositPaymentResponseDto {
 
 export class WebhookAnswerDto {
   @ApiProperty() received: boolean;
-  @ApiProperty({ description: 'False when the event was already applied (a duplicate or replay changes nothing)' }) applied: boolean;
+  @ApiProperty({ description: 'True when the event is new and was queued for the background worker, which applies it once; false for a duplicate or replay (it changes nothing)' })
+  applied: boolean;
 }

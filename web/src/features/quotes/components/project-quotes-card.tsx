@@ -53,7 +53,7 @@ export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProp
                   loading={send.isPending}
                   onClick={() =>
                     send.mutate(quote.id, {
-                      onSuccess: (sent) => void message.success(`Quote ${sent.label} sent to ${sent.customerName ?? 'the customer'}`),
+                      onSuccess: (sent) => void message.success(`Quote ${sent.label} is on its way to ${sent.customerName ?? 'the customer'}: the e-mail goes out in a moment`),
                       onError: (error) => void message.error(getErrorMessage(error)),
                     })
                   }

@@ -1,0 +1,87 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, EntityManager } from 'typeorm';
+import { Page, skipOf } from '../common/pagination/page-query.dto';
+import { EnvironmentVariables } from '../config/env.validation';
+import type { JobKind, JobState } from './job-kinds';
+import { Job } from './job.entity';
+
+export interface NewJob {
+  kind: JobKind;
+  /** Unique per kind: the same work enqueued twice (a retried request, a redelivered event) is stored once. */
+  idempotencyKey: string;
+  shopId: string | null;
+  payload: Record<string, unknown>;
+}
+
+/** Set on a transaction's query runner when it enqueued work, so the commit wakes this process's worker. */
+export const JOBS_ENQUEUED = 'swapwrightJobsEnqueued';
+
+type Waker = () => void;
+
+/**
+ * Runs `INSERT IGNORE …` of one row and answers false when a unique key already holds it (nothing is written, and no
+ * error is raised or logged). Callers bound every value to its column, so IGNORE has nothing else to hide.
+ * (Not ON DUPLICATE KEY UPDATE: mysql2 counts found rows, so its affected rows cannot tell an insert from a duplicate.)
+ */
+export async function insertOnce(manager: EntityManager, sql: string, parameters: unknown[]): Promise<boolean> {
+  if (!/^INSERT IGNORE INTO /.test(sql)) throw new Error('insertOnce takes an INSERT IGNORE statement');
+  const result = (await manager.query(sql, parameters)) as { affectedRows?: number };
+  return Number(result.affectedRows ?? 0) === 1;
+}
+
+@Injectable()
+export class JobsService {
+  private readonly maxAttempts: number;
+  private waker: Waker = () => undefined;
+
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    config: ConfigService<EnvironmentVariables, true>,
+  ) {
+    this.maxAttempts = config.get('JOBS_MAX_ATTEMPTS', { infer: true });
+  }
+
+  /**
+   * Adds a job with the manager of the change that causes it, so both commit or neither does. Returns false when
+   * the same (kind, idempotencyKey) is already queued or done: nothing is added.
+   */
+  async enqueue(manager: EntityManager, job: NewJob): Promise<boolean> {
+    const added = await insertOnce(
+      manager,
+      'INSERT IGNORE INTO `jobs` (`id`, `kind`, `idempotencyKey`, `shopId`, `state`, `payload`, `attempts`, `maxAttempts`, `runAt`) ' +
+        "VALUES (?, ?, ?, ?, 'queued', ?, 0, ?, UTC_TIMESTAMP(3))",
+      [randomUUID(), job.kind, job.idempotencyKey.slice(0, 160), job.shopId, JSON.stringify(job.payload), this.maxAttempts],
+    );
+    if (added) {
+      const runner = manager.queryRunner;
+      if (runner?.isTransactionActive) runner.data = { ...(runner.data ?? {}), [JOBS_ENQUEUED]: true };
+      else this.waker();
+    }
+    return added;
+  }
+
+  /** Called by the worker: run `wake` when work was enqueued (after its transaction commits). */
+  onEnqueued(wake: Waker): void {
+    this.waker = wake;
+  }
+
+  wake(): void {
+    this.waker();
+  }
+
+  async list(user: { shopId: string }, query: { state?: JobState; page: number; pageSize: number }): Promise<Page<Job> & { counts: Record<JobState, number> }> {
+    const builder = this.dataSource.getRepository(Job).createQueryBuilder('j').where('j.shopId = :shopId', { shopId: user.shopId });
+    if (query.state) builder.andWhere('j.state = :state', { state: query.state });
+    const [items, total] = await builder.orderBy('j.createdAt', 'DESC').addOrderBy('j.id', 'ASC').skip(skipOf(query)).take(query.pageSize).getManyAndCount();
+    const rows: Array<{ state: JobState; n: string | number }> = await this.dataSource.query(
+      'SELECT `state`, COUNT(*) AS n FROM `jobs` WHERE `shopId` = ? GROUP BY `state`',
+      [user.shopId],
+    );
+    const counts: Record<JobState, number> = { queued: 0, running: 0, done: 0, dead: 0 };
+    for (const row of rows) counts[row.state] = Number(row.n);
+    return { items, total, page: query.page, pageSize: query.pageSize, counts };
+  }
+}

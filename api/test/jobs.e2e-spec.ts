@@ -1,0 +1,216 @@
+import './helpers/jobs-driven-env';
+import { ConfigService } from '@nestjs/config';
+import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DataSource } from 'typeorm';
+import { JobHandlers } from '../src/jobs/job-handlers';
+import type { JobKind } from '../src/jobs/job-kinds';
+import { JobsService } from '../src/jobs/jobs.service';
+import { JobsWorker } from '../src/jobs/jobs.worker';
+import { capturedMail, lastMailId } from './helpers/mail-fake';
+import { OTHER_SHOP } from './fixtures/other-shop.fixture';
+import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
+
+const LINES = [
+  { kind: 'part', description: 'Rear-sump oil pan', quantity: 1, pricing: 'list', unitPriceCents: 28995 },
+  { kind: 'labor', description: 'Install pan and pickup', hours: 2.5 },
+];
+/** A kind only this suite registers (the column takes any name; the app's own kinds are in job-kinds.ts). */
+const TEST_KIND = 'test.count' as JobKind;
+const FAILING_KIND = 'test.fail' as JobKind;
+
+interface JobRow {
+  id: string;
+  kind: string;
+  idempotencyKey: string;
+  state: string;
+  attempts: number;
+  lockedBy: string | null;
+  lastError: string | null;
+  result: string | null;
+  payload: unknown;
+  runAt: Date;
+  doneAt: Date | null;
+}
+
+const jobsOf = (dataSource: DataSource, kind: string): Promise<JobRow[]> =>
+  dataSource.query('SELECT * FROM `jobs` WHERE `kind` = ? ORDER BY `createdAt`, `idempotencyKey`', [kind]);
+
+/**
+ * The durable queue in MariaDB, with the worker switched off (JOBS_WORKER_ENABLED=false) so each step is driven
+ * here with `runOnce()`: enqueued with the change that causes it, claimed with FOR UPDATE SKIP LOCKED, done in the
+ * transaction of its effect, retried with a doubling wait, dead with its last error, taken over after a lost worker.
+ */
+describe('background jobs in MariaDB', () => {
+  let t: TestApp;
+  let demo: Record<DemoRole, Session>;
+  let jobs: JobsService;
+  let worker: JobsWorker;
+  let handlers: JobHandlers;
+  const handled: Array<{ key: string }> = [];
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    await resetData(t.dataSource);
+    demo = await signInAllRoles(t.http);
+    jobs = t.app.get(JobsService);
+    worker = t.app.get(JobsWorker);
+    handlers = t.app.get(JobHandlers);
+    handlers.register(TEST_KIND, async (payload) => {
+      // Slow enough that two workers overlap.
+      await new Promise((resolve) => setTimeout(resolve, 5));
+      handled.push({ key: String(payload.key) });
+    });
+    handlers.register(FAILING_KIND, async () => {
+      throw new Error('the relay refused the message (test)');
+    });
+  });
+
+  afterAll(() => t?.close());
+
+  it('a sent quote and its mail job commit together; the worker renders and sends it once, with a stable Message-ID', async () => {
+    const created = await t.http.post(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES }).expect(201);
+    const before = await lastMailId();
+    const sent = await t.http.post(`/api/quotes/${created.body.id}/send`).set(...bearer(demo.estimator)).expect(200);
+    expect(sent.body).toMatchObject({ status: 'awaiting-answer', sentRevision: 1 });
+    const [queued] = await jobsOf(t.dataSource, 'quote.mail');
+    expect(queued).toMatchObject({ state: 'queued', attempts: 0, idempotencyKey: `${created.body.id}:r1` });
+    // Nothing goes out inside the request.
+    expect((await capturedMail()).filter((mail) => mail.id > before)).toEqual([]);
+
+    expect(await worker.runOnce()).toBe(true);
+    const [done] = await jobsOf(t.dataSource, 'quote.mail');
+    expect(done).toMatchObject({ state: 'done', attempts: 1, payload: null, lastError: null });
+    const mails = (await capturedMail()).filter((mail) => mail.id > before);
+    expect(mails).toHaveLength(1);
+    expect(mails[0].to).toEqual(['customer@ironbark.test']);
+    expect(mails[0].attachments.map((attachment) => attachment.contentType)).toEqual(['application/pdf']);
+    expect((mails[0] as unknown as { messageId: string }).messageId).toBe(done.result);
+    expect(done.result).toBe(`<${done.id}@swapwright.test>`);
+    expect(await worker.runOnce()).toBe(false);
+  });
+
+  it('sending the same revision again queues a second mail; the customer’s answer queues the estimator’s notice with it', async () => {
+    const [quote] = await t.dataSource.query("SELECT id FROM quotes WHERE status = 'awaiting-answer' LIMIT 1");
+    await t.http.post(`/api/quotes/${quote.id}/send`).set(...bearer(demo.estimator)).expect(200);
+    expect((await jobsOf(t.dataSource, 'quote.mail')).map((job) => job.state)).toEqual(['done', 'queued']);
+    await t.http.post(`/api/quotes/${quote.id}/answer`).set(...bearer(demo.customer)).send({ answer: 'accept' }).expect(200);
+    const notices = await jobsOf(t.dataSource, 'mail');
+    expect(notices.map((job) => job.idempotencyKey)).toContain(`quote-answer:${quote.id}:r1`);
+    while (await worker.runOnce());
+    expect((await jobsOf(t.dataSource, 'quote.mail')).map((job) => job.state)).toEqual(['done', 'done']);
+    expect((await jobsOf(t.dataSource, 'mail')).every((job) => job.state === 'done')).toBe(true);
+  });
+
+  it('work enqueued in a transaction that rolls back is not queued; the same key twice is stored once', async () => {
+    const before = await countRows(t.dataSource, 'jobs');
+    await expect(
+      t.dataSource.transaction(async (manager) => {
+        expect(await jobs.enqueue(manager, { kind: TEST_KIND, idempotencyKey: 'rolled-back', shopId: null, payload: { key: 'rolled-back' } })).toBe(true);
+        throw new Error('the change failed');
+      }),
+    ).rejects.toThrow('the change failed');
+    expect(await countRows(t.dataSource, 'jobs')).toBe(before);
+
+    expect(await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'once', shopId: null, payload: { key: 'once' } })).toBe(true);
+    expect(await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'once', shopId: null, payload: { key: 'once, again' } })).toBe(false);
+    expect(await jobsOf(t.dataSource, TEST_KIND)).toHaveLength(1);
+    while (await worker.runOnce());
+    expect(handled.map((entry) => entry.key)).toEqual(['once']);
+  });
+
+  it('two workers claiming at the same time never take the same job (FOR UPDATE SKIP LOCKED)', async () => {
+    handled.length = 0;
+    const keys = Array.from({ length: 40 }, (_, index) => `parallel-${String(index).padStart(2, '0')}`);
+    await t.dataSource.transaction(async (manager) => {
+      for (const key of keys) await jobs.enqueue(manager, { kind: TEST_KIND, idempotencyKey: key, shopId: null, payload: { key } });
+    });
+    // The first jobs wait until both workers hold one, so the two really claim side by side.
+    let inFlight = 0;
+    let mostInFlight = 0;
+    handlers.register(TEST_KIND, async (payload) => {
+      inFlight++;
+      mostInFlight = Math.max(mostInFlight, inFlight);
+      for (let waited = 0; mostInFlight < 2 && waited < 5000; waited += 10) await new Promise((resolve) => setTimeout(resolve, 10));
+      handled.push({ key: String(payload.key) });
+      inFlight--;
+    });
+    const second = new JobsWorker(t.dataSource, jobs, handlers, t.app.get(ConfigService));
+    const drain = async (w: JobsWorker) => {
+      let ran = 0;
+      while (await w.runOnce()) ran++;
+      return ran;
+    };
+    const counts = await Promise.all([drain(worker), drain(second)]);
+    expect(mostInFlight).toBe(2);
+    expect(counts.reduce((sum, n) => sum + n, 0)).toBe(keys.length);
+    expect(handled.map((entry) => entry.key).sort()).toEqual(keys);
+    const rows = (await jobsOf(t.dataSource, TEST_KIND)).filter((job) => job.idempotencyKey.startsWith('parallel-'));
+    expect(rows.every((job) => job.state === 'done' && job.attempts === 1)).toBe(true);
+    expect(new Set(rows.map((job) => job.lockedBy))).toEqual(new Set([worker.workerId, second.workerId]));
+  });
+
+  it('a failing job is retried after a doubling wait, then marked dead with its last error', async () => {
+    await jobs.enqueue(t.dataSource.manager, { kind: FAILING_KIND, idempotencyKey: 'always-fails', shopId: null, payload: {} });
+    const waits: number[] = [];
+    for (let attempt = 1; attempt <= 3; attempt++) {
+      const startedAt = Date.now();
+      expect(await worker.runOnce()).toBe(true);
+      const [job] = await jobsOf(t.dataSource, FAILING_KIND);
+      expect(job.attempts).toBe(attempt);
+      expect(job.lastError).toBe('the relay refused the message (test)');
+      if (attempt < 3) {
+        expect(job.state).toBe('queued');
+        waits.push(new Date(job.runAt).getTime() - startedAt);
+        // Not due yet: the worker leaves it.
+        expect(await worker.runOnce()).toBe(false);
+        await t.dataSource.query('UPDATE `jobs` SET `runAt` = UTC_TIMESTAMP(3) WHERE `kind` = ?', [FAILING_KIND]);
+      } else {
+        expect(job.state).toBe('dead');
+      }
+    }
+    // JOBS_RETRY_BASE_MS=1000: about 1 s, then about 2 s (plus up to 10 % jitter).
+    expect(waits[0]).toBeGreaterThan(800);
+    expect(waits[0]).toBeLessThan(1400);
+    expect(waits[1]).toBeGreaterThan(1800);
+    expect(waits[1]).toBeLessThan(2500);
+    expect(await worker.runOnce()).toBe(false);
+  });
+
+  it('a job left running by a worker that died is taken over once its lease ends; at its last attempt it is marked dead', async () => {
+    handled.length = 0;
+    await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'orphaned', shopId: null, payload: { key: 'orphaned' } });
+    await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'poison', shopId: null, payload: { key: 'poison' } });
+    const orphan = "`idempotencyKey` = 'orphaned'";
+    await t.dataSource.query(`UPDATE \`jobs\` SET \`state\` = 'running', \`attempts\` = 1, \`lockedBy\` = 'gone:1', \`leaseUntil\` = UTC_TIMESTAMP(3) + INTERVAL 1 HOUR WHERE ${orphan}`);
+    await t.dataSource.query("UPDATE `jobs` SET `state` = 'running', `attempts` = 3, `lockedBy` = 'gone:2', `leaseUntil` = UTC_TIMESTAMP(3) - INTERVAL 1 SECOND WHERE `idempotencyKey` = 'poison'");
+    // Within its lease the job stays with its worker.
+    expect(await worker.runOnce()).toBe(true); // the poison job, whose lease ended at its last attempt
+    expect(await worker.runOnce()).toBe(false);
+    await t.dataSource.query(`UPDATE \`jobs\` SET \`leaseUntil\` = UTC_TIMESTAMP(3) - INTERVAL 1 SECOND WHERE ${orphan}`);
+    expect(await worker.runOnce()).toBe(true);
+    const rows = await jobsOf(t.dataSource, TEST_KIND);
+    expect(rows.find((job) => job.idempotencyKey === 'orphaned')).toMatchObject({ state: 'done', attempts: 2, lockedBy: worker.workerId });
+    expect(rows.find((job) => job.idempotencyKey === 'poison')).toMatchObject({ state: 'dead', attempts: 3 });
+    expect(rows.find((job) => job.idempotencyKey === 'poison')!.lastError).toMatch(/process ended/);
+    expect(handled.map((entry) => entry.key)).toEqual(['orphaned']);
+  });
+
+  it("the owner reads the shop's jobs and their counts by state, without their payloads; other shops' jobs stay out", async () => {
+    const response = await t.http.get('/api/jobs').set(...bearer(demo.owner)).expect(200);
+    expect(response.body.counts).toMatchObject({ queued: 0, running: 0, dead: 0 });
+    expect(response.body.counts.done).toBeGreaterThanOrEqual(3);
+    expect(response.body.items.length).toBe(response.body.counts.done);
+    for (const item of response.body.items) {
+      expect(Object.keys(item).sort()).toEqual(['attempts', 'createdAt', 'doneAt', 'id', 'kind', 'lastError', 'maxAttempts', 'runAt', 'state']);
+      expect(['mail', 'quote.mail']).toContain(item.kind);
+    }
+    const dead = await t.http.get('/api/jobs?state=dead').set(...bearer(demo.owner)).expect(200);
+    expect(dead.body.items).toEqual([]);
+    const bad = await t.http.get('/api/jobs?state=stuck').set(...bearer(demo.owner)).expect(400);
+    expect(bad.body.message).toMatch(/state must be one of: queued, running, done, dead/);
+    await t.http.get('/api/jobs').set(...bearer(demo.estimator)).expect(403);
+    const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+    const theirs = await t.http.get('/api/jobs').set(...bearer(other)).expect(200);
+    expect(theirs.body).toMatchObject({ total: 0, items: [], counts: { queued: 0, running: 0, done: 0, dead: 0 } });
+  });
+});
