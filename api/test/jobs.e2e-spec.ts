@@ -84,7 +84,7 @@ describe('background jobs in MariaDB', () => {
     expect(mails).toHaveLength(1);
     expect(mails[0].to).toEqual(['customer@ironbark.test']);
     expect(mails[0].attachments.map((attachment) => attachment.contentType)).toEqual(['application/pdf']);
-    expect((mails[0] as unknown as { messageId: string }).messageId).toBe(done.result);
+    expect(mails[0].messageId).toBe(done.result);
     expect(done.result).toBe(`<${done.id}@swapwright.test>`);
     expect(await worker.runOnce()).toBe(false);
   });

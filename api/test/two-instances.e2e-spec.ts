@@ -1,60 +1,13 @@
-import { ChildProcess, spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { join } from 'node:path';
 import { DEMO_PASSWORD } from '@swapwright/seed-data';
+import { ApiProcess, assertApiBuilt, startApiProcess, stopApiProcess } from './helpers/api-process';
 import { startTestApp, TestApp } from './helpers/test-app';
 
-const MAIN = join(__dirname, '..', 'dist', 'main.js');
 const LIMIT = 3;
+type Instance = ApiProcess;
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-interface Instance {
-  base: string;
-  process: ChildProcess;
-  log: string[];
-}
-
-/** A real API process (the built server), on its own port, against the test database. */
-async function startInstance(): Promise<Instance> {
-  const port = await freePort();
-  const log: string[] = [];
-  const child = spawn(process.execPath, [MAIN], {
-    env: { ...process.env, PORT: String(port), AUTH_RATE_LIMIT: String(LIMIT), AUTH_RATE_WINDOW_SECONDS: '60', WEB_DIST_DIR: '' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  child.stdout?.on('data', (chunk: Buffer) => log.push(chunk.toString()));
-  child.stderr?.on('data', (chunk: Buffer) => log.push(chunk.toString()));
-  const base = `http://127.0.0.1:${port}/api`;
-  const deadline = Date.now() + 60_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`the API process stopped at start-up:\n${log.join('')}`);
-    try {
-      if ((await fetch(`${base}/health`)).ok) return { base, process: child, log };
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > deadline) throw new Error(`the API process did not answer in 60 s:\n${log.join('')}`);
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-}
-
-async function stopInstance(instance: Instance | undefined): Promise<void> {
-  if (!instance || instance.process.exitCode !== null) return;
-  const exited = new Promise((resolve) => instance.process.once('exit', resolve));
-  instance.process.kill('SIGTERM');
-  await exited;
-}
+/** A real API process (the built server), on its own port against the test database. */
+const startInstance = () => startApiProcess({ AUTH_RATE_LIMIT: String(LIMIT), AUTH_RATE_WINDOW_SECONDS: '60' });
+const stopInstance = (instance: Instance | undefined) => stopApiProcess(instance);
 
 function signIn(instance: Instance, password: string) {
   return fetch(`${instance.base}/auth/sign-in`, {
@@ -74,7 +27,7 @@ describe('two API instances against one database', () => {
   let b: Instance;
 
   beforeAll(async () => {
-    if (!existsSync(MAIN)) throw new Error('api/dist/main.js is missing: run `npm run build -w api` first (npm test builds it).');
+    assertApiBuilt();
     t = await startTestApp(); // fresh demo data and empty rate-limit counters
     [a, b] = await Promise.all([startInstance(), startInstance()]);
   }, 120_000);

@@ -1,6 +1,8 @@
 /** Reads the local mail fake (scripts/fakes/mail-fake.ts) the test services run; MAIL_FAKE_URL comes from .local/test/env.sh. */
 export interface CapturedMail {
   id: number;
+  /** The Message-ID header (every attempt of one background job sends the same one). */
+  messageId: string;
   to: string[];
   subject: string;
   text: string;
