@@ -129,6 +129,9 @@ describe('measurement sheets and photos', () => {
   });
 
   it('accepts JPEG, PNG and WebP by content and serves them with the right type and nosniff', async () => {
+    // Source: ITU-T T.81 / ISO/IEC 10918-1 (JPEG: SOI FFD8 … EOI FFD9), the PNG Specification (W3C, ISO/IEC 15948: the
+    // 8-byte signature, IHDR width and height, IEND last) and RFC 9649 (WebP: RIFF size, WEBP, VP8/VP8L/VP8X chunks):
+    // the generated files follow these layouts and their pixel sizes are read back from the headers.
     const res = await upload(s.fabricator, [
       { data: makeJpeg(64, 48), name: 'crossmember.jpg' },
       { data: makePng(40, 30), name: 'rails.png' },
@@ -149,6 +152,7 @@ describe('measurement sheets and photos', () => {
   it('refuses a renamed non-image, truncated, empty, over-size, too many and absurd pixel counts; nothing stored', async () => {
     const filesBefore = (await storedFiles()).length;
     const rowsBefore = await countRows(t.dataSource, 'measurement_photos');
+    // Source: ISO 32000-1 (PDF) 7.5.2: a PDF starts with %PDF-; named photo.jpg it is still no image.
     const pdf = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
     const jpeg = makeJpeg(64, 48);
     expect((await upload(s.fabricator, [{ data: pdf, name: 'photo.jpg' }]).expect(415)).body.code).toBe('photo_not_image');
@@ -160,7 +164,9 @@ describe('measurement sheets and photos', () => {
     expect((await upload(s.fabricator, Array.from({ length: 6 }, (_, i) => ({ data: makePng(4, 4), name: `p${i}.png` }))).expect(400)).body.message).toMatch(/Up to 5 photos/);
     // A header claiming 30000 × 30000 pixels (900 megapixels): a decompression trap.
     expect((await upload(s.fabricator, [{ data: makeWebp(16000, 16000), name: 'trap.webp' }]).expect(400)).body.code).toBe('photo_too_many_pixels');
-    // A name with a folder path is refused (a browser sends the bare file name), with or without a good image.
+    // A name with a folder path is refused, with or without a good image.
+    // Source: W3C File API, the File interface: `name` is the file's name without path information, so a browser never
+    // sends one; a name with folders was made by hand.
     for (const name of ['../../../etc/passwd.png', '..\\..\\boot.png', 'sub/dir.png']) {
       expect((await upload(s.fabricator, [{ data: makePng(8, 8), name }]).expect(400)).body.code).toBe('photo_bad_name');
     }
@@ -172,6 +178,8 @@ describe('measurement sheets and photos', () => {
   });
 
   it('a JPEG with its GPS position is stored without it; PNG text and WebP EXIF/XMP are removed too', async () => {
+    // Source: CIPA DC-008 (Exif): the position sits in the GPS IFD of the APP1 "Exif" segment; RFC 9649 (WebP): the
+    // EXIF and "XMP " chunks; the PNG Specification: tEXt chunks carry free text such as a position.
     const tagged = jpegWithGps();
     // The fixture really carries a position (read back with exifr).
     expect((await exifr.gps(tagged))?.latitude).toBeCloseTo(51.5, 6);
