@@ -2,29 +2,15 @@ import { DEMO_CATALOG_IDS, DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS } from '@swapwrig
 import exifr from 'exifr';
 import { readdir, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const piexif = require('piexifjs');
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
 import { bearer, countRows, Session, signIn, startSignedInApp, TestApp } from './helpers/test-app';
-import { makeJpeg, makePng, makeWebp, pngTextChunk } from './helpers/test-images';
+import { jpegWithGps, makeJpeg, makePng, makeWebp, pngTextChunk } from './helpers/test-images';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { MAX_PHOTO_BYTES } from '../src/measurements/photo-limits';
 
 const PROJECT = DEMO_PROJECT_IDS.ridgeback;
 const OTHER_CUSTOMERS_PROJECT = DEMO_PROJECT_IDS.stag;
 const SHEET = `/api/projects/${PROJECT}/measurement-sheet`;
-
-/** A JPEG carrying a GPS position, written with piexifjs (binary strings, JPEG only). */
-function jpegWithGps(): Buffer {
-  const gps = {
-    [piexif.GPSIFD.GPSLatitudeRef]: 'N',
-    [piexif.GPSIFD.GPSLatitude]: [[51, 1], [30, 1], [0, 1]],
-    [piexif.GPSIFD.GPSLongitudeRef]: 'W',
-    [piexif.GPSIFD.GPSLongitude]: [[0, 1], [7, 1], [0, 1]],
-  };
-  const exif = piexif.dump({ '0th': {}, Exif: {}, GPS: gps });
-  return Buffer.from(piexif.insert(exif, makeJpeg(64, 48).toString('binary')), 'binary');
-}
 
 describe('measurement sheets and photos', () => {
   let t: TestApp;

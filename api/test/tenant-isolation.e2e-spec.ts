@@ -155,6 +155,8 @@ describe("tenant isolation of every object route, generated from the router", ()
       'labor-operations:id': shop.laborOperationId,
       'quotes:id': shop.quoteId,
       'work-orders:id': shop.workOrderId,
+      'checks:checkKey': 'oil-pan-pickup.pickup-tabs',
+      'work-order-photos:id': shop.workOrderPhotoId,
     };
     return ids[`${segment.split('/').pop()}:${param}`];
   }

@@ -3,7 +3,10 @@ import Stripe from 'stripe';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { seedParts } from '../src/database/seed/seed-parts';
 import { startAppWithPayments, until } from './helpers/app-with-payments';
-import { bearer, countRows, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
+import exifr from 'exifr';
+import { OTHER_SHOP } from './fixtures/other-shop.fixture';
+import { bearer, countRows, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
+import { jpegWithGps, makeJpeg } from './helpers/test-images';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
 import { pdfText } from './helpers/pdf-text';
 import { RunningPaymentFake } from './helpers/payment-fake-process';
@@ -21,7 +24,7 @@ const LINES = [
   { kind: 'part', description: part('TR-OP-HV').description, catalogKind: 'parts', catalogItemId: part('TR-OP-HV').id, quantity: 1, pricing: 'list', unitPriceCents: 13900 },
 ];
 
-type Check = { key: string; label: string; measured: boolean; range: string | null; rangeFrom: string | null; latest: { result: string; value: number | null; recordedByName: string; recordedAt: string } | null; fitFinding: { checkId: string } | null };
+type Check = { key: string; label: string; photos: { id: string; contentType: string; widthPx: number; heightPx: number; uploadedByName: string }[]; measured: boolean; range: string | null; rangeFrom: string | null; latest: { result: string; value: number | null; recordedByName: string; recordedAt: string } | null; fitFinding: { checkId: string } | null };
 type Step = { key: string; name: string; torque: { fastener: string; lbfFt: number; newtonMetres: number; sequence: string | null; partSku: string | null }[]; checks: Check[] };
 
 describe('job stages and the work order, from the first fit check to the finished build', () => {
@@ -144,6 +147,31 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(outside.body.progress).toEqual({ total: 5, passed: 0, failed: 1, open: 4 });
     const rolled = await record({ checkKey: 'oil-pan-pickup.rear-main-lip', passed: false }).expect(200);
     expect(checkOf(rolled.body, 'oil-pan-pickup.rear-main-lip').latest!.result).toBe('fail');
+  });
+
+  it('a photo of a check is stored without its location, served to the shop and the project\'s customer with nosniff, not found for another shop', async () => {
+    const tagged = jpegWithGps();
+    const url = `/api/work-orders/${workOrderId}/checks/oil-pan-pickup.pickup-tabs/photos`;
+    const added = await t.http.post(url).set(...bearer(demo.fabricator)).attach('photos', tagged, 'tabs.jpg').expect(201);
+    const [photo] = checkOf(added.body, 'oil-pan-pickup.pickup-tabs').photos;
+    expect(photo).toMatchObject({ contentType: 'image/jpeg', widthPx: 64, heightPx: 48, uploadedByName: demo.fabricator.user.name });
+    const file = `/api/work-order-photos/${photo.id}/file`;
+    const served = await t.http.get(file).set(...bearer(demo.estimator)).buffer(true).expect(200);
+    expect(served.headers['content-type']).toBe('image/jpeg');
+    expect(served.headers['x-content-type-options']).toBe('nosniff');
+    expect(await exifr.gps(served.body as Buffer).catch(() => undefined)).toBeUndefined();
+    // The project's own customer may see it; another shop may not (not found, as if it did not exist).
+    await t.http.get(file).set(...bearer(demo.customer)).expect(200);
+    const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+    expect((await t.http.get(file).set(...bearer(other))).status).toBe(404);
+    expect((await t.http.post(url).set(...bearer(other)).attach('photos', makeJpeg(16, 16), 'peek.jpg')).status).toBe(404);
+    // The shared photo pipeline's refusals: content read (not the name), a check that does not exist, a role that records no checks.
+    const notImage = await t.http.post(url).set(...bearer(demo.fabricator)).attach('photos', Buffer.from('not a photo'), 'tabs.jpg');
+    expect(notImage.status).toBe(415);
+    expect((await t.http.post(`/api/work-orders/${workOrderId}/checks/no-such.check/photos`).set(...bearer(demo.fabricator)).attach('photos', makeJpeg(16, 16), 'x.jpg')).status).toBe(400);
+    expect((await t.http.post(url).set(...bearer(demo.counter)).attach('photos', makeJpeg(16, 16), 'x.jpg')).status).toBe(403);
+    expect((await t.http.post(url).set(...bearer(demo.fabricator))).status).toBe(400);
+    expect(checkOf(await workOrder(), 'oil-pan-pickup.pickup-tabs').photos).toHaveLength(1);
   });
 
   it('refuses a check recorded the wrong way, with a message that says what to send', async () => {

@@ -1,4 +1,6 @@
-import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { join } from 'node:path';
+import { ARTIFACTS_DIR, openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { makeJpeg } from './support/images';
 import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
 import { demoSignIn, signInAs } from './support/session';
 
@@ -165,6 +167,16 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       await tabs.getByRole('button', { name: 'Done as described' }).click();
       await expectText(tabs.getByTestId('check-result'), /^Pass$/);
       await expectText(tabs, /Recorded by/);
+
+      // A photo of the tabs from the phone's camera button: it goes up, then shows as a thumbnail on the check.
+      const uploaded = page.waitForResponse((r) => /\/checks\/[^/]+\/photos$/.test(r.url()) && r.request().method() === 'POST');
+      await tabs.getByLabel('Take or add photos: Pickup bolted at both tabs').setInputFiles({ name: 'pickup-tabs.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page) });
+      expect((await uploaded).status()).toBe(201);
+      const thumb = tabs.getByTestId('check-photo').getByRole('img');
+      await expectVisible(thumb);
+      expect(await thumb.evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBe(320);
+      await tabs.scrollIntoViewIfNeeded();
+      await tabs.screenshot({ path: join(ARTIFACTS_DIR, 'screenshots', 'fabricator-check-photo-phone.png') });
 
       // Common practice (no published source): the pickup screen sits 6–10 mm above the sump floor; 14 mm is outside.
       const screen = page.getByTestId('check-oil-pan-pickup.screen-height');

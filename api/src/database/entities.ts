@@ -22,10 +22,10 @@ import { Project } from '../projects/project.entity';
 import { ThrottleCounter } from '../rate-limits/throttle-counter.entity';
 import { Shop } from '../shops/shop.entity';
 import { User } from '../users/user.entity';
-import { WorkOrder, WorkOrderCheck } from '../work-orders/work-order.entity';
+import { WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto } from '../work-orders/work-order.entity';
 
 /** Every entity, listed explicitly (no globs: the same list works from src under jest and from dist). */
 export const ENTITIES = [User, Shop, Membership, Invitation, RefreshToken, PasswordResetToken, PendingSignUp, Customer, Project,
   ...CATALOG_ENTITIES, ProjectFitSelection, ShopFitSettings, FitReportRecord, ...PARTS_ENTITIES,
   LaborOperation, Quote, QuoteRevision, QuoteSettings, QuoteNotification, DepositPayment, PaymentEvent, ...MEASUREMENT_ENTITIES,
-  ThrottleCounter, WorkOrder, WorkOrderCheck, AuditEvent, Job];
+  ThrottleCounter, WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto, AuditEvent, Job];

@@ -21,6 +21,7 @@ import {
 import { MeasurementSettingsDto, PutMeasurementTemplateDto, SetMeasurementValueDto, UploadPhotosDto } from './dto/measurement.dto';
 import { mapMeasurementPhoto, mapMeasurementPoint, mapMeasurementSheet } from './measurement.mapper';
 import { MeasurementsService, UploadedPhotoFile } from './measurements.service';
+import { sendPhoto } from './photo-intake.service';
 import { PhotoUploadInterceptor } from './photo-upload.interceptor';
 
 
@@ -91,11 +92,7 @@ export class MeasurementsController {
   @ApiOkResponse({ schema: { type: 'string', format: 'binary' } })
   async photoFile(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Res() res: Response): Promise<void> {
     const { photo, data } = await this.measurements.photoFile(user, id);
-    res.setHeader('Content-Type', photo.contentType);
-    res.setHeader('X-Content-Type-Options', 'nosniff');
-    res.setHeader('Content-Disposition', `inline; filename="${photo.id}"`);
-    res.setHeader('Cache-Control', 'private, max-age=3600');
-    res.send(data);
+    sendPhoto(res, photo, data);
   }
 
   @Delete('measurement-photos/:id')

@@ -5,6 +5,7 @@ import { ProjectsModule } from '../projects/projects.module';
 import { MEASUREMENT_ENTITIES } from './measurement-sheet.entity';
 import { MeasurementsController } from './measurements.controller';
 import { MeasurementsService } from './measurements.service';
+import { PhotoIntakeService } from './photo-intake.service';
 import { LocalDiskPhotoStorage, PhotoStorage } from './photo-storage';
 import { S3PhotoStorage } from './s3-photo-storage';
 import { ConfigService } from '@nestjs/config';
@@ -27,12 +28,13 @@ export function photoStorageFor(config: AppConfigService): PhotoStorage {
   controllers: [MeasurementsController],
   providers: [
     MeasurementsService,
+    PhotoIntakeService,
     {
       provide: PhotoStorage,
       inject: [ConfigService],
       useFactory: photoStorageFor,
     },
   ],
-  exports: [MeasurementsService, PhotoStorage],
+  exports: [MeasurementsService, PhotoStorage, PhotoIntakeService],
 })
 export class MeasurementsModule {}

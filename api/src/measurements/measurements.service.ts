@@ -27,7 +27,7 @@ import {
   MeasurementValue,
 } from './measurement-sheet.entity';
 import { MeasurementErrors } from './measurements.errors';
-import { checkClientName, checkImage, stripLocationMetadata } from './photo-image';
+import { PhotoIntakeService, type UploadedPhotoFile } from './photo-intake.service';
 import { PhotoStorage } from './photo-storage';
 import { jsonCopy } from '../common/json/json-copy';
 
@@ -44,10 +44,7 @@ export interface SheetView {
   applied: AppliedMeasurements | null;
 }
 
-export interface UploadedPhotoFile {
-  originalname: string;
-  buffer: Buffer;
-}
+export type { UploadedPhotoFile } from './photo-intake.service';
 
 @Injectable()
 export class MeasurementsService {
@@ -62,6 +59,7 @@ export class MeasurementsService {
     private readonly projects: ProjectsService,
     private readonly catalog: CatalogService,
     private readonly storage: PhotoStorage,
+    private readonly intake: PhotoIntakeService,
     private readonly audit: AuditService,
   ) {}
 
@@ -236,14 +234,7 @@ export class MeasurementsService {
     if (!files || files.length === 0) throw MeasurementErrors.photoNoFiles();
     if (input.pointId) await this.pointOf(user, project, input.pointId);
     if (input.replacesPhotoId && user.role === 'customer') throw MeasurementErrors.photoReplaceForbidden();
-    for (const file of files) checkClientName(file.originalname);
-    const prepared = await Promise.all(
-      files.map(async (file) => {
-        const image = checkImage(file.buffer, file.originalname);
-        const data = await stripLocationMetadata(file.buffer, image.extension);
-        return { image, data, key: `${randomUUID()}.${image.extension}` };
-      }),
-    );
+    const prepared = await this.intake.prepare(files);
     const written: string[] = [];
     let replaced: MeasurementPhoto | null = null;
     try {

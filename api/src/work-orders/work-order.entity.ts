@@ -88,3 +88,46 @@ export class WorkOrderCheck {
   @CreateDateColumn({ type: 'datetime', precision: 3 })
   recordedAt: Date;
 }
+
+/** A photo of a check (optional, any number): kept by the shared photo storage under a generated key. */
+@Entity('work_order_check_photos')
+export class WorkOrderCheckPhoto {
+  @PrimaryColumn({ type: 'char', length: 36 })
+  id: string;
+
+  @Column({ type: 'char', length: 36 })
+  shopId: string;
+
+  @Column({ type: 'char', length: 36 })
+  workOrderId: string;
+
+  @Column({ type: 'char', length: 36 })
+  projectId: string;
+
+  @Column({ type: 'varchar', length: 130 })
+  checkKey: string;
+
+  @Column({ type: 'varchar', length: 64 })
+  storageKey: string;
+
+  @Column({ type: 'varchar', length: 20 })
+  contentType: string;
+
+  @Column({ type: 'int' })
+  bytes: number;
+
+  @Column({ type: 'int' })
+  widthPx: number;
+
+  @Column({ type: 'int' })
+  heightPx: number;
+
+  @Column({ type: 'char', length: 36 })
+  uploadedById: string;
+
+  @Column({ type: 'varchar', length: 120 })
+  uploadedByName: string;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3 })
+  createdAt: Date;
+}

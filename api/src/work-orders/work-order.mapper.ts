@@ -1,7 +1,7 @@
 import { WORK_ORDER_DEFERENCE, workOrderCautions } from '@swapwright/shared';
 import type { Project } from '../projects/project.entity';
-import { RecordedCheckResponseDto, WorkOrderResponseDto, WorkOrderSummaryResponseDto, WorkProgressResponseDto } from './dto/work-order-response.dto';
-import { WorkOrder, WorkOrderCheck } from './work-order.entity';
+import { RecordedCheckResponseDto, WorkCheckPhotoResponseDto, WorkOrderResponseDto, WorkOrderSummaryResponseDto, WorkProgressResponseDto } from './dto/work-order-response.dto';
+import { WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto } from './work-order.entity';
 
 export function workOrderLabel(order: Pick<WorkOrder, 'number'>): string {
   return `W-${String(order.number).padStart(4, '0')}`;
@@ -33,6 +33,11 @@ function mapRecord(record: WorkOrderCheck): RecordedCheckResponseDto {
   };
 }
 
+function mapCheckPhoto(photo: WorkOrderCheckPhoto): WorkCheckPhotoResponseDto {
+  const { id, contentType, widthPx, heightPx, bytes, uploadedByName } = photo;
+  return { id, contentType, widthPx, heightPx, bytes, uploadedByName, createdAt: photo.createdAt.toISOString() };
+}
+
 export function mapWorkOrderSummary(order: WorkOrder, project: Project, records: readonly WorkOrderCheck[]): WorkOrderSummaryResponseDto {
   return {
     id: order.id,
@@ -46,7 +51,7 @@ export function mapWorkOrderSummary(order: WorkOrder, project: Project, records:
   };
 }
 
-export function mapWorkOrder(order: WorkOrder, project: Project, records: readonly WorkOrderCheck[]): WorkOrderResponseDto {
+export function mapWorkOrder(order: WorkOrder, project: Project, records: readonly WorkOrderCheck[], photos: readonly WorkOrderCheckPhoto[]): WorkOrderResponseDto {
   const latest = latestByCheck(records);
   const counts = new Map<string, number>();
   for (const record of records) counts.set(record.checkKey, (counts.get(record.checkKey) ?? 0) + 1);
@@ -64,7 +69,12 @@ export function mapWorkOrder(order: WorkOrder, project: Project, records: readon
       ...step,
       checks: step.checks.map((check) => {
         const record = latest.get(check.key);
-        return { ...check, latest: record ? mapRecord(record) : null, recordings: counts.get(check.key) ?? 0 };
+        return {
+          ...check,
+          latest: record ? mapRecord(record) : null,
+          recordings: counts.get(check.key) ?? 0,
+          photos: photos.filter((photo) => photo.checkKey === check.key).map(mapCheckPhoto),
+        };
       }),
     })),
     cautions: workOrderCautions(order.steps.flatMap((step) => step.hazards)),

@@ -1,9 +1,12 @@
-import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, Param, Post, Query, Res, UploadedFiles, UseInterceptors } from '@nestjs/common';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOkResponse, ApiParam, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
-import { WORK_ORDER_READERS, WORK_ORDER_RECORDERS } from '../common/roles/role-matrix';
+import { WORK_ORDER_PHOTO_READERS, WORK_ORDER_READERS, WORK_ORDER_RECORDERS } from '../common/roles/role-matrix';
+import { sendPhoto, type UploadedPhotoFile } from '../measurements/photo-intake.service';
+import { PhotoUploadInterceptor } from '../measurements/photo-upload.interceptor';
 import { AuthUser } from '../common/tenant/auth-user';
 import { ListWorkOrdersQueryDto } from './dto/list-work-orders-query.dto';
 import { RecordCheckDto } from './dto/record-check.dto';
@@ -11,7 +14,7 @@ import { WorkOrderResponseDto, WorkOrderSummaryResponseDto } from './dto/work-or
 import { mapWorkOrder, mapWorkOrderSummary } from './work-order.mapper';
 import { WorkOrdersService, WorkOrderView } from './work-orders.service';
 
-const mapView = (view: WorkOrderView): WorkOrderResponseDto => mapWorkOrder(view.order, view.project, view.records);
+const mapView = (view: WorkOrderView): WorkOrderResponseDto => mapWorkOrder(view.order, view.project, view.records, view.photos);
 
 @ApiTags('work-orders')
 @ApiBearerAuth()
@@ -49,6 +52,23 @@ export class WorkOrdersController {
     return mapView(await this.workOrders.recordCheck(user, id, body));
   }
 
+  @Post(':id/checks/:checkKey/photos')
+  @HttpCode(201)
+  @Roles(...WORK_ORDER_RECORDERS)
+  @UseInterceptors(PhotoUploadInterceptor)
+  @ApiConsumes('multipart/form-data')
+  @ApiParam({ name: 'checkKey', example: 'oil-pan-pickup.pickup-tabs' })
+  @ApiBody({ schema: { type: 'object', required: ['photos'], properties: { photos: { type: 'array', items: { type: 'string', format: 'binary' } } } } })
+  @ApiOkResponse({ type: WorkOrderResponseDto, description: 'JPEG, PNG or WebP, read by content; location metadata is stripped before storing' })
+  async addCheckPhotos(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIdPipe) id: string,
+    @Param('checkKey') checkKey: string,
+    @UploadedFiles() files: UploadedPhotoFile[],
+  ): Promise<WorkOrderResponseDto> {
+    return mapView(await this.workOrders.addCheckPhotos(user, id, checkKey, files));
+  }
+
   @Post(':id/finish')
   @HttpCode(200)
   @Roles(...WORK_ORDER_RECORDERS)
@@ -69,5 +89,21 @@ export class ProjectWorkOrderController {
   @ApiOkResponse({ type: WorkOrderResponseDto })
   async get(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<WorkOrderResponseDto> {
     return mapView(await this.workOrders.forProject(user, projectId));
+  }
+}
+
+@ApiTags('work-orders')
+@ApiBearerAuth()
+@Controller('work-order-photos')
+export class WorkOrderPhotosController {
+  constructor(private readonly workOrders: WorkOrdersService) {}
+
+  @Get(':id/file')
+  @Roles(...WORK_ORDER_PHOTO_READERS)
+  @ApiProduces('image/jpeg', 'image/png', 'image/webp')
+  @ApiOkResponse({ schema: { type: 'string', format: 'binary' } })
+  async file(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Res() res: Response): Promise<void> {
+    const { photo, data } = await this.workOrders.checkPhotoFile(user, id);
+    sendPhoto(res, photo, data);
   }
 }

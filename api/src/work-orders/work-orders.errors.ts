@@ -14,4 +14,5 @@ export const WorkOrderErrors = {
     new AppError(400, 'validation_failed', `"${label}" is confirmed, not measured: send passed true or false`, [`"${label}" is confirmed, not measured: send passed true or false`]),
   checksOutstanding: (labels: string[]) =>
     new AppError(409, 'work_order_checks_outstanding', `Finish every check with a pass first. Still open or failed: ${labels.join('; ')}.`, labels),
+  photoNotFound: () => new AppError(404, 'photo_not_found', 'That photo does not exist in your shop.'),
 };

@@ -1,13 +1,14 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ProjectsModule } from '../projects/projects.module';
-import { WorkOrder, WorkOrderCheck } from './work-order.entity';
-import { ProjectWorkOrderController, WorkOrdersController } from './work-orders.controller';
+import { MeasurementsModule } from '../measurements/measurements.module';
+import { WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto } from './work-order.entity';
+import { ProjectWorkOrderController, WorkOrderPhotosController, WorkOrdersController } from './work-orders.controller';
 import { WorkOrdersService } from './work-orders.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([WorkOrder, WorkOrderCheck]), ProjectsModule],
-  controllers: [WorkOrdersController, ProjectWorkOrderController],
+  imports: [TypeOrmModule.forFeature([WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto]), ProjectsModule, MeasurementsModule],
+  controllers: [WorkOrdersController, ProjectWorkOrderController, WorkOrderPhotosController],
   providers: [WorkOrdersService],
   exports: [WorkOrdersService],
 })

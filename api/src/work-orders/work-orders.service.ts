@@ -21,7 +21,8 @@ import { ProjectsService } from '../projects/projects.service';
 import type { Quote } from '../quotes/quote.entity';
 import type { QuoteRevision } from '../quotes/quote-revision.entity';
 import { RecordCheckDto } from './dto/record-check.dto';
-import { WorkOrder, WorkOrderCheck } from './work-order.entity';
+import { PhotoIntakeService, type UploadedPhotoFile } from '../measurements/photo-intake.service';
+import { WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto } from './work-order.entity';
 import { WorkOrderErrors } from './work-orders.errors';
 
 /** A work order with what its views need. */
@@ -29,6 +30,7 @@ export interface WorkOrderView {
   order: WorkOrder;
   project: Project;
   records: WorkOrderCheck[];
+  photos: WorkOrderCheckPhoto[];
 }
 
 /** The quote a work order is opened from: the approved quote and the revision the customer approved. */
@@ -45,8 +47,10 @@ export class WorkOrdersService {
   constructor(
     @InjectRepository(WorkOrder) orders: Repository<WorkOrder>,
     @InjectRepository(WorkOrderCheck) private readonly checks: Repository<WorkOrderCheck>,
+    @InjectRepository(WorkOrderCheckPhoto) private readonly photos: Repository<WorkOrderCheckPhoto>,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly projects: ProjectsService,
+    private readonly intake: PhotoIntakeService,
   ) {
     this.orders = new TenantRepository(orders);
   }
@@ -182,6 +186,46 @@ export class WorkOrdersService {
     return this.get(user, id);
   }
 
+  /** Adds photos to a check of a job in the bay (checked, location metadata stripped, stored by the shared photo pipeline). */
+  async addCheckPhotos(user: AuthUser, id: string, checkKey: string, files: UploadedPhotoFile[] | undefined): Promise<WorkOrderView> {
+    const { order } = await this.get(user, id);
+    if (order.state === 'ready') throw WorkOrderErrors.notStarted();
+    if (order.state === 'finished') throw WorkOrderErrors.finished();
+    const check = this.checkOf(order, checkKey);
+    const prepared = await this.intake.prepare(files);
+    await this.intake.storeWith(prepared, () =>
+      this.dataSource.transaction(async (manager) => {
+        for (const { image, data, key } of prepared) {
+          await manager.insert(WorkOrderCheckPhoto, {
+            id: randomUUID(),
+            shopId: user.shopId,
+            workOrderId: order.id,
+            projectId: order.projectId,
+            checkKey: check.key,
+            storageKey: key,
+            contentType: image.contentType,
+            bytes: data.length,
+            widthPx: image.width,
+            heightPx: image.height,
+            uploadedById: user.userId,
+            uploadedByName: user.name.slice(0, 120),
+          });
+        }
+      }),
+    );
+    return this.get(user, id);
+  }
+
+  /** A check photo's file, for the shop's members and the project's own customer (anyone else: not found). */
+  async checkPhotoFile(user: AuthUser, photoId: string): Promise<{ photo: WorkOrderCheckPhoto; data: Buffer }> {
+    const photo = await this.photos.findOne({ where: { id: photoId, shopId: user.shopId } });
+    if (!photo) throw WorkOrderErrors.photoNotFound();
+    await this.projects.get(user, photo.projectId).catch(() => {
+      throw WorkOrderErrors.photoNotFound();
+    });
+    return { photo, data: await this.intake.read(photo.storageKey) };
+  }
+
   /** The job is built: every check's newest recording must be a pass. The project moves to done with it. */
   async finish(user: AuthUser, id: string): Promise<WorkOrderView> {
     const view = await this.get(user, id);
@@ -211,6 +255,7 @@ export class WorkOrdersService {
 
   private async viewOf(user: AuthUser, order: WorkOrder, project?: Project): Promise<WorkOrderView> {
     const records = await this.checks.find({ where: { shopId: user.shopId, workOrderId: order.id }, order: { recordedAt: 'ASC', id: 'ASC' } });
-    return { order, project: project ?? (await this.projects.get(user, order.projectId)), records };
+    const photos = await this.photos.find({ where: { shopId: user.shopId, workOrderId: order.id }, order: { createdAt: 'ASC', id: 'ASC' } });
+    return { order, project: project ?? (await this.projects.get(user, order.projectId)), records, photos };
   }
 }

@@ -177,7 +177,9 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/work-orders/:id': BUILDERS,
   'POST /api/work-orders/:id/start': BUILDERS,
   'POST /api/work-orders/:id/checks': BUILDERS,
+  'POST /api/work-orders/:id/checks/:checkKey/photos': BUILDERS,
   'POST /api/work-orders/:id/finish': BUILDERS,
+  'GET /api/work-order-photos/:id/file': ALL,
   'GET /api/projects/:projectId/work-order': BUILDERS,
 };
 

@@ -1,4 +1,6 @@
 import { crc32, deflateSync } from 'node:zlib';
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const piexif = require('piexifjs');
 
 /** Test images built byte by byte (no encoder needed): each is a complete file of its format. */
 
@@ -96,4 +98,16 @@ export function makeWebp(width: number, height: number, metadata: { exif?: Buffe
   head.write('RIFF', 0, 'latin1');
   head.writeUInt32LE(body.length, 4);
   return Buffer.concat([head, body]);
+}
+
+/** A JPEG carrying a GPS position, written with piexifjs (binary strings, JPEG only). */
+export function jpegWithGps(): Buffer {
+  const gps = {
+    [piexif.GPSIFD.GPSLatitudeRef]: 'N',
+    [piexif.GPSIFD.GPSLatitude]: [[51, 1], [30, 1], [0, 1]],
+    [piexif.GPSIFD.GPSLongitudeRef]: 'W',
+    [piexif.GPSIFD.GPSLongitude]: [[0, 1], [7, 1], [0, 1]],
+  };
+  const exif = piexif.dump({ '0th': {}, Exif: {}, GPS: gps });
+  return Buffer.from(piexif.insert(exif, makeJpeg(64, 48).toString('binary')), 'binary');
 }

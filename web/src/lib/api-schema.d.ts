@@ -1551,6 +1551,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/work-orders/{id}/checks/{checkKey}/photos": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WorkOrdersController_addCheckPhotos"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/work-orders/{id}/finish": {
         parameters: {
             query?: never;
@@ -1575,6 +1591,22 @@ export interface paths {
             cookie?: never;
         };
         get: operations["ProjectWorkOrderController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/work-order-photos/{id}/file": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WorkOrderPhotosController_file"];
         put?: never;
         post?: never;
         delete?: never;
@@ -4074,6 +4106,16 @@ export interface components {
             recordedByName: string;
             recordedAt: string;
         };
+        WorkCheckPhotoResponseDto: {
+            id: string;
+            /** @enum {string} */
+            contentType: "image/jpeg" | "image/png" | "image/webp";
+            widthPx: number;
+            heightPx: number;
+            bytes: number;
+            uploadedByName: string;
+            createdAt: string;
+        };
         WorkCheckResponseDto: {
             key: string;
             label: string;
@@ -4092,6 +4134,8 @@ export interface components {
             latest: components["schemas"]["RecordedCheckResponseDto"] | null;
             /** @description How many times it was recorded */
             recordings: number;
+            /** @description Photos of the check, oldest first (file: GET /api/work-order-photos/{id}/file) */
+            photos: components["schemas"]["WorkCheckPhotoResponseDto"][];
         };
         WorkStepResponseDto: {
             key: string;
@@ -8993,6 +9037,35 @@ export interface operations {
             };
         };
     };
+    WorkOrdersController_addCheckPhotos: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+                checkKey: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    photos: string[];
+                };
+            };
+        };
+        responses: {
+            /** @description JPEG, PNG or WebP, read by content; location metadata is stripped before storing */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
     WorkOrdersController_finish: {
         parameters: {
             query?: never;
@@ -9032,6 +9105,29 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["WorkOrderResponseDto"];
+                };
+            };
+        };
+    };
+    WorkOrderPhotosController_file: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "image/jpeg": string;
+                    "image/png": string;
+                    "image/webp": string;
                 };
             };
         };

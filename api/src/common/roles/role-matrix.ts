@@ -72,6 +72,8 @@ export const QUOTE_SETTINGS_READERS: Role[] = ['owner', 'estimator'];
 export const QUOTE_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
 export const WORK_ORDER_READERS: Role[] = ['owner', 'estimator', 'fabricator'];
 export const WORK_ORDER_RECORDERS: Role[] = ['owner', 'estimator', 'fabricator'];
+/** Check photos: the shop's members and the project's own customer (the service scopes a customer to their projects). */
+export const WORK_ORDER_PHOTO_READERS: Role[] = ALL_ROLES;
 export const MEASUREMENT_READERS: Role[] = STAFF;
 export const MEASUREMENT_WRITERS: Role[] = ['owner', 'fabricator'];
 /** Customers see the sheet and photos of their own projects only (the projects service scopes them). */

@@ -31,6 +31,16 @@ export class RecordedCheckResponseDto {
   @ApiProperty() recordedAt: string;
 }
 
+export class WorkCheckPhotoResponseDto {
+  @ApiProperty() id: string;
+  @ApiProperty({ enum: ['image/jpeg', 'image/png', 'image/webp'] }) contentType: string;
+  @ApiProperty() widthPx: number;
+  @ApiProperty() heightPx: number;
+  @ApiProperty() bytes: number;
+  @ApiProperty() uploadedByName: string;
+  @ApiProperty() createdAt: string;
+}
+
 export class WorkCheckResponseDto {
   @ApiProperty() key: string;
   @ApiProperty() label: string;
@@ -43,6 +53,8 @@ export class WorkCheckResponseDto {
   @ApiProperty({ type: FitFindingRefResponseDto, nullable: true, description: 'The fit check\'s result this check confirms' }) fitFinding: FitFindingRefResponseDto | null;
   @ApiProperty({ type: RecordedCheckResponseDto, nullable: true, description: 'The newest recording; null while open' }) latest: RecordedCheckResponseDto | null;
   @ApiProperty({ description: 'How many times it was recorded' }) recordings: number;
+  @ApiProperty({ type: [WorkCheckPhotoResponseDto], description: 'Photos of the check, oldest first (file: GET /api/work-order-photos/{id}/file)' })
+  photos: WorkCheckPhotoResponseDto[];
 }
 
 export class WorkStepResponseDto {

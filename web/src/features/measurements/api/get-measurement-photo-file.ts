@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { useEffect, useMemo } from 'react';
+import { useObjectUrl } from '@/hooks/use-object-url';
 import { apiClient } from '@/lib/api-client';
 import { measurementKeys } from './measurement-keys';
 
@@ -20,9 +20,5 @@ export const measurementPhotoFileQueryOptions = (photoId: string) =>
 /** An object URL of the stored photo for <img>, released when the component lets go of it. */
 export function useMeasurementPhotoUrl(photoId: string): { url: string | null; isError: boolean } {
   const query = useQuery(measurementPhotoFileQueryOptions(photoId));
-  const url = useMemo(() => (query.data ? URL.createObjectURL(query.data) : null), [query.data]);
-  useEffect(() => () => {
-    if (url) URL.revokeObjectURL(url);
-  }, [url]);
-  return { url, isError: query.isError };
+  return { url: useObjectUrl(query.data), isError: query.isError };
 }

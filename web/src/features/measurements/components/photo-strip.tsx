@@ -1,11 +1,10 @@
 import { Button, Flex, Image, Popconfirm, Progress, Tag, Typography } from 'antd';
-import { useRef, type ReactNode } from 'react';
+import { CameraButton, CameraIcon } from '@/components/camera-button';
+import { PHOTO_THUMB, PhotoThumb, PhotoTile } from '@/components/photo-tile';
 import { formatDateTime } from '@/lib/dates';
 import { useMeasurementPhotoUrl } from '../api/get-measurement-photo-file';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
 import type { MeasurementPhoto } from '../types';
-
-const THUMB = 88;
 
 export type PhotoActions = {
   canAdd: boolean;
@@ -46,54 +45,10 @@ function DeleteButton({ onConfirm }: { onConfirm: () => unknown }) {
   );
 }
 
-function CameraIcon() {
-  return (
-    <svg width={18} height={18} viewBox="0 0 24 24" aria-hidden="true" style={{ verticalAlign: '-3px' }} fill="none" stroke="currentColor" strokeWidth={2}>
-      <path d="M4 8h3l2-3h6l2 3h3v11H4z" />
-      <circle cx={12} cy={13} r={3.5} />
-    </svg>
-  );
-}
-
-/** The hidden file box behind a camera button: on a phone `capture` opens the rear camera. */
-function CameraButton({ label, onFiles, children, block = false }: { label: string; onFiles: (files: File[]) => void; children: ReactNode; block?: boolean }) {
-  const input = useRef<HTMLInputElement>(null);
-  return (
-    <>
-      <input
-        ref={input}
-        type="file"
-        accept="image/*"
-        capture="environment"
-        multiple
-        aria-label={label}
-        style={{ display: 'none' }}
-        onChange={(e) => {
-          const files = Array.from(e.target.files ?? []);
-          e.target.value = '';
-          if (files.length > 0) onFiles(files);
-        }}
-      />
-      <Button size={block ? 'middle' : 'large'} block={block} style={block ? { height: TOUCH } : undefined} onClick={() => input.current?.click()}>
-        {children}
-      </Button>
-    </>
-  );
-}
-
-function Tile({ children, footer, testId }: { children: ReactNode; footer: ReactNode; testId: string }) {
-  return (
-    <Flex vertical gap={4} style={{ width: THUMB }} data-testid={testId}>
-      <div style={{ width: THUMB, height: THUMB, borderRadius: 6, overflow: 'hidden', background: '#f0f0f0' }}>{children}</div>
-      {footer}
-    </Flex>
-  );
-}
-
 function StoredPhoto({ photo, alt, actions }: { photo: MeasurementPhoto; alt: string; actions: PhotoActions }) {
   const { url, isError } = useMeasurementPhotoUrl(photo.id);
   return (
-    <Tile
+    <PhotoTile
       testId="photo-thumb"
       footer={
         <Flex vertical gap={2}>
@@ -119,23 +74,15 @@ function StoredPhoto({ photo, alt, actions }: { photo: MeasurementPhoto; alt: st
         </Flex>
       }
     >
-      {url ? (
-        <Image src={url} alt={alt} width={THUMB} height={THUMB} style={{ objectFit: 'cover' }} />
-      ) : (
-        <Flex align="center" justify="center" style={{ height: '100%' }}>
-          <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-            {isError ? 'Not available' : 'Loading…'}
-          </Typography.Text>
-        </Flex>
-      )}
-    </Tile>
+      <PhotoThumb url={url} isError={isError} alt={alt} />
+    </PhotoTile>
   );
 }
 
 function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string; actions: PhotoActions }) {
   const stored = upload.stored;
   return (
-    <Tile
+    <PhotoTile
       testId={upload.status === 'done' ? 'photo-thumb' : 'photo-upload'}
       footer={
         <Flex vertical gap={2}>
@@ -177,8 +124,8 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
         </Flex>
       }
     >
-      <Image src={upload.previewUrl} alt={alt} width={THUMB} height={THUMB} style={{ objectFit: 'cover', opacity: upload.status === 'done' ? 1 : 0.6 }} />
-    </Tile>
+      <Image src={upload.previewUrl} alt={alt} width={PHOTO_THUMB} height={PHOTO_THUMB} style={{ objectFit: 'cover', opacity: upload.status === 'done' ? 1 : 0.6 }} />
+    </PhotoTile>
   );
 }
 

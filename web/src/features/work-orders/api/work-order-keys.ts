@@ -6,4 +6,5 @@ export const workOrderKeys = {
   list: (query: WorkOrderListQuery) => [...workOrderKeys.lists(), query] as const,
   detail: (id: string) => [...workOrderKeys.all, 'detail', id] as const,
   project: (projectId: string) => [...workOrderKeys.all, 'project', projectId] as const,
+  photoFile: (photoId: string) => [...workOrderKeys.all, 'photo-file', photoId] as const,
 };

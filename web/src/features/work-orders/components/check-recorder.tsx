@@ -4,6 +4,7 @@ import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
 import { useRecordCheck } from '../api/record-check';
 import type { WorkCheck } from '../types';
+import { CheckPhotos } from './check-photos';
 
 export interface CheckRecorderProps {
   workOrderId: string;
@@ -93,6 +94,7 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
           <Input aria-label={`Note for ${check.label}`} placeholder="Note (optional)" value={note} onChange={(event) => setNote(event.target.value)} maxLength={500} style={{ flex: '1 1 160px' }} />
         </div>
       )}
+      <CheckPhotos workOrderId={workOrderId} check={check} canAdd={canRecord} />
     </div>
   );
 }
