@@ -195,6 +195,19 @@ describe('background jobs in MariaDB', () => {
     expect(handled.map((entry) => entry.key)).toEqual(['orphaned']);
   });
 
+  it('done jobs are deleted once they are older than JOBS_KEEP_DONE_DAYS (14); recent and unfinished ones stay', async () => {
+    await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'old-done', shopId: null, payload: { key: 'old-done' } });
+    await jobs.enqueue(t.dataSource.manager, { kind: TEST_KIND, idempotencyKey: 'old-queued', shopId: null, payload: { key: 'old-queued' } });
+    await t.dataSource.query("UPDATE `jobs` SET `state` = 'done', `doneAt` = UTC_TIMESTAMP(3) - INTERVAL 15 DAY WHERE `idempotencyKey` = 'old-done'");
+    await t.dataSource.query("UPDATE `jobs` SET `createdAt` = UTC_TIMESTAMP(3) - INTERVAL 15 DAY, `runAt` = UTC_TIMESTAMP(3) + INTERVAL 1 DAY WHERE `idempotencyKey` = 'old-queued'");
+    const before = await countRows(t.dataSource, 'jobs');
+    expect(await worker.purgeDone()).toBe(1);
+    expect(await countRows(t.dataSource, 'jobs')).toBe(before - 1);
+    expect((await jobsOf(t.dataSource, TEST_KIND)).map((job) => job.idempotencyKey)).not.toContain('old-done');
+    expect((await jobsOf(t.dataSource, TEST_KIND)).map((job) => job.idempotencyKey)).toContain('old-queued');
+    await t.dataSource.query("DELETE FROM `jobs` WHERE `idempotencyKey` = 'old-queued'");
+  });
+
   it("the owner reads the shop's jobs and their counts by state, without their payloads; other shops' jobs stay out", async () => {
     const response = await t.http.get('/api/jobs').set(...bearer(demo.owner)).expect(200);
     expect(response.body.counts).toMatchObject({ queued: 0, running: 0, dead: 0 });

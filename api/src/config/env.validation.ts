@@ -220,6 +220,13 @@ export class EnvironmentVariables extends DatabaseEnvironment {
   @Max(3600000)
   JOBS_RETRY_BASE_MS: number = 2000;
 
+  /** Done jobs are deleted this many days after they finished (their effects stay; a payment event's id is kept apart). */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(3650)
+  JOBS_KEEP_DONE_DAYS: number = 14;
+
   /**
    * Fault injection for the restart tests: the process kills itself (SIGKILL) after a job of this kind did its work
    * and before its transaction commits. Refused together with NODE_ENV=production.

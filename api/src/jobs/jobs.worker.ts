@@ -41,6 +41,8 @@ export class JobsWorker implements OnApplicationBootstrap, OnModuleDestroy, Enti
   private readonly concurrency: number;
   private readonly retryBaseMs: number;
   private readonly crashBeforeCommit: string | undefined;
+  private readonly keepDoneDays: number;
+  private lastPurge = 0;
   private stopped = true;
   private loops: Promise<void>[] = [];
   private sleepers = new Set<() => void>();
@@ -58,6 +60,7 @@ export class JobsWorker implements OnApplicationBootstrap, OnModuleDestroy, Enti
     this.concurrency = config.get('JOBS_CONCURRENCY', { infer: true });
     this.retryBaseMs = config.get('JOBS_RETRY_BASE_MS', { infer: true });
     this.crashBeforeCommit = config.get('JOBS_CRASH_BEFORE_COMMIT', { infer: true });
+    this.keepDoneDays = config.get('JOBS_KEEP_DONE_DAYS', { infer: true });
   }
 
   onApplicationBootstrap(): void {
@@ -121,6 +124,10 @@ export class JobsWorker implements OnApplicationBootstrap, OnModuleDestroy, Enti
     let failures = 0;
     while (!this.stopped) {
       try {
+        if (Date.now() - this.lastPurge > 3_600_000) {
+          this.lastPurge = Date.now();
+          await this.purgeDone();
+        }
         const worked = await this.runOnce();
         failures = 0;
         if (!worked && !this.stopped) await this.sleep(this.pollMs);
@@ -144,14 +151,34 @@ export class JobsWorker implements OnApplicationBootstrap, OnModuleDestroy, Enti
     return true;
   }
 
+  /** Deletes done jobs older than JOBS_KEEP_DONE_DAYS, a batch at a time (each instance does it about once an hour). */
+  async purgeDone(): Promise<number> {
+    let deleted = 0;
+    for (;;) {
+      const result = (await this.dataSource.query(
+        "DELETE FROM `jobs` WHERE `state` = 'done' AND `doneAt` < UTC_TIMESTAMP(3) - INTERVAL ? DAY LIMIT 1000",
+        [this.keepDoneDays],
+      )) as { affectedRows?: number };
+      const batch = Number(result.affectedRows ?? 0);
+      deleted += batch;
+      if (batch < 1000) return deleted;
+    }
+  }
+
   private async claim(): Promise<ClaimedJob | 'gave-up' | null> {
     // READ COMMITTED: the rows the claim scans but does not take are not kept locked, so they stay free for others.
     return this.dataSource.transaction('READ COMMITTED', async (manager) => {
-      const rows: Array<ClaimedJob & { state: string }> = await manager.query(
-        'SELECT `id`, `kind`, `shopId`, `state`, `attempts`, `maxAttempts` FROM `jobs` ' +
-          "WHERE (`state` = 'queued' AND `runAt` <= UTC_TIMESTAMP(3)) OR (`state` = 'running' AND `leaseUntil` < UTC_TIMESTAMP(3)) " +
-          'ORDER BY `runAt`, `id` LIMIT 1 FOR UPDATE SKIP LOCKED',
+      // Two single-condition reads that walk the (state, runAt) index in order, so each locks only the row it returns
+      // (an OR with a sort would lock every due row until the sort, and a second instance would skip them all).
+      const columns = 'SELECT `id`, `kind`, `shopId`, `state`, `attempts`, `maxAttempts` FROM `jobs` ';
+      let rows: Array<ClaimedJob & { state: string }> = await manager.query(
+        `${columns}WHERE \`state\` = 'queued' AND \`runAt\` <= UTC_TIMESTAMP(3) ORDER BY \`runAt\` LIMIT 1 FOR UPDATE SKIP LOCKED`,
       );
+      if (rows.length === 0) {
+        rows = await manager.query(
+          `${columns}WHERE \`state\` = 'running' AND \`leaseUntil\` < UTC_TIMESTAMP(3) ORDER BY \`runAt\` LIMIT 1 FOR UPDATE SKIP LOCKED`,
+        );
+      }
       const row = rows[0];
       if (!row) return null;
       if (row.state === 'running' && Number(row.attempts) >= Number(row.maxAttempts)) {
