@@ -10,6 +10,7 @@ function csvFile(name: string, lines: string[]) {
   return { name, mimeType: 'text/csv', buffer: Buffer.from(`${lines.join('\n')}\n`) };
 }
 
+/** `field` as the import form names it ("SKU (part number)", "Category"). */
 async function chooseColumn(page: Page, field: string, header: string): Promise<void> {
   await page.getByLabel(`Column for ${field}`, { exact: true }).click();
   await page.locator('.ant-select-dropdown:not(.ant-select-dropdown-hidden) .ant-select-item-option', { hasText: header }).first().click();
@@ -45,9 +46,9 @@ describe('the counter imports a supplier file', () => {
       ]),
     );
     // The item code and the kind are not spellings the import knows: it asks which columns hold them.
-    await expectText(page.getByRole('alert').filter({ hasText: 'Choose the file' }), /sku, category/);
-    await chooseColumn(page, 'sku', 'Item Code');
-    await chooseColumn(page, 'category', 'Kind');
+    await expectText(page.getByRole('alert').filter({ hasText: 'Choose the file' }), /SKU \(part number\), Category/);
+    await chooseColumn(page, 'SKU (part number)', 'Item Code');
+    await chooseColumn(page, 'Category', 'Kind');
     await expectText(page.getByTestId('import-ready'), /2 rows ready to import/);
     await saveScreenshot(page, 'counter-import-preview');
     await page.getByRole('button', { name: 'Import 2 rows' }).click();

@@ -1,4 +1,5 @@
 import { Alert, Button, Card, Form, Progress, Select, Space, Table, Typography, Upload } from 'antd';
+import { PART_CATEGORIES } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { useState } from 'react';
 import { saveBlob } from '@/lib/download';
@@ -6,7 +7,35 @@ import { useImportParts } from '../api/import-parts';
 import { type ImportPreview, usePreviewPartsImport } from '../api/preview-parts-import';
 
 const FIELDS = ['sku', 'description', 'category', 'price', 'cost', 'supplier', 'supplierSku', 'laborHours', 'location', 'bin', 'onHand'] as const;
-const REQUIRED = new Set(['sku', 'description', 'category', 'price']);
+type ImportField = (typeof FIELDS)[number];
+const REQUIRED = new Set<string>(['sku', 'description', 'category', 'price']);
+
+/** What the counter calls each field the import reads. */
+export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
+  sku: 'SKU (part number)',
+  description: 'Description',
+  category: 'Category',
+  price: 'Price',
+  cost: 'Cost',
+  supplier: 'Supplier',
+  supplierSku: "Supplier's part number",
+  laborHours: 'Install hours',
+  location: 'Location',
+  bin: 'Bin',
+  onHand: 'On hand',
+};
+const fieldLabel = (field: string): string => IMPORT_FIELD_LABELS[field as ImportField] ?? field;
+
+/** A small file in the layout the import reads without any column matching, to start a supplier's sheet from. */
+export function sampleImportCsv(): string {
+  return Papa.unparse({
+    fields: [...FIELDS],
+    data: [
+      ['PAN-100', 'Rear-sump swap oil pan', 'oil-pan', '279.00', '190.00', 'Your supplier', 'V-PAN-100', '2.5', 'Main store', 'A-01-1', '2'],
+      ['FP-200', 'In-tank injection fuel pump', 'fuel-pump', '179.00', '120.00', 'Your supplier', 'V-FP-200', '1.5', 'Main store', 'D-01-1', '1'],
+    ],
+  });
+}
 
 /** The rejected rows as a CSV the clerk can fix and upload again, with the errors in a last column. */
 function downloadRejected(preview: ImportPreview): void {
@@ -30,6 +59,22 @@ export function PartsImport() {
   return (
     <Card title="Import a supplier's catalog or price file (CSV)">
       <Space direction="vertical" style={{ width: '100%' }}>
+        <Typography.Paragraph style={{ marginBottom: 0 }}>
+          One part a line under a header row. Each line needs a SKU (part number), a description, a category and a price; cost,
+          supplier, supplier&apos;s part number, install hours, location, bin and on-hand count are read when the file has them. A
+          line whose SKU is already in the catalog updates that part. You match the file&apos;s columns next and see every
+          line&apos;s problems before anything is stored: the file goes in whole or not at all.
+        </Typography.Paragraph>
+        <Typography.Paragraph type="secondary" style={{ marginBottom: 0 }} ellipsis={{ rows: 1, expandable: true, symbol: 'every category' }}>
+          Categories are written as in the sample file (oil-pan, fuel-pump, …), one of: {PART_CATEGORIES.join(', ')}.
+        </Typography.Paragraph>
+        <Button
+          type="link"
+          style={{ paddingInline: 0, alignSelf: 'flex-start' }}
+          onClick={() => saveBlob(new Blob([sampleImportCsv()], { type: 'text/csv' }), 'parts-import-sample.csv')}
+        >
+          Download a sample file
+        </Button>
         <Upload
           accept=".csv,text/csv"
           maxCount={1}
@@ -49,9 +94,9 @@ export function PartsImport() {
           <>
             <Form layout="inline">
               {FIELDS.map((field) => (
-                <Form.Item key={field} label={field} required={REQUIRED.has(field)} style={{ marginBottom: 8 }}>
+                <Form.Item key={field} label={fieldLabel(field)} required={REQUIRED.has(field)} style={{ marginBottom: 8 }}>
                   <Select
-                    aria-label={`Column for ${field}`}
+                    aria-label={`Column for ${fieldLabel(field)}`}
                     allowClear
                     style={{ width: 170 }}
                     value={mapping[field]}
@@ -68,7 +113,7 @@ export function PartsImport() {
               ))}
             </Form>
             {result.unmapped.length > 0 ? (
-              <Alert type="info" showIcon message={`Choose the file's columns for: ${result.unmapped.join(', ')}.`} />
+              <Alert type="info" showIcon message={`Choose the file's columns for: ${result.unmapped.map(fieldLabel).join(', ')}.`} />
             ) : result.errors.length > 0 ? (
               <Alert
                 type="error"
@@ -90,7 +135,7 @@ export function PartsImport() {
                 pagination={{ pageSize: 10 }}
                 columns={[
                   { title: 'Line', dataIndex: 'row' },
-                  { title: 'Column', dataIndex: 'field' },
+                  { title: 'Column', dataIndex: 'field', render: (field: string) => fieldLabel(field) },
                   { title: 'Problem', dataIndex: 'message' },
                 ]}
               />
