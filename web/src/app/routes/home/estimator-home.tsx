@@ -1,6 +1,6 @@
 import { Button, Card, Col, Row } from 'antd';
 import { Link, useNavigate } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { paths, toProjectFit } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { RecentCustomers } from '@/features/customers/components/recent-customers';
@@ -24,6 +24,15 @@ export function EstimatorHome() {
       />
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={14}>
+          <Card title="Measured, ready for a fit check" extra={<Link to={`${paths.projects}?status=measured`}>All</Link>} style={{ marginBottom: 16 }}>
+            <ProjectsPanel
+              label="Projects ready for a fit check"
+              status="measured"
+              emptyText="No signed-off sheet is waiting for a fit check."
+              moreTo={`${paths.projects}?status=measured`}
+              rowLink={{ label: 'Fit check', to: toProjectFit }}
+            />
+          </Card>
           <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=parts-planned`}>All</Link>} style={{ marginBottom: 16 }}>
             <ProjectsPanel
               label="Projects needing a quote"
@@ -57,6 +66,16 @@ export function EstimatorHome() {
                   Add a customer
                 </Button>
               }
+            />
+          </Card>
+          <Card title="New, waiting to be measured" extra={<Link to={`${paths.projects}?status=intake`}>All</Link>} style={{ marginTop: 16 }}>
+            <ProjectsPanel
+              label="New projects waiting to be measured"
+              status="intake"
+              limit={5}
+              emptyText="No new project is waiting for the fabricator."
+              moreTo={`${paths.projects}?status=intake`}
+              rowLink={{ label: 'Fit check', to: toProjectFit }}
             />
           </Card>
         </Col>

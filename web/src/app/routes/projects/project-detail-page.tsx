@@ -80,10 +80,11 @@ export function ProjectDetailPage() {
           </Space>
         }
       />
-      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} />}
+      {/* where the job stands comes first; quotes follow once there is a plan to quote */}
       <Card style={{ marginBottom: 16 }} title="Stage">
         <ProjectStageSteps status={p.status} />
       </Card>
+      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} />}
       {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} />}
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>

@@ -106,7 +106,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                       {pick.sku} · {pick.description}
                     </Typography.Text>
                     <Typography.Text>
-                      {money(pick.priceCents)} · {pick.laborHours} h labor
+                      {money(pick.priceCents)} · {pick.laborHours} h labor · {money(pick.totalCents)} with labor
                     </Typography.Text>
                     <PickReasons pick={pick} money={money} />
                   </Space>
@@ -124,6 +124,8 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                 { title: 'Part', dataIndex: 'description', width: 200 },
                 { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => money(v) },
                 { title: 'Labor', dataIndex: 'laborHours', align: 'right', onCell: () => ({ style: { whiteSpace: 'nowrap' } }), render: (v: number) => `${v} h` },
+                // the cheaper parts not chosen are compared on this figure (part and its fitting labor)
+                { title: 'With labor', dataIndex: 'totalCents', align: 'right', render: (v: number) => money(v) },
                 { title: 'Why', key: 'why', render: (_, pick) => <PickReasons pick={pick} money={money} /> },
               ]}
             />

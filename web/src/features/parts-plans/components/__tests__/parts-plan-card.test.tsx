@@ -1,7 +1,8 @@
-import { screen } from '@testing-library/react';
+import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { Schemas } from '@/lib/api-types';
 import { createTestQueryClient, renderWithApp } from '@/test/render';
+import { setWindowWidth } from '@/test/viewport';
 import { partsPlanKeys } from '../../api/parts-plan-keys';
 import { PartsPlanCard } from '../parts-plan-card';
 
@@ -59,5 +60,22 @@ describe('PartsPlanCard', () => {
     // The pump flow is answered by an operation the fit check cannot model; the hoses by nothing.
     expect(screen.getByText(/1 shortfall cleared\. Still short with the chosen parts: Coolant hose sides \(fails\)\./)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Lock version 2 for a quote' })).toBeInTheDocument();
+  });
+
+  it('gives each pick its total with labor, the figure the cheaper parts not chosen are compared on', async () => {
+    // $329.00 part + 3 h at the shop rate ($405.00) = $734.00
+    setWindowWidth(390);
+    const queryClient = createTestQueryClient();
+    queryClient.setQueryData(partsPlanKeys.project(PROJECT), [plan]);
+    const phone = renderWithApp(<PartsPlanCard projectId={PROJECT} canBuild />, { queryClient });
+    // the breakpoint lands after the first render; the phone's list then replaces the table
+    expect(await screen.findByText('$329.00 · 3 h labor · $734.00 with labor')).toBeInTheDocument();
+    phone.unmount();
+
+    setWindowWidth(1440);
+    renderWithApp(<PartsPlanCard projectId={PROJECT} canBuild />, { queryClient });
+    expect(await screen.findByRole('columnheader', { name: 'With labor' })).toBeInTheDocument();
+    const row = screen.getByTestId('pick-TR-4410').closest('tr') as HTMLElement;
+    expect(within(row).getByText('$734.00')).toBeInTheDocument();
   });
 });
