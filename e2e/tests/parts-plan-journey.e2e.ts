@@ -21,7 +21,8 @@ describe('parts plan: the estimator plans, the counter reserves and prints', () 
     const { page } = browser;
     await signInAs(page, 'estimator');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
-    await page.getByRole('link', { name: DEMO_PROJECT }).click();
+    // the projects list, not the home page's panels (which also link the project) that may still be on screen
+    await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: DEMO_PROJECT }).click();
     const card = page.getByTestId('parts-plan-card');
     await card.getByRole('button', { name: 'Build plan' }).click();
     await card.getByTestId('pick-TR-4410').getByText(/Resolves: .*crossmember/i).waitFor();

@@ -63,7 +63,8 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
   it('the estimator plans the parts, drafts the quote from the plan and sends it', async () => {
     const { page } = estimator;
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
-    await page.getByRole('link', { name: DEMO_PROJECT }).click();
+    // the projects list, not the home page's panels (which also link the project) that may still be on screen
+    await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: DEMO_PROJECT }).click();
     // The plan needs a stored fit report first.
     await page.getByRole('button', { name: 'Fit check' }).click();
     const ran = page.waitForResponse((r) => /\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');

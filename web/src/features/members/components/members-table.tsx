@@ -1,4 +1,4 @@
-import { Button, Popconfirm, Select, Table, Tag, Typography } from 'antd';
+import { Button, Flex, Grid, Popconfirm, Select, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { EmptyState, QueryState } from '@/components/query-state';
 import { formatDate } from '@/lib/dates';
@@ -14,6 +14,25 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
   const members = useMemberships();
   const updateRole = useUpdateMembership();
   const remove = useDeleteMembership();
+  // Below antd's md (768 px) email and role sit under the name, so a phone shows who does what without scrolling.
+  const narrow = Grid.useBreakpoint().md !== true;
+
+  const roleCell = (m: Membership) =>
+    m.userId === currentUserId || m.role === 'customer' ? (
+      roleLabels[m.role]
+    ) : (
+      <Select<Role>
+        size="small"
+        value={m.role}
+        style={{ minWidth: 150 }}
+        aria-label={`Role of ${m.name}`}
+        loading={updateRole.isPending && updateRole.variables?.id === m.id}
+        onChange={(role) => updateRole.mutate({ id: m.id, role })}
+        options={roles
+          .filter((r) => r !== 'customer')
+          .map((r) => ({ value: r, label: roleLabels[r], title: roleHints[r] }))}
+      />
+    );
 
   const columns: ColumnsType<Membership> = [
     {
@@ -22,33 +41,24 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
       key: 'name',
       // names break between words only, never inside one
       render: (name: string, m) => (
-        <span style={{ wordBreak: 'normal', overflowWrap: 'normal', whiteSpace: 'nowrap' }} data-testid="member-name">
-          <Typography.Text strong>{name}</Typography.Text>
-          {m.userId === currentUserId && <Tag style={{ marginInlineStart: 8 }}>you</Tag>}
-        </span>
+        <Flex vertical gap={4} align="flex-start">
+          <span style={{ wordBreak: 'normal', overflowWrap: 'normal', whiteSpace: 'nowrap' }} data-testid="member-name">
+            <Typography.Text strong>{name}</Typography.Text>
+            {m.userId === currentUserId && <Tag style={{ marginInlineStart: 8 }}>you</Tag>}
+          </span>
+          {narrow && (
+            <>
+              <Typography.Text type="secondary" style={{ fontSize: 13, overflowWrap: 'anywhere' }}>
+                {m.email}
+              </Typography.Text>
+              {roleCell(m)}
+            </>
+          )}
+        </Flex>
       ),
     },
-    { title: 'Email', dataIndex: 'email', key: 'email' },
-    {
-      title: 'Role',
-      key: 'role',
-      render: (_, m) =>
-        m.userId === currentUserId || m.role === 'customer' ? (
-          roleLabels[m.role]
-        ) : (
-          <Select<Role>
-            size="small"
-            value={m.role}
-            style={{ minWidth: 150 }}
-            aria-label={`Role of ${m.name}`}
-            loading={updateRole.isPending && updateRole.variables?.id === m.id}
-            onChange={(role) => updateRole.mutate({ id: m.id, role })}
-            options={roles
-              .filter((r) => r !== 'customer')
-              .map((r) => ({ value: r, label: roleLabels[r], title: roleHints[r] }))}
-          />
-        ),
-    },
+    { title: 'Email', dataIndex: 'email', key: 'email', responsive: ['md'] },
+    { title: 'Role', key: 'role', responsive: ['md'], render: (_, m) => roleCell(m) },
     { title: 'Joined', dataIndex: 'createdAt', key: 'createdAt', render: formatDate, responsive: ['md'] },
     {
       title: <span className="sr-only">Actions</span>,
