@@ -10,6 +10,8 @@ import { statusColors } from '../lib/status';
 import { DRAWING_TEXT_PX, DrawingLabel, drawingScale, useRenderedWidth } from './drawing-label';
 
 const MAX_HEIGHT_PX = 560;
+/** On a phone the side view keeps this width and scrolls sideways, so its labels do not pile up. */
+const MIN_DRAWING_PX = 640;
 
 export type SideViewProps = {
   spec: FitSpec;
@@ -94,8 +96,9 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
   // line weights and markers follow the drawing; text follows the screen, so it stays readable when the drawing shrinks
   const fs = Math.max(vbW, vbH) / 62;
   const sw = fs / 7;
-  const figureRef = useRef<HTMLElement>(null);
-  const scale = drawingScale(useRenderedWidth(figureRef), vbW, vbH, MAX_HEIGHT_PX);
+  // measured on the drawing itself: on a phone it keeps MIN_DRAWING_PX and scrolls sideways in its frame
+  const drawingRef = useRef<HTMLDivElement>(null);
+  const scale = drawingScale(useRenderedWidth(drawingRef), vbW, vbH, MAX_HEIGHT_PX);
   const text = { note: DRAWING_TEXT_PX.note / scale, name: DRAWING_TEXT_PX.name / scale, figure: DRAWING_TEXT_PX.figure / scale };
   const pts = (p: readonly Pt[]) => p.map((q) => `${X(q.x).toFixed(1)},${Y(q.z).toFixed(1)}`).join(' ');
   const origin = scene.crank.origin;
@@ -153,178 +156,185 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
   };
 
   return (
-    <figure ref={figureRef} className="fit-side-view" data-testid="side-view" style={{ margin: 0 }}>
-      <svg
-        viewBox={`0 0 ${vbW.toFixed(0)} ${vbH.toFixed(0)}`}
-        width="100%"
-        role="img"
-        aria-labelledby={`${uid}-title ${uid}-desc`}
-        style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: MAX_HEIGHT_PX }}
-      >
-        <title id={`${uid}-title`}>Side view of the engine in the chassis</title>
-        <desc id={`${uid}-desc`}>
-          Front of the vehicle to the left. {scene.dimensions.map((d) => `${d.title}: ${dimLabel(d)}.`).join(' ')}
-        </desc>
-        <defs>
-          <marker id={`${uid}-arrow`} viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
-            <path d="M0,0 L10,5 L0,10 z" fill="context-stroke" />
-          </marker>
-          <pattern id={`${uid}-hatch`} width={fs / 2} height={fs / 2} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-            <line x1="0" y1="0" x2="0" y2={fs / 2} stroke={colors.obstacleStroke} strokeWidth={sw} strokeOpacity="0.5" />
-          </pattern>
-        </defs>
+    <figure className="fit-side-view" data-testid="side-view" style={{ margin: 0 }}>
+      <div className="drawing-scroll" data-testid="side-view-scroll">
+        <div ref={drawingRef} style={{ minWidth: MIN_DRAWING_PX }}>
+          <svg
+            viewBox={`0 0 ${vbW.toFixed(0)} ${vbH.toFixed(0)}`}
+            width="100%"
+            role="img"
+            aria-labelledby={`${uid}-title ${uid}-desc`}
+            style={{ display: 'block', background: '#fbfaf7', border: `1px solid ${palette.line}`, borderRadius: 6, maxHeight: MAX_HEIGHT_PX }}
+          >
+            <title id={`${uid}-title`}>Side view of the engine in the chassis</title>
+            <desc id={`${uid}-desc`}>
+              Front of the vehicle to the left. {scene.dimensions.map((d) => `${d.title}: ${dimLabel(d)}.`).join(' ')}
+            </desc>
+            <defs>
+              <marker id={`${uid}-arrow`} viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
+                <path d="M0,0 L10,5 L0,10 z" fill="context-stroke" />
+              </marker>
+              <pattern id={`${uid}-hatch`} width={fs / 2} height={fs / 2} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+                <line x1="0" y1="0" x2="0" y2={fs / 2} stroke={colors.obstacleStroke} strokeWidth={sw} strokeOpacity="0.5" />
+              </pattern>
+            </defs>
 
-        {/* ground */}
-        <g data-testid="side-ground">
-          <rect x={0} y={Y(0)} width={vbW} height={pad} fill={`url(#${uid}-hatch)`} opacity="0.6" />
-          <line x1={0} x2={vbW} y1={Y(0)} y2={Y(0)} stroke={colors.ground} strokeWidth={sw * 1.5} />
-        </g>
+            {/* ground */}
+            <g data-testid="side-ground">
+              <rect x={0} y={Y(0)} width={vbW} height={pad} fill={`url(#${uid}-hatch)`} opacity="0.6" />
+              <line x1={0} x2={vbW} y1={Y(0)} y2={Y(0)} stroke={colors.ground} strokeWidth={sw * 1.5} />
+            </g>
 
-        {/* front axle centerline */}
-        <line x1={X(0)} x2={X(0)} y1={Y(b.zMax) - pad * 0.5} y2={Y(0)} stroke={palette.inkMuted} strokeWidth={sw} strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`} />
+            {/* front axle centerline */}
+            <line x1={X(0)} x2={X(0)} y1={Y(b.zMax) - pad * 0.5} y2={Y(0)} stroke={palette.inkMuted} strokeWidth={sw} strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`} />
 
-        {/* fit window */}
-        {windowBands.map((band, i) => (
-          <polygon
-            key={i}
-            data-testid="side-fit-window"
-            points={pts(band)}
-            fill={colors.window}
-            fillOpacity="0.16"
-            stroke={colors.window}
-            strokeWidth={sw}
-            strokeDasharray={`${fs / 2} ${fs / 3}`}
-          />
-        ))}
-
-        {/* hood line */}
-        {scene.hoodLine.length > 1 && (
-          <g data-testid="side-hood">
-            <polyline points={pts(scene.hoodLine)} fill="none" stroke={colors.hood} strokeWidth={sw * 2} strokeDasharray={`${fs / 1.5} ${fs / 3}`} />
-          </g>
-        )}
-
-        {/* radiator core */}
-        {scene.radiator && (
-          <g data-testid="side-radiator">
-            <rect
-              x={X(scene.radiator.x) - fs * 0.9}
-              y={Y(scene.radiator.zTo)}
-              width={fs * 0.9}
-              height={scene.radiator.zTo - scene.radiator.zFrom}
-              fill={colors.radiator}
-              fillOpacity="0.5"
-              stroke={colors.radiator}
-              strokeWidth={sw}
-            />
-          </g>
-        )}
-
-        {/* chassis obstacles */}
-        {scene.obstacles.map((o) => {
-          const structural = o.kind === 'firewall' || o.kind === 'tunnel';
-          return (
-            <g key={o.id} data-testid={`side-obstacle-${o.id}`}>
-              <title>{o.name}</title>
+            {/* fit window */}
+            {windowBands.map((band, i) => (
               <polygon
-                points={pts(o.outline)}
-                fill={structural ? colors.structure : colors.obstacle}
-                fillOpacity={structural ? 0.25 : 0.45}
-                stroke={structural ? colors.structure : colors.obstacleStroke}
-                strokeWidth={sw * 1.3}
+                key={i}
+                data-testid="side-fit-window"
+                points={pts(band)}
+                fill={colors.window}
+                fillOpacity="0.16"
+                stroke={colors.window}
+                strokeWidth={sw}
+                strokeDasharray={`${fs / 2} ${fs / 3}`}
+              />
+            ))}
+
+            {/* hood line */}
+            {scene.hoodLine.length > 1 && (
+              <g data-testid="side-hood">
+                <polyline points={pts(scene.hoodLine)} fill="none" stroke={colors.hood} strokeWidth={sw * 2} strokeDasharray={`${fs / 1.5} ${fs / 3}`} />
+              </g>
+            )}
+
+            {/* radiator core */}
+            {scene.radiator && (
+              <g data-testid="side-radiator">
+                <rect
+                  x={X(scene.radiator.x) - fs * 0.9}
+                  y={Y(scene.radiator.zTo)}
+                  width={fs * 0.9}
+                  height={scene.radiator.zTo - scene.radiator.zFrom}
+                  fill={colors.radiator}
+                  fillOpacity="0.5"
+                  stroke={colors.radiator}
+                  strokeWidth={sw}
+                />
+              </g>
+            )}
+
+            {/* chassis obstacles */}
+            {scene.obstacles.map((o) => {
+              const structural = o.kind === 'firewall' || o.kind === 'tunnel';
+              return (
+                <g key={o.id} data-testid={`side-obstacle-${o.id}`}>
+                  <title>{o.name}</title>
+                  <polygon
+                    points={pts(o.outline)}
+                    fill={structural ? colors.structure : colors.obstacle}
+                    fillOpacity={structural ? 0.25 : 0.45}
+                    stroke={structural ? colors.structure : colors.obstacleStroke}
+                    strokeWidth={sw * 1.3}
+                  />
+                </g>
+              );
+            })}
+
+            {/* transmission */}
+            {scene.transmission && (
+              <polygon data-testid="side-transmission" points={pts(scene.transmission)} fill={colors.trans} fillOpacity="0.8" stroke={colors.transStroke} strokeWidth={sw * 1.3} />
+            )}
+
+            {/* engine block, top and rear profiles */}
+            <g data-testid="side-engine">
+              <polygon points={pts(scene.block)} fill={colors.block} fillOpacity="0.75" stroke="none" />
+              <polyline points={pts(scene.topProfile)} fill="none" stroke={colors.profile} strokeWidth={sw * 2.2} strokeLinejoin="round" />
+              <polyline points={pts(scene.rearProfile)} fill="none" stroke={colors.profile} strokeWidth={sw * 2.2} strokeLinejoin="round" />
+              <line
+                x1={X(scene.fanFace[0].x)}
+                y1={Y(scene.fanFace[0].z)}
+                x2={X(scene.fanFace[1].x)}
+                y2={Y(scene.fanFace[1].z)}
+                stroke={colors.profile}
+                strokeWidth={sw * 3}
+                strokeLinecap="round"
               />
             </g>
-          );
-        })}
 
-        {/* transmission */}
-        {scene.transmission && (
-          <polygon data-testid="side-transmission" points={pts(scene.transmission)} fill={colors.trans} fillOpacity="0.8" stroke={colors.transStroke} strokeWidth={sw * 1.3} />
-        )}
+            {/* oil pan */}
+            {scene.pan && <polygon data-testid="side-pan" points={pts(scene.pan)} fill={colors.pan} stroke={colors.panStroke} strokeWidth={sw * 1.6} strokeLinejoin="round" />}
 
-        {/* engine block, top and rear profiles */}
-        <g data-testid="side-engine">
-          <polygon points={pts(scene.block)} fill={colors.block} fillOpacity="0.75" stroke="none" />
-          <polyline points={pts(scene.topProfile)} fill="none" stroke={colors.profile} strokeWidth={sw * 2.2} strokeLinejoin="round" />
-          <polyline points={pts(scene.rearProfile)} fill="none" stroke={colors.profile} strokeWidth={sw * 2.2} strokeLinejoin="round" />
-          <line
-            x1={X(scene.fanFace[0].x)}
-            y1={Y(scene.fanFace[0].z)}
-            x2={X(scene.fanFace[1].x)}
-            y2={Y(scene.fanFace[1].z)}
-            stroke={colors.profile}
-            strokeWidth={sw * 3}
-            strokeLinecap="round"
-          />
-        </g>
-
-        {/* oil pan */}
-        {scene.pan && <polygon data-testid="side-pan" points={pts(scene.pan)} fill={colors.pan} stroke={colors.panStroke} strokeWidth={sw * 1.6} strokeLinejoin="round" />}
-
-        {/* crank centerline and origin */}
-        <line
-          x1={X(scene.crank.front.x)}
-          y1={Y(scene.crank.front.z)}
-          x2={X(scene.crank.rear.x)}
-          y2={Y(scene.crank.rear.z)}
-          stroke={palette.teal900}
-          strokeWidth={sw}
-          strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`}
-        />
-        <g data-testid="side-origin">
-          <circle cx={X(origin.x)} cy={Y(origin.z)} r={fs * 0.45} fill="#fff" stroke={palette.oxide600} strokeWidth={sw * 1.5} />
-          <line x1={X(origin.x) - fs * 0.8} x2={X(origin.x) + fs * 0.8} y1={Y(origin.z)} y2={Y(origin.z)} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
-          <line x1={X(origin.x)} x2={X(origin.x)} y1={Y(origin.z) - fs * 0.8} y2={Y(origin.z) + fs * 0.8} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
-        </g>
-
-        {/* proposed placement */}
-        {proposed && (
-          <g data-testid="side-proposed">
-            <title>Proposed placement</title>
-            <rect
-              x={X(proposed.setbackMm) - fs * 0.4}
-              y={Y(proposed.heightMm) - fs * 0.4}
-              width={fs * 0.8}
-              height={fs * 0.8}
-              transform={`rotate(45 ${X(proposed.setbackMm)} ${Y(proposed.heightMm)})`}
-              fill={colors.window}
-              stroke="#fff"
+            {/* crank centerline and origin */}
+            <line
+              x1={X(scene.crank.front.x)}
+              y1={Y(scene.crank.front.z)}
+              x2={X(scene.crank.rear.x)}
+              y2={Y(scene.crank.rear.z)}
+              stroke={palette.teal900}
               strokeWidth={sw}
+              strokeDasharray={`${fs} ${fs / 3} ${fs / 6} ${fs / 3}`}
             />
-          </g>
-        )}
-
-        {/* names, placed clear of each other */}
-        <g data-testid="side-labels">
-          {scene.obstacles.map((o) => <g key={o.id}>{labelOf(`obstacle:${o.id}`, palette.ink)}</g>)}
-          {labelOf('hood', colors.hood)}
-          {labelOf('radiator', '#7d5d22')}
-          {labelOf('origin', palette.oxide600)}
-          {labelOf('axle', palette.inkMuted)}
-          {labelOf('ground', palette.inkMuted)}
-        </g>
-
-        {/* dimensions of the tightest clearances */}
-        {scene.dimensions.map((d) => {
-          const c = statusColors[d.status].fg;
-          const x1 = X(d.from.x);
-          const y1 = Y(d.from.z);
-          const x2 = X(d.to.x);
-          const y2 = Y(d.to.z);
-          const len = Math.hypot(x2 - x1, y2 - y1);
-          return (
-            <g key={d.checkId} data-testid={`side-dim-${d.checkId}`} data-status={d.status}>
-              <title>{`${d.title}: ${dimLabel(d)}`}</title>
-              {len > fs * 0.3 ? (
-                <line x1={x1} y1={y1} x2={x2} y2={y2} stroke={c} strokeWidth={sw * 1.4} markerStart={`url(#${uid}-arrow)`} markerEnd={`url(#${uid}-arrow)`} />
-              ) : (
-                <circle cx={x1} cy={y1} r={fs * 0.25} fill={c} />
-              )}
-              {labelOf(`dim:${d.checkId}`, c, true)}
+            <g data-testid="side-origin">
+              <circle cx={X(origin.x)} cy={Y(origin.z)} r={fs * 0.45} fill="#fff" stroke={palette.oxide600} strokeWidth={sw * 1.5} />
+              <line x1={X(origin.x) - fs * 0.8} x2={X(origin.x) + fs * 0.8} y1={Y(origin.z)} y2={Y(origin.z)} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
+              <line x1={X(origin.x)} x2={X(origin.x)} y1={Y(origin.z) - fs * 0.8} y2={Y(origin.z) + fs * 0.8} stroke={palette.oxide600} strokeWidth={sw * 1.2} />
             </g>
-          );
-        })}
-      </svg>
+
+            {/* proposed placement */}
+            {proposed && (
+              <g data-testid="side-proposed">
+                <title>Proposed placement</title>
+                <rect
+                  x={X(proposed.setbackMm) - fs * 0.4}
+                  y={Y(proposed.heightMm) - fs * 0.4}
+                  width={fs * 0.8}
+                  height={fs * 0.8}
+                  transform={`rotate(45 ${X(proposed.setbackMm)} ${Y(proposed.heightMm)})`}
+                  fill={colors.window}
+                  stroke="#fff"
+                  strokeWidth={sw}
+                />
+              </g>
+            )}
+
+            {/* names, placed clear of each other */}
+            <g data-testid="side-labels">
+              {scene.obstacles.map((o) => <g key={o.id}>{labelOf(`obstacle:${o.id}`, palette.ink)}</g>)}
+              {labelOf('hood', colors.hood)}
+              {labelOf('radiator', '#7d5d22')}
+              {labelOf('origin', palette.oxide600)}
+              {labelOf('axle', palette.inkMuted)}
+              {labelOf('ground', palette.inkMuted)}
+            </g>
+
+            {/* dimensions of the tightest clearances */}
+            {scene.dimensions.map((d) => {
+              const c = statusColors[d.status].fg;
+              const x1 = X(d.from.x);
+              const y1 = Y(d.from.z);
+              const x2 = X(d.to.x);
+              const y2 = Y(d.to.z);
+              const len = Math.hypot(x2 - x1, y2 - y1);
+              return (
+                <g key={d.checkId} data-testid={`side-dim-${d.checkId}`} data-status={d.status}>
+                  <title>{`${d.title}: ${dimLabel(d)}`}</title>
+                  {len > fs * 0.3 ? (
+                    <line x1={x1} y1={y1} x2={x2} y2={y2} stroke={c} strokeWidth={sw * 1.4} markerStart={`url(#${uid}-arrow)`} markerEnd={`url(#${uid}-arrow)`} />
+                  ) : (
+                    <circle cx={x1} cy={y1} r={fs * 0.25} fill={c} />
+                  )}
+                  {labelOf(`dim:${d.checkId}`, c, true)}
+                </g>
+              );
+            })}
+          </svg>
+        </div>
+      </div>
+      <Typography.Text type="secondary" className="drawing-scroll-hint" style={{ fontSize: 12 }}>
+        Swipe the drawing sideways to see all of it.
+      </Typography.Text>
       <figcaption>
         <Flex wrap gap="4px 16px" style={{ marginTop: 8, fontSize: 13 }} className="fit-legend">
           {legend

@@ -37,6 +37,18 @@ describe('SideView', () => {
   });
 });
 
+describe('SideView on a phone', () => {
+  it('keeps the drawing at a readable width inside a frame that scrolls sideways, and says so', () => {
+    renderWithApp(<SideView spec={DEMO_FIT_SPEC} findings={runFitCheck(DEMO_FIT_SPEC).findings} />);
+    const frame = screen.getByTestId('side-view-scroll');
+    expect(frame.className).toContain('drawing-scroll');
+    const drawing = frame.firstElementChild as HTMLElement;
+    expect(drawing.style.minWidth).toBe('640px');
+    expect(within(drawing).getByRole('img', { name: /Side view of the engine in the chassis/ })).toBeInTheDocument();
+    expect(screen.getByText('Swipe the drawing sideways to see all of it.').className).toContain('drawing-scroll-hint');
+  });
+});
+
 describe('FrontView', () => {
   it('shows the rails’ inside width and the gaps to them', () => {
     window.localStorage.setItem('swapwright.unitSystem', 'mm');
