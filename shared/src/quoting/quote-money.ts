@@ -12,7 +12,7 @@ import { assertCents, divideRounded, markedUp, MoneyInputError, percentOf, scale
  * 7. deposit: round(total x deposit %) or a fixed amount, never more than the total
  */
 export const QUOTE_ROUNDING_RULE =
-  'Amounts are in cents. Each parts line is its unit price times its quantity (a unit priced from cost is cost x (1 + markup), rounded); ' +
+  'Every amount is worked in whole cents. Each parts line is its unit price times its quantity (a unit priced from cost is cost x (1 + markup), rounded); ' +
   'each labor line is hours (to a tenth) x the shop rate, rounded; shop supplies are the labor subtotal x the supplies rate, rounded, ' +
   'and never more than the cap; a percent discount is taken from parts and from labor, each rounded; a fixed discount is split between ' +
   'parts and labor in proportion to their subtotals (the parts share rounded, labor takes the rest); tax is parts after discount x the ' +

@@ -19,13 +19,14 @@ export function WorkOrdersPage() {
     <>
       <PageHeader title="Work orders" subtitle="Operations in build order, tightening figures and the checks the bay records." />
       <Card>
-        <Segmented
-          aria-label="Work order state"
-          style={{ marginBottom: 12 }}
-          options={FILTERS}
-          value={state ?? 'all'}
-          onChange={(value) => setParams(value === 'all' ? {} : { state: String(value) })}
-        />
+        <div style={{ overflowX: 'auto', marginBottom: 12 }}>
+          <Segmented
+            aria-label="Work order state"
+            options={FILTERS}
+            value={state ?? 'all'}
+            onChange={(value) => setParams(value === 'all' ? {} : { state: String(value) })}
+          />
+        </div>
         <WorkOrdersTable state={state} toWorkOrder={toWorkOrder} />
       </Card>
     </>

@@ -14,7 +14,7 @@ export interface ProjectQuotesCardProps {
   canWrite: boolean;
 }
 
-/** The project's quotes: draft one from the stored fit report, send it to the customer, follow the answer and the deposit. */
+/** The project's quotes: draft one from the parts plan and the fit report, send it to the customer, follow the answer and the deposit. */
 export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProps) {
   const quotes = useProjectQuotes(projectId);
   const create = useCreateQuote(projectId);
@@ -26,15 +26,15 @@ export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProp
       style={{ marginBottom: 16 }}
       extra={
         canWrite && (
-          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`Quote ${quote.label} drafted from the fit check`) })} loading={create.isPending}>
+          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`Quote ${quote.label} drafted from the parts plan and the fit report`) })} loading={create.isPending}>
             Draft a quote
           </Button>
         )
       }
     >
-      {quotes.data && quotes.data.length === 0 && <Empty description="No quote yet" />}
       <List
         dataSource={quotes.data ?? []}
+        locale={{ emptyText: <Empty image={Empty.PRESENTED_IMAGE_SIMPLE} description="No quote yet" /> }}
         loading={quotes.isLoading}
         renderItem={(quote) => (
           <List.Item

@@ -1,4 +1,4 @@
-import { Table, Typography } from 'antd';
+import { Empty, Table, Typography } from 'antd';
 import { Link } from 'react-router-dom';
 import { formatDate } from '@/lib/dates';
 import { useWorkOrders } from '../api/get-work-orders';
@@ -13,6 +13,10 @@ export interface WorkOrdersTableProps {
 /** The shop's work orders, newest first, with their checks' progress. */
 export function WorkOrdersTable({ state, toWorkOrder }: WorkOrdersTableProps) {
   const orders = useWorkOrders(state ? { state } : {});
+  if (orders.data && orders.data.length === 0) {
+    // Outside the table: on a phone the table scrolls sideways and would cut the sentence off.
+    return <Empty image={Empty.PRESENTED_IMAGE_SIMPLE} description="No work order yet: one opens when a customer has approved a quote and paid the deposit." />;
+  }
   return (
     <Table<WorkOrderSummary>
       aria-label="Work orders"
@@ -20,7 +24,6 @@ export function WorkOrdersTable({ state, toWorkOrder }: WorkOrdersTableProps) {
       loading={orders.isLoading}
       dataSource={orders.data ?? []}
       pagination={false}
-      locale={{ emptyText: 'No work order yet: one opens when a customer has approved a quote and paid the deposit.' }}
       columns={[
         { title: 'Work order', render: (_, order) => <Link to={toWorkOrder(order.id)}>{order.label}</Link> },
         {
