@@ -71,6 +71,23 @@ describe('audit log of money, stock, sign-off and membership changes', () => {
     expect(await auditRows()).toBe(before);
   });
 
+  it('records quote terms that price work (money), not a change of the printed terms', async () => {
+    const termsBefore = (await t.http.get('/api/quote-settings').set(...bearer(s.owner)).expect(200)).body;
+    const nextDeposit = termsBefore.depositPercent === 35 ? 40 : 35;
+    await t.http.put('/api/quote-settings').set(...bearer(s.owner)).send({ depositPercent: nextDeposit }).expect(200);
+    const [changed] = (await events('?kind=money')).items;
+    expect(changed).toMatchObject({
+      action: 'quote-terms.changed',
+      actorName: s.owner.user.name,
+      before: { depositPercent: Number(termsBefore.depositPercent) },
+      after: { depositPercent: nextDeposit },
+    });
+    const before = await auditRows();
+    await t.http.put('/api/quote-settings').set(...bearer(s.owner)).send({ terms: `${termsBefore.terms} ` }).expect(200);
+    expect(await auditRows()).toBe(before);
+    await t.http.put('/api/quote-settings').set(...bearer(s.owner)).send({ depositPercent: termsBefore.depositPercent, terms: termsBefore.terms }).expect(200);
+  });
+
   it('records stock counted, reserved and released with the figures before and after', async () => {
     const [line] = await t.dataSource.query('SELECT partId, quantity, sku FROM counter_lines WHERE id = ?', [shop.counterLineId]);
     await t.http.put(`/api/parts/${line.partId}/stock`).set(...bearer(s.counter)).send({ location: 'Audit shelf', onHand: 40 }).expect(200);

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { UpdateQuoteSettingsDto } from './dto/quote-input.dto';
 import { QuoteSettings } from './quote-settings.entity';
@@ -10,9 +11,15 @@ export const DEFAULT_QUOTE_TERMS =
   'Hidden damage found once the vehicle is apart (rust, broken fasteners, worn parts) is quoted separately before any extra work. ' +
   'The vehicle must meet local registration, emissions and inspection rules after the swap; the owner is responsible for those approvals.';
 
+/** The quote terms that price work (tax on labor, supplies cap, deposit, markup): their changes are audited as money. */
+const MONEY_TERMS = ['laborTaxPercent', 'suppliesCapCents', 'depositPercent', 'defaultMarkupPercent'] as const;
+
 @Injectable()
 export class QuoteSettingsService {
-  constructor(@InjectRepository(QuoteSettings) private readonly settings: Repository<QuoteSettings>) {}
+  constructor(
+    @InjectRepository(QuoteSettings) private readonly settings: Repository<QuoteSettings>,
+    private readonly audit: AuditService,
+  ) {}
 
   async forShop(user: Pick<AuthUser, 'shopId'>): Promise<QuoteSettings> {
     const stored = await this.settings.findOne({ where: { shopId: user.shopId } });
@@ -31,17 +38,43 @@ export class QuoteSettingsService {
     );
   }
 
-  async update(user: Pick<AuthUser, 'shopId'>, changes: UpdateQuoteSettingsDto): Promise<QuoteSettings> {
-    const current = await this.forShop(user);
-    const merged = this.settings.merge(current, {
-      ...(changes.laborTaxPercent !== undefined && { laborTaxPercent: changes.laborTaxPercent }),
-      ...(changes.suppliesCapCents !== undefined && { suppliesCapCents: changes.suppliesCapCents }),
-      ...(changes.depositPercent !== undefined && { depositPercent: changes.depositPercent }),
-      ...(changes.validityDays !== undefined && { validityDays: changes.validityDays }),
-      ...(changes.defaultMarkupPercent !== undefined && { defaultMarkupPercent: changes.defaultMarkupPercent }),
-      ...(changes.terms !== undefined && { terms: changes.terms }),
+  /** Money terms (tax on labor, supplies cap, deposit, markup) go to the audit log in the same transaction as the change. */
+  async update(user: AuthUser, changes: UpdateQuoteSettingsDto): Promise<QuoteSettings> {
+    await this.settings.manager.transaction(async (manager) => {
+      const stored = await manager.findOne(QuoteSettings, { where: { shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
+      const current = stored ?? (await this.forShop(user));
+      const before: Record<string, number | null> = {};
+      const after: Record<string, number | null> = {};
+      for (const field of MONEY_TERMS) {
+        const next = changes[field];
+        const previous = current[field] === null ? null : Number(current[field]);
+        if (next !== undefined && (next === null ? null : Number(next)) !== previous) {
+          before[field] = previous;
+          after[field] = next === null ? null : Number(next);
+        }
+      }
+      if (Object.keys(after).length > 0) {
+        await this.audit.record(manager, {
+          shopId: user.shopId,
+          actor: user,
+          kind: 'money',
+          action: 'quote-terms.changed',
+          subjectId: user.shopId,
+          summary: `Quote terms changed: ${Object.keys(after).map((field) => `${field} ${before[field] ?? 'none'} → ${after[field] ?? 'none'}`).join(', ')}.`,
+          before,
+          after,
+        });
+      }
+      const merged = manager.merge(QuoteSettings, current, {
+        ...(changes.laborTaxPercent !== undefined && { laborTaxPercent: changes.laborTaxPercent }),
+        ...(changes.suppliesCapCents !== undefined && { suppliesCapCents: changes.suppliesCapCents }),
+        ...(changes.depositPercent !== undefined && { depositPercent: changes.depositPercent }),
+        ...(changes.validityDays !== undefined && { validityDays: changes.validityDays }),
+        ...(changes.defaultMarkupPercent !== undefined && { defaultMarkupPercent: changes.defaultMarkupPercent }),
+        ...(changes.terms !== undefined && { terms: changes.terms }),
+      });
+      await manager.save(QuoteSettings, merged);
     });
-    await this.settings.save(merged);
     return this.forShop(user);
   }
 }
