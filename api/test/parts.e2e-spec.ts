@@ -136,6 +136,19 @@ describe('parts catalog, plans and counter', () => {
     expect(pickList.text.split(/\r?\n/)[0]).toBe('sku,description,quantity,location,bin,status');
   }, 120_000);
 
+  it('a quote drafted from the plan does not also charge the fabrication for a shortfall the plan resolves with a part', async () => {
+    const plan = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({ objective: 'lowest-cost' });
+    expect(plan.status).toBe(201);
+    const resolved = new Set((plan.body.result.picks as Pick[]).flatMap((pick) => pick.resolves.map((r) => r.checkId)));
+    expect(resolved).toContain('envelope.sump-crossmember');
+    const quote = await t.http.post(`/api/projects/${ridgeback}/quotes`).set(...bearer(demo.estimator)).send({});
+    expect(quote.status).toBe(201);
+    expect(quote.body.revision.partsPlanVersion).not.toBeNull();
+    const descriptions = (quote.body.revision.lines as { description: string }[]).map((line) => line.description);
+    expect(descriptions).toContain('Rear-sump swap pan, Kestrel rail');
+    expect(descriptions.filter((description) => /crossmember/i.test(description))).toEqual([]);
+  });
+
   describe('CSV import', () => {
     const upload = (path: string, csv: string, mapping?: Record<string, string>) => {
       const req = t.http.post(path).set(...bearer(demo.counter)).attach('file', Buffer.from(csv), 'parts.csv');

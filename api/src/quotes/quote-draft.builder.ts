@@ -110,7 +110,7 @@ export interface PlanPartForQuote {
 }
 
 export interface PlanDraftInputs {
-  plan: Pick<PartsPlanResult, 'operations'>;
+  plan: Pick<PartsPlanResult, 'operations' | 'picks'>;
   parts: PlanPartForQuote[];
   report: FitReport | null;
   operations: LaborOperation[];
@@ -121,8 +121,9 @@ export interface PlanDraftInputs {
 /**
  * The first draft of a quote drawn from the parts plan: a parts line per pick (priced from its cost with the shop's
  * markup when a cost is known, else at its list price), the shop operation that installs each pick's category, the
- * plan's own operations, and the fit report's fabrication remedies (the shop's operation when one matches, else the
- * remedy's own hours). Every line keeps where it came from.
+ * plan's own operations, and the fabrication remedies of the fit report's shortfalls the plan leaves unresolved (the
+ * shop's operation when one matches, else the remedy's own hours): a shortfall a picked part or planned operation
+ * resolves is not quoted twice. Every line keeps where it came from.
  */
 export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
   const lines: DraftLine[] = [];
@@ -160,7 +161,9 @@ export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
     else lines.push({ key: randomUUID(), kind: 'labor', source: 'plan', description: planned.operation.slice(0, 200), hours: Math.round(planned.laborHours * 10) / 10 });
   }
   const described = new Set(lines.map((line) => line.description.toLowerCase()));
+  const resolvedByPlan = new Set([...inputs.plan.picks, ...inputs.plan.operations].flatMap((pick) => (pick.resolves ?? []).map((shortfall) => shortfall.checkId)));
   for (const finding of inputs.report?.shortfalls ?? []) {
+    if (resolvedByPlan.has(finding.checkId)) continue;
     for (const remedy of finding.remedies) {
       if (remedy.kind !== 'fabrication') continue;
       const operation = matchText(remedy.operation);
