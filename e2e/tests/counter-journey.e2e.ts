@@ -24,7 +24,11 @@ describe('the parts counter looks up the shop catalog', () => {
   it('finds the rear-sump swap pan among the oil pans', async () => {
     const { page } = browser;
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Catalog' }).click();
-    await page.getByRole('tab', { name: /Oil pans/i }).click();
+    const oilPans = page.getByRole('tab', { name: /Oil pans/i });
+    await expectVisible(oilPans);
+    await oilPans.click();
+    // antd marks the tab selected after its own state update: wait for it rather than read it at once.
+    await expectVisible(page.getByRole('tab', { name: /Oil pans/i, selected: true }));
     expect(await page.getByRole('tab', { name: /Oil pans/i }).getAttribute('aria-selected')).toBe('true');
     const row = page.getByRole('row').filter({ hasText: 'Trailhand TR-4410 rear-sump swap pan' });
     await expectVisible(row);
