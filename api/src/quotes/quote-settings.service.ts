@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
+import { changedFigures } from '../audit/changed-figures';
 import { AuthUser } from '../common/tenant/auth-user';
 import { UpdateQuoteSettingsDto } from './dto/quote-input.dto';
 import { QuoteSettings } from './quote-settings.entity';
@@ -43,26 +44,17 @@ export class QuoteSettingsService {
     await this.settings.manager.transaction(async (manager) => {
       const stored = await manager.findOne(QuoteSettings, { where: { shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
       const current = stored ?? (await this.forShop(user));
-      const before: Record<string, number | null> = {};
-      const after: Record<string, number | null> = {};
-      for (const field of MONEY_TERMS) {
-        const next = changes[field];
-        const previous = current[field] === null ? null : Number(current[field]);
-        if (next !== undefined && (next === null ? null : Number(next)) !== previous) {
-          before[field] = previous;
-          after[field] = next === null ? null : Number(next);
-        }
-      }
-      if (Object.keys(after).length > 0) {
+      const moved = changedFigures(current, changes, MONEY_TERMS);
+      if (moved) {
         await this.audit.record(manager, {
           shopId: user.shopId,
           actor: user,
           kind: 'money',
           action: 'quote-terms.changed',
           subjectId: user.shopId,
-          summary: `Quote terms changed: ${Object.keys(after).map((field) => `${field} ${before[field] ?? 'none'} → ${after[field] ?? 'none'}`).join(', ')}.`,
-          before,
-          after,
+          summary: `Quote terms changed: ${moved.description}.`,
+          before: moved.before,
+          after: moved.after,
         });
       }
       const merged = manager.merge(QuoteSettings, current, {

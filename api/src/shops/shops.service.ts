@@ -3,6 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { EntityManager, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
+import { changedFigures } from '../audit/changed-figures';
 import { AuthUser } from '../common/tenant/auth-user';
 import { UpdateShopDto } from './dto/update-shop.dto';
 import { Shop } from './shop.entity';
@@ -36,25 +37,17 @@ export class ShopsService {
     return this.shops.manager.transaction(async (manager) => {
       const shop = await manager.findOne(Shop, { where: { id: user.shopId }, lock: { mode: 'pessimistic_write' } });
       if (!shop) throw ShopErrors.notFound();
-      const before: Record<string, number> = {};
-      const after: Record<string, number> = {};
-      for (const field of MONEY_FIELDS) {
-        const next = changes[field];
-        if (next !== undefined && Number(next) !== Number(shop[field])) {
-          before[field] = Number(shop[field]);
-          after[field] = Number(next);
-        }
-      }
-      if (Object.keys(after).length > 0) {
+      const moved = changedFigures(shop, changes, MONEY_FIELDS);
+      if (moved) {
         await this.audit.record(manager, {
           shopId: user.shopId,
           actor: user,
           kind: 'money',
           action: 'shop.rates-changed',
           subjectId: shop.id,
-          summary: `Shop rates changed: ${Object.keys(after).map((field) => `${field} ${before[field]} → ${after[field]}`).join(', ')}.`,
-          before,
-          after,
+          summary: `Shop rates changed: ${moved.description}.`,
+          before: moved.before,
+          after: moved.after,
         });
       }
       Object.assign(shop, changes, changes.name !== undefined ? { name: changes.name.trim() } : {});

@@ -31,14 +31,14 @@ describe('SignInForm', () => {
     const onSignedIn = vi.fn();
     const { queryClient } = renderWithApp(<SignInForm onSignedIn={onSignedIn} />);
 
-    await userEvent.type(screen.getByLabelText('Email'), '  dana@ironbark.example ');
+    await userEvent.type(screen.getByLabelText('Email'), '  wrenna@ironbark.example ');
     await userEvent.type(screen.getByLabelText('Password'), 'correct horse');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
 
     await waitFor(() => expect(onSignedIn).toHaveBeenCalledWith(sessionStub));
     expect(post).toHaveBeenCalledWith(
       '/auth/sign-in',
-      { email: 'dana@ironbark.example', password: 'correct horse' },
+      { email: 'wrenna@ironbark.example', password: 'correct horse' },
       expect.objectContaining({ skipAuthRefresh: true }),
     );
     expect(tokenStorage.getAccessToken()).toBe('access-token-1');
@@ -58,7 +58,7 @@ describe('SignInForm', () => {
     vi.spyOn(apiClient, 'post').mockRejectedValue(error);
     renderWithApp(<SignInForm />);
 
-    await userEvent.type(screen.getByLabelText('Email'), 'dana@ironbark.example');
+    await userEvent.type(screen.getByLabelText('Email'), 'wrenna@ironbark.example');
     await userEvent.type(screen.getByLabelText('Password'), 'wrong one');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
 
