@@ -2,7 +2,8 @@ import { changedFigures } from './changed-figures';
 
 describe('changedFigures', () => {
   it('keeps only the named fields whose value moves, decimals read from strings as the driver returns them', () => {
-    const moved = changedFigures({ laborRatePerHour: '135.00', taxRatePercent: '8.25', name: 'A' }, { laborRatePerHour: 142.5, taxRatePercent: 8.25 }, ['laborRatePerHour', 'taxRatePercent']);
+    const shop = { laborRatePerHour: '135.00', taxRatePercent: '8.25', name: 'A' };
+    const moved = changedFigures(shop, { laborRatePerHour: 142.5, taxRatePercent: 8.25 }, ['laborRatePerHour', 'taxRatePercent']);
     expect(moved).toEqual({ before: { laborRatePerHour: 135 }, after: { laborRatePerHour: 142.5 }, description: 'laborRatePerHour 135 → 142.5' });
   });
 
