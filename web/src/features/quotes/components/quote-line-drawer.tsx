@@ -5,7 +5,8 @@ import { FormErrorAlert } from '@/components/form-error-alert';
 import { useLaborOperations } from '../api/get-labor-operations';
 import { lineToForm, type QuoteLineFormValues } from '../quote-line-input';
 import type { QuoteLine } from '../types';
-import { ChoiceField, NumberField } from './quote-fields';
+import { NumberField } from '@/components/number-field';
+import { ChoiceField } from './quote-fields';
 
 export interface QuoteLineDrawerProps {
   open: boolean;

@@ -5,7 +5,8 @@ import { FormErrorAlert } from '@/components/form-error-alert';
 import type { UpdateQuoteBody } from '../api/update-quote';
 import { toCents } from '../quote-line-input';
 import type { Quote } from '../types';
-import { ChoiceField, NumberField } from './quote-fields';
+import { NumberField } from '@/components/number-field';
+import { ChoiceField } from './quote-fields';
 
 type Revision = Quote['revision'];
 

@@ -6,7 +6,7 @@ import { notifySuccess } from '@/lib/notifier';
 import { useQuoteSettings } from '../api/get-quote-settings';
 import { useUpdateQuoteSettings } from '../api/update-quote-settings';
 import type { QuoteSettings, UpdateQuoteSettingsInput } from '../types';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/number-field';
 
 export type QuoteTermsFormProps = { canEdit: boolean; currency?: string };
 
@@ -65,19 +65,19 @@ export function QuoteTermsForm({ canEdit, currency = 'USD' }: QuoteTermsFormProp
         <FormErrorAlert error={update.error} />
         <Row gutter={16}>
           <Col xs={24} sm={8}>
-            <NumberField label="Tax on labor" name="laborTaxPercent" extra="On labor and shop supplies; 0 where labor is not taxed." requiredMessage="Enter the labor tax rate (0 if none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={0.25} suffix="%" />
+            <NumberField label="Tax on labor" name="laborTaxPercent" example="8.25" extra="On labor and shop supplies; 0 where labor is not taxed." required="Enter the labor tax rate (0 if none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={0.25} suffix="%" />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Shop supplies cap" name="suppliesCap" extra="Most shop supplies a quote charges; leave empty for no cap." min={0} max={1_000_000} rangeMessage={`Between 0 and 1,000,000 ${currency}`} precision={2} step={5} {...money} />
+            <NumberField label="Shop supplies cap" name="suppliesCap" example="75.00" extra="Most shop supplies a quote charges; leave empty for no cap." min={0} max={1_000_000} rangeMessage={`Between 0 and 1,000,000 ${currency}`} precision={2} step={5} {...money} />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Deposit" name="depositPercent" extra="Share of the quote total asked up front." requiredMessage="Enter the deposit share (0 for none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={5} suffix="%" />
+            <NumberField label="Deposit" name="depositPercent" example="30" extra="Share of the quote total asked up front." required="Enter the deposit share (0 for none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={5} suffix="%" />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Markup on part cost" name="defaultMarkupPercent" extra="For parts priced from cost." requiredMessage="Enter the markup (0 to sell at cost)" min={0} max={1000} rangeMessage="Between 0 and 1,000 %" precision={2} step={5} suffix="%" />
+            <NumberField label="Markup on part cost" name="defaultMarkupPercent" example="35" extra="For parts priced from cost." required="Enter the markup (0 to sell at cost)" min={0} max={1000} rangeMessage="Between 0 and 1,000 %" precision={2} step={5} suffix="%" />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Quote valid for" name="validityDays" requiredMessage="Enter how many days a quote holds" min={1} max={365} rangeMessage="Between 1 and 365 days" precision={0} step={1} suffix="days" />
+            <NumberField label="Quote valid for" name="validityDays" example="30" required="Enter how many days a quote holds" min={1} max={365} rangeMessage="Between 1 and 365 days" precision={0} step={1} suffix="days" />
           </Col>
         </Row>
         <Form.Item

@@ -4,7 +4,7 @@ import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
 import { useUpdateShop } from '../api/update-shop';
 import type { Shop, UpdateShopInput } from '../types';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/number-field';
 
 export type ShopSettingsFormProps = { shop: Shop; canEdit: boolean };
 
@@ -78,13 +78,13 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
       <Card title="Rates for quotes" style={{ marginBottom: 16 }}>
         <Row gutter={16}>
           <Col xs={24} sm={8}>
-            <NumberField label="Labor rate per hour" name="laborRatePerHour" requiredMessage="Enter the labor rate" min={0} max={10000} rangeMessage="Between 0 and 10,000" precision={2} step={5} {...money} />
+            <NumberField label="Labor rate per hour" name="laborRatePerHour" example="135.00" required="Enter the labor rate" min={0} max={10000} rangeMessage="Between 0 and 10,000" precision={2} step={5} {...money} />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Sales tax" name="taxRatePercent" extra="On parts." requiredMessage="Enter the tax rate (0 if none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={0.25} suffix="%" />
+            <NumberField label="Sales tax" name="taxRatePercent" example="8.25" extra="On parts." required="Enter the tax rate (0 if none)" min={0} max={100} rangeMessage="Between 0 and 100 %" precision={2} step={0.25} suffix="%" />
           </Col>
           <Col xs={24} sm={8}>
-            <NumberField label="Shop supplies" name="shopSuppliesPercent" extra="Added to quotes for consumables." requiredMessage="Enter the shop supplies share (0 if none)" min={0} max={50} rangeMessage="Between 0 and 50 %" precision={2} step={0.5} suffix="%" />
+            <NumberField label="Shop supplies" name="shopSuppliesPercent" example="5" extra="Added to quotes for consumables." required="Enter the shop supplies share (0 if none)" min={0} max={50} rangeMessage="Between 0 and 50 %" precision={2} step={0.5} suffix="%" />
           </Col>
         </Row>
         <Typography.Text type="secondary">
