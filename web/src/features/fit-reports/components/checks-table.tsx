@@ -6,7 +6,7 @@ import { useUnits } from '@/hooks/use-units';
 import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
 import { matchResult, missingInputLabel } from '../lib/labels';
 import { groupLabels, groupOrder, worstStatus } from '../lib/status';
-import { CheckStatusTag } from './check-status-tag';
+import { CheckStatusTag } from '@/components/check-status-tag';
 
 export type ChecksTableProps = { findings: readonly Finding[] };
 

@@ -6,7 +6,7 @@ import { formatDateTime } from '@/lib/dates';
 import { useFitReportComparison } from '../api/compare-fit-reports';
 import { useFitReports } from '../api/get-fit-reports';
 import type { FitReportComparison, FitReportListItem, FitSummary } from '../types';
-import { CheckStatusTag } from './check-status-tag';
+import { CheckStatusTag } from '@/components/check-status-tag';
 
 export type ReportHistoryProps = {
   projectId: string;

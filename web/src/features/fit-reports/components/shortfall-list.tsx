@@ -5,7 +5,7 @@ import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
 import { describeRequirement, matchResult } from '../lib/labels';
 import { categoryLabels, describePlacementRemedy, partNouns, selectionKeyFor, type PartInfo } from '../lib/remedies';
 import { compareWorstFirst, groupLabels } from '../lib/status';
-import { CheckStatusTag } from './check-status-tag';
+import { CheckStatusTag } from '@/components/check-status-tag';
 
 export type ShortfallListProps = {
   /** Close and blocked checks (any order: the list puts the worst first). */

@@ -6,7 +6,7 @@ import { useUnits } from '@/hooks/use-units';
 import { placeLabels, segmentBoxes, wrapLabel, type Box, type LabelRequest } from '../lib/label-placement';
 import { buildSideScene, type GapDimension } from '../lib/side-scene';
 import type { Pt } from '../lib/scene-geometry';
-import { statusColors } from '../lib/status';
+import { statusColors } from '@/components/check-status-tag';
 import { DRAWING_TEXT_PX, DrawingLabel, drawingScale, useRenderedWidth } from './drawing-label';
 
 const MAX_HEIGHT_PX = 560;

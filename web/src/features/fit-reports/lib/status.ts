@@ -1,20 +1,4 @@
 import type { CheckGroup, CheckStatus, Finding } from '@swapwright/shared';
-import { palette } from '@/config/theme';
-
-/** Our words for a check's status. */
-export const statusLabels: Record<CheckStatus, string> = {
-  ok: 'Clears',
-  tight: 'Close call',
-  fails: 'Blocked',
-  unknown: 'Needs input',
-};
-
-export const statusColors: Record<CheckStatus, { fg: string; bg: string; border: string }> = {
-  ok: { fg: '#1f5e3a', bg: '#e3f1e8', border: '#a9d3b8' },
-  tight: { fg: '#7a4e0e', bg: '#fbf0d9', border: '#e8c987' },
-  fails: { fg: '#8e2a21', bg: '#f8e1de', border: '#e4a59d' },
-  unknown: { fg: palette.inkMuted, bg: '#eceeea', border: palette.line },
-};
 
 export const statusSeverity: Record<CheckStatus, number> = { fails: 3, tight: 2, unknown: 1, ok: 0 };
 

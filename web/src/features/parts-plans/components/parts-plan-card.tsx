@@ -2,6 +2,7 @@ import { Alert, Button, Card, Descriptions, Empty, Grid, List, Select, Space, Ta
 import type { PlanObjective } from '@swapwright/shared';
 import { PLAN_OBJECTIVES } from '@swapwright/shared';
 import { useState } from 'react';
+import { CheckStatusTag } from '@/components/check-status-tag';
 import type { Schemas } from '@/lib/api-types';
 import { formatMoneyCents } from '@/lib/units';
 import { useBuildPartsPlan } from '../api/build-parts-plan';
@@ -158,14 +159,24 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
               }
             />
           )}
-          <Typography.Text type="secondary">
-            Fit check run again with the chosen parts: {latest.recheck.resolved.length} {latest.recheck.resolved.length === 1 ? 'shortfall' : 'shortfalls'} cleared.{' '}
-            {stillShort.length > 0
-              ? `Still short with the chosen parts: ${stillShort.map((r) => `${r.title} (${r.status})`).join(', ')}.`
-              : 'Every other shortfall is answered by a part or an operation above.'}{' '}
-            Fuel
-            system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
-          </Typography.Text>
+          <div data-testid="plan-recheck">
+            <Typography.Text type="secondary">
+              Fit check run again with the chosen parts: {latest.recheck.resolved.length} {latest.recheck.resolved.length === 1 ? 'shortfall' : 'shortfalls'} cleared.{' '}
+              {stillShort.length > 0 ? 'Still short with the chosen parts:' : 'Every other shortfall is answered by a part or an operation above.'}
+            </Typography.Text>
+            {stillShort.length > 0 && (
+              <ul aria-label="Still short with the chosen parts" style={{ listStyle: 'none', padding: 0, margin: '6px 0', display: 'flex', flexDirection: 'column', gap: 4 }}>
+                {stillShort.map((r) => (
+                  <li key={r.checkId} data-testid={`still-short-${r.checkId}`}>
+                    <CheckStatusTag status={r.status} /> {r.title}
+                  </li>
+                ))}
+              </ul>
+            )}
+            <Typography.Text type="secondary">
+              Fuel system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
+            </Typography.Text>
+          </div>
           {canBuild && latest.status !== 'locked' && (
             <Button loading={lock.isPending} onClick={() => lock.mutate(latest.id)}>
               Lock version {latest.version} for a quote

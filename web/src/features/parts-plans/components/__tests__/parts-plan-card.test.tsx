@@ -58,7 +58,12 @@ describe('PartsPlanCard', () => {
     expect(pick).toHaveTextContent('Resolves: Oil pan to front crossmember');
     expect(pick).toHaveTextContent(/TR-4480 \(\$694\.00\) does not resolve oil pan to front crossmember/);
     // The pump flow is answered by an operation the fit check cannot model; the hoses by nothing.
-    expect(screen.getByText(/1 shortfall cleared\. Still short with the chosen parts: Coolant hose sides \(fails\)\./)).toBeInTheDocument();
+    expect(screen.getByText(/1 shortfall cleared\. Still short with the chosen parts:/)).toBeInTheDocument();
+    const stillShort = screen.getByRole('list', { name: 'Still short with the chosen parts' });
+    expect(within(stillShort).getAllByRole('listitem').map((item) => item.textContent)).toEqual(['✕Blocked Coolant hose sides']);
+    // our own status words and colours, as the fit report shows them, never the raw status
+    expect(within(stillShort).getByText('Blocked').closest('[data-status]')).toHaveAttribute('data-status', 'fails');
+    expect(stillShort).not.toHaveTextContent('(fails)');
     expect(screen.getByRole('button', { name: 'Lock version 2 for a quote' })).toBeInTheDocument();
   });
 
