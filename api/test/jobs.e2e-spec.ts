@@ -1,6 +1,6 @@
 import './helpers/jobs-driven-env';
 import { ConfigService } from '@nestjs/config';
-import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_PROJECT_IDS, DEMO_SHOP_ID, DemoRole } from '@swapwright/seed-data';
 import { DataSource } from 'typeorm';
 import { JobHandlers } from '../src/jobs/job-handlers';
 import type { JobKind } from '../src/jobs/job-kinds';
@@ -214,7 +214,20 @@ describe('background jobs in MariaDB', () => {
     expect(response.body.counts.done).toBeGreaterThanOrEqual(3);
     expect(response.body.items.length).toBe(response.body.counts.done);
     for (const item of response.body.items) {
-      expect(Object.keys(item).sort()).toEqual(['attempts', 'createdAt', 'doneAt', 'id', 'kind', 'lastError', 'maxAttempts', 'runAt', 'state']);
+      expect(Object.keys(item).sort()).toEqual([
+        'attempts',
+        'createdAt',
+        'doneAt',
+        'id',
+        'kind',
+        'lastError',
+        'lastErrorDetail',
+        'maxAttempts',
+        'runAt',
+        'state',
+        'subject',
+        'updatedAt',
+      ]);
       expect(['mail', 'quote.mail']).toContain(item.kind);
     }
     const dead = await t.http.get('/api/jobs?state=dead').set(...bearer(demo.owner)).expect(200);
@@ -225,5 +238,116 @@ describe('background jobs in MariaDB', () => {
     const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
     const theirs = await t.http.get('/api/jobs').set(...bearer(other)).expect(200);
     expect(theirs.body).toMatchObject({ total: 0, items: [], counts: { queued: 0, running: 0, done: 0, dead: 0 } });
+  });
+
+  describe('a job that stopped after its last attempt, tried again by the owner', () => {
+    /** Runs the due job, then makes its next attempt due at once, until it has no attempts left. */
+    const runUntilStopped = async (kind: string) => {
+      for (let attempt = 0; attempt < 3; attempt++) {
+        expect(await worker.runOnce()).toBe(true);
+        await t.dataSource.query("UPDATE `jobs` SET `runAt` = UTC_TIMESTAMP(3) WHERE `kind` = ? AND `state` = 'queued'", [kind]);
+      }
+    };
+
+    it('a quote mail that failed for want of an address: the list says what to do, the retry sends it once and it ends done', async () => {
+      const [{ customerId, email }] = await t.dataSource.query('SELECT p.customerId, c.email FROM projects p JOIN customers c ON c.id = p.customerId WHERE p.id = ?', [
+        DEMO_PROJECT_IDS.ridgeback,
+      ]);
+      const created = await t.http.post(`/api/projects/${DEMO_PROJECT_IDS.ridgeback}/quotes`).set(...bearer(demo.estimator)).send({ lines: LINES }).expect(201);
+      await t.http.post(`/api/quotes/${created.body.id}/send`).set(...bearer(demo.estimator)).expect(200);
+      // The address is removed after the quote was sent, before the worker builds its mail.
+      await t.dataSource.query('UPDATE `customers` SET `email` = NULL WHERE `id` = ?', [customerId]);
+      await runUntilStopped('quote.mail');
+
+      const dead = await t.http.get('/api/jobs?state=dead&page=1&pageSize=5').set(...bearer(demo.owner)).expect(200);
+      expect(dead.body).toMatchObject({ total: 1, page: 1, pageSize: 5, counts: { dead: 1 } });
+      const [job] = dead.body.items;
+      expect(job).toMatchObject({
+        kind: 'quote.mail',
+        state: 'dead',
+        attempts: 3,
+        maxAttempts: 3,
+        subject: `Quote ${created.body.label} (revision 1) e-mail to ${email}`,
+        lastError: "The customer has no e-mail address. Add one on the customer's page, then try again.",
+        lastErrorDetail: 'the customer of this quote has no e-mail address any more',
+        doneAt: null,
+      });
+      expect(Date.parse(job.updatedAt)).toBeGreaterThanOrEqual(Date.parse(job.createdAt));
+
+      await t.dataSource.query('UPDATE `customers` SET `email` = ? WHERE `id` = ?', [email, customerId]);
+      const before = await lastMailId();
+      const retried = await t.http.post(`/api/jobs/${job.id}/retry`).set(...bearer(demo.owner)).expect(200);
+      expect(retried.body).toMatchObject({ id: job.id, state: 'queued', attempts: 0 });
+      expect(Date.parse(retried.body.runAt)).toBeLessThanOrEqual(Date.now() + 1000);
+      const [row] = await t.dataSource.query('SELECT `idempotencyKey` FROM `jobs` WHERE `id` = ?', [job.id]);
+      expect(row.idempotencyKey).toBe(`${created.body.id}:r1`);
+
+      // The audit entry committed with the retry: who, what, before and after.
+      const [audit] = await t.dataSource.query("SELECT * FROM `audit_events` WHERE `subjectId` = ? AND `action` = 'job.retried'", [job.id]);
+      expect(audit).toMatchObject({ shopId: DEMO_SHOP_ID, kind: 'background-work', actorName: expect.any(String) });
+      expect(audit.summary).toContain(`Quote ${created.body.label} (revision 1) e-mail to ${email}`);
+      expect(JSON.parse(JSON.stringify(audit.before))).toMatchObject({ state: 'dead', attempts: 3 });
+      const log = await t.http.get('/api/audit-events?kind=background-work').set(...bearer(demo.owner)).expect(200);
+      expect(log.body.items.map((event: { subjectId: string }) => event.subjectId)).toContain(job.id);
+
+      expect(await worker.runOnce()).toBe(true);
+      const [doneJob] = await t.dataSource.query('SELECT * FROM `jobs` WHERE `id` = ?', [job.id]);
+      expect(doneJob).toMatchObject({ state: 'done', attempts: 1, lastError: null, result: `<${job.id}@swapwright.test>` });
+      const mails = (await capturedMail()).filter((mail) => mail.id > before);
+      expect(mails).toHaveLength(1);
+      expect(mails[0].to).toEqual([email]);
+      expect(mails[0].messageId).toBe(`<${job.id}@swapwright.test>`);
+      expect(await worker.runOnce()).toBe(false);
+
+      // Done is done: a second retry is refused and sends nothing.
+      const again = await t.http.post(`/api/jobs/${job.id}/retry`).set(...bearer(demo.owner)).expect(409);
+      expect(again.body).toMatchObject({ code: 'job_not_stopped' });
+      expect(again.body.message).toMatch(/already done.*only a job that stopped after its last attempt can be tried again/);
+    });
+
+    it('a stopped payment event applies once when tried again, keeping its event id; its redelivery adds nothing', async () => {
+      const event = { id: 'evt_retry_1', object: 'event', type: 'payment_intent.succeeded', created: 1_796_000_000, data: { object: { id: 'pi_retry_unknown', metadata: { shopId: DEMO_SHOP_ID } } } };
+      expect(await jobs.enqueue(t.dataSource.manager, { kind: 'payment.event', idempotencyKey: event.id, shopId: DEMO_SHOP_ID, subject: 'Payment provider event', payload: event })).toBe(true);
+      await t.dataSource.query(
+        "UPDATE `jobs` SET `state` = 'dead', `attempts` = 3, `lastError` = 'connect ECONNREFUSED 127.0.0.1:3317' WHERE `kind` = 'payment.event' AND `idempotencyKey` = ?",
+        [event.id],
+      );
+      const listed = await t.http.get('/api/jobs?state=dead').set(...bearer(demo.owner)).expect(200);
+      const job = listed.body.items.find((item: { kind: string }) => item.kind === 'payment.event');
+      expect(job.lastError).toMatch(/could not be reached/);
+      expect(job.lastError).not.toMatch(/ECONNREFUSED/);
+
+      await t.http.post(`/api/jobs/${job.id}/retry`).set(...bearer(demo.owner)).expect(200);
+      while (await worker.runOnce());
+      const rows = await t.dataSource.query('SELECT * FROM `jobs` WHERE `kind` = ? AND `idempotencyKey` = ?', ['payment.event', event.id]);
+      expect(rows).toHaveLength(1);
+      expect(rows[0]).toMatchObject({ id: job.id, state: 'done', result: 'applied payment_intent.succeeded' });
+      expect(await t.dataSource.query('SELECT `eventId` FROM `payment_events` WHERE `eventId` = ?', [event.id])).toHaveLength(1);
+      // The provider sending the same event again: the key is taken, nothing is queued.
+      expect(await jobs.enqueue(t.dataSource.manager, { kind: 'payment.event', idempotencyKey: event.id, shopId: DEMO_SHOP_ID, payload: event })).toBe(false);
+    });
+
+    it('is refused with 409 while queued, 404 from another shop (nothing changes), 403 for staff who are not the owner', async () => {
+      await t.http.post('/api/invitations').set(...bearer(demo.owner)).send({ email: 'new.hand@ironbark.test', role: 'counter' }).expect(201);
+      const [invite] = await t.dataSource.query("SELECT `id`, `subject` FROM `jobs` WHERE `kind` = 'mail' AND `state` = 'queued' AND `shopId` = ?", [DEMO_SHOP_ID]);
+      expect(invite.subject).toMatch(/^E-mail to new\.hand@ironbark\.test: “.+”$/);
+      const queued = await t.http.post(`/api/jobs/${invite.id}/retry`).set(...bearer(demo.owner)).expect(409);
+      expect(queued.body.message).toMatch(/waiting to run.*The worker takes it by itself/);
+
+      await t.dataSource.query("UPDATE `jobs` SET `state` = 'dead', `attempts` = 3 WHERE `id` = ?", [invite.id]);
+      const auditBefore = await countRows(t.dataSource, 'audit_events');
+      const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+      const theirs = await t.http.post(`/api/jobs/${invite.id}/retry`).set(...bearer(other)).expect(404);
+      expect(theirs.body).toMatchObject({ code: 'job_not_found' });
+      for (const role of ['estimator', 'fabricator', 'counter', 'customer'] as const) {
+        await t.http.post(`/api/jobs/${invite.id}/retry`).set(...bearer(demo[role])).expect(403);
+      }
+      await t.http.post(`/api/jobs/${invite.id}/retry`).expect(401);
+      expect(await countRows(t.dataSource, 'audit_events')).toBe(auditBefore);
+      const [row] = await t.dataSource.query('SELECT `state`, `attempts` FROM `jobs` WHERE `id` = ?', [invite.id]);
+      expect(row).toMatchObject({ state: 'dead', attempts: 3 });
+      await t.http.post('/api/jobs/not-a-uuid/retry').set(...bearer(demo.owner)).expect(400);
+      await t.http.post(`/api/jobs/${'0'.repeat(8)}-0000-4000-8000-000000000000/retry`).set(...bearer(demo.owner)).expect(404);
+    });
   });
 });

@@ -157,6 +157,7 @@ describe("tenant isolation of every object route, generated from the router", ()
       'work-orders:id': shop.workOrderId,
       'checks:checkKey': 'oil-pan-pickup.pickup-tabs',
       'work-order-photos:id': shop.workOrderPhotoId,
+      'jobs:id': shop.deadJobId,
     };
     return ids[`${segment.split('/').pop()}:${param}`];
   }

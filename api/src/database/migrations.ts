@@ -1,6 +1,7 @@
 import { CreateAuditEvents1796257768745 } from './migrations/1796257768745-create-audit-events';
 import { CreateJobs1796269160589 } from './migrations/1796269160589-create-jobs';
 import { WorkOrderCheckPhotos1796270000000 } from './migrations/1796270000000-work-order-check-photos';
+import { JobSubjects1796280000000 } from './migrations/1796280000000-job-subjects';
 import { CreateMeasurements1796240364406 } from './migrations/1796240364406-create-measurements';
 import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
@@ -49,4 +50,5 @@ export const MIGRATIONS = [
   CreateAuditEvents1796257768745,
   CreateJobs1796269160589,
   WorkOrderCheckPhotos1796270000000,
+  JobSubjects1796280000000,
 ];

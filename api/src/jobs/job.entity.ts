@@ -23,6 +23,10 @@ export class Job {
   @Column({ type: 'char', length: 36, nullable: true })
   shopId: string | null;
 
+  /** What the work is about, in words for the shop (e.g. "Quote Q-0003 (revision 1) e-mail to …"); kept when the payload is cleared. */
+  @Column({ type: 'varchar', length: 300, nullable: true })
+  subject: string | null;
+
   @Column({ type: 'varchar', length: 10 })
   state: JobState;
 

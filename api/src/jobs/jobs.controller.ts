@@ -1,10 +1,11 @@
-import { Controller, Get, Query } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { SHOP_ADMINS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
-import { JobPageResponseDto, ListJobsQueryDto } from './dto/job.dto';
+import { JobPageResponseDto, JobResponseDto, ListJobsQueryDto } from './dto/job.dto';
 import { mapJob } from './job.mapper';
 import { JobsService } from './jobs.service';
 
@@ -20,5 +21,17 @@ export class JobsController {
   async list(@CurrentUser() user: AuthUser, @Query() query: ListJobsQueryDto): Promise<JobPageResponseDto> {
     const page = await this.jobs.list(user, query);
     return { ...page, items: page.items.map(mapJob) };
+  }
+
+  @Post(':id/retry')
+  @HttpCode(200)
+  @Roles(...SHOP_ADMINS)
+  @ApiOkResponse({
+    type: JobResponseDto,
+    description:
+      'Tries a job that stopped after its last attempt again: queued, due now, attempts from zero, same idempotency key (the work still applies at most once). 409 when the job is not stopped.',
+  })
+  async retry(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<JobResponseDto> {
+    return mapJob(await this.jobs.retry(user, id));
   }
 }

@@ -5,7 +5,10 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager } from 'typeorm';
 import { Page, skipOf } from '../common/pagination/page-query.dto';
 import { EnvironmentVariables } from '../config/env.validation';
-import type { JobKind, JobState } from './job-kinds';
+import { AuditService } from '../audit/audit.service';
+import { AuthUser } from '../common/tenant/auth-user';
+import { describeJobKind, type JobKind, type JobState } from './job-kinds';
+import { JobErrors } from './jobs.errors';
 import { Job } from './job.entity';
 
 export interface NewJob {
@@ -13,6 +16,8 @@ export interface NewJob {
   /** Unique per kind: the same work enqueued twice (a retried request, a redelivered event) is stored once. */
   idempotencyKey: string;
   shopId: string | null;
+  /** What the work is about, in words for the shop's list of background work (e.g. "Quote Q-0003 e-mail to …"). */
+  subject?: string;
   payload: Record<string, unknown>;
 }
 
@@ -39,6 +44,7 @@ export class JobsService {
 
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
     config: ConfigService<EnvironmentVariables, true>,
   ) {
     this.maxAttempts = config.get('JOBS_MAX_ATTEMPTS', { infer: true });
@@ -51,16 +57,62 @@ export class JobsService {
   async enqueue(manager: EntityManager, job: NewJob): Promise<boolean> {
     const added = await insertOnce(
       manager,
-      'INSERT IGNORE INTO `jobs` (`id`, `kind`, `idempotencyKey`, `shopId`, `state`, `payload`, `attempts`, `maxAttempts`, `runAt`) ' +
-        "VALUES (?, ?, ?, ?, 'queued', ?, 0, ?, UTC_TIMESTAMP(3))",
-      [randomUUID(), job.kind, job.idempotencyKey.slice(0, 160), job.shopId, JSON.stringify(job.payload), this.maxAttempts],
+      'INSERT IGNORE INTO `jobs` (`id`, `kind`, `idempotencyKey`, `shopId`, `subject`, `state`, `payload`, `attempts`, `maxAttempts`, `runAt`) ' +
+        "VALUES (?, ?, ?, ?, ?, 'queued', ?, 0, ?, UTC_TIMESTAMP(3))",
+      [
+        randomUUID(),
+        job.kind,
+        job.idempotencyKey.slice(0, 160),
+        job.shopId,
+        job.subject ? job.subject.slice(0, 300) : null,
+        JSON.stringify(job.payload),
+        this.maxAttempts,
+      ],
     );
-    if (added) {
-      const runner = manager.queryRunner;
-      if (runner?.isTransactionActive) runner.data = { ...(runner.data ?? {}), [JOBS_ENQUEUED]: true };
-      else this.waker();
-    }
+    if (added) this.wakeAfterCommit(manager);
     return added;
+  }
+
+  /** Wakes this process's worker once the manager's transaction commits (at once without a transaction). */
+  private wakeAfterCommit(manager: EntityManager): void {
+    const runner = manager.queryRunner;
+    if (runner?.isTransactionActive) runner.data = { ...(runner.data ?? {}), [JOBS_ENQUEUED]: true };
+    else this.waker();
+  }
+
+  /**
+   * Puts a job that stopped after its last attempt (`dead`) back in the queue, due now, with its attempts counted
+   * from zero, in one transaction with its audit entry. Its idempotency key, payload and id stay, so the work is
+   * still applied at most once (a payment event already applied is skipped; a mail goes with the same Message-ID).
+   */
+  async retry(user: AuthUser, id: string): Promise<Job> {
+    return this.dataSource.transaction(async (manager) => {
+      const job = await manager
+        .getRepository(Job)
+        .createQueryBuilder('j')
+        .setLock('pessimistic_write')
+        .where('j.id = :id AND j.shopId = :shopId', { id, shopId: user.shopId })
+        .getOne();
+      if (!job) throw JobErrors.notFound();
+      if (job.state !== 'dead') throw JobErrors.notDead(job.state);
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'background-work',
+        action: 'job.retried',
+        subjectId: job.id,
+        summary: `Tried again: ${job.subject ?? describeJobKind(job.kind)} (stopped after ${job.attempts} attempts).`,
+        before: { state: job.state, attempts: job.attempts, lastError: job.lastError },
+        after: { state: 'queued', attempts: 0 },
+      });
+      await manager.query(
+        "UPDATE `jobs` SET `state` = 'queued', `attempts` = 0, `runAt` = UTC_TIMESTAMP(3), `leaseUntil` = NULL, `lockedBy` = NULL " +
+          "WHERE `id` = ? AND `shopId` = ? AND `state` = 'dead'",
+        [job.id, user.shopId],
+      );
+      this.wakeAfterCommit(manager);
+      return manager.getRepository(Job).findOneByOrFail({ id: job.id, shopId: user.shopId });
+    });
   }
 
   /** Called by the worker: run `wake` when work was enqueued (after its transaction commits). */

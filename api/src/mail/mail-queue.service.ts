@@ -34,6 +34,6 @@ export class MailQueue implements OnModuleInit {
 
   /** `idempotencyKey` names the cause (e.g. `invitation:<id>`): the same cause mails once. */
   enqueue(manager: EntityManager, idempotencyKey: string, shopId: string | null, mail: QueuedMail): Promise<boolean> {
-    return this.jobs.enqueue(manager, { kind: 'mail', idempotencyKey, shopId, payload: { ...mail } });
+    return this.jobs.enqueue(manager, { kind: 'mail', idempotencyKey, shopId, subject: `E-mail to ${mail.to}: “${mail.subject}”`, payload: { ...mail } });
   }
 }

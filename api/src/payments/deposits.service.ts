@@ -5,7 +5,7 @@ import { DataSource, EntityManager } from 'typeorm';
 import { JobHandlers } from '../jobs/job-handlers';
 import { JobsService } from '../jobs/jobs.service';
 import { AuditService } from '../audit/audit.service';
-import { QuoteActor, QuotesService } from '../quotes/quotes.service';
+import { quoteLabel, QuoteActor, QuotesService } from '../quotes/quotes.service';
 import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { DepositPaymentResponseDto } from './dto/deposit.dto';
 import { PaymentsService } from './payments.service';
@@ -40,12 +40,23 @@ export class DepositsService implements OnModuleInit {
   async receive(rawBody: Buffer | undefined, signature: string | undefined): Promise<boolean> {
     const event = this.payments.verify(rawBody, signature);
     if (await this.payments.wasApplied(event.id)) return false;
+    const metadata = typeof event.data?.object === 'object' ? (event.data.object as { metadata?: { shopId?: string; quoteId?: string } }).metadata : undefined;
+    const shopId = metadata?.shopId ?? null;
     return this.jobs.enqueue(this.dataSource.manager, {
       kind: 'payment.event',
       idempotencyKey: event.id,
-      shopId: typeof event.data?.object === 'object' ? ((event.data.object as { metadata?: { shopId?: string } }).metadata?.shopId ?? null) : null,
+      shopId,
+      subject: await this.eventSubject(event, shopId, metadata?.quoteId),
       payload: event as unknown as Record<string, unknown>,
     });
+  }
+
+  /** "Deposit payment for quote Q-0003: payment_intent.succeeded (evt_…)", for the shop's list of background work. */
+  private async eventSubject(event: Stripe.Event, shopId: string | null, quoteId: string | undefined): Promise<string> {
+    const rows: Array<{ number: number }> =
+      shopId && quoteId ? await this.dataSource.query('SELECT `number` FROM `quotes` WHERE `id` = ? AND `shopId` = ?', [quoteId, shopId]) : [];
+    const about = rows[0] ? `Deposit payment for quote ${quoteLabel(rows[0])}` : 'Payment provider event';
+    return `${about}: ${event.type} (${event.id})`;
   }
 
   /** Applies one provider event inside its job's transaction: the settlement, its audit entry, the notification and the work order commit with the job. */

@@ -332,10 +332,10 @@ export class QuotesService implements OnModuleInit {
           { status: 'awaiting-answer', sentRevision: latest.number, sentById: user.userId, answeredAt: null, declineReason: null, depositState: 'not-due' },
         );
         await this.projects.advanceStatus(user.shopId, view.project.id, 'quote-sent', manager);
-        await this.enqueueQuoteMail(manager, user.shopId, view.quote.id, latest.number, `${view.quote.id}:r${latest.number}`);
+        await this.enqueueQuoteMail(manager, view, latest.number, `${view.quote.id}:r${latest.number}`);
       });
     } else {
-      await this.enqueueQuoteMail(this.dataSource.manager, user.shopId, view.quote.id, latest.number, `${view.quote.id}:r${latest.number}:again:${randomUUID()}`);
+      await this.enqueueQuoteMail(this.dataSource.manager, view, latest.number, `${view.quote.id}:r${latest.number}:again:${randomUUID()}`);
     }
     return this.get(user, id);
   }
@@ -537,8 +537,10 @@ export class QuotesService implements OnModuleInit {
     return `${this.config.get('APP_URL', { infer: true })}/quote-answer/${token}`;
   }
 
-  private async enqueueQuoteMail(manager: EntityManager, shopId: string, quoteId: string, revision: number, idempotencyKey: string): Promise<void> {
-    await this.jobs.enqueue(manager, { kind: 'quote.mail', idempotencyKey, shopId, payload: { shopId, quoteId, revision } });
+  private async enqueueQuoteMail(manager: EntityManager, view: QuoteView, revision: number, idempotencyKey: string): Promise<void> {
+    const { shopId, id: quoteId } = view.quote;
+    const subject = `Quote ${quoteLabel(view.quote)} (revision ${revision}) e-mail to ${view.project.customer?.email ?? 'the customer'}`;
+    await this.jobs.enqueue(manager, { kind: 'quote.mail', idempotencyKey, shopId, subject, payload: { shopId, quoteId, revision } });
   }
 
   private async mailQuote(view: QuoteView, messageId: string): Promise<void> {

@@ -79,6 +79,7 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/dev/mail': OWNER,
   'GET /api/audit-events': OWNER,
   'GET /api/jobs': OWNER,
+  'POST /api/jobs/:id/retry': OWNER,
 
   'GET /api/customers': STAFF,
   'POST /api/customers': SALES,

@@ -121,6 +121,6 @@ export function isOneOf<T extends string>(list: readonly T[], value: unknown): v
   return typeof value === 'string' && (list as readonly string[]).includes(value);
 }
 
-/** What an audit event is about: money (quotes, payments, labor rates), stock, sheet sign-off, membership. */
-export const AUDIT_KINDS = ['money', 'stock', 'sign-off', 'membership'] as const;
+/** What an audit event is about: money (quotes, payments, labor rates), stock, sheet sign-off, membership, background work tried again. */
+export const AUDIT_KINDS = ['money', 'stock', 'sign-off', 'membership', 'background-work'] as const;
 export type AuditKind = (typeof AUDIT_KINDS)[number];

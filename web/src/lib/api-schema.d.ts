@@ -53,6 +53,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/jobs/{id}/retry": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["JobsController_retry"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/shops/current": {
         parameters: {
             query?: never;
@@ -1714,7 +1730,7 @@ export interface components {
         AuditEventResponseDto: {
             id: string;
             /** @enum {string} */
-            kind: "money" | "stock" | "sign-off" | "membership";
+            kind: "money" | "stock" | "sign-off" | "membership" | "background-work";
             /** @description What happened, e.g. quote.sent, stock.reserved, membership.role-changed */
             action: string;
             /** @description The member who made the change; null for the payment provider or a customer link */
@@ -1738,12 +1754,17 @@ export interface components {
             id: string;
             /** @enum {string} */
             kind: "mail" | "quote.mail" | "payment.event";
+            /** @description What the work is about, e.g. "Quote Q-0003 (revision 1) e-mail to …" */
+            subject: string;
             /** @enum {string} */
             state: "queued" | "running" | "done" | "dead";
+            /** @description Attempts made so far (counted from zero again when a stopped job is tried again) */
             attempts: number;
             maxAttempts: number;
-            /** @description Why the last attempt failed */
+            /** @description Why the last attempt failed, in words to act on */
             lastError: string | null;
+            /** @description The technical reason of the last failure, as reported (for whoever runs the server) */
+            lastErrorDetail: string | null;
             /**
              * Format: date-time
              * @description When it is (or was) due
@@ -1751,6 +1772,11 @@ export interface components {
             runAt: string;
             /** Format: date-time */
             createdAt: string;
+            /**
+             * Format: date-time
+             * @description Its last change (claimed, failed, done or tried again)
+             */
+            updatedAt: string;
             /** Format: date-time */
             doneAt: string | null;
         };
@@ -4268,7 +4294,7 @@ export interface operations {
                 /** @description Matches inside the main text fields. */
                 search?: string;
                 /** @description Only events of this kind */
-                kind?: "money" | "stock" | "sign-off" | "membership";
+                kind?: "money" | "stock" | "sign-off" | "membership" | "background-work";
             };
             header?: never;
             path?: never;
@@ -4313,6 +4339,28 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["JobPageResponseDto"];
+                };
+            };
+        };
+    };
+    JobsController_retry: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Tries a job that stopped after its last attempt again: queued, due now, attempts from zero, same idempotency key (the work still applies at most once). 409 when the job is not stopped. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["JobResponseDto"];
                 };
             };
         };

@@ -38,7 +38,7 @@ import { Role } from './role';
  * | GET template, measurement settings   | yes   | yes       | yes               | yes     | -          |
  * | PUT measurement-settings             | yes   | -         | -                 | -       | -          |
  * | GET /audit-events                    | yes   | -         | -                 | -       | -          |
- * | GET /jobs (background work)          | yes   | -         | -                 | -       | -          |
+ * | GET /jobs, retry a stopped job       | yes   | -         | -                 | -       | -          |
  */
 export const ALL_ROLES: Role[] = ['owner', 'estimator', 'fabricator', 'counter', 'customer'];
 export const SHOP_ADMINS: Role[] = ['owner'];

@@ -14,12 +14,16 @@ export class ListJobsQueryDto extends PageQueryDto {
 export class JobResponseDto {
   @ApiProperty() id: string;
   @ApiProperty({ enum: JOB_KINDS }) kind: JobKind;
+  @ApiProperty({ description: 'What the work is about, e.g. "Quote Q-0003 (revision 1) e-mail to …"' }) subject: string;
   @ApiProperty({ enum: JOB_STATES }) state: JobState;
-  @ApiProperty() attempts: number;
+  @ApiProperty({ description: 'Attempts made so far (counted from zero again when a stopped job is tried again)' }) attempts: number;
   @ApiProperty() maxAttempts: number;
-  @ApiProperty({ type: String, nullable: true, description: 'Why the last attempt failed' }) lastError: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Why the last attempt failed, in words to act on' }) lastError: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'The technical reason of the last failure, as reported (for whoever runs the server)' })
+  lastErrorDetail: string | null;
   @ApiProperty({ format: 'date-time', description: 'When it is (or was) due' }) runAt: string;
   @ApiProperty({ format: 'date-time' }) createdAt: string;
+  @ApiProperty({ format: 'date-time', description: 'Its last change (claimed, failed, done or tried again)' }) updatedAt: string;
   @ApiProperty({ type: String, format: 'date-time', nullable: true }) doneAt: string | null;
 }
 

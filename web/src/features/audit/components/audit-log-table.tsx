@@ -8,8 +8,8 @@ import { serverPagination } from '@/lib/table';
 import { useAuditEvents } from '../api/get-audit-events';
 import type { AuditEvent, AuditEventQuery, AuditKind } from '../types';
 
-const KIND_LABELS: Record<AuditKind, string> = { money: 'Money', stock: 'Stock', 'sign-off': 'Sign-off', membership: 'Members' };
-const KIND_COLOURS: Record<AuditKind, string> = { money: 'gold', stock: 'blue', 'sign-off': 'green', membership: 'purple' };
+const KIND_LABELS: Record<AuditKind, string> = { money: 'Money', stock: 'Stock', 'sign-off': 'Sign-off', membership: 'Members', 'background-work': 'Background work' };
+const KIND_COLOURS: Record<AuditKind, string> = { money: 'gold', stock: 'blue', 'sign-off': 'green', membership: 'purple', 'background-work': 'cyan' };
 
 function figures(values: Record<string, unknown> | null): string {
   if (!values) return '—';
@@ -55,7 +55,7 @@ export function AuditLogTable() {
     >
       <Typography.Paragraph type="secondary">
         Every change to money (quotes sent and answered, deposits settled, rates), stock (counts, reservations, receipts, imports),
-        measurement sign-offs and members, with who made it and the figures before and after.
+        measurement sign-offs, members and background work tried again, with who made it and the figures before and after.
       </Typography.Paragraph>
       {events.isError ? (
         <ErrorState error={events.error} onRetry={() => void events.refetch()} />
