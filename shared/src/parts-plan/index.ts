@@ -1,3 +1,4 @@
+export * from './attribute-words';
 export * from './part-categories';
 export * from './part-attributes';
 export * from './plan-types';

@@ -1,4 +1,5 @@
 import type { FabricationRemedy, PartRemedy } from '../types/finding';
+import { describeAttributeList } from './attribute-words';
 import { missedRequirements, type PartAttributes } from './part-attributes';
 import { fitSpecKindOf, PART_CATEGORY_LABELS } from './part-categories';
 import {
@@ -169,7 +170,7 @@ export function unaryRefusal(input: PlanInput, slot: PlanSlot | null, attributes
     if (Array.isArray(crank) && !crank.includes(engine.crankSignal)) return `cannot read the engine's ${engine.crankSignal} crank signal (reads ${crank.join(', ') || 'none'})`;
     if (Array.isArray(cam) && !cam.includes(engine.camSignal)) return `cannot read the engine's ${engine.camSignal} cam signal (reads ${cam.join(', ') || 'none'})`;
     const throttles = attributes.throttles;
-    if (Array.isArray(throttles) && throttles.length > 0 && !throttles.includes(engine.throttle)) return `does not drive an ${engine.throttle} throttle`;
+    if (Array.isArray(throttles) && throttles.length > 0 && !throttles.includes(engine.throttle)) return `does not drive ${engine.throttle === 'electronic' ? 'an' : 'a'} ${engine.throttle} throttle`;
     if (typeof attributes.maxCylinders === 'number' && attributes.maxCylinders < engine.cylinders) return `runs at most ${attributes.maxCylinders} cylinders, the engine has ${engine.cylinders}`;
   }
   if (slot === 'bellhousing-adapter') {
@@ -196,18 +197,15 @@ export function partMeetsRemedy(part: PlanPart, remedy: PartRemedy): boolean {
   return Object.keys(remedy.requires).length > 0 && missedRequirements(part.attributes, remedy.requires).length === 0;
 }
 
-/** What a part remedy asks for, as one readable line. */
+/** What a part remedy asks for, as one readable line: "Oil pan: sump at the rear, pickup bolted to the pump". */
 export function describeRemedyNeed(remedy: PartRemedy): string {
-  const figures = Object.entries(remedy.requires).map(([key, value]) => `${key} ${String(value)}`);
-  return `${PART_CATEGORY_LABELS[remedy.category]}${figures.length > 0 ? ` with ${figures.join(', ')}` : ''}`;
+  const needs = describeAttributeList(Object.entries(remedy.requires));
+  return `${PART_CATEGORY_LABELS[remedy.category]}${needs ? `: ${needs}` : ''}`;
 }
 
-/** Attribute values as `name value` pairs, lists joined with slashes. */
+/** The named attributes of a part in plain words ("sump at the rear, pickup bolted to the pump"). */
 export function describeAttributes(attributes: PartAttributes, names: string[]): string {
-  return names
-    .filter((name) => attributes[name] !== undefined)
-    .map((name) => `${name} ${Array.isArray(attributes[name]) ? (attributes[name] as string[]).join('/') : String(attributes[name])}`)
-    .join(', ');
+  return describeAttributeList(names.filter((name) => attributes[name] !== undefined).map((name) => [name, attributes[name]]));
 }
 
 function fittedWithEngineDipstick(input: PlanInput): Partial<Record<PlanSlot, FittedPart>> {

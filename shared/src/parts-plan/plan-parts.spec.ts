@@ -84,7 +84,7 @@ describe('planParts on the demo project', () => {
     expect(pan.rejected.find((r) => r.sku === 'TR-4480')?.reason).toMatch(/does not resolve/);
     const pickup = plan.picks.find((p) => p.sku === 'TR-4411')!;
     expect(pickup.broughtInBy.join(' ')).toMatch(/agrees with the chosen oil pan TR-4410/);
-    expect(pickup.rejected.find((r) => r.sku === 'BR-220')?.reason).toMatch(/does not agree.*block-bolted.*pump-bolted/);
+    expect(pickup.rejected.find((r) => r.sku === 'BR-220')?.reason).toMatch(/does not agree with Rear-sump swap pan \(TR-4410\): pickup bolted to the block against pickup bolted to the pump$/);
     // The stock pump agrees with the new pickup's inlet and is kept at no cost.
     expect(plan.kept.map((k) => k.slot)).toContain('oil-pump');
   });
@@ -131,7 +131,7 @@ describe('planParts on the demo project', () => {
     const plan = await planParts(input, solve);
     const throttle = plan.unresolved.find((u) => u.checkId === 'management.throttle');
     expect(throttle).toBeDefined();
-    expect(throttle!.catalogNeeds.join(' ')).toMatch(/Throttle pedal with type electronic/);
+    expect(throttle!.catalogNeeds.join(' ')).toMatch(/Throttle pedal: for an electronic throttle/);
   });
 
   it('names a shortfall whose only candidates break a rule (a pan with no pickup that agrees)', async () => {
@@ -143,7 +143,7 @@ describe('planParts on the demo project', () => {
     const plan = await planParts(input, solve);
     expect(plan.picks.map((p) => p.sku)).not.toContain('TR-4410');
     expect(plan.unresolved.map((u) => u.checkId)).toEqual(['envelope.sump-crossmember']);
-    expect(plan.unresolved[0].catalogNeeds[0]).toMatch(/Oil pan with sumpPosition rear/);
+    expect(plan.unresolved[0].catalogNeeds[0]).toMatch(/^Oil pan: sump at the rear\b/);
   });
 
   it('in-stock leaves out parts that are not on the shelf; least-fabrication trades money for fewer fabrication hours', async () => {
@@ -329,6 +329,42 @@ function bruteForce(input: PlanInput): { unresolved: number; fabTenths: number; 
   walk(0, []);
   return best;
 }
+
+/** Every sentence of a plan a person reads: explanations, reasons, what the catalog would need, notes. */
+function planSentences(plan: Awaited<ReturnType<typeof planParts>>): string[] {
+  return [
+    ...plan.picks.flatMap((p) => [p.explanation, ...p.broughtInBy, ...p.rejected.map((r) => r.reason)]),
+    ...plan.operations.map((o) => o.explanation),
+    ...plan.kept.map((k) => k.note),
+    ...plan.unresolved.flatMap((u) => [u.message, u.reason, ...u.catalogNeeds]),
+    ...plan.notes,
+  ];
+}
+
+describe('plan wording', () => {
+  // An attribute key such as `sumpPosition` or `minRatedKw`; `kW` is how people write the unit.
+  const internalNames = (text: string) => [...text.matchAll(/\b[a-z]+[A-Z][a-zA-Z]*\b/g)].map(([word]) => word).filter((word) => word !== 'kW');
+
+  it('names no internal attribute key, on the demo plan and on the plans that leave shortfalls open', async () => {
+    const noPedal = demoInput();
+    noPedal.parts = noPedal.parts.filter((p) => p.category !== 'throttle-pedal');
+    const noPickup = demoInput();
+    noPickup.parts = noPickup.parts.filter((p) => p.sku !== 'TR-4411');
+    noPickup.shortfalls = noPickup.shortfalls.map((s) => ({ ...s, remedies: s.remedies.filter((r) => r.kind === 'part') }));
+    for (const input of [demoInput(), noPedal, noPickup, demoInput('least-fabrication')]) {
+      const sentences = planSentences(await planParts(input, solve));
+      expect(sentences.length).toBeGreaterThan(5);
+      expect(sentences.flatMap((text) => internalNames(text).map((word) => `"${word}" in "${text}"`))).toEqual([]);
+    }
+  });
+
+  it('a pump too small for the target power is refused with both flows in litres per hour', async () => {
+    const plan = await planParts(demoInput(), solve);
+    const pump = plan.picks.find((p) => p.category === 'fuel-pump')!;
+    // 137.5 L/h from the fuel-flow check for the demo's target power (shared/src/fuel/fuel-flow.ts), rounded up
+    expect(pump.rejected.find((r) => r.sku === 'FP-120')?.reason).toMatch(/^delivers 120 L\/h, the target power needs 138 L\/h$/);
+  });
+});
 
 describe('planParts against brute-force enumeration', () => {
   it('finds the same optimum as trying every combination, on random small catalogs', async () => {

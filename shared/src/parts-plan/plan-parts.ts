@@ -1,3 +1,4 @@
+import { attributeNoun } from './attribute-words';
 import { PART_CATEGORY_LABELS } from './part-categories';
 import {
   AGREEMENT_RULES,
@@ -84,10 +85,22 @@ async function solveModel(model: PlanModel, input: PlanInput, solve: MipSolve): 
 
 const SLOT_WORD = (slot: PlanSlot | null, category: string): string => PART_CATEGORY_LABELS[(slot ?? category) as keyof typeof PART_CATEGORY_LABELS].toLowerCase();
 
+/** What an agreement compares, in words: "the sump position and the pickup mounting". */
+function agreementNouns(rule: (typeof AGREEMENT_RULES)[number]): string {
+  return [...new Set(rule.attributes.map(attributeNoun))].map((noun) => `the ${noun}`).join(' and ');
+}
+
 function columnLabel(column: PlanColumn): string {
   if (column.part) return `${column.part.description} (${column.part.sku})`;
   if (column.fitted) return `the fitted ${column.fitted.name}`;
   return column.operation?.operation ?? '';
+}
+
+/** The attributes where two parts differ, this one's against the other's: "pickup bolted to the block against pickup bolted to the pump". */
+function contrast(mine: PlanPart['attributes'], theirs: PlanPart['attributes'], names: string[]): string {
+  const differing = names.filter((name) => JSON.stringify(mine[name]) !== JSON.stringify(theirs[name]));
+  const shown = differing.length > 0 ? differing : names;
+  return `${describeAttributes(mine, shown)} against ${describeAttributes(theirs, shown)}`;
 }
 
 /** How a part disagrees with a chosen part of a slot it must agree with, or null when it agrees. */
@@ -98,14 +111,14 @@ function agreementReason(model: PlanModel, chosen: Set<number>, part: PlanPart, 
       const partner = chosenColumns.find((c) => c.slot === rule.a);
       const key = rule.keyB(part.attributes);
       if (partner && key !== null && !(rule.keysA(partner.attributes) ?? []).includes(key)) {
-        return `does not agree with ${columnLabel(partner)}: ${describeAttributes(part.attributes, rule.attributes)} against ${describeAttributes(partner.attributes, rule.attributes)}`;
+        return `does not agree with ${columnLabel(partner)}: ${contrast(part.attributes, partner.attributes, rule.attributes)}`;
       }
     }
     if (rule.a === slot) {
       const partner = chosenColumns.find((c) => c.slot === rule.b);
       const key = partner ? rule.keyB(partner.attributes) : null;
       if (partner && key !== null && !(rule.keysA(part.attributes) ?? []).includes(key)) {
-        return `does not agree with ${columnLabel(partner)} (${describeAttributes(part.attributes, rule.attributes)} against ${describeAttributes(partner.attributes, rule.attributes)}), and changing that as well costs more`;
+        return `does not agree with ${columnLabel(partner)} (${contrast(part.attributes, partner.attributes, rule.attributes)}), and changing that as well costs more`;
       }
     }
   }
@@ -233,8 +246,8 @@ function explainPlan(model: PlanModel, input: PlanInput, chosen: Set<number>): O
     unresolved.push({
       checkId: `plan.${ruleId}`,
       title: `${PART_CATEGORY_LABELS[rule.a]} and ${PART_CATEGORY_LABELS[rule.b].toLowerCase()} agreement`,
-      message: `No ${SLOT_WORD(rule.b, rule.b)} in the catalog agrees with the ${SLOT_WORD(rule.a, rule.a)} on ${rule.attributes.join(' and ')}.`,
-      catalogNeeds: [`${PART_CATEGORY_LABELS[rule.b]} matching the ${SLOT_WORD(rule.a, rule.a)} on ${rule.attributes.join(' and ')}`],
+      message: `No ${SLOT_WORD(rule.b, rule.b)} in the catalog agrees with the ${SLOT_WORD(rule.a, rule.a)} on ${agreementNouns(rule)}.`,
+      catalogNeeds: [`${PART_CATEGORY_LABELS[rule.b]} matching the ${SLOT_WORD(rule.a, rule.a)} on ${agreementNouns(rule)}`],
       reason: 'a rule between the fitted parts cannot be met from the catalog',
     });
   }
