@@ -1,8 +1,9 @@
 import { Alert, Button, Card, Descriptions, Empty, Grid, List, Select, Space, Table, Tag, Typography } from 'antd';
 import type { PlanObjective } from '@swapwright/shared';
-import { PLAN_OBJECTIVES } from '@swapwright/shared';
+import { PLAN_OBJECTIVES, renderText, textParts } from '@swapwright/shared';
 import { useState } from 'react';
 import { CheckStatusTag } from '@/components/check-status-tag';
+import { useUnits } from '@/hooks/use-units';
 import type { Schemas } from '@/lib/api-types';
 import { formatMoneyCents } from '@/lib/units';
 import { useBuildPartsPlan } from '../api/build-parts-plan';
@@ -17,17 +18,20 @@ const OBJECTIVE_LABELS: Record<PlanObjective, string> = {
 
 type Pick = Schemas['PlanPartPickDto'];
 
+/** A sentence the planner wrote, its figures in the person's unit system (shared's one formatting path). */
+type Say = (text: string) => string;
+
 /** Why a part is in the plan: what it resolves, which rule brought it in, and the cheaper parts not chosen. */
-function PickReasons({ pick, money }: { pick: Pick; money: (cents: number) => string }) {
+function PickReasons({ pick, money, say }: { pick: Pick; money: (cents: number) => string; say: Say }) {
   return (
     <div data-testid={`pick-${pick.sku}`}>
       {pick.resolves.length > 0 && <div>Resolves: {pick.resolves.map((r) => r.title).join(', ')}</div>}
       {pick.broughtInBy.map((why) => (
-        <div key={why}>Brought in: {why}</div>
+        <div key={why}>Brought in: {say(why)}</div>
       ))}
       {pick.rejected.length > 0 && (
         <Typography.Text type="secondary">
-          Cheaper, not chosen: {pick.rejected.map((r) => `${r.sku} (${money(r.totalCents)}) ${r.reason}`).join('; ')}
+          Cheaper, not chosen: {pick.rejected.map((r) => `${r.sku} (${money(r.totalCents)}) ${say(r.reason)}`).join('; ')}
         </Typography.Text>
       )}
     </div>
@@ -45,6 +49,8 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
   const latest = plans.data?.[0];
   const result = latest?.result;
   const money = (cents: number) => formatMoneyCents(cents, currency);
+  const units = useUnits();
+  const say: Say = (text) => renderText(textParts(text), units.system);
   const narrow = Grid.useBreakpoint().md === false;
   // The re-check fits the picks that carry a fit spec; what parts without one and operations resolve it cannot see.
   const unseen = new Set(
@@ -92,7 +98,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             <Descriptions.Item label="Fabrication">{result.totals.fabricationHours} h</Descriptions.Item>
           </Descriptions>
           {result.notes.map((note) => (
-            <Alert key={note} type="info" showIcon message={note} />
+            <Alert key={note} type="info" showIcon message={say(note)} />
           ))}
           {narrow ? (
             <List<Pick>
@@ -109,7 +115,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                     <Typography.Text>
                       {money(pick.priceCents)} · {pick.laborHours} h labor · {money(pick.totalCents)} with labor
                     </Typography.Text>
-                    <PickReasons pick={pick} money={money} />
+                    <PickReasons pick={pick} money={money} say={say} />
                   </Space>
                 </List.Item>
               )}
@@ -127,7 +133,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                 { title: 'Labor', dataIndex: 'laborHours', align: 'right', onCell: () => ({ style: { whiteSpace: 'nowrap' } }), render: (v: number) => `${v} h` },
                 // the cheaper parts not chosen are compared on this figure (part and its fitting labor)
                 { title: 'With labor', dataIndex: 'totalCents', align: 'right', render: (v: number) => money(v) },
-                { title: 'Why', key: 'why', render: (_, pick) => <PickReasons pick={pick} money={money} /> },
+                { title: 'Why', key: 'why', render: (_, pick) => <PickReasons pick={pick} money={money} say={say} /> },
               ]}
             />
           )}
@@ -136,7 +142,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
               size="small"
               header="Fabrication and labor operations"
               dataSource={result.operations}
-              renderItem={(op) => <List.Item>{op.explanation}</List.Item>}
+              renderItem={(op) => <List.Item>{say(op.explanation)}</List.Item>}
             />
           )}
           {result.kept.length > 0 && (
@@ -151,8 +157,8 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                 <ul style={{ margin: 0, paddingLeft: 18 }}>
                   {result.unresolved.map((u) => (
                     <li key={u.checkId}>
-                      <strong>{u.title}</strong>: {u.reason}
-                      {u.catalogNeeds.length > 0 && `. The catalog would need: ${u.catalogNeeds.join('; ')}`}
+                      <strong>{u.title}</strong>: {say(u.reason)}
+                      {u.catalogNeeds.length > 0 && `. The catalog would need: ${u.catalogNeeds.map(say).join('; ')}`}
                     </li>
                   ))}
                 </ul>

@@ -83,4 +83,39 @@ describe('PartsPlanCard', () => {
     const row = screen.getByTestId('pick-TR-4410').closest('tr') as HTMLElement;
     expect(within(row).getByText('$734.00')).toBeInTheDocument();
   });
+
+  it("shows the planner's figures in the person's units: inches, gal/h and psi in inch mode; mm, L/h and kPa in metric", async () => {
+    const withFigures: Schemas['PartsPlanResponseDto'] = structuredClone(plan);
+    withFigures.result.picks[0].rejected.push({ partId: 'p9', sku: 'FP-120', description: 'Inline pump', totalCents: 1_000, reason: 'delivers 120 L/h, the target power needs 138 L/h' });
+    withFigures.result.operations = [
+      { operation: 'Drop the crossmember 25.4 mm (1.00 in)', laborHours: 4, laborCents: 54_000, resolves: [], explanation: 'Drop the crossmember 25.4 mm (1.00 in): resolves nothing on its own, 4 h at the shop rate.' },
+    ];
+    withFigures.result.unresolved = [
+      { checkId: 'fuel.pressure', title: 'Fuel pressure', message: '', reason: 'no catalog part meets it', catalogNeeds: ['Fuel pressure regulator: rated for at least 58 psi, flow at least 140 L/h'] },
+    ];
+    const show = async () => {
+      const queryClient = createTestQueryClient();
+      queryClient.setQueryData(partsPlanKeys.project(PROJECT), [withFigures]);
+      const view = renderWithApp(<PartsPlanCard projectId={PROJECT} canBuild />, { queryClient });
+      await screen.findByTestId('pick-TR-4410');
+      const text = screen.getByTestId('parts-plan-card').textContent ?? '';
+      view.unmount();
+      return text;
+    };
+
+    // Source: NIST Handbook 44 Appendix C: 1 in = 25.4 mm, 1 US gal = 3.785411784 L, 1 psi = 6.894757 kPa
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const inches = await show();
+    expect(inches).toContain('Drop the crossmember 1.00 in: resolves nothing on its own');
+    expect(inches).toContain('FP-120 ($10.00) delivers 32 gal/h, the target power needs 36 gal/h');
+    expect(inches).toContain('Fuel pressure regulator: rated for at least 58 psi, flow at least 37 gal/h');
+    expect(inches).not.toMatch(/\bmm\b|L\/h|kPa/);
+
+    window.localStorage.setItem('swapwright.unitSystem', 'mm');
+    const metric = await show();
+    expect(metric).toContain('Drop the crossmember 25.4 mm: resolves nothing on its own');
+    expect(metric).toContain('FP-120 ($10.00) delivers 120 L/h, the target power needs 138 L/h');
+    expect(metric).toContain('Fuel pressure regulator: rated for at least 400 kPa, flow at least 140 L/h');
+    expect(metric).not.toMatch(/\bin\)|gal\/h|psi/);
+  });
 });
