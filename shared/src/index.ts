@@ -42,6 +42,7 @@ export * from './checks/cooling/hose-sides';
 export * from './checks/belt/serpentine-belt';
 export * from './checks/cam/cam-timing';
 export * from './fit-report/fit-report';
+export * from './fit-report/source-words';
 export * from './fit-window/fit-window';
 export * from './geometry/outline-gap';
 export * from './geometry/flatten-gap';

@@ -1,21 +1,64 @@
-import { renderFindingText, type CheckGroup, type Finding } from '@swapwright/shared';
-import { Flex, Table, Typography } from 'antd';
+import { customerSourceWords, renderFindingText, renderText, textParts, type CheckGroup, type Finding } from '@swapwright/shared';
+import { Collapse, Flex, Grid, Table, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import type { HTMLAttributes } from 'react';
 import { useUnits } from '@/hooks/use-units';
 import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
 import { matchResult, missingInputLabel } from '../lib/labels';
-import { groupLabels, groupOrder, worstStatus } from '../lib/status';
+import { compareWorstFirst, groupLabels, groupOrder, statusSeverity, worstStatus } from '../lib/status';
 import { CheckStatusTag } from '@/components/check-status-tag';
 
 export type ChecksTableProps = { findings: readonly Finding[] };
 
-/** Every check of the report, grouped by system, each group under its own heading. */
+/**
+ * Every check of the report, grouped by system, each group under its own heading. On a phone the checks that do not
+ * pass come first (worst group first) and the passing ones wait behind one expandable section; the printed report
+ * opens that section, so paper still carries every check.
+ */
 export function ChecksTable({ findings }: ChecksTableProps) {
+  const narrow = Grid.useBreakpoint().md === false;
+  if (!narrow) return <GroupedChecks findings={findings} idPrefix="fit-group" />;
+  const passing = findings.filter((f) => f.status === 'ok');
+  const open = findings.filter((f) => f.status !== 'ok');
+  return (
+    <Flex vertical gap={16}>
+      {open.length > 0 ? (
+        <GroupedChecks findings={open} idPrefix="fit-group" worstFirst />
+      ) : (
+        <Typography.Text data-testid="every-check-passes">Every check that could run passes.</Typography.Text>
+      )}
+      {passing.length > 0 && (
+        <Collapse
+          className="fit-passing-checks"
+          data-testid="passing-checks"
+          items={[
+            {
+              key: 'passing',
+              label: passing.length === 1 ? 'The 1 check that passes' : `All ${passing.length} checks that pass`,
+              forceRender: true,
+              children: <GroupedChecks findings={passing} idPrefix="fit-passing-group" />,
+            },
+          ]}
+        />
+      )}
+    </Flex>
+  );
+}
+
+type GroupedChecksProps = ChecksTableProps & {
+  /** Prefix of the group headings' ids (two lists on one page keep their ids apart). */
+  idPrefix: string;
+  /** Groups with the worst status first and, inside each, the worst check first. */
+  worstFirst?: boolean;
+};
+
+function GroupedChecks({ findings, idPrefix, worstFirst = false }: GroupedChecksProps) {
   const units = useUnits();
   const groups = new Map<CheckGroup, Finding[]>();
   for (const f of findings) groups.set(f.group, [...(groups.get(f.group) ?? []), f]);
-  const ordered = [...groups.keys()].sort((a, b) => groupOrder.indexOf(a) - groupOrder.indexOf(b));
+  if (worstFirst) for (const [group, rows] of groups) groups.set(group, [...rows].sort(compareWorstFirst));
+  const severity = (group: CheckGroup) => (worstFirst ? statusSeverity[worstStatus(groups.get(group) ?? [])] : 0);
+  const ordered = [...groups.keys()].sort((a, b) => severity(b) - severity(a) || groupOrder.indexOf(a) - groupOrder.indexOf(b));
 
   const columns: ColumnsType<Finding> = [
     { title: 'Status', key: 'status', width: 110, render: (_, f) => <CheckStatusTag status={f.status} /> },
@@ -54,7 +97,7 @@ export function ChecksTable({ findings }: ChecksTableProps) {
       responsive: ['xl'],
       render: (_, f) => (
         <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-          {f.thresholdSource || '—'}
+          {f.thresholdSource ? renderText(textParts(customerSourceWords(f.thresholdSource)), units.system) : '—'}
         </Typography.Text>
       ),
     },
@@ -65,9 +108,9 @@ export function ChecksTable({ findings }: ChecksTableProps) {
       {ordered.map((group) => {
         const rows = groups.get(group) ?? [];
         return (
-          <section key={group} aria-labelledby={`fit-group-${group}`}>
+          <section key={group} aria-labelledby={`${idPrefix}-${group}`}>
             <Flex align="center" gap={10} style={{ marginBottom: 6 }}>
-              <Typography.Title level={5} id={`fit-group-${group}`} style={{ margin: 0 }}>
+              <Typography.Title level={5} id={`${idPrefix}-${group}`} style={{ margin: 0 }}>
                 {groupLabels[group] ?? group}
               </Typography.Title>
               <CheckStatusTag status={worstStatus(rows)} />
