@@ -10,8 +10,8 @@ describe('threshold sources in customer words', () => {
     expect(customerSourceWords("The engine's rated fuel pressure; the regulator within a few psi of it (common practice, no published source).")).toBe(
       "The engine's rated fuel pressure; the regulator within a few psi of it (a shop rule of thumb, not a published standard).",
     );
-    expect(customerSourceWords('Critical speed from the shaft's size and length; keep shaft speed at or under 75 % of critical (common practice).')).toBe(
-      'Critical speed from the shaft's size and length; keep shaft speed at or under 75 % of critical (a shop rule of thumb).',
+    expect(customerSourceWords('Critical speed from the size and length of the shaft; keep shaft speed at or under 75 % of critical (common practice).')).toBe(
+      'Critical speed from the size and length of the shaft; keep shaft speed at or under 75 % of critical (a shop rule of thumb).',
     );
     expect(customerSourceWords('Published EFI sizing: injector flow = HP × BSFC / (cylinders × maximum duty).')).toBe(
       'Published EFI sizing: injector flow = HP × BSFC / (cylinders × maximum duty).',
