@@ -1,5 +1,8 @@
+import { randomUUID } from 'node:crypto';
+import { DEMO_SHOP_ID } from '@swapwright/seed-data';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
-import { expectVisible } from './support/expect-page';
+import { withE2eDatabase } from './support/database';
+import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 interface CapturedMail {
@@ -96,5 +99,46 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
     } finally {
       await invitee.close();
     }
+  });
+
+  it('finds the invitation e-mail done under Background work, and tries a stopped e-mail again until it is sent', async () => {
+    const { page } = owner;
+    // An e-mail that ran out of attempts while the mail relay was down (its eight attempts take hours; the row is written as they leave it).
+    const jobId = randomUUID();
+    const to = `parts.desk.${Date.now()}@ironbark.test`;
+    await withE2eDatabase((db) =>
+      db.query(
+        'INSERT INTO `jobs` (`id`, `kind`, `idempotencyKey`, `shopId`, `subject`, `state`, `payload`, `attempts`, `maxAttempts`, `runAt`, `lastError`) ' +
+          "VALUES (?, 'mail', ?, ?, ?, 'dead', ?, 8, 8, UTC_TIMESTAMP(3), 'connect ECONNREFUSED 127.0.0.1:2525')",
+        [jobId, `e2e-stopped:${jobId}`, DEMO_SHOP_ID, `E-mail to ${to}: “Order list for the week”`, JSON.stringify({ to, subject: 'Order list for the week', text: 'Gaskets, pan bolts, pickup tube.' })],
+      ),
+    );
+
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Background work' }).click();
+    const list = page.getByRole('list', { name: 'Background work' });
+    await expectVisible(list.getByTestId('job-row').filter({ hasText: 'invites you to Swapwright' }).first());
+    await expectVisible(page.getByText('1 job stopped after its last attempt.'));
+    await page.getByText(/^Stopped \(1\)$/).click();
+    await page.waitForURL(/state=dead/);
+    const row = list.getByTestId('job-row').filter({ hasText: to });
+    await expectVisible(row.getByText(/The mail server could not be reached/));
+    await expectFitsWidth(page);
+    await saveScreenshot(page, 'owner-background-work-stopped');
+
+    await row.getByRole('button', { name: /^Try again/ }).click();
+    await expectVisible(page.getByText(/goes back in the queue now with 8 fresh attempts/));
+    const retried = page.waitForResponse((r) => r.url().endsWith(`/api/jobs/${jobId}/retry`) && r.request().method() === 'POST');
+    await page.locator('.ant-popconfirm').getByRole('button', { name: 'Try again' }).click();
+    expect((await retried).status()).toBe(200);
+    await expectVisible(page.getByText('Queued again'));
+
+    // The worker sends it a moment later; the list refreshes by itself while work is waiting.
+    await page.getByText(/^All$/).click();
+    const done = list.getByTestId('job-row').filter({ hasText: to });
+    await expectText(done, /Done/);
+    await expectText(done, /Attempt 1 of 8/);
+    const mails = (await (await page.request.get(process.env.MAIL_FAKE_URL!)).json()) as CapturedMail[];
+    expect(mails.filter((mail) => mail.to.includes(to))).toHaveLength(1);
+    await saveScreenshot(page, 'owner-background-work');
   });
 });

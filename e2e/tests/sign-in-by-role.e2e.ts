@@ -3,7 +3,7 @@ import { expectVisible } from './support/expect-page';
 import { mainNavigationLabels, signInAs, type DemoRole } from './support/session';
 
 const EXPECTED_NAVIGATION: Record<DemoRole, string[]> = {
-  owner: ['Home', 'Projects', 'Customers', 'Work orders', 'Parts counter', 'Catalog', 'Members', 'Shop settings'],
+  owner: ['Home', 'Projects', 'Customers', 'Work orders', 'Parts counter', 'Catalog', 'Members', 'Shop settings', 'Background work'],
   estimator: ['Home', 'Projects', 'Customers', 'Catalog'],
   fabricator: ['Home', 'Projects', 'Work orders', 'Catalog'],
   counter: ['Home', 'Parts counter', 'Catalog'],

@@ -30,6 +30,7 @@ const navDefinitions: readonly NavDefinition[] = [
   { key: 'catalog', label: 'Catalog', to: paths.catalog, match: [paths.catalog], roles: ['owner', 'estimator', 'fabricator', 'counter'], group: 'work' },
   { key: 'members', label: 'Members', to: paths.members, match: [paths.members], roles: ['owner'], group: 'shop' },
   { key: 'shop-settings', label: 'Shop settings', to: paths.shopSettings, match: [paths.shopSettings], roles: ['owner'], group: 'shop' },
+  { key: 'background-work', label: 'Background work', to: paths.backgroundWork, match: [paths.backgroundWork], roles: ['owner'], group: 'shop' },
 ];
 
 export function navItemsFor(role: Role): NavItem[] {
@@ -69,6 +70,7 @@ export const sectionRoles = {
   catalog: ['owner', 'estimator', 'fabricator', 'counter'],
   members: ['owner'],
   shopSettings: ['owner'],
+  backgroundWork: ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export const canEditCustomers = (role: Role): boolean => role === 'owner' || role === 'estimator';

@@ -26,6 +26,7 @@ const MyProjectsPage = lazyNamed(() => import('./routes/projects/my-projects-pag
 const CustomersPage = lazyNamed(() => import('./routes/customers/customers-page'), 'CustomersPage');
 const MembersPage = lazyNamed(() => import('./routes/members/members-page'), 'MembersPage');
 const ShopSettingsPage = lazyNamed(() => import('./routes/settings/shop-settings-page'), 'ShopSettingsPage');
+const BackgroundWorkPage = lazyNamed(() => import('./routes/settings/background-work-page'), 'BackgroundWorkPage');
 const WorkOrdersPage = lazyNamed(() => import('./routes/work-orders/work-orders-page'), 'WorkOrdersPage');
 const WorkOrderPage = lazyNamed(() => import('./routes/work-orders/work-order-page'), 'WorkOrderPage');
 const PartsCounterPage = lazyNamed(() => import('./routes/counter/parts-counter-page'), 'PartsCounterPage');
@@ -121,6 +122,7 @@ export const routes: RouteObject[] = [
           section(paths.catalog, sectionRoles.catalog, 'Catalog', CatalogPage),
           section(paths.members, sectionRoles.members, 'Members', MembersPage),
           section(paths.shopSettings, sectionRoles.shopSettings, 'Shop settings', ShopSettingsPage),
+          section(paths.backgroundWork, sectionRoles.backgroundWork, 'Background work', BackgroundWorkPage),
           { path: '*', element: <NotFoundPage /> },
         ],
       },

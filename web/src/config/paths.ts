@@ -20,6 +20,7 @@ export const paths = {
   catalog: '/catalog',
   members: '/members',
   shopSettings: '/settings/shop',
+  backgroundWork: '/settings/background-work',
 } as const;
 
 export type AppPath = (typeof paths)[keyof typeof paths];

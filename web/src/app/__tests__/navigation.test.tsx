@@ -6,7 +6,7 @@ import { activeNavKey, navItemsFor } from '../navigation';
 import { AppNav } from '../routes/app/app-nav';
 
 const expected: Record<Role, string[]> = {
-  owner: ['Home', 'Projects', 'Customers', 'Work orders', 'Parts counter', 'Catalog', 'Members', 'Shop settings'],
+  owner: ['Home', 'Projects', 'Customers', 'Work orders', 'Parts counter', 'Catalog', 'Members', 'Shop settings', 'Background work'],
   // the catalog is readable by estimators and fabricators (they pick parts and read specs)
   estimator: ['Home', 'Projects', 'Customers', 'Catalog'],
   fabricator: ['Home', 'Projects', 'Work orders', 'Catalog'],
@@ -30,11 +30,12 @@ describe('role navigation', () => {
     expect(links).toEqual(names);
   });
 
-  it('only the owner gets Members and Shop settings', () => {
+  it('only the owner gets Members, Shop settings and Background work', () => {
     for (const role of ['estimator', 'fabricator', 'counter', 'customer'] as Role[]) {
       const labels = navItemsFor(role).map((i) => i.label);
       expect(labels).not.toContain('Members');
       expect(labels).not.toContain('Shop settings');
+      expect(labels).not.toContain('Background work');
     }
   });
 

@@ -1,5 +1,6 @@
-import { Card, Segmented } from 'antd';
+import { Card } from 'antd';
 import { useSearchParams } from 'react-router-dom';
+import { FilterStrip } from '@/components/filter-strip';
 import { PageHeader } from '@/components/page-header';
 import { toWorkOrder } from '@/config/paths';
 import { WorkOrdersTable } from '@/features/work-orders/components/work-orders-table';
@@ -19,14 +20,12 @@ export function WorkOrdersPage() {
     <>
       <PageHeader title="Work orders" subtitle="Operations in build order, tightening figures and the checks the bay records." />
       <Card>
-        <div style={{ overflowX: 'auto', marginBottom: 12 }}>
-          <Segmented
-            aria-label="Work order state"
-            options={FILTERS}
-            value={state ?? 'all'}
-            onChange={(value) => setParams(value === 'all' ? {} : { state: String(value) })}
-          />
-        </div>
+        <FilterStrip
+          label="Work order state"
+          options={FILTERS}
+          value={state ?? 'all'}
+          onChange={(value) => setParams(value === 'all' ? {} : { state: value })}
+        />
         <WorkOrdersTable state={state} toWorkOrder={toWorkOrder} />
       </Card>
     </>

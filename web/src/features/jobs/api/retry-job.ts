@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { Job } from '../types';
+import { jobKeys } from './job-keys';
+
+/** Puts a stopped job back in the queue (owner only); the API answers 409 when it is not stopped. */
+export async function retryJob(id: string): Promise<Job> {
+  const { data } = await apiClient.post<Job>(`/jobs/${encodeURIComponent(id)}/retry`);
+  return data;
+}
+
+export function useRetryJob({ onSuccess }: { onSuccess?: (job: Job) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: retryJob,
+    onSuccess: (job) => onSuccess?.(job),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: jobKeys.lists() }),
+  });
+}
