@@ -5,8 +5,12 @@
  * - the fit engine and the parts planner: the shared package's own benches, run as they are, their medians collected;
  * - the API: requests per second and p95 latency of the what-if route, a paged list and a stored fit-report run, each
  *   beside GET /api/health measured right before it in the same run (autocannon, 50 connections), as ratios;
+ * - the background queue: enqueue-to-done time of a plain e-mail, a quote's e-mail and a payment event, one at a time
+ *   through the API and its fakes (`queue-latency.ts`, BENCH_QUEUE_SAMPLES each, default 10);
  * - the web app: JavaScript of the sign-in page's first load as transferred, and first contentful paint, in headless
  *   Chromium.
+ *
+ * BENCH_ONLY=queue (a comma list of fit, parts, api, queue, web) measures only those parts.
  */
 import autocannon from 'autocannon';
 import { execFileSync } from 'node:child_process';
@@ -14,12 +18,16 @@ import os from 'node:os';
 import { join } from 'node:path';
 import { DEMO_PASSWORD, DEMO_PROJECT_IDS, DEMO_SIGN_INS } from '@swapwright/seed-data';
 import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
+import { measureQueueLatency } from './queue-latency';
 import { measureFirstLoads } from './web-load';
 
 const ROOT = join(__dirname, '..', '..');
 const BASE = process.env.BENCH_BASE_URL ?? 'http://127.0.0.1:3000';
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
+const QUEUE_SAMPLES = Number(process.env.BENCH_QUEUE_SAMPLES ?? 10);
+const ONLY = process.env.BENCH_ONLY ? new Set(process.env.BENCH_ONLY.split(',').map((part) => part.trim())) : null;
+const runs = (part: 'fit' | 'parts' | 'api' | 'queue' | 'web') => !ONLY || ONLY.has(part);
 
 interface Row {
   area: string;
@@ -134,44 +142,69 @@ function printTable(): void {
 }
 
 async function main(): Promise<void> {
-  console.error('Fit engine…');
-  sharedBench('fit-engine.bench.ts', 'fit engine', [
-    [/^runFitCheck, demo spec \(/, 1],
-    [/^fit window, 300 mm.*rear-sump/, 30],
-    [/^placement proposal/, 150],
-  ]);
-  console.error('Parts planner…');
-  sharedBench('parts-plan.bench.ts', 'parts planner', [[/10,000 parts/, 300]]);
+  if (runs('fit')) {
+    console.error('Fit engine…');
+    sharedBench('fit-engine.bench.ts', 'fit engine', [
+      [/^runFitCheck, demo spec \(/, 1],
+      [/^fit window, 300 mm.*rear-sump/, 30],
+      [/^placement proposal/, 150],
+    ]);
+  }
+  if (runs('parts')) {
+    console.error('Parts planner…');
+    sharedBench('parts-plan.bench.ts', 'parts planner', [[/10,000 parts/, 300]]);
+  }
 
-  console.error(`API at ${BASE}…`);
-  const estimator = await signIn('estimator');
-  await apiRoute('POST /api/fit-reports/what-if', '/api/fit-reports/what-if', {
-    method: 'POST',
-    body: JSON.stringify({ spec: DEMO_FIT_SPEC }),
-    token: estimator,
-  }, { ratio: 0.4, p95Ms: 25 });
-  await apiRoute('GET /api/projects (page of 20)', '/api/projects?page=1&pageSize=20', { token: estimator });
-  await apiRoute('POST /api/projects/:id/fit-reports (stored run)', `/api/projects/${DEMO_PROJECT_IDS.ridgeback}/fit-reports`, {
-    method: 'POST',
-    token: estimator,
-  });
+  if (runs('api')) {
+    console.error(`API at ${BASE}…`);
+    const estimator = await signIn('estimator');
+    await apiRoute('POST /api/fit-reports/what-if', '/api/fit-reports/what-if', {
+      method: 'POST',
+      body: JSON.stringify({ spec: DEMO_FIT_SPEC }),
+      token: estimator,
+    }, { ratio: 0.4, p95Ms: 25 });
+    await apiRoute('GET /api/projects (page of 20)', '/api/projects?page=1&pageSize=20', { token: estimator });
+    await apiRoute('POST /api/projects/:id/fit-reports (stored run)', `/api/projects/${DEMO_PROJECT_IDS.ridgeback}/fit-reports`, {
+      method: 'POST',
+      token: estimator,
+    });
+  }
 
-  console.error('Web first load…');
-  const web = await measureFirstLoads(`${BASE}/sign-in`, 5);
-  add({
-    area: 'web (sign-in, cold)',
-    measure: `initial JavaScript as transferred (${web.scripts} files)`,
-    value: `${(web.javascriptTransferredBytes / 1000).toFixed(1)} KB (${(web.javascriptDecodedBytes / 1000).toFixed(1)} KB decoded)`,
-    target: '< 250 KB',
-    meets: web.javascriptTransferredBytes < 250_000,
-  });
-  add({
-    area: 'web (sign-in, cold)',
-    measure: 'first contentful paint (headless Chromium, loopback)',
-    value: `${web.firstContentfulPaintMs.toFixed(0)} ms (a bare one-line page, same browser and run: ${web.bareFirstContentfulPaintMs.toFixed(0)} ms)`,
-    target: '< 500 ms',
-    meets: web.firstContentfulPaintMs < 500,
-  });
+  if (runs('queue')) {
+    console.error(`Background queue (${QUEUE_SAMPLES} of each, one at a time)…`);
+    const tokens = { owner: await signIn('owner'), estimator: await signIn('estimator'), customer: await signIn('customer') };
+    const startedAt = Date.now();
+    const latencies = await measureQueueLatency(BASE, tokens, QUEUE_SAMPLES);
+    console.error(`  (the queue part took ${((Date.now() - startedAt) / 1000).toFixed(1)} s)`);
+    for (const { what, samples } of latencies) {
+      const sorted = [...samples].sort((a, b) => a - b);
+      const median = sorted.length % 2 ? sorted[(sorted.length - 1) / 2] : (sorted[sorted.length / 2 - 1] + sorted[sorted.length / 2]) / 2;
+      add({
+        area: 'background queue',
+        measure: what,
+        value: `median ${median.toFixed(0)} ms (min ${sorted[0].toFixed(0)}, max ${sorted[sorted.length - 1].toFixed(0)}; ${sorted.length} jobs)`,
+      });
+    }
+  }
+
+  if (runs('web')) {
+    console.error('Web first load…');
+    const web = await measureFirstLoads(`${BASE}/sign-in`, 5);
+    add({
+      area: 'web (sign-in, cold)',
+      measure: `initial JavaScript as transferred (${web.scripts} files)`,
+      value: `${(web.javascriptTransferredBytes / 1000).toFixed(1)} KB (${(web.javascriptDecodedBytes / 1000).toFixed(1)} KB decoded)`,
+      target: '< 250 KB',
+      meets: web.javascriptTransferredBytes < 250_000,
+    });
+    add({
+      area: 'web (sign-in, cold)',
+      measure: 'first contentful paint (headless Chromium, loopback)',
+      value: `${web.firstContentfulPaintMs.toFixed(0)} ms (a bare one-line page, same browser and run: ${web.bareFirstContentfulPaintMs.toFixed(0)} ms)`,
+      target: '< 500 ms',
+      meets: web.firstContentfulPaintMs < 500,
+    });
+  }
   printTable();
 }
 
