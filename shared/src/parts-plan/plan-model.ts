@@ -1,5 +1,5 @@
 import type { FabricationRemedy, PartRemedy } from '../types/finding';
-import { describeAttributeList } from './attribute-words';
+import { describeAttribute, describeAttributeList } from './attribute-words';
 import { missedRequirements, type PartAttributes } from './part-attributes';
 import { fitSpecKindOf, PART_CATEGORY_LABELS } from './part-categories';
 import {
@@ -210,7 +210,7 @@ export function describeAttributes(attributes: PartAttributes, names: string[]):
 
 function fittedWithEngineDipstick(input: PlanInput): Partial<Record<PlanSlot, FittedPart>> {
   const fitted = { ...input.fitted };
-  if (!fitted.dipstick) fitted.dipstick = { name: `the engine's ${input.engine.dipstickLocation} dipstick`, attributes: { location: input.engine.dipstickLocation } };
+  if (!fitted.dipstick) fitted.dipstick = { name: `the engine's ${describeAttribute('location', input.engine.dipstickLocation)}`, attributes: { location: input.engine.dipstickLocation } };
   return fitted;
 }
 

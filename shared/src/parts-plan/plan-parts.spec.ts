@@ -335,7 +335,7 @@ function planSentences(plan: Awaited<ReturnType<typeof planParts>>): string[] {
   return [
     ...plan.picks.flatMap((p) => [p.explanation, ...p.broughtInBy, ...p.rejected.map((r) => r.reason)]),
     ...plan.operations.map((o) => o.explanation),
-    ...plan.kept.map((k) => k.note),
+    ...plan.kept.flatMap((k) => [k.name, k.note]),
     ...plan.unresolved.flatMap((u) => [u.message, u.reason, ...u.catalogNeeds]),
     ...plan.notes,
   ];
@@ -355,6 +355,8 @@ describe('plan wording', () => {
       const sentences = planSentences(await planParts(input, solve));
       expect(sentences.length).toBeGreaterThan(5);
       expect(sentences.flatMap((text) => internalNames(text).map((word) => `"${word}" in "${text}"`))).toEqual([]);
+      // value codes of the closed lists read as words too: "the engine's dipstick on the left side of the block"
+      expect(sentences.filter((text) => /\b(block|pan)-(left|right)\b|\b(pump|block)-bolted\b/.test(text))).toEqual([]);
     }
   });
 

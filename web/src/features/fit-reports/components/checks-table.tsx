@@ -7,6 +7,7 @@ import { formatFigure, formatMargin, formatRequirement } from '../lib/figures';
 import { matchResult, missingInputLabel } from '../lib/labels';
 import { compareWorstFirst, groupLabels, groupOrder, statusSeverity, worstStatus } from '../lib/status';
 import { CheckStatusTag } from '@/components/check-status-tag';
+import './fit-print.css';
 
 export type ChecksTableProps = { findings: readonly Finding[] };
 
@@ -54,6 +55,8 @@ type GroupedChecksProps = ChecksTableProps & {
 
 function GroupedChecks({ findings, idPrefix, worstFirst = false }: GroupedChecksProps) {
   const units = useUnits();
+  // what the limit rests on, in customer words ("Shop rule of thumb, not a published standard: …") and the person's units
+  const sourceText = (f: Finding) => renderText(textParts(customerSourceWords(f.thresholdSource)), units.system);
   const groups = new Map<CheckGroup, Finding[]>();
   for (const f of findings) groups.set(f.group, [...(groups.get(f.group) ?? []), f]);
   if (worstFirst) for (const [group, rows] of groups) groups.set(group, [...rows].sort(compareWorstFirst));
@@ -72,6 +75,12 @@ function GroupedChecks({ findings, idPrefix, worstFirst = false }: GroupedChecks
             {f.status === 'unknown' && f.missing.length ? `Missing: ${f.missing.map(missingInputLabel).join(', ')}` : renderFindingText(f, units.system)}
           </Typography.Paragraph>
           {/* On a phone the figure columns give way to this line (see global.css), so the sentence keeps its width. */}
+          {/* On paper the limit's basis prints under the sentence: the page is narrower than the column needs. */}
+          {f.thresholdSource && (
+            <Typography.Text className="fit-check-source-print" type="secondary" style={{ fontSize: 12 }}>
+              Limit based on: {sourceText(f)}
+            </Typography.Text>
+          )}
           {f.limit !== 'match' && f.measured !== null && (
             <Typography.Text className="fit-check-figures-phone" style={{ fontSize: 13 }}>
               Found {formatFigure(f.measured, f.unit, units)} · margin {formatMargin(f, units)}
@@ -97,7 +106,7 @@ function GroupedChecks({ findings, idPrefix, worstFirst = false }: GroupedChecks
       responsive: ['xl'],
       render: (_, f) => (
         <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-          {f.thresholdSource ? renderText(textParts(customerSourceWords(f.thresholdSource)), units.system) : '—'}
+          {f.thresholdSource ? sourceText(f) : '—'}
         </Typography.Text>
       ),
     },
