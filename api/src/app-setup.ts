@@ -2,6 +2,7 @@ import { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { correlationIdMiddleware } from './common/middleware/correlation-id.middleware';
 import { createJsonBodyMiddleware } from './common/middleware/json-body.middleware';
+import { noStoreMiddleware } from './common/middleware/no-store.middleware';
 import { createSecurityHeadersMiddleware } from './common/middleware/security-headers.middleware';
 import { compileMarkedValidators } from './common/validation/compiled-body-validator';
 
@@ -14,6 +15,7 @@ export function configureApp(app: INestApplication): INestApplication {
   (app.getHttpAdapter().getInstance() as { set(name: string, value: unknown): void }).set('etag', false);
   compileMarkedValidators();
   app.use(correlationIdMiddleware);
+  app.use(`/${API_PREFIX}`, noStoreMiddleware);
   app.use(createSecurityHeadersMiddleware());
   app.use(createJsonBodyMiddleware());
   app.setGlobalPrefix(API_PREFIX);

@@ -1,7 +1,7 @@
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { AuditModule } from './audit/audit.module';
-import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
+import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
@@ -10,7 +10,6 @@ import { CatalogModule } from './catalog/catalog.module';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { RolesGuard } from './common/guards/roles.guard';
-import { NoCacheInterceptor } from './common/interceptors/no-cache.interceptor';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { AppConfigService } from './config/app-config';
 import { validateEnv } from './config/env.validation';
@@ -90,7 +89,6 @@ import { WorkOrdersModule } from './work-orders/work-orders.module';
     // Order matters: authentication first, then the role check.
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
-    { provide: APP_INTERCEPTOR, useClass: NoCacheInterceptor },
   ],
 })
 export class AppModule {}

@@ -9,7 +9,7 @@ const PRELOADED_FONTS = [/source-sans-3-latin-400-normal-[\w-]+\.woff2$/, /sourc
  *   blocks the first paint (the content security policy allows inline style: antd writes its CSS-in-JS that way);
  * - the two Source Sans 3 woff2 files are preloaded; their @font-face rules say `font-display: swap`, so text
  *   paints at once in the fallback font and takes Source Sans 3 when it arrives.
- * Scripts are untouched: module scripts never block the first paint.
+ * Scripts are untouched here; the entry starts the app only after the shell's first frame (see src/main.tsx).
  */
 export function firstPaintPlugin(): Plugin {
   return {
