@@ -4,6 +4,7 @@ import { paths } from '@/config/paths';
 import { PageHeader } from '@/components/page-header';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { RecentCustomers } from '@/features/customers/components/recent-customers';
+import { StoppedWorkNotice } from '@/features/jobs/components/stopped-work-notice';
 import { ProjectsPanel } from '@/features/projects/components/projects-panel';
 import { greeting } from './greeting';
 
@@ -22,6 +23,7 @@ export function OwnerHome() {
           </Button>
         }
       />
+      <StoppedWorkNotice to={`${paths.backgroundWork}?state=dead`} />
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>
           <Card title="Needs a quote" extra={<Link to={`${paths.projects}?status=parts-planned`}>All</Link>}>
@@ -61,6 +63,9 @@ export function OwnerHome() {
               </Typography.Text>
               <Typography.Text>
                 <Link to={paths.members}>Members</Link> — invite estimators, fabricators, the parts counter and customers.
+              </Typography.Text>
+              <Typography.Text>
+                <Link to={paths.backgroundWork}>Background work</Link> — the e-mails and payment events the server sends and applies, and any that stopped.
               </Typography.Text>
             </Flex>
           </Card>
