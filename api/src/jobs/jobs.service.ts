@@ -127,13 +127,16 @@ export class JobsService {
   async list(user: { shopId: string }, query: { state?: JobState; page: number; pageSize: number }): Promise<Page<Job> & { counts: Record<JobState, number> }> {
     const builder = this.dataSource.getRepository(Job).createQueryBuilder('j').where('j.shopId = :shopId', { shopId: user.shopId });
     if (query.state) builder.andWhere('j.state = :state', { state: query.state });
-    const [items, total] = await builder.orderBy('j.createdAt', 'DESC').addOrderBy('j.id', 'ASC').skip(skipOf(query)).take(query.pageSize).getManyAndCount();
-    const rows: Array<{ state: JobState; n: string | number }> = await this.dataSource.query(
-      'SELECT `state`, COUNT(*) AS n FROM `jobs` WHERE `shopId` = ? GROUP BY `state`',
-      [user.shopId],
-    );
+    const [items, rows] = await Promise.all([
+      builder.orderBy('j.createdAt', 'DESC').addOrderBy('j.id', 'ASC').skip(skipOf(query)).take(query.pageSize).getMany(),
+      this.dataSource.query('SELECT `state`, COUNT(*) AS n FROM `jobs` WHERE `shopId` = ? GROUP BY `state`', [user.shopId]) as Promise<
+        Array<{ state: JobState; n: string | number }>
+      >,
+    ]);
     const counts: Record<JobState, number> = { queued: 0, running: 0, done: 0, dead: 0 };
     for (const row of rows) counts[row.state] = Number(row.n);
+    // The page's total is one of the counts (or their sum), so no second COUNT over the same rows.
+    const total = query.state ? counts[query.state] : Object.values(counts).reduce((sum, n) => sum + n, 0);
     return { items, total, page: query.page, pageSize: query.pageSize, counts };
   }
 }
