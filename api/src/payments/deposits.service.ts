@@ -5,7 +5,7 @@ import { DataSource, EntityManager } from 'typeorm';
 import { JobHandlers } from '../jobs/job-handlers';
 import { JobsService } from '../jobs/jobs.service';
 import { AuditService } from '../audit/audit.service';
-import { quoteLabel, QuoteActor, QuotesService } from '../quotes/quotes.service';
+import { QuoteActor, QuotesService } from '../quotes/quotes.service';
 import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { DepositPaymentResponseDto } from './dto/deposit.dto';
 import { PaymentsService } from './payments.service';
@@ -53,9 +53,8 @@ export class DepositsService implements OnModuleInit {
 
   /** "Deposit payment for quote Q-0003: payment_intent.succeeded (evt_…)", for the shop's list of background work. */
   private async eventSubject(event: Stripe.Event, shopId: string | null, quoteId: string | undefined): Promise<string> {
-    const rows: Array<{ number: number }> =
-      shopId && quoteId ? await this.dataSource.query('SELECT `number` FROM `quotes` WHERE `id` = ? AND `shopId` = ?', [quoteId, shopId]) : [];
-    const about = rows[0] ? `Deposit payment for quote ${quoteLabel(rows[0])}` : 'Payment provider event';
+    const label = shopId && quoteId ? await this.quotes.labelInShop(shopId, quoteId) : null;
+    const about = label ? `Deposit payment for quote ${label}` : 'Payment provider event';
     return `${about}: ${event.type} (${event.id})`;
   }
 

@@ -537,6 +537,12 @@ export class QuotesService implements OnModuleInit {
     return `${this.config.get('APP_URL', { infer: true })}/quote-answer/${token}`;
   }
 
+  /** The quote's label ("Q-0003") in its shop, or null when there is no such quote (e.g. for a payment event's subject). */
+  async labelInShop(shopId: string, quoteId: string): Promise<string | null> {
+    const quote = await this.quotes.findById({ shopId }, quoteId);
+    return quote ? quoteLabel(quote) : null;
+  }
+
   private async enqueueQuoteMail(manager: EntityManager, view: QuoteView, revision: number, idempotencyKey: string): Promise<void> {
     const { shopId, id: quoteId } = view.quote;
     const subject = `Quote ${quoteLabel(view.quote)} (revision ${revision}) e-mail to ${view.project.customer?.email ?? 'the customer'}`;
