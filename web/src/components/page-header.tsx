@@ -17,7 +17,12 @@ export function PageHeader({ title, subtitle, extra, eyebrow }: PageHeaderProps)
         </Typography.Title>
         {subtitle && <Typography.Text type="secondary">{subtitle}</Typography.Text>}
       </div>
-      {extra && <Flex gap={8}>{extra}</Flex>}
+      {/* the page's commands wrap under each other on a phone instead of pushing the page wider */}
+      {extra && (
+        <Flex gap={8} wrap>
+          {extra}
+        </Flex>
+      )}
     </Flex>
   );
 }

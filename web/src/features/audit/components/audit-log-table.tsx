@@ -1,5 +1,6 @@
 import { AUDIT_KINDS } from '@swapwright/shared';
-import { Card, Segmented, Table, Tag, Typography } from 'antd';
+import { Card, Table, Tag, Typography } from 'antd';
+import { FilterStrip } from '@/components/filter-strip';
 import type { TableProps } from 'antd';
 import { useState } from 'react';
 import { EmptyState, ErrorState } from '@/components/query-state';
@@ -39,20 +40,16 @@ export function AuditLogTable() {
     },
   ];
 
-  const kindOptions = [{ label: 'All', value: 'all' }, ...AUDIT_KINDS.map((kind) => ({ label: KIND_LABELS[kind], value: kind }))];
+  const kindOptions: { label: string; value: AuditKind | 'all' }[] = [{ label: 'All', value: 'all' }, ...AUDIT_KINDS.map((kind) => ({ label: KIND_LABELS[kind], value: kind }))];
 
   return (
-    <Card
-      title="Audit log"
-      extra={
-        <Segmented
-          aria-label="Kind of change"
-          options={kindOptions}
-          value={query.kind ?? 'all'}
-          onChange={(value) => setQuery({ ...query, page: 1, kind: value === 'all' ? undefined : (value as AuditKind) })}
-        />
-      }
-    >
+    <Card title="Audit log">
+      <FilterStrip<AuditKind | 'all'>
+        label="Kind of change"
+        options={kindOptions}
+        value={query.kind ?? 'all'}
+        onChange={(value) => setQuery({ ...query, page: 1, kind: value === 'all' ? undefined : value })}
+      />
       <Typography.Paragraph type="secondary">
         Every change to money (quotes sent and answered, deposits settled, rates), stock (counts, reservations, receipts, imports),
         measurement sign-offs, members and background work tried again, with who made it and the figures before and after.
