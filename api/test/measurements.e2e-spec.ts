@@ -4,7 +4,7 @@ import { readdir, readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
 import { bearer, countRows, Session, signIn, startSignedInApp, TestApp } from './helpers/test-app';
-import { jpegWithGps, makeJpeg, makePng, makeWebp, pngTextChunk } from './helpers/test-images';
+import { heicHeader, jpegWithGps, makeJpeg, makePng, makeWebp, pngTextChunk } from './helpers/test-images';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { MAX_PHOTO_BYTES } from '../src/measurements/photo-limits';
 
@@ -219,6 +219,41 @@ describe('measurement sheets and photos', () => {
     await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.counter)).expect(403);
     await t.http.delete(`/api/measurement-photos/${res.body[0].id}`).set(...bearer(s.owner)).expect(204);
     await t.http.get(url).set(...bearer(s.fabricator)).expect(404);
+  });
+
+  it('a wrong photo on an open sheet is removed with its file; a signed-off sheet keeps its photos (409)', async () => {
+    // The stag project's sheet is open.
+    const [wrong] = (await upload(s.fabricator, [{ data: makeJpeg(24, 24), name: 'wrong-truck.jpg' }], OTHER_CUSTOMERS_PROJECT).expect(201)).body;
+    const rows = await countRows(t.dataSource, 'measurement_photos');
+    const [{ storageKey }] = await t.dataSource.query('SELECT storageKey FROM measurement_photos WHERE id = ?', [wrong.id]);
+    expect(await storedFiles()).toContain(storageKey);
+    await t.http.delete(`/api/measurement-photos/${wrong.id}`).set(...bearer(s.fabricator)).expect(204);
+    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(rows - 1);
+    expect(await storedFiles()).not.toContain(storageKey);
+    await t.http.delete(`/api/measurement-photos/${wrong.id}`).set(...bearer(s.fabricator)).expect(404);
+
+    // The demo project's sheet was signed off above: its photos are the record of what was measured.
+    const [kept] = (await upload(s.fabricator, [{ data: makeJpeg(24, 24), name: 'rails.jpg' }]).expect(201)).body;
+    const [{ storageKey: keptKey }] = await t.dataSource.query('SELECT storageKey FROM measurement_photos WHERE id = ?', [kept.id]);
+    const before = await countRows(t.dataSource, 'measurement_photos');
+    const refused = await t.http.delete(`/api/measurement-photos/${kept.id}`).set(...bearer(s.owner)).expect(409);
+    expect(refused.body).toMatchObject({ code: 'measurement_sheet_signed_off', message: expect.stringMatching(/signed off: its photos stay with it/) });
+    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(before);
+    expect(await storedFiles()).toContain(keptKey);
+    await t.http.get(kept.url).set(...bearer(s.fabricator)).expect(200);
+  });
+
+  it('a HEIC/HEIF photo is refused by its signature with how to send a JPEG instead; nothing stored', async () => {
+    // Source: ISO/IEC 23008-12 (HEIF) Annex B: a file whose FileTypeBox names the brands `heic`/`mif1` is a HEIC image.
+    const filesBefore = (await storedFiles()).length;
+    const rowsBefore = await countRows(t.dataSource, 'measurement_photos');
+    for (const name of ['IMG_0412.HEIC', 'crossmember.jpg']) {
+      const refused = await upload(s.fabricator, [{ data: heicHeader(), name }]).expect(415);
+      expect(refused.body.code).toBe('photo_heif_not_accepted');
+      expect(refused.body.message).toMatch(/is a HEIC\/HEIF photo, which is not accepted yet\. Send it as a JPEG: set the camera to save photos as JPEG, or share or export the photo as JPEG/);
+    }
+    expect(await countRows(t.dataSource, 'measurement_photos')).toBe(rowsBefore);
+    expect(await storedFiles()).toHaveLength(filesBefore);
   });
 });
 

@@ -4,6 +4,8 @@ import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { seedParts } from '../src/database/seed/seed-parts';
 import { startAppWithPayments, until } from './helpers/app-with-payments';
 import exifr from 'exifr';
+import { readdir } from 'node:fs/promises';
+import { join } from 'node:path';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
 import { bearer, countRows, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
 import { jpegWithGps, makeJpeg } from './helpers/test-images';
@@ -174,6 +176,33 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(checkOf(await workOrder(), 'oil-pan-pickup.pickup-tabs').photos).toHaveLength(1);
   });
 
+  it('a wrong check photo is removed with its file by who builds; not found for another shop, refused to other roles', async () => {
+    const storedFiles = async (): Promise<string[]> => readdir(join(process.env.UPLOAD_DIR!, 'measurement-photos')).catch(() => []);
+    const storageKeyOf = async (id: string) => ((await t.dataSource.query('SELECT storageKey FROM work_order_check_photos WHERE id = ?', [id])) as { storageKey: string }[])[0]?.storageKey;
+    const url = `/api/work-orders/${workOrderId}/checks/oil-pan-pickup.pickup-tabs/photos`;
+    const added = await t.http.post(url).set(...bearer(demo.fabricator)).attach('photos', makeJpeg(24, 24), 'wrong-engine.jpg').expect(201);
+    const photos = checkOf(added.body, 'oil-pan-pickup.pickup-tabs').photos;
+    expect(photos).toHaveLength(2);
+    const wrong = photos[1];
+    const key = await storageKeyOf(wrong.id);
+    expect(await storedFiles()).toContain(key);
+    const rows = await countRows(t.dataSource, 'work_order_check_photos');
+
+    // Another shop: not found, as if it did not exist; a role that adds no check photos: refused. Nothing changes.
+    const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+    expect((await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(other))).status).toBe(404);
+    expect((await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(demo.counter))).status).toBe(403);
+    expect((await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(demo.customer))).status).toBe(403);
+    expect(await countRows(t.dataSource, 'work_order_check_photos')).toBe(rows);
+
+    await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(demo.fabricator)).expect(204);
+    expect(await countRows(t.dataSource, 'work_order_check_photos')).toBe(rows - 1);
+    expect(await storedFiles()).not.toContain(key);
+    expect(checkOf(await workOrder(), 'oil-pan-pickup.pickup-tabs').photos.map((photo: { id: string }) => photo.id)).toEqual([photos[0].id]);
+    await t.http.get(`/api/work-order-photos/${wrong.id}/file`).set(...bearer(demo.fabricator)).expect(404);
+    expect((await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(demo.fabricator))).status).toBe(404);
+  });
+
   it('refuses a check recorded the wrong way, with a message that says what to send', async () => {
     expect((await record({ checkKey: 'oil-pan-pickup.screen-height', passed: true })).body.message).toMatch(/is measured: send value \(allowed 6–9 mm\)/);
     expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', value: 3 })).body.message).toMatch(/send passed true or false/);
@@ -193,6 +222,13 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(finished.body).toMatchObject({ state: 'finished', progress: { total: 5, passed: 5, failed: 0, open: 0 } });
     expect(await stage()).toBe('done');
     expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', passed: false })).status).toBe(409);
+    // A finished work order is signed off: its check photos stay as the record of the build.
+    const [kept] = checkOf(finished.body, 'oil-pan-pickup.pickup-tabs').photos;
+    const rows = await countRows(t.dataSource, 'work_order_check_photos');
+    const refusedRemoval = await t.http.delete(`/api/work-order-photos/${kept.id}`).set(...bearer(demo.owner)).expect(409);
+    expect(refusedRemoval.body).toMatchObject({ code: 'work_order_finished', message: expect.stringMatching(/finished \(signed off\): its check photos stay/) });
+    expect(await countRows(t.dataSource, 'work_order_check_photos')).toBe(rows);
+    await t.http.get(`/api/work-order-photos/${kept.id}/file`).set(...bearer(demo.fabricator)).expect(200);
     await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.fabricator)).expect(201);
     expect(await stage()).toBe('done');
     const list = await t.http.get('/api/work-orders?state=finished').set(...bearer(demo.owner)).expect(200);

@@ -19,6 +19,12 @@ export const MeasurementErrors = {
   photoEmpty: (name: string) => new AppError(400, 'photo_empty', `"${safeName(name)}" is empty (0 bytes): take the photo again.`),
   photoNotImage: (name: string) =>
     new AppError(415, 'photo_not_image', `"${safeName(name)}" is not a JPEG, PNG or WebP photo (its content was read, not its name).`),
+  photoHeif: (name: string) =>
+    new AppError(
+      415,
+      'photo_heif_not_accepted',
+      `"${safeName(name)}" is a HEIC/HEIF photo, which is not accepted yet. Send it as a JPEG: set the camera to save photos as JPEG, or share or export the photo as JPEG, then add it again.`,
+    ),
   photoTruncated: (name: string) =>
     new AppError(400, 'photo_truncated', `"${safeName(name)}" is cut short (the upload did not finish): send it again.`),
   photoTooManyPixels: (name: string, width: number, height: number) =>
@@ -28,6 +34,12 @@ export const MeasurementErrors = {
       400,
       'photo_bad_name',
       `"${safeName(name)}" has a folder path or control characters in its name: send the photo file itself (a plain name such as crossmember.jpg).`,
+    ),
+  photoSignedOff: () =>
+    new AppError(
+      409,
+      'measurement_sheet_signed_off',
+      'The sheet is signed off: its photos stay with it as the record of what was measured. Add another photo if one is missing.',
     ),
   photoForbidden: () => new AppError(403, 'forbidden', 'Only the person who added a photo or the shop owner may delete it.'),
   photoReplaceForbidden: () => new AppError(403, 'forbidden', "Only the shop's fabricator or owner may replace a customer's photo."),

@@ -298,11 +298,21 @@ export class MeasurementsService {
     return { photo, data };
   }
 
+  /**
+   * Removes a photo (its uploader or the owner) while its sheet is open; a signed-off sheet keeps its photos as the
+   * record of what was measured. The sheet row is locked, so a sign-off at the same moment waits for the removal or
+   * the removal sees the sign-off; the file goes once the row's removal has committed.
+   */
   async deletePhoto(user: AuthUser, photoId: string): Promise<void> {
     const photo = await this.visiblePhoto(user, photoId);
     if (photo.uploadedById !== user.userId && user.role !== 'owner') throw MeasurementErrors.photoForbidden();
-    await this.photos.delete({ id: photo.id });
-    await this.storage.remove(photo.storageKey);
+    await this.dataSource.transaction(async (manager) => {
+      const sheet = await manager.findOne(MeasurementSheet, { where: { id: photo.sheetId, shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
+      if (sheet?.signedOffAt) throw MeasurementErrors.photoSignedOff();
+      const removed = await manager.delete(MeasurementPhoto, { id: photo.id, shopId: user.shopId });
+      if (!removed.affected) throw MeasurementErrors.photoNotFound();
+    });
+    await this.intake.discard(photo.storageKey);
   }
 
   async acceptPhoto(user: AuthUser, photoId: string): Promise<MeasurementPhoto> {

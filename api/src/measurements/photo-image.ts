@@ -26,9 +26,34 @@ export function checkClientName(name: string): void {
   if (/[\\/\u0000-\u001f\u007f]/.test(name) || name === '..') throw MeasurementErrors.photoBadName(name);
 }
 
+/**
+ * The brands of ISO/IEC 23008-12 (HEIF) files: `mif1` still images, `msf1` image sequences, `heic`/`heix` HEVC-coded
+ * images and `hevc`/`hevx` HEVC-coded sequences (what phone cameras save by default).
+ */
+const HEIF_BRANDS = new Set(['heic', 'heix', 'hevc', 'hevx', 'mif1', 'msf1']);
+
+/**
+ * Whether the bytes are a HEIF/HEIC file, by its signature: an ISO base media file (ISO/IEC 14496-12) opens with its
+ * `ftyp` box — size (32-bit, big-endian), `ftyp`, the major brand, a minor version, then compatible brands to the
+ * box's end — and a HEIF file names one of the HEIF brands as its major or a compatible brand.
+ */
+export function isHeif(data: Buffer): boolean {
+  if (data.length < 16 || data.toString('latin1', 4, 8) !== 'ftyp') return false;
+  // A size of 0 means the box runs to the end of the file; brands are read from the first 4 KiB at most.
+  const size = data.readUInt32BE(0);
+  const boxEnd = Math.min(data.length, size === 0 ? data.length : size, 4096);
+  if (boxEnd < 16) return false;
+  if (HEIF_BRANDS.has(data.toString('latin1', 8, 12))) return true;
+  for (let offset = 16; offset + 4 <= boxEnd; offset += 4) {
+    if (HEIF_BRANDS.has(data.toString('latin1', offset, offset + 4))) return true;
+  }
+  return false;
+}
+
 /** Reads the header (not the name): JPEG, PNG or WebP with a sane pixel count and a complete file, else a 4xx. */
 export function checkImage(data: Buffer, originalName: string): CheckedImage {
   if (data.length === 0) throw MeasurementErrors.photoEmpty(originalName);
+  if (isHeif(data)) throw MeasurementErrors.photoHeif(originalName);
   let size: ReturnType<typeof imageSize>;
   try {
     size = imageSize(data);

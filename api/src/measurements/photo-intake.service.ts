@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import { randomUUID } from 'node:crypto';
 import { MeasurementErrors } from './measurements.errors';
@@ -25,6 +25,8 @@ export interface PreparedPhoto {
  */
 @Injectable()
 export class PhotoIntakeService {
+  private readonly logger = new Logger(PhotoIntakeService.name);
+
   constructor(private readonly storage: PhotoStorage) {}
 
   /** Checks every file (name, content, pixel count, completeness) before any is stored; refuses with a 4xx a person can act on. */
@@ -66,6 +68,19 @@ export class PhotoIntakeService {
 
   async remove(key: string): Promise<void> {
     await this.storage.remove(key);
+  }
+
+  /**
+   * Removes a photo's file once its row's removal has committed. The row is what the product shows, so the person's
+   * removal stands even when the store cannot be reached right then: the file left behind is private, unnamed and
+   * unreachable, and is logged for clean-up rather than answered as a failure.
+   */
+  async discard(key: string): Promise<void> {
+    try {
+      await this.storage.remove(key);
+    } catch (error) {
+      this.logger.warn(`Photo file ${key} was not removed from storage: ${(error as Error).message}`);
+    }
   }
 }
 

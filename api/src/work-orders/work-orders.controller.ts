@@ -1,5 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, Post, Query, Res, UploadedFiles, UseInterceptors } from '@nestjs/common';
-import { ApiBearerAuth, ApiBody, ApiConsumes, ApiOkResponse, ApiParam, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, HttpCode, Param, Post, Query, Res, UploadedFiles, UseInterceptors } from '@nestjs/common';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiNoContentResponse, ApiOkResponse, ApiParam, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
@@ -105,5 +105,13 @@ export class WorkOrderPhotosController {
   async file(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Res() res: Response): Promise<void> {
     const { photo, data } = await this.workOrders.checkPhotoFile(user, id);
     sendPhoto(res, photo, data);
+  }
+
+  @Delete(':id')
+  @HttpCode(204)
+  @Roles(...WORK_ORDER_RECORDERS)
+  @ApiNoContentResponse({ description: 'The photo and its file are removed; a finished work order keeps its photos (409)' })
+  async remove(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
+    await this.workOrders.removeCheckPhoto(user, id);
   }
 }

@@ -15,4 +15,6 @@ export const WorkOrderErrors = {
   checksOutstanding: (labels: string[]) =>
     new AppError(409, 'work_order_checks_outstanding', `Finish every check with a pass first. Still open or failed: ${labels.join('; ')}.`, labels),
   photoNotFound: () => new AppError(404, 'photo_not_found', 'That photo does not exist in your shop.'),
+  photoSignedOff: () =>
+    new AppError(409, 'work_order_finished', 'The work order is finished (signed off): its check photos stay with it as the record of the build.'),
 };

@@ -226,6 +226,24 @@ export class WorkOrdersService {
     return { photo, data: await this.intake.read(photo.storageKey) };
   }
 
+  /**
+   * Removes a check photo (a wrong one) while the job is in the bay. A finished work order is signed off: its photos
+   * stay with it as the record of the build (409). The work order's row is locked, so a finish at the same moment
+   * waits for the removal or the removal sees the finish; the file goes once the row's removal has committed.
+   */
+  async removeCheckPhoto(user: AuthUser, photoId: string): Promise<void> {
+    const photo = await this.photos.findOne({ where: { id: photoId, shopId: user.shopId } });
+    if (!photo) throw WorkOrderErrors.photoNotFound();
+    await this.dataSource.transaction(async (manager) => {
+      const order = await manager.findOne(WorkOrder, { where: { id: photo.workOrderId, shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
+      if (!order) throw WorkOrderErrors.photoNotFound();
+      if (order.state === 'finished') throw WorkOrderErrors.photoSignedOff();
+      const removed = await manager.delete(WorkOrderCheckPhoto, { id: photo.id, shopId: user.shopId });
+      if (!removed.affected) throw WorkOrderErrors.photoNotFound();
+    });
+    await this.intake.discard(photo.storageKey);
+  }
+
   /** The job is built: every check's newest recording must be a pass. The project moves to done with it. */
   async finish(user: AuthUser, id: string): Promise<WorkOrderView> {
     const view = await this.get(user, id);

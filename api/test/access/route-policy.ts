@@ -181,6 +181,8 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'POST /api/work-orders/:id/checks/:checkKey/photos': BUILDERS,
   'POST /api/work-orders/:id/finish': BUILDERS,
   'GET /api/work-order-photos/:id/file': ALL,
+  // A wrong check photo is removed by the people who add them (a finished work order keeps its photos).
+  'DELETE /api/work-order-photos/:id': BUILDERS,
   'GET /api/projects/:projectId/work-order': BUILDERS,
 };
 

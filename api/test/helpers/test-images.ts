@@ -111,3 +111,18 @@ export function jpegWithGps(): Buffer {
   const exif = piexif.dump({ '0th': {}, Exif: {}, GPS: gps });
   return Buffer.from(piexif.insert(exif, makeJpeg(64, 48).toString('binary')), 'binary');
 }
+
+/**
+ * The first bytes of a HEIC photo as phone cameras save it: the `ftyp` box (size, "ftyp", major brand `heic`, minor
+ * version 0, compatible brands `mif1` and `heic`) and the start of its `meta` box. Not a whole picture: the refusal reads
+ * only the signature.
+ * Source: ISO/IEC 14496-12 4.3 (FileTypeBox layout); ISO/IEC 23008-12 (HEIF) Annex B (brands `mif1`, `heic`).
+ */
+export function heicHeader(): Buffer {
+  const ftyp = Buffer.alloc(24);
+  ftyp.writeUInt32BE(24, 0);
+  ftyp.write('ftypheic', 4, 'latin1');
+  ftyp.write('mif1heic', 16, 'latin1');
+  const meta = Buffer.from([0, 0, 0, 12, 0x6d, 0x65, 0x74, 0x61, 0, 0, 0, 0]);
+  return Buffer.concat([ftyp, meta]);
+}

@@ -1631,6 +1631,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/work-order-photos/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["WorkOrderPhotosController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/quotes/{id}/deposit": {
         parameters: {
             query?: never;
@@ -9177,6 +9193,26 @@ export interface operations {
                     "image/png": string;
                     "image/webp": string;
                 };
+            };
+        };
+    };
+    WorkOrderPhotosController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The photo and its file are removed; a finished work order keeps its photos (409) */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

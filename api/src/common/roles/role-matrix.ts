@@ -32,6 +32,7 @@ import { Role } from './role';
  * | GET/PUT /quote-settings              | yes   | read      | -                 | -       | -          |
  * | GET work orders                      | yes   | yes       | yes               | -       | -          |
  * | record a work-order check            | yes   | yes       | yes               | -       | -          |
+ * | add or remove a check photo          | yes   | yes       | yes               | -       | -          |
  * | GET measurement sheet, photo files   | yes   | yes       | yes               | yes     | own only   |
  * | PUT sheet values, sign-off, template | yes   | -         | yes               | -       | -          |
  * | POST sheet photos, DELETE own photo  | yes   | -         | yes               | -       | own project (pending) |
