@@ -177,6 +177,37 @@ describe('parts catalog, plans and counter', () => {
       expect(await countRows(t.dataSource, 'parts')).toBe(before);
     });
 
+    it("reads a category by its name as people write it (any case, spaces around it) as well as its short form", async () => {
+      const csv = [
+        'sku,description,category,price',
+        'CSV-20,Named category,Oil pan,10.00',
+        'CSV-21,Shouted with spaces,"  FUEL PRESSURE REGULATOR ",11.00',
+        'CSV-22,Short form still read,oil-pickup,12.00',
+      ].join('\n');
+      const imported = await upload('/api/parts/import', csv);
+      expect(imported.status).toBe(200);
+      expect(imported.body).toMatchObject({ inserted: 3, errors: [] });
+      const rows = await t.dataSource.query("SELECT sku, category FROM parts WHERE sku IN ('CSV-20', 'CSV-21', 'CSV-22') ORDER BY sku");
+      expect(rows).toEqual([
+        { sku: 'CSV-20', category: 'oil-pan' },
+        { sku: 'CSV-21', category: 'fuel-regulator' },
+        { sku: 'CSV-22', category: 'oil-pickup' },
+      ]);
+    });
+
+    it('an unknown or missing category says which line and lists the names it accepts', async () => {
+      const csv = ['sku,description,category,price', 'CSV-30,Good,Radiator,10.00', 'CSV-31,Made-up category,Spoilers,10.00', 'CSV-32,No category,,10.00'].join('\n');
+      const preview = await upload('/api/parts/import/preview', csv);
+      expect(preview.status).toBe(200);
+      const [unknown, missing] = preview.body.errors as Array<{ row: number; field: string; message: string }>;
+      expect(unknown).toMatchObject({ row: 3, field: 'category' });
+      expect(unknown.message).toMatch(/^line 3: category "Spoilers" is not one we know; write one of: Engine, Transmission, Oil pan, /);
+      expect(unknown.message).toContain('Fuel pressure regulator');
+      expect(missing).toMatchObject({ row: 4, field: 'category' });
+      expect(missing.message).toMatch(/^line 4: category is missing; write one of: Engine, /);
+      expect(preview.body.rejected.map((r: { row: number }) => r.row)).toEqual([3, 4]);
+    });
+
     it('asks for a column mapping when headers differ, then imports; a formula-looking cell is stored as text and exported escaped', async () => {
       const csv = ['Item Code,Title,Kind,Retail,Vendor,Shelf Qty,Where', "CSV-10,=cmd|' /C calc'!A0,fan,12.50,Brookfield Parts,4,Main store"].join('\n');
       const first = await upload('/api/parts/import/preview', csv);

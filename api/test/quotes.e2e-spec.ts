@@ -119,6 +119,12 @@ describe('labor operations and quotes', () => {
       const text = await pdfText(Buffer.from(mail.attachments[0].contentBase64, 'base64'));
       expect(text).toContain('1,810.71');
       expect(text).toContain('543.21');
+      // One money style in the PDF, the e-mail and on screen: the currency's sign, grouping and cents.
+      // Source: Unicode CLDR "en" currency pattern ¤#,##0.00 (ECMA-402 Intl.NumberFormat, style currency).
+      expect(text).toContain('$1,810.71');
+      expect(text).toContain('$543.21');
+      expect(text).not.toMatch(/USD \d/);
+      expect(mail.text).toContain('Total $1,810.71, deposit on approval $543.21.');
       expect(text).toMatch(/planning aid/i);
       expect(text).toMatch(/Lifting an engine/);
       expect(text).toMatch(/halves away from zero/);

@@ -42,7 +42,8 @@ describe('the counter imports a supplier file', () => {
       csvFile('brookfield-prices.csv', [
         'Item Code,Title,Kind,Retail,Vendor,Shelf Qty,Where',
         `IMP-${RUN}-1,Radiator hose kit upper and lower,hoses,64.50,Brookfield Parts,4,Main store`,
-        `IMP-${RUN}-2,Electric fan 16 in,fan,189.00,Brookfield Parts,2,Main store`,
+        // the category by its name, as a person writes it; the short form (hoses) is read as well
+        `IMP-${RUN}-2,Electric fan 16 in,Fan,189.00,Brookfield Parts,2,Main store`,
       ]),
     );
     // The item code and the kind are not spellings the import knows: it asks which columns hold them.
@@ -79,6 +80,8 @@ describe('the counter imports a supplier file', () => {
     await expectText(page.getByRole('alert').filter({ hasText: 'rows have errors' }), /4 of 5 rows have errors\. Nothing is imported/);
     const errors = page.getByRole('table').filter({ hasText: 'Problem' });
     for (const line of ['3', '4', '5', '6']) await expectVisible(errors.getByRole('row').filter({ has: page.getByRole('cell', { name: line, exact: true }) }));
+    // the unknown category's line says which names the import accepts
+    await expectText(errors.getByRole('row').filter({ has: page.getByRole('cell', { name: '5', exact: true }) }), /category "spoiler" is not one we know; write one of: Engine, Transmission, Oil pan/);
     expect(await page.getByRole('button', { name: 'Import 1 row', exact: true }).isDisabled()).toBe(true);
     await expectVisible(page.getByRole('button', { name: 'Download rejected rows' }));
     await saveScreenshot(page, 'counter-import-errors');

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { isPartCategory, PART_CATEGORIES } from '@swapwright/shared';
+import { PART_CATEGORIES, PART_CATEGORY_LABELS, partCategoryFromText } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource } from 'typeorm';
@@ -70,6 +70,9 @@ export interface ImportPreview {
   updated?: number;
 }
 
+/** The category names a file may use (the short forms such as oil-pan are read as well). */
+const CATEGORY_NAMES = PART_CATEGORIES.map((category) => PART_CATEGORY_LABELS[category]).join(', ');
+
 const norm = (header: string) => header.toLowerCase().replace(/[^a-z0-9]/g, '');
 
 export function autoMapping(headers: string[]): ImportMapping {
@@ -126,8 +129,16 @@ export class PartsImportService {
         const description = cell('description');
         if (!description) fail('description', 'description is missing');
         else if (description.length > 240) fail('description', 'description is longer than 240 characters');
-        const category = cell('category').toLowerCase();
-        if (!isPartCategory(category)) fail('category', `category "${cell('category')}" is not one of: ${PART_CATEGORIES.join(', ')}`);
+        const categoryText = cell('category');
+        const category = partCategoryFromText(categoryText);
+        if (!category) {
+          fail(
+            'category',
+            categoryText
+              ? `line ${row}: category "${categoryText.slice(0, 70)}" is not one we know; write one of: ${CATEGORY_NAMES}`
+              : `line ${row}: category is missing; write one of: ${CATEGORY_NAMES}`,
+          );
+        }
         const priceCents = parseCents(cell('price'));
         if (priceCents === null || priceCents > MAX_PRICE_CENTS) fail('price', `price "${cell('price')}" is not an amount like 329.00`);
         const costText = cell('cost');
@@ -157,7 +168,7 @@ export class PartsImportService {
           row,
           sku,
           description,
-          category,
+          category: category!,
           priceCents: priceCents!,
           costCents,
           supplier: cell('supplier') || null,

@@ -1,5 +1,6 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { formatMoney } from '@swapwright/shared';
 import Stripe from 'stripe';
 import { DataSource, EntityManager } from 'typeorm';
 import { JobHandlers } from '../jobs/job-handlers';
@@ -67,7 +68,7 @@ export class DepositsService implements OnModuleInit {
         kind: 'money',
         action: 'payment.settled',
         subjectId: payment.quoteId,
-        summary: `Deposit of ${payment.amountCents} cents (${payment.currency}) settled by the payment provider (event ${event.id}).`,
+        summary: `Deposit of ${formatMoney(payment.amountCents, payment.currency)} settled by the payment provider (event ${event.id}).`,
         before: { state: payment.state },
         after: { state: 'paid', amountCents: payment.amountCents, currency: payment.currency, eventId: event.id },
       });

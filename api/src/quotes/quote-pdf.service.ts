@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import {
   FIT_REPORT_CAUTION,
   FIT_REPORT_SAFETY,
-  formatCents,
+  formatMoney,
   QUOTE_ROUNDING_RULE,
   quoteTotalRows,
   sideViewGeometry,
@@ -37,10 +37,6 @@ const RULE = '#cbd2d9';
 function firstSentence(text: string): string {
   const end = text.search(/\.\s/);
   return end > 0 && end < 240 ? text.slice(0, end + 1) : text.length > 240 ? `${text.slice(0, 237)}…` : text;
-}
-
-function money(cents: number, currency: string): string {
-  return `${currency} ${formatCents(cents)}`;
 }
 
 /** The quote as a PDF: header, customer and vehicle, fit summary with a small side view, lines, totals, deposit, terms and cautions. */
@@ -106,7 +102,7 @@ export class QuotePdfService {
     heading('Totals');
     this.totals(doc, revision.totals, currency, width);
     doc.moveDown(0.4).font('bold').fontSize(11).fillColor(INK);
-    doc.text(`Deposit due on approval: ${money(revision.totals.depositCents, currency)}`, 50, doc.y, { width, align: 'right' });
+    doc.text(`Deposit due on approval: ${formatMoney(revision.totals.depositCents, currency)}`, 50, doc.y, { width, align: 'right' });
     doc.font('body').fontSize(9).fillColor(MUTED);
     doc.text(
       revision.depositKind === 'percent'
@@ -229,13 +225,13 @@ export class QuotePdfService {
     for (const kind of ['part', 'labor'] as const) {
       const lines = revision.lines.filter((line) => line.kind === kind);
       if (lines.length === 0) continue;
-      doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${money(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
+      doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${formatMoney(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
       for (const line of lines) {
         row([
           line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description,
           kind === 'part' ? String(line.quantity) : `${(line.hours ?? 0).toFixed(1)} h`,
-          formatCents(line.unitPriceCents),
-          formatCents(line.lineTotalCents),
+          formatMoney(line.unitPriceCents, revision.currency),
+          formatMoney(line.lineTotalCents, revision.currency),
         ]);
       }
     }
@@ -245,12 +241,12 @@ export class QuotePdfService {
     for (const { label: name, cents } of quoteTotalRows(totals)) {
       const y = doc.y;
       doc.font('body').fontSize(10).fillColor(INK).text(name, 50 + width - 300, y, { width: 150 });
-      doc.text(money(cents, currency), 50 + width - 150, y, { width: 150, align: 'right' });
+      doc.text(formatMoney(cents, currency), 50 + width - 150, y, { width: 150, align: 'right' });
     }
     const y = doc.y + 2;
     doc.moveTo(50 + width - 300, y).lineTo(50 + width, y).strokeColor(INK).lineWidth(0.7).stroke();
     doc.y = y + 3;
     doc.font('bold').fontSize(12).text('Total', 50 + width - 300, doc.y, { width: 150 });
-    doc.text(money(totals.totalCents, currency), 50 + width - 150, doc.y - doc.currentLineHeight(), { width: 150, align: 'right' });
+    doc.text(formatMoney(totals.totalCents, currency), 50 + width - 150, doc.y - doc.currentLineHeight(), { width: 150, align: 'right' });
   }
 }

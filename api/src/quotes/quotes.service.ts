@@ -1,7 +1,7 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, formatMoney, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -322,7 +322,7 @@ export class QuotesService implements OnModuleInit {
           kind: 'money',
           action: 'quote.sent',
           subjectId: view.quote.id,
-          summary: `Quote ${quoteLabel(view.quote)} revision ${latest.number} sent to ${view.project.customer?.email ?? 'the customer'}: total ${latest.totals.totalCents} cents.`,
+          summary: `Quote ${quoteLabel(view.quote)} revision ${latest.number} sent to ${view.project.customer?.email ?? 'the customer'}: total ${formatMoney(latest.totals.totalCents, latest.currency)}.`,
           before: { status: view.quote.status, sentRevision: view.quote.sentRevision ?? null },
           after: { status: 'awaiting-answer', sentRevision: latest.number, totalCents: latest.totals.totalCents, depositCents: latest.totals.depositCents },
         });
@@ -562,6 +562,7 @@ export class QuotesService implements OnModuleInit {
         text:
           `Hello ${customer.name},\n\n` +
           `${shop.name} has prepared quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}". ` +
+          `Total ${formatMoney(view.revision.totals.totalCents, view.revision.currency)}, deposit on approval ${formatMoney(view.revision.totals.depositCents, view.revision.currency)}. ` +
           `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${view.revision.validUntil}):\n${link}\n\n` +
           `This quote is a planning aid built on the figures measured so far; the shop confirms every measurement before cutting or ordering.\n`,
         attachments: [{ filename: fileName, content, contentType: 'application/pdf' }],

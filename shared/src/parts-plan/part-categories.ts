@@ -106,3 +106,21 @@ export function fitSpecKindOf(category: CatalogPartCategory): FitSpecKind | null
 export function isPartCategory(value: unknown): value is CatalogPartCategory {
   return typeof value === 'string' && (PART_CATEGORIES as readonly string[]).includes(value);
 }
+
+/** Lower case, trimmed, inner runs of spaces as one: how a typed category is compared. */
+const categoryKey = (text: string) => text.trim().replace(/\s+/g, ' ').toLowerCase();
+
+const CATEGORY_BY_TYPED_TEXT: ReadonlyMap<string, CatalogPartCategory> = new Map(
+  PART_CATEGORIES.flatMap((category) => [
+    [category, category],
+    [categoryKey(PART_CATEGORY_LABELS[category]), category],
+  ]),
+);
+
+/**
+ * A category as a person writes it in a file or a box: its name ("Oil pan", "oil PAN ") or its short form
+ * ("oil-pan"), without regard to case or surrounding spaces; null when it is neither.
+ */
+export function partCategoryFromText(text: string): CatalogPartCategory | null {
+  return CATEGORY_BY_TYPED_TEXT.get(categoryKey(text)) ?? null;
+}

@@ -1,5 +1,5 @@
 import { Alert, Button, Card, Form, Progress, Select, Space, Table, Typography, Upload } from 'antd';
-import { PART_CATEGORIES } from '@swapwright/shared';
+import { PART_CATEGORIES, PART_CATEGORY_LABELS } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { useState } from 'react';
 import { saveBlob } from '@/lib/download';
@@ -66,7 +66,8 @@ export function PartsImport() {
           line&apos;s problems before anything is stored: the file goes in whole or not at all.
         </Typography.Paragraph>
         <Typography.Paragraph type="secondary" style={{ marginBottom: 0 }} ellipsis={{ rows: 1, expandable: true, symbol: 'every category' }}>
-          Categories are written as in the sample file (oil-pan, fuel-pump, …), one of: {PART_CATEGORIES.join(', ')}.
+          A category is written by its name, in any case: {PART_CATEGORIES.map((category) => PART_CATEGORY_LABELS[category]).join(', ')}. The short forms of the
+          sample file (oil-pan, fuel-pump, …) are read as well.
         </Typography.Paragraph>
         <Button
           type="link"
