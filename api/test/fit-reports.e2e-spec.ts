@@ -233,6 +233,25 @@ describe('fit reports', () => {
     expect(compare.status).toBe(404);
   });
 
+  it('the Stag at intake (no pan chosen yet) is checked at a realistic placement, not with the engine on the floor', async () => {
+    // Source: published driveline-maker guidance: each U-joint at least 1/2°, at most 3° for vibration-free running,
+    // front and rear within 1°; a working driveline runs 1–3° with the two joints within about 1/2°.
+    const run = await t.http.post(`/api/projects/${STAG}/fit-reports`).set(...bearer(demo.estimator));
+    expect(run.status).toBe(201);
+    // Without a pan nothing bounds the engine from below, so no placement is proposed from the fit window.
+    expect(run.body.placementSource).toBe('chassis-default');
+    expect(run.body.placement.heightMm).toBeGreaterThan(400);
+    const uJoint = finding(run.body.report, 'drivetrain.u-joint-angles');
+    expect(uJoint.status).toBe('ok');
+    expect(uJoint.measured).toBeGreaterThanOrEqual(1);
+    expect(uJoint.measured).toBeLessThanOrEqual(3);
+    const message = (run.body.report.findings as Array<FindingBody & { message: string }>).find((f) => f.checkId === 'drivetrain.u-joint-angles')!.message;
+    const [front, rear] = [/Front joint (\d+\.\d+)°/, /rear (\d+\.\d+)°/].map((re) => Number(re.exec(message)![1]));
+    expect(Math.abs(front - rear)).toBeLessThanOrEqual(0.5);
+    expect(message).toMatch(/at the planned top speed/);
+    expect(finding(run.body.report, 'drivetrain.transmission-mount-height').measured).toBeLessThan(50);
+  });
+
   it("answers 404 for another shop's reports and projects", async () => {
     const stockReportId = await runStockReport();
     expect((await t.http.get(`/api/fit-reports/${stockReportId}`).set(...bearer(other))).status).toBe(404);

@@ -9,6 +9,7 @@ export * from './checks/system-checks';
 export * from './units/angle';
 export * from './units/quantities';
 export * from './units/figure-format';
+export * from './units/margin-words';
 export * from './belt/two-pulley';
 export * from './belt/serpentine';
 export * from './belt/stock-belt';

@@ -22,7 +22,13 @@ export interface DemoFitSelection {
 
 const goals = DEMO_FIT_SPEC.goals;
 
-/** The Ridgeback starts on the Kestrel's stock front-sump pan, the one that meets the crossmember. */
+/**
+ * The Ridgeback starts on the Kestrel's stock front-sump pan, the one that meets the crossmember. The Stag is at
+ * intake: no parts chosen yet, only the figures of how it is driven. A tow rig on 800 mm (31.5 in) tyres with a
+ * 4.10 axle at 120 km/h (75 mph) turns its driveshaft about 3,260 rpm (Derived: wheel rpm × axle ratio), where
+ * published driveline-maker guidance allows about 5.4° of U-joint angle; without these figures the engine
+ * could only assume the rev limit in overdrive (about 8,660 rpm), far past any tow rig's driving.
+ */
 export const DEMO_FIT_SELECTIONS: DemoFitSelection[] = [
   {
     projectId: DEMO_PROJECT_IDS.ridgeback,
@@ -38,5 +44,17 @@ export const DEMO_FIT_SELECTIONS: DemoFitSelection[] = [
     tireDiameterMm: goals.tireDiameterMm ?? null,
     axleRatio: goals.axleRatio ?? null,
     continuousPowerKw: goals.continuousPowerKw ?? null,
+  },
+  {
+    projectId: DEMO_PROJECT_IDS.stag,
+    // No parts chosen yet.
+    oilPanId: null, oilPickupId: null, oilPumpId: null, controllerId: null, accessoryDriveId: null, mountAdapterId: null,
+    // A 3.5 in × 0.083 in steel tube, the usual size for a three-quarter-ton truck.
+    driveshaft: { outerDiameterMm: 88.9, wallMm: 2.1, material: 'steel' },
+    timingSetAdvanceDeg: null,
+    topSpeedKph: 120,
+    tireDiameterMm: 800,
+    axleRatio: 4.1,
+    continuousPowerKw: 180,
   },
 ];

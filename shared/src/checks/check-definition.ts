@@ -60,6 +60,9 @@ const MISSING_INPUT_WORDS: Record<string, string> = {
   'engine.injectorFlowLbh': "the injectors' flow rating",
   'engine.injectorRatedPsi': "the pressure the injectors are rated at",
   'goals.revLimitRpm': 'the rev limit',
+  'chassis.fuelSystem.pumpFlowLph': "the chassis fuel pump's rated flow",
+  'chassis.fuelSystem.pumpRatedPsi': "the chassis fuel pump's rated pressure",
+  'chassis.fuelSystem.regulatorPsi': "the pressure the chassis fuel regulator holds",
   'transmission.topGearRatio': "the transmission's top gear ratio",
   'transmission.sideProfile': "the transmission's side outline",
 };
@@ -102,7 +105,8 @@ export function unknownFinding(fields: FindingFields, missing: string[], message
 
 export function measuredFinding(
   fields: FindingFields,
-  figures: { measured: number; required: number; margin: number; status: CheckStatus },
+  /** measured and margin are null when there is no honest figure (e.g. a pump that cannot reach the pressure at all). */
+  figures: { measured: number | null; required: number; margin: number | null; status: CheckStatus },
   message: string,
   remedies: Remedy[] = [],
 ): Finding {

@@ -40,8 +40,22 @@ describe('drivetrain.transmission-mount-height', () => {
     expect(spacer.remedies[0]).toMatchObject({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: 10 } });
     expect(runCheck(TRANSMISSION_MOUNT_HEIGHT_CHECK, withCrossmember(1520, 310)).remedies.map((r) => r.kind)).toEqual(['fabrication']);
     const below = runCheck(TRANSMISSION_MOUNT_HEIGHT_CHECK, withCrossmember(1520, 360));
-    expect(below.measured).toBeCloseTo(-10, 9);
+    expect(below.measured).toBeCloseTo(10, 9);
+    expect(below.message).toMatch(/sits 10\.0 mm \(0\.39 in\) below the crossmember pad, past the ±3\.0 mm \(0\.12 in\) it bolts down within/);
     expect(below.remedies.map((r) => r.kind)).toEqual(['fabrication']);
+  });
+  it('a band either side of level: the figure is the size of the offset, so "found" is past "at most" exactly when it fails', () => {
+    // Common practice (no published source): a mount within the shop's direct-fit tolerance of level, above or
+    // below, bolts down; the fixture's mount sits at z 350, so a crossmember at 350 − dz puts it dz above the pad.
+    for (const dz of [-600, -10, -3, -2, 0, 2, 3, 10, 40]) {
+      const f = runCheck(TRANSMISSION_MOUNT_HEIGHT_CHECK, withCrossmember(1520, 350 - dz));
+      expect(f.limit).toBe('max');
+      expect(f.measured).toBeCloseTo(Math.abs(dz), 9);
+      expect(f.required).toBe(3);
+      expect(f.margin).toBeCloseTo(3 - Math.abs(dz), 9);
+      expect(f.status === 'fails').toBe(f.measured! > f.required!);
+      if (dz !== 0) expect(f.message).toContain(dz > 0 ? 'above the crossmember pad' : 'below the crossmember pad');
+    }
   });
   it('unknown without a transmission', () => {
     expect(runCheck(TRANSMISSION_MOUNT_HEIGHT_CHECK, { ...boxFitSpec(), transmission: undefined }).status).toBe('unknown');

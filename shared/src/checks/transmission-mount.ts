@@ -5,6 +5,7 @@ import type { CheckContext, CheckDefinition } from './check-definition';
 import { measuredFinding, statusFromMargin, unknownFinding } from './check-definition';
 import { COMMON_PRACTICE } from './envelope/envelope-common';
 import { mmWithInches } from '../units/figure-format';
+import { marginWords } from '../units/margin-words';
 
 export const TRANSMISSION_MOUNT_POSITION_ID = 'drivetrain.transmission-mount-position';
 export const TRANSMISSION_MOUNT_HEIGHT_ID = 'drivetrain.transmission-mount-height';
@@ -40,7 +41,7 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
   const dir = o.dx >= 0 ? 'behind' : 'ahead of';
   const message =
     margin >= 0
-      ? `The transmission mount lands ${mmWithInches(measured)} ${dir} the crossmember, inside its ±${mmWithInches(range)} adjustment, a margin of ${mmWithInches(margin)}.`
+      ? `The transmission mount lands ${mmWithInches(measured)} ${dir} the crossmember, inside its ±${mmWithInches(range)} adjustment: ${marginWords(margin, mmWithInches, 'max')}.`
       : `The transmission mount lands ${mmWithInches(measured)} ${dir} the crossmember, ${mmWithInches(-margin)} past its ±${mmWithInches(range)} adjustment.`;
   const remedies: Remedy[] = [];
   if (status !== 'ok') {
@@ -56,9 +57,11 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
 }
 
 /**
- * Height: the mount pad sits `dz` above the crossmember. Within the direct-fit tolerance it bolts down;
- * above it, a spacer up to transmissionMountSpacerMaxMm closes the gap; below the crossmember, or past
- * the spacer limit, the crossmember is reworked.
+ * Height: the mount pad sits `dz` above the crossmember (negative: below it). The rule is a band either side of
+ * level: within ±mountDirectFitToleranceMm it bolts down, so the figure is the size of the offset, |dz|, against
+ * that tolerance as a maximum, and the sentence says which way it is off. Above the band a spacer up to
+ * transmissionMountSpacerMaxMm closes the gap; below the crossmember, or past the spacer limit, the crossmember
+ * is reworked.
  */
 export function runTransmissionMountHeight({ spec, settings }: CheckContext): Finding {
   const fields = {
@@ -67,7 +70,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
     title: 'Transmission mount to crossmember height',
     unit: 'mm' as const,
     limit: 'max' as const,
-    thresholdSource: `${COMMON_PRACTICE}: about ${mmWithInches(settings.mountDirectFitToleranceMm)} bolts down directly (the shop's direct-fit tolerance); spacers up to ${mmWithInches(settings.transmissionMountSpacerMaxMm)} (the shop's largest mount spacer).`,
+    thresholdSource: `${COMMON_PRACTICE}: within about ±${mmWithInches(settings.mountDirectFitToleranceMm)} of level bolts down directly (the shop's direct-fit tolerance); spacers up to ${mmWithInches(settings.transmissionMountSpacerMaxMm)} (the shop's largest mount spacer).`,
     against: 'transmission-crossmember',
   };
   if (!spec.transmission) return unknownFinding(fields, ['transmission']);
@@ -75,23 +78,23 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
   const { dz } = transmissionMountOffset(spec)!;
   const tol = settings.mountDirectFitToleranceMm;
   const spacerMax = settings.transmissionMountSpacerMaxMm;
-  const measured = dz;
+  const measured = Math.abs(dz);
   const required = tol;
-  const margin = tol - Math.abs(dz);
+  const margin = tol - measured;
   const remedies: Remedy[] = [];
   let message: string;
   const status = margin >= 0 ? 'ok' : 'fails';
   if (status === 'ok') {
-    message = `The transmission mount sits ${mmWithInches(Math.abs(dz))} ${dz >= 0 ? 'above' : 'below'} the crossmember pad and bolts down directly: up to ${mmWithInches(tol)} is taken up without a spacer.`;
+    message = `The transmission mount sits ${mmWithInches(measured)} ${dz >= 0 ? 'above' : 'below'} the crossmember pad and bolts down directly: within ±${mmWithInches(tol)} of level is taken up without a spacer (${marginWords(margin, mmWithInches, 'max')}).`;
   } else if (dz > 0 && dz <= spacerMax) {
-    message = `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad: a ${mmWithInches(dz)} spacer closes it.`;
+    message = `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within: a ${mmWithInches(dz)} spacer closes it.`;
     remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mmWithInches(dz)} spacer under the mount (at most ${mmWithInches(spacerMax)}).` });
     remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, note: 'Support the transmission with a jack and the vehicle on stands.' });
   } else {
     message =
       dz > 0
-        ? `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, more than the ${mmWithInches(spacerMax)} a spacer should take: the crossmember must be raised.`
-        : `The transmission mount sits ${mmWithInches(-dz)} below the crossmember pad: the crossmember must be dropped or replaced.`;
+        ? `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within and more than the ${mmWithInches(spacerMax)} a spacer should take: the crossmember must be raised.`
+        : `The transmission mount sits ${mmWithInches(-dz)} below the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within: the crossmember must be dropped or replaced.`;
     remedies.push({
       kind: 'fabrication',
       operation: dz > 0 ? `Raise the crossmember pad ${mmWithInches(dz)}` : `Drop the crossmember ${mmWithInches(-dz)} or fit a drop crossmember`,

@@ -80,6 +80,22 @@ describe('computeFitWindow', () => {
     }
   });
 
+  it('proposes no best placement where nothing bounds the engine from below (no oil pan chosen)', () => {
+    // Derived: without a pan outline no check limits how low the crank may sit, so each column runs down to the
+    // searched range's floor (0 mm) and the hood gap only grows as the engine drops: the "largest margin" would be
+    // an engine on the ground. The window is still drawn; no placement is proposed from it.
+    const noPan: FitSpec = { ...DEMO_FIT_SPEC };
+    delete noPan.oilPan;
+    const open = computeFitWindow(noPan, { stepMm: 10 });
+    const feasible = open.columns.filter((c) => c.feasible);
+    expect(feasible.length).toBeGreaterThan(0);
+    expect(feasible.every((c) => c.lowMm === 0 && c.lowBoundBy?.checkId === 'window.range')).toBe(true);
+    expect(open.best).toBeNull();
+    // with the pan chosen the window is closed at both ends and the best placement sits well off the floor
+    expect(window.best).not.toBeNull();
+    expect(window.best!.placement.heightMm).toBeGreaterThan(300);
+  });
+
   it('the stock pan has no window at the stock setback: the crossmember closes it', () => {
     const w = computeFitWindow(DEMO_FIT_SPEC, { setbackFromMm: 660, setbackToMm: 660 });
     expect(w.columns[0].feasible).toBe(false);

@@ -356,6 +356,11 @@ export function envelopeMargins(spec: FitSpec, settings: FitSettings, placement:
     .map((finding) => ({ checkId: finding.checkId, against: finding.against ?? '', marginMm: finding.margin as number, status: finding.status }));
 }
 
+/** True when checks bound the interval at both ends (neither end is the searched range's edge). */
+export function boundedByChecks(interval: Pick<FitWindowInterval, 'lowBoundBy' | 'highBoundBy'>): boolean {
+  return interval.lowBoundBy.checkId !== WINDOW_RANGE.checkId && interval.highBoundBy.checkId !== WINDOW_RANGE.checkId;
+}
+
 export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, settingsOverrides: Partial<FitSettings> = {}): FitWindow {
   const settings = resolveFitSettings(settingsOverrides);
   const tiltDeg = options.tiltDeg ?? settings.defaultTiltDeg;
@@ -375,10 +380,12 @@ export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, 
 
   // Best placement: score the middle of every passing interval once, then refine the most promising few
   // by golden-section search on the smallest margin (ties: the wider interval, then the nearer setback).
+  // Only intervals that checks close at both ends count: where the searched range's own edge ends one (no oil
+  // pan outline below, say), the largest margin lies at that edge, and it would propose an engine on the floor.
   const candidates: Array<{ setbackMm: number; lowMm: number; highMm: number; model: ColumnModel; scoreAtMiddle: number }> = [];
   columns.forEach((column, index) => {
     if (!column.feasible) return;
-    for (const interval of column.intervals) {
+    for (const interval of column.intervals.filter(boundedByChecks)) {
       const scoreAtMiddle = scoreAt(models[index], (interval.lowMm + interval.highMm) / 2).score;
       candidates.push({ setbackMm: column.setbackMm, lowMm: interval.lowMm, highMm: interval.highMm, model: models[index], scoreAtMiddle });
     }

@@ -46,4 +46,24 @@ describe('proposePlacement (setback, height and tilt, driveline weighed)', () =>
     // Common practice (no published source): a window that is empty everywhere has no proposal.
     expect(proposePlacement(DEMO_FIT_SPEC, { setbackFromMm: 660, setbackToMm: 660, lowestHeightMm: 0, highestHeightMm: 10 })).toBeNull();
   }, 60_000);
+
+  it('without a pan or a driveline nothing bounds the height: no proposal, rather than an engine on the floor', () => {
+    // Derived: the searched range's floor is not a limit of the engine bay (see computeFitWindow).
+    const bare: FitSpec = { ...DEMO_FIT_SPEC };
+    delete bare.oilPan;
+    delete bare.transmission;
+    expect(proposePlacement(bare)).toBeNull();
+  }, 60_000);
+
+  it('without a pan, the driveline still sets a realistic height: U-joint angles of 1–3°, nearly equal', () => {
+    // Source: published driveline-maker guidance: each joint at least 1/2°, at most 3° for vibration-free running,
+    // front and rear within 1°.
+    const noPan: FitSpec = { ...DEMO_FIT_SPEC };
+    delete noPan.oilPan;
+    const proposal = proposePlacement(noPan)!;
+    expect(proposal.placement.heightMm).toBeGreaterThan(200);
+    const uJoint = U_JOINT_ANGLES_CHECK.run({ spec: { ...noPan, placement: proposal.placement }, settings });
+    expect(uJoint.status).not.toBe('fails');
+    expect(uJoint.measured!).toBeLessThanOrEqual(3);
+  }, 60_000);
 });

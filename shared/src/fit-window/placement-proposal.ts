@@ -4,7 +4,7 @@ import { goldenSectionMax } from '../geometry/golden-section';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
 import type { CheckStatus } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
-import { columnWithModel, envelopeMargins, newWarmStart, scoreAt, type ColumnModel, type WindowBound, type WindowContext } from './fit-window';
+import { boundedByChecks, columnWithModel, envelopeMargins, newWarmStart, scoreAt, type ColumnModel, type WindowBound, type WindowContext } from './fit-window';
 
 /**
  * The best placement over setback, height AND tilt, weighing the driveline as well as the clearances: tilt
@@ -39,6 +39,8 @@ export interface ProposalBound {
   /** Margin to the rule's limit, in `unit` (negative fails). */
   margin: number;
   unit: 'mm' | 'deg';
+  /** The side of the limit: `min` (a clearance at least so much), `max` (an angle at most so much); see marginWords. */
+  limit: 'min' | 'max';
   status: CheckStatus;
   /** The margin in tight bands (margin ÷ the check's tight band): how the search compares mm with degrees. */
   normalizedMargin: number;
@@ -67,6 +69,7 @@ export const DEFAULT_PROPOSAL_TILTS_DEG = [-2, -1, 0, 1, 2, 3, 4, 5, 6];
 interface DrivelineRoom {
   marginDeg: number;
   status: CheckStatus;
+  limit: 'min' | 'max';
 }
 
 function drivelineRoom(spec: FitSpec, settings: FitSettings, placement: Placement): DrivelineRoom | null {
@@ -119,7 +122,8 @@ export function proposePlacement(spec: FitSpec, options: PlacementProposalOption
       const setbackMm = fromMm + step * stepMm;
       const { column, model } = columnWithModel(context, setbackMm, warm);
       if (!column.feasible) continue;
-      for (const interval of column.intervals) {
+      // Without a driveline to weigh, an interval the searched range ends proposes that edge (see computeFitWindow).
+      for (const interval of hasDriveline ? column.intervals : column.intervals.filter(boundedByChecks)) {
         const heightMm = (interval.lowMm + interval.highMm) / 2;
         const score = objective(tiltDeg, setbackMm, model, heightMm);
         candidates.push({ tiltDeg, setbackMm, lowMm: interval.lowMm, highMm: interval.highMm, model, score, heightMm });
@@ -164,6 +168,7 @@ function boundsAt(spec: FitSpec, settings: FitSettings, placement: Placement): P
     against: margin.against,
     margin: margin.marginMm,
     unit: 'mm' as const,
+    limit: 'min' as const,
     status: margin.status,
     normalizedMargin: margin.marginMm / settings.tightBandMm,
   }));
@@ -175,6 +180,7 @@ function boundsAt(spec: FitSpec, settings: FitSettings, placement: Placement): P
         against: 'driveline',
         margin: room.marginDeg,
         unit: 'deg',
+        limit: room.limit,
         status: room.status,
         normalizedMargin: room.marginDeg / settings.uJointTightBandDeg,
       });

@@ -3,6 +3,7 @@ import { beltLengthWindow, formatBeltDesignation, nearestStockBelt } from '../..
 import type { Finding, Remedy } from '../../types/finding';
 import type { AccessoryDriveSpec, FitSpec } from '../../types/fit-spec';
 import { mmRangeWithInches, mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 import { measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 
 const FIELDS: FindingFields = {
@@ -68,7 +69,7 @@ export function checkSerpentineBelt({ spec, settings }: CheckContext): Finding {
   const maxLengthMm = Math.floor(window.maxMm);
   const range = mmRangeWithInches(minLengthMm, maxLengthMm, { decimals: 0 });
   const message = choice.withinTakeUp
-    ? `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); stock belt ${chosen} is ${mmWithInches(choice.differenceMm, { signed: true })} from it, inside the tensioner's range of ${range} with ${mmWithInches(choice.marginMm)} to spare.${smallText}`
+    ? `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); stock belt ${chosen} is ${mmWithInches(choice.differenceMm, { signed: true })} from it, inside the tensioner's range of ${range}: ${marginWords(choice.marginMm, mmWithInches)}.${smallText}`
     : `The ${drive.name} needs ${mmWithInches(computed)} (${designation}); the tensioner accepts ${range} and the nearest stock belt, ${chosen}, is outside that range.${smallText}`;
   const remedies: Remedy[] = [
     {

@@ -53,12 +53,16 @@ function uJointRule(layout: DrivelineLayout, settings: FitSettings): { governing
   return { governing, status, speedMaxDeg, overSmoothLimit };
 }
 
-/** The U-joint margin (degrees) and status at the spec's placement; null without a transmission. Cheap: no sentence. */
-export function uJointRoom(spec: FitSpec, settings: FitSettings): { marginDeg: number; status: CheckStatus } | null {
+/**
+ * The U-joint margin (degrees), status and the side of the governing limit (`max`: an angle too large or the
+ * front and rear too different; `min`: a joint too straight) at the spec's placement; null without a
+ * transmission. Cheap: no sentence.
+ */
+export function uJointRoom(spec: FitSpec, settings: FitSettings): { marginDeg: number; status: CheckStatus; limit: 'min' | 'max' } | null {
   const result = drivelineLayout(spec);
   if (!result.ok) return null;
   const { governing, status } = uJointRule(result.layout, settings);
-  return { marginDeg: governing.margin, status };
+  return { marginDeg: governing.margin, status, limit: governing.limit };
 }
 
 export function checkUJointAngles({ spec, settings }: CheckContext): Finding {

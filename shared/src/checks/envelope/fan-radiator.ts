@@ -6,6 +6,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { placedForSpec, placeEngine, type PlacedEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export const FAN_RADIATOR_ID = 'envelope.fan-radiator';
 
@@ -40,7 +41,7 @@ export function runFanRadiator({ spec, settings }: CheckContext): Finding {
   const fig = figures(g.gap, settings.minFanToCoreMm, settings);
   const message =
     g.gap >= 0
-      ? `The ${g.feature} is ${mmWithInches(g.gap)} behind the radiator core; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `The ${g.feature} is ${mmWithInches(g.gap)} behind the radiator core; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The ${g.feature} reaches ${mmWithInches(-g.gap)} past the rear face of the radiator core; it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {

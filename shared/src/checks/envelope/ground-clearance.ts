@@ -5,6 +5,7 @@ import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { evaluateCandidatePans } from './pan-clearance';
 import { lowestPoint, placedForSpec, type LowestPart } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export const GROUND_CLEARANCE_ID = 'envelope.ground-clearance';
 
@@ -28,7 +29,7 @@ export function runGroundClearance({ spec, settings }: CheckContext): Finding {
   const low = lowestPoint(placedForSpec(spec), 0, spec.chassis);
   if (!low) return unknownFinding(fields, ['oilPan.bottomProfile']);
   const fig = figures(low.clearanceMm, settings.minGroundClearanceMm, settings);
-  const message = `The lowest point (${LOWEST_PART_WORDS[low.part]}, ${mmWithInches(low.point.x)} behind the front axle line) is ${mmWithInches(low.clearanceMm)} above the ground at ride height; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`;
+  const message = `The lowest point (${LOWEST_PART_WORDS[low.part]}, ${mmWithInches(low.point.x)} behind the front axle line) is ${mmWithInches(low.clearanceMm)} above the ground at ride height; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;

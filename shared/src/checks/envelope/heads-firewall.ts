@@ -5,6 +5,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 import { outlineGapValue } from '../../geometry/outline-gap';
 
 export const HEADS_FIREWALL_ID = 'envelope.heads-firewall';
@@ -32,7 +33,7 @@ export function runHeadsFirewall({ spec, settings }: CheckContext): Finding {
   const fig = figures(gap, settings.minFirewallGapMm, settings);
   const message =
     gap >= 0
-      ? `The rear of the heads clears the firewall (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `The rear of the heads clears the firewall (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The rear of the heads runs ${mmWithInches(-gap)} into the firewall (${worst.obstacle.name}); it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {

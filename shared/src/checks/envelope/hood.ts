@@ -5,6 +5,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { placedForSpec, type PlacedEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export const HOOD_ID = 'envelope.hood';
 
@@ -34,7 +35,7 @@ export function runHood({ spec, settings }: CheckContext): Finding {
   const fig = figures(c.clearance, settings.minHoodGapMm, settings);
   const message =
     c.clearance >= 0
-      ? `The top of the engine is ${mmWithInches(c.clearance)} under the hood at ${mmWithInches(c.from.x)} behind the axle line; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `The top of the engine is ${mmWithInches(c.clearance)} under the hood at ${mmWithInches(c.from.x)} behind the axle line; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The top of the engine stands ${mmWithInches(-c.clearance)} above the underside of the hood at ${mmWithInches(c.from.x)} behind the axle line; it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {

@@ -16,6 +16,7 @@ import {
 import { lowestPoint, obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
 import { measureHood } from './hood';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 import { outlineGapValue } from '../../geometry/outline-gap';
 
 /** The obstacle kinds below the pan, one check each. */
@@ -162,7 +163,7 @@ export function runPanCheck(context: CheckContext, config: PanCheckConfig): Find
   const name = `${config.label} (${worst.obstacle.name})`;
   const message =
     gap >= 0
-      ? `The oil pan clears ${name} by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `The oil pan clears ${name} by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The oil pan runs ${mmWithInches(-gap)} into ${name}: it would have to rise ${mmWithInches(-gap)} just to touch free and ${mmWithInches(-fig.margin)} to leave the required ${mmWithInches(fig.required)}.`;
   const remedies = fig.status === 'ok' ? [] : panRemedies(spec, settings, config, worst, fig.status === 'fails');
   return measuredFinding({ ...fields, against: worst.obstacle.id }, fig, message, remedies);

@@ -7,6 +7,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures } from './envelope-common';
 import { driveWidthBox, placedForSpec, type PlacedEngine, type PlacedWidthBox } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export const RAIL_WIDTH_ID = 'envelope.rail-width';
 
@@ -174,7 +175,7 @@ export function runRailWidth({ spec, settings }: CheckContext): Finding {
   const where = `at ${mmWithInches(contact.x)} behind the axle line, where the rails are ${mmWithInches(contact.insideWidthMm)} apart inside`;
   const message =
     contact.gap >= 0
-      ? `${contact.box.name} clears the ${contact.side} frame rail by ${mmWithInches(contact.gap)} ${where}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `${contact.box.name} clears the ${contact.side} frame rail by ${mmWithInches(contact.gap)} ${where}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `${contact.box.name} is ${mmWithInches(-contact.gap)} wider than the space to the ${contact.side} frame rail ${where}.`;
   const remedies = fig.status === 'ok' ? [] : railRemedies(spec, settings, contact, fig.status === 'fails' ? 0 : settings.tightBandMm);
   return measuredFinding({ ...fields, against: `frame-rail-${contact.side}` }, fig, message, remedies);

@@ -6,6 +6,7 @@ import { COMMON_PRACTICE, figures } from './envelope-common';
 import { placedForSpec, type PlacedWidthBox } from './placed-engine';
 import { clearFinding } from './rail-width';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export const STEERING_BOX_ID = 'envelope.steering-box';
 
@@ -50,7 +51,7 @@ export function runSteeringBox({ spec, settings }: CheckContext): Finding {
   const fig = figures(worst.gap, settings.minSteeringBoxGapMm, settings);
   const message =
     worst.gap >= 0
-      ? `${worst.box.name} clears the steering box by ${mmWithInches(worst.gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `${worst.box.name} clears the steering box by ${mmWithInches(worst.gap)}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `${worst.box.name} reaches ${mmWithInches(-worst.gap)} past the inboard face of the steering box.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {

@@ -5,6 +5,7 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy, solvePlacementChange, worstGap } from './envelope-common';
 import { obstaclesOfKinds, placedForSpec, placeEngine } from './placed-engine';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 import { outlineGapValue } from '../../geometry/outline-gap';
 
 export const TRANSMISSION_TUNNEL_ID = 'envelope.transmission-tunnel';
@@ -33,7 +34,7 @@ export function runTransmissionTunnel({ spec, settings }: CheckContext): Finding
   const fig = figures(gap, settings.minFirewallGapMm, settings);
   const message =
     gap >= 0
-      ? `The bellhousing and transmission clear the tunnel (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required, a margin of ${mmWithInches(fig.margin)}.`
+      ? `The bellhousing and transmission clear the tunnel (${worst.obstacle.name}) by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The transmission runs ${mmWithInches(-gap)} into the tunnel (${worst.obstacle.name}); it needs ${mmWithInches(-fig.margin)} more room.`;
   const remedies: Remedy[] = [];
   if (fig.status !== 'ok') {

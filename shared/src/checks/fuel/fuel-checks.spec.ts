@@ -61,6 +61,32 @@ describe('fuel.pump-flow', () => {
     expect(checkFuelPumpFlow(context(specWith((s) => (s.chassis.fuelSystem.pumpRatedPsi = 43.5)))).status).toBe('fails');
   });
 
+  it('never prints a made-up zero flow: a pump that cannot reach injection pressure has no "found" figure', () => {
+    // Source: SAE J1832 (port injectors at their rated pressure; 400 kPa = 58.0 psi). From memory: a carburetor
+    // pump gives about 4–8 psi, so it has no flow at 58 psi to compare. Its own figures are quoted as entered.
+    const carb = checkFuelPumpFlow(context(specWith((s) => (s.chassis.fuelSystem = { kind: 'carburetor', pumpFlowLph: 150, pumpRatedPsi: 8, regulatorPsi: 0 }))));
+    expect(carb).toMatchObject({ status: 'fails', measured: null, margin: null });
+    expect(carb.message).toContain('low-pressure pump (150.0 L/h at 8.0 psi) cannot feed injection');
+    expect(carb.message).not.toMatch(/\b0\.0 (L\/h|psi)/);
+    const low = checkFuelPumpFlow(context(specWith((s) => (s.chassis.fuelSystem.pumpRatedPsi = 43.5))));
+    expect(low).toMatchObject({ status: 'fails', measured: null, margin: null });
+    expect(low.message).toContain('rated at only 43.5 psi, so its 190.0 L/h is not available at 58.0 psi');
+  });
+
+  it('a pump flow or pressure not entered is not given: unknown, naming what to enter', () => {
+    // Common practice (no published source): a pump's flow of 0 is a figure nobody entered, not a pump giving nothing.
+    const flow = checkFuelPumpFlow(context(specWith((s) => (s.chassis.fuelSystem.pumpFlowLph = 0))));
+    expect(flow).toMatchObject({ status: 'unknown', measured: null, missing: ['chassis.fuelSystem.pumpFlowLph'] });
+    expect(flow.message).toMatch(/^Cannot check the fuel pump flow: the chassis fuel pump's rated flow is not given\./);
+    expect(flow.message).toMatch(/enter it under the chassis model's fuel system/);
+    const both = checkFuelPumpFlow(context(specWith((s) => Object.assign(s.chassis.fuelSystem, { pumpFlowLph: 0, pumpRatedPsi: 0 }))));
+    expect(both.missing).toEqual(['chassis.fuelSystem.pumpFlowLph', 'chassis.fuelSystem.pumpRatedPsi']);
+    expect(both.message).toMatch(/rated flow and the chassis fuel pump's rated pressure are not given/);
+    expect(both.message).not.toMatch(/\b0\.0 (L\/h|psi)/);
+    const carbUnknown = checkFuelPumpFlow(context(specWith((s) => (s.chassis.fuelSystem = { kind: 'carburetor', pumpFlowLph: 0, pumpRatedPsi: 0, regulatorPsi: 0 }))));
+    expect(carbUnknown.message).toContain('low-pressure pump (flow and pressure not given) cannot feed injection');
+  });
+
   it('scales with power given in kW', () => {
     // Derived: 500 hp → 250 lb/h → 197.16 L/h with margin.
     const finding = checkFuelPumpFlow(context(specWith((s) => (s.goals.targetPowerKw = hpToKw(500)))));
@@ -76,6 +102,24 @@ describe('fuel.system-pressure', () => {
     const off = checkFuelSystemPressure(context(specWith((s) => (s.chassis.fuelSystem.regulatorPsi = 43.5))));
     expect(off).toMatchObject({ status: 'fails', measured: 43.5, required: 58 });
     expect(off.remedies[0]).toMatchObject({ category: 'fuel-regulator', requires: { pressurePsi: 58 } });
+  });
+
+  it('a carburetor system without a regulator says so, never "at 0.0 psi"', () => {
+    // Common practice (no published source): a carburetor system runs at its pump's pressure when it has no regulator.
+    const carb = checkFuelSystemPressure(context(specWith((s) => (s.chassis.fuelSystem = { kind: 'carburetor', pumpFlowLph: 150, pumpRatedPsi: 8, regulatorPsi: 0 }))));
+    expect(carb).toMatchObject({ status: 'fails', measured: 8, required: 58 });
+    expect(carb.message).toContain('carburetor fuel system (pump 150.0 L/h at 8.0 psi, no regulator)');
+    expect(carb.message).not.toMatch(/\b0\.0 psi/);
+    const bare = checkFuelSystemPressure(context(specWith((s) => (s.chassis.fuelSystem = { kind: 'carburetor', pumpFlowLph: 0, pumpRatedPsi: 0, regulatorPsi: 0 }))));
+    expect(bare).toMatchObject({ status: 'fails', measured: null, margin: null });
+  });
+
+  it('an injection regulator pressure not entered is not given: unknown, naming what to enter', () => {
+    const f = checkFuelSystemPressure(context(specWith((s) => (s.chassis.fuelSystem.regulatorPsi = 0))));
+    expect(f).toMatchObject({ status: 'unknown', measured: null, missing: ['chassis.fuelSystem.regulatorPsi'] });
+    expect(f.message).toBe(
+      "Cannot check the fuel system pressure: the pressure the chassis fuel regulator holds is not given. The engine is rated at 58.0 psi; enter it under the chassis model's fuel system (from the pump's label or data sheet, or a flow and pressure test).",
+    );
   });
 
   it('fails on a carburetor system', () => {

@@ -1,9 +1,10 @@
 import { fuelMassFlowLbhFromKw, requiredPumpFlowLph } from '../../fuel/fuel-flow';
 import type { Finding } from '../../types/finding';
-import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { describeMissingInput, measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
 import { efiFuelSupplyRemedies } from './fuel-pump-flow';
 import { formatFigure } from '../../units/figure-format';
+import { carburetorSystemPsi, describeChassisPump, enterFuelFigures, givenFigure, missingFuelFigures } from './fuel-system-figures';
 
 const FIELDS: FindingFields = {
   checkId: 'fuel.system-pressure',
@@ -23,11 +24,22 @@ export function checkFuelSystemPressure({ spec, settings }: CheckContext): Findi
     settings.fuelPumpMargin,
   );
   if (system.kind === 'carburetor') {
+    // The pressure a carburetor system runs at, as given (its regulator, else the pump's rating); never a made-up 0 psi.
+    const psi = carburetorSystemPsi(system);
+    const regulator = givenFigure(system.regulatorPsi) === null ? 'no regulator' : `regulator at ${formatFigure(system.regulatorPsi, 'psi')}`;
     return measuredFinding(
       FIELDS,
-      { measured: system.regulatorPsi, required, margin: -Math.abs(required - system.regulatorPsi), status: 'fails' },
-      `The chassis has a carburetor fuel system at ${formatFigure(system.regulatorPsi, 'psi')}; the engine's injection needs ${formatFigure(required, 'psi')}, so the system needs an injection pump and regulator.`,
+      { measured: psi, required, margin: psi === null ? null : -Math.abs(required - psi), status: 'fails' },
+      `The chassis has a carburetor fuel system (pump ${describeChassisPump(system)}, ${regulator}); the engine's injection needs ${formatFigure(required, 'psi')}, so the system needs an injection pump and regulator.`,
       efiFuelSupplyRemedies(spec, minFlow),
+    );
+  }
+  const missing = missingFuelFigures(system, ['regulatorPsi']);
+  if (missing.length > 0) {
+    return unknownFinding(
+      FIELDS,
+      missing,
+      `Cannot check the fuel system pressure: ${missing.map(describeMissingInput).join(' and ')} is not given. The engine is rated at ${formatFigure(required, 'psi')}; ${enterFuelFigures(missing.length)}.`,
     );
   }
   const difference = system.regulatorPsi - required;

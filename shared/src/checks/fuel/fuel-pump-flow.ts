@@ -1,9 +1,10 @@
 import { fuelMassFlowLbhFromKw, requiredPumpFlowLph } from '../../fuel/fuel-flow';
 import type { Finding, Remedy } from '../../types/finding';
 import type { FitSpec } from '../../types/fit-spec';
-import { measuredFinding, statusFromMargin, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { describeMissingInput, measuredFinding, statusFromMargin, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
 import { FUEL_SYSTEM_CAUTION } from './fuel-caution';
 import { formatFigure } from '../../units/figure-format';
+import { describeChassisPump, enterFuelFigures, givenFigure, missingFuelFigures } from './fuel-system-figures';
 
 /** The pump flow the engine needs, as every message and note prints it (rounded up to 0.1 L/h). */
 export function formatRequiredFlow(lph: number): string {
@@ -48,28 +49,40 @@ export function checkFuelPumpFlow({ spec, settings }: CheckContext): Finding {
   const needPsi = spec.engine.fuelPressurePsi;
   const remedies = efiFuelSupplyRemedies(spec, required);
   const need = `The engine burns ${formatFigure(massFlow, 'lb/h')} of fuel at ${formatFigure(spec.goals.targetPowerKw, 'kW', { decimals: 0 })}, so the pump must deliver at least ${formatRequiredFlow(required)} at ${formatFigure(needPsi, 'psi')} (${Math.round(settings.fuelPumpMargin * 100)} % margin)`;
+  // A pump that cannot reach injection pressure delivers no usable flow there: the check fails without a "found"
+  // figure (null, never a made-up 0 L/h); the sentence gives the pump's own figures as entered.
   if (system.kind === 'carburetor') {
     return measuredFinding(
       FIELDS,
-      { measured: 0, required, margin: -required, status: 'fails' },
-      `${need}; the chassis has a carburetor fuel system whose low-pressure pump cannot feed injection.`,
+      { measured: null, required, margin: null, status: 'fails' },
+      `${need}; the chassis has a carburetor fuel system whose low-pressure pump (${describeChassisPump(system)}) cannot feed injection.`,
       remedies,
     );
   }
-  if (system.pumpRatedPsi < needPsi) {
+  const missing = missingFuelFigures(system, ['pumpFlowLph', 'pumpRatedPsi']);
+  if (missing.length > 0) {
+    return unknownFinding(
+      FIELDS,
+      missing,
+      `Cannot check the fuel pump flow: ${missing.map(describeMissingInput).join(' and ')} ${missing.length === 1 ? 'is' : 'are'} not given. ${need}; ${enterFuelFigures(missing.length)}.`,
+    );
+  }
+  const pumpFlow = givenFigure(system.pumpFlowLph)!;
+  const pumpPsi = givenFigure(system.pumpRatedPsi)!;
+  if (pumpPsi < needPsi) {
     return measuredFinding(
       FIELDS,
-      { measured: 0, required, margin: -required, status: 'fails' },
-      `${need}; the chassis pump is rated at only ${formatFigure(system.pumpRatedPsi, 'psi')}.`,
+      { measured: null, required, margin: null, status: 'fails' },
+      `${need}; the chassis pump is rated at only ${formatFigure(pumpPsi, 'psi')}, so its ${formatFigure(pumpFlow, 'L/h')} is not available at ${formatFigure(needPsi, 'psi')}.`,
       remedies,
     );
   }
-  const margin = system.pumpFlowLph - required;
+  const margin = pumpFlow - required;
   const status = statusFromMargin(margin, settings.fuelTightBandFraction * required);
   return measuredFinding(
     FIELDS,
-    { measured: system.pumpFlowLph, required, margin, status },
-    `${need}; the chassis pump gives ${formatFigure(system.pumpFlowLph, 'L/h')} at ${formatFigure(system.pumpRatedPsi, 'psi')}.`,
+    { measured: pumpFlow, required, margin, status },
+    `${need}; the chassis pump gives ${formatFigure(pumpFlow, 'L/h')} at ${formatFigure(pumpPsi, 'psi')}.`,
     remedies.slice(0, 1),
   );
 }

@@ -24,6 +24,15 @@ describe('mounts.engine-mount-*', () => {
     expect(part).toMatchObject({ kind: 'part', category: 'mount-adapter', partIds: ['adapter-fits'] });
     expect(f.remedies[1]).toMatchObject({ kind: 'fabrication', laborHours: 6 });
   });
+  it('blocked without a chosen adapter: the sentence says it does not bolt up and offers the adapter, never that it is covered', () => {
+    // Common practice (no published source): a mount offset past the slotted-hole tolerance needs an adapter
+    // or brackets before the engine bolts down. Derived: 25.377 − 3 = 22.377 mm over the tolerance.
+    const f = runCheck(ENGINE_MOUNT_RIGHT_CHECK, boxFitSpec());
+    expect(f.status).toBe('fails');
+    expect(f.message).toMatch(/25\.4 mm \(1\.00 in\) in all, 22\.4 mm \(0\.88 in\) more than the 3\.0 mm \(0\.12 in\) the mounts take up, so it does not bolt up directly/);
+    expect(f.message).toMatch(/choose a mount adapter: the catalog's Fitting adapter would cover that offset\.$/);
+    expect(f.message).not.toMatch(/\bcovers that offset/);
+  });
   it('within the direct-fit tolerance (2 mm) is ok, past it fails; fabrication only when no adapter covers', () => {
     const spec = boxFitSpec();
     const near = { ...spec, chassis: { ...spec.chassis, mountPads: { ...spec.chassis.mountPads, left: { x: 702, y: -250, z: 400 } } } };
@@ -62,7 +71,7 @@ describe('mounts.engine-mount-*', () => {
       const f = runCheck(ENGINE_MOUNT_RIGHT_CHECK, chosen('adapter-roomy', [ROOMY]));
       expect(f).toMatchObject({ status: 'ok', measured: 12, required: 30, margin: 18, limit: 'max', remedies: [] });
       expect(f.message).toMatch(/^The chosen adapter Roomy adapter takes up the right offset/);
-      expect(f.message).toMatch(/sideways offset leaves 18\.0 mm \(0\.71 in\) to spare/);
+      expect(f.message).toMatch(/tightest sideways: 18\.0 mm \(0\.71 in\) to spare/);
     });
 
     it('tight: within the tight band of the sideways reach; only a roomier adapter is offered', () => {

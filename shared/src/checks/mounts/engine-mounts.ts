@@ -5,6 +5,7 @@ import type { CheckContext, CheckDefinition, FindingFields } from '../check-defi
 import { measuredFinding, statusFromMargin, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE } from '../envelope/envelope-common';
 import { mmWithInches } from '../../units/figure-format';
+import { marginWords } from '../../units/margin-words';
 
 export interface MountOffset {
   side: SideName;
@@ -116,9 +117,13 @@ export function runEngineMount({ spec, settings }: CheckContext, side: SideName)
   if (status === 'ok') {
     message = `The ${side} engine mount boss lands ${mmWithInches(o.distance)} from the chassis pad, ${describe(o)}; it bolts up directly, since up to ${mmWithInches(required)} is taken up.`;
   } else {
+    // Blocked as chosen: without an adapter the mount does not bolt up. A catalog adapter that would bridge the
+    // offset is a way out (its remedy), not the state of the build, so the sentence says it would, once chosen.
     const adapters = coveringAdapters(spec, o);
-    message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss, ${mmWithInches(o.distance)} in all; ${
-      adapters.length ? `the catalog adapter ${adapters[0].name} covers that offset.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
+    message = `The chassis pad sits ${describe(o)} of the ${side} engine mount boss, ${mmWithInches(o.distance)} in all, ${mmWithInches(-margin)} more than the ${mmWithInches(required)} the mounts take up, so it does not bolt up directly; ${
+      adapters.length
+        ? `choose a mount adapter: the catalog's ${adapters[0].name} would cover that offset.`
+        : 'no listed adapter covers that offset, so the mounts must be fabricated.'
     }`;
     remedies = mountRemedies(spec, settings, o, adapters);
   }
@@ -140,14 +145,14 @@ function runWithChosenAdapter(spec: FitSpec, settings: CheckContext['settings'],
   const offset = `the chassis pad sits ${describe(o)} of the ${o.side} engine mount boss, ${mmWithInches(o.distance)} in all`;
   if (status !== 'fails') {
     const reach = `${mmWithInches(adapter.maxDxMm)} fore-aft, ${mmWithInches(adapter.maxDzMm)} vertical and ${mmWithInches(adapter.maxDyMm)} sideways`;
-    const message = `The chosen adapter ${adapter.name} takes up the ${o.side} offset: ${offset}, within its reach of ${reach}; the ${tightest.words} offset leaves ${mmWithInches(tightest.slackMm)} to spare.`;
+    const message = `The chosen adapter ${adapter.name} takes up the ${o.side} offset: ${offset}, within its reach of ${reach}; tightest ${tightest.words}: ${marginWords(tightest.slackMm, mmWithInches, 'max')}.`;
     // Tight: name only roomier adapters (clear of the tight band on every axis); fabrication is not needed.
     const roomier = coveringAdapters(spec, o).filter((a) => a.id !== adapter.id && adapterSlack(a, o)[0].slackMm >= settings.tightBandMm);
     return measuredFinding(fields, figures, message, roomier.length ? mountRemedies(spec, settings, o, roomier).slice(0, 1) : []);
   }
   const adapters = coveringAdapters(spec, o);
   const message = `The chosen adapter ${adapter.name} does not cover the ${o.side} offset: the ${tightest.words} offset of ${mmWithInches(tightest.offsetMm)} is ${mmWithInches(-tightest.slackMm)} past its ${mmWithInches(tightest.limitMm)} reach (${offset}); ${
-    adapters.length ? `the catalog adapter ${adapters[0].name} covers that offset.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
+    adapters.length ? `the catalog's ${adapters[0].name} would cover it instead.` : 'no listed adapter covers that offset, so the mounts must be fabricated.'
   }`;
   return measuredFinding(fields, figures, message, mountRemedies(spec, settings, o, adapters));
 }

@@ -1,4 +1,4 @@
-import type { Finding, PlacementProposal } from '@swapwright/shared';
+import { formatQuantity, marginWords, type Finding, type PlacementProposal, type ProposalBound } from '@swapwright/shared';
 import { Typography } from 'antd';
 import { useUnits } from '@/hooks/use-units';
 
@@ -13,8 +13,9 @@ export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
   const units = useUnits();
   const { placement, boundedBy, allPass } = proposal;
   const title = (checkId: string) => findings.find((f) => f.checkId === checkId)?.title ?? checkId;
-  const room = (margin: number, unit: 'mm' | 'deg') =>
-    unit === 'deg' ? `${margin < 0 ? '−' : ''}${Math.abs(margin).toFixed(1)}°` : `${margin < 0 ? '−' : ''}${units.formatLength(Math.abs(margin))}`;
+  // "0.25 in to spare", "short by 0.12 in", "2.0° over": shared's one wording of a signed margin.
+  const room = (b: ProposalBound) =>
+    marginWords(b.margin, (size) => (b.unit === 'deg' ? formatQuantity(size, 'angle', units.system) : units.formatLength(size)), b.limit);
   return (
     <div data-testid="placement-proposal">
       <Typography.Text strong>Best placement found</Typography.Text>
@@ -30,7 +31,7 @@ export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
           <ul style={{ margin: 0, paddingLeft: 18, fontSize: 13 }}>
             {boundedBy.map((b) => (
               <li key={b.checkId}>
-                {title(b.checkId)}: {room(b.margin, b.unit)} to spare
+                {title(b.checkId)}: {room(b)}
               </li>
             ))}
           </ul>

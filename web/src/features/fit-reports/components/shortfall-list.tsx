@@ -126,22 +126,27 @@ export function ShortfallList({ shortfalls, ...rest }: ShortfallListProps) {
               </Typography.Text>
             ) : (
               <Space size={16} wrap>
-                <span>
-                  <Typography.Text type="secondary">Found </Typography.Text>
-                  <Typography.Text strong data-testid="shortfall-measured">
-                    {formatFigure(f.measured, f.unit, units)}
-                  </Typography.Text>
-                </span>
+                {/* No found figure (a pump that cannot reach the pressure at all): only what is needed, never a made-up zero. */}
+                {f.measured !== null && (
+                  <span>
+                    <Typography.Text type="secondary">Found </Typography.Text>
+                    <Typography.Text strong data-testid="shortfall-measured">
+                      {formatFigure(f.measured, f.unit, units)}
+                    </Typography.Text>
+                  </span>
+                )}
                 <span>
                   <Typography.Text type="secondary">Needs </Typography.Text>
                   <Typography.Text>{formatRequirement(f, units)}</Typography.Text>
                 </span>
-                <span>
-                  <Typography.Text type="secondary">Margin </Typography.Text>
-                  <Typography.Text type={f.status === 'fails' ? 'danger' : undefined} data-testid="shortfall-margin">
-                    {formatMargin(f, units)}
-                  </Typography.Text>
-                </span>
+                {f.margin !== null && (
+                  <span>
+                    <Typography.Text type="secondary">Margin </Typography.Text>
+                    <Typography.Text type={f.status === 'fails' ? 'danger' : undefined} data-testid="shortfall-margin">
+                      {formatMargin(f, units)}
+                    </Typography.Text>
+                  </span>
+                )}
               </Space>
             )}
           </Flex>

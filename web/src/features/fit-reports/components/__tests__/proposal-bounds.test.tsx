@@ -1,4 +1,4 @@
-import { proposePlacement } from '@swapwright/shared';
+import { proposePlacement, type PlacementProposal } from '@swapwright/shared';
 import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN, DEMO_REAR_SUMP_PICKUP } from '@swapwright/shared/fixtures';
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
@@ -21,5 +21,30 @@ describe('ProposalBounds', () => {
     const first = proposal.boundedBy[0];
     const title = findings.find((f) => f.checkId === first.checkId)?.title ?? first.checkId;
     expect(box.textContent).toContain(title);
+  });
+
+  it('a negative margin reads as over or short, never as room to spare', () => {
+    // Common practice (no published source): a U-joint past its maximum angle is "over" it; a clearance under its
+    // minimum is "short by" the amount.
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const proposal: PlacementProposal = {
+      placement: { setbackMm: 700, heightMm: 590, tiltDeg: 3 },
+      allPass: false,
+      score: -8,
+      boundedBy: [
+        { checkId: 'drivetrain.u-joint-angles', against: 'driveline', margin: -2, unit: 'deg', limit: 'max', status: 'fails', normalizedMargin: -8 },
+        { checkId: 'envelope.hood', against: 'hood', margin: -3.048, unit: 'mm', limit: 'min', status: 'fails', normalizedMargin: -0.5 },
+        { checkId: 'envelope.ground-clearance', against: 'ground', margin: 12.7, unit: 'mm', limit: 'min', status: 'ok', normalizedMargin: 2 },
+      ],
+      margins: [],
+      tilts: [],
+    };
+    renderWithApp(<ProposalBounds proposal={proposal} findings={[]} />);
+    const items = screen.getAllByRole('listitem').map((li) => li.textContent);
+    expect(items).toEqual([
+      'drivetrain.u-joint-angles: 2.0° over',
+      'envelope.hood: short by 0.12 in',
+      'envelope.ground-clearance: 0.50 in to spare',
+    ]);
   });
 });

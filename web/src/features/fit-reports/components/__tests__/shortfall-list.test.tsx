@@ -1,4 +1,5 @@
-import type { Finding } from '@swapwright/shared';
+import { runFitCheck, type Finding } from '@swapwright/shared';
+import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
@@ -98,6 +99,24 @@ describe('ShortfallList', () => {
     const row = screen.getByTestId('shortfall-fuel.pump-flow');
     expect(within(row).getByText('The pump must deliver at least 126.2 L/h at 399.9 kPa.')).toBeInTheDocument();
     expect(row.textContent).not.toMatch(/psi|gal\/h|lb\/h/);
+    window.localStorage.removeItem('swapwright.unitSystem');
+  });
+
+  it('a check without an honest found figure shows what it needs and no made-up zero', () => {
+    // Source: SAE J1832 (port injectors at rated pressure, 400 kPa = 58.0 psi). From memory: a carburetor pump gives
+    // about 4–8 psi, so it has no flow at injection pressure; the demo's carburetor chassis reads so.
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const spec = { ...DEMO_FIT_SPEC, chassis: { ...DEMO_FIT_SPEC.chassis, fuelSystem: { kind: 'carburetor' as const, pumpFlowLph: 150, pumpRatedPsi: 8, regulatorPsi: 0 } } };
+    const fuel = runFitCheck(spec).findings.filter((f) => f.group === 'fuel' && f.status === 'fails');
+    renderWithApp(<ShortfallList shortfalls={fuel} />);
+    const pump = screen.getByTestId('shortfall-fuel.pump-flow');
+    expect(within(pump).queryByTestId('shortfall-measured')).toBeNull();
+    expect(within(pump).queryByTestId('shortfall-margin')).toBeNull();
+    expect(pump.textContent).toMatch(/Needs at least 36\.3 gal\/h/);
+    expect(pump.textContent).toContain('low-pressure pump (39.6 gal/h at 8.0 psi) cannot feed injection');
+    const pressure = screen.getByTestId('shortfall-fuel.system-pressure');
+    expect(pressure.textContent).toContain('no regulator');
+    for (const row of [pump, pressure]) expect(row.textContent).not.toMatch(/\b0\.0 (gal\/h|psi|L\/h)|—/);
     window.localStorage.removeItem('swapwright.unitSystem');
   });
 
