@@ -179,6 +179,25 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       await tabs.scrollIntoViewIfNeeded();
       await tabs.screenshot({ path: join(ARTIFACTS_DIR, 'screenshots', 'fabricator-check-photo-phone.png') });
 
+      // A wrong photo (another bay's truck) goes up by mistake: the fabricator removes it after a confirmation.
+      const second = page.waitForResponse((r) => /\/checks\/[^/]+\/photos$/.test(r.url()) && r.request().method() === 'POST');
+      await tabs.getByLabel('Take or add photos: Pickup bolted at both tabs').setInputFiles({ name: 'wrong-truck.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(page, { shade: '#b07a52' }) });
+      expect((await second).status()).toBe(201);
+      const photos = tabs.getByTestId('check-photo');
+      await expectVisible(photos.nth(1).getByRole('img'));
+      expect(await photos.count()).toBe(2);
+      await photos.nth(1).getByRole('button', { name: /^Remove photo/ }).click();
+      const confirmRemoval = page.locator('.ant-popconfirm').filter({ hasText: 'Remove this photo?' });
+      await confirmRemoval.waitFor({ state: 'visible' });
+      await expectFitsWidth(page);
+      await saveScreenshot(page, 'fabricator-check-photo-remove-phone');
+      const removed = page.waitForResponse((r) => /\/work-order-photos\/[^/]+$/.test(r.url()) && r.request().method() === 'DELETE');
+      await confirmRemoval.getByRole('button', { name: 'Remove', exact: true }).click();
+      expect((await removed).status()).toBe(204);
+      await photos.nth(1).waitFor({ state: 'detached' });
+      expect(await photos.count()).toBe(1);
+      await expectVisible(thumb);
+
       // Common practice (no published source): the pickup screen sits 6–10 mm above the sump floor; 14 mm is outside.
       const screen = page.getByTestId('check-oil-pan-pickup.screen-height');
       await screen.getByRole('spinbutton', { name: /Value for/ }).fill('14');

@@ -24,6 +24,11 @@ export function getStatus(error: unknown): number | null {
   return isAxiosError(error) ? (error.response?.status ?? null) : null;
 }
 
+/** Whether sending the same file again can help: not when the server refused the file's kind (415). */
+export function retryCanHelp(error: unknown): boolean {
+  return getStatus(error) !== 415;
+}
+
 /** A sentence a person can act on, for any error thrown by a request. */
 export function getErrorMessage(error: unknown): string {
   const body = getApiErrorBody(error);

@@ -52,7 +52,8 @@ export function MeasurementSheetPage() {
 
   const photoActions: PhotoActions = {
     canAdd: canAddMeasurementPhotos(user.role),
-    canDelete: (photo) => photo.uploadedById === user.id || user.role === 'owner',
+    // a signed-off sheet keeps its photos as the record of what was measured
+    canDelete: (photo) => s.signedOffAt === null && (photo.uploadedById === user.id || user.role === 'owner'),
     canReview: canEdit,
     pendingLabel: user.role === 'customer' ? 'Waiting for the shop' : 'From the customer',
     onAdd: uploads.add,

@@ -1,6 +1,6 @@
 import { Button, Flex, Image, Popconfirm, Progress, Tag, Typography } from 'antd';
 import { CameraButton, CameraIcon } from '@/components/camera-button';
-import { PHOTO_THUMB, PhotoThumb, PhotoTile } from '@/components/photo-tile';
+import { PhotoThumb, PhotoTile, UploadPreview } from '@/components/photo-tile';
 import { formatDateTime } from '@/lib/dates';
 import { useMeasurementPhotoUrl } from '../api/get-measurement-photo-file';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
@@ -8,7 +8,7 @@ import type { MeasurementPhoto } from '../types';
 
 export type PhotoActions = {
   canAdd: boolean;
-  /** Whether this person may delete the photo (its uploader or the owner). */
+  /** Whether this person may delete the photo (its uploader or the owner, while the sheet is not signed off). */
   canDelete: (photo: MeasurementPhoto) => boolean;
   /** Accept or replace a customer's photo (fabricator or owner). */
   canReview: boolean;
@@ -84,6 +84,7 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
   return (
     <PhotoTile
       testId={upload.status === 'done' ? 'photo-thumb' : 'photo-upload'}
+      wide={upload.status === 'failed'}
       footer={
         <Flex vertical gap={2}>
           <Progress
@@ -103,9 +104,11 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
                 {upload.error}
               </Typography.Text>
               <Flex vertical gap={6}>
-                <Button block type="primary" style={{ height: TOUCH }} onClick={() => actions.onRetry(upload.key)}>
-                  Retry
-                </Button>
+                {upload.retryable && (
+                  <Button block type="primary" style={{ height: TOUCH }} onClick={() => actions.onRetry(upload.key)}>
+                    Retry
+                  </Button>
+                )}
                 <Button block style={{ height: TOUCH }} onClick={() => actions.onDismiss(upload.key)}>
                   Drop
                 </Button>
@@ -124,7 +127,7 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
         </Flex>
       }
     >
-      <Image src={upload.previewUrl} alt={alt} width={PHOTO_THUMB} height={PHOTO_THUMB} style={{ objectFit: 'cover', opacity: upload.status === 'done' ? 1 : 0.6 }} />
+      <UploadPreview url={upload.previewUrl} alt={alt} faded={upload.status !== 'done'} />
     </PhotoTile>
   );
 }

@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { getErrorMessage } from '@/lib/api-error';
+import { getErrorMessage, retryCanHelp } from '@/lib/api-error';
 import { measurementKeys } from '../api/measurement-keys';
 import { uploadMeasurementPhotos } from '../api/upload-measurement-photos';
 import type { MeasurementPhoto } from '../types';
@@ -17,6 +17,8 @@ export interface PhotoUpload {
   percent: number;
   status: PhotoUploadStatus;
   error: string | null;
+  /** False when the server refused the file's kind: sending it again cannot help, only another file. */
+  retryable: boolean;
   /** A thumbnail made in the browser from the file itself, shown before and while it uploads. */
   previewUrl: string;
   stored: MeasurementPhoto | null;
@@ -54,7 +56,7 @@ export function usePhotoUploads(projectId: string) {
         await client.invalidateQueries({ queryKey: measurementKeys.sheet(projectId) });
       } catch (error) {
         if (controller.signal.aborted) return;
-        patch(upload.key, { status: 'failed', error: getErrorMessage(error) });
+        patch(upload.key, { status: 'failed', error: getErrorMessage(error), retryable: retryCanHelp(error) });
       } finally {
         live.current.delete(upload.key);
       }
@@ -73,6 +75,7 @@ export function usePhotoUploads(projectId: string) {
         percent: 0,
         status: 'uploading' as const,
         error: null,
+        retryable: true,
         previewUrl: URL.createObjectURL(file),
         stored: null,
       }));

@@ -1,11 +1,12 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { Button, Flex, Image, Progress, Typography } from 'antd';
+import { Button, Flex, Image, Popconfirm, Progress, Typography } from 'antd';
 import { useEffect, useRef, useState } from 'react';
 import { CameraButton, CameraIcon } from '@/components/camera-button';
-import { PHOTO_THUMB, PhotoThumb, PhotoTile } from '@/components/photo-tile';
-import { getErrorMessage } from '@/lib/api-error';
+import { PhotoThumb, PhotoTile, UploadPreview } from '@/components/photo-tile';
+import { getErrorMessage, retryCanHelp } from '@/lib/api-error';
 import { formatDateTime } from '@/lib/dates';
 import { useCheckPhotoUrl } from '../api/get-check-photo-file';
+import { useRemoveCheckPhoto } from '../api/remove-check-photo';
 import { uploadCheckPhoto } from '../api/upload-check-photo';
 import { workOrderKeys } from '../api/work-order-keys';
 import type { WorkCheck } from '../types';
@@ -19,26 +20,51 @@ interface Upload {
   previewUrl: string;
   percent: number;
   error: string | null;
+  /** False when the server refused the file's kind: sending it again cannot help, only another file. */
+  retryable: boolean;
 }
 
 export interface CheckPhotosProps {
   workOrderId: string;
   check: WorkCheck;
-  /** Adding is open while the job is in the bay, to those who record checks. */
+  /** Adding and removing are open while the job is in the bay, to those who record checks (a finished job keeps its photos). */
   canAdd: boolean;
 }
 
 let counter = 0;
 
-function StoredPhoto({ photo, alt }: { photo: Stored; alt: string }) {
+/** A finger-sized height on a phone. */
+const TOUCH = 40;
+
+function StoredPhoto({ photo, alt, onRemove }: { photo: Stored; alt: string; onRemove: ((photo: Stored) => Promise<unknown>) | null }) {
   const { url, isError } = useCheckPhotoUrl(photo.id);
+  const taken = `${photo.uploadedByName}, ${formatDateTime(photo.createdAt)}`;
   return (
     <PhotoTile
       testId="check-photo"
       footer={
-        <Typography.Text type="secondary" style={{ fontSize: 11, lineHeight: 1.2 }}>
-          {photo.uploadedByName}, {formatDateTime(photo.createdAt)}
-        </Typography.Text>
+        <Flex vertical gap={2}>
+          <Typography.Text type="secondary" style={{ fontSize: 11, lineHeight: 1.2 }}>
+            {taken}
+          </Typography.Text>
+          {onRemove && (
+            <Popconfirm
+              title="Remove this photo?"
+              description="It is taken off the check and deleted."
+              okText="Remove"
+              cancelText="Keep"
+              okButtonProps={{ danger: true }}
+              // below the button, so the photo in question stays in view
+              placement="bottom"
+              // a refusal (the job was finished meanwhile) shows as the API client's notification
+              onConfirm={() => onRemove(photo).catch(() => undefined)}
+            >
+              <Button danger type="text" block style={{ height: TOUCH, paddingInline: 0 }} aria-label={`Remove photo (${taken})`}>
+                Remove
+              </Button>
+            </Popconfirm>
+          )}
+        </Flex>
       }
     >
       <PhotoThumb url={url} isError={isError} alt={alt} />
@@ -49,6 +75,7 @@ function StoredPhoto({ photo, alt }: { photo: Stored; alt: string }) {
 /** A check's optional photos: thumbnails (tap for the viewer), each upload with its progress and retry, and the camera button. */
 export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
   const queryClient = useQueryClient();
+  const remove = useRemoveCheckPhoto(workOrderId);
   const [uploads, setUploads] = useState<Upload[]>([]);
   const live = useRef(new Set<AbortController>());
   const alt = `Photo: ${check.label}`;
@@ -82,14 +109,14 @@ export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
       queryClient.setQueryData(workOrderKeys.detail(order.id), order);
       drop(upload.key);
     } catch (error) {
-      if (!controller.signal.aborted) patch(upload.key, { error: getErrorMessage(error) });
+      if (!controller.signal.aborted) patch(upload.key, { error: getErrorMessage(error), retryable: retryCanHelp(error) });
     } finally {
       live.current.delete(controller);
     }
   };
 
   const add = (files: File[]) => {
-    const added = files.map((file) => ({ key: `check-upload-${++counter}`, file, previewUrl: URL.createObjectURL(file), percent: 0, error: null }));
+    const added = files.map((file) => ({ key: `check-upload-${++counter}`, file, previewUrl: URL.createObjectURL(file), percent: 0, error: null, retryable: true }));
     setUploads((list) => [...list, ...added]);
     for (const upload of added) void send(upload);
   };
@@ -101,12 +128,13 @@ export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
         <Image.PreviewGroup>
           <Flex gap={10} wrap>
             {check.photos.map((photo) => (
-              <StoredPhoto key={photo.id} photo={photo} alt={alt} />
+              <StoredPhoto key={photo.id} photo={photo} alt={alt} onRemove={canAdd ? (gone) => remove.mutateAsync(gone.id) : null} />
             ))}
             {uploads.map((upload) => (
               <PhotoTile
                 key={upload.key}
                 testId="check-photo-upload"
+                wide={upload.error !== null}
                 footer={
                   <Flex vertical gap={2}>
                     <Progress percent={upload.percent} size="small" status={upload.error ? 'exception' : 'active'} aria-label={`Upload of ${upload.file.name}`} />
@@ -116,9 +144,11 @@ export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
                           {upload.error}
                         </Typography.Text>
                         <Flex gap={4}>
-                          <Button size="small" type="primary" onClick={() => void send(upload)}>
-                            Retry
-                          </Button>
+                          {upload.retryable && (
+                            <Button size="small" type="primary" onClick={() => void send(upload)}>
+                              Retry
+                            </Button>
+                          )}
                           <Button size="small" onClick={() => drop(upload.key)}>
                             Drop
                           </Button>
@@ -128,7 +158,7 @@ export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
                   </Flex>
                 }
               >
-                <Image src={upload.previewUrl} alt={alt} width={PHOTO_THUMB} height={PHOTO_THUMB} style={{ objectFit: 'cover', opacity: 0.6 }} />
+                <UploadPreview url={upload.previewUrl} alt={alt} faded />
               </PhotoTile>
             ))}
           </Flex>
