@@ -22,6 +22,11 @@ export const jobsQueryOptions = (query: JobQuery) =>
     },
   });
 
-export function useJobs(query: JobQuery) {
-  return useQuery(jobsQueryOptions(query));
+/**
+ * `pauseRefresh` holds the self-refresh while the person decides something about a row (a confirmation is open): a
+ * refresh then could change or drop the row under the open question.
+ */
+export function useJobs(query: JobQuery, { pauseRefresh = false }: { pauseRefresh?: boolean } = {}) {
+  const options = jobsQueryOptions(query);
+  return useQuery(pauseRefresh ? { ...options, refetchInterval: false } : options);
 }

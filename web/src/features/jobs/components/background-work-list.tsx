@@ -82,8 +82,10 @@ export type BackgroundWorkListProps = {
  */
 export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListProps) {
   const [paging, setPaging] = useState({ page: 1, pageSize: 20 });
+  // The job whose "Try again" confirmation is open: the list holds still meanwhile.
+  const [confirming, setConfirming] = useState<string | null>(null);
   const query = { ...paging, ...(state ? { state } : {}) };
-  const jobs = useJobs(query);
+  const jobs = useJobs(query, { pauseRefresh: confirming !== null });
   const retry = useRetryJob({
     onSuccess: (job) => notifySuccess({ title: 'Queued again', description: `${job.subject}: the server takes it up now.` }),
   });
@@ -121,9 +123,13 @@ export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListP
           }
         />
       )}
+      {jobs.isError && jobs.data && (
+        // A self-refresh that failed keeps the list in view (and any open confirmation on it); it tries again later.
+        <Alert type="info" showIcon style={{ marginBottom: 12 }} title="This list could not be refreshed just now; it shows the work as last read." />
+      )}
       {jobs.isPending ? (
         <LoadingState rows={6} />
-      ) : jobs.isError ? (
+      ) : !jobs.data ? (
         <ErrorState error={jobs.error} onRetry={() => void jobs.refetch()} />
       ) : jobs.data.items.length === 0 ? (
         <EmptyState description={EMPTY_TEXT[state ?? 'all']} />
@@ -158,6 +164,7 @@ export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListP
                       okText="Try again"
                       cancelText="Not now"
                       onConfirm={() => retry.mutateAsync(job.id)}
+                      onOpenChange={(open) => setConfirming((current) => (open ? job.id : current === job.id ? null : current))}
                     >
                       <Button type="primary" loading={retry.isPending && retry.variables === job.id} aria-label={`Try again: ${job.subject}`}>
                         Try again

@@ -2,6 +2,8 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import type { Job, JobPage } from '@/features/jobs/types';
+import { AxiosError } from 'axios';
+import { JOBS_REFRESH_MS } from '@/features/jobs/api/get-jobs';
 import { apiClient } from '@/lib/api-client';
 import { renderWithApp } from '@/test/render';
 import { BackgroundWorkPage } from '../background-work-page';
@@ -82,5 +84,33 @@ describe('BackgroundWorkPage', () => {
     expect(await screen.findByText(/Nothing stopped: every e-mail and payment event went through/)).toBeInTheDocument();
     expect(screen.getByTestId('location').textContent).toBe('/settings/background-work?state=dead');
     expect(get).toHaveBeenLastCalledWith('/jobs', expect.objectContaining({ params: { page: 1, pageSize: 20, state: 'dead' } }));
+  });
+
+  it('holds its self-refresh while a "Try again" confirmation is open, and takes it up again when it closes', async () => {
+    // Work is waiting, so the list refreshes itself every JOBS_REFRESH_MS.
+    const get = vi.spyOn(apiClient, 'get').mockResolvedValue({ data: pageOfJobs([stopped], { queued: 1, running: 0, done: 1, dead: 1 }) });
+    renderWithApp(<BackgroundWorkPage />, { route: '/settings/background-work?state=dead' });
+    await userEvent.click(await screen.findByRole('button', { name: `Try again: ${stopped.subject}` }));
+    const question = await screen.findByText(/goes back in the queue now with 8 fresh attempts/);
+    const calls = get.mock.calls.length;
+    await new Promise((resolve) => setTimeout(resolve, JOBS_REFRESH_MS + 600));
+    expect(get.mock.calls.length).toBe(calls);
+    expect(question).toBeVisible();
+    await userEvent.click(screen.getByRole('button', { name: 'Not now' }));
+    await waitFor(() => expect(get.mock.calls.length).toBeGreaterThan(calls), { timeout: JOBS_REFRESH_MS + 2000 });
+  });
+
+  it('a self-refresh that fails keeps the list in view with a note, instead of swapping it for an error page', async () => {
+    let calls = 0;
+    vi.spyOn(apiClient, 'get').mockImplementation(async () => {
+      calls += 1;
+      if (calls === 1) return { data: pageOfJobs([stopped], { queued: 1, running: 0, done: 1, dead: 1 }) };
+      throw new AxiosError('timeout of 20000ms exceeded', 'ECONNABORTED');
+    });
+    renderWithApp(<BackgroundWorkPage />, { route: '/settings/background-work?state=dead' });
+    await screen.findByRole('list', { name: 'Background work' });
+    expect(await screen.findByText(/could not be refreshed just now/, {}, { timeout: JOBS_REFRESH_MS + 2000 })).toBeInTheDocument();
+    expect(within(screen.getByRole('list', { name: 'Background work' })).getAllByTestId('job-row')).toHaveLength(1);
+    expect(screen.getByRole('button', { name: `Try again: ${stopped.subject}` })).toBeInTheDocument();
   });
 });
