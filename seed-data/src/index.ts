@@ -5,3 +5,4 @@ export * from './demo-projects';
 export * from './catalog';
 export * from './demo-labor-operations';
 export * from './demo-measurements';
+export * from './demo-story';
