@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Sets up and runs Swapwright on one machine.
-#   start     install what is missing, start a private MariaDB and the mail fake, migrate, seed, build, serve
+#   start     install what is missing, start a private MariaDB and the mail fake, migrate, seed, build, serve, play the demo story
 #   test      the same set-up on a fresh test database, then every suite; exits non-zero on any failure
 #   reset     stop everything and wipe the local data folder (.local/)
 #   services  start the test services only and leave them running (for working on the API); prints the env file
@@ -247,6 +247,9 @@ cmd_start() {
   node api/dist/main.js &
   API_PID=$!
   wait_for_api
+  say "Playing the demo story (once per database)"
+  # Jobs at every stage, made through the API as the shop's people would; the test and bench databases never get it.
+  npm run -s seed:story -w api || echo "The demo story did not finish (see above); the shop works without it."
   cat <<MSG
 
   Swapwright is running at  http://127.0.0.1:$PORT/

@@ -112,10 +112,11 @@ class Story {
     if (!reached(job, 'quote-sent')) return project.id;
 
     await estimator.post(`/parts-plans/${plan.id}/lock`);
+    const mailBefore = await this.newestMailId();
     const quote = await this.sendQuote(job, project.id);
     if (!reached(job, 'approved')) return project.id;
 
-    const link = await this.approvalLink(job, quote);
+    const link = await this.approvalLink(job, quote, mailBefore);
     const customer = StoryClient.anonymous(this.options.baseUrl);
     await customer.post(`/quote-links/${link}/answer`, { answer: 'accept' });
     if (!reached(job, 'deposit-paid')) return project.id;
@@ -181,15 +182,26 @@ class Story {
     return quote;
   }
 
+  private async inbox(): Promise<CapturedMail[]> {
+    const response = await fetch(this.options.mailFakeUrl);
+    if (!response.ok) throw new Error(`the mail fake at ${this.options.mailFakeUrl} answered ${response.status}`);
+    return (await response.json()) as CapturedMail[];
+  }
+
+  /** The mail fake lists the newest message first; it keeps messages of earlier runs, so only later ones count. */
+  private async newestMailId(): Promise<number> {
+    return (await this.inbox())[0]?.id ?? 0;
+  }
+
   /** The signed link in the newest e-mail of this quote's sent revision, as the customer clicks it. */
-  private async approvalLink(job: DemoStoryJob, quote: QuoteResponseDto): Promise<string> {
+  private async approvalLink(job: DemoStoryJob, quote: QuoteResponseDto, after: number): Promise<string> {
     const email = 'id' in job.customer ? null : job.customer.email;
     const mail = await waitFor(
       `the e-mail of quote ${quote.label}`,
-      async () => {
-        const inbox = (await (await fetch(this.options.mailFakeUrl)).json()) as CapturedMail[];
-        return inbox.find((message) => (!email || message.to.includes(email)) && message.subject.includes(`quote ${quote.label} for`));
-      },
+      async () =>
+        (await this.inbox()).find(
+          (message) => message.id > after && (!email || message.to.includes(email)) && message.subject.includes(`quote ${quote.label} for`),
+        ),
       (found) => found !== undefined,
     );
     const token = /\/quote-answer\/([A-Za-z0-9_\-.]+)/.exec(mail!.text)?.[1];
