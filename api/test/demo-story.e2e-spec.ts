@@ -107,6 +107,9 @@ describe('the demo story: one job at each stage, through the API', () => {
     const checks = bay.steps.flatMap((step: { checks: Array<{ key: string; recordings: number; photos: unknown[] }> }) => step.checks);
     expect(checks.find((check: { key: string }) => check.key === 'oil-pan-pickup.screen-height')).toMatchObject({ recordings: 2, latest: { result: 'pass' } });
     expect(checks.some((check: { photos: unknown[] }) => check.photos.length > 0)).toBe(true);
+    // The fit check was run again with the planned rear-sump pan before the quote: the bay's pan-gap check cites it passing.
+    const panGap = checks.find((check: { fitFinding: { checkId: string } | null }) => check.fitFinding?.checkId === 'envelope.sump-crossmember');
+    expect(panGap.fitFinding.status).toBe('ok');
     const done = await get(`/api/projects/${projectAt('done')}/work-order`);
     expect(done).toMatchObject({ state: 'finished', progress: { failed: 0, open: 0 } });
   });

@@ -26,7 +26,7 @@ export interface DemoStoryOptions {
 }
 
 export interface DemoStoryResult {
-  made: Array<{ stage: string; projectId: string; title: string }>;
+  made: Array<{ stage: string; projectId: string; title: string; ms: number }>;
   alreadyPresent: number;
   ms: number;
 }
@@ -57,7 +57,20 @@ export async function runDemoStory(options: DemoStoryOptions): Promise<DemoStory
       counter: await signInAs(options.baseUrl, 'counter'),
     };
     const story = new Story(options, staff);
-    for (const job of missing) made.push({ stage: job.stage, projectId: await story.play(job), title: job.title });
+    // Three jobs at a time from intake to the parts plan (the fabricator and the estimator work side by side); then,
+    // one after another and oldest first, quote, answer, deposit, counter and bay, so the quote numbers and who gets
+    // the last unit on the shelf follow the story.
+    const prepared: Array<{ projectId: string; plan: PartsPlanResponseDto | null; ms: number }> = [];
+    await inParallel(missing, 3, async (job, index) => {
+      const jobStarted = Date.now();
+      prepared[index] = { ...(await story.prepare(job, index)), ms: 0 };
+      prepared[index].ms = Date.now() - jobStarted;
+    });
+    for (const [index, job] of missing.entries()) {
+      const jobStarted = Date.now();
+      await story.finish(job, index, prepared[index]);
+      made.push({ stage: job.stage, projectId: prepared[index].projectId, title: job.title, ms: prepared[index].ms + Date.now() - jobStarted });
+    }
   }
   return { made, alreadyPresent: jobs.length - missing.length, ms: Date.now() - started };
 }
@@ -74,19 +87,29 @@ function tapeScatter(key: string, unit: 'mm' | 'deg'): number {
   return unit === 'deg' ? ((hash % 5) - 2) / 10 : (hash % 5) - 2;
 }
 
-async function inBatches<T>(items: T[], size: number, work: (item: T) => Promise<unknown>): Promise<void> {
-  for (let index = 0; index < items.length; index += size) await Promise.all(items.slice(index, index + size).map(work));
+/** Runs `work` on every item, at most `size` at a time. */
+async function inParallel<T>(items: T[], size: number, work: (item: T, index: number) => Promise<unknown>): Promise<void> {
+  let next = 0;
+  const worker = async () => {
+    while (next < items.length) {
+      const index = next++;
+      await work(items[index], index);
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(size, items.length) }, worker));
 }
 
 class Story {
-  private photoSeed = 1;
+  /** The last sheet being opened: the next one waits for it. */
+  private sheetOpening: Promise<unknown> = Promise.resolve();
 
   constructor(
     private readonly options: DemoStoryOptions,
     private readonly staff: Staff,
   ) {}
 
-  async play(job: DemoStoryJob): Promise<string> {
+  /** Intake to the parts plan: customer, project, selections, sheet and photos, fit report, plan and the re-check. */
+  async prepare(job: DemoStoryJob, index: number): Promise<{ projectId: string; plan: PartsPlanResponseDto | null }> {
     const { estimator, fabricator } = this.staff;
     const customerId = await this.customerOf(job);
     const project = await estimator.post<ProjectResponseDto>('/projects', {
@@ -99,38 +122,49 @@ class Story {
       goals: job.goals,
       placement: job.placement,
     });
+    const ready = { projectId: project.id, plan: null };
     if (job.fitSelections) await estimator.put(`/projects/${project.id}/fit-selections`, job.fitSelections);
-    if (!reached(job, 'measured')) return project.id;
+    if (!reached(job, 'measured')) return ready;
 
-    await this.measure(job, project.id);
-    if (!reached(job, 'fit-checked')) return project.id;
+    await this.measure(job, index, project.id);
+    if (!reached(job, 'fit-checked')) return ready;
 
     const report = await fabricator.post<{ id: string }>(`/projects/${project.id}/fit-reports`);
-    if (!reached(job, 'parts-planned')) return project.id;
+    if (!reached(job, 'parts-planned')) return ready;
 
     const plan = await estimator.post<PartsPlanResponseDto>(`/projects/${project.id}/parts-plans`, { objective: 'lowest-cost', fitReportId: report.id });
-    if (!reached(job, 'quote-sent')) return project.id;
+    if (!reached(job, 'quote-sent')) return ready;
 
+    // The fit check again with the planned pan, pickup, pump, controller and mount adapter, so the quote and the
+    // work order name a report of the parts the job is built with.
+    await estimator.patch(`/projects/${project.id}/fit-selections`, plannedSelections(plan));
+    await estimator.post(`/projects/${project.id}/fit-reports`);
+    return { projectId: project.id, plan };
+  }
+
+  /** From the locked plan on: quote and revision, the customer's answer and deposit, the counter, the bay. */
+  async finish(job: DemoStoryJob, index: number, { projectId, plan }: { projectId: string; plan: PartsPlanResponseDto | null }): Promise<void> {
+    if (!plan) return;
+    const { estimator, fabricator } = this.staff;
     await estimator.post(`/parts-plans/${plan.id}/lock`);
     const mailBefore = await this.newestMailId();
-    const quote = await this.sendQuote(job, project.id);
-    if (!reached(job, 'approved')) return project.id;
+    const quote = await this.sendQuote(job, projectId);
+    if (!reached(job, 'approved')) return;
 
     const link = await this.approvalLink(job, quote, mailBefore);
     const customer = StoryClient.anonymous(this.options.baseUrl);
     await customer.post(`/quote-links/${link}/answer`, { answer: 'accept' });
-    if (!reached(job, 'deposit-paid')) return project.id;
+    if (!reached(job, 'deposit-paid')) return;
 
     // The provider's test card; its signed webhook settles the deposit and the paid deposit opens the work order.
     await customer.post(`/quote-links/${link}/deposit`, { paymentMethod: 'pm_card_visa' });
-    const workOrderId = await this.workOrderOf(project.id);
+    const workOrderId = await this.workOrderOf(projectId);
     await this.counter(job, plan.id);
-    if (!reached(job, 'in-the-bay')) return project.id;
+    if (!reached(job, 'in-the-bay')) return;
 
     await fabricator.post(`/work-orders/${workOrderId}/start`);
-    await this.recordChecks(job, workOrderId);
+    await this.recordChecks(job, index, workOrderId);
     if (job.stage === 'done') await fabricator.post(`/work-orders/${workOrderId}/finish`);
-    return project.id;
   }
 
   private async customerOf(job: DemoStoryJob): Promise<string> {
@@ -144,7 +178,7 @@ class Story {
   }
 
   /** Every required point read off the tape (the catalog's figure, the tape's scatter, the job's own differences), photos, sign-off. */
-  private async measure(job: DemoStoryJob, projectId: string): Promise<void> {
+  private async measure(job: DemoStoryJob, index: number, projectId: string): Promise<void> {
     const { fabricator } = this.staff;
     const sheetPath = `/projects/${projectId}/measurement-sheet`;
     const sheet = await fabricator.get<MeasurementSheetResponseDto>(sheetPath);
@@ -155,13 +189,18 @@ class Story {
         const value = point.catalogValue! + (own ? own.delta : tapeScatter(`${job.title}:${point.id}`, point.unit));
         return { pointId: point.id, body: { value: String(Math.round(value * 10) / 10), unit: 'mm', ...(own?.note && { note: own.note }) } };
       });
-    // The first reading opens the sheet; the others go four at a time, as fast as the fabricator calls them out.
+    // The first reading opens the sheet, one sheet at a time (two sheets opened at the same moment can deadlock in
+    // MariaDB and answer 500); the other readings go eight at a time, as fast as the fabricator calls them out.
     const [first, ...rest] = readings;
     const put = (reading: (typeof readings)[number]) => fabricator.put(`${sheetPath}/values/${encodeURIComponent(reading.pointId)}`, reading.body);
-    if (first) await put(first);
-    await inBatches(rest, 4, put);
-    for (const photo of job.photos ?? []) {
-      const data = storyPhoto(this.photoSeed++);
+    if (first) {
+      const opened = this.sheetOpening.then(() => put(first));
+      this.sheetOpening = opened.catch(() => undefined);
+      await opened;
+    }
+    await inParallel(rest, 8, put);
+    for (const [photoIndex, photo] of (job.photos ?? []).entries()) {
+      const data = storyPhoto(index * 10 + photoIndex + 1);
       await fabricator.upload(`${sheetPath}/photos`, [{ data, fileName: photo.fileName, contentType: 'image/png' }], { pointId: photo.pointId });
     }
     await fabricator.post(`${sheetPath}/sign-off`);
@@ -235,7 +274,7 @@ class Story {
   }
 
   /** In the bay: the first half of the checks (one failed first where the scenario says so) and a photo; done: all of them. */
-  private async recordChecks(job: DemoStoryJob, workOrderId: string): Promise<void> {
+  private async recordChecks(job: DemoStoryJob, index: number, workOrderId: string): Promise<void> {
     const { fabricator } = this.staff;
     const order = await fabricator.get<WorkOrderResponseDto>(`/work-orders/${workOrderId}`);
     const checks = order.steps.flatMap((step) => step.checks);
@@ -249,10 +288,28 @@ class Story {
     const pictured = checks[0];
     if (pictured) {
       await fabricator.upload(`/work-orders/${workOrderId}/checks/${encodeURIComponent(pictured.key)}/photos`, [
-        { data: storyPhoto(this.photoSeed++), fileName: `${pictured.key}.png`, contentType: 'image/png' },
+        { data: storyPhoto(100 + index), fileName: `${pictured.key}.png`, contentType: 'image/png' },
       ]);
     }
   }
+}
+
+const SELECTION_OF_CATEGORY: Record<string, string> = {
+  'oil-pan': 'oilPanId',
+  'oil-pickup': 'oilPickupId',
+  'oil-pump': 'oilPumpId',
+  'engine-controller': 'controllerId',
+  'mount-adapter': 'mountAdapterId',
+};
+
+/** The plan's picks that carry a fit spec, as the fit selections they stand for. */
+function plannedSelections(plan: PartsPlanResponseDto): Record<string, string> {
+  const selections: Record<string, string> = {};
+  for (const pick of plan.result.picks) {
+    const field = SELECTION_OF_CATEGORY[pick.category];
+    if (field && pick.fitSpecId) selections[field] = pick.fitSpecId;
+  }
+  return selections;
 }
 
 /** A reading inside the check's range: its middle, or a little over its minimum when it has no maximum. */

@@ -18,7 +18,7 @@ async function main(): Promise<void> {
     console.log(`Demo story already present (${result.alreadyPresent} jobs); nothing changed.`);
     return;
   }
-  const stages = result.made.map((job) => job.stage).join(', ');
+  const stages = result.made.map((job) => (process.env.DEMO_STORY_TRACE ? `${job.stage} ${job.ms} ms` : job.stage)).join(', ');
   console.log(`Demo story: ${result.made.length} jobs added in ${seconds} s, one at each stage (${stages}).`);
 }
 
