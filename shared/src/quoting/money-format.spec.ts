@@ -1,4 +1,4 @@
-import { formatMoney, formatMoneyChange } from './money-format';
+import { formatMoney, formatMoneyChange, moneySign } from './money-format';
 
 // Source: Unicode CLDR, locale "en" (used for en-US), currency pattern "¤#,##0.00" and symbol "$" for USD,
 // "CA$" for CAD and "€" for EUR, as ECMA-402 Intl.NumberFormat with style "currency" applies it.
@@ -34,5 +34,13 @@ describe('formatMoneyChange', () => {
     expect(formatMoneyChange(8035, 'USD')).toBe('+$80.35');
     expect(formatMoneyChange(-10800, 'USD')).toBe('−$108.00');
     expect(formatMoneyChange(0, 'USD')).toBe('$0.00');
+  });
+});
+
+describe('moneySign', () => {
+  it('is the sign formatMoney writes, for the prefix of an amount box', () => {
+    expect(moneySign('USD')).toBe('$');
+    expect(moneySign('CAD')).toBe('CA$');
+    expect(moneySign('EUR')).toBe('€');
   });
 });

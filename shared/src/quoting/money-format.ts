@@ -24,3 +24,8 @@ export function formatMoneyChange(cents: number, currency: string): string {
   const sign = cents > 0 ? '+' : cents < 0 ? '−' : '';
   return `${sign}${formatMoney(Math.abs(cents), currency)}`;
 }
+
+/** The currency's sign as `formatMoney` writes it ("$", "CA$", "€"), for the prefix of an amount box. */
+export function moneySign(currency: string): string {
+  return formatterOf(currency).formatToParts(0).find((part) => part.type === 'currency')?.value ?? currency;
+}

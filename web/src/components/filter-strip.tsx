@@ -8,11 +8,14 @@ export type FilterStripProps<T extends string> = {
   onChange: (value: T) => void;
 };
 
-/** A list's filter as one segmented strip that scrolls sideways on its own on a phone, instead of the page. */
+/**
+ * A list's filter as one segmented strip. Where its choices do not fit on one line (a phone) they wrap onto the next
+ * (`.filter-strip` in global.css), so every choice stays in sight: none hides past the edge of the card.
+ */
 export function FilterStrip<T extends string>({ label, options, value, onChange }: FilterStripProps<T>) {
   return (
-    <div style={{ overflowX: 'auto', marginBottom: 12 }}>
-      <Segmented<T> aria-label={label} options={options} value={value} onChange={onChange} />
+    <div style={{ marginBottom: 12 }}>
+      <Segmented<T> className="filter-strip" aria-label={label} options={options} value={value} onChange={onChange} />
     </div>
   );
 }

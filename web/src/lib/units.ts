@@ -1,4 +1,4 @@
-import { formatQuantity, inchesToMm, mmToInches, parseLengthResult } from '@swapwright/shared';
+import { formatMoney, formatQuantity, inchesToMm, mmToInches, parseLengthResult } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -67,7 +67,8 @@ export function formatPower(kw: number | null | undefined, system: UnitSystem): 
   return formatQuantity(kw, 'power', system, { decimals: 0 });
 }
 
+/** Integer cents in the shop's currency, written as everywhere else (`formatMoney`: $5,131.91); a dash when there is none. */
 export function formatMoneyCents(cents: number | null | undefined, currency = 'USD'): string {
   if (cents === null || cents === undefined) return '—';
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
+  return formatMoney(cents, currency);
 }

@@ -1,5 +1,6 @@
 import { Tabs } from 'antd';
 import { PageHeader } from '@/components/page-header';
+import { useShop } from '@/features/shop/api/get-shop';
 import { CounterBoard } from '@/features/counter/components/counter-board';
 import { PartsImport } from '@/features/parts/components/parts-import';
 import { PartsTable } from '@/features/parts/components/parts-table';
@@ -7,11 +8,12 @@ import { SuppliersTable } from '@/features/parts/components/suppliers-table';
 
 /** The parts counter (owner and counter staff, who keep the catalog): jobs' matched parts lists, parts with stock and bins, suppliers, and supplier file import. */
 export function PartsCounterBody() {
+  const currency = useShop().data?.currency;
   return (
     <Tabs
       items={[
-        { key: 'jobs', label: 'Jobs', children: <CounterBoard /> },
-        { key: 'parts', label: 'Parts and stock', children: <PartsTable canEdit /> },
+        { key: 'jobs', label: 'Jobs', children: <CounterBoard currency={currency} /> },
+        { key: 'parts', label: 'Parts and stock', children: <PartsTable canEdit currency={currency} /> },
         { key: 'suppliers', label: 'Suppliers', children: <SuppliersTable canEdit /> },
         { key: 'import', label: 'Import CSV', children: <PartsImport /> },
       ]}

@@ -1,5 +1,6 @@
-import { Button, Card, Empty, Flex, Select, Space, Table, Tag, Typography } from 'antd';
+import { Button, Card, Empty, Flex, Grid, Select, Space, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
+import { palette } from '@/config/theme';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPickList } from '../api/download-pick-list';
 import { type CounterLine, useCounterLines } from '../api/get-counter-lines';
@@ -12,8 +13,13 @@ import { useReserveCounterLine } from '../api/reserve-counter-line';
 const STATUS_COLORS: Record<string, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue' };
 const STATUS_LABELS: Record<string, string> = { open: 'Not set aside', reserved: 'Set aside', 'to-order': 'To order', ordered: 'Ordered', received: 'Arrived, set aside' };
 
+export type CounterBoardProps = {
+  /** The shop's currency, for the plan's total. */
+  currency?: string;
+};
+
 /** The counter's job board: each project's latest plan as a matched parts list with stock and bins, reservations and a printable pick list. */
-export function CounterBoard() {
+export function CounterBoard({ currency }: CounterBoardProps) {
   const plans = useRecentPartsPlans();
   const [chosen, setChosen] = useState<string>();
   const planId = chosen ?? plans.data?.[0]?.id;
@@ -23,6 +29,8 @@ export function CounterBoard() {
   const release = useReleaseCounterLine();
   const mark = useMarkCounterLine();
   const receive = useReceiveCounterLine();
+  // Below antd's md (768 px) each line stacks (part, figures, bin, state, commands), so nothing hides past a phone's edge.
+  const narrow = Grid.useBreakpoint().md === false;
 
   if (plans.data && plans.data.length === 0) {
     return (
@@ -36,6 +44,40 @@ export function CounterBoard() {
     const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
     return from ? `${from.location} · ${from.bin || 'no bin'}` : 'no location';
   };
+  const statusTag = (status: string) => (
+    <Tag color={STATUS_COLORS[status]} data-testid="line-status">
+      {STATUS_LABELS[status] ?? status}
+    </Tag>
+  );
+  const lineActions = (line: CounterLine) => (
+    <Space wrap>
+      {['open', 'to-order', 'ordered'].includes(line.status) && (
+        <Button size="small" type="primary" disabled={line.available < line.quantity} loading={reserve.isPending && reserve.variables === line.id} onClick={() => reserve.mutate(line.id)}>
+          Reserve
+        </Button>
+      )}
+      {(line.status === 'reserved' || line.status === 'received') && (
+        <Button size="small" onClick={() => release.mutate(line.id)}>
+          Release
+        </Button>
+      )}
+      {line.status === 'open' && (
+        <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'to-order' })}>
+          To order
+        </Button>
+      )}
+      {(line.status === 'open' || line.status === 'to-order') && (
+        <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'ordered' })}>
+          Ordered
+        </Button>
+      )}
+      {(line.status === 'ordered' || line.status === 'to-order') && (
+        <Button size="small" onClick={() => receive.mutate({ lineId: line.id, location: line.stock[0]?.location ?? 'Main store' })}>
+          Received
+        </Button>
+      )}
+    </Space>
+  );
 
   return (
     <Card className="pick-list">
@@ -62,68 +104,60 @@ export function CounterBoard() {
           </Space>
         )}
       </Flex>
-      <Table<CounterLine>
-        size="small"
-        rowKey="id"
-        loading={lines.isLoading}
-        pagination={false}
-        dataSource={lines.data ?? []}
-        scroll={{ x: true }}
-        columns={[
-          { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
-          { title: 'Part', dataIndex: 'description' },
-          { title: 'Qty', dataIndex: 'quantity', align: 'right' },
-          { title: 'On hand', dataIndex: 'onHand', align: 'right' },
-          { title: 'Free', dataIndex: 'available', align: 'right' },
-          { title: 'Location and bin', key: 'bin', render: (_, line) => binOf(line) },
-          {
-            title: 'State',
-            dataIndex: 'status',
-            render: (status: string) => (
-              <Tag color={STATUS_COLORS[status]} data-testid="line-status">
-                {STATUS_LABELS[status] ?? status}
-              </Tag>
-            ),
-          },
-          {
-            title: 'Action',
-            key: 'action',
-            className: 'no-print',
-            render: (_, line) => (
-              <Space wrap>
-                {['open', 'to-order', 'ordered'].includes(line.status) && (
-                  <Button size="small" type="primary" disabled={line.available < line.quantity} loading={reserve.isPending && reserve.variables === line.id} onClick={() => reserve.mutate(line.id)}>
-                    Reserve
-                  </Button>
-                )}
-                {(line.status === 'reserved' || line.status === 'received') && (
-                  <Button size="small" onClick={() => release.mutate(line.id)}>
-                    Release
-                  </Button>
-                )}
-                {line.status === 'open' && (
-                  <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'to-order' })}>
-                    To order
-                  </Button>
-                )}
-                {(line.status === 'open' || line.status === 'to-order') && (
-                  <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'ordered' })}>
-                    Ordered
-                  </Button>
-                )}
-                {(line.status === 'ordered' || line.status === 'to-order') && (
-                  <Button size="small" onClick={() => receive.mutate({ lineId: line.id, location: line.stock[0]?.location ?? 'Main store' })}>
-                    Received
-                  </Button>
-                )}
-              </Space>
-            ),
-          },
-        ]}
-      />
+      {narrow ? (
+        <ul aria-label="Parts list" style={{ listStyle: 'none', margin: 0, padding: 0 }}>
+          {(lines.data ?? []).map((line, i) => (
+            <li key={line.id} data-testid={`counter-line-${line.sku}`} style={{ padding: '10px 0', borderTop: i === 0 ? undefined : `1px solid ${palette.line}` }}>
+              <Flex justify="space-between" align="baseline" gap={8}>
+                <Typography.Text strong style={{ minWidth: 0 }}>
+                  {line.description}
+                </Typography.Text>
+                {statusTag(line.status)}
+              </Flex>
+              <Typography.Text type="secondary" style={{ display: 'block', fontSize: 13 }}>
+                {line.sku} · {binOf(line)}
+              </Typography.Text>
+              <div aria-label="Quantities">
+                Need {line.quantity} · {line.onHand} on hand · {line.available} free
+              </div>
+              <div className="no-print" style={{ marginTop: 6 }}>
+                {lineActions(line)}
+              </div>
+            </li>
+          ))}
+        </ul>
+      ) : (
+        <Table<CounterLine>
+          size="small"
+          rowKey="id"
+          loading={lines.isLoading}
+          pagination={false}
+          dataSource={lines.data ?? []}
+          scroll={{ x: true }}
+          columns={[
+            { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
+            { title: 'Part', dataIndex: 'description' },
+            { title: 'Qty', dataIndex: 'quantity', align: 'right' },
+            { title: 'On hand', dataIndex: 'onHand', align: 'right' },
+            { title: 'Free', dataIndex: 'available', align: 'right' },
+            { title: 'Location and bin', key: 'bin', render: (_, line) => binOf(line) },
+            {
+              title: 'State',
+              dataIndex: 'status',
+              render: statusTag,
+            },
+            {
+              title: 'Action',
+              key: 'action',
+              className: 'no-print',
+              render: (_, line) => lineActions(line),
+            },
+          ]}
+        />
+      )}
       {plan && (
         <Typography.Paragraph type="secondary" style={{ marginTop: 12 }}>
-          Plan total {formatMoneyCents(plan.totalCents)} (parts and labor). Check each part against the plan before it leaves the counter.
+          Plan total {formatMoneyCents(plan.totalCents, currency)} (parts and labor). Check each part against the plan before it leaves the counter.
         </Typography.Paragraph>
       )}
     </Card>

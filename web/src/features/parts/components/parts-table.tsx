@@ -9,7 +9,8 @@ import { useSuppliers } from '../api/get-suppliers';
 import { PartFormDrawer } from './part-form-drawer';
 
 /** The shop's parts with stock and bins: server-side paging, search and filters; add and edit parts in a drawer. */
-export function PartsTable({ canEdit = false }: { canEdit?: boolean }) {
+/** `currency`: the shop's, for the prices. */
+export function PartsTable({ canEdit = false, currency }: { canEdit?: boolean; currency?: string }) {
   const [query, setQuery] = useState<PartListQuery>({ page: 1, pageSize: 20 });
   const parts = useParts(query);
   const suppliers = useSuppliers({ page: 1, pageSize: 100 });
@@ -63,7 +64,7 @@ export function PartsTable({ canEdit = false }: { canEdit?: boolean }) {
           { title: 'SKU', dataIndex: 'sku', onCell: () => ({ style: { whiteSpace: 'nowrap' } }) },
           { title: 'Description', dataIndex: 'description' },
           { title: 'Category', dataIndex: 'category', responsive: ['md'], render: (c: CatalogPartCategory) => PART_CATEGORY_LABELS[c] ?? c },
-          { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => formatMoneyCents(v) },
+          { title: 'Price', dataIndex: 'priceCents', align: 'right', render: (v: number) => formatMoneyCents(v, currency) },
           { title: 'Supplier', dataIndex: 'supplierName', responsive: ['md'], render: (v: string | null, p) => (v ? `${v}${p.supplierSku ? ` · ${p.supplierSku}` : ''}` : '—') },
           { title: 'On hand', dataIndex: 'onHand', align: 'right', responsive: ['md'] },
           { title: 'Free', dataIndex: 'available', align: 'right' },

@@ -1,3 +1,4 @@
+import { moneySign } from '@swapwright/shared';
 import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
 import { BoundedNumberInput, plainNumberRule } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
@@ -212,8 +213,7 @@ export function ProjectFormDrawer({
             max={MAX_BUDGET}
             step={500}
             precision={2}
-            prefix={currency === 'USD' ? '$' : undefined}
-            suffix={currency !== 'USD' ? currency : undefined}
+            prefix={moneySign(currency)}
             aria-label="Budget"
           />
         </Form.Item>

@@ -1,4 +1,4 @@
-import { formatCents } from '@swapwright/shared';
+import { formatMoney } from '@swapwright/shared';
 import { App, Button, Card, Empty, Flex, List, Space, Typography } from 'antd';
 import { Link } from 'react-router-dom';
 import { toQuote } from '@/config/paths';
@@ -71,7 +71,7 @@ export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProp
                 <DepositTag state={quote.depositState} />
               </Space>
               <Typography.Text type="secondary">
-                Total {quote.revision.currency} {formatCents(quote.revision.totals.totalCents)} · deposit {formatCents(quote.revision.totals.depositCents)} · valid until{' '}
+                Total {formatMoney(quote.revision.totals.totalCents, quote.revision.currency)} · deposit {formatMoney(quote.revision.totals.depositCents, quote.revision.currency)} · valid until{' '}
                 {quote.revision.validUntil}
                 {quote.declineReason ? ` · reason: ${quote.declineReason}` : ''}
               </Typography.Text>

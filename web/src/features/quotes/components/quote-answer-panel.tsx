@@ -1,4 +1,4 @@
-import { FIT_REPORT_CAUTION } from '@swapwright/shared';
+import { FIT_REPORT_CAUTION, formatMoney } from '@swapwright/shared';
 import { Alert, Button, Card, Flex, Input, Space, Typography } from 'antd';
 import { useState } from 'react';
 import { getErrorMessage } from '@/lib/api-error';
@@ -102,7 +102,7 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
       {q.status === 'approved' && q.depositState === 'due' && (
         <Card title="Pay the deposit">
           <Typography.Paragraph>
-            Deposit due: <strong>{q.revision.currency} {(q.revision.totals.depositCents / 100).toFixed(2)}</strong>. Work is booked once it is paid.
+            Deposit due: <strong>{formatMoney(q.revision.totals.depositCents, q.revision.currency)}</strong>. Work is booked once it is paid.
           </Typography.Paragraph>
           {payError && <Alert type="error" showIcon message={payError} style={{ marginBottom: 12 }} />}
           {waiting ? (

@@ -1,3 +1,4 @@
+import { moneySign } from '@swapwright/shared';
 import { Col, Form, Input, Row, Select, Typography } from 'antd';
 import { useEffect } from 'react';
 import { FormDrawer } from '@/components/form-drawer';
@@ -101,14 +102,14 @@ export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPerce
             {pricing === 'cost-plus' ? (
               <Row gutter={12}>
                 <Col span={12}>
-                  <NumberField label="Unit cost" name="unitCost" required="Enter what one costs the shop" example="41.37" min={0} precision={2} prefix={currency} />
+                  <NumberField label="Unit cost" name="unitCost" required="Enter what one costs the shop" example="41.37" min={0} precision={2} prefix={moneySign(currency)} />
                 </Col>
                 <Col span={12}>
                   <NumberField label="Markup" name="markupPercent" required="Enter the markup" example="35" min={0} max={1000} suffix="%" />
                 </Col>
               </Row>
             ) : (
-              <NumberField label="Unit price" name="unitPrice" required="Enter the price of one" example="289.95" min={0} precision={2} prefix={currency} />
+              <NumberField label="Unit price" name="unitPrice" required="Enter the price of one" example="289.95" min={0} precision={2} prefix={moneySign(currency)} />
             )}
           </>
         )}

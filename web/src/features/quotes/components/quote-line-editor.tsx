@@ -1,10 +1,11 @@
-import { Button, Flex, Popconfirm, Space, Table, Tag } from 'antd';
+import { Button, Flex, Grid, Popconfirm, Space, Table, Tag } from 'antd';
 import { useState, type HTMLAttributes, type ReactNode } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useUpdateQuote } from '../api/update-quote';
 import { formToInput, lineToInput, type QuoteLineFormValues } from '../quote-line-input';
 import type { Quote, QuoteLine } from '../types';
 import { QuoteLineDrawer } from './quote-line-drawer';
+import { QuoteLineCards } from './quote-line-cards';
 import { quoteLineColumns } from './quote-lines';
 import { QuoteTotals } from './quote-totals';
 
@@ -44,6 +45,22 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteL
     update.reset();
     setEditing(next);
   };
+  // Below antd's md (768 px) the lines stack with their commands, so nothing hides past the right edge of a phone.
+  const narrow = Grid.useBreakpoint().md === false;
+  const currency = quote.revision.currency;
+  const kindTag = (line: QuoteLine) => <Tag color={KIND_TAG[line.kind].color}>{KIND_TAG[line.kind].label}</Tag>;
+  const lineActions = (line: QuoteLine) => (
+    <Space size={4}>
+      <Button size="small" type="link" onClick={() => open({ kind: line.kind, line })} aria-label={`Edit ${line.description}`}>
+        Edit
+      </Button>
+      <Popconfirm title="Remove this line from the quote?" okText="Remove" okButtonProps={{ danger: true }} onConfirm={() => remove(line.key)}>
+        <Button size="small" type="link" danger aria-label={`Remove ${line.description}`}>
+          Remove
+        </Button>
+      </Popconfirm>
+    </Space>
+  );
 
   return (
     <>
@@ -53,42 +70,30 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteL
         {actions}
       </Flex>
       {!editing && <FormErrorAlert error={update.error} />}
-      <Table<QuoteLine>
-        size="small"
-        rowKey="key"
-        pagination={false}
-        scroll={{ x: 'max-content' }}
-        dataSource={lines}
-        loading={update.isPending && !editing}
-        onRow={(line) => ({ 'data-testid': `quote-line-${line.key}` }) as HTMLAttributes<HTMLElement>}
-        columns={[
-          { title: 'Kind', key: 'kind', render: (_, line) => <Tag color={KIND_TAG[line.kind].color}>{KIND_TAG[line.kind].label}</Tag> },
-          ...quoteLineColumns,
-          {
-            title: '',
-            key: 'actions',
-            align: 'right',
-            render: (_, line) => (
-              <Space size={4}>
-                <Button size="small" type="link" onClick={() => open({ kind: line.kind, line })} aria-label={`Edit ${line.description}`}>
-                  Edit
-                </Button>
-                <Popconfirm title="Remove this line from the quote?" okText="Remove" okButtonProps={{ danger: true }} onConfirm={() => remove(line.key)}>
-                  <Button size="small" type="link" danger aria-label={`Remove ${line.description}`}>
-                    Remove
-                  </Button>
-                </Popconfirm>
-              </Space>
-            ),
-          },
-        ]}
-      />
+      {narrow ? (
+        <QuoteLineCards lines={lines} currency={currency} lead={kindTag} actions={lineActions} />
+      ) : (
+        <Table<QuoteLine>
+          size="small"
+          rowKey="key"
+          pagination={false}
+          scroll={{ x: 'max-content' }}
+          dataSource={lines}
+          loading={update.isPending && !editing}
+          onRow={(line) => ({ 'data-testid': `quote-line-${line.key}` }) as HTMLAttributes<HTMLElement>}
+          columns={[
+            { title: 'Kind', key: 'kind', render: (_, line) => kindTag(line) },
+            ...quoteLineColumns(currency),
+            { title: '', key: 'actions', align: 'right', render: (_, line) => lineActions(line) },
+          ]}
+        />
+      )}
       <QuoteTotals quote={quote} />
       <QuoteLineDrawer
         open={editing !== null}
         kind={editing?.kind ?? 'part'}
         line={editing?.line}
-        currency={quote.revision.currency}
+        currency={currency}
         defaultMarkupPercent={defaultMarkupPercent}
         saving={update.isPending}
         error={update.error}

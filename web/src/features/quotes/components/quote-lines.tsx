@@ -1,11 +1,12 @@
-import { formatCents } from '@swapwright/shared';
-import { Table, Typography } from 'antd';
+import { formatMoney } from '@swapwright/shared';
+import { Grid, Table, Typography } from 'antd';
 import type { TableColumnsType } from 'antd';
 import type { Quote, QuoteLine } from '../types';
+import { QuoteLineCards } from './quote-line-cards';
 import { QuoteTotals } from './quote-totals';
 
-/** The columns every view of a quote's lines shows (the editor adds its actions). */
-export const quoteLineColumns: TableColumnsType<QuoteLine> = [
+/** The columns every view of a quote's lines shows on a wide screen (the editor adds its actions). */
+export const quoteLineColumns = (currency: string): TableColumnsType<QuoteLine> => [
   {
     title: 'Description',
     dataIndex: 'description',
@@ -21,8 +22,8 @@ export const quoteLineColumns: TableColumnsType<QuoteLine> = [
     ),
   },
   { title: 'Qty / hours', align: 'right', render: (_, line) => (line.kind === 'labor' ? `${(line.hours ?? 0).toFixed(1)} h` : line.quantity) },
-  { title: 'Unit', align: 'right', render: (_, line) => formatCents(line.unitPriceCents) },
-  { title: 'Amount', align: 'right', render: (_, line) => formatCents(line.lineTotalCents) },
+  { title: 'Unit', align: 'right', render: (_, line) => formatMoney(line.unitPriceCents, currency) },
+  { title: 'Amount', align: 'right', render: (_, line) => formatMoney(line.lineTotalCents, currency) },
 ];
 
 export interface QuoteLinesProps {
@@ -31,9 +32,16 @@ export interface QuoteLinesProps {
 
 /** The lines and totals of the revision shown, with the rounding rule the figures follow. */
 export function QuoteLines({ quote }: QuoteLinesProps) {
+  // Below antd's md (768 px) the lines stack, so nothing hides past the right edge of a phone.
+  const narrow = Grid.useBreakpoint().md === false;
+  const { lines, currency } = quote.revision;
   return (
     <>
-      <Table<QuoteLine> size="small" rowKey="key" pagination={false} scroll={{ x: 'max-content' }} dataSource={quote.revision.lines} columns={quoteLineColumns} />
+      {narrow ? (
+        <QuoteLineCards lines={lines} currency={currency} />
+      ) : (
+        <Table<QuoteLine> size="small" rowKey="key" pagination={false} scroll={{ x: 'max-content' }} dataSource={lines} columns={quoteLineColumns(currency)} />
+      )}
       <QuoteTotals quote={quote} />
     </>
   );

@@ -1,3 +1,4 @@
+import { moneySign } from '@swapwright/shared';
 import { Col, Form, Input, Row } from 'antd';
 import { useEffect } from 'react';
 import { FormDrawer } from '@/components/form-drawer';
@@ -85,7 +86,7 @@ export function QuoteTermsDrawer({ open, revision, saving, error, onSubmit, onCl
           <NumberField label="Discount percent" name="discountPercent" required="Enter the percent off" example="5" min={0} max={100} suffix="%" />
         )}
         {discountKind === 'fixed' && (
-          <NumberField label="Discount amount" name="discountAmount" required="Enter the amount off" example="50.00" min={0} precision={2} prefix={revision.currency} />
+          <NumberField label="Discount amount" name="discountAmount" required="Enter the amount off" example="50.00" min={0} precision={2} prefix={moneySign(revision.currency)} />
         )}
         <ChoiceField
           label="Deposit"
@@ -98,7 +99,7 @@ export function QuoteTermsDrawer({ open, revision, saving, error, onSubmit, onCl
         <Row gutter={12}>
           <Col span={12}>
             {depositKind === 'fixed' ? (
-              <NumberField label="Deposit amount" name="depositAmount" required="Enter the deposit" example="500.00" min={0} precision={2} prefix={revision.currency} />
+              <NumberField label="Deposit amount" name="depositAmount" required="Enter the deposit" example="500.00" min={0} precision={2} prefix={moneySign(revision.currency)} />
             ) : (
               <NumberField label="Deposit percent" name="depositPercent" required="Enter the deposit percent" example="30" min={0} max={100} suffix="%" />
             )}

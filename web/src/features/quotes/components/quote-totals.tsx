@@ -1,4 +1,4 @@
-import { formatCents, quoteTotalRows } from '@swapwright/shared';
+import { formatMoney, quoteTotalRows } from '@swapwright/shared';
 import { Typography } from 'antd';
 import type { Quote } from '../types';
 
@@ -9,7 +9,7 @@ export interface QuoteTotalsProps {
 /** The revision's totals as the API worked them out, with the rounding rule the figures follow. */
 export function QuoteTotals({ quote }: QuoteTotalsProps) {
   const { revision } = quote;
-  const money = (cents: number) => `${revision.currency} ${formatCents(cents)}`;
+  const money = (cents: number) => formatMoney(cents, revision.currency);
   const totals = revision.totals;
 
   return (

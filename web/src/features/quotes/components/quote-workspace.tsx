@@ -1,4 +1,4 @@
-import { formatCents } from '@swapwright/shared';
+import { formatMoney } from '@swapwright/shared';
 import { Alert, Button, Card, Select, Space, Typography } from 'antd';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -26,7 +26,7 @@ export interface QuoteWorkspaceProps {
 }
 
 function revisionLabel(revision: Quote['revisions'][number], currency: string): string {
-  return `Revision ${revision.number} · ${revision.sentAt ? `sent ${formatDate(revision.sentAt)}` : 'being written'} · ${currency} ${formatCents(revision.totalCents)}`;
+  return `Revision ${revision.number} · ${revision.sentAt ? `sent ${formatDate(revision.sentAt)}` : 'being written'} · ${formatMoney(revision.totalCents, currency)}`;
 }
 
 /** One quote for the shop: the working revision's lines (editable until sent), earlier revisions, and what changed between two. */

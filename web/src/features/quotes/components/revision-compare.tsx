@@ -1,4 +1,4 @@
-import { formatCents } from '@swapwright/shared';
+import { formatMoney, formatMoneyChange } from '@swapwright/shared';
 import { Alert, Flex, Select, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { getErrorMessage } from '@/lib/api-error';
@@ -49,8 +49,6 @@ function beforeAfter(line: DiffLine, show: (side: Side) => string) {
   );
 }
 
-const signed = (cents: number) => `${cents > 0 ? '+' : cents < 0 ? '−' : ''}${formatCents(Math.abs(cents))}`;
-
 /** Two revisions of a quote side by side: the lines added, removed and changed, and every total that moved, as the API compares them. */
 export function RevisionCompare({ quote }: RevisionCompareProps) {
   const numbers = quote.revisions.map((revision) => revision.number);
@@ -61,7 +59,9 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
     value: revision.number,
     label: `Revision ${revision.number} · ${revision.sentAt ? `sent ${formatDate(revision.sentAt)}` : 'not sent'}`,
   }));
-  const money = (cents: number) => `${quote.revision.currency} ${formatCents(cents)}`;
+  const currency = quote.revision.currency;
+  const money = (cents: number) => formatMoney(cents, currency);
+  const signed = (cents: number) => formatMoneyChange(cents, currency);
 
   return (
     <Flex vertical gap={12} data-testid="revision-compare">
@@ -89,8 +89,8 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
                 { title: 'Change', key: 'change', render: (_, line) => <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag> },
                 { title: 'Description', dataIndex: 'description' },
                 { title: 'Qty / hours', key: 'amount', align: 'right', render: (_, line) => beforeAfter(line, (side) => amountOf(line, side)) },
-                { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => formatCents(side.unitPriceCents)) },
-                { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => formatCents(side.lineTotalCents)) },
+                { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.unitPriceCents)) },
+                { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.lineTotalCents)) },
               ]}
             />
           )}

@@ -1,3 +1,4 @@
+import { moneySign } from '@swapwright/shared';
 import { Button, Card, Col, Form, Input, Row, Typography } from 'antd';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -48,7 +49,7 @@ export function QuoteTermsForm({ canEdit, currency = 'USD' }: QuoteTermsFormProp
   if (settings.isPending) return <LoadingState rows={6} />;
   if (settings.isError) return <ErrorState error={settings.error} onRetry={() => void settings.refetch()} />;
   const stored = settings.data;
-  const money = currency === 'USD' ? { prefix: '$' } : { suffix: currency };
+  const money = { prefix: moneySign(currency) };
 
   const submit = (v: QuoteTermsValues) => {
     const changes = quoteTermsChanges(stored, v);

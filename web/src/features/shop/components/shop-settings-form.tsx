@@ -1,3 +1,4 @@
+import { moneySign } from '@swapwright/shared';
 import { Button, Card, Col, Form, Input, Radio, Row, Typography } from 'antd';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -37,7 +38,7 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
     update.mutate(changes);
   };
 
-  const money = shop.currency === 'USD' ? { prefix: '$' } : { suffix: shop.currency };
+  const money = { prefix: moneySign(shop.currency) };
 
   return (
     <Form<ShopSettingsValues>

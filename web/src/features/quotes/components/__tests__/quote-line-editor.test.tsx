@@ -4,6 +4,7 @@ import { AxiosError } from 'axios';
 import { describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
 import { createTestQueryClient, renderWithApp } from '@/test/render';
+import { setWindowWidth } from '@/test/viewport';
 import { useQuote } from '../../api/get-quote';
 import { quoteKeys } from '../../api/quote-keys';
 import { formToInput, toCents } from '../../quote-line-input';
@@ -42,7 +43,7 @@ describe('QuoteLineEditor', () => {
     const patch = vi.spyOn(apiClient, 'patch').mockResolvedValue({ data: repriced });
     vi.spyOn(apiClient, 'get').mockResolvedValue({ data: repriced });
     renderEditor();
-    expect(screen.getByTestId('quote-total')).toHaveTextContent('USD 1,810.71');
+    expect(screen.getByTestId('quote-total')).toHaveTextContent('$1,810.71');
     expect(screen.getByText('Part no. TR-4410')).toBeInTheDocument();
 
     await userEvent.click(screen.getByRole('button', { name: 'Edit Pickup tube and screen' }));
@@ -72,7 +73,7 @@ describe('QuoteLineEditor', () => {
     expect(body.lines[2]).toEqual({ key: 'line-engine', kind: 'labor', description: 'Remove and install engine', laborOperationId: 'op-engine', hours: 8.5 });
 
     // The editor shows the API's answer (the mutation writes it to the quote's query).
-    await waitFor(() => expect(screen.getByTestId('quote-total')).toHaveTextContent('USD 1,871.16'));
+    await waitFor(() => expect(screen.getByTestId('quote-total')).toHaveTextContent('$1,871.16'));
     expect(screen.queryByRole('form', { name: 'Edit parts line' })).not.toBeInTheDocument();
   });
 
@@ -121,6 +122,41 @@ describe('QuoteLineEditor', () => {
     const alert = await within(form).findByRole('alert');
     expect(alert).toHaveTextContent('The request has invalid fields.');
     expect(alert).toHaveTextContent(detail);
+  });
+
+  it('on a phone stacks each line: name, how many at what price, amount and its commands, with no sideways scrolling', async () => {
+    setWindowWidth(390);
+    const patch = vi.spyOn(apiClient, 'patch').mockResolvedValue({ data: quoteStub() });
+    renderEditor();
+    // the only table left is the totals' two columns
+    expect(screen.getAllByRole('table')).toEqual([screen.getByRole('table', { name: 'Totals' })]);
+    const list = screen.getByRole('list', { name: 'Quote lines' });
+    const items = within(list).getAllByRole('listitem');
+    expect(items).toHaveLength(4);
+    // Hand-worked from the stub: pickup 2 x 55.85 = 111.70; labor 8.5 h x 135.00 = 1,147.50.
+    const pickup = screen.getByTestId('quote-line-line-pickup');
+    expect(pickup).toHaveTextContent('Pickup tube and screen');
+    expect(within(pickup).getByLabelText('Quantity and unit price')).toHaveTextContent('2 × $55.85');
+    expect(within(pickup).getByLabelText('Line amount')).toHaveTextContent('$111.70');
+    const engine = screen.getByTestId('quote-line-line-engine');
+    expect(engine).toHaveTextContent('Labor');
+    expect(within(engine).getByLabelText('Quantity and unit price')).toHaveTextContent('8.5 h × $135.00');
+    expect(within(engine).getByLabelText('Line amount')).toHaveTextContent('$1,147.50');
+    expect(screen.getByTestId('quote-line-line-pan')).toHaveTextContent('Part no. TR-4410');
+    expect(screen.getByTestId('quote-total')).toHaveTextContent('$1,810.71');
+
+    await userEvent.click(within(screen.getByTestId('quote-line-line-install')).getByRole('button', { name: 'Remove Install pan and pickup' }));
+    await userEvent.click(await screen.findByRole('button', { name: 'Remove' }));
+    await waitFor(() => expect(patch).toHaveBeenCalledTimes(1));
+    expect((patch.mock.calls[0][1] as PatchBody).lines.map((line) => line.key)).toEqual(['line-pan', 'line-pickup', 'line-engine']);
+  });
+
+  it('on a wide screen keeps the table with money in the one style', () => {
+    setWindowWidth(1440);
+    renderEditor();
+    const row = screen.getByTestId('quote-line-line-pickup');
+    expect(row.tagName).toBe('TR');
+    expect(row).toHaveTextContent(/Pickup tube and screen.*2.*\$55\.85.*\$111\.70/);
   });
 
   it('turns typed amounts into whole cents once', () => {

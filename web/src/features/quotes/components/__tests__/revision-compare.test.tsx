@@ -39,14 +39,14 @@ describe('RevisionCompare', () => {
 
     const lines = await screen.findByRole('table', { name: 'Lines changed' });
     const row = (text: string) => within(lines).getByText(text).closest('tr')!;
-    expect(row('Pickup tube and screen')).toHaveTextContent(/Changed.*2 → 3.*55\.85.*111\.70 → 167\.55/);
-    expect(row('Remove and install engine')).toHaveTextContent(/8\.5 h → 9\.0 h.*1,147\.50 → 1,215\.00/);
+    expect(row('Pickup tube and screen')).toHaveTextContent(/Changed.*2 → 3.*\$55\.85.*\$111\.70 → \$167\.55/);
+    expect(row('Remove and install engine')).toHaveTextContent(/8\.5 h → 9\.0 h.*\$1,147\.50 → \$1,215\.00/);
     expect(row('Install pan and pickup')).toHaveTextContent(/Removed.*1\.3 h/);
-    expect(row('Pan gasket set')).toHaveTextContent(/Added.*24\.50/);
+    expect(row('Pan gasket set')).toHaveTextContent(/Added.*\$24\.50/);
 
     const totals = screen.getByRole('table', { name: 'Totals changed' });
     // Hand-checked deltas: 482.00 - 401.65 = +80.35; 1,215.00 - 1,323.00 = -108.00.
-    expect(within(totals).getByText('Parts').closest('tr')).toHaveTextContent(/USD 401\.65.*USD 482\.00.*\+80\.35/);
-    expect(within(totals).getByText('Labor').closest('tr')).toHaveTextContent(/USD 1,323\.00.*USD 1,215\.00.*−108\.00/);
+    expect(within(totals).getByText('Parts').closest('tr')).toHaveTextContent(/\$401\.65.*\$482\.00.*\+\$80\.35/);
+    expect(within(totals).getByText('Labor').closest('tr')).toHaveTextContent(/\$1,323\.00.*\$1,215\.00.*−\$108\.00/);
   });
 });

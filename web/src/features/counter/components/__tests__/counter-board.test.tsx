@@ -1,0 +1,65 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { apiClient } from '@/lib/api-client';
+import { createTestQueryClient, renderWithApp } from '@/test/render';
+import { setWindowWidth } from '@/test/viewport';
+import { counterKeys } from '../../api/counter-keys';
+import type { CounterLine } from '../../api/get-counter-lines';
+import type { PlanSummary } from '../../api/get-recent-parts-plans';
+import { CounterBoard } from '../counter-board';
+
+const PLAN: PlanSummary = {
+  id: 'plan-1',
+  projectId: 'project-1',
+  projectTitle: 'Invented pickup swap',
+  version: 2,
+  status: 'locked',
+  objective: 'cost',
+  totalCents: 259300,
+  createdAt: '2026-12-01T10:00:00.000Z',
+};
+
+const stock = (id: string, onHand: number, reserved: number) => ({ id, location: 'Main store', bin: 'A-01-2', onHand, reserved, available: onHand - reserved });
+
+const LINES: CounterLine[] = [
+  { id: 'line-1', planId: 'plan-1', partId: 'p1', sku: 'TR-4410', description: 'Rear-sump swap pan, invented rail', quantity: 1, status: 'open', stockId: null, stock: [stock('s1', 2, 0)], onHand: 2, available: 2 },
+  { id: 'line-2', planId: 'plan-1', partId: 'p2', sku: 'FP-190', description: 'In-tank injection pump, 190 L/h', quantity: 1, status: 'reserved', stockId: 's2', stock: [stock('s2', 1, 1)], onHand: 1, available: 0 },
+];
+
+function renderBoard() {
+  const queryClient = createTestQueryClient();
+  queryClient.setQueryData(counterKeys.plans(), [PLAN]);
+  queryClient.setQueryData(counterKeys.lines('plan-1'), LINES);
+  return renderWithApp(<CounterBoard currency="USD" />, { queryClient });
+}
+
+describe('CounterBoard', () => {
+  it('on a phone stacks each line with its figures, bin, state and commands instead of a sideways-scrolling table', async () => {
+    setWindowWidth(390);
+    const reserve = vi.spyOn(apiClient, 'post').mockResolvedValue({ data: { ...LINES[0], status: 'reserved' } });
+    // the refetch after the reservation
+    vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/parts-plans' ? [PLAN] : LINES }));
+    renderBoard();
+    expect(screen.queryByRole('table')).not.toBeInTheDocument();
+    const items = within(screen.getByRole('list', { name: 'Parts list' })).getAllByRole('listitem');
+    expect(items).toHaveLength(2);
+    const pan = screen.getByTestId('counter-line-TR-4410');
+    expect(pan).toHaveTextContent('Rear-sump swap pan, invented rail');
+    expect(pan).toHaveTextContent('TR-4410 · Main store · A-01-2');
+    expect(within(pan).getByLabelText('Quantities')).toHaveTextContent('Need 1 · 2 on hand · 2 free');
+    expect(within(pan).getByTestId('line-status')).toHaveTextContent('Not set aside');
+    expect(within(screen.getByTestId('counter-line-FP-190')).getByRole('button', { name: 'Release' })).toBeInTheDocument();
+
+    await userEvent.click(within(pan).getByRole('button', { name: 'Reserve' }));
+    await waitFor(() => expect(reserve).toHaveBeenCalledWith('/counter-lines/line-1/reserve', {}));
+  });
+
+  it('on a wide screen keeps the table, and the plan total is money in the one style', () => {
+    setWindowWidth(1440);
+    renderBoard();
+    expect(within(screen.getByRole('table')).getByRole('row', { name: /TR-4410/ })).toHaveTextContent('Main store · A-01-2');
+    // Source: Unicode CLDR "en" currency pattern ¤#,##0.00 (Intl.NumberFormat, style currency): 259300 cents.
+    expect(screen.getByText(/Plan total/)).toHaveTextContent('Plan total $2,593.00 (parts and labor)');
+  });
+});
