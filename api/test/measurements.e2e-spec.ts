@@ -359,6 +359,35 @@ describe('measurement templates, settings and a project without a catalog chassi
     expect((await t.http.get(SETTINGS).set(...bearer(s.estimator)).expect(200)).body).toEqual({ deviationLimitMm: 5, deviationLimitDeg: 0.5 });
   });
 
+  it('first readings on several new projects at once all land: no deadlock, one sheet each', async () => {
+    const projects = await Promise.all(
+      [1, 2, 3, 4, 5, 6].map(async (n) =>
+        (
+          await t.http
+            .post('/api/projects')
+            .set(...bearer(s.estimator))
+            .send({ customerId: DEMO_CUSTOMER_IDS.juno, title: `Same-morning intake ${n}`, chassisModelId: DEMO_CATALOG_IDS.chassis.ridgeback78 })
+            .expect(201)
+        ).body.id as string,
+      ),
+    );
+    const sheetsBefore = await countRows(t.dataSource, 'measurement_sheets');
+    // Two readings per project, all at once, as a crew entering several trucks would.
+    const answers = await Promise.all(
+      projects.flatMap((id) =>
+        ['pinion.height', 'pinion.angle'].map((pointId) =>
+          t.http.put(`/api/projects/${id}/measurement-sheet/values/${pointId}`).set(...bearer(s.fabricator)).send({ value: pointId === 'pinion.angle' ? '3' : '370 mm' }),
+        ),
+      ),
+    );
+    expect(answers.map((answer) => answer.status)).toEqual(answers.map(() => 200));
+    expect(await countRows(t.dataSource, 'measurement_sheets')).toBe(sheetsBefore + projects.length);
+    for (const id of projects) {
+      const sheet = (await t.http.get(`/api/projects/${id}/measurement-sheet`).set(...bearer(s.fabricator)).expect(200)).body;
+      expect(sheet.values.map((v: { pointId: string }) => v.pointId).sort()).toEqual(['pinion.angle', 'pinion.height']);
+    }
+  });
+
   it('a project whose chassis is not chosen from the catalog: the sheet is empty and a reading is refused with what to do', async () => {
     const created = await t.http
       .post('/api/projects')

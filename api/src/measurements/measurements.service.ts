@@ -140,12 +140,20 @@ export class MeasurementsService {
     return point;
   }
 
+  /**
+   * The project's sheet, locked for this transaction. The row is made first, in a statement of its own: a locking
+   * read of a row that does not exist yet takes a gap lock, and two first readings on different projects in the same
+   * gap would each wait for the other's insert (a deadlock, which reached the user as a 500).
+   */
   private async sheetFor(manager: EntityManager, user: Shop, projectId: string): Promise<MeasurementSheet> {
-    const found = await manager.findOne(MeasurementSheet, { where: { shopId: user.shopId, projectId }, lock: { mode: 'pessimistic_write' } });
-    if (found) return found;
-    const sheet = manager.create(MeasurementSheet, { id: randomUUID(), shopId: user.shopId, projectId, signedOffAt: null, signedOffById: null });
-    await manager.insert(MeasurementSheet, sheet);
-    return sheet;
+    await this.dataSource
+      .createQueryBuilder()
+      .insert()
+      .into(MeasurementSheet)
+      .values({ id: randomUUID(), shopId: user.shopId, projectId, signedOffAt: null, signedOffById: null })
+      .orIgnore()
+      .execute();
+    return manager.findOneOrFail(MeasurementSheet, { where: { shopId: user.shopId, projectId }, lock: { mode: 'pessimistic_write' } });
   }
 
   private event(user: AuthUser, sheet: MeasurementSheet, fields: Partial<MeasurementSheetEvent>): MeasurementSheetEvent {

@@ -32,6 +32,12 @@ export const CommonErrors = {
       'database_unavailable',
       'The database is not reachable right now, so nothing was read or saved. Try again in a moment.',
     ),
+  databaseBusy: () =>
+    new AppError(
+      503,
+      'database_busy',
+      'Another change to the same records got in the way at that moment, so nothing of this one was saved. Try again.',
+    ),
   internal: () =>
     new AppError(
       500,

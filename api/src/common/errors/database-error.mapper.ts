@@ -45,6 +45,10 @@ export function mapDatabaseError(error: unknown): AppError | null {
   if (!(error instanceof QueryFailedError)) return null;
   const driverError = (error as QueryFailedError & { driverError?: DriverError }).driverError ?? {};
   switch (driverError.code) {
+    // The transaction was rolled back whole by the server; the same request can simply be sent again.
+    case 'ER_LOCK_DEADLOCK':
+    case 'ER_LOCK_WAIT_TIMEOUT':
+      return CommonErrors.databaseBusy();
     case 'ER_DUP_ENTRY':
       return CommonErrors.duplicate();
     case 'ER_NO_REFERENCED_ROW':

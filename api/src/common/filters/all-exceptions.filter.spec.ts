@@ -34,6 +34,18 @@ describe('AllExceptionsFilter', () => {
     }
   });
 
+  it('answers a deadlock or lock wait timeout 503 "try again": the server rolled the whole transaction back', () => {
+    // Source: MariaDB Server error codes 1213 (ER_LOCK_DEADLOCK) and 1205 (ER_LOCK_WAIT_TIMEOUT), which roll back the transaction or statement.
+    const deadlock = new QueryFailedError('INSERT INTO measurement_sheets ...', [], Object.assign(new Error('Deadlock found when trying to get lock; try restarting transaction'), { code: 'ER_LOCK_DEADLOCK', errno: 1213 }));
+    const waited = new QueryFailedError('UPDATE stock_levels ...', [], Object.assign(new Error('Lock wait timeout exceeded; try restarting transaction'), { code: 'ER_LOCK_WAIT_TIMEOUT', errno: 1205 }));
+    for (const error of [deadlock, waited]) {
+      const body = filter.toBody(error, 'cid-lock');
+      expect(body).toMatchObject({ statusCode: 503, code: 'database_busy' });
+      expect(body.message).toMatch(/nothing of this one was saved\. Try again/);
+      expect(JSON.stringify(body)).not.toMatch(/measurement_sheets|stock_levels/);
+    }
+  });
+
   it('maps a duplicate key to 409 without naming the index', () => {
     const body = filter.toBody(errorStub.duplicate, 'cid-2');
     expect(body).toMatchObject({ statusCode: 409, code: 'duplicate' });
