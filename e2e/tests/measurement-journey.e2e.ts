@@ -42,7 +42,9 @@ describe('the fabricator measures the demo truck on a phone; the estimator sees 
     await expectText(page.getByTestId('measurement-safety'), /never work under a vehicle held only by a jack/);
     // The demo sheet is started: the list opens on the three points still to read.
     await expectText(page.getByTestId('sheet-counts'), /22 of 25 required points measured/);
-    await expectText(page.getByTestId('missing-list'), /Front crossmember: top; Pinion: centre height; Pinion: angle/);
+    // one point a line, a list to work down at the truck
+    await expectText(page.getByTestId('missing-list'), /Still to measure \(3\)/);
+    expect(await page.getByTestId('missing-list').getByRole('listitem').allInnerTexts()).toEqual(['Front crossmember: top', 'Pinion: centre height', 'Pinion: angle']);
     await expect(page.getByTestId('point-card').count()).resolves.toBe(3);
     await expectVisible(page.getByRole('img', { name: 'Where to measure: Front crossmember: top' }));
     await page.waitForTimeout(300);

@@ -1,4 +1,4 @@
-import { formatMoney, formatQuantity, inchesToMm, mmToInches, parseLengthResult } from '@swapwright/shared';
+import { formatMoney, formatQuantity, inchesToMm, mmToInches, parseLengthResult, renderText, textParts } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -27,6 +27,15 @@ export function displayToMm(value: number, system: UnitSystem): number {
 export function formatLength(mm: number | null | undefined, system: UnitSystem): string {
   if (mm === null || mm === undefined || Number.isNaN(mm)) return '—';
   return formatQuantity(mm, 'length', system);
+}
+
+/**
+ * Words written with figures in them (a measurement point's name, how to measure it): every length, pressure and
+ * flow in the person's system, through the same path as the fit report's sentences ("300 mm behind the axle" reads
+ * "11.81 in behind the axle" in inch mode).
+ */
+export function renderFigures(text: string, system: UnitSystem): string {
+  return renderText(textParts(text), system);
 }
 
 export type ReadResult = { ok: true; value: number } | { ok: false; message: string };

@@ -1,6 +1,8 @@
-import type { Role } from '@swapwright/shared';
+import { runFitCheck, type Role } from '@swapwright/shared';
+import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import type { CurrentUser, Schemas, Session } from '@/lib/api-types';
 import type { Customer } from '@/features/customers/types';
+import type { StoredFitReport } from '@/features/fit-reports/types';
 
 export const shopStub = { id: 'shop-ironbark', name: 'Ironbark Swap Works', unitSystem: 'in' as const };
 
@@ -47,4 +49,25 @@ export const customerStubs: Customer[] = [
 
 export function pageOf<T>(items: T[], page = 1, pageSize = 20, total = items.length): { items: T[] } & Schemas['PageMetaResponseDto'] {
   return { items, total, page, pageSize };
+}
+
+/** A stored fit report of the shared demo spec at its own placement, as the API answers it (id r1 of project p1). */
+export function storedFitReportStub(overrides: Partial<StoredFitReport> = {}): StoredFitReport {
+  const report = runFitCheck(DEMO_FIT_SPEC);
+  return {
+    id: 'r1',
+    projectId: 'p1',
+    createdAt: '2026-11-02T10:00:00.000Z',
+    createdById: 'u1',
+    createdByName: 'Sam Reyes',
+    engineVersion: report.engineVersion,
+    placement: DEMO_FIT_SPEC.placement,
+    placementSource: 'project',
+    counts: report.summary,
+    worstStatus: 'fails',
+    caution: report.caution,
+    report,
+    inputs: { spec: DEMO_FIT_SPEC, settingsOverrides: {}, placementSource: 'project', notes: [] },
+    ...overrides,
+  };
 }

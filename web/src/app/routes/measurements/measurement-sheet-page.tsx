@@ -18,6 +18,7 @@ import { PhotoStrip, type PhotoActions } from '@/features/measurements/component
 import { missingLabelsOf, SheetOverview } from '@/features/measurements/components/sheet-overview';
 import { TemplateEditorDrawer } from '@/features/measurements/components/template-editor-drawer';
 import { usePhotoUploads } from '@/features/measurements/hooks/use-photo-uploads';
+import { sheetInUnits } from '@/features/measurements/lib/point-words';
 import { filterRows, generalPhotos, initialFilter, sheetCounts, sheetRows, signOffEvent, type SheetFilter } from '@/features/measurements/lib/sheet-state';
 import { useProject } from '@/features/projects/api/get-project';
 import { canAddMeasurementPhotos, canMeasure, canRunFitCheck } from '../../navigation';
@@ -40,14 +41,16 @@ export function MeasurementSheetPage() {
   const canEdit = canMeasure(user.role);
   const isCustomer = user.role === 'customer';
 
-  const rows = useMemo(() => (sheet.data ? sheetRows(sheet.data) : []), [sheet.data]);
+  // points' names and how-tos in the person's units (the template writes millimetres)
+  const shownSheet = useMemo(() => (sheet.data ? sheetInUnits(sheet.data, units.system) : undefined), [sheet.data, units.system]);
+  const rows = useMemo(() => (shownSheet ? sheetRows(shownSheet) : []), [shownSheet]);
   const counts = useMemo(() => sheetCounts(rows), [rows]);
 
   if (project.isPending || sheet.isPending) return <LoadingState rows={10} />;
   if (project.isError) return <ErrorState error={project.error} onRetry={() => void project.refetch()} />;
   if (sheet.isError) return <ErrorState error={sheet.error} onRetry={() => void sheet.refetch()} />;
   const p = project.data;
-  const s = sheet.data;
+  const s = shownSheet ?? sheet.data;
   const shown = filterRows(rows, filter ?? initialFilter(counts));
 
   const photoActions: PhotoActions = {

@@ -1,6 +1,8 @@
 import { Alert, Collapse, Empty, Flex, Tag, Typography } from 'antd';
 import type { ReactNode } from 'react';
+import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
+import { renderFigures } from '@/lib/units';
 import { sourcesByCheck, sourceTotals } from '../lib/report-sources';
 import { formatDeviation, formatReading } from '../lib/sheet-state';
 import type { ChassisInput } from '../types';
@@ -16,13 +18,14 @@ export type ReportInputSourcesProps = {
 };
 
 function InputLine({ input, formatLength }: { input: ChassisInput; formatLength: (mm: number) => string }) {
+  const { system } = useUnits();
   const fromSheet = input.source.kind === 'sheet';
   const figure = formatReading(fromSheet ? input.measuredValue : input.catalogValue, input.unit, formatLength);
   return (
     <li style={{ marginBottom: 6 }} data-testid="report-input" data-source={input.source.kind}>
       <Flex vertical gap={2}>
         <Typography.Text>
-          {input.label}: <strong>{figure}</strong>{' '}
+          {renderFigures(input.label, system)}: <strong>{figure}</strong>{' '}
           {input.flagged && input.deviation !== null && (
             <Tag color="red">Far from catalog ({formatDeviation(input.deviation, input.unit, formatLength)}): take a second look</Tag>
           )}
@@ -44,10 +47,12 @@ function InputLine({ input, formatLength }: { input: ChassisInput; formatLength:
  * which from the catalog; a measured figure far from the catalog's is flagged for a second look.
  */
 export function ReportInputSources({ inputs, checks, formatLength, sheetLink }: ReportInputSourcesProps) {
+  const { system } = useUnits();
   if (!inputs || inputs.length === 0) {
     return <Empty image={Empty.PRESENTED_IMAGE_SIMPLE} description="This report was stored without a list of its chassis inputs. Run the fit check again to see where each figure came from." />;
   }
   const groups = sourcesByCheck(inputs, checks);
+  const label = (input: ChassisInput) => renderFigures(input.label, system);
   const totals = sourceTotals(inputs);
   return (
     <Flex vertical gap={12} data-testid="report-sources">
@@ -60,7 +65,7 @@ export function ReportInputSources({ inputs, checks, formatLength, sheetLink }: 
           showIcon
           title={`${totals.flagged.length} measured figure${totals.flagged.length === 1 ? ' is' : 's are'} far from the catalog's: take a second look`}
           description={totals.flagged
-            .map((i) => `${i.label}: ${formatReading(i.measuredValue, i.unit, formatLength)} (${formatDeviation(i.deviation ?? 0, i.unit, formatLength)})`)
+            .map((i) => `${label(i)}: ${formatReading(i.measuredValue, i.unit, formatLength)} (${formatDeviation(i.deviation ?? 0, i.unit, formatLength)})`)
             .join('; ')}
         />
       )}

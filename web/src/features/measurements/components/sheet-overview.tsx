@@ -42,9 +42,20 @@ export function SheetOverview({ counts, filter, onFilter, missingLabels, signedO
         </Flex>
         <Progress percent={percent} showInfo={false} status={counts.missing === 0 ? 'success' : 'active'} aria-label="Required points measured" />
         {counts.missing > 0 && (
-          <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="missing-list">
-            Still to measure: {missingLabels.join('; ')}.
-          </Typography.Text>
+          // One point a line, each with an empty box, so the fabricator can work down it at the truck.
+          <div data-testid="missing-list">
+            <Typography.Text type="secondary" style={{ fontSize: 13 }} id="missing-list-title">
+              Still to measure ({missingLabels.length}):
+            </Typography.Text>
+            <ul className="missing-points" aria-labelledby="missing-list-title">
+              {missingLabels.map((label) => (
+                <li key={label}>
+                  <span className="missing-points-box" aria-hidden />
+                  <span>{label}</span>
+                </li>
+              ))}
+            </ul>
+          </div>
         )}
         <Segmented<SheetFilter>
           block

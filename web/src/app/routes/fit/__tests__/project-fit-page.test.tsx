@@ -4,9 +4,8 @@ import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
 import { createTestQueryClient, renderWithApp } from '@/test/render';
-import { userStub } from '@/test/fixtures';
+import { storedFitReportStub, userStub } from '@/test/fixtures';
 import { authKeys } from '@/features/auth/api/auth-keys';
-import { previewFitCheck } from '@/features/fit-reports/lib/fit-engine';
 import type { FitReportListItem, StoredFitReport } from '@/features/fit-reports/types';
 import type { Project } from '@/features/projects/types';
 import type { Role } from '@swapwright/shared';
@@ -30,25 +29,9 @@ const project: Project = {
   updatedAt: '2026-11-02T10:00:00.000Z',
 };
 
-const engineReport = previewFitCheck(DEMO_FIT_SPEC, DEMO_FIT_SPEC.placement);
-const listItem: FitReportListItem = {
-  id: 'r1',
-  projectId: 'p1',
-  createdAt: '2026-11-02T10:00:00.000Z',
-  createdById: 'u1',
-  createdByName: 'Sam Reyes',
-  engineVersion: engineReport.engineVersion,
-  placement: DEMO_FIT_SPEC.placement,
-  placementSource: 'project',
-  counts: engineReport.summary,
-  worstStatus: 'fails',
-  caution: engineReport.caution,
-};
-const stored: StoredFitReport = {
-  ...listItem,
-  report: engineReport,
-  inputs: { spec: DEMO_FIT_SPEC, settingsOverrides: {}, placementSource: 'project', notes: [] },
-};
+const stored: StoredFitReport = storedFitReportStub();
+const { report: _report, inputs: _inputs, ...summary } = stored;
+const listItem: FitReportListItem = summary;
 
 function mockApi() {
   return vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => {

@@ -1,4 +1,4 @@
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { sheetRows } from '../../lib/sheet-state';
@@ -110,7 +110,10 @@ describe('the sheet overview', () => {
       />,
     );
     expect(screen.getByTestId('sheet-counts')).toHaveTextContent('1 of 3 required points measured');
-    expect(screen.getByTestId('missing-list')).toHaveTextContent('Still to measure: Front crossmember: top; Pinion: angle.');
+    // one point a line, in order, each its own list item a fabricator can work down
+    const list = within(screen.getByTestId('missing-list'));
+    expect(list.getByRole('list', { name: 'Still to measure (2):' })).toBeInTheDocument();
+    expect(list.getAllByRole('listitem').map((li) => li.textContent)).toEqual(['Front crossmember: top', 'Pinion: angle']);
     expect(screen.getByRole('button', { name: 'Sign off (measure 2 more first)' })).toBeDisabled();
   });
 });
