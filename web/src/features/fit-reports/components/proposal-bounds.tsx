@@ -12,6 +12,8 @@ export type ProposalBoundsProps = {
 export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
   const units = useUnits();
   const { placement, boundedBy, allPass } = proposal;
+  // clearances the report could not check (no oil pan chosen, say) did not weigh in: the sentence says so
+  const unchecked = findings.filter((f) => f.group === 'envelope' && f.status === 'unknown').length;
   const title = (checkId: string) => findings.find((f) => f.checkId === checkId)?.title ?? checkId;
   // "0.25 in to spare", "short by 0.12 in", "2.0° over": shared's one wording of a signed margin.
   const room = (b: ProposalBound) =>
@@ -21,7 +23,11 @@ export function ProposalBounds({ proposal, findings }: ProposalBoundsProps) {
       <Typography.Text strong>Best placement found</Typography.Text>
       <Typography.Paragraph style={{ margin: '2px 0 4px', fontSize: 13 }}>
         {units.formatLength(placement.setbackMm)} back, {units.formatLength(placement.heightMm)} up, tilted {placement.tiltDeg.toFixed(1)}°
-        {allPass ? ', with every clearance and the U-joint angles passing.' : ': the most room found, but not every check passes there.'}
+        {allPass
+          ? unchecked > 0
+            ? `, with every clearance that could be checked and the U-joint angles passing; ${unchecked === 1 ? '1 clearance needs' : `${unchecked} clearances need`} input first (see the checks below).`
+            : ', with every clearance and the U-joint angles passing.'
+          : ': the most room found, but not every check passes there.'}
       </Typography.Paragraph>
       {boundedBy.length > 0 && (
         <>

@@ -47,4 +47,19 @@ describe('ProposalBounds', () => {
       'envelope.ground-clearance: 0.50 in to spare',
     ]);
   });
+
+  it('does not claim every clearance passes when some could not be checked', () => {
+    // Common practice (no published source): a clearance without its input (no oil pan chosen) is not a pass.
+    const noPan = { ...DEMO_FIT_SPEC };
+    delete noPan.oilPan;
+    const proposal = proposePlacement(noPan)!;
+    expect(proposal.allPass).toBe(true);
+    const findings = previewFitCheck(noPan, proposal.placement).findings;
+    const unknown = findings.filter((f) => f.group === 'envelope' && f.status === 'unknown').length;
+    expect(unknown).toBeGreaterThan(0);
+    renderWithApp(<ProposalBounds proposal={proposal} findings={findings} />);
+    const box = screen.getByTestId('placement-proposal');
+    expect(box.textContent).toContain(`with every clearance that could be checked and the U-joint angles passing; ${unknown} clearances need input first`);
+    expect(box.textContent).not.toContain('with every clearance and the U-joint angles passing');
+  }, 60_000);
 });
