@@ -1,5 +1,6 @@
 import { Button, Flex, Grid, Input, Popconfirm, Space, Table, Typography } from 'antd';
 import type { ColumnsType, TableProps } from 'antd/es/table';
+import { EmailAddress } from '@/components/email-address';
 import { ErrorState, EmptyState } from '@/components/query-state';
 import { formatDate, serverPagination, sorterToParams, sortOrderFor } from '@/lib/table';
 import { useCustomers } from '../api/get-customers';
@@ -36,11 +37,7 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
           ) : (
             <Typography.Text strong>{name}</Typography.Text>
           )}
-          {narrow && c.email && (
-            <a href={`mailto:${c.email}`} style={{ fontSize: 13, overflowWrap: 'anywhere' }}>
-              {c.email}
-            </a>
-          )}
+          {narrow && c.email && <EmailAddress email={c.email} small />}
           {narrow && c.phone && <a href={`tel:${c.phone.replace(/[^\d+]/g, '')}`} style={{ fontSize: 13 }}>{c.phone}</a>}
         </Flex>
       ),
@@ -51,7 +48,7 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       key: 'email',
       sorter: true,
       sortOrder: sortOrderFor('email', query.sort, query.order),
-      render: (email: string | null) => (email ? <a href={`mailto:${email}`}>{email}</a> : '—'),
+      render: (email: string | null) => (email ? <EmailAddress email={email} /> : '—'),
       responsive: ['md'],
     },
     { title: 'Phone', dataIndex: 'phone', key: 'phone', render: (p: string | null) => p || '—', responsive: ['md'] },

@@ -1,5 +1,6 @@
 import { Table, Tag } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
+import { EmailAddress } from '@/components/email-address';
 import { EmptyState, QueryState } from '@/components/query-state';
 import { formatDate } from '@/lib/table';
 import { useInvitations } from '../api/get-invitations';
@@ -14,7 +15,7 @@ function invitationState(inv: Invitation): { label: string; color: string } {
 export function InvitationsTable() {
   const invitations = useInvitations();
   const columns: ColumnsType<Invitation> = [
-    { title: 'Email', dataIndex: 'email', key: 'email' },
+    { title: 'Email', dataIndex: 'email', key: 'email', render: (email: string) => <EmailAddress email={email} /> },
     { title: 'Role', dataIndex: 'role', key: 'role', render: (r: Invitation['role']) => roleLabels[r] },
     {
       title: 'State',

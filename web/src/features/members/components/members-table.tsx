@@ -1,5 +1,6 @@
 import { Button, Flex, Grid, Popconfirm, Select, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
+import { EmailAddress } from '@/components/email-address';
 import { EmptyState, QueryState } from '@/components/query-state';
 import { formatDate } from '@/lib/dates';
 import { ROLES as roles, type Role } from '@swapwright/shared';
@@ -48,16 +49,14 @@ export function MembersTable({ currentUserId }: MembersTableProps) {
           </span>
           {narrow && (
             <>
-              <Typography.Text type="secondary" style={{ fontSize: 13, overflowWrap: 'anywhere' }}>
-                {m.email}
-              </Typography.Text>
+              <EmailAddress email={m.email} small />
               {roleCell(m)}
             </>
           )}
         </Flex>
       ),
     },
-    { title: 'Email', dataIndex: 'email', key: 'email', responsive: ['md'] },
+    { title: 'Email', dataIndex: 'email', key: 'email', responsive: ['md'], render: (email: string) => <EmailAddress email={email} /> },
     { title: 'Role', key: 'role', responsive: ['md'], render: (_, m) => roleCell(m) },
     { title: 'Joined', dataIndex: 'createdAt', key: 'createdAt', render: formatDate, responsive: ['md'] },
     {
