@@ -97,5 +97,11 @@ export const theme: ThemeConfig = {
     Tag: {
       defaultBg: palette.teal50,
     },
+    // An information notice is calm: the lightest teal with a teal icon, so it never reads as a warning or an error
+    // (the tints antd derives from the teal are grey-green and heavy).
+    Alert: {
+      colorInfoBg: palette.teal50,
+      colorInfoBorder: palette.teal100,
+    },
   },
 };

@@ -1,4 +1,4 @@
-import { Alert, Card, Tabs } from 'antd';
+import { Alert, Card, Grid, Tabs } from 'antd';
 import { useState } from 'react';
 import { PageHeader } from '@/components/page-header';
 import { useListSearchParams } from '@/hooks/use-list-search-params';
@@ -17,6 +17,9 @@ export function CatalogPage() {
   const [params, setParams] = useListSearchParams({ sortFields: noSort, filters: ['kind'] });
   const kind: CatalogKind = catalogKinds.find((k) => k === params.kind) ?? 'engines';
   const [editing, setEditing] = useState<{ item: CatalogItem | null } | null>(null);
+  // From antd's xl (1200 px) the kinds stand in a column beside the table, every one in sight; narrower, they run
+  // along the top and antd's own "…" menu holds the ones that do not fit.
+  const beside = Grid.useBreakpoint().xl === true;
 
   return (
     <>
@@ -25,22 +28,36 @@ export function CatalogPage() {
         subtitle="The shop’s own engines, chassis, transmissions and parts, with the figures the fit check reads."
       />
       {!canEdit && (
-        <Alert style={{ marginBottom: 16 }} type="info" showIcon title="Read only for your role" description="Ask the owner, an estimator or the parts counter to change an entry." />
+        <Alert
+          style={{ marginBottom: 16 }}
+          type="info"
+          showIcon
+          title="You can look up every entry"
+          description="The owner, the estimators and the parts counter keep the catalog. Ask one of them to add an entry or change a figure."
+        />
       )}
       <Card>
         <Tabs
+          aria-label="Catalog kinds"
           activeKey={kind}
+          tabPlacement={beside ? 'start' : 'top'}
           onChange={(next) => setParams({ kind: next, page: 1, search: undefined })}
-          items={catalogKinds.map((k) => ({ key: k, label: kindDefinitions[k].label }))}
-        />
-        <CatalogTable
-          key={kind}
-          kind={kind}
-          query={{ page: params.page, pageSize: params.pageSize, search: params.search }}
-          onQueryChange={setParams}
-          canEdit={canEdit}
-          onEdit={(item) => setEditing({ item })}
-          onCreate={() => setEditing({ item: null })}
+          items={catalogKinds.map((k) => ({
+            key: k,
+            label: kindDefinitions[k].label,
+            children:
+              k === kind ? (
+                <CatalogTable
+                  key={kind}
+                  kind={kind}
+                  query={{ page: params.page, pageSize: params.pageSize, search: params.search }}
+                  onQueryChange={setParams}
+                  canEdit={canEdit}
+                  onEdit={(item) => setEditing({ item })}
+                  onCreate={() => setEditing({ item: null })}
+                />
+              ) : null,
+          }))}
         />
       </Card>
       {canEdit && <CatalogItemDrawer kind={kind} open={editing !== null} item={editing?.item ?? null} onClose={() => setEditing(null)} />}
