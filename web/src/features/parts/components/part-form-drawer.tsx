@@ -1,4 +1,4 @@
-import { AutoComplete, Button, Col, Divider, Form, Input, InputNumber, Row, Select, Table, Typography } from 'antd';
+import { AutoComplete, Button, Col, Divider, Form, Input, InputNumber, Row, Select, Table, Typography, type FormInstance } from 'antd';
 import { PART_CATEGORIES, PART_CATEGORY_LABELS, type CatalogPartCategory } from '@swapwright/shared';
 import { useEffect, useState } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -8,7 +8,8 @@ import type { Part } from '../api/get-parts';
 import { useSuppliers } from '../api/get-suppliers';
 import { useSavePart } from '../api/save-part';
 import { type StockInput, useSetPartStock } from '../api/set-part-stock';
-import { formValuesToBody, KNOWN_ATTRIBUTES, partToFormValues, type PartFormValues } from '../lib/part-form-values';
+import { useUnits } from '@/hooks/use-units';
+import { attributeHint, attributeUnit, attributeKeyOf, attributeWords, formValuesToBody, KNOWN_ATTRIBUTES, partToFormValues, type PartFormValues } from '../lib/part-form-values';
 
 export type PartFormDrawerProps = {
   open: boolean;
@@ -78,6 +79,21 @@ function StockSection({ part }: { part: Part }) {
         </Button>
       </Form>
     </>
+  );
+}
+
+const ATTRIBUTE_OPTIONS = KNOWN_ATTRIBUTES.map((key) => ({ value: attributeWords(key) }));
+
+/** One attribute row's value box (with the unit it takes) and what the row says, in words and the person's units. */
+function AttributeValueItem({ form, index }: { form: FormInstance<PartFormValues>; index: number }) {
+  const units = useUnits();
+  const row = Form.useWatch(['attributes', index], form) as PartFormValues['attributes'][number] | undefined;
+  const unit = row?.name ? attributeUnit(attributeKeyOf(row.name)) : undefined;
+  const hint = attributeHint(row?.name, row?.value, units.system);
+  return (
+    <Form.Item name={[index, 'value']} rules={[{ required: true, whitespace: true, message: 'Enter its value' }]} extra={hint ? <span data-testid="attribute-hint">Reads: {hint}</span> : undefined}>
+      <Input aria-label="Attribute value" placeholder="rear" suffix={unit} />
+    </Form.Item>
   );
 }
 
@@ -223,7 +239,8 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
 
         <Divider titlePlacement="start">Fitment attributes</Divider>
         <Typography.Paragraph type="secondary">
-          What the plan's rules compare: e.g. sumpPosition rear, pickupMount pump-bolted, pumpInlet, flowLph. A list is typed with commas.
+          What the plan's rules compare, such as the sump position (rear), the pickup mounting (pump-bolted), the pump inlet or the
+          flow. Pick a name from the list or type your own; a list of values is typed with commas. Each row says below how the plan reads it.
           {part?.fitKind && ' This part also carries a fit spec from the shop catalog; its figures count as attributes and need not be typed here.'}
         </Typography.Paragraph>
         <Form.List name="attributes">
@@ -235,16 +252,14 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
                     <Form.Item name={[field.name, 'name']} rules={[{ required: true, whitespace: true, message: 'Name the attribute' }]}>
                       <AutoComplete
                         aria-label="Attribute name"
-                        placeholder="sumpPosition"
-                        options={KNOWN_ATTRIBUTES.map((value) => ({ value }))}
+                        placeholder="sump position"
+                        options={ATTRIBUTE_OPTIONS}
                         filterOption={(input, option) => String(option?.value ?? '').toLowerCase().includes(input.toLowerCase())}
                       />
                     </Form.Item>
                   </Col>
                   <Col xs={11}>
-                    <Form.Item name={[field.name, 'value']} rules={[{ required: true, whitespace: true, message: 'Enter its value' }]}>
-                      <Input aria-label="Attribute value" placeholder="rear" />
-                    </Form.Item>
+                    <AttributeValueItem form={form} index={field.name} />
                   </Col>
                   <Col xs={2}>
                     <Button type="link" danger aria-label="Remove attribute" onClick={() => remove(field.name)} style={{ paddingInline: 0 }}>

@@ -1,4 +1,4 @@
-import type { CatalogPartCategory } from '@swapwright/shared';
+import { attributeNoun, describeAttribute, renderText, textParts, type CatalogPartCategory, type UnitSystem } from '@swapwright/shared';
 import type { Part } from '../api/get-parts';
 import type { NewPart } from '../api/save-part';
 
@@ -29,6 +29,47 @@ export const KNOWN_ATTRIBUTES = [
   'effectiveLengthMm',
   'fabricationHours',
 ] as const;
+
+/** The unit an attribute's value box takes, read from the key's ending (`maxDxMm` → mm, `flowLph` → L/h). */
+const KEY_UNITS: Array<[RegExp, string]> = [
+  [/Mm$/, 'mm'],
+  [/Lph$/, 'L/h'],
+  [/Lbh$/, 'lb/h'],
+  [/Psi$/, 'psi'],
+  [/Kw$/, 'kW'],
+  [/Rpm$/, 'rpm'],
+  [/Deg$/, '°'],
+  [/Hours$/, 'h'],
+];
+
+export function attributeUnit(key: string): string | undefined {
+  return KEY_UNITS.find(([pattern]) => pattern.test(key.trim()))?.[1];
+}
+
+/**
+ * An attribute's name as a person reads it: `sumpPosition` → "sump position" (the shared plan wording). Only the known
+ * names turn into words (their words are unique, so the form gives back the same key); another key shows as stored.
+ */
+export function attributeWords(key: string): string {
+  return (KNOWN_ATTRIBUTES as readonly string[]).includes(key) ? attributeNoun(key) : key;
+}
+
+/**
+ * The stored key of a name as typed in the form: the words of a known attribute ("Sump position", any case) give its
+ * key (`sumpPosition`); a key typed as it is stays; anything else is kept as typed, trimmed.
+ */
+export function attributeKeyOf(typed: string): string {
+  const text = typed.trim();
+  const words = text.replace(/\s+/g, ' ').toLowerCase();
+  return KNOWN_ATTRIBUTES.find((key) => key === text || attributeNoun(key) === words) ?? text;
+}
+
+/** What an attribute row says, in plain words and the person's units: "sump at the rear", "bridges up to 2.36 in fore and aft". */
+export function attributeHint(typedName: string | undefined, typedValue: string | undefined, system: UnitSystem): string | null {
+  if (!typedName?.trim() || !typedValue?.trim()) return null;
+  const key = attributeKeyOf(typedName);
+  return renderText(textParts(describeAttribute(key, readAttributeValue(typedValue))), system);
+}
 
 type AttributeValue = NewPart['attributes'] extends Record<string, infer V> | undefined ? V : never;
 
@@ -78,7 +119,7 @@ export function partToFormValues(part: Part | null | undefined): PartFormValues 
     laborHours: part.laborHours,
     torqueSpecs: part.torqueSpecs.map((t) => ({ fastener: t.fastener, newtonMetres: t.newtonMetres, sequence: t.sequence ?? '' })),
     instructions: part.instructions ?? '',
-    attributes: Object.entries(part.attributes).map(([name, value]) => ({ name, value: showAttributeValue(value) })),
+    attributes: Object.entries(part.attributes).map(([name, value]) => ({ name: attributeWords(name), value: showAttributeValue(value) })),
     requiresSkus: part.requiresSkus,
     excludesSkus: part.excludesSkus,
     replacesSkus: part.replacesSkus,
@@ -89,7 +130,7 @@ export function partToFormValues(part: Part | null | undefined): PartFormValues 
 export function formValuesToBody(values: PartFormValues): NewPart {
   const attributes: Record<string, AttributeValue> = {};
   for (const row of values.attributes ?? []) {
-    if (row.name?.trim() && row.value?.trim()) attributes[row.name.trim()] = readAttributeValue(row.value);
+    if (row.name?.trim() && row.value?.trim()) attributes[attributeKeyOf(row.name)] = readAttributeValue(row.value);
   }
   return {
     sku: values.sku.trim(),
