@@ -61,8 +61,8 @@ export const sectionRoles = {
   projectMeasurements: ['owner', 'estimator', 'fabricator', 'counter', 'customer'],
   myProjects: ['customer'],
   customers: ['owner', 'estimator', 'fabricator', 'counter'],
-  // the estimator opens a quote from the project page to write its lines
-  quoteDetail: ['owner', 'estimator'],
+  // the estimator opens a quote from the project page to write its lines; the customer reads, answers and pays it
+  quoteDetail: ['owner', 'estimator', 'customer'],
   workOrders: ['owner', 'fabricator'],
   // the estimator opens a project's work order from the project page
   workOrderDetail: ['owner', 'estimator', 'fabricator'],

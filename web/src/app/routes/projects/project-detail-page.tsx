@@ -84,7 +84,7 @@ export function ProjectDetailPage() {
       <Card style={{ marginBottom: 16 }} title="Stage">
         <ProjectStageSteps status={p.status} />
       </Card>
-      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} />}
+      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} canAnswer={user.role === 'customer'} />}
       {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} />}
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>

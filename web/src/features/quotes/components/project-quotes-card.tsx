@@ -1,6 +1,6 @@
 import { formatMoney } from '@swapwright/shared';
 import { App, Button, Card, Empty, Flex, List, Space, Typography } from 'antd';
-import { Link } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { toQuote } from '@/config/paths';
 import { getErrorMessage } from '@/lib/api-error';
 import { useCreateQuote } from '../api/create-quote';
@@ -12,14 +12,24 @@ export interface ProjectQuotesCardProps {
   projectId: string;
   /** Owner and estimator write quotes; others read them. */
   canWrite: boolean;
+  /** The customer opens a sent quote of their own project to read it, answer it and pay the deposit. */
+  canAnswer?: boolean;
+}
+
+/** What the customer's link on a sent quote says: what is waiting for them. */
+function customerAction(quote: { status: string; depositState: string }): string {
+  if (quote.status === 'awaiting-answer') return 'Read and answer';
+  if (quote.status === 'approved' && quote.depositState === 'due') return 'Pay the deposit';
+  return 'Open quote';
 }
 
 /** The project's quotes: draft one from the parts plan and the fit report, send it to the customer, follow the answer and the deposit. */
-export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProps) {
+export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: ProjectQuotesCardProps) {
   const quotes = useProjectQuotes(projectId);
   const create = useCreateQuote(projectId);
   const send = useSendQuote(projectId);
   const { message } = App.useApp();
+  const navigate = useNavigate();
   return (
     <Card
       title="Quotes"
@@ -44,6 +54,11 @@ export function ProjectQuotesCard({ projectId, canWrite }: ProjectQuotesCardProp
                 <Link key="open" to={toQuote(quote.id)}>
                   {quote.latestRevision === quote.sentRevision || quote.status === 'approved' ? 'Open quote' : 'Edit lines'}
                 </Link>
+              ),
+              canAnswer && quote.sentRevision !== null && (
+                <Button key="answer" type={customerAction(quote) === 'Open quote' ? 'default' : 'primary'} onClick={() => navigate(toQuote(quote.id))}>
+                  {customerAction(quote)}
+                </Button>
               ),
               canWrite && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
                 <Button

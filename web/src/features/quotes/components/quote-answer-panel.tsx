@@ -1,10 +1,16 @@
 import { FIT_REPORT_CAUTION, formatMoney } from '@swapwright/shared';
+import { useQuery } from '@tanstack/react-query';
 import { Alert, Button, Card, Flex, Input, Space, Typography } from 'antd';
 import { useState } from 'react';
 import { getErrorMessage } from '@/lib/api-error';
-import { useAnswerQuoteByLink } from '../api/answer-quote-by-link';
+import { formatDate } from '@/lib/dates';
+import { useAnswerQuote } from '../api/answer-quote';
+import { type AnswerQuoteBody as QuoteAnswerBody, useAnswerQuoteByLink } from '../api/answer-quote-by-link';
 import { useQuoteByLink } from '../api/get-quote-by-link';
+import { quoteQueryOptions } from '../api/get-quote';
+import { usePayDeposit } from '../api/pay-deposit';
 import { usePayDepositByLink } from '../api/pay-deposit-by-link';
+import type { Quote } from '../types';
 import { QuoteLines } from './quote-lines';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 
@@ -24,20 +30,67 @@ export interface QuoteAnswerPanelProps {
 /** What the customer sees from the link in the quote e-mail: the quote, accept or decline with a reason, then the deposit. */
 export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
   const [paying, setPaying] = useState(false);
-  const quote = useQuoteByLink(token, paying);
   // polling stops once the deposit reads as paid (the card below is then no longer shown)
+  const quote = useQuoteByLink(token, paying);
   const answer = useAnswerQuoteByLink(token);
   const pay = usePayDepositByLink(token);
-  const [declining, setDeclining] = useState(false);
-  const [reason, setReason] = useState('');
-  const [card, setCard] = useState('');
-  const [payError, setPayError] = useState<string | null>(null);
-
   if (quote.isLoading) return <Card loading />;
   if (quote.isError || !quote.data) {
     return <Alert type="error" showIcon message="This quote link cannot be opened" description={getErrorMessage(quote.error)} />;
   }
-  const q = quote.data;
+  return (
+    <QuoteAnswerView
+      quote={quote.data}
+      pdfHref={`/api/quote-links/${encodeURIComponent(token)}/pdf`}
+      answer={answer}
+      pay={pay}
+      paying={paying}
+      onPaymentSent={() => setPaying(true)}
+    />
+  );
+}
+
+export interface CustomerQuotePanelProps {
+  quoteId: string;
+}
+
+/** The same answer for the signed-in customer, opened from their project: read the quote, accept or decline, pay the deposit. */
+export function CustomerQuotePanel({ quoteId }: CustomerQuotePanelProps) {
+  const [paying, setPaying] = useState(false);
+  const quote = useQuery({ ...quoteQueryOptions(quoteId), refetchInterval: (query) => (paying && query.state.data?.depositState !== 'paid' ? 1000 : false) });
+  const answer = useAnswerQuote(quoteId);
+  const pay = usePayDeposit(quoteId);
+  if (quote.isPending) return <Card loading />;
+  if (quote.isError) return <Alert type="error" showIcon message="This quote cannot be opened" description={getErrorMessage(quote.error)} />;
+  return (
+    <QuoteAnswerView
+      quote={quote.data}
+      pdfHref={`/api/quotes/${encodeURIComponent(quoteId)}/pdf`}
+      answer={answer}
+      pay={pay}
+      paying={paying}
+      onPaymentSent={() => setPaying(true)}
+    />
+  );
+}
+
+interface QuoteAnswerViewProps {
+  quote: Quote;
+  pdfHref: string;
+  answer: { mutate: (body: QuoteAnswerBody) => void; isPending: boolean; isError: boolean; error: unknown };
+  pay: { mutate: (paymentMethod: string, callbacks: { onSuccess: () => void; onError: (error: unknown) => void }) => void; isPending: boolean };
+  /** A payment went to the provider; its confirmation (the webhook) is awaited. */
+  paying: boolean;
+  onPaymentSent: () => void;
+}
+
+function QuoteAnswerView({ quote: q, pdfHref, answer, pay, paying, onPaymentSent }: QuoteAnswerViewProps) {
+  const [declining, setDeclining] = useState(false);
+  const [reason, setReason] = useState('');
+  const [card, setCard] = useState('');
+  const [payError, setPayError] = useState<string | null>(null);
+  const money = (cents: number) => formatMoney(cents, q.revision.currency);
+  const { totalCents, depositCents } = q.revision.totals;
   const waiting = paying && q.depositState !== 'paid';
   const submitCard = () => {
     setPayError(null);
@@ -46,7 +99,7 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
       setPayError('That card number is not one of the test cards of the local payment service.');
       return;
     }
-    pay.mutate(method, { onSuccess: () => setPaying(true), onError: (error) => setPayError(getErrorMessage(error)) });
+    pay.mutate(method, { onSuccess: onPaymentSent, onError: (error) => setPayError(getErrorMessage(error)) });
   };
 
   return (
@@ -67,7 +120,7 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
         </Typography.Paragraph>
         <QuoteLines quote={q} />
         <Typography.Paragraph style={{ marginTop: 12 }}>
-          <a href={`/api/quote-links/${encodeURIComponent(token)}/pdf`} target="_blank" rel="noreferrer">
+          <a href={pdfHref} target="_blank" rel="noreferrer">
             Open the quote as a PDF
           </a>
         </Typography.Paragraph>
@@ -76,6 +129,11 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
 
       {q.status === 'awaiting-answer' && (
         <Card title="Your answer">
+          <Typography.Paragraph data-testid="answer-money">
+            Accepting asks you for a deposit of <strong>{money(depositCents)}</strong> of the {money(totalCents)} total, paid by card on the next
+            step. Nothing is charged when you accept; the shop books your truck into the bay once the deposit is paid. The remaining{' '}
+            {money(totalCents - depositCents)} is not charged here.
+          </Typography.Paragraph>
           {answer.isError && <Alert type="error" showIcon message={getErrorMessage(answer.error)} style={{ marginBottom: 12 }} />}
           {!declining ? (
             <Space wrap>
@@ -102,7 +160,9 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
       {q.status === 'approved' && q.depositState === 'due' && (
         <Card title="Pay the deposit">
           <Typography.Paragraph>
-            Deposit due: <strong>{formatMoney(q.revision.totals.depositCents, q.revision.currency)}</strong>. Work is booked once it is paid.
+            Deposit due: <strong>{money(depositCents)}</strong> of the {money(totalCents)} total. Your card is charged this amount once, through the
+            payment service; the shop books your truck into the bay once it is paid. The remaining {money(totalCents - depositCents)} is not
+            charged here.
           </Typography.Paragraph>
           {payError && <Alert type="error" showIcon message={payError} style={{ marginBottom: 12 }} />}
           {waiting ? (
@@ -119,7 +179,14 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
         </Card>
       )}
 
-      {q.depositState === 'paid' && <Alert type="success" showIcon message="Deposit paid. Thank you: the shop will book your truck into the bay." />}
+      {q.depositState === 'paid' && (
+        <Alert
+          type="success"
+          showIcon
+          message="Deposit paid. Thank you: the shop will book your truck into the bay."
+          description={`${money(depositCents)} received${q.depositPaidAt ? ` on ${formatDate(q.depositPaidAt)}` : ''}. The remaining ${money(totalCents - depositCents)} is not charged here.`}
+        />
+      )}
       {q.status === 'turned-down' && <Alert type="info" showIcon message="You declined this quote. The shop has been told." />}
     </Flex>
   );

@@ -1,0 +1,13 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import type { DepositPayment } from '../types';
+
+/** The signed-in customer pays the deposit of their approved quote; the provider's webhook marks it paid. */
+export async function payDeposit(quoteId: string, paymentMethod: string): Promise<DepositPayment> {
+  const { data } = await apiClient.post<DepositPayment>(`/quotes/${encodeURIComponent(quoteId)}/deposit`, { paymentMethod }, { skipErrorNotification: true });
+  return data;
+}
+
+export function usePayDeposit(quoteId: string) {
+  return useMutation({ mutationFn: (paymentMethod: string) => payDeposit(quoteId, paymentMethod) });
+}
