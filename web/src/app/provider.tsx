@@ -1,7 +1,7 @@
 import { QueryClientProvider, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { App as AntApp, ConfigProvider } from 'antd';
+import { App as AntApp, ConfigProvider, Grid } from 'antd';
 import { useEffect, type ReactNode } from 'react';
-import { theme } from '@/config/theme';
+import { phoneTheme, theme } from '@/config/theme';
 import { onSessionChange } from '@/lib/api-client';
 import { registerNotifier } from '@/lib/notifier';
 import { queryClient as defaultQueryClient } from '@/lib/query-client';
@@ -39,9 +39,15 @@ function UnitsFromUser({ children }: { children: ReactNode }) {
 
 export type AppProviderProps = { children: ReactNode; queryClient?: QueryClient };
 
+/** The shop's theme; on a phone (below antd's md, 768 px) with controls sized for a thumb. */
+function ThemeByWidth({ children }: { children: ReactNode }) {
+  const phone = Grid.useBreakpoint().md === false;
+  return <ConfigProvider theme={phone ? phoneTheme : theme}>{children}</ConfigProvider>;
+}
+
 export function AppProvider({ children, queryClient = defaultQueryClient }: AppProviderProps) {
   return (
-    <ConfigProvider theme={theme}>
+    <ThemeByWidth>
       <AntApp>
         <NotifierBridge />
         <QueryClientProvider client={queryClient}>
@@ -49,6 +55,6 @@ export function AppProvider({ children, queryClient = defaultQueryClient }: AppP
           <UnitsFromUser>{children}</UnitsFromUser>
         </QueryClientProvider>
       </AntApp>
-    </ConfigProvider>
+    </ThemeByWidth>
   );
 }
