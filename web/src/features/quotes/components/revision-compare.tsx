@@ -1,5 +1,5 @@
 import { formatMoney, formatMoneyChange } from '@swapwright/shared';
-import { Alert, Flex, Select, Table, Tag, Typography } from 'antd';
+import { Alert, Flex, Grid, Select, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { getErrorMessage } from '@/lib/api-error';
 import { formatDate } from '@/lib/dates';
@@ -62,6 +62,9 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
   const currency = quote.revision.currency;
   const money = (cents: number) => formatMoney(cents, currency);
   const signed = (cents: number) => formatMoneyChange(cents, currency);
+  // Below antd's md (768 px) a changed line is one stacked cell (change, description, quantity, unit and amount,
+  // each before → after), so nothing hides past the right edge of a phone.
+  const narrow = Grid.useBreakpoint().md === false;
 
   return (
     <Flex vertical gap={12} data-testid="revision-compare">
@@ -82,16 +85,37 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
               size="small"
               rowKey="key"
               pagination={false}
-              scroll={{ x: 'max-content' }}
+              scroll={narrow ? undefined : { x: 'max-content' }}
               dataSource={diff.data.lines}
               aria-label="Lines changed"
-              columns={[
-                { title: 'Change', key: 'change', render: (_, line) => <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag> },
-                { title: 'Description', dataIndex: 'description' },
-                { title: 'Qty / hours', key: 'amount', align: 'right', render: (_, line) => beforeAfter(line, (side) => amountOf(line, side)) },
-                { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.unitPriceCents)) },
-                { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.lineTotalCents)) },
-              ]}
+              columns={
+                narrow
+                  ? [
+                      {
+                        title: 'Line',
+                        key: 'line',
+                        render: (_, line) => (
+                          <Flex vertical gap={2}>
+                            <span>
+                              <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag>
+                              {line.description}
+                            </span>
+                            <span>
+                              {beforeAfter(line, (side) => amountOf(line, side))} × {beforeAfter(line, (side) => money(side.unitPriceCents))}
+                            </span>
+                            <span>Amount {beforeAfter(line, (side) => money(side.lineTotalCents))}</span>
+                          </Flex>
+                        ),
+                      },
+                    ]
+                  : [
+                      { title: 'Change', key: 'change', render: (_, line) => <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag> },
+                      { title: 'Description', dataIndex: 'description' },
+                      { title: 'Qty / hours', key: 'amount', align: 'right', render: (_, line) => beforeAfter(line, (side) => amountOf(line, side)) },
+                      { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.unitPriceCents)) },
+                      { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.lineTotalCents)) },
+                    ]
+              }
             />
           )}
           {diff.data.totals.length === 0 ? (

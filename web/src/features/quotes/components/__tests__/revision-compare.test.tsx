@@ -2,6 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
 import { renderWithApp } from '@/test/render';
+import { setWindowWidth } from '@/test/viewport';
 import type { QuoteRevisionDiff } from '../../types';
 import { RevisionCompare } from '../revision-compare';
 import { quoteStub } from './quote-stub';
@@ -48,5 +49,23 @@ describe('RevisionCompare', () => {
     // Hand-checked deltas: 482.00 - 401.65 = +80.35; 1,215.00 - 1,323.00 = -108.00.
     expect(within(totals).getByText('Parts').closest('tr')).toHaveTextContent(/\$401\.65.*\$482\.00.*\+\$80\.35/);
     expect(within(totals).getByText('Labor').closest('tr')).toHaveTextContent(/\$1,323\.00.*\$1,215\.00.*−\$108\.00/);
+  });
+
+  it('on a phone shows each changed line as one stacked cell, no column past the edge', async () => {
+    setWindowWidth(390);
+    vi.spyOn(apiClient, 'get').mockResolvedValue({ data: DIFF });
+    const quote = quoteStub({ number: 2 }, {
+      latestRevision: 2,
+      sentRevision: 1,
+      revisions: [
+        { number: 1, sentAt: '2026-12-03T03:10:00.000Z', totalCents: 181071 },
+        { number: 2, sentAt: null, totalCents: 176742 },
+      ],
+    });
+    renderWithApp(<RevisionCompare quote={quote} />);
+    const lines = await screen.findByRole('table', { name: 'Lines changed' });
+    expect(within(lines).getAllByRole('columnheader').map((header) => header.textContent)).toEqual(['Line']);
+    const row = within(lines).getByText('Pickup tube and screen').closest('tr')!;
+    expect(row).toHaveTextContent(/Changed.*Pickup tube and screen.*2 → 3 × \$55\.85.*Amount \$111\.70 → \$167\.55/);
   });
 });
