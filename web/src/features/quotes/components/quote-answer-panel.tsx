@@ -1,13 +1,15 @@
 import { FIT_REPORT_CAUTION, formatMoney } from '@swapwright/shared';
 import { useQuery } from '@tanstack/react-query';
-import { Alert, Button, Card, Flex, Input, Space, Typography } from 'antd';
+import { Alert, Button, Card, Flex, Input, Popconfirm, Space, Typography } from 'antd';
 import { useState } from 'react';
+import { ErrorState } from '@/components/query-state';
 import { getErrorMessage } from '@/lib/api-error';
 import { formatDate } from '@/lib/dates';
 import { useAnswerQuote } from '../api/answer-quote';
 import { type AnswerQuoteBody as QuoteAnswerBody, useAnswerQuoteByLink } from '../api/answer-quote-by-link';
 import { useQuoteByLink } from '../api/get-quote-by-link';
 import { quoteQueryOptions } from '../api/get-quote';
+import { downloadQuotePdf } from '../api/get-quote-pdf';
 import { usePayDeposit } from '../api/pay-deposit';
 import { usePayDepositByLink } from '../api/pay-deposit-by-link';
 import type { Quote } from '../types';
@@ -41,7 +43,7 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
   return (
     <QuoteAnswerView
       quote={quote.data}
-      pdfHref={`/api/quote-links/${encodeURIComponent(token)}/pdf`}
+      pdf={{ href: `/api/quote-links/${encodeURIComponent(token)}/pdf` }}
       answer={answer}
       pay={pay}
       paying={paying}
@@ -61,11 +63,13 @@ export function CustomerQuotePanel({ quoteId }: CustomerQuotePanelProps) {
   const answer = useAnswerQuote(quoteId);
   const pay = usePayDeposit(quoteId);
   if (quote.isPending) return <Card loading />;
-  if (quote.isError) return <Alert type="error" showIcon message="This quote cannot be opened" description={getErrorMessage(quote.error)} />;
+  // another customer's quote (or one not sent yet) answers 404: the not-found state, nothing of the quote
+  if (quote.isError) return <ErrorState error={quote.error} onRetry={() => void quote.refetch()} />;
+  const { label, revision } = quote.data;
   return (
     <QuoteAnswerView
       quote={quote.data}
-      pdfHref={`/api/quotes/${encodeURIComponent(quoteId)}/pdf`}
+      pdf={{ download: () => downloadQuotePdf(quoteId, `quote-${label}-revision-${revision.number}.pdf`) }}
       answer={answer}
       pay={pay}
       paying={paying}
@@ -76,7 +80,8 @@ export function CustomerQuotePanel({ quoteId }: CustomerQuotePanelProps) {
 
 interface QuoteAnswerViewProps {
   quote: Quote;
-  pdfHref: string;
+  /** The PDF: a plain link for the e-mailed link's holder; a download through the session when signed in (the link carries no token). */
+  pdf: { href: string } | { download: () => Promise<void> };
   answer: { mutate: (body: QuoteAnswerBody) => void; isPending: boolean; isError: boolean; error: unknown };
   pay: { mutate: (paymentMethod: string, callbacks: { onSuccess: () => void; onError: (error: unknown) => void }) => void; isPending: boolean };
   /** A payment went to the provider; its confirmation (the webhook) is awaited. */
@@ -84,11 +89,12 @@ interface QuoteAnswerViewProps {
   onPaymentSent: () => void;
 }
 
-function QuoteAnswerView({ quote: q, pdfHref, answer, pay, paying, onPaymentSent }: QuoteAnswerViewProps) {
+function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: QuoteAnswerViewProps) {
   const [declining, setDeclining] = useState(false);
   const [reason, setReason] = useState('');
   const [card, setCard] = useState('');
   const [payError, setPayError] = useState<string | null>(null);
+  const [pdfLoading, setPdfLoading] = useState(false);
   const money = (cents: number) => formatMoney(cents, q.revision.currency);
   const { totalCents, depositCents } = q.revision.totals;
   const waiting = paying && q.depositState !== 'paid';
@@ -120,12 +126,32 @@ function QuoteAnswerView({ quote: q, pdfHref, answer, pay, paying, onPaymentSent
         </Typography.Paragraph>
         <QuoteLines quote={q} />
         <Typography.Paragraph style={{ marginTop: 12 }}>
-          <a href={pdfHref} target="_blank" rel="noreferrer">
-            Open the quote as a PDF
-          </a>
+          {'href' in pdf ? (
+            <a href={pdf.href} target="_blank" rel="noreferrer">
+              Open the quote as a PDF
+            </a>
+          ) : (
+            <Button
+              loading={pdfLoading}
+              onClick={() => {
+                setPdfLoading(true);
+                void pdf.download().finally(() => setPdfLoading(false));
+              }}
+            >
+              Download the quote as a PDF
+            </Button>
+          )}
         </Typography.Paragraph>
         <Alert type="warning" showIcon message="Planning aid" description={FIT_REPORT_CAUTION} />
       </Card>
+
+      {q.revision.terms.trim() && (
+        <Card title="Terms">
+          <Typography.Paragraph style={{ whiteSpace: 'pre-wrap', marginBottom: 0 }} data-testid="quote-terms">
+            {q.revision.terms}
+          </Typography.Paragraph>
+        </Card>
+      )}
 
       {q.status === 'awaiting-answer' && (
         <Card title="Your answer">
@@ -137,9 +163,17 @@ function QuoteAnswerView({ quote: q, pdfHref, answer, pay, paying, onPaymentSent
           {answer.isError && <Alert type="error" showIcon message={getErrorMessage(answer.error)} style={{ marginBottom: 12 }} />}
           {!declining ? (
             <Space wrap>
-              <Button type="primary" loading={answer.isPending} onClick={() => answer.mutate({ answer: 'accept' })}>
-                Accept this quote
-              </Button>
+              <Popconfirm
+                title={`Accept quote ${q.label} for ${money(totalCents)}?`}
+                description={`The deposit of ${money(depositCents)} is then asked for.`}
+                okText="Accept"
+                cancelText="Not yet"
+                onConfirm={() => answer.mutate({ answer: 'accept' })}
+              >
+                <Button type="primary" loading={answer.isPending}>
+                  Accept this quote
+                </Button>
+              </Popconfirm>
               <Button onClick={() => setDeclining(true)}>Decline…</Button>
             </Space>
           ) : (

@@ -1,4 +1,4 @@
-import { screen, waitFor } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
@@ -34,6 +34,9 @@ describe('CustomerQuotePanel (the signed-in customer answers a sent quote)', () 
     );
     renderPanel();
     await userEvent.click(await screen.findByRole('button', { name: 'Accept this quote' }));
+    // nothing is sent before the customer confirms
+    expect(post).not.toHaveBeenCalled();
+    await userEvent.click(within(await screen.findByRole('tooltip')).getByRole('button', { name: 'Accept' }));
     await waitFor(() => expect(post).toHaveBeenCalledWith('/quotes/quote-7/answer', { answer: 'accept' }, expect.anything()));
 
     expect(await screen.findByText(/Your card is charged this amount once/)).toHaveTextContent('Deposit due: $543.21 of the $1,810.71 total.');
