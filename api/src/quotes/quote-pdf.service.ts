@@ -39,6 +39,11 @@ function firstSentence(text: string): string {
   return end > 0 && end < 240 ? text.slice(0, end + 1) : text.length > 240 ? `${text.slice(0, 237)}…` : text;
 }
 
+/** The remedies under a shortfall as one sentence: each remedy's own closing full stop gives way to the list's separator. */
+export function resolvedByLine(remedies: string[]): string {
+  return `Resolved by: ${remedies.map((text) => text.trim().replace(/[.;]+$/, '')).join('; ')}.`;
+}
+
 /** The quote as a PDF: header, customer and vehicle, fit summary with a small side view, lines, totals, deposit, terms and cautions. */
 @Injectable()
 export class QuotePdfService {
@@ -155,7 +160,7 @@ export class QuotePdfService {
         .map((remedy) => (remedy.kind === 'fabrication' ? remedy.operation : remedy.kind === 'part' ? firstSentence(remedy.note) : null))
         .filter((text): text is string => Boolean(text));
       if (resolved.length > 0) {
-        doc.fillColor(INK).text(`Resolved by: ${resolved.slice(0, 2).join('; ')}`, { width: textWidth });
+        doc.fillColor(INK).text(resolvedByLine(resolved.slice(0, 2)), { width: textWidth });
       }
       doc.moveDown(0.2);
     }
