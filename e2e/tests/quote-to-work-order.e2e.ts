@@ -113,7 +113,37 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
     await expectText(page.getByTestId('quote-revision'), /Revision 2 \(sent, frozen\)/);
     await page.getByRole('button', { name: 'Back to the project' }).click();
 
-    // The customer opens the link in the e-mail, accepts and pays the deposit on the local payment fake.
+    // The customer, signed in, opens the quote from their project and accepts it after a confirmation.
+    const signedIn = await openBrowser();
+    try {
+      const { page: mine } = signedIn;
+      await signInAs(mine, 'customer');
+      await mine.getByRole('link', { name: /Harlan Ridgeback 1978/ }).first().click();
+      await mine.getByTestId(`quote-${quoteLabel}`).getByRole('button', { name: 'Read and answer' }).click();
+      await expectText(mine.getByRole('heading', { level: 2 }), /Your quote/);
+      await expectVisible(mine.getByText(`Quote ${quoteLabel} · revision 2`));
+      await expectVisible(mine.getByTestId('quote-total'));
+      await expectText(mine.getByTestId('answer-money'), /Nothing is charged when you accept/);
+      await mine.setViewportSize({ width: 390, height: 844 });
+      await expectFitsWidth(mine);
+      await saveScreenshot(mine, 'customer-signed-in-quote-phone');
+      await mine.setViewportSize({ width: 1440, height: 900 });
+      await mine.getByRole('button', { name: 'Accept this quote' }).click();
+      const confirm = mine.locator('.ant-popconfirm').filter({ hasText: `Accept quote ${quoteLabel}` });
+      await confirm.waitFor({ state: 'visible' });
+      const answered = mine.waitForResponse((r) => /\/quotes\/[^/]+\/answer$/.test(r.url()));
+      await confirm.getByRole('button', { name: 'Accept', exact: true }).click();
+      expect((await answered).status()).toBe(200);
+      await expectVisible(mine.getByLabel('Card number (local test payment service)'));
+      await saveScreenshot(mine, 'customer-signed-in-quote-accepted');
+      // back on the project, the quote now waits for the deposit
+      await mine.getByRole('button', { name: 'Back to the project' }).click();
+      await expectVisible(mine.getByTestId(`quote-${quoteLabel}`).getByRole('button', { name: 'Pay the deposit' }));
+    } finally {
+      await signedIn.close();
+    }
+
+    // The same quote through the link in the e-mail: it reads as accepted, and the deposit is paid there on the local payment fake.
     let mail: CapturedMail | undefined;
     for (let attempt = 0; attempt < 50 && !mail; attempt++) {
       // the newest revision's mail: the link in the first one is superseded by revision 2
@@ -128,7 +158,7 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       const answerPage = customer.page;
       await answerPage.goto(new URL(link!).pathname);
       await expectVisible(answerPage.getByTestId('quote-total'));
-      await answerPage.getByRole('button', { name: 'Accept this quote' }).click();
+      expect(await answerPage.getByRole('button', { name: 'Accept this quote' }).count()).toBe(0);
       await answerPage.getByLabel('Card number (local test payment service)').fill('4242 4242 4242 4242');
       await saveScreenshot(answerPage, 'customer-quote-accepted');
       await answerPage.getByRole('button', { name: 'Pay the deposit' }).click();
