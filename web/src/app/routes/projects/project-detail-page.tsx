@@ -13,6 +13,7 @@ import { ProjectGoalsCard, ProjectPlacementCard, ProjectSelectionsCard } from '@
 import { ProjectFormDrawer } from '@/features/projects/components/project-form-drawer';
 import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
+import { projectStatuses } from '@/features/projects/types';
 import { PartsPlanCard } from '@/features/parts-plans/components/parts-plan-card';
 import { ProjectQuotesCard } from '@/features/quotes/components/project-quotes-card';
 import { ProjectWorkOrderCard } from '@/features/work-orders/components/project-work-order-card';
@@ -85,7 +86,7 @@ export function ProjectDetailPage() {
         <ProjectStageSteps status={p.status} />
       </Card>
       {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} canAnswer={user.role === 'customer'} />}
-      {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} />}
+      {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} opened={projectStatuses.indexOf(p.status) >= projectStatuses.indexOf('deposit-paid')} />}
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>
           <ProjectGoalsCard project={p} currency={currency} />

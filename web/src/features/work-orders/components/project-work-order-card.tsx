@@ -6,11 +6,13 @@ import { WorkOrderStateTag } from './work-order-state-tag';
 export interface ProjectWorkOrderCardProps {
   projectId: string;
   toWorkOrder: (id: string) => string;
+  /** Whether the project has reached the stage where its work order opens (the deposit paid); before that nothing is asked. */
+  opened: boolean;
 }
 
 /** The project's work order at a glance, with the link the bay opens; nothing until the deposit is paid. */
-export function ProjectWorkOrderCard({ projectId, toWorkOrder }: ProjectWorkOrderCardProps) {
-  const order = useProjectWorkOrder(projectId);
+export function ProjectWorkOrderCard({ projectId, toWorkOrder, opened }: ProjectWorkOrderCardProps) {
+  const order = useProjectWorkOrder(projectId, opened);
   if (!order.data) return null;
   const { progress } = order.data;
   return (
