@@ -1,5 +1,5 @@
 import { JwtService } from '@nestjs/jwt';
-import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { bearer, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
@@ -186,6 +186,24 @@ describe('labor operations and quotes', () => {
       expect(compared.status).toBe(200);
       expect(compared.body.lines).toEqual([]);
       expect(compared.body.totals).toContainEqual(expect.objectContaining({ field: 'partsDiscountCents', beforeCents: 0, afterCents: 2008 }));
+    });
+
+    it("another customer of the shop signed in gets not found for this sent quote: no lines, no answer, no deposit", async () => {
+      const email = 'odile.quotes@example.test';
+      const before = await lastMailId();
+      await t.http.post('/api/invitations').set(...bearer(demo.owner)).send({ email, role: 'customer', customerId: DEMO_CUSTOMER_IDS.odile }).expect(201);
+      const invitation = await waitForMail(email, /./, before);
+      const token = decodeURIComponent(/accept-invite\?token=([A-Za-z0-9_%-]+)/.exec(invitation.text)?.[1] ?? '');
+      const accepted = await t.http.post('/api/invitations/accept').send({ token, name: 'Odile Straker', password: 'odile-pass-1' }).expect(200);
+      const other = accepted.body as Session;
+      const read = await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(other));
+      expect(read.status).toBe(404);
+      expect(JSON.stringify(read.body)).not.toContain('Rear-sump oil pan');
+      expect((await t.http.post(`/api/quotes/${quoteId}/answer`).set(...bearer(other)).send({ answer: 'accept' })).status).toBe(404);
+      expect((await t.http.post(`/api/quotes/${quoteId}/deposit`).set(...bearer(other)).send({ paymentMethod: 'pm_card_visa' })).status).toBe(404);
+      expect((await t.http.get(`/api/quotes/${quoteId}/pdf`).set(...bearer(other))).status).toBe(404);
+      // the quote's own customer still reads it
+      expect((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.customer))).status).toBe(200);
     });
 
     it('edits lines of the working revision by key: quantity, hours, part number, a line removed and one added; compare names before and after', async () => {
