@@ -107,6 +107,8 @@ export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryPro
   ];
 
   const items = reports.data?.items ?? [];
+  // Picking and comparing mean something only once there are two reports to compare.
+  const canCompare = items.length >= 2;
   return (
     <Flex vertical gap={12} data-testid="report-history">
       <Table<FitReportListItem>
@@ -118,21 +120,27 @@ export function ReportHistory({ projectId, currentId, onOpen }: ReportHistoryPro
         pagination={items.length > 10 ? { pageSize: 10 } : false}
         aria-label="Fit report history"
         locale={{ emptyText: 'No stored reports yet.' }}
-        rowSelection={{
-          selectedRowKeys: picked,
-          onChange: (keys) => setPicked((keys as string[]).slice(-2)),
-          getCheckboxProps: (r) => ({ 'aria-label': `Pick the report of ${formatTime(r.createdAt)} to compare` }),
-          hideSelectAll: true,
-        }}
+        rowSelection={
+          canCompare
+            ? {
+                selectedRowKeys: picked,
+                onChange: (keys) => setPicked((keys as string[]).slice(-2)),
+                getCheckboxProps: (r) => ({ 'aria-label': `Pick the report of ${formatTime(r.createdAt)} to compare` }),
+                hideSelectAll: true,
+              }
+            : undefined
+        }
       />
-      <Flex gap={8} align="center" className="fit-control">
-        <Button disabled={picked.length !== 2} onClick={() => setComparing([picked[0], picked[1]])}>
-          Compare the two picked
-        </Button>
-        <Typography.Text type="secondary" style={{ fontSize: 13 }}>
-          Tick two reports to see what changed between them.
-        </Typography.Text>
-      </Flex>
+      {canCompare && (
+        <Flex gap={8} align="center" wrap className="fit-control">
+          <Button disabled={picked.length !== 2} onClick={() => setComparing([picked[0], picked[1]])}>
+            Compare the two picked
+          </Button>
+          <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+            Tick two reports to see what changed between them.
+          </Typography.Text>
+        </Flex>
+      )}
       {comparing && (() => {
         const byDate = [...comparing].sort((x, y) => {
           const dx = items.find((i) => i.id === x)?.createdAt ?? '';

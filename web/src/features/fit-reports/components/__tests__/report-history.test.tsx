@@ -67,4 +67,13 @@ describe('ReportHistory', () => {
     const call = get.mock.calls.find((c) => c[0] === '/fit-reports/compare');
     expect(call?.[1]).toMatchObject({ params: { a: 'r1', b: 'r2' } });
   });
+
+  it('offers no picking or comparing until there are two reports to compare', async () => {
+    wideScreen();
+    vi.spyOn(apiClient, 'get').mockResolvedValue({ data: { ...page, items: [page.items[0]], total: 1 } });
+    renderWithApp(<ReportHistory projectId="p1" onOpen={vi.fn()} />);
+    await screen.findByText('Sam Reyes');
+    expect(screen.queryByRole('checkbox')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Compare the two picked' })).toBeNull();
+  });
 });
