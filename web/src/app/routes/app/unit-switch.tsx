@@ -8,6 +8,7 @@ export function UnitSwitch() {
     <Tooltip title={`Lengths show in this unit for you. Shop default: ${shopSystem === 'in' ? 'inches' : 'millimetres'}.`}>
       <Segmented<UnitSystem>
         size="small"
+        className="unit-switch"
         aria-label="Length unit"
         value={system}
         onChange={(v) => setOverride(v === shopSystem ? null : v)}
