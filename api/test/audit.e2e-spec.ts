@@ -63,7 +63,9 @@ describe('audit log of money, stock, sign-off and membership changes', () => {
 
   it('records labor and tax rate changes (money), not a change of the shop name', async () => {
     const shopBefore = (await t.http.get('/api/shops/current').set(...bearer(s.owner)).expect(200)).body;
-    await t.http.patch('/api/shops/current').set(...bearer(s.owner)).send({ laborRatePerHour: 142.5 }).expect(200);
+    const updated = await t.http.patch('/api/shops/current').set(...bearer(s.owner)).send({ laborRatePerHour: 142.5 }).expect(200);
+    // The answer is the whole shop (the web shows it at once), not only the field that was sent.
+    expect(updated.body).toEqual({ ...shopBefore, laborRatePerHour: 142.5 });
     const [rates] = (await events('?kind=money')).items;
     expect(rates).toMatchObject({ action: 'shop.rates-changed', before: { laborRatePerHour: Number(shopBefore.laborRatePerHour) }, after: { laborRatePerHour: 142.5 } });
     const before = await auditRows();

@@ -50,7 +50,9 @@ export class ShopsService {
           after: moved.after,
         });
       }
-      Object.assign(shop, changes, changes.name !== undefined ? { name: changes.name.trim() } : {});
+      // Only the fields sent: the DTO instance also carries the others as undefined, which would blank them in the answer.
+      const sent = Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined));
+      Object.assign(shop, sent, changes.name !== undefined ? { name: changes.name.trim() } : {});
       if (changes.currency) shop.currency = changes.currency.toUpperCase();
       return manager.save(shop);
     });
