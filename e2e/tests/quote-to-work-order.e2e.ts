@@ -118,19 +118,24 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
     try {
       const { page: mine } = signedIn;
       await signInAs(mine, 'customer');
+      await mine.setViewportSize({ width: 390, height: 844 });
       await mine.getByRole('link', { name: /Harlan Ridgeback 1978/ }).first().click();
-      await mine.getByTestId(`quote-${quoteLabel}`).getByRole('button', { name: 'Read and answer' }).click();
+      const row = mine.getByTestId(`quote-${quoteLabel}`);
+      await row.scrollIntoViewIfNeeded();
+      await expectFitsWidth(mine);
+      await row.screenshot({ path: join(ARTIFACTS_DIR, 'screenshots', 'customer-project-quote-row-phone.png') });
+      await row.getByRole('button', { name: 'Read and answer' }).click();
       await expectText(mine.getByRole('heading', { level: 2 }), /Your quote/);
       await expectVisible(mine.getByText(`Quote ${quoteLabel} · revision 2`));
       await expectVisible(mine.getByTestId('quote-total'));
       await expectText(mine.getByTestId('answer-money'), /Nothing is charged when you accept/);
-      await mine.setViewportSize({ width: 390, height: 844 });
       await expectFitsWidth(mine);
       await saveScreenshot(mine, 'customer-signed-in-quote-phone');
       await mine.setViewportSize({ width: 1440, height: 900 });
       await mine.getByRole('button', { name: 'Accept this quote' }).click();
       const confirm = mine.locator('.ant-popconfirm').filter({ hasText: `Accept quote ${quoteLabel}` });
       await confirm.waitFor({ state: 'visible' });
+      await mine.screenshot({ path: join(ARTIFACTS_DIR, 'screenshots', 'customer-signed-in-quote-confirm.png') });
       const answered = mine.waitForResponse((r) => /\/quotes\/[^/]+\/answer$/.test(r.url()));
       await confirm.getByRole('button', { name: 'Accept', exact: true }).click();
       expect((await answered).status()).toBe(200);
@@ -139,6 +144,11 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       // back on the project, the quote now waits for the deposit
       await mine.getByRole('button', { name: 'Back to the project' }).click();
       await expectVisible(mine.getByTestId(`quote-${quoteLabel}`).getByRole('button', { name: 'Pay the deposit' }));
+      // a quote id that is not theirs: the not-found state, nothing of any quote
+      await mine.goto('/quotes/00000000-0000-4000-8000-000000000000');
+      await expectVisible(mine.getByText('Not found in this shop'));
+      expect(await mine.getByTestId('quote-total').count()).toBe(0);
+      await saveScreenshot(mine, 'customer-quote-not-found');
     } finally {
       await signedIn.close();
     }
