@@ -5,7 +5,12 @@ import { quoteKeys } from './quote-keys';
 
 /** A quote with its working revision, or with the revision numbered `revision`. */
 export async function getQuote(quoteId: string, revision?: number, signal?: AbortSignal): Promise<Quote> {
-  const { data } = await apiClient.get<Quote>(`/quotes/${encodeURIComponent(quoteId)}`, { params: revision === undefined ? undefined : { revision }, signal });
+  // every reader of the current revision shows a failed read in the page (not found, no access), so no second notice pops up
+  const { data } = await apiClient.get<Quote>(`/quotes/${encodeURIComponent(quoteId)}`, {
+    params: revision === undefined ? undefined : { revision },
+    signal,
+    skipErrorNotification: revision === undefined,
+  });
   return data;
 }
 
