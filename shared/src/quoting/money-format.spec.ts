@@ -43,4 +43,12 @@ describe('moneySign', () => {
     expect(moneySign('CAD')).toBe('CA$');
     expect(moneySign('EUR')).toBe('€');
   });
+
+  it('writes a plain amount, never throws, when the currency is missing or not a three-letter code', () => {
+    // Source: ISO 4217 (alphabetic currency codes are three letters).
+    expect(formatMoney(513191, undefined as unknown as string)).toBe('5,131.91');
+    expect(formatMoney(513191, 'US')).toBe('5,131.91');
+    expect(formatMoney(513191, 'usd')).toBe('$5,131.91');
+    expect(moneySign('')).toBe('');
+  });
 });

@@ -5,11 +5,19 @@
  */
 const formatters = new Map<string, Intl.NumberFormat>();
 
-function formatterOf(currency: string): Intl.NumberFormat {
-  let formatter = formatters.get(currency);
+/** ISO 4217 codes are three letters; anything else (missing, cut short) is written as a plain amount. */
+const CURRENCY_CODE = /^[A-Za-z]{3}$/;
+
+function formatterOf(currency: string | null | undefined): Intl.NumberFormat {
+  const key = typeof currency === 'string' && CURRENCY_CODE.test(currency) ? currency.toUpperCase() : '';
+  let formatter = formatters.get(key);
   if (!formatter) {
-    formatter = new Intl.NumberFormat('en-US', { style: 'currency', currency, minimumFractionDigits: 2, maximumFractionDigits: 2 });
-    formatters.set(currency, formatter);
+    // A screen that is briefly without the shop's currency (an answer still loading) shows the amount rather than
+    // throwing and blanking the page.
+    formatter = key
+      ? new Intl.NumberFormat('en-US', { style: 'currency', currency: key, minimumFractionDigits: 2, maximumFractionDigits: 2 })
+      : new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+    formatters.set(key, formatter);
   }
   return formatter;
 }
@@ -27,5 +35,5 @@ export function formatMoneyChange(cents: number, currency: string): string {
 
 /** The currency's sign as `formatMoney` writes it ("$", "CA$", "€"), for the prefix of an amount box. */
 export function moneySign(currency: string): string {
-  return formatterOf(currency).formatToParts(0).find((part) => part.type === 'currency')?.value ?? currency;
+  return formatterOf(currency).formatToParts(0).find((part) => part.type === 'currency')?.value ?? '';
 }
