@@ -206,6 +206,23 @@ describe('labor operations and quotes', () => {
       expect((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.customer))).status).toBe(200);
     });
 
+    it("the customer, signed in or by the link, sees each line's price but never the shop's cost or markup", async () => {
+      type Line = { description: string; pricing: string; unitPriceCents: number; unitCostCents: number | null; markupPercent: number | null };
+      const pickupOf = (body: { revision: { lines: Line[] } }) => body.revision.lines.find((line) => line.description === 'Pickup tube and screen')!;
+      const shop = pickupOf((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.estimator)).expect(200)).body);
+      expect(shop).toMatchObject({ pricing: 'cost-plus', unitCostCents: 4137, markupPercent: 35 });
+      const readers = [
+        (await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.customer)).expect(200)).body,
+        (await t.http.get(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.customer)).expect(200)).body[0],
+        (await t.http.get(`/api/quote-links/${token}`).expect(200)).body,
+      ];
+      for (const body of readers) {
+        const line = pickupOf(body);
+        expect(line).toMatchObject({ unitCostCents: null, markupPercent: null, unitPriceCents: shop.unitPriceCents });
+        expect(body.revision.lines.every((l: Line) => l.unitCostCents === null && l.markupPercent === null)).toBe(true);
+      }
+    });
+
     it('edits lines of the working revision by key: quantity, hours, part number, a line removed and one added; compare names before and after', async () => {
       type Line = { key: string; kind: 'part' | 'labor'; description: string; sku: string | null; quantity: number; pricing: string; unitPriceCents: number; unitCostCents: number | null; markupPercent: number | null; hours: number | null; lineTotalCents: number };
       const asInput = (line: Line) =>

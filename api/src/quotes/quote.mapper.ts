@@ -12,7 +12,17 @@ import { QuoteRevision } from './quote-revision.entity';
 import { QuoteSettings } from './quote-settings.entity';
 import { quoteLabel, QuoteView } from './quotes.service';
 
-export function mapQuoteRevision(revision: QuoteRevision): QuoteRevisionResponseDto {
+/**
+ * Who reads the quote: the shop's own people see how each price was made; the customer (signed in, or holding the
+ * e-mailed link) sees prices only, never the shop's cost or markup.
+ */
+export type QuoteAudience = 'shop' | 'customer';
+
+export function quoteAudienceOf(user: { role: string }): QuoteAudience {
+  return user.role === 'customer' ? 'customer' : 'shop';
+}
+
+export function mapQuoteRevision(revision: QuoteRevision, audience: QuoteAudience = 'shop'): QuoteRevisionResponseDto {
   return {
     number: revision.number,
     sent: revision.sentAt !== null,
@@ -35,13 +45,17 @@ export function mapQuoteRevision(revision: QuoteRevision): QuoteRevisionResponse
     depositAmountCents: revision.depositAmountCents,
     terms: revision.terms,
     notes: revision.notes,
-    lines: revision.lines.map((line) => ({ ...line, sku: line.sku ?? null })),
+    lines: revision.lines.map((line) => ({
+      ...line,
+      sku: line.sku ?? null,
+      ...(audience === 'customer' && { unitCostCents: null, markupPercent: null }),
+    })),
     totals: { ...revision.totals },
     createdAt: revision.createdAt.toISOString(),
   };
 }
 
-export function mapQuote(view: QuoteView): QuoteResponseDto {
+export function mapQuote(view: QuoteView, audience: QuoteAudience = 'shop'): QuoteResponseDto {
   const { quote, project } = view;
   return {
     id: quote.id,
@@ -57,7 +71,7 @@ export function mapQuote(view: QuoteView): QuoteResponseDto {
     depositState: quote.depositState,
     depositPaidAt: quote.depositPaidAt?.toISOString() ?? null,
     roundingRule: QUOTE_ROUNDING_RULE,
-    revision: mapQuoteRevision(view.revision),
+    revision: mapQuoteRevision(view.revision, audience),
     revisions: view.revisions.map((revision) => ({ number: revision.number, sentAt: revision.sentAt?.toISOString() ?? null, totalCents: revision.totals.totalCents })),
   };
 }

@@ -20,7 +20,7 @@ import {
   QuoteRevisionDiffResponseDto,
   QuoteSettingsResponseDto,
 } from './dto/quote-response.dto';
-import { mapQuote, mapQuoteNotification, mapQuoteSettings, mapRevisionDiff } from './quote.mapper';
+import { mapQuote, mapQuoteNotification, mapQuoteSettings, mapRevisionDiff, quoteAudienceOf } from './quote.mapper';
 import { QuoteSettingsService } from './quote-settings.service';
 import { QUOTE_STATUSES } from './quote.entity';
 import { QuotesService } from './quotes.service';
@@ -40,7 +40,7 @@ export class ProjectQuotesController {
   @Roles(...QUOTE_READERS)
   @ApiOkResponse({ type: [QuoteResponseDto] })
   async list(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<QuoteResponseDto[]> {
-    return (await this.quotes.listForProject(user, projectId)).map(mapQuote);
+    return (await this.quotes.listForProject(user, projectId)).map((view) => mapQuote(view, quoteAudienceOf(user)));
   }
 
   @Post()
@@ -62,7 +62,7 @@ export class QuotesController {
   @ApiOkResponse({ type: [QuoteResponseDto], description: "The shop's newest quotes (up to 100), optionally of one status" })
   @ApiQuery({ name: 'status', required: false, enum: QUOTE_STATUSES })
   async list(@CurrentUser() user: AuthUser, @Query('status') status?: string): Promise<QuoteResponseDto[]> {
-    return (await this.quotes.listForShop(user, status)).map(mapQuote);
+    return (await this.quotes.listForShop(user, status)).map((view) => mapQuote(view, 'shop'));
   }
 
   @Get('notifications')
@@ -81,7 +81,7 @@ export class QuotesController {
     @Param('id', ParseIdPipe) id: string,
     @Query('revision', new ParseIntPipe({ optional: true })) revision?: number,
   ): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.revision(user, id, revision));
+    return mapQuote(await this.quotes.revision(user, id, revision), quoteAudienceOf(user));
   }
 
   @Patch(':id')
@@ -104,7 +104,7 @@ export class QuotesController {
   @Roles(...QUOTE_ANSWERERS)
   @ApiOkResponse({ type: QuoteResponseDto })
   async answer(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: AnswerQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.answer({ kind: 'member', user }, id, body));
+    return mapQuote(await this.quotes.answer({ kind: 'member', user }, id, body), quoteAudienceOf(user));
   }
 
   @Get(':id/compare')
@@ -143,7 +143,7 @@ export class QuoteLinksController {
   @Get()
   @ApiOkResponse({ type: QuoteResponseDto })
   async get(@Param('token') token: string): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.getByLink(token));
+    return mapQuote(await this.quotes.getByLink(token), 'customer');
   }
 
   @Public()
@@ -151,7 +151,7 @@ export class QuoteLinksController {
   @HttpCode(200)
   @ApiOkResponse({ type: QuoteResponseDto })
   async answer(@Param('token') token: string, @Body() body: AnswerQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.answer({ kind: 'link', shopId: '' }, token, body));
+    return mapQuote(await this.quotes.answer({ kind: 'link', shopId: '' }, token, body), 'customer');
   }
 
   @Public()

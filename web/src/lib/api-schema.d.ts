@@ -3891,7 +3891,9 @@ export interface components {
             quantity: number;
             /** @enum {string} */
             pricing: "list" | "cost-plus";
+            /** @description The shop's cost of a cost-plus part; always null for the customer */
             unitCostCents: number | null;
+            /** @description The markup of a cost-plus part; always null for the customer */
             markupPercent: number | null;
             hours: number | null;
             unitPriceCents: number;

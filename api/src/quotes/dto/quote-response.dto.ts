@@ -14,8 +14,8 @@ export class QuoteLineResponseDto {
   @ApiProperty({ type: String, nullable: true }) laborOperationId: string | null;
   @ApiProperty() quantity: number;
   @ApiProperty({ enum: PART_PRICINGS }) pricing: PartPricing;
-  @ApiProperty({ type: Number, nullable: true }) unitCostCents: number | null;
-  @ApiProperty({ type: Number, nullable: true }) markupPercent: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: "The shop's cost of a cost-plus part; always null for the customer" }) unitCostCents: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'The markup of a cost-plus part; always null for the customer' }) markupPercent: number | null;
   @ApiProperty({ type: Number, nullable: true }) hours: number | null;
   @ApiProperty() unitPriceCents: number;
   @ApiProperty() lineTotalCents: number;
