@@ -99,6 +99,27 @@ export class CustomersService {
     return manager.findOne(Customer, { where: { shopId, userId } });
   }
 
+  /**
+   * The signed-in person's own customer record in their shop (an owner-builder's projects are filed under it), made on
+   * first use from their name and e-mail. Found again by the login link, so it stays theirs when they change their
+   * e-mail; the shop-and-login unique key keeps it to one. Inside the caller's transaction.
+   */
+  async ownRecord(manager: EntityManager, user: AuthUser): Promise<Customer> {
+    const existing = await this.linkedTo(user.shopId, user.userId, manager);
+    if (existing) return existing;
+    const customer = manager.create(Customer, {
+      id: randomUUID(),
+      shopId: user.shopId,
+      name: user.name.trim().slice(0, 120) || user.email.slice(0, 120),
+      email: user.email,
+      phone: null,
+      notes: null,
+      userId: user.userId,
+    });
+    await manager.insert(Customer, customer);
+    return customer;
+  }
+
   /** Links a login to a customer record that has none yet; false when it has one meanwhile. Inside the caller's transaction. */
   async linkLogin(manager: EntityManager, shopId: string, customerId: string, userId: string): Promise<boolean> {
     const linked = await manager.update(Customer, { id: customerId, shopId, userId: IsNull() }, { userId });

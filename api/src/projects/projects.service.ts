@@ -2,6 +2,8 @@ import { Injectable, OnModuleInit } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { EntityManager, In, Repository, SelectQueryBuilder } from 'typeorm';
+import { CommonErrors } from '../common/errors/app-error';
+import { mapDatabaseError } from '../common/errors/database-error.mapper';
 import { Page, skipOf, toPage } from '../common/pagination/page-query.dto';
 import { CatalogService } from '../catalog/catalog.service';
 import { CatalogKind } from '../catalog/catalog-kinds';
@@ -9,7 +11,7 @@ import { FABRICATOR_PROJECT_FIELDS } from '../common/roles/role-matrix';
 import { AuthUser } from '../common/tenant/auth-user';
 import { likeContains, TenantRepository } from '../common/tenant/tenant-repository';
 import { CustomersService } from '../customers/customers.service';
-import { CreateProjectDto, ProjectPlacementDto } from './dto/create-project.dto';
+import { CreateProjectDto, CUSTOMER_OR_SELF_MESSAGE, ProjectPlacementDto } from './dto/create-project.dto';
 import { ListProjectsQueryDto } from './dto/list-projects-query.dto';
 import { UpdateProjectDto } from './dto/update-project.dto';
 import { Project, PROJECT_STATUSES, ProjectStatus } from './project.entity';
@@ -100,12 +102,31 @@ export class ProjectsService implements OnModuleInit {
   }
 
   async create(user: AuthUser, input: CreateProjectDto): Promise<Project> {
-    await this.assertCustomerInShop(user, input.customerId);
+    const forMyself = input.forMyself === true;
+    if (forMyself === (input.customerId !== undefined)) throw CommonErrors.validation([CUSTOMER_OR_SELF_MESSAGE]);
+    if (input.customerId !== undefined) await this.assertCustomerInShop(user, input.customerId);
     await this.assertCatalogRefs(user, input);
-    const project = this.scoped.repository.create({
-      id: randomUUID(),
+    const id = randomUUID();
+    const write = () =>
+      this.scoped.repository.manager.transaction(async (manager) => {
+        const customerId = input.customerId ?? (await this.customers.ownRecord(manager, user)).id;
+        await manager.insert(Project, this.newProject(user, id, customerId, input));
+      });
+    try {
+      await write();
+    } catch (error) {
+      // Two first projects for oneself at the same moment: the other request made the own record; use it.
+      if (!forMyself || mapDatabaseError(error)?.code !== 'duplicate') throw error;
+      await write();
+    }
+    return this.get(user, id);
+  }
+
+  private newProject(user: AuthUser, id: string, customerId: string, input: CreateProjectDto): Project {
+    return this.scoped.repository.create({
+      id,
       shopId: user.shopId,
-      customerId: input.customerId,
+      customerId,
       title: input.title.trim(),
       status: 'intake',
       vehicleDescription: input.vehicleDescription?.trim() ?? '',
@@ -118,8 +139,6 @@ export class ProjectsService implements OnModuleInit {
       goalBudgetCents: input.goals?.budgetCents ?? null,
       ...placementColumns(input.placement ?? null),
     });
-    await this.scoped.repository.insert(project);
-    return this.get(user, project.id);
   }
 
   async update(user: AuthUser, id: string, input: UpdateProjectDto): Promise<Project> {

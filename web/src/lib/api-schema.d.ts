@@ -2045,8 +2045,13 @@ export interface components {
             chassisModelId?: string | null;
             engineProfileId?: string | null;
             transmissionId?: string | null;
-            /** Format: uuid */
-            customerId: string;
+            /**
+             * Format: uuid
+             * @description The customer this swap is for; leave out when forMyself is true
+             */
+            customerId?: string;
+            /** @description True files the project under the signed-in person's own customer record in the shop (made on first use from their name and e-mail); leave out when customerId is sent */
+            forMyself?: boolean;
             title: string;
             vehicleDescription?: string;
             /** @description Defaults to use street with no targets */
@@ -2066,7 +2071,10 @@ export interface components {
             chassisModelId?: string | null;
             engineProfileId?: string | null;
             transmissionId?: string | null;
-            /** Format: uuid */
+            /**
+             * Format: uuid
+             * @description The customer this swap is for; leave out when forMyself is true
+             */
             customerId?: string;
             title?: string;
             vehicleDescription?: string;

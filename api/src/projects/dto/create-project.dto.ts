@@ -2,6 +2,7 @@ import { ApiHideProperty, ApiProperty, ApiPropertyOptional, PartialType } from '
 import { Type } from 'class-transformer';
 import {
   Equals,
+  IsBoolean,
   IsIn,
   IsInt,
   IsNotEmpty,
@@ -103,10 +104,23 @@ class CatalogRefs {
   transmissionId?: string | null;
 }
 
+export const CUSTOMER_OR_SELF_MESSAGE =
+  'send either customerId (a customer of your shop) or forMyself: true (a project for your own vehicle), exactly one of the two';
+
 export class CreateProjectDto extends CatalogRefs {
-  @ApiProperty({ format: 'uuid' })
+  @ApiPropertyOptional({ format: 'uuid', description: 'The customer this swap is for; leave out when forMyself is true' })
+  @IsOptional()
   @IsUUID('all', { message: 'customerId must be a UUID' })
-  customerId: string;
+  customerId?: string;
+
+  @ApiPropertyOptional({
+    type: Boolean,
+    description:
+      "True files the project under the signed-in person's own customer record in the shop (made on first use from their name and e-mail); leave out when customerId is sent",
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'forMyself must be true or false' })
+  forMyself?: boolean;
 
   @ApiProperty({ maxLength: 160 })
   @Trim()

@@ -25,7 +25,7 @@ export function ProjectsPage() {
   const [searchParams, setSearchParams] = useSearchParams();
   const creating = canEdit && searchParams.get('new') === '1';
   const [addingCustomer, setAddingCustomer] = useState(false);
-  const customers = useCustomerOptions({ enabled: creating });
+  const customers = useCustomerOptions({ enabled: creating, ownUserId: user.id });
   const filterCustomer = useCustomer(params.customerId as string | undefined);
 
   const status = projectStatuses.find((s) => s === params.status) as ProjectStatus | undefined;
@@ -81,6 +81,7 @@ export function ProjectsPage() {
             unitSystem={system}
             currency={shop.data?.currency}
             defaultCustomerId={query.customerId}
+            noOtherCustomers={customers.noOtherCustomers}
           />
           <CustomerFormDrawer open={addingCustomer} onClose={() => setAddingCustomer(false)} />
         </>

@@ -1,8 +1,11 @@
 import { useEffect, useMemo, useState } from 'react';
 import { useCustomers } from '@/features/customers/api/get-customers';
 
-/** Customer choices for selects in other features, searched on the server as the person types. */
-export function useCustomerOptions({ enabled = true }: { enabled?: boolean } = {}) {
+/**
+ * Customer choices for selects in other features, searched on the server as the person types. `noOtherCustomers`
+ * is true when the shop has no customer yet besides the signed-in person's own record (undefined while loading).
+ */
+export function useCustomerOptions({ enabled = true, ownUserId }: { enabled?: boolean; ownUserId?: string } = {}) {
   const [text, setText] = useState('');
   const [search, setSearch] = useState('');
 
@@ -12,7 +15,10 @@ export function useCustomerOptions({ enabled = true }: { enabled?: boolean } = {
   }, [text]);
 
   const query = useCustomers({ page: 1, pageSize: 20, sort: 'name', order: 'asc', search: search || undefined }, { enabled });
+  const firstTwo = useCustomers({ page: 1, pageSize: 2, sort: 'name', order: 'asc' }, { enabled: enabled && ownUserId !== undefined });
   const options = useMemo(() => (query.data?.items ?? []).map((c) => ({ value: c.id, label: c.name })), [query.data]);
+  const page = firstTwo.isSuccess && !firstTwo.isPlaceholderData ? firstTwo.data : undefined;
+  const noOtherCustomers = page ? page.total === 0 || (page.total === 1 && page.items[0]?.userId === ownUserId) : undefined;
 
-  return { options, loading: query.isFetching, onSearch: setText };
+  return { options, loading: query.isFetching, onSearch: setText, noOtherCustomers };
 }

@@ -1,5 +1,5 @@
 import { moneySign } from '@swapwright/shared';
-import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
+import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select, Typography } from 'antd';
 import { BoundedNumberInput, plainNumberRule } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -31,11 +31,21 @@ export type ProjectFormDrawerProps = {
   currency?: string;
   /** Prefill the customer when opened from a customer. */
   defaultCustomerId?: string;
+  /** True when the shop has no customer besides the signed-in person: a new project then starts as their own truck. */
+  noOtherCustomers?: boolean;
 };
 
+/** Whose vehicle a new project is: a customer's, or the signed-in person's own (filed under their own record). */
+export type ProjectOwner = 'customer' | 'self';
+const ownerChoices: { value: ProjectOwner; label: string }[] = [
+  { value: 'customer', label: 'For a customer' },
+  { value: 'self', label: 'My own truck' },
+];
+
 type ProjectFormValues = {
+  owner: ProjectOwner;
   title: string;
-  customerId: string;
+  customerId?: string;
   vehicleDescription: string;
   use: ProjectUse;
   targetPower?: number | null;
@@ -55,6 +65,7 @@ export function ProjectFormDrawer({
   unitSystem = 'in',
   currency = 'USD',
   defaultCustomerId,
+  noOtherCustomers,
 }: ProjectFormDrawerProps) {
   const [form] = Form.useForm<ProjectFormValues>();
   const drawerSize = useDrawerSize(520);
@@ -70,6 +81,9 @@ export function ProjectFormDrawer({
   const create = useCreateProject({ onSuccess: done });
   const update = useUpdateProject({ onSuccess: done });
   const mutation = isEdit ? update : create;
+  const owner = Form.useWatch('owner', form);
+  const forSelf = !isEdit && owner === 'self';
+  const startOwner: ProjectOwner = !defaultCustomerId && noOtherCustomers ? 'self' : 'customer';
 
   useEffect(() => {
     if (!open) return;
@@ -77,6 +91,7 @@ export function ProjectFormDrawer({
     update.reset();
     const g = project?.goals;
     form.setFieldsValue({
+      owner: startOwner,
       title: project?.title ?? '',
       customerId: project?.customerId ?? defaultCustomerId,
       vehicleDescription: project?.vehicleDescription ?? '',
@@ -88,6 +103,12 @@ export function ProjectFormDrawer({
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [open, project]);
 
+  // Whether the shop has customers may arrive after the drawer opened; follow it until the person picks themselves.
+  useEffect(() => {
+    if (open && !isEdit && !form.isFieldTouched('owner')) form.setFieldValue('owner', startOwner);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [open, isEdit, startOwner]);
+
   const submit = (v: ProjectFormValues) => {
     const goals: ProjectGoals = {
       use: v.use,
@@ -98,12 +119,12 @@ export function ProjectFormDrawer({
     };
     const base = {
       title: v.title.trim(),
-      customerId: v.customerId,
       vehicleDescription: v.vehicleDescription.trim(),
       goals,
     };
-    if (project) update.mutate({ id: project.id, changes: base });
-    else create.mutate(base);
+    if (project) update.mutate({ id: project.id, changes: { ...base, customerId: v.customerId } });
+    else if (v.owner === 'self') create.mutate({ ...base, forMyself: true });
+    else create.mutate({ ...base, customerId: v.customerId });
   };
 
   // Keep the current customer selectable even when the search result does not include it.
@@ -130,6 +151,9 @@ export function ProjectFormDrawer({
     >
       <Form<ProjectFormValues> form={form} layout="vertical" onFinish={submit} aria-label="Project" requiredMark="optional">
         <FormErrorAlert error={mutation.error} />
+        <Form.Item label="Whose vehicle" name="owner" hidden={isEdit}>
+          <Radio.Group optionType="button" buttonStyle="solid" options={ownerChoices} aria-label="Whose vehicle" />
+        </Form.Item>
         <Form.Item
           label="Project title"
           name="title"
@@ -140,31 +164,37 @@ export function ProjectFormDrawer({
         >
           <Input placeholder="Ridgeback V8 tow build" autoFocus />
         </Form.Item>
-        <Form.Item
-          label="Customer"
-          name="customerId"
-          rules={[{ required: true, message: 'Choose the customer this swap is for' }]}
-          extra={
-            onAddCustomer ? (
-              <Button type="link" size="small" style={{ padding: 0 }} onClick={onAddCustomer}>
-                Customer not listed? Add one
-              </Button>
-            ) : undefined
-          }
-        >
-          <Select
-            showSearch={{ filterOption: false, onSearch: onCustomerSearch }}
-            options={options}
-            loading={customersLoading}
-            placeholder="Search customers"
-            notFoundContent={customersLoading ? 'Looking…' : 'No customer found'}
-            aria-label="Customer"
-          />
-        </Form.Item>
+        {forSelf ? (
+          <Typography.Paragraph type="secondary" data-testid="own-truck-note">
+            Filed under your own name in the shop; no customer to set up.
+          </Typography.Paragraph>
+        ) : (
+          <Form.Item
+            label="Customer"
+            name="customerId"
+            rules={[{ required: true, message: 'Choose the customer this swap is for' }]}
+            extra={
+              onAddCustomer ? (
+                <Button type="link" size="small" style={{ padding: 0 }} onClick={onAddCustomer}>
+                  Customer not listed? Add one
+                </Button>
+              ) : undefined
+            }
+          >
+            <Select
+              showSearch={{ filterOption: false, onSearch: onCustomerSearch }}
+              options={options}
+              loading={customersLoading}
+              placeholder="Search customers"
+              notFoundContent={customersLoading ? 'Looking…' : 'No customer found'}
+              aria-label="Customer"
+            />
+          </Form.Item>
+        )}
         <Form.Item
           label="Vehicle"
           name="vehicleDescription"
-          extra="Year, make, model and body as the customer describes it."
+          extra={forSelf ? 'Year, make, model and body of your truck.' : 'Year, make, model and body as the customer describes it.'}
           rules={[
             { required: true, whitespace: true, message: 'Describe the vehicle (the chassis getting the engine)' },
             { max: 200, message: 'Keep the description under 200 characters' },
