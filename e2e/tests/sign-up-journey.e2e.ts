@@ -55,4 +55,26 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     expect(await nav.getByRole('link', { name: 'Shop settings' }).count()).toBe(1);
     await saveScreenshot(page, 'sign-up-finished');
   });
+
+  it('plans a swap for their own truck right away, without making a customer first', async () => {
+    const { page } = browser;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('button', { name: 'New project' }).first().click();
+    const form = page.getByRole('form', { name: 'Project' });
+    await form.waitFor();
+    // A shop with no customers yet starts on its own truck and shows no customer picker.
+    await form.getByRole('radio', { name: 'My own truck' }).and(page.locator(':checked')).waitFor({ state: 'attached' });
+    expect(await form.getByRole('combobox', { name: 'Customer' }).count()).toBe(0);
+    await form.getByLabel('Project title').fill('Own flatbed: diesel swap');
+    await form.getByLabel('Vehicle').fill('Invented 1979 flatbed, long bed');
+    await saveScreenshot(page, 'sign-up-own-truck-project');
+    const created = page.waitForResponse((r) => r.url().endsWith('/api/projects') && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Open project' }).click();
+    const response = await created;
+    expect(response.status()).toBe(201);
+    const project = (await response.json()) as { id: string; customer: { name: string } };
+    expect(project.customer.name).toBe('Corvin Ashdale');
+    await page.waitForURL(new RegExp(`/projects/${project.id}`));
+    await page.getByRole('heading', { name: 'Own flatbed: diesel swap' }).first().waitFor();
+  });
 });

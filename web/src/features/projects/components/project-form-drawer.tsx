@@ -151,8 +151,8 @@ export function ProjectFormDrawer({
     >
       <Form<ProjectFormValues> form={form} layout="vertical" onFinish={submit} aria-label="Project" requiredMark="optional">
         <FormErrorAlert error={mutation.error} />
-        <Form.Item label="Whose vehicle" name="owner" hidden={isEdit}>
-          <Radio.Group optionType="button" buttonStyle="solid" options={ownerChoices} aria-label="Whose vehicle" />
+        <Form.Item label="Swap for" name="owner" hidden={isEdit}>
+          <Radio.Group optionType="button" buttonStyle="solid" options={ownerChoices} aria-label="Swap for" />
         </Form.Item>
         <Form.Item
           label="Project title"
