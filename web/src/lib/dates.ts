@@ -3,7 +3,10 @@ const timeFormat = new Intl.DateTimeFormat('en-US', { hour: 'numeric', minute: '
 
 const parse = (iso: string | null | undefined): Date | null => {
   if (!iso) return null;
-  const d = new Date(iso);
+  // A calendar date alone ("2027-01-02", a quote's last valid day) is that day where the reader is; `new Date` would
+  // read it as midnight UTC, the day before anywhere west of Greenwich.
+  const day = /^(\d{4})-(\d{2})-(\d{2})$/.exec(iso);
+  const d = day ? new Date(Number(day[1]), Number(day[2]) - 1, Number(day[3])) : new Date(iso);
   return Number.isNaN(d.getTime()) ? null : d;
 };
 

@@ -6,6 +6,7 @@ import { getErrorMessage } from '@/lib/api-error';
 import { useCreateQuote } from '../api/create-quote';
 import { useProjectQuotes } from '../api/get-project-quotes';
 import { useSendQuote } from '../api/send-quote';
+import { formatDate } from '@/lib/dates';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 
 export interface ProjectQuotesCardProps {
@@ -82,12 +83,12 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
               <Space wrap>
                 <Typography.Text strong>{quote.label}</Typography.Text>
                 <span>revision {quote.latestRevision}</span>
-                <QuoteStatusTag status={quote.status} />
+                <QuoteStatusTag status={quote.status} forCustomer={canAnswer} />
                 <DepositTag state={quote.depositState} />
               </Space>
               <Typography.Text type="secondary">
                 Total {formatMoney(quote.revision.totals.totalCents, quote.revision.currency)} · deposit {formatMoney(quote.revision.totals.depositCents, quote.revision.currency)} · valid until{' '}
-                {quote.revision.validUntil}
+                {formatDate(quote.revision.validUntil)}
                 {quote.declineReason ? ` · reason: ${quote.declineReason}` : ''}
               </Typography.Text>
             </Flex>

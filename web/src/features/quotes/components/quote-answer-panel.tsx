@@ -116,13 +116,13 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
             <span>
               Quote {q.label} · revision {q.revision.number}
             </span>
-            <QuoteStatusTag status={q.status} />
+            <QuoteStatusTag status={q.status} forCustomer />
             <DepositTag state={q.depositState} />
           </Space>
         }
       >
         <Typography.Paragraph>
-          {q.projectTitle} · for {q.customerName} · valid until {q.revision.validUntil}
+          {q.projectTitle} · for {q.customerName} · valid until {formatDate(q.revision.validUntil)}
         </Typography.Paragraph>
         <QuoteLines quote={q} />
         <Typography.Paragraph style={{ marginTop: 12 }}>

@@ -9,8 +9,10 @@ const LOOK: Record<QuoteStatus, { color: string; label: string }> = {
   lapsed: { color: 'warning', label: 'Lapsed' },
 };
 
-export function QuoteStatusTag({ status }: { status: QuoteStatus }) {
-  return <Tag color={LOOK[status].color}>{LOOK[status].label}</Tag>;
+/** `forCustomer`: the customer reads their own quote, so a quote waiting for them says so in their words. */
+export function QuoteStatusTag({ status, forCustomer = false }: { status: QuoteStatus; forCustomer?: boolean }) {
+  const label = forCustomer && status === 'awaiting-answer' ? 'Waiting for your answer' : LOOK[status].label;
+  return <Tag color={LOOK[status].color}>{label}</Tag>;
 }
 
 export function DepositTag({ state }: { state: 'not-due' | 'due' | 'paid' }) {
