@@ -1,5 +1,5 @@
 import { moneySign } from '@swapwright/shared';
-import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select, Typography } from 'antd';
+import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
 import { BoundedNumberInput, plainNumberRule } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -151,7 +151,13 @@ export function ProjectFormDrawer({
     >
       <Form<ProjectFormValues> form={form} layout="vertical" onFinish={submit} aria-label="Project" requiredMark="optional">
         <FormErrorAlert error={mutation.error} />
-        <Form.Item label="Swap for" name="owner" hidden={isEdit}>
+        <Form.Item
+          label="Swap for"
+          name="owner"
+          hidden={isEdit}
+          rules={[{ required: true, message: 'Choose whose vehicle this swap is for' }]}
+          extra={forSelf ? <span data-testid="own-truck-note">Filed under your own name in the shop; no customer to set up.</span> : undefined}
+        >
           <Radio.Group optionType="button" buttonStyle="solid" options={ownerChoices} aria-label="Swap for" />
         </Form.Item>
         <Form.Item
@@ -164,11 +170,7 @@ export function ProjectFormDrawer({
         >
           <Input placeholder="Ridgeback V8 tow build" autoFocus />
         </Form.Item>
-        {forSelf ? (
-          <Typography.Paragraph type="secondary" data-testid="own-truck-note">
-            Filed under your own name in the shop; no customer to set up.
-          </Typography.Paragraph>
-        ) : (
+        {!forSelf && (
           <Form.Item
             label="Customer"
             name="customerId"
