@@ -44,11 +44,23 @@ export function CounterBoard({ currency }: CounterBoardProps) {
     const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
     return from ? `${from.location} · ${from.bin || 'no bin'}` : 'no location';
   };
-  const statusTag = (status: string) => (
-    <Tag color={STATUS_COLORS[status]} data-testid="line-status">
-      {STATUS_LABELS[status] ?? status}
-    </Tag>
-  );
+  // A line not yet set aside whose shelf cannot cover it is short: the counter orders it rather than reserves it.
+  const shortBy = (line: CounterLine) => (line.status === 'open' ? Math.max(0, line.quantity - Math.max(0, line.available)) : 0);
+  const statusTag = (line: CounterLine) => {
+    const short = shortBy(line);
+    return (
+      <Tag color={short > 0 ? 'red' : STATUS_COLORS[line.status]} data-testid="line-status">
+        {short > 0 ? `Short by ${short}` : (STATUS_LABELS[line.status] ?? line.status)}
+      </Tag>
+    );
+  };
+  const whyNoReserve = (line: CounterLine) =>
+    line.available < line.quantity && ['open', 'to-order', 'ordered'].includes(line.status) ? (
+      <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reserve-reason">
+        {line.available <= 0 ? 'None free to set aside' : `Only ${line.available} free of ${line.quantity}`}
+        {line.status === 'open' ? ': mark it To order.' : '.'}
+      </Typography.Text>
+    ) : null;
   const lineActions = (line: CounterLine) => (
     <Space wrap>
       {['open', 'to-order', 'ordered'].includes(line.status) && (
@@ -76,6 +88,7 @@ export function CounterBoard({ currency }: CounterBoardProps) {
           Received
         </Button>
       )}
+      {whyNoReserve(line)}
     </Space>
   );
 
@@ -100,7 +113,7 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         {planId && (
           <Space className="no-print" wrap>
             <Button onClick={() => window.print()}>Print pick list</Button>
-            <Button onClick={() => void downloadPickList(planId)}>Export CSV</Button>
+            <Button onClick={() => void downloadPickList(planId, plan ? `${plan.projectTitle} plan v${plan.version}` : undefined)}>Export CSV</Button>
           </Space>
         )}
       </Flex>
@@ -112,7 +125,7 @@ export function CounterBoard({ currency }: CounterBoardProps) {
                 <Typography.Text strong style={{ minWidth: 0 }}>
                   {line.description}
                 </Typography.Text>
-                {statusTag(line.status)}
+                {statusTag(line)}
               </Flex>
               <Typography.Text type="secondary" style={{ display: 'block', fontSize: 13 }}>
                 {line.sku} · {binOf(line)}
@@ -143,8 +156,8 @@ export function CounterBoard({ currency }: CounterBoardProps) {
             { title: 'Location and bin', key: 'bin', render: (_, line) => binOf(line) },
             {
               title: 'State',
-              dataIndex: 'status',
-              render: statusTag,
+              key: 'status',
+              render: (_, line) => statusTag(line),
             },
             {
               title: 'Action',

@@ -7,6 +7,7 @@ import { setWindowWidth } from '@/test/viewport';
 import { counterKeys } from '../../api/counter-keys';
 import type { CounterLine } from '../../api/get-counter-lines';
 import type { PlanSummary } from '../../api/get-recent-parts-plans';
+import { pickListFileName } from '../../api/download-pick-list';
 import { CounterBoard } from '../counter-board';
 
 const PLAN: PlanSummary = {
@@ -61,5 +62,29 @@ describe('CounterBoard', () => {
     expect(within(screen.getByRole('table')).getByRole('row', { name: /TR-4410/ })).toHaveTextContent('Main store · A-01-2');
     // Source: Unicode CLDR "en" currency pattern ¤#,##0.00 (Intl.NumberFormat, style currency): 259300 cents.
     expect(screen.getByText(/Plan total/)).toHaveTextContent('Plan total $2,593.00 (parts and labor)');
+  });
+
+  it('a line the shelf cannot cover reads short, and its Reserve says why it is off', () => {
+    setWindowWidth(390);
+    const queryClient = createTestQueryClient();
+    queryClient.setQueryData(counterKeys.plans(), [PLAN]);
+    queryClient.setQueryData(counterKeys.lines('plan-1'), [
+      { ...LINES[0], id: 'line-3', sku: 'FP-120', description: 'In-tank pump, 120 L/h', quantity: 2, stock: [stock('s3', 1, 0)], onHand: 1, available: 1 },
+      { ...LINES[0], id: 'line-4', sku: 'REG-58', description: 'Return-style regulator', status: 'to-order', stock: [], onHand: 0, available: 0 },
+    ]);
+    renderWithApp(<CounterBoard currency="USD" />, { queryClient });
+    const pump = screen.getByTestId('counter-line-FP-120');
+    expect(within(pump).getByTestId('line-status')).toHaveTextContent('Short by 1');
+    expect(within(pump).getByRole('button', { name: 'Reserve' })).toBeDisabled();
+    expect(within(pump).getByTestId('reserve-reason')).toHaveTextContent('Only 1 free of 2: mark it To order.');
+    const regulator = screen.getByTestId('counter-line-REG-58');
+    expect(within(regulator).getByTestId('line-status')).toHaveTextContent('To order');
+    expect(within(regulator).getByTestId('reserve-reason')).toHaveTextContent('None free to set aside.');
+  });
+
+  it('names the exported pick list after the job', () => {
+    expect(pickListFileName('Harlan Ridgeback 1978: Kestrel 5.3 V8 swap plan v2')).toBe('pick-list-harlan-ridgeback-1978-kestrel-5-3-v8-swap-plan-v2.csv');
+    expect(pickListFileName(undefined)).toBe('pick-list.csv');
+    expect(pickListFileName('***')).toBe('pick-list.csv');
   });
 });
