@@ -1,17 +1,10 @@
-import { crc32, deflateSync } from 'node:zlib';
+import { deflateSync } from 'node:zlib';
+import { pngChunk } from '../../src/database/seed/demo-story/story-photos';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const piexif = require('piexifjs');
 
 /** Test images built byte by byte (no encoder needed): each is a complete file of its format. */
 
-function pngChunk(type: string, data: Buffer): Buffer {
-  const length = Buffer.alloc(4);
-  length.writeUInt32BE(data.length);
-  const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
-  const crc = Buffer.alloc(4);
-  crc.writeUInt32BE(crc32(body) >>> 0);
-  return Buffer.concat([length, body, crc]);
-}
 
 /** An RGB PNG of one colour (PNG spec, ISO/IEC 15948: signature, IHDR, IDAT, IEND). */
 export function makePng(width: number, height: number, extraChunks: Buffer[] = []): Buffer {

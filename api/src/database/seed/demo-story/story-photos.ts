@@ -5,7 +5,8 @@ import { crc32, deflateSync } from 'node:zlib';
  * tape with its ticks, in the layout of the PNG specification (ISO/IEC 15948: signature, IHDR, IDAT, IEND). No
  * people, plates or badges: each one only shows where a tape was laid.
  */
-function chunk(type: string, data: Buffer): Buffer {
+/** One PNG chunk: length, type, data and the CRC-32 of type and data (ISO/IEC 15948, 5.3). */
+export function pngChunk(type: string, data: Buffer): Buffer {
   const length = Buffer.alloc(4);
   length.writeUInt32BE(data.length);
   const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
@@ -52,8 +53,8 @@ export function storyPhoto(seed: number, width = 320, height = 240): Buffer {
   ihdr[9] = 2; // truecolour
   return Buffer.concat([
     Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
-    chunk('IHDR', ihdr),
-    chunk('IDAT', deflateSync(raw)),
-    chunk('IEND', Buffer.alloc(0)),
+    pngChunk('IHDR', ihdr),
+    pngChunk('IDAT', deflateSync(raw)),
+    pngChunk('IEND', Buffer.alloc(0)),
   ]);
 }
