@@ -1,4 +1,5 @@
 import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
+import Papa from 'papaparse';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { seedParts } from '../src/database/seed/seed-parts';
 import { bearer, countRows, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
@@ -135,6 +136,32 @@ describe('parts catalog, plans and counter', () => {
     expect(pickList.status).toBe(200);
     expect(pickList.text.split(/\r?\n/)[0]).toBe('sku,description,quantity,location,bin,status');
   }, 120_000);
+
+  it("the exported pick list writes each line's state in the counter's words, never the stored code, and keeps formula cells escaped", async () => {
+    const plan = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({});
+    expect(plan.status).toBe(201);
+    const lines = (await t.http.get(`/api/parts-plans/${plan.body.id}/counter-lines`).set(...bearer(demo.counter))).body as Array<{ id: string; sku: string; quantity: number; available: number }>;
+    const [toOrder, ordered, ...rest] = lines;
+    expect((await t.http.post(`/api/counter-lines/${toOrder.id}/mark`).set(...bearer(demo.counter)).send({ status: 'to-order' })).body.status).toBe('to-order');
+    expect((await t.http.post(`/api/counter-lines/${ordered.id}/mark`).set(...bearer(demo.counter)).send({ status: 'ordered' })).body.status).toBe('ordered');
+    const coverable = rest.find((l) => l.available >= l.quantity)!;
+    expect((await t.http.post(`/api/counter-lines/${coverable.id}/reserve`).set(...bearer(demo.counter)).send({})).body.status).toBe('reserved');
+    // A description a spreadsheet would run as a formula.
+    await t.dataSource.query('UPDATE counter_lines SET description = ? WHERE id = ?', ['=HYPERLINK("http://example.invalid","pan")', ordered.id]);
+
+    const res = await t.http.get(`/api/parts-plans/${plan.body.id}/pick-list.csv`).set(...bearer(demo.counter));
+    expect(res.status).toBe(200);
+    const parsed = Papa.parse<Record<string, string>>(res.text, { header: true, skipEmptyLines: true });
+    expect(parsed.meta.fields).toEqual(['sku', 'description', 'quantity', 'location', 'bin', 'status']);
+    const bySku = new Map(parsed.data.map((row) => [row.sku, row]));
+    expect(bySku.get(toOrder.sku)!.status).toBe('To order');
+    expect(bySku.get(ordered.sku)!.status).toBe('Ordered');
+    expect(bySku.get(coverable.sku)!.status).toBe('Set aside');
+    // Source: OWASP "CSV Injection" — a cell starting with = + - @ is prefixed with an apostrophe.
+    expect(bySku.get(ordered.sku)!.description).toBe('\'=HYPERLINK("http://example.invalid","pan")');
+    // The other lines read "Not set aside" or "Short by N", as on the counter screen; no stored code reaches the file.
+    for (const row of parsed.data) expect(row.status).toMatch(/^(Not set aside|Set aside|To order|Ordered|Arrived, set aside|Short by \d+)$/);
+  });
 
   it('a quote drafted from the plan does not also charge the fabrication for a shortfall the plan resolves with a part', async () => {
     const plan = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({ objective: 'lowest-cost' });

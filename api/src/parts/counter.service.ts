@@ -1,12 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { counterLineStateWords, type CounterStatus } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { escapeFormula } from './csv-cells';
-import { CounterLine, CounterStatus, PartStock } from './part.entity';
+import { CounterLine, PartStock } from './part.entity';
 import { PartsErrors } from './parts.errors';
 import { PartsPlansService } from './parts-plans.service';
 
@@ -150,12 +151,17 @@ export class CounterService {
     return { line, stock };
   }
 
-  /** The pick list as CSV: where each line's units are (the reserved location first), formula-looking cells escaped. */
+  /**
+   * The pick list as CSV: where each line's units are (the reserved location first) and its state in the counter
+   * screen's own words ("To order", "Short by 2"), formula-looking cells escaped.
+   */
   async pickListCsv(user: Pick<AuthUser, 'shopId'>, planId: string): Promise<string> {
     const views = await this.lines(user, planId);
     const rows = views.map(({ line, stock }) => {
       const from = stock.find((s) => s.id === line.stockId) ?? stock[0];
-      return [line.sku, line.description, line.quantity, from?.location ?? '', from?.bin ?? '', line.status].map(escapeFormula);
+      const available = stock.reduce((sum, s) => sum + s.onHand - s.reserved, 0);
+      const state = counterLineStateWords({ status: line.status, quantity: line.quantity, available });
+      return [line.sku, line.description, line.quantity, from?.location ?? '', from?.bin ?? '', state].map(escapeFormula);
     });
     return Papa.unparse({ fields: ['sku', 'description', 'quantity', 'location', 'bin', 'status'], data: rows });
   }

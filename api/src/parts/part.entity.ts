@@ -1,4 +1,4 @@
-import type { CatalogPartCategory, CheckStatus, FitSpecKind, PartAttributes, PartsPlanResult } from '@swapwright/shared';
+import type { CatalogPartCategory, CheckStatus, CounterStatus, FitSpecKind, PartAttributes, PartsPlanResult } from '@swapwright/shared';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { decimalTransformer } from '../database/column-transformers';
 
@@ -179,10 +179,6 @@ export class PartsPlanRecord {
   @CreateDateColumn({ type: 'datetime', precision: 3 })
   createdAt: Date;
 }
-
-/** open: nothing done yet; reserved: units set aside from stock; to-order / ordered: none on the shelf; received: arrived and set aside. */
-export const COUNTER_STATUSES = ['open', 'reserved', 'to-order', 'ordered', 'received'] as const;
-export type CounterStatus = (typeof COUNTER_STATUSES)[number];
 
 @Entity('counter_lines')
 export class CounterLine {

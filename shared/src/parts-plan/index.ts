@@ -1,4 +1,5 @@
 export * from './attribute-words';
+export * from './counter-words';
 export * from './part-categories';
 export * from './part-attributes';
 export * from './plan-types';

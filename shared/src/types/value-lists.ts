@@ -93,6 +93,10 @@ export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 export const PROJECT_STATUSES = ['intake', 'measured', 'fit-checked', 'parts-planned', 'quote-sent', 'approved', 'deposit-paid', 'in-the-bay', 'done'] as const;
 export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
 
+/** A counter line's state: open (nothing done yet), reserved (units set aside from stock), to-order / ordered (none on the shelf), received (arrived and set aside). */
+export const COUNTER_STATUSES = ['open', 'reserved', 'to-order', 'ordered', 'received'] as const;
+export type CounterStatus = (typeof COUNTER_STATUSES)[number];
+
 /** Hazards a labor operation carries; each prints its usual caution on the quote and the work order. */
 export const WORK_HAZARDS = ['lifting', 'support', 'fuel', 'welding', 'steering', 'brakes'] as const;
 export type WorkHazard = (typeof WORK_HAZARDS)[number];

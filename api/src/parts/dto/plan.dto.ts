@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   CHECK_STATUSES,
+  COUNTER_STATUSES,
   PART_CATEGORIES,
   PLAN_OBJECTIVES,
   PLAN_SLOTS,
@@ -20,7 +21,6 @@ import {
 import { ArrayMaxSize, IsArray, IsIn, IsNotEmpty, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
 import type { PlanRecheck } from '../part.entity';
 import { Trim } from '../../common/decorators/trim.decorator';
-import { COUNTER_STATUSES } from '../part.entity';
 import { StockResponseDto } from './part.dto';
 
 export class BuildPlanDto {

@@ -1,3 +1,4 @@
+import { counterLineShortBy, counterLineStateWords, type CounterStatus } from '@swapwright/shared';
 import { Button, Card, Empty, Flex, Grid, Select, Space, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { palette } from '@/config/theme';
@@ -10,8 +11,7 @@ import { useReceiveCounterLine } from '../api/receive-counter-line';
 import { useReleaseCounterLine } from '../api/release-counter-line';
 import { useReserveCounterLine } from '../api/reserve-counter-line';
 
-const STATUS_COLORS: Record<string, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue' };
-const STATUS_LABELS: Record<string, string> = { open: 'Not set aside', reserved: 'Set aside', 'to-order': 'To order', ordered: 'Ordered', received: 'Arrived, set aside' };
+const STATUS_COLORS: Record<CounterStatus, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue' };
 
 export type CounterBoardProps = {
   /** The shop's currency, for the plan's total. */
@@ -44,16 +44,12 @@ export function CounterBoard({ currency }: CounterBoardProps) {
     const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
     return from ? `${from.location} · ${from.bin || 'no bin'}` : 'no location';
   };
-  // A line not yet set aside whose shelf cannot cover it is short: the counter orders it rather than reserves it.
-  const shortBy = (line: CounterLine) => (line.status === 'open' ? Math.max(0, line.quantity - Math.max(0, line.available)) : 0);
-  const statusTag = (line: CounterLine) => {
-    const short = shortBy(line);
-    return (
-      <Tag color={short > 0 ? 'red' : STATUS_COLORS[line.status]} data-testid="line-status">
-        {short > 0 ? `Short by ${short}` : (STATUS_LABELS[line.status] ?? line.status)}
-      </Tag>
-    );
-  };
+  // The words come from shared, as in the exported pick list; a short line (the shelf cannot cover it) is red.
+  const statusTag = (line: CounterLine) => (
+    <Tag color={counterLineShortBy(line) > 0 ? 'red' : STATUS_COLORS[line.status]} data-testid="line-status">
+      {counterLineStateWords(line)}
+    </Tag>
+  );
   const whyNoReserve = (line: CounterLine) =>
     line.available < line.quantity && ['open', 'to-order', 'ordered'].includes(line.status) ? (
       <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="reserve-reason">

@@ -1,0 +1,29 @@
+import type { CounterStatus } from '../types/value-lists';
+
+/** The words the parts counter uses for each line state, on its screen and in the exported pick list. */
+export const COUNTER_STATUS_LABELS: Record<CounterStatus, string> = {
+  open: 'Not set aside',
+  reserved: 'Set aside',
+  'to-order': 'To order',
+  ordered: 'Ordered',
+  received: 'Arrived, set aside',
+};
+
+export interface CounterLineState {
+  status: string;
+  quantity: number;
+  /** Units free on the shelf (on hand less what other lines hold). */
+  available: number;
+}
+
+/** A line not yet set aside whose shelf cannot cover it is short by the units missing (0 otherwise): the counter orders it rather than reserves it. */
+export function counterLineShortBy(line: CounterLineState): number {
+  return line.status === 'open' ? Math.max(0, line.quantity - Math.max(0, line.available)) : 0;
+}
+
+/** What the counter calls a line's state: "Short by N" for a short open line, otherwise its state's words (an unknown code as it is). */
+export function counterLineStateWords(line: CounterLineState): string {
+  const short = counterLineShortBy(line);
+  if (short > 0) return `Short by ${short}`;
+  return COUNTER_STATUS_LABELS[line.status as CounterStatus] ?? line.status;
+}
