@@ -37,6 +37,8 @@ interface Row {
   meets?: boolean;
 }
 const rows: Row[] = [];
+/** Lines printed under the table. */
+const notes: string[] = [];
 const loadAtStart = os.loadavg()[0];
 
 function add(row: Row): void {
@@ -122,6 +124,21 @@ async function apiRoute(
     target: target ? `ratio >= ${target.ratio}, p95 < ${target.p95Ms} ms` : undefined,
     meets: target ? ratio >= target.ratio && route.p95 < target.p95Ms && route.errors === 0 : route.errors === 0 ? undefined : false,
   });
+  if (target && route.p95 >= target.p95Ms) notes.push(latencyFloorNote(name, target.p95Ms, health));
+}
+
+/**
+ * What a p95 target asks of throughput at a fixed number of connections. With every connection busy, the mean
+ * response time is connections / throughput (Little's law, L = λW), and the 95th percentile is at least the mean; so
+ * p95 < T needs more than connections / T requests per second, whatever the route does.
+ */
+function latencyFloorNote(name: string, p95TargetMs: number, health: Load): string {
+  const neededRps = CONNECTIONS / (p95TargetMs / 1000);
+  return (
+    `note: ${name}: a p95 under ${p95TargetMs} ms at ${CONNECTIONS} connections needs more than ${neededRps.toFixed(0)} req/s ` +
+    `(mean time = connections / throughput, and p95 >= mean); /api/health answered ${health.rps.toFixed(0)} req/s with ` +
+    `p95 ${health.p95.toFixed(1)} ms in the same run.`
+  );
 }
 
 function printTable(): void {
@@ -138,6 +155,7 @@ function printTable(): void {
   console.log(line(all[0]));
   console.log('|' + widths.map((w) => '-'.repeat(w + 2)).join('|') + '|');
   for (const values of all.slice(1)) console.log(line(values));
+  for (const note of notes) console.log(note);
   if (os.loadavg()[0] > os.cpus().length) console.log('note: the machine was busy (load above the CPU count): times are pessimistic, ratios less affected.');
 }
 
