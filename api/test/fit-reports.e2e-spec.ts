@@ -138,6 +138,22 @@ describe('fit reports', () => {
     expect(compare.body.a.id).toBe(stockReportId);
   });
 
+  it("compare answers each check's unit as its findings carry it: a U-joint angle in degrees, a clearance in mm", async () => {
+    const stockReportId = await runStockReport();
+    const rearReportId = await runRearReport();
+    const [compare, newer] = await Promise.all([
+      t.http.get(`/api/fit-reports/compare?a=${stockReportId}&b=${rearReportId}`).set(...bearer(demo.counter)),
+      t.http.get(`/api/fit-reports/${rearReportId}`).set(...bearer(demo.counter)),
+    ]);
+    expect(compare.status).toBe(200);
+    const changes: Array<{ checkId: string; unit: string; marginDelta: number | null }> = compare.body.changes;
+    expect(changes.length).toBe(newer.body.report.findings.length);
+    for (const change of changes) expect(change.unit).toBe(finding(newer.body.report, change.checkId).unit);
+    expect(changes.find((c) => c.checkId === 'drivetrain.u-joint-angles')).toMatchObject({ unit: 'deg' });
+    expect(changes.find((c) => c.checkId === SUMP)).toMatchObject({ unit: 'mm' });
+    expect(new Set(changes.map((c) => c.unit)).size).toBeGreaterThan(2);
+  });
+
   it('lists the project reports newest first as summaries', async () => {
     const stockReportId = await runStockReport();
     const rearReportId = await runRearReport();

@@ -1,7 +1,10 @@
 import fc from 'fast-check';
 import { SYSTEM_CHECKS } from '../checks/system-checks';
+import { specWith, systemFitSpec } from '../checks/drivetrain/system-spec.fixture';
+import { U_JOINT_ANGLES_ID } from '../checks/drivetrain/u-joint-angles';
+import { formatFindingFigure } from '../units/unit-format';
 import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../fixtures/demo-fit-spec';
-import { STATUS_SEVERITY } from '../types/finding';
+import { STATUS_SEVERITY, type Finding } from '../types/finding';
 import { allChecks, compareFitReports, FIT_ENGINE_VERSION, GEOMETRIC_CHECKS, runFitCheck, worstStatus } from './fit-report';
 import { frontViewGeometry, sideViewGeometry } from './view-geometry';
 
@@ -42,6 +45,7 @@ describe('runFitCheck', () => {
     expect(delta.change).toBe('improved');
     expect(delta.statusChanged).toBe(true);
     expect(delta.marginDelta).toBeGreaterThan(100);
+    expect(delta.unit).toBe('mm');
     const same = compareFitReports(report, report);
     expect(same.every((d) => d.change === 'same')).toBe(true);
   });
@@ -69,6 +73,48 @@ describe('runFitCheck', () => {
       ),
       { numRuns: 60 },
     );
+  });
+});
+
+describe('compareFitReports: each change in its check\'s own unit', () => {
+  it('a U-joint angle comparison stays in degrees in both unit systems', () => {
+    // Source: published driveline-maker guidance, worked example (4.0 in drop over 50.0 in, 3° tilt, pinion
+    // parallel: both joints 1.5886°, the 0° difference against the 1° maximum governs with 1° of margin).
+    const before = runFitCheck(systemFitSpec());
+    // Derived: the pinion pointing 1.5° down makes the rear joint |−1.5 − 4.5886| = 6.0886°, a 4.5° difference
+    // against the 1° maximum: margin −3.5°, so the margin moves by −4.5°.
+    const after = runFitCheck(specWith((s) => (s.chassis.pinion.angleDeg = -1.5)));
+    const delta = compareFitReports(before, after).find((d) => d.checkId === U_JOINT_ANGLES_ID)!;
+    expect(delta.unit).toBe('deg');
+    expect(delta).toMatchObject({ change: 'worse', before: { status: 'ok' }, after: { status: 'fails' } });
+    expect(delta.marginDelta).toBeCloseTo(-4.5, 9);
+    // Angles read the same in both systems: never a length, never inches.
+    expect(formatFindingFigure(delta.marginDelta!, delta.unit, 'in', { signed: true })).toBe('\u22124.50°');
+    expect(formatFindingFigure(delta.marginDelta!, delta.unit, 'mm', { signed: true })).toBe('\u22124.50°');
+  });
+
+  it('every compared check carries the unit its findings carry', () => {
+    const before = runFitCheck(systemFitSpec());
+    const after = runFitCheck(specWith((s) => (s.chassis.pinion.angleDeg = -1.5)));
+    const units = new Map(after.findings.map((f) => [f.checkId, f.unit]));
+    for (const delta of compareFitReports(before, after)) expect(delta.unit).toBe(units.get(delta.checkId));
+    expect(new Set(compareFitReports(before, after).map((d) => d.unit)).size).toBeGreaterThan(3);
+  });
+
+  it('states no margin change for a must-match rule or when the two reports measure a check in different units', () => {
+    const before = runFitCheck(systemFitSpec());
+    const matchRule = before.findings.find((f) => f.limit === 'match')!;
+    const swap = (report: typeof before, checkId: string, change: Partial<Finding>) => ({
+      ...report,
+      findings: report.findings.map((f) => (f.checkId === checkId ? { ...f, ...change } : f)),
+    });
+    // A must-match rule's margin is 0 (matches) or −1 (does not): a flag, not a figure; the change is still judged.
+    const mismatch = compareFitReports(swap(before, matchRule.checkId, { margin: -1, status: 'fails' }), swap(before, matchRule.checkId, { margin: 0, status: 'ok' }));
+    expect(mismatch.find((d) => d.checkId === matchRule.checkId)).toMatchObject({ change: 'improved', marginDelta: null, unit: matchRule.unit });
+    // A check that changed unit between engine versions: the two margins cannot be subtracted.
+    const lengthCheck = before.findings.find((f) => f.unit === 'mm' && f.margin !== null && f.limit !== 'match')!;
+    const changedUnit = compareFitReports(before, swap(before, lengthCheck.checkId, { unit: 'deg', margin: (lengthCheck.margin ?? 0) + 1 }));
+    expect(changedUnit.find((d) => d.checkId === lengthCheck.checkId)).toMatchObject({ unit: 'deg', marginDelta: null });
   });
 });
 

@@ -4,7 +4,7 @@ import { SYSTEM_CHECKS } from '../checks/system-checks';
 import { TRANSMISSION_MOUNT_CHECKS } from '../checks/transmission-mount';
 import type { CheckDefinition } from '../checks/check-definition';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
-import { STATUS_SEVERITY, type CheckStatus, type Finding } from '../types/finding';
+import { STATUS_SEVERITY, type CheckStatus, type FigureUnit, type Finding } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
 
 /** Bumped whenever a rule or its arithmetic changes, so a stored report says which engine made it. */
@@ -123,12 +123,27 @@ export type CheckChange = 'improved' | 'worse' | 'same' | 'added' | 'removed';
 export interface FindingDelta {
   checkId: string;
   title: string;
+  /**
+   * The unit of this check's figures (measured, margin and `marginDelta`), as its findings carry it: `deg` for a
+   * U-joint angle, `psi` for a fuel pressure, `mm` for a clearance. The newer report's when both have the check.
+   */
+  unit: FigureUnit;
   before: { status: CheckStatus; measured: number | null; margin: number | null } | null;
   after: { status: CheckStatus; measured: number | null; margin: number | null } | null;
   change: CheckChange;
   statusChanged: boolean;
-  /** after.margin − before.margin when both are known. */
+  /**
+   * after.margin − before.margin, in `unit`, when both are known and are figures against a limit in the same unit;
+   * null otherwise (the margin of a must-match rule is a flag, not a figure, and the report shows none for it).
+   */
   marginDelta: number | null;
+}
+
+/** A margin difference worth stating: both margins known, both against a min/max limit, in the same unit. */
+function figureMarginDelta(fa: Finding, fb: Finding): number | null {
+  if (fa.margin === null || fb.margin === null) return null;
+  if (fa.unit !== fb.unit || fa.limit === 'match' || fb.limit === 'match') return null;
+  return fb.margin - fa.margin;
 }
 
 /** Per-check differences between two reports (b relative to a), in a's order then checks only b has. */
@@ -141,20 +156,30 @@ export function compareFitReports(a: FitReport, b: FitReport): FindingDelta[] {
     seen.add(fa.checkId);
     const fb = byId.get(fa.checkId);
     if (!fb) {
-      out.push({ checkId: fa.checkId, title: fa.title, before: pick(fa), after: null, change: 'removed', statusChanged: true, marginDelta: null });
+      out.push({ checkId: fa.checkId, title: fa.title, unit: fa.unit, before: pick(fa), after: null, change: 'removed', statusChanged: true, marginDelta: null });
       continue;
     }
-    const marginDelta = fa.margin !== null && fb.margin !== null ? fb.margin - fa.margin : null;
+    // The change is judged on the raw margins (a must-match rule's margin still orders its outcomes).
+    const rawDelta = fa.margin !== null && fb.margin !== null ? fb.margin - fa.margin : null;
     const sevA = STATUS_SEVERITY[fa.status];
     const sevB = STATUS_SEVERITY[fb.status];
     let change: CheckChange = 'same';
     if (sevB < sevA) change = 'improved';
     else if (sevB > sevA) change = 'worse';
-    else if (marginDelta !== null && Math.abs(marginDelta) > 1e-9) change = marginDelta > 0 ? 'improved' : 'worse';
-    out.push({ checkId: fa.checkId, title: fa.title, before: pick(fa), after: pick(fb), change, statusChanged: fa.status !== fb.status, marginDelta });
+    else if (rawDelta !== null && Math.abs(rawDelta) > 1e-9) change = rawDelta > 0 ? 'improved' : 'worse';
+    out.push({
+      checkId: fa.checkId,
+      title: fa.title,
+      unit: fb.unit,
+      before: pick(fa),
+      after: pick(fb),
+      change,
+      statusChanged: fa.status !== fb.status,
+      marginDelta: figureMarginDelta(fa, fb),
+    });
   }
   for (const fb of b.findings) {
-    if (!seen.has(fb.checkId)) out.push({ checkId: fb.checkId, title: fb.title, before: null, after: pick(fb), change: 'added', statusChanged: true, marginDelta: null });
+    if (!seen.has(fb.checkId)) out.push({ checkId: fb.checkId, title: fb.title, unit: fb.unit, before: null, after: pick(fb), change: 'added', statusChanged: true, marginDelta: null });
   }
   return out;
 }

@@ -1,21 +1,8 @@
 /** What every check returns. Lengths are millimetres and angles degrees inside the engine. */
 
-import type { CheckGroup, CheckStatus, PlacementAxis } from './value-lists';
+import type { CheckGroup, CheckStatus, FigureUnit, PlacementAxis } from './value-lists';
 
-export type { CheckGroup, CheckStatus } from './value-lists';
-
-/** The unit a finding's figures are in. The web converts `mm` to inches on request; the rest are shown as they are. */
-export type FigureUnit =
-  | 'mm'
-  | 'deg'
-  | 'rpm'
-  | 'lb/h'
-  | 'cc/min'
-  | 'L/h'
-  | 'psi'
-  | 'kW'
-  | 'count'
-  | 'none';
+export type { CheckGroup, CheckStatus, FigureUnit } from './value-lists';
 
 export type PartCategory =
   | 'oil-pan'

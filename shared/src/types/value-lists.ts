@@ -114,6 +114,13 @@ export type CheckResult = (typeof CHECK_RESULTS)[number];
 export const CHECK_STATUSES = ['ok', 'tight', 'fails', 'unknown'] as const;
 export type CheckStatus = (typeof CHECK_STATUSES)[number];
 
+/**
+ * The unit a finding's figures (found, needed, margin) are stored in. The web shows `mm`, `psi`, `lb/h`, `L/h` and
+ * `kW` in the person's system (`formatFindingFigure`); the rest read alike in both.
+ */
+export const FIGURE_UNITS = ['mm', 'deg', 'rpm', 'lb/h', 'cc/min', 'L/h', 'psi', 'kW', 'count', 'none'] as const;
+export type FigureUnit = (typeof FIGURE_UNITS)[number];
+
 export const CHECK_GROUPS = ['envelope', 'mounts', 'drivetrain', 'oiling', 'management', 'fuel', 'cooling', 'belt', 'cam'] as const;
 export type CheckGroup = (typeof CHECK_GROUPS)[number];
 

@@ -2952,8 +2952,11 @@ export interface components {
             margin: number | null;
             /** @enum {string} */
             limit: "min" | "max" | "match";
-            /** @example mm */
-            unit: string;
+            /**
+             * @description The unit of measured, required and margin
+             * @enum {string}
+             */
+            unit: "mm" | "deg" | "rpm" | "lb/h" | "cc/min" | "L/h" | "psi" | "kW" | "count" | "none";
             message: string;
             missing: string[];
             /** @description Part, placement or fabrication remedies */
@@ -3210,12 +3213,17 @@ export interface components {
         FindingDeltaDto: {
             checkId: string;
             title: string;
+            /**
+             * @description The unit of this check's figures (measured, margin, marginDelta), as its findings carry it: deg for an angle, psi for a pressure, mm for a length
+             * @enum {string}
+             */
+            unit: "mm" | "deg" | "rpm" | "lb/h" | "cc/min" | "L/h" | "psi" | "kW" | "count" | "none";
             before: components["schemas"]["FindingDeltaSideDto"] | null;
             after: components["schemas"]["FindingDeltaSideDto"] | null;
             /** @enum {string} */
             change: "improved" | "worse" | "same" | "added" | "removed";
             statusChanged: boolean;
-            /** @description b.margin − a.margin */
+            /** @description b.margin − a.margin in unit; null unless both are known figures against a minimum or maximum in the same unit (a must-match rule's margin is a flag) */
             marginDelta: number | null;
         };
         FitReportComparisonResponseDto: {

@@ -3,9 +3,11 @@ import {
   CHECK_GROUPS,
   CHECK_STATUSES,
   DEFAULT_FIT_SETTINGS,
+  FIGURE_UNITS,
   PLACEMENT_AXES,
   type CheckGroup,
   type CheckStatus,
+  type FigureUnit,
   type FitSettings,
   type PlacementAxis,
 } from '@swapwright/shared';
@@ -67,7 +69,7 @@ export class FindingResponseDto {
   @ApiProperty({ type: Number, nullable: true }) required: number | null;
   @ApiProperty({ type: Number, nullable: true, description: 'Positive is inside the limit; negative fails' }) margin: number | null;
   @ApiProperty({ enum: ['min', 'max', 'match'] }) limit: string;
-  @ApiProperty({ example: 'mm' }) unit: string;
+  @ApiProperty({ enum: FIGURE_UNITS, description: 'The unit of measured, required and margin' }) unit: FigureUnit;
   @ApiProperty() message: string;
   @ApiProperty({ type: [String] }) missing: string[];
   @ApiProperty({
@@ -168,11 +170,16 @@ export class FindingDeltaSideDto {
 export class FindingDeltaDto {
   @ApiProperty() checkId: string;
   @ApiProperty() title: string;
+  @ApiProperty({
+    enum: FIGURE_UNITS,
+    description: "The unit of this check's figures (measured, margin, marginDelta), as its findings carry it: deg for an angle, psi for a pressure, mm for a length",
+  })
+  unit: FigureUnit;
   @ApiProperty({ type: FindingDeltaSideDto, nullable: true }) before: FindingDeltaSideDto | null;
   @ApiProperty({ type: FindingDeltaSideDto, nullable: true }) after: FindingDeltaSideDto | null;
   @ApiProperty({ enum: ['improved', 'worse', 'same', 'added', 'removed'] }) change: string;
   @ApiProperty() statusChanged: boolean;
-  @ApiProperty({ type: Number, nullable: true, description: 'b.margin − a.margin' }) marginDelta: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: "b.margin − a.margin in unit; null unless both are known figures against a minimum or maximum in the same unit (a must-match rule's margin is a flag)" }) marginDelta: number | null;
 }
 
 export class FitReportComparisonResponseDto {

@@ -5,6 +5,7 @@ import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
 import { useFitReportComparison } from '../api/compare-fit-reports';
 import { useFitReports } from '../api/get-fit-reports';
+import { formatFigure } from '../lib/figures';
 import type { FitReportComparison, FitReportListItem, FitSummary } from '../types';
 import { CheckStatusTag } from '@/components/check-status-tag';
 
@@ -54,7 +55,8 @@ function ReportComparison({ a, b }: { a: string; b: string }) {
       title: 'Margin change',
       key: 'delta',
       align: 'right',
-      render: (_, d) => (d.marginDelta === null ? '—' : `${d.marginDelta >= 0 ? '+' : '−'}${units.formatLength(Math.abs(d.marginDelta))}`),
+      // In the check's own unit, as the report shows its margin: a clearance in in/mm, an angle in degrees, a pressure in psi/kPa.
+      render: (_, d) => formatFigure(d.marginDelta, d.unit, units, { signed: true }),
     },
     {
       title: 'Result',
@@ -70,9 +72,6 @@ function ReportComparison({ a, b }: { a: string; b: string }) {
       {changed.length > 0 && (
         <Table size="small" rowKey="checkId" columns={columns} dataSource={changed} pagination={false} aria-label="Changes between the two reports" />
       )}
-      <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-        Margin changes are shown in length; for checks in other units read the figures on each report.
-      </Typography.Text>
     </div>
   );
 }

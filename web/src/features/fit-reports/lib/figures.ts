@@ -1,12 +1,15 @@
-import { formatFindingFigure, type Finding, type FigureUnit } from '@swapwright/shared';
+import { formatFindingFigure, type Finding, type FigureFormatOptions, type FigureUnit } from '@swapwright/shared';
 import type { UnitsApi } from '@/hooks/use-units';
 
 type Units = Pick<UnitsApi, 'system'>;
 
-/** A finding's figure in the person's unit system (shared's one formatting path: lengths, psi/kPa, lb/h/kg/h, hp/kW). */
-export function formatFigure(value: number | null | undefined, unit: FigureUnit, units: Units): string {
+/**
+ * A finding's figure in the person's unit system (shared's one formatting path: lengths, psi/kPa, lb/h/kg/h, hp/kW;
+ * angles in degrees in both). `{ signed: true }` for a difference: "+4.53 in", "−4.50°".
+ */
+export function formatFigure(value: number | null | undefined, unit: FigureUnit, units: Units, options: Pick<FigureFormatOptions, 'signed'> = {}): string {
   if (value === null || value === undefined || Number.isNaN(value)) return '—';
-  return formatFindingFigure(value, unit, units.system);
+  return formatFindingFigure(value, unit, units.system, options);
 }
 
 /** "at least 0.50 in", "at most 3.00°", "must match": the threshold shown as thresholds are (round-mm rules at round inches). */

@@ -5,7 +5,10 @@ import { renderWithApp } from '@/test/render';
 import type { FitReportComparison, FitReportListItem } from '../../types';
 import { ReportHistory } from '../report-history';
 
-afterEach(() => vi.restoreAllMocks());
+afterEach(() => {
+  vi.restoreAllMocks();
+  window.localStorage.removeItem('swapwright.unitSystem');
+});
 
 const summary = (id: string, createdAt: string, createdByName: string | null): FitReportListItem => ({
   id,
@@ -51,8 +54,8 @@ describe('ReportHistory', () => {
       a: page.items[1],
       b: page.items[0],
       changes: [
-        { checkId: 'envelope.sump-crossmember', title: 'Oil pan vs front crossmember', before: { status: 'fails', measured: -96, margin: -108.7 }, after: { status: 'ok', measured: 20, margin: 7.3 }, change: 'improved', statusChanged: true, marginDelta: 116 },
-        { checkId: 'envelope.hood', title: 'Hood clearance', before: { status: 'ok', measured: 40, margin: 27.3 }, after: { status: 'ok', measured: 40, margin: 27.3 }, change: 'same', statusChanged: false, marginDelta: 0 },
+        { checkId: 'envelope.sump-crossmember', title: 'Oil pan vs front crossmember', unit: 'mm', before: { status: 'fails', measured: -96, margin: -108.7 }, after: { status: 'ok', measured: 20, margin: 7.3 }, change: 'improved', statusChanged: true, marginDelta: 116 },
+        { checkId: 'envelope.hood', title: 'Hood clearance', unit: 'mm', before: { status: 'ok', measured: 40, margin: 27.3 }, after: { status: 'ok', measured: 40, margin: 27.3 }, change: 'same', statusChanged: false, marginDelta: 0 },
       ],
     };
     const get = vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/fit-reports/compare' ? comparison : page }));
@@ -66,6 +69,54 @@ describe('ReportHistory', () => {
     expect(within(result).getByText('Better')).toBeInTheDocument();
     const call = get.mock.calls.find((c) => c[0] === '/fit-reports/compare');
     expect(call?.[1]).toMatchObject({ params: { a: 'r1', b: 'r2' } });
+  });
+
+  /** Picks both reports, compares them and gives the margin change shown on each check's row. */
+  async function compareAndReadMargins(comparison: FitReportComparison): Promise<Record<string, string>> {
+    vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/fit-reports/compare' ? comparison : page }));
+    const view = renderWithApp(<ReportHistory projectId="p1" onOpen={vi.fn()} />);
+    await screen.findByText('Sam Reyes');
+    for (const box of screen.getAllByRole('checkbox')) fireEvent.click(box);
+    fireEvent.click(screen.getByRole('button', { name: 'Compare the two picked' }));
+    const table = await within(await screen.findByTestId('report-comparison')).findByRole('table', { name: 'Changes between the two reports' });
+    const margins: Record<string, string> = {};
+    for (const row of within(table).getAllByRole('row').slice(1)) {
+      const cells = within(row).getAllByRole('cell');
+      margins[cells[0].textContent ?? ''] = cells[3].textContent ?? '';
+    }
+    expect(screen.queryByText(/shown in length/)).toBeNull();
+    view.unmount();
+    return margins;
+  }
+
+  // Derived from the published driveline-maker worked example: pinion 1.5° down turns a 1° margin on the U-joint
+  // difference into −3.5°, a −4.5° change; the clearance figures are the demo crossmember's (116 mm = 4.57 in).
+  const mixedUnits: FitReportComparison = {
+    a: page.items[1],
+    b: page.items[0],
+    changes: [
+      { checkId: 'drivetrain.u-joint-angles', title: 'U-joint operating angles', unit: 'deg', before: { status: 'ok', measured: 0, margin: 1 }, after: { status: 'fails', measured: 4.5, margin: -3.5 }, change: 'worse', statusChanged: true, marginDelta: -4.5 },
+      { checkId: 'envelope.sump-crossmember', title: 'Oil pan vs front crossmember', unit: 'mm', before: { status: 'fails', measured: -96, margin: -108.7 }, after: { status: 'ok', measured: 20, margin: 7.3 }, change: 'improved', statusChanged: true, marginDelta: 116 },
+      { checkId: 'fuel.pump-flow', title: 'Fuel pump flow for the target power', unit: 'L/h', before: { status: 'tight', measured: 150, margin: 5 }, after: { status: 'ok', measured: 190, margin: 45 }, change: 'improved', statusChanged: true, marginDelta: 40 },
+      { checkId: 'oiling.pan-pickup-pump', title: 'Oil pan, pickup and pump agree', unit: 'count', before: { status: 'fails', measured: 0, margin: -1 }, after: { status: 'ok', measured: 1, margin: 0 }, change: 'improved', statusChanged: true, marginDelta: null },
+    ],
+  };
+
+  // An angle stays in degrees in both systems (never a length); a clearance and a flow follow the person's system.
+  // Source: NIST SP 811 (1 in = 25.4 mm exactly, 1 US gal = 3.785411784 L): 116 mm = 4.567 in, 40 L/h = 10.57 gal/h.
+  it.each([
+    { system: 'in', angle: '\u22124.50°', clearance: '+4.57 in', flow: '+10.6 gal/h' },
+    { system: 'mm', angle: '\u22124.50°', clearance: '+116.0 mm', flow: '+40.0 L/h' },
+  ])('shows each margin change in its own unit, in $system mode', { timeout: 60_000 }, async ({ system, angle, clearance, flow }) => {
+    wideScreen();
+    window.localStorage.setItem('swapwright.unitSystem', system);
+    expect(await compareAndReadMargins(mixedUnits)).toEqual({
+      'U-joint operating angles': angle,
+      'Oil pan vs front crossmember': clearance,
+      'Fuel pump flow for the target power': flow,
+      // A must-match rule has no margin to change (as the report shows none for it).
+      'Oil pan, pickup and pump agree': '—',
+    });
   });
 
   it('offers no picking or comparing until there are two reports to compare', async () => {
