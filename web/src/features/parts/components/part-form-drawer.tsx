@@ -9,7 +9,18 @@ import { useSuppliers } from '../api/get-suppliers';
 import { useSavePart } from '../api/save-part';
 import { type StockInput, useSetPartStock } from '../api/set-part-stock';
 import { useUnits } from '@/hooks/use-units';
-import { attributeHint, attributeUnit, attributeKeyOf, attributeWords, formValuesToBody, KNOWN_ATTRIBUTES, partToFormValues, type PartFormValues } from '../lib/part-form-values';
+import {
+  attributeBoxUnit,
+  attributeHint,
+  attributeKeyOf,
+  attributeWords,
+  formValuesToBody,
+  isLengthAttribute,
+  KNOWN_ATTRIBUTES,
+  partToFormValues,
+  readLengthAttribute,
+  type PartFormValues,
+} from '../lib/part-form-values';
 
 export type PartFormDrawerProps = {
   open: boolean;
@@ -84,15 +95,37 @@ function StockSection({ part }: { part: Part }) {
 
 const ATTRIBUTE_OPTIONS = KNOWN_ATTRIBUTES.map((key) => ({ value: attributeWords(key) }));
 
-/** One attribute row's value box (with the unit it takes) and what the row says, in words and the person's units. */
+/**
+ * One attribute row's value box (with the unit it takes) and what the row says, in words and the person's units. A
+ * length's box takes the person's units (inches in inch mode; a figure with its unit, "60 mm", also reads).
+ */
 function AttributeValueItem({ form, index }: { form: FormInstance<PartFormValues>; index: number }) {
   const units = useUnits();
   const row = Form.useWatch(['attributes', index], form) as PartFormValues['attributes'][number] | undefined;
-  const unit = row?.name ? attributeUnit(attributeKeyOf(row.name)) : undefined;
+  const key = row?.name ? attributeKeyOf(row.name) : undefined;
+  const isLength = key !== undefined && isLengthAttribute(key);
   const hint = attributeHint(row?.name, row?.value, units.system);
+  const readsAsLength = {
+    validator: async (_: unknown, text: unknown) => {
+      const name = form.getFieldValue(['attributes', index, 'name']) as string | undefined;
+      if (!name || !isLengthAttribute(attributeKeyOf(name)) || typeof text !== 'string' || !text.trim()) return;
+      const length = readLengthAttribute(text, units.system);
+      if (!length.ok) throw new Error(length.message);
+    },
+  };
   return (
-    <Form.Item name={[index, 'value']} rules={[{ required: true, whitespace: true, message: 'Enter its value' }]} extra={hint ? <span data-testid="attribute-hint">Reads: {hint}</span> : undefined}>
-      <Input aria-label="Attribute value" placeholder="rear" suffix={unit} />
+    <Form.Item
+      name={[index, 'value']}
+      dependencies={[['attributes', index, 'name']]}
+      rules={[{ required: true, whitespace: true, message: 'Enter its value' }, readsAsLength]}
+      extra={hint ? <span data-testid="attribute-hint">Reads: {hint}</span> : undefined}
+    >
+      <Input
+        aria-label="Attribute value"
+        placeholder={isLength ? (units.system === 'in' ? '2.362' : '60') : 'rear'}
+        inputMode={isLength ? 'decimal' : undefined}
+        suffix={key ? attributeBoxUnit(key, units.system) : undefined}
+      />
     </Form.Item>
   );
 }
@@ -100,6 +133,7 @@ function AttributeValueItem({ form, index }: { form: FormInstance<PartFormValues
 /** Create or edit a catalog part: category, prices, supplier, install hours, torque specs and instructions, fitment attributes and rules. */
 export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
   const [form] = Form.useForm<PartFormValues>();
+  const units = useUnits();
   const [supplierSearch, setSupplierSearch] = useState('');
   const suppliers = useSuppliers({ page: 1, pageSize: 20, ...(supplierSearch ? { search: supplierSearch } : {}) });
   const isEdit = Boolean(part);
@@ -113,7 +147,7 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
   useEffect(() => {
     if (!open) return;
     save.reset();
-    form.setFieldsValue(partToFormValues(part));
+    form.setFieldsValue(partToFormValues(part, units.system));
     // reset only when the drawer opens for a (new) record
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [open, part]);
@@ -141,7 +175,7 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
         layout="vertical"
         aria-label="Part"
         requiredMark="optional"
-        onFinish={(values) => save.mutate({ id: part?.id, body: formValuesToBody(values) })}
+        onFinish={(values) => save.mutate({ id: part?.id, body: formValuesToBody(values, units.system, part?.attributes) })}
       >
         <FormErrorAlert error={save.error} />
         <Row gutter={12}>
@@ -240,7 +274,7 @@ export function PartFormDrawer({ open, part, onClose }: PartFormDrawerProps) {
         <Divider titlePlacement="start">Fitment attributes</Divider>
         <Typography.Paragraph type="secondary">
           What the plan's rules compare, such as the sump position (rear), the pickup mounting (pump-bolted), the pump inlet or the
-          flow. Pick a name from the list or type your own; a list of values is typed with commas. Each row says below how the plan reads it.
+          flow. Pick a name from the list or type your own; a list of values is typed with commas; a length is typed in {units.system === 'in' ? 'inches' : 'millimetres'}. Each row says below how the plan reads it.
           {part?.fitKind && ' This part also carries a fit spec from the shop catalog; its figures count as attributes and need not be typed here.'}
         </Typography.Paragraph>
         <Form.List name="attributes">

@@ -1,4 +1,5 @@
-import { attributeNoun, describeAttribute, renderText, textParts, type CatalogPartCategory, type UnitSystem } from '@swapwright/shared';
+import { attributeNoun, describeAttribute, mmToInches, renderText, textParts, type CatalogPartCategory, type UnitSystem } from '@swapwright/shared';
+import { readLength, unitLabels, type ReadResult } from '@/lib/units';
 import type { Part } from '../api/get-parts';
 import type { NewPart } from '../api/save-part';
 
@@ -30,9 +31,11 @@ export const KNOWN_ATTRIBUTES = [
   'fabricationHours',
 ] as const;
 
-/** The unit an attribute's value box takes, read from the key's ending (`maxDxMm` → mm, `flowLph` → L/h). */
+/** The unit an attribute is stored in, read from the key's ending (`maxDxMm` → mm, `flowLph` → L/h). */
 const KEY_UNITS: Array<[RegExp, string]> = [
   [/Mm$/, 'mm'],
+  // Screen positions are lengths along the block without the ending.
+  [/^(screenU|maxFrontFaceU)$/, 'mm'],
   [/Lph$/, 'L/h'],
   [/Lbh$/, 'lb/h'],
   [/Psi$/, 'psi'],
@@ -44,6 +47,45 @@ const KEY_UNITS: Array<[RegExp, string]> = [
 
 export function attributeUnit(key: string): string | undefined {
   return KEY_UNITS.find(([pattern]) => pattern.test(key.trim()))?.[1];
+}
+
+/** A length attribute (stored in mm): its box takes and shows the person's units. */
+export function isLengthAttribute(key: string): boolean {
+  return attributeUnit(key) === 'mm';
+}
+
+/** The unit an attribute's value box takes: a length in the person's units (in or mm), anything else as stored. */
+export function attributeBoxUnit(key: string, system: UnitSystem): string | undefined {
+  return isLengthAttribute(key) ? unitLabels[system] : attributeUnit(key);
+}
+
+/**
+ * Decimals of a length attribute's box: 0.001 in (0.0254 mm, finer than the 0.1 mm lengths are given to, so a stored
+ * figure shows distinctly) and 0.01 mm (so a figure typed in inches shows to its thousandth in mm: 2.362 in = 59.99 mm).
+ */
+const LENGTH_BOX_DECIMALS: Record<UnitSystem, number> = { in: 3, mm: 2 };
+
+/** A stored length (mm) as its box shows it: `25.4` → "1.000" in inches, "25.4" in millimetres. */
+export function showLengthAttribute(mm: number, system: UnitSystem): string {
+  if (system === 'in') return mmToInches(mm).toFixed(LENGTH_BOX_DECIMALS.in);
+  return String(Number(mm.toFixed(LENGTH_BOX_DECIMALS.mm)));
+}
+
+/**
+ * A length attribute's box as stored millimetres: a bare number in the person's units, or with its unit ("2 3/8 in",
+ * "60 mm"), read by the shared length parser. Rounded to 0.0001 mm, which only drops floating-point noise
+ * (0.1 in = 2.54 mm, not 2.5400000000000005): an inch figure with up to three decimals is kept exactly.
+ */
+export function readLengthAttribute(text: string, system: UnitSystem): ReadResult {
+  const result = readLength(text, system);
+  return result.ok ? { ok: true, value: Math.round(result.value * 10_000) / 10_000 } : result;
+}
+
+/** A row's value as stored: a length read in the person's units (mm), anything else as {@link readAttributeValue}. */
+function storedAttributeValue(key: string, text: string, system: UnitSystem): AttributeValue {
+  if (!isLengthAttribute(key)) return readAttributeValue(text);
+  const length = readLengthAttribute(text, system);
+  return length.ok ? length.value : readAttributeValue(text);
 }
 
 /**
@@ -68,7 +110,8 @@ export function attributeKeyOf(typed: string): string {
 export function attributeHint(typedName: string | undefined, typedValue: string | undefined, system: UnitSystem): string | null {
   if (!typedName?.trim() || !typedValue?.trim()) return null;
   const key = attributeKeyOf(typedName);
-  return renderText(textParts(describeAttribute(key, readAttributeValue(typedValue))), system);
+  if (isLengthAttribute(key) && !readLengthAttribute(typedValue, system).ok) return null;
+  return renderText(textParts(describeAttribute(key, storedAttributeValue(key, typedValue, system))), system);
 }
 
 type AttributeValue = NewPart['attributes'] extends Record<string, infer V> | undefined ? V : never;
@@ -106,7 +149,13 @@ export function showAttributeValue(value: unknown): string {
 
 const toCents = (amount: number | null | undefined) => Math.round((amount ?? 0) * 100);
 
-export function partToFormValues(part: Part | null | undefined): PartFormValues {
+/** A stored attribute as its box shows it: a length in the person's units, anything else as typed. */
+function shownAttributeValue(key: string, value: unknown, system: UnitSystem): string {
+  return isLengthAttribute(key) && typeof value === 'number' ? showLengthAttribute(value, system) : showAttributeValue(value);
+}
+
+/** The part as the form shows it, lengths in the person's units (`system`). */
+export function partToFormValues(part: Part | null | undefined, system: UnitSystem): PartFormValues {
   if (!part) return { sku: '', description: '', torqueSpecs: [], attributes: [], requiresSkus: [], excludesSkus: [], replacesSkus: [] };
   return {
     sku: part.sku,
@@ -119,18 +168,26 @@ export function partToFormValues(part: Part | null | undefined): PartFormValues 
     laborHours: part.laborHours,
     torqueSpecs: part.torqueSpecs.map((t) => ({ fastener: t.fastener, newtonMetres: t.newtonMetres, sequence: t.sequence ?? '' })),
     instructions: part.instructions ?? '',
-    attributes: Object.entries(part.attributes).map(([name, value]) => ({ name: attributeWords(name), value: showAttributeValue(value) })),
+    attributes: Object.entries(part.attributes).map(([name, value]) => ({ name: attributeWords(name), value: shownAttributeValue(name, value, system) })),
     requiresSkus: part.requiresSkus,
     excludesSkus: part.excludesSkus,
     replacesSkus: part.replacesSkus,
   };
 }
 
-/** The form's values as the API's create/update body (money in cents, attributes typed, empty text as null). */
-export function formValuesToBody(values: PartFormValues): NewPart {
+/**
+ * The form's values as the API's create/update body (money in cents, attributes typed, lengths read in the person's
+ * units `system` and sent in mm, empty text as null). A length whose box still shows the stored figure (`stored`, the
+ * part's attributes when editing) is sent as stored, so opening and saving a part never moves a figure by rounding.
+ */
+export function formValuesToBody(values: PartFormValues, system: UnitSystem, stored: Part['attributes'] = {}): NewPart {
   const attributes: Record<string, AttributeValue> = {};
   for (const row of values.attributes ?? []) {
-    if (row.name?.trim() && row.value?.trim()) attributes[attributeKeyOf(row.name)] = readAttributeValue(row.value);
+    if (!row.name?.trim() || !row.value?.trim()) continue;
+    const key = attributeKeyOf(row.name);
+    const before = stored[key];
+    const unchangedLength = isLengthAttribute(key) && typeof before === 'number' && showLengthAttribute(before, system) === row.value.trim();
+    attributes[key] = unchangedLength ? before : storedAttributeValue(key, row.value, system);
   }
   return {
     sku: values.sku.trim(),
