@@ -1,7 +1,7 @@
 import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { makeJpeg } from './support/images';
-import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { expectFitsWidth, expectText, expectThumbSizedButtons, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 const PHONE = { width: 390, height: 844 };
@@ -41,6 +41,10 @@ describe("the customer's own photos: added before the truck arrives, accepted or
     expect(stored).toBe(2);
     // only the shop accepts or replaces them
     expect(await general.getByRole('button', { name: /^Accept/ }).count()).toBe(0);
+    // the customer may take back their own photo: its Delete is thumb-sized on the phone
+    const own = general.getByTestId('photo-thumb').nth(0);
+    await expectVisible(own.getByRole('button', { name: 'Delete' }));
+    expect((await expectThumbSizedButtons(own)).map((button) => button.name)).toContain('Delete');
     await general.scrollIntoViewIfNeeded();
     await page.waitForTimeout(300);
     await expectFitsWidth(page);
@@ -63,6 +67,9 @@ describe("the customer's own photos: added before the truck arrives, accepted or
     await page.waitForTimeout(300);
     await expectFitsWidth(page);
     await saveScreenshot(page, 'customer-photos-review-phone');
+    // Accept and Replace under a narrow thumbnail are thumb-sized too
+    await expectVisible(pending.first().getByRole('button', { name: 'Replace' }));
+    expect((await expectThumbSizedButtons(pending.first())).map((button) => button.name)).toEqual(expect.arrayContaining([expect.stringMatching(/^Accept the customer's photo/), 'Replace']));
 
     const accepted = page.waitForResponse((r) => /\/measurement-photos\/[0-9a-f-]+\/accept$/.test(r.url()));
     await pending.first().getByRole('button', { name: /^Accept the customer's photo/ }).click();

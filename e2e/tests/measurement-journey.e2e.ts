@@ -2,7 +2,7 @@ import { DEMO_PROJECT_IDS } from '@swapwright/seed-data';
 import type { Page } from 'playwright-core';
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { makeJpeg } from './support/images';
-import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { expectFitsWidth, expectText, expectThumbSizedButtons, expectVisible } from './support/expect-page';
 import { demoSignIn, signInAs } from './support/session';
 
 const PHONE = { width: 390, height: 844 };
@@ -61,6 +61,16 @@ describe('the fabricator measures the demo truck on a phone; the estimator sees 
     await expect(thumb.getByRole('progressbar').getAttribute('aria-valuenow')).resolves.toBe('100');
     await expectVisible(thumb.getByRole('img', { name: 'Photo: Front crossmember: top' }));
     await saveScreenshot(page, 'measurement-photo-phone');
+    // The photo's Delete, and the question it asks first, are thumb-sized like every other control on a phone.
+    await expectVisible(thumb.getByRole('button', { name: 'Delete' }));
+    const sizes = await expectThumbSizedButtons(thumb);
+    expect(sizes.map((button) => button.name)).toContain('Delete');
+    await thumb.getByRole('button', { name: 'Delete' }).click();
+    const question = page.locator('.ant-popconfirm').filter({ hasText: 'Delete this photo?' });
+    await expectVisible(question);
+    await expectThumbSizedButtons(question);
+    await question.getByRole('button', { name: 'Cancel' }).click();
+    await question.waitFor({ state: 'hidden' });
 
     // Readings typed as the tape shows them: a fraction of an inch, millimetres, degrees.
     const box = card.getByRole('textbox', { name: 'Reading: Front crossmember: top' });

@@ -20,3 +20,23 @@ export async function expectFitsWidth(page: Page): Promise<void> {
   }));
   expect(scrollWidth).toBeLessThanOrEqual(clientWidth);
 }
+
+/**
+ * Every visible button inside the locator is thumb-sized, as the phone theme holds below 768 px: at least 44 CSS px
+ * high, 40 for a small one. Source: W3C WCAG 2.2, Success Criterion 2.5.5 Target Size (Enhanced), 44 x 44 CSS px;
+ * 40 px for a small control is Common practice (no published source). Answers the heights it measured, by name.
+ */
+export async function expectThumbSizedButtons(scope: Locator): Promise<Array<{ name: string; height: number; small: boolean }>> {
+  const buttons = await scope.locator('button:visible').evaluateAll((elements) =>
+    elements.map((element) => ({
+      name: (element.getAttribute('aria-label') ?? element.textContent ?? '').trim(),
+      // the laid-out height: a popup's opening zoom scales its box for a moment, not the button's size
+      height: (element as HTMLElement).offsetHeight,
+      small: element.classList.contains('ant-btn-sm'),
+    })),
+  );
+  expect(buttons.length).toBeGreaterThan(0);
+  // a failure lists each button under the floor with its measured height
+  expect(buttons.filter((button) => button.height < (button.small ? 40 : 44) - 0.5)).toEqual([]);
+  return buttons;
+}

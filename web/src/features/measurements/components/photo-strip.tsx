@@ -38,7 +38,7 @@ function PendingTag({ label }: { label: string }) {
 function DeleteButton({ onConfirm }: { onConfirm: () => unknown }) {
   return (
     <Popconfirm title="Delete this photo?" okText="Delete" okButtonProps={{ danger: true }} onConfirm={onConfirm}>
-      <Button danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start', height: 32 }}>
+      <Button danger type="text" style={{ paddingInline: 0, alignSelf: 'flex-start' }}>
         Delete
       </Button>
     </Popconfirm>
