@@ -1,4 +1,6 @@
 import {
+  DEMO_CENTER_SUMP_PAN,
+  DEMO_CENTER_SUMP_PICKUP,
   DEMO_DEEP_REAR_SUMP_PAN,
   DEMO_FIT_SPEC,
   DEMO_REAR_SUMP_PAN,
@@ -138,27 +140,7 @@ const kestrelPans: OilPanSpec[] = [
   { ...DEMO_STOCK_PAN, id: IDS.oilPans.kestrelStockFront, name: 'Kestrel 5.3 stock front-sump pan', railPattern: KESTREL_RAIL },
   { ...DEMO_REAR_SUMP_PAN, id: IDS.oilPans.kestrelRearSwap, name: 'Trailhand TR-4410 rear-sump swap pan', railPattern: KESTREL_RAIL },
   { ...DEMO_DEEP_REAR_SUMP_PAN, id: IDS.oilPans.kestrelDeepRear, name: 'Trailhand TR-4480 deep rear-sump pan', railPattern: KESTREL_RAIL },
-  {
-    id: IDS.oilPans.kestrelCenterTow,
-    name: 'Kestrel centre-sump tow pan',
-    railPattern: KESTREL_RAIL,
-    bottomProfile: [
-      { u: 600, w: -75 },
-      { u: 580, w: -130 },
-      { u: 470, w: -150 },
-      { u: 430, w: -240 },
-      { u: 230, w: -240 },
-      { u: 190, w: -150 },
-      { u: 30, w: -150 },
-      { u: 20, w: -75 },
-    ],
-    sumpPosition: 'center',
-    pickupMount: 'pump-bolted',
-    sumpCenterU: 330,
-    sumpFloorW: -240,
-    dipstickProvision: ['block-left'],
-    capacityL: 6.6,
-  },
+  { ...DEMO_CENTER_SUMP_PAN, id: IDS.oilPans.kestrelCenterTow, name: 'Kestrel centre-sump tow pan', railPattern: KESTREL_RAIL },
 ];
 
 const harrowPan: OilPanSpec = {
@@ -184,15 +166,7 @@ const harrowPan: OilPanSpec = {
 const pickups: OilPickupSpec[] = [
   { ...DEMO_STOCK_PICKUP, id: IDS.oilPickups.kestrelFront, name: 'Kestrel stock front-sump pickup', pumpInlet: KESTREL_INLET },
   { ...DEMO_REAR_SUMP_PICKUP, id: IDS.oilPickups.kestrelRear, name: 'Trailhand TR-4411 rear-sump pickup', pumpInlet: KESTREL_INLET },
-  {
-    id: IDS.oilPickups.kestrelCenter,
-    name: 'Kestrel centre-sump pickup',
-    sumpPosition: 'center',
-    mount: 'pump-bolted',
-    pumpInlet: KESTREL_INLET,
-    screenU: 330,
-    screenW: -232,
-  },
+  { ...DEMO_CENTER_SUMP_PICKUP, id: IDS.oilPickups.kestrelCenter, name: 'Kestrel centre-sump pickup', pumpInlet: KESTREL_INLET },
 ];
 
 const pumps: OilPumpSpec[] = [

@@ -36,11 +36,13 @@ describe('SYSTEM_CHECKS', () => {
     }
   });
 
-  it('only drivetrain geometry depends on placement', () => {
+  it('only drivetrain geometry, and the oiling checks that offer pans (a pan must clear what is below it there), depend on placement', () => {
     expect(SYSTEM_CHECKS.filter((c) => c.dependsOnPlacement).map((c) => c.id).sort()).toEqual([
       'drivetrain.critical-speed',
       'drivetrain.driveshaft-length',
       'drivetrain.u-joint-angles',
+      'oiling.dipstick',
+      'oiling.pan-pickup-pump',
     ]);
   });
 

@@ -4,10 +4,11 @@ import { measuredFinding, unknownFinding } from '../check-definition';
 import { COMMON_PRACTICE, figures, placementRemedy } from './envelope-common';
 import { evaluateCandidatePans } from './pan-clearance';
 import { lowestPoint, placedForSpec, type LowestPart } from './placed-engine';
+import { GROUND_CLEARANCE_ID } from './pan-rules';
 import { mmWithInches } from '../../units/figure-format';
 import { marginWords } from '../../units/margin-words';
 
-export const GROUND_CLEARANCE_ID = 'envelope.ground-clearance';
+export { GROUND_CLEARANCE_ID } from './pan-rules';
 
 /** How each part reads in the finding's sentence. */
 export const LOWEST_PART_WORDS: Record<LowestPart, string> = {

@@ -1,6 +1,6 @@
 import type { FitSettings } from '../../settings/fit-settings';
 import type { Finding, Remedy } from '../../types/finding';
-import type { ChassisObstacle, FitSpec, OilPanSpec, Placement } from '../../types/fit-spec';
+import type { ChassisObstacle, ChassisPoint, FitSpec, OilPanSpec, Placement } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
 import {
@@ -14,17 +14,13 @@ import {
   type ObstacleGap,
 } from './envelope-common';
 import { lowestPoint, obstaclesOfKinds, placedForSpec, placeEngine, placePan } from './placed-engine';
+import { GROUND_CLEARANCE_ID, PAN_OBSTACLE_KINDS, PAN_RULES, type PanObstacleRule } from './pan-rules';
 import { measureHood } from './hood';
 import { mmWithInches } from '../../units/figure-format';
 import { marginWords } from '../../units/margin-words';
 import { outlineGapValue } from '../../geometry/outline-gap';
 
-/** The obstacle kinds below the pan, one check each. */
-export const PAN_OBSTACLE_KINDS = {
-  crossmember: ['crossmember'],
-  steering: ['steering-linkage'],
-  axle: ['axle-at-bump', 'differential-at-bump'],
-} as const satisfies Record<string, readonly ChassisObstacle['kind'][]>;
+export { PAN_OBSTACLE_KINDS, PAN_RULES, type PanObstacleRule } from './pan-rules';
 
 export const ALL_BELOW_KINDS: ChassisObstacle['kind'][] = [
   ...PAN_OBSTACLE_KINDS.crossmember,
@@ -34,6 +30,14 @@ export const ALL_BELOW_KINDS: ChassisObstacle['kind'][] = [
 
 export const PAN_GAP_SOURCE = `${COMMON_PRACTICE}: half an inch under the pan, since the engine rocks on its mounts under torque (the shop's minimum clearance below the engine).`;
 
+/**
+ * The gap from a placed pan to the obstacles of the given kinds (the worst of them): the one measure the below-pan
+ * checks report and every candidate pan is judged by, so a pan offered as a remedy never fails the check itself.
+ */
+export function panObstacleGap(spec: FitSpec, placedPan: readonly ChassisPoint[], kinds: readonly ChassisObstacle['kind'][]): ObstacleGap | null {
+  return worstGap(placedPan, true, obstaclesOfKinds(spec, kinds));
+}
+
 /** Smallest pan gap to the obstacles of the given kinds at a placement (the pan is placed here). */
 export function measurePanGap(
   spec: FitSpec,
@@ -41,7 +45,91 @@ export function measurePanGap(
   kinds: readonly ChassisObstacle['kind'][],
   placement: Placement = spec.placement,
 ): ObstacleGap | null {
-  return worstGap(placePan(pan, placement), true, obstaclesOfKinds(spec, kinds));
+  return panObstacleGap(spec, placePan(pan, placement), kinds);
+}
+
+/** A pan measured against one rule below the engine, as that rule's check measures it. */
+export interface PanRuleResult {
+  /** The check that holds the rule: a below-pan check or the ground clearance. */
+  checkId: string;
+  /** How the obstacle reads in a sentence ("the front crossmember", "the ground"). */
+  label: string;
+  /** The obstacle's id, or `ground`. */
+  against: string;
+  gapMm: number;
+  requiredMm: number;
+  /** gap − required: negative fails the check. */
+  marginMm: number;
+}
+
+/** A pan judged at a placement against every rule below the engine. */
+export interface PanJudgement {
+  pan: OilPanSpec;
+  /** The below-pan checks that have obstacles, front to back, then the ground clearance. */
+  rules: PanRuleResult[];
+  /** The smallest margin of them (Infinity when nothing could be measured). */
+  smallestMargin: number;
+  /** The rule it misses by the most, or null when it keeps every one. */
+  failing: PanRuleResult | null;
+}
+
+function ruleResult(checkId: string, label: string, against: string, gapMm: number, requiredMm: number): PanRuleResult {
+  return { checkId, label, against, gapMm, requiredMm, marginMm: gapMm - requiredMm };
+}
+
+/**
+ * Judges a pan at a placement (the spec's own by default) by the measures of the checks themselves: the pan's gap to
+ * the crossmember, the steering linkage and the axle at bump ({@link panObstacleGap}, against the shop's minimum gap
+ * below the engine), and the lowest point above the ground (against the minimum ground clearance).
+ */
+export function judgePan(spec: FitSpec, settings: FitSettings, pan: OilPanSpec, placement: Placement = spec.placement): PanJudgement {
+  const placed = placeEngine(spec, placement, pan);
+  const rules: PanRuleResult[] = [];
+  for (const rule of Object.values(PAN_RULES)) {
+    const gap = panObstacleGap(spec, placed.pan!, rule.kinds);
+    if (gap) rules.push(ruleResult(rule.id, rule.label, gap.obstacle.id, gap.result.gap, settings.minGapBelowMm));
+  }
+  const low = lowestPoint(placed, 0, spec.chassis);
+  if (low) rules.push(ruleResult(GROUND_CLEARANCE_ID, 'the ground', 'ground', low.clearanceMm, settings.minGroundClearanceMm));
+  const tightest = rules.reduce<PanRuleResult | null>((min, rule) => (min === null || rule.marginMm < min.marginMm ? rule : min), null);
+  return { pan, rules, smallestMargin: tightest?.marginMm ?? Infinity, failing: tightest && tightest.marginMm < 0 ? tightest : null };
+}
+
+/**
+ * The candidate pans that bolt to this engine's block (the fitted one aside) and that `accept` lets through, each
+ * judged in the spec's placement (see {@link judgePan}), in the candidates' order.
+ */
+export function judgeCandidatePans(spec: FitSpec, settings: FitSettings, accept: (pan: OilPanSpec) => boolean = () => true): PanJudgement[] {
+  const pattern = spec.engine.panRail.pattern;
+  return (spec.candidates?.oilPans ?? [])
+    .filter((pan) => pan.railPattern === pattern && pan.id !== spec.oilPan?.id && accept(pan))
+    .map((pan) => judgePan(spec, settings, pan));
+}
+
+/** The judged pans that keep every rule below the engine, best first (largest smallest margin). */
+export function pansThatClear(judged: readonly PanJudgement[]): PanJudgement[] {
+  return judged.filter((j) => !j.failing).sort((a, b) => b.smallestMargin - a.smallestMargin);
+}
+
+/** "the Trailhand TR-4410 rear-sump swap pan, which clears the front crossmember by 51.2 mm (2.02 in)": a kept pan and its tightest rule. */
+export function keptPanWords(judged: PanJudgement): string {
+  const tightest = judged.rules.find((rule) => rule.marginMm === judged.smallestMargin);
+  return tightest ? `${judged.pan.name}, which clears ${tightest.label} by ${mmWithInches(tightest.gapMm)}` : judged.pan.name;
+}
+
+/** Why a judged pan was left out: "the X runs 53.8 mm (2.12 in) into the front crossmember". */
+export function leftOutPanWords(judged: PanJudgement): string {
+  const failing = judged.failing;
+  if (!failing) return judged.pan.name;
+  return failing.gapMm < 0
+    ? `${judged.pan.name} runs ${mmWithInches(-failing.gapMm)} into ${failing.label}`
+    : `${judged.pan.name} clears ${failing.label} by only ${mmWithInches(failing.gapMm)} of the ${mmWithInches(failing.requiredMm)} required`;
+}
+
+/** The sentence that names each judged pan that fails a rule below the engine and why ('' when none does). */
+export function leftOutPansSentence(judged: readonly PanJudgement[]): string {
+  const out = judged.filter((j) => j.failing);
+  return out.length ? ` Left out at this placement: ${out.map(leftOutPanWords).join('; ')}.` : '';
 }
 
 export interface PanCandidateResult {
@@ -49,6 +137,16 @@ export interface PanCandidateResult {
   /** Margin against each below-pan rule in the same placement, and the smallest of them. */
   thisCheckMargin: number;
   smallestMargin: number;
+}
+
+/** The judged pans that keep every rule below the engine, best first (largest smallest margin), with the margin of the check of `kinds`. */
+function clearingPans(judged: readonly PanJudgement[], kinds: readonly ChassisObstacle['kind'][]): PanCandidateResult[] {
+  const rule = Object.values(PAN_RULES).find((r) => r.kinds.some((kind) => kinds.includes(kind)));
+  return pansThatClear(judged).map((j) => ({
+    pan: j.pan,
+    thisCheckMargin: j.rules.find((r) => r.checkId === rule?.id)?.marginMm ?? Infinity,
+    smallestMargin: j.smallestMargin,
+  }));
 }
 
 /**
@@ -61,33 +159,11 @@ export function evaluateCandidatePans(
   settings: FitSettings,
   kinds: readonly ChassisObstacle['kind'][],
 ): PanCandidateResult[] {
-  const pattern = spec.engine.panRail.pattern;
-  const out: PanCandidateResult[] = [];
-  for (const pan of spec.candidates?.oilPans ?? []) {
-    if (pan.railPattern !== pattern || pan.id === spec.oilPan?.id) continue;
-    const placedPan = placePan(pan, spec.placement);
-    let thisCheckMargin = Infinity;
-    let smallest = Infinity;
-    for (const group of [PAN_OBSTACLE_KINDS.crossmember, PAN_OBSTACLE_KINDS.steering, PAN_OBSTACLE_KINDS.axle]) {
-      const gap = worstGap(placedPan, true, obstaclesOfKinds(spec, group));
-      if (!gap) continue;
-      const margin = gap.result.gap - settings.minGapBelowMm;
-      smallest = Math.min(smallest, margin);
-      if (group.some((k) => kinds.includes(k))) thisCheckMargin = margin;
-    }
-    const low = lowestPoint(placeEngine(spec, spec.placement, pan), 0, spec.chassis);
-    if (low) smallest = Math.min(smallest, low.clearanceMm - settings.minGroundClearanceMm);
-    if (thisCheckMargin >= 0 && smallest >= 0) out.push({ pan, thisCheckMargin, smallestMargin: smallest });
-  }
-  return out.sort((a, b) => b.smallestMargin - a.smallestMargin);
+  return clearingPans(judgeCandidatePans(spec, settings), kinds);
 }
 
-export interface PanCheckConfig {
-  id: string;
+export interface PanCheckConfig extends PanObstacleRule {
   title: string;
-  kinds: readonly ChassisObstacle['kind'][];
-  /** How the obstacle reads in a sentence, e.g. "the front crossmember". */
-  label: string;
   fabrication: (settings: FitSettings) => { operation: string; laborHours: number; note: string };
 }
 
@@ -108,7 +184,8 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
   const required = settings.minGapBelowMm;
   // A failing check is brought to the limit; a tight one to the edge of the tight band.
   const target = failing ? 0 : settings.tightBandMm;
-  const candidates = evaluateCandidatePans(spec, settings, config.kinds);
+  const judged = judgeCandidatePans(spec, settings);
+  const candidates = clearingPans(judged, config.kinds);
   const sumpPosition = sumpNeeded(spec, worst.obstacle, candidates[0]?.pan);
   remedies.push({
     kind: 'part',
@@ -118,8 +195,10 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
     note: candidates.length
       ? `A ${sumpPosition}-sump pan that bolts to this engine's block clears ${config.label} in this placement: ` +
         candidates.map((c) => `${c.pan.name} by ${mmWithInches(c.thisCheckMargin + required)}`).join('; ') +
-        '. Fit the matching pickup and check the dipstick.'
-      : `No candidate pan clears ${config.label} in this placement; look for a ${sumpPosition}-sump pan that bolts to this engine's block.`,
+        '. Fit the matching pickup and check the dipstick.' +
+        leftOutPansSentence(judged)
+      : `No candidate pan clears ${config.label} in this placement; look for a ${sumpPosition}-sump pan that bolts to this engine's block.` +
+        leftOutPansSentence(judged),
   });
   const marginAt = (p: Placement): number => {
     const g = worstGap(placePan(pan, p), true, [worst.obstacle]);
@@ -157,7 +236,7 @@ export function runPanCheck(context: CheckContext, config: PanCheckConfig): Find
   if (obstacles.length === 0) missing.push(`chassis.obstacles (kind ${config.kinds.join(' or ')})`);
   if (missing.length) return unknownFinding(fields, missing);
   const placed = placedForSpec(spec);
-  const worst = worstGap(placed.pan!, true, obstacles) as ObstacleGap;
+  const worst = panObstacleGap(spec, placed.pan!, config.kinds) as ObstacleGap;
   const gap = worst.result.gap;
   const fig = figures(gap, settings.minGapBelowMm, settings);
   const name = `${config.label} (${worst.obstacle.name})`;

@@ -1,11 +1,10 @@
-import { PAN_OBSTACLE_KINDS, panCheck } from './pan-clearance';
+import { panCheck } from './pan-clearance';
+import { PAN_RULES } from './pan-rules';
 
 /** Sump and pan against the front axle or differential at full bump. */
 export const SUMP_AXLE_CHECK = panCheck({
-  id: 'envelope.sump-axle',
+  ...PAN_RULES.axle,
   title: 'Oil pan to front axle or differential at full bump',
-  kinds: PAN_OBSTACLE_KINDS.axle,
-  label: 'the front axle at full bump',
   fabrication: (settings) => ({
     operation: 'Fit taller bump stops to limit axle up-travel',
     laborHours: settings.axleBumpStopFabricationHours,

@@ -1,11 +1,10 @@
-import { PAN_OBSTACLE_KINDS, panCheck } from './pan-clearance';
+import { panCheck } from './pan-clearance';
+import { PAN_RULES } from './pan-rules';
 
 /** Sump and pan against the front crossmember (obstacles of kind `crossmember`). */
 export const SUMP_CROSSMEMBER_CHECK = panCheck({
-  id: 'envelope.sump-crossmember',
+  ...PAN_RULES.crossmember,
   title: 'Oil pan to front crossmember',
-  kinds: PAN_OBSTACLE_KINDS.crossmember,
-  label: 'the front crossmember',
   fabrication: (settings) => ({
     operation: 'Notch and plate the front crossmember under the sump, or cut it out and relocate it',
     laborHours: settings.crossmemberFabricationHours,

@@ -1,11 +1,10 @@
-import { PAN_OBSTACLE_KINDS, panCheck } from './pan-clearance';
+import { panCheck } from './pan-clearance';
+import { PAN_RULES } from './pan-rules';
 
 /** Sump and pan against the steering linkage (obstacles of kind `steering-linkage`). */
 export const SUMP_STEERING_CHECK = panCheck({
-  id: 'envelope.sump-steering-linkage',
+  ...PAN_RULES.steering,
   title: 'Oil pan to steering linkage',
-  kinds: PAN_OBSTACLE_KINDS.steering,
-  label: 'the steering linkage',
   fabrication: (settings) => ({
     operation: 'Re-route or relocate the steering linkage (drop the centre link or change the pitman arm)',
     laborHours: settings.steeringLinkageFabricationHours,

@@ -1,5 +1,6 @@
 import type { Finding } from '../../types/finding';
 import { measuredFinding, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { judgeCandidatePans, keptPanWords, leftOutPansSentence, pansThatClear } from '../envelope/pan-clearance';
 
 const FIELDS: FindingFields = {
   checkId: 'oiling.dipstick',
@@ -10,7 +11,7 @@ const FIELDS: FindingFields = {
   thresholdSource: "The engine's dipstick location must be one the pan provides for (tube hole or clearance).",
 };
 
-export function checkDipstick({ spec }: CheckContext): Finding {
+export function checkDipstick({ spec, settings }: CheckContext): Finding {
   const pan = spec.oilPan;
   if (!pan) return unknownFinding(FIELDS, ['oilPan']);
   const location = spec.engine.dipstickLocation;
@@ -19,9 +20,9 @@ export function checkDipstick({ spec }: CheckContext): Finding {
     return measuredFinding(fields, { measured: 0, required: 0, margin: 0, status: 'ok' }, `The ${pan.name} provides for the engine's ${location} dipstick.`);
   }
   const provided = pan.dipstickProvision.length > 0 ? pan.dipstickProvision.join(', ') : 'no dipstick';
-  const partIds = (spec.candidates?.oilPans ?? [])
-    .filter((p) => p.railPattern === pan.railPattern && p.sumpPosition === pan.sumpPosition && p.dipstickProvision.includes(location))
-    .map((p) => p.id);
+  // Offered only when it also keeps every clearance below the engine here, as the envelope checks measure it.
+  const judged = judgeCandidatePans(spec, settings, (p) => p.railPattern === pan.railPattern && p.sumpPosition === pan.sumpPosition && p.dipstickProvision.includes(location));
+  const kept = pansThatClear(judged);
   return measuredFinding(
     fields,
     { measured: 1, required: 0, margin: -1, status: 'fails' },
@@ -42,8 +43,12 @@ export function checkDipstick({ spec }: CheckContext): Finding {
         kind: 'part',
         category: 'oil-pan',
         requires: { railPattern: pan.railPattern, sumpPosition: pan.sumpPosition, dipstickProvision: location },
-        partIds,
-        note: 'A pan with the same sump that provides for the engine\'s dipstick.',
+        partIds: kept.map((j) => j.pan.id),
+        note:
+          (kept.length
+            ? `A pan with the same sump that provides for the engine's dipstick and keeps every clearance below the engine at this placement: ${kept.map(keptPanWords).join('; ')}.`
+            : "No candidate pan with the same sump provides for the engine's dipstick and keeps every clearance below the engine at this placement.") +
+          leftOutPansSentence(judged),
       },
     ],
   );
@@ -53,6 +58,7 @@ export const DIPSTICK_CHECK: CheckDefinition = {
   id: FIELDS.checkId,
   group: FIELDS.group,
   title: FIELDS.title,
-  dependsOnPlacement: false,
+  // The verdict does not move with the engine, but the pans it offers must clear what is below it where it sits.
+  dependsOnPlacement: true,
   run: checkDipstick,
 };

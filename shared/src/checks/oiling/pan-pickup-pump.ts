@@ -2,6 +2,7 @@ import { oilSystemMismatches } from '../../oiling/oil-system';
 import type { Finding, Remedy } from '../../types/finding';
 import type { FitSpec, OilPanSpec, OilPickupSpec, OilPumpSpec } from '../../types/fit-spec';
 import { measuredFinding, unknownFinding, type CheckContext, type CheckDefinition, type FindingFields } from '../check-definition';
+import { judgeCandidatePans, keptPanWords, leftOutPansSentence, pansThatClear } from '../envelope/pan-clearance';
 
 const FIELDS: FindingFields = {
   checkId: 'oiling.pan-pickup-pump',
@@ -16,7 +17,7 @@ export function missingOilParts(spec: FitSpec, parts: Array<'oilPan' | 'oilPicku
   return parts.filter((part) => spec[part] === undefined);
 }
 
-export function checkPanPickupPump({ spec }: CheckContext): Finding {
+export function checkPanPickupPump({ spec, settings }: CheckContext): Finding {
   const missing = missingOilParts(spec, ['oilPan', 'oilPickup', 'oilPump']);
   const { oilPan: pan, oilPickup: pickup, oilPump: pump } = spec;
   if (!pan || !pickup || !pump) return unknownFinding(FIELDS, missing);
@@ -37,7 +38,7 @@ export function checkPanPickupPump({ spec }: CheckContext): Finding {
   }
   if (fields2.has('pumpInlet')) remedies.push(pumpRemedy(spec, pickup));
   if (fields2.has('railPattern') || fields2.has('sumpPosition') || fields2.has('pickupMount')) {
-    remedies.push(panRemedy(spec, pickup, fields2.has('railPattern')));
+    remedies.push(panRemedy({ spec, settings }, pickup, fields2.has('railPattern')));
   }
   return measuredFinding(fields, { measured: mismatches.length, required: 0, margin: -1, status: 'fails' }, message, remedies);
 }
@@ -69,17 +70,27 @@ function pumpRemedy(spec: FitSpec, pickup: OilPickupSpec): Remedy {
   };
 }
 
-function panRemedy(spec: FitSpec, pickup: OilPickupSpec, railMismatch: boolean): Remedy {
+/**
+ * Pans that bolt to the block and (unless the rail is what disagrees) take this pickup, offered only when they also
+ * keep every clearance below the engine at this placement, judged by the envelope checks' own measure; the note
+ * names each one left out and the rule it would fail.
+ */
+function panRemedy({ spec, settings }: CheckContext, pickup: OilPickupSpec, railMismatch: boolean): Remedy {
   const railPattern = spec.engine.panRail.pattern;
-  const partIds = (spec.candidates?.oilPans ?? [])
-    .filter((p) => p.railPattern === railPattern && (railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount)))
-    .map((p) => p.id);
+  const judged = judgeCandidatePans(spec, settings, (p) => railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount));
+  const kept = pansThatClear(judged);
+  const wanted = railMismatch ? "A pan for this engine's block" : `A pan whose sump and pickup mounting suit the ${pickup.name}`;
+  const note = kept.length
+    ? `${wanted} that keeps every clearance below the engine at this placement: ${kept.map(keptPanWords).join('; ')}.`
+    : railMismatch
+      ? "No candidate pan for this engine's block keeps every clearance below the engine at this placement."
+      : `No candidate pan for a ${pickup.sumpPosition} sump with a ${pickup.mount} pickup keeps every clearance below the engine at this placement.`;
   return {
     kind: 'part',
     category: 'oil-pan',
     requires: railMismatch ? { railPattern } : { railPattern, sumpPosition: pickup.sumpPosition, pickupMount: pickup.mount },
-    partIds,
-    note: 'A different pan must also clear the crossmember and steering: check the envelope results for it.',
+    partIds: kept.map((j) => j.pan.id),
+    note: note + leftOutPansSentence(judged),
   };
 }
 
@@ -87,6 +98,7 @@ export const PAN_PICKUP_PUMP_CHECK: CheckDefinition = {
   id: FIELDS.checkId,
   group: FIELDS.group,
   title: FIELDS.title,
-  dependsOnPlacement: false,
+  // The verdict does not move with the engine, but the pans it offers must clear what is below it where it sits.
+  dependsOnPlacement: true,
   run: checkPanPickupPump,
 };
