@@ -1,4 +1,4 @@
-import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../fixtures/demo-fit-spec';
+import { DEMO_CENTER_SUMP_PAN, DEMO_CENTER_SUMP_PICKUP, DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../fixtures/demo-fit-spec';
 import type { Finding } from '../types/finding';
 import type { FitSpec } from '../types/fit-spec';
 import { formatFigure, mmRangeWithInches, mmWithInches } from '../units/figure-format';
@@ -51,6 +51,18 @@ describe('finding wording', () => {
 
   it('so does the demo with the rear-sump pan', () => {
     expect(problemsIn({ ...DEMO_FIT_SPEC, oilPan: DEMO_REAR_SUMP_PAN })).toEqual([]);
+  });
+
+  it('so do the pan remedies that name the pans left out and why', () => {
+    const spec: FitSpec = {
+      ...DEMO_FIT_SPEC,
+      oilPan: DEMO_REAR_SUMP_PAN,
+      oilPickup: DEMO_CENTER_SUMP_PICKUP,
+      candidates: { ...DEMO_FIT_SPEC.candidates, oilPans: [...DEMO_FIT_SPEC.candidates!.oilPans!, DEMO_CENTER_SUMP_PAN] },
+    };
+    const agreement = runFitCheck(spec).findings.find((f) => f.checkId === 'oiling.pan-pickup-pump')!;
+    expect(agreement.remedies.map((r) => r.note).join(' ')).toContain('Left out at this placement: Kestrel centre-sump tow pan runs');
+    expect(problemsIn(spec)).toEqual([]);
   });
 
   it('findings that cannot be checked name the missing inputs in words, while `missing` keeps the field paths', () => {

@@ -79,9 +79,9 @@ function panRemedy({ spec, settings }: CheckContext, pickup: OilPickupSpec, rail
   const railPattern = spec.engine.panRail.pattern;
   const judged = judgeCandidatePans(spec, settings, (p) => railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount));
   const kept = pansThatClear(judged);
-  const wanted = railMismatch ? "A pan for this engine's block" : `A pan whose sump and pickup mounting suit the ${pickup.name}`;
+  const wanted = railMismatch ? "A pan for this engine's block that" : `A pan whose sump and pickup mounting suit the ${pickup.name} and that`;
   const note = kept.length
-    ? `${wanted} that keeps every clearance below the engine at this placement: ${kept.map(keptPanWords).join('; ')}.`
+    ? `${wanted} keeps every clearance below the engine at this placement: ${kept.map(keptPanWords).join('; ')}.`
     : railMismatch
       ? "No candidate pan for this engine's block keeps every clearance below the engine at this placement."
       : `No candidate pan for a ${pickup.sumpPosition} sump with a ${pickup.mount} pickup keeps every clearance below the engine at this placement.`;

@@ -95,7 +95,7 @@ describe('pans offered by the oiling checks keep the clearances below the engine
     const pan = panRemedy(finding.remedies);
     expect(pan.partIds).toEqual([DEMO_REAR_SUMP_PAN.id]);
     expect(pan.note).toContain(
-      'A pan whose sump and pickup mounting suit the Trailhand TR-4411 rear-sump pickup that keeps every clearance below the engine at this placement: ' +
+      'A pan whose sump and pickup mounting suit the Trailhand TR-4411 rear-sump pickup and that keeps every clearance below the engine at this placement: ' +
         'Trailhand TR-4410 rear-sump swap pan, which clears the front crossmember by 51.2 mm (2.02 in).',
     );
     expect(pan.note).toContain('Left out at this placement: Trailhand TR-4480 deep rear-sump pan runs 3.8 mm (0.15 in) into the front crossmember.');
