@@ -2,6 +2,7 @@ import type { FitReport, PartCategory, PartsPlanResult } from '@swapwright/share
 import { randomUUID } from 'node:crypto';
 import type { LaborOperation } from '../labor-operations/labor-operation.entity';
 import type { QuoteLineInputDto } from './dto/quote-input.dto';
+import { firstSentence } from './first-sentence';
 import type { LineSource } from './quote-revision.entity';
 
 /** The catalog kind a part remedy's category is stocked under (categories without a catalog kind stay as text). */
@@ -78,7 +79,8 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
           key: randomUUID(),
           kind: 'part',
           source: 'fit-remedy',
-          description: row ? row.name : remedy.note.slice(0, 200),
+          // Without a catalog part, the remedy's first sentence says what to look for (the pans left out and why stay in the report).
+          description: row ? row.name : firstSentence(remedy.note).slice(0, 200),
           catalogKind: row ? kind : null,
           catalogItemId: row ? row.id : null,
           quantity: 1,

@@ -13,6 +13,7 @@ import {
 import PDFDocument from 'pdfkit';
 import type { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import type { Shop } from '../shops/shop.entity';
+import { firstSentence } from './first-sentence';
 import type { QuoteView } from './quotes.service';
 
 /** Source Sans 3 from @fontsource, the .woff files (pdfkit's subsetter crashes on .woff2 with accented characters). */
@@ -32,12 +33,6 @@ const STATUS_WORDS: Record<string, string> = { fails: 'does not fit', tight: 'ti
 const INK = '#1f2933';
 const MUTED = '#52606d';
 const RULE = '#cbd2d9';
-
-/** The first sentence of a remedy or finding text (the rest is in the fit report). */
-function firstSentence(text: string): string {
-  const end = text.search(/\.\s/);
-  return end > 0 && end < 240 ? text.slice(0, end + 1) : text.length > 240 ? `${text.slice(0, 237)}…` : text;
-}
 
 /** The remedies under a shortfall as one sentence: each remedy's own closing full stop gives way to the list's separator. */
 export function resolvedByLine(remedies: string[]): string {
