@@ -3,7 +3,9 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import {
   fitSpecAttributes,
   isPartCategory,
+  panClearanceRefusals,
   planParts,
+  resolveFitSettings,
   runFitCheck,
   type EngineControllerSpec,
   type FitSpec,
@@ -124,6 +126,8 @@ export class PartsPlansService {
         shortfalls: report.shortfalls,
         ...(resolve && { resolve }),
         parts,
+        // Pans that would meet the crossmember (or another obstacle below the engine) where it sits are never picked.
+        clearanceRefusals: panClearanceRefusals(spec, resolveFitSettings(overrides)),
         laborRateCents: Math.round(shop.laborRatePerHour * 100),
         objective,
       },

@@ -269,7 +269,9 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
   const eligible = new Map<string, PlanPart>();
   // Supersession, the rules a part must meet on its own, and stock: why a part cannot be used at all.
   const ruleOrStockRefusal = (part: PlanPart, slot: PlanSlot | null): string | null =>
-    unaryRefusal(input, slot, part.attributes, fuel) ?? (input.objective === 'in-stock' && part.available < 1 ? 'not in stock now' : null);
+    unaryRefusal(input, slot, part.attributes, fuel) ??
+    (part.fitSpecId ? input.clearanceRefusals?.[part.fitSpecId] : undefined) ??
+    (input.objective === 'in-stock' && part.available < 1 ? 'not in stock now' : null);
   const ownRefusal = (part: PlanPart, slot: PlanSlot | null): string | null => {
     const superseding = replacedBy.get(part.sku);
     if (superseding && superseding.id !== part.id) return `superseded by ${superseding.sku}`;
@@ -526,7 +528,12 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     }
     const resolvers = [...new Set([...cover.filter((i) => columns[i].kind !== 'kit'), ...(cover.some((i) => columns[i].kind === 'kit') ? kitGroups.flat() : [])])];
     if (cover.length === 0) {
-      const blocked = info.parts.flatMap((remedy) => (byCategory.get(remedy.category) ?? []).filter((part) => partMeetsRemedy(part, remedy)));
+      // A part the fit engine left out where the engine sits (a pan into the crossmember) is named with its reason too.
+      const refusedHere = (part: PlanPart, remedy: PartRemedy) =>
+        !!part.fitSpecId && !!input.clearanceRefusals?.[part.fitSpecId] && Object.keys(remedy.requires).length > 0 && missedRequirements(part.attributes, remedy.requires).length === 0;
+      const blocked = info.parts.flatMap((remedy) =>
+        (byCategory.get(remedy.category) ?? []).filter((part) => partMeetsRemedy(part, remedy) || refusedHere(part, remedy)),
+      );
       const reason =
         info.parts.length === 0 && info.fabrication.length === 0
           ? 'no part or fabrication remedy: see the placement changes in the fit report'

@@ -1,7 +1,10 @@
 import fc from 'fast-check';
 import highsLoader from 'highs';
 import { runFitCheck } from '../fit-report/fit-report';
-import { DEMO_FIT_SPEC } from '../fixtures/demo-fit-spec';
+import { DEMO_CENTER_SUMP_PAN, DEMO_CENTER_SUMP_PICKUP, DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../fixtures/demo-fit-spec';
+import type { FitSpec } from '../types/fit-spec';
+import { panClearanceRefusals } from '../checks/envelope/pan-clearance';
+import { resolveFitSettings } from '../settings/fit-settings';
 import type { PartRemedy } from '../types/finding';
 import { fitSpecAttributes } from './part-attributes';
 import { planParts, type MipSolve } from './plan-parts';
@@ -144,6 +147,36 @@ describe('planParts on the demo project', () => {
     expect(plan.picks.map((p) => p.sku)).not.toContain('TR-4410');
     expect(plan.unresolved.map((u) => u.checkId)).toEqual(['envelope.sump-crossmember']);
     expect(plan.unresolved[0].catalogNeeds[0]).toMatch(/^Oil pan: sump at the rear\b/);
+  });
+
+  it('never picks a pan that runs into the crossmember to cure a pickup that disagrees with the pan', async () => {
+    // The rear-sump pan fitted with a centre-sump pickup. The only way out on the shelf would be the centre-sump pan,
+    // but at the demo placement its sump runs into the front crossmember (the crossmember check's own measure), so
+    // the fit engine does not offer it and the plan leaves the disagreement open rather than swap one failure for another.
+    const spec: FitSpec = {
+      ...DEMO_FIT_SPEC,
+      oilPan: DEMO_REAR_SUMP_PAN,
+      oilPickup: DEMO_CENTER_SUMP_PICKUP,
+      candidates: { ...candidates, oilPans: [...candidates.oilPans!, DEMO_CENTER_SUMP_PAN] },
+    };
+    const report = runFitCheck(spec);
+    expect(report.findings.find((f) => f.checkId === 'envelope.sump-crossmember')!.status).toBe('ok');
+    const input = demoInput('in-stock');
+    input.fitted['oil-pan'] = { name: DEMO_REAR_SUMP_PAN.name, attributes: fitSpecAttributes('oil-pans', DEMO_REAR_SUMP_PAN), fitSpecId: DEMO_REAR_SUMP_PAN.id };
+    input.fitted['oil-pickup'] = { name: DEMO_CENTER_SUMP_PICKUP.name, attributes: fitSpecAttributes('oil-pickups', DEMO_CENTER_SUMP_PICKUP), fitSpecId: DEMO_CENTER_SUMP_PICKUP.id };
+    input.shortfalls = report.shortfalls;
+    input.resolve = ['oiling.pan-pickup-pump'];
+    input.clearanceRefusals = panClearanceRefusals(spec, resolveFitSettings());
+    input.parts = [
+      ...input.parts.map((p) => (p.sku === 'TR-4411' ? { ...p, available: 0 } : p)),
+      part({ id: 'p13', sku: 'KS-PAN-CTR', description: 'Centre-sump tow pan', category: 'oil-pan', priceCents: 27_900, laborHours: 3, fitSpecId: DEMO_CENTER_SUMP_PAN.id, attributes: fitSpecAttributes('oil-pans', DEMO_CENTER_SUMP_PAN) }),
+    ];
+    const plan = await planParts(input, solve);
+    expect(plan.picks.map((p) => p.sku)).not.toContain('KS-PAN-CTR');
+    // The pan and pickup are left disagreeing, and the plan says why neither way out could be taken.
+    expect(plan.unresolved.map((u) => u.checkId)).toEqual(['oiling.pan-pickup-pump', 'plan.pan-pickup']);
+    expect(plan.unresolved[0].reason).toMatch(/TR-4411 not in stock now/);
+    expect(plan.unresolved[0].reason).toMatch(/KS-PAN-CTR runs \d+\.\d mm \(\d+\.\d\d in\) into the front crossmember at this placement/);
   });
 
   it('in-stock leaves out parts that are not on the shelf; least-fabrication trades money for fewer fabrication hours', async () => {

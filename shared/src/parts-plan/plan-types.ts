@@ -83,6 +83,12 @@ export interface PlanInput {
   /** Check ids the shop wants resolved; every shortfall when absent. */
   resolve?: string[];
   parts: PlanPart[];
+  /**
+   * Fit-spec ids of catalog parts the fit engine found not fitting where the engine sits (a pan that runs into the
+   * crossmember), with the reason in words (see `panClearanceRefusals`). Such a part is never picked, not even to
+   * make the pan agree with a pickup.
+   */
+  clearanceRefusals?: Record<string, string>;
   /** Shop labor rate, cents per hour. */
   laborRateCents: number;
   objective: PlanObjective;

@@ -117,13 +117,29 @@ export function keptPanWords(judged: PanJudgement): string {
   return tightest ? `${judged.pan.name}, which clears ${tightest.label} by ${mmWithInches(tightest.gapMm)}` : judged.pan.name;
 }
 
+/** How a pan misses a rule: "runs 53.8 mm (2.12 in) into the front crossmember", "clears the ground by only …". */
+export function panMissWords(rule: PanRuleResult): string {
+  return rule.gapMm < 0
+    ? `runs ${mmWithInches(-rule.gapMm)} into ${rule.label}`
+    : `clears ${rule.label} by only ${mmWithInches(rule.gapMm)} of the ${mmWithInches(rule.requiredMm)} required`;
+}
+
 /** Why a judged pan was left out: "the X runs 53.8 mm (2.12 in) into the front crossmember". */
 export function leftOutPanWords(judged: PanJudgement): string {
-  const failing = judged.failing;
-  if (!failing) return judged.pan.name;
-  return failing.gapMm < 0
-    ? `${judged.pan.name} runs ${mmWithInches(-failing.gapMm)} into ${failing.label}`
-    : `${judged.pan.name} clears ${failing.label} by only ${mmWithInches(failing.gapMm)} of the ${mmWithInches(failing.requiredMm)} required`;
+  return judged.failing ? `${judged.pan.name} ${panMissWords(judged.failing)}` : judged.pan.name;
+}
+
+/**
+ * The candidate pans (by id) that would fail a rule below the engine in the spec's placement, each with the reason
+ * ("runs 53.8 mm (2.12 in) into the front crossmember at this placement"): what a parts plan must not pick, not even
+ * to make the pan agree with a pickup.
+ */
+export function panClearanceRefusals(spec: FitSpec, settings: FitSettings): Record<string, string> {
+  const refusals: Record<string, string> = {};
+  for (const judged of judgeCandidatePans(spec, settings)) {
+    if (judged.failing) refusals[judged.pan.id] = `${panMissWords(judged.failing)} at this placement`;
+  }
+  return refusals;
 }
 
 /** The sentence that names each judged pan that fails a rule below the engine and why ('' when none does). */
