@@ -61,6 +61,29 @@ describe('projects for oneself', () => {
     expect(byCustomer.body.customerId).toBe(DEMO_CUSTOMER_IDS.juno);
   });
 
+  it("marks the member's own record as theirs in the customers list and by id, and nobody else's", async () => {
+    const [own] = await ownRecords(builder.user.shop.id, builder.user.id);
+    const list = await t.http.get('/api/customers').set(...bearer(builder)).expect(200);
+    // still listed, so the own-truck projects filed under it stay reachable
+    expect(list.body.items.map((c: { id: string; ownRecord: boolean }) => [c.id, c.ownRecord])).toEqual([[own.id, true]]);
+    expect((await t.http.get(`/api/customers/${own.id}`).set(...bearer(builder)).expect(200)).body.ownRecord).toBe(true);
+
+    // In a shop with customers: the estimator's own record is theirs to the estimator, one more record to the owner.
+    const estimator = await signIn(t.http, 'estimator@ironbark.test');
+    const owner = await signIn(t.http, 'owner@ironbark.test');
+    const [estimatorsOwn] = await ownRecords(estimator.user.shop.id, estimator.user.id);
+    const flags = async (session: Session) => {
+      const page = await t.http.get('/api/customers?pageSize=100').set(...bearer(session)).expect(200);
+      return new Map(page.body.items.map((c: { id: string; ownRecord: boolean }) => [c.id, c.ownRecord]));
+    };
+    const seenByEstimator = await flags(estimator);
+    const seenByOwner = await flags(owner);
+    expect(seenByEstimator.get(estimatorsOwn.id)).toBe(true);
+    expect(seenByOwner.get(estimatorsOwn.id)).toBe(false);
+    expect([...seenByEstimator.values()].filter(Boolean)).toHaveLength(1);
+    expect(seenByEstimator.get(DEMO_CUSTOMER_IDS.juno)).toBe(false);
+  });
+
   it('asks for exactly one of customerId and forMyself, writing nothing otherwise', async () => {
     const customersBefore = await countRows(t.dataSource, 'customers');
     const projectsBefore = await countRows(t.dataSource, 'projects');

@@ -1,7 +1,9 @@
+import { AuthUser } from '../common/tenant/auth-user';
 import { Customer } from './customer.entity';
 import { CustomerResponseDto } from './dto/customer-response.dto';
 
-export function mapCustomer(customer: Customer): CustomerResponseDto {
+/** A customer as the signed-in member sees it: their own record (linked to their login) is marked as theirs. */
+export function mapCustomer(customer: Customer, viewer: Pick<AuthUser, 'userId'>): CustomerResponseDto {
   return {
     id: customer.id,
     name: customer.name,
@@ -9,6 +11,7 @@ export function mapCustomer(customer: Customer): CustomerResponseDto {
     phone: customer.phone,
     notes: customer.notes,
     userId: customer.userId,
+    ownRecord: customer.userId !== null && customer.userId === viewer.userId,
     createdAt: customer.createdAt.toISOString(),
     updatedAt: customer.updatedAt.toISOString(),
   };

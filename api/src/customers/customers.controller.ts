@@ -25,14 +25,14 @@ export class CustomersController {
   @Roles(...CUSTOMER_READERS)
   @ApiPageResponse(CustomerResponseDto)
   async list(@CurrentUser() user: AuthUser, @Query() query: ListCustomersQueryDto): Promise<Page<CustomerResponseDto>> {
-    return mapPage(await this.customers.list(user, query), mapCustomer);
+    return mapPage(await this.customers.list(user, query), (customer) => mapCustomer(customer, user));
   }
 
   @Post()
   @Roles(...CUSTOMER_WRITERS)
   @ApiCreatedResponse({ type: CustomerResponseDto })
   async create(@CurrentUser() user: AuthUser, @Body() body: CreateCustomerDto): Promise<CustomerResponseDto> {
-    return mapCustomer(await this.customers.create(user, body));
+    return mapCustomer(await this.customers.create(user, body), user);
   }
 
   @Get(':id')
@@ -40,7 +40,7 @@ export class CustomersController {
   @ApiOkResponse({ type: CustomerResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
   async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CustomerResponseDto> {
-    return mapCustomer(await this.customers.get(user, id));
+    return mapCustomer(await this.customers.get(user, id), user);
   }
 
   @Patch(':id')
@@ -51,7 +51,7 @@ export class CustomersController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateCustomerDto,
   ): Promise<CustomerResponseDto> {
-    return mapCustomer(await this.customers.update(user, id, body));
+    return mapCustomer(await this.customers.update(user, id, body), user);
   }
 
   @Delete(':id')

@@ -1886,6 +1886,8 @@ export interface components {
              * @description The login of this customer, if invited
              */
             userId: string | null;
+            /** @description True for the signed-in member's own record (linked to their login): the projects they open for their own vehicle are filed under it. It is not a customer to invite. */
+            ownRecord: boolean;
             createdAt: string;
             updatedAt: string;
         };

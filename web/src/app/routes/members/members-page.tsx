@@ -8,7 +8,8 @@ import { useCustomerOptions } from '../shared/use-customer-options';
 
 export function MembersPage() {
   const user = useSignedInUser();
-  const customers = useCustomerOptions();
+  // one's own record is not a customer to invite
+  const customers = useCustomerOptions({ withoutOwnRecord: true });
   return (
     <>
       <PageHeader title="Members" subtitle="Who works in the shop, in which role, and who can follow their own projects." />

@@ -86,7 +86,7 @@ export function CustomerFormDrawer({ open, customer, onClose, onSaved }: Custome
           label="Email"
           name="email"
           rules={[{ type: 'email', message: 'Enter a valid email address' }, { max: 254 }]}
-          extra="Needed to invite them to follow their project."
+          extra={customer?.ownRecord ? undefined : 'Needed to invite them to follow their project.'}
         >
           <Input type="email" placeholder="merrin@example.com" />
         </Form.Item>

@@ -1,10 +1,11 @@
-import { Button, Flex, Grid, Input, Popconfirm, Space, Table, Typography } from 'antd';
+import { Button, Flex, Grid, Input, Popconfirm, Space, Table, Tag, Typography } from 'antd';
 import type { ColumnsType, TableProps } from 'antd/es/table';
 import { EmailAddress } from '@/components/email-address';
 import { ErrorState, EmptyState } from '@/components/query-state';
 import { formatDate, serverPagination, sorterToParams, sortOrderFor } from '@/lib/table';
 import { useCustomers } from '../api/get-customers';
 import { useDeleteCustomer } from '../api/delete-customer';
+import { ownRecordWords } from '../own-record';
 import { customerSortFields, type Customer, type CustomerListQuery } from '../types';
 
 export type CustomersTableProps = {
@@ -30,12 +31,24 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
       sortOrder: sortOrderFor('name', query.sort, query.order),
       render: (name: string, c) => (
         <Flex vertical>
-          {canEdit && onEdit ? (
-            <Typography.Link onClick={() => onEdit(c)} strong>
-              {name}
-            </Typography.Link>
-          ) : (
-            <Typography.Text strong>{name}</Typography.Text>
+          <Flex wrap gap={6} align="center">
+            {canEdit && onEdit ? (
+              <Typography.Link onClick={() => onEdit(c)} strong>
+                {name}
+              </Typography.Link>
+            ) : (
+              <Typography.Text strong>{name}</Typography.Text>
+            )}
+            {c.ownRecord && (
+              <Tag color="blue" style={{ marginInlineEnd: 0 }} data-testid="own-record-tag">
+                {ownRecordWords.tag}
+              </Tag>
+            )}
+          </Flex>
+          {c.ownRecord && (
+            <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+              {ownRecordWords.note}
+            </Typography.Text>
           )}
           {narrow && c.email && <EmailAddress email={c.email} small />}
           {narrow && c.phone && <a href={`tel:${c.phone.replace(/[^\d+]/g, '')}`} style={{ fontSize: 13 }}>{c.phone}</a>}
@@ -55,7 +68,14 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
     {
       title: 'Portal',
       key: 'portal',
-      render: (_, c) => (c.userId ? <Typography.Text type="success">Signed up</Typography.Text> : <Typography.Text type="secondary">Not invited</Typography.Text>),
+      render: (_, c) =>
+        c.ownRecord ? (
+          <Typography.Text type="secondary">{ownRecordWords.portal}</Typography.Text>
+        ) : c.userId ? (
+          <Typography.Text type="success">Signed up</Typography.Text>
+        ) : (
+          <Typography.Text type="secondary">Not invited</Typography.Text>
+        ),
       responsive: ['lg'],
     },
     {
@@ -88,17 +108,20 @@ export function CustomersTable({ query, onQueryChange, canEdit = false, onEdit, 
           <Button size="small" type="text" onClick={() => onEdit?.(c)} aria-label={`Edit ${c.name}`}>
             Edit
           </Button>
-          <Popconfirm
-            title={`Remove ${c.name}?`}
-            description="Their projects stay; the customer record goes."
-            okText="Remove"
-            okButtonProps={{ danger: true }}
-            onConfirm={() => remove.mutateAsync(c.id)}
-          >
-            <Button size="small" type="text" danger aria-label={`Remove ${c.name}`}>
-              Remove
-            </Button>
-          </Popconfirm>
+          {/* one's own record holds one's own-truck projects and comes back at the next one: nothing to remove */}
+          {!c.ownRecord && (
+            <Popconfirm
+              title={`Remove ${c.name}?`}
+              description="Their projects stay; the customer record goes."
+              okText="Remove"
+              okButtonProps={{ danger: true }}
+              onConfirm={() => remove.mutateAsync(c.id)}
+            >
+              <Button size="small" type="text" danger aria-label={`Remove ${c.name}`}>
+                Remove
+              </Button>
+            </Popconfirm>
+          )}
         </Space>
       ),
     });

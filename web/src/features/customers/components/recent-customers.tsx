@@ -4,6 +4,7 @@ import { CompactList } from '@/components/compact-list';
 import { EmptyState, QueryState } from '@/components/query-state';
 import { formatDate } from '@/lib/table';
 import { useCustomers } from '../api/get-customers';
+import { ownRecordWords } from '../own-record';
 
 export type RecentCustomersProps = { limit?: number; emptyAction?: ReactNode };
 
@@ -21,8 +22,8 @@ export function RecentCustomers({ limit = 5, emptyAction }: RecentCustomersProps
           label="Recent customers"
           items={page.items.map((c) => ({
             key: c.id,
-            title: c.name,
-            description: c.email ?? c.phone ?? 'No contact details',
+            title: c.ownRecord ? `${c.name}${ownRecordWords.optionSuffix}` : c.name,
+            description: c.ownRecord ? ownRecordWords.note : (c.email ?? c.phone ?? 'No contact details'),
             extra: <Typography.Text type="secondary">{formatDate(c.createdAt)}</Typography.Text>,
           }))}
         />

@@ -96,4 +96,25 @@ describe('CustomersTable', () => {
     expect(within(table).getByRole('columnheader', { name: /Email/ })).toBeInTheDocument();
     expect(within(table).getByText('marlo@example.com')).toBeInTheDocument();
   });
+
+  it("marks the member's own record as themselves, keeps it listed, and offers no removal of it", async () => {
+    setWindowWidth(1440);
+    const own = { ...customerStubs[0], id: 'cust-own', name: 'Wren Halloway', email: 'wren@example.com', userId: 'user-me', ownRecord: true };
+    vi.spyOn(apiClient, 'get').mockResolvedValue({ data: pageOf([own, ...customerStubs]) });
+    renderWithApp(<CustomersTableInUrl />, { route: '/customers' });
+    const table = await screen.findByRole('table', { name: 'Customers' });
+    const mine = await within(table).findByRole('row', { name: /Wren Halloway/ });
+    expect(within(mine).getByTestId('own-record-tag')).toHaveTextContent('You');
+    expect(mine).toHaveTextContent('Your own record, used for My own truck');
+    // no "Signed up" for oneself, and nothing to remove or invite
+    expect(mine).toHaveTextContent('Your own sign-in');
+    expect(mine).not.toHaveTextContent('Signed up');
+    expect(within(mine).getByRole('button', { name: 'Edit Wren Halloway' })).toBeInTheDocument();
+    expect(within(mine).queryByRole('button', { name: 'Remove Wren Halloway' })).toBeNull();
+    // the other customers read as before
+    const other = within(table).getByRole('row', { name: /Tove Quillfeather/ });
+    expect(within(other).queryByTestId('own-record-tag')).toBeNull();
+    expect(other).toHaveTextContent('Signed up');
+    expect(within(other).getByRole('button', { name: 'Remove Tove Quillfeather' })).toBeInTheDocument();
+  });
 });
