@@ -77,4 +77,31 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     await page.waitForURL(new RegExp(`/projects/${project.id}`));
     await page.getByRole('heading', { name: 'Own flatbed: diesel swap' }).first().waitFor();
   });
+
+  it('finds their own record in Customers marked as themselves, with nothing to remove or invite', async () => {
+    const { page } = browser;
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers' }).click();
+    const table = page.getByTestId('customers-table');
+    const mine = table.getByRole('row', { name: /Corvin Ashdale/ });
+    await mine.waitFor();
+    expect(await mine.getByTestId('own-record-tag').innerText()).toBe('You');
+    expect(await mine.innerText()).toContain('Your own record, used for My own truck');
+    expect(await mine.getByRole('button', { name: 'Remove Corvin Ashdale' }).count()).toBe(0);
+    await saveScreenshot(page, 'sign-up-own-record-in-customers');
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.waitForTimeout(300);
+    expect(await mine.getByTestId('own-record-tag').isVisible()).toBe(true);
+    await saveScreenshot(page, 'sign-up-own-record-in-customers-phone');
+    await page.setViewportSize({ width: 1366, height: 900 });
+
+    // inviting a customer to follow their projects does not offer oneself
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Members' }).click();
+    const invite = page.getByRole('form', { name: 'Invite a member' });
+    await invite.getByRole('combobox', { name: 'Role' }).click();
+    await page.locator('.ant-select-item-option').filter({ hasText: /^Customer$/ }).click();
+    await invite.getByRole('combobox', { name: 'Customer record' }).click();
+    // the shop's only customer record is their own: the list of records to invite is empty
+    await page.locator('.ant-select-dropdown:visible .ant-select-item-empty').waitFor();
+    expect(await page.locator('.ant-select-dropdown:visible .ant-select-item-option').filter({ hasText: 'Corvin Ashdale' }).count()).toBe(0);
+  });
 });
