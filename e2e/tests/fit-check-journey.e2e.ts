@@ -1,10 +1,25 @@
 import type { Page } from 'playwright-core';
-import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { ARTIFACTS_DIR, openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { restoreDemoFitSelections } from './support/demo-state';
+import { expectText, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 const SUMP_CHECK = 'envelope.sump-crossmember';
 const DEMO_PROJECT = /Harlan Ridgeback 1978: Kestrel 5\.3 V8 swap/;
+
+async function savePlacement(page: Page): Promise<void> {
+  const saved = page.waitForResponse((r) => /\/api\/projects\/[^/]+$/.test(r.url()) && r.request().method() === 'PATCH');
+  await page.getByRole('button', { name: 'Save placement' }).click();
+  expect((await saved).status()).toBe(200);
+}
+
+/** Types the tilt into its box and saves it as the project's placement. */
+async function saveTilt(page: Page, degrees: string): Promise<void> {
+  const tilt = page.getByRole('spinbutton', { name: 'Tilt' });
+  await tilt.fill(degrees);
+  await tilt.press('Enter');
+  await savePlacement(page);
+}
 
 async function runFitCheck(page: Page): Promise<void> {
   const ran = page.waitForResponse((r) => /\/api\/projects\/[^/]+\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');
@@ -67,9 +82,36 @@ describe('the estimator fits the demo engine and clears the crossmember with a r
   });
 
   it('saves the placement to the project', async () => {
+    await savePlacement(browser.page);
+  });
+
+  it('compares the last two reports: after a tilt change the U-joint angles read in degrees, the clearances in inches', async () => {
     const { page } = browser;
-    const saved = page.waitForResponse((r) => /\/api\/projects\/[^/]+$/.test(r.url()) && r.request().method() === 'PATCH');
-    await page.getByRole('button', { name: 'Save placement' }).click();
-    expect((await saved).status()).toBe(200);
+    // The demo placement's 3° tilt raised to 4.5°: the joint angles and the clearances both move.
+    await saveTilt(page, '4.5');
+    await runFitCheck(page);
+    const history = page.getByTestId('report-history');
+    const picks = history.getByRole('checkbox');
+    // The stock-pan, rear-sump-pan and tilted runs, newest first, once the list has the one just run.
+    await page.waitForFunction(() => document.querySelectorAll('[data-testid="report-history"] input[type="checkbox"]').length >= 3);
+    await picks.nth(0).check();
+    await picks.nth(1).check();
+    await expectVisible(history.getByRole('button', { name: 'Compare the two picked', disabled: false }));
+    await history.getByRole('button', { name: 'Compare the two picked' }).click();
+    const comparison = page.getByTestId('report-comparison');
+    const row = (title: string) => comparison.getByRole('row').filter({ hasText: title });
+    await expectText(row('U-joint operating angles'), /[+\u2212]\d+\.\d{2}°/);
+    expect(await row('U-joint operating angles').innerText()).not.toMatch(/\d (in|mm)\b/);
+    await expectText(row('Oil pan to front crossmember'), /[+\u2212]\d+\.\d{2} in/);
+    await comparison.scrollIntoViewIfNeeded();
+    await comparison.screenshot({ path: `${ARTIFACTS_DIR}/screenshots/fit-report-comparison-1366.png` });
+    for (const [width, height] of [[1440, 900], [390, 844]]) {
+      await page.setViewportSize({ width, height });
+      await comparison.scrollIntoViewIfNeeded();
+      await comparison.screenshot({ path: `${ARTIFACTS_DIR}/screenshots/fit-report-comparison-${width}.png` });
+    }
+    await page.setViewportSize({ width: 1366, height: 900 });
+    // The demo placement back for the journeys that follow.
+    await saveTilt(page, '3');
   });
 });

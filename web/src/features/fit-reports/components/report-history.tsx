@@ -1,4 +1,4 @@
-import { Alert, Button, Flex, Table, Tag, Typography } from 'antd';
+import { Alert, Button, Flex, Grid, Table, Tag, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
 import { useState } from 'react';
 import { useUnits } from '@/hooks/use-units';
@@ -42,27 +42,42 @@ const changeWords: Record<FindingDelta['change'], string> = {
 /** What changed between an older report `a` and a newer report `b`, as the server compares them. */
 function ReportComparison({ a, b }: { a: string; b: string }) {
   const units = useUnits();
+  const narrow = Grid.useBreakpoint().sm === false;
   const comparison = useFitReportComparison(a, b);
   if (comparison.isError) return <Alert type="error" title="The two reports could not be compared." />;
   if (!comparison.data) return <Typography.Text type="secondary">Comparing the two reports…</Typography.Text>;
   const deltas = comparison.data.changes;
   const changed = deltas.filter((d) => d.change !== 'same');
+  const resultTag = (d: FindingDelta) => <Tag color={d.change === 'improved' ? 'green' : d.change === 'worse' ? 'red' : undefined}>{changeWords[d.change]}</Tag>;
+  const statusTag = (side: FindingDelta['before']) => (side ? <CheckStatusTag status={side.status} /> : '—');
   const columns: ColumnsType<FindingDelta> = [
-    { title: 'Check', dataIndex: 'title', key: 'title' },
-    { title: 'Older', key: 'before', render: (_, d) => (d.before ? <CheckStatusTag status={d.before.status} /> : '—') },
-    { title: 'Newer', key: 'after', render: (_, d) => (d.after ? <CheckStatusTag status={d.after.status} /> : '—') },
+    {
+      title: 'Check',
+      key: 'title',
+      // On a phone the statuses and the result sit under the check's name, so its margin change stays in view.
+      render: (_, d) =>
+        narrow ? (
+          <Flex vertical gap={4}>
+            {d.title}
+            <Flex gap={4} wrap align="center">
+              {statusTag(d.before)} → {statusTag(d.after)} {resultTag(d)}
+            </Flex>
+          </Flex>
+        ) : (
+          d.title
+        ),
+    },
+    { title: 'Older', key: 'before', responsive: ['sm'], render: (_, d) => statusTag(d.before) },
+    { title: 'Newer', key: 'after', responsive: ['sm'], render: (_, d) => statusTag(d.after) },
     {
       title: 'Margin change',
       key: 'delta',
       align: 'right',
+      onCell: () => ({ style: { whiteSpace: 'nowrap' } }),
       // In the check's own unit, as the report shows its margin: a clearance in in/mm, an angle in degrees, a pressure in psi/kPa.
       render: (_, d) => formatFigure(d.marginDelta, d.unit, units, { signed: true }),
     },
-    {
-      title: 'Result',
-      key: 'change',
-      render: (_, d) => <Tag color={d.change === 'improved' ? 'green' : d.change === 'worse' ? 'red' : undefined}>{changeWords[d.change]}</Tag>,
-    },
+    { title: 'Result', key: 'change', responsive: ['sm'], render: (_, d) => resultTag(d) },
   ];
   return (
     <div data-testid="report-comparison">

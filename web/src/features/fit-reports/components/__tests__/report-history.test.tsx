@@ -26,10 +26,10 @@ const summary = (id: string, createdAt: string, createdByName: string | null): F
 
 const page = { items: [summary('r2', '2026-11-03T10:00:00.000Z', 'Sam Reyes'), summary('r1', '2026-11-02T10:00:00.000Z', null)], total: 2, page: 1, pageSize: 50 };
 
-function wideScreen() {
+function wideScreen(wide = true) {
   vi.spyOn(window, 'matchMedia').mockImplementation(
     (query: string) =>
-      ({ matches: true, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined, addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false }) as MediaQueryList,
+      ({ matches: wide, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined, addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false }) as MediaQueryList,
   );
 }
 
@@ -71,19 +71,26 @@ describe('ReportHistory', () => {
     expect(call?.[1]).toMatchObject({ params: { a: 'r1', b: 'r2' } });
   });
 
-  /** Picks both reports, compares them and gives the margin change shown on each check's row. */
+  /** Picks both reports, compares them and gives the margin change shown on each check's row, by check id. */
   async function compareAndReadMargins(comparison: FitReportComparison): Promise<Record<string, string>> {
     vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/fit-reports/compare' ? comparison : page }));
     const view = renderWithApp(<ReportHistory projectId="p1" onOpen={vi.fn()} />);
-    await screen.findByText('Sam Reyes');
+    await screen.findByText(/Nov 3, 2026/);
     for (const box of screen.getAllByRole('checkbox')) fireEvent.click(box);
     fireEvent.click(screen.getByRole('button', { name: 'Compare the two picked' }));
     const table = await within(await screen.findByTestId('report-comparison')).findByRole('table', { name: 'Changes between the two reports' });
-    const margins: Record<string, string> = {};
-    for (const row of within(table).getAllByRole('row').slice(1)) {
-      const cells = within(row).getAllByRole('cell');
-      margins[cells[0].textContent ?? ''] = cells[3].textContent ?? '';
-    }
+    // antd shows its screen-dependent columns once it has read the screen: read the rows when headers and cells agree.
+    const margins = await waitFor(() => {
+      const headers = within(table).getAllByRole('columnheader');
+      const marginColumn = headers.findIndex((header) => header.textContent === 'Margin change');
+      const read: Record<string, string> = {};
+      for (const row of within(table).getAllByRole('row').slice(1)) {
+        const cells = within(row).getAllByRole('cell');
+        expect(cells).toHaveLength(headers.length);
+        read[row.getAttribute('data-row-key') ?? ''] = cells[marginColumn].textContent ?? '';
+      }
+      return read;
+    });
     expect(screen.queryByText(/shown in length/)).toBeNull();
     view.unmount();
     return margins;
@@ -111,12 +118,20 @@ describe('ReportHistory', () => {
     wideScreen();
     window.localStorage.setItem('swapwright.unitSystem', system);
     expect(await compareAndReadMargins(mixedUnits)).toEqual({
-      'U-joint operating angles': angle,
-      'Oil pan vs front crossmember': clearance,
-      'Fuel pump flow for the target power': flow,
+      'drivetrain.u-joint-angles': angle,
+      'envelope.sump-crossmember': clearance,
+      'fuel.pump-flow': flow,
       // A must-match rule has no margin to change (as the report shows none for it).
-      'Oil pan, pickup and pump agree': '—',
+      'oiling.pan-pickup-pump': '—',
     });
+  });
+
+  it('on a phone keeps the margin change in view: statuses and result sit under the check', { timeout: 60_000 }, async () => {
+    wideScreen(false);
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const margins = await compareAndReadMargins(mixedUnits);
+    expect(margins['drivetrain.u-joint-angles']).toBe('\u22124.50°');
+    expect(margins['envelope.sump-crossmember']).toBe('+4.57 in');
   });
 
   it('offers no picking or comparing until there are two reports to compare', async () => {
