@@ -51,7 +51,7 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
       laborHours: settings.transmissionCrossmemberFabricationHours,
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
     });
-    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { offsetXMm: Math.round(o.dx) }, partIds: [], note: 'An offset transmission mount can take up the difference when one is made for this crossmember.' });
+    remedies.push({ kind: 'part', category: 'transmission-mount', requires: { offsetXMm: Math.round(o.dx * 10) / 10 }, partIds: [], note: 'An offset transmission mount can take up the difference when one is made for this crossmember.' });
   }
   return measuredFinding(fields, { measured, required: range, margin, status }, message, remedies);
 }

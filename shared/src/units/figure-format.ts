@@ -1,4 +1,4 @@
-import { mmToInches } from './length';
+import { mmToShownInches } from './length';
 
 export interface MmWithInchesOptions {
   /** Decimals for the millimetres (default 1); the inches get one more, at least 2. */
@@ -16,14 +16,15 @@ function fixed(value: number, decimals: number, signed: boolean): string {
 
 /**
  * The one way a length is written in a finding's message or remedy note: `11.6 mm (0.46 in)`,
- * millimetres to 0.1 and decimal inches to 0.01, so a shop working in either reads it directly.
+ * millimetres to 0.1 and decimal inches to 0.01 (from the millimetres as written: {@link mmToShownInches}), so a shop
+ * working in either reads it directly and both halves name the same length.
  * Negative figures use a plain ASCII minus in both units.
  */
 export function mmWithInches(mm: number, options: MmWithInchesOptions = {}): string {
   if (!Number.isFinite(mm)) throw new RangeError(`Cannot format a length of ${mm}.`);
   const decimals = options.decimals ?? 1;
   const signed = options.signed ?? false;
-  return `${fixed(mm, decimals, signed)} mm (${fixed(mmToInches(mm), Math.max(2, decimals + 1), signed)} in)`;
+  return `${fixed(mm, decimals, signed)} mm (${fixed(mmToShownInches(mm, decimals), Math.max(2, decimals + 1), signed)} in)`;
 }
 
 /** A range of lengths: `6.0 mm (0.24 in) to 10.0 mm (0.39 in)`. */

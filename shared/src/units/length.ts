@@ -9,6 +9,24 @@ export function mmToInches(mm: number): number {
   return mm / MM_PER_INCH;
 }
 
+/** Rounds to `decimals` places, half away from zero, so a negative figure rounds to the same size as its absolute value. */
+export function roundHalfAway(value: number, decimals: number): number {
+  const size = Number(Math.abs(value).toFixed(decimals));
+  return value < 0 ? -size : size;
+}
+
+/**
+ * The inches a length is shown as, the one rule for every inch figure a person reads: the millimetres are first
+ * rounded to the precision they are shown with in millimetres (`mmDecimals`, 0.1 mm by default), then converted
+ * (1 in = 25.4 mm exactly). A figure, the limit it is held against and their margin are all rounded to the same
+ * 0.1 mm before conversion, so the same stored length always reads the same in a table, a sentence, a drawing or a
+ * remedy (97.43 mm and the 97.4 mm written in a sentence both read 3.83 in), and found − needed = margin holds in
+ * inches within the last digit. The caller rounds the result to its inch decimals.
+ */
+export function mmToShownInches(mm: number, mmDecimals = 1): number {
+  return mmToInches(roundHalfAway(mm, mmDecimals));
+}
+
 export type LengthUnit = 'mm' | 'cm' | 'in' | 'ft';
 
 const MM_PER_UNIT: Record<LengthUnit, number> = { mm: 1, cm: 10, in: MM_PER_INCH, ft: MM_PER_FOOT };

@@ -1,6 +1,6 @@
 import type { FigureUnit, Finding, Remedy } from '../types/finding';
 import type { UnitSystem } from '../types/value-lists';
-import { MM_PER_INCH } from './length';
+import { MM_PER_INCH, roundHalfAway } from './length';
 import { KG_PER_LB, KPA_PER_PSI, KW_PER_HP, L_PER_US_GAL } from './quantities';
 
 /**
@@ -67,8 +67,12 @@ export function formatNumber(value: number, decimals: number, signed = false): s
  */
 export function formatQuantity(value: number, quantity: Quantity, system: UnitSystem, options: QuantityFormatOptions = {}): string {
   const shown = SHOWN[quantity][system];
-  const decimals = shownDecimals(quantity, system, options.decimals ?? 1);
-  const number = formatNumber(value * shown.perStored, decimals, options.signed ?? false);
+  const storedDecimals = options.decimals ?? 1;
+  const decimals = shownDecimals(quantity, system, storedDecimals);
+  // A length in inches is converted from the millimetres as they would be written (mmToShownInches), so the
+  // same stored length reads the same wherever it appears and a figure, its limit and its margin agree.
+  const stored = quantity === 'length' && system === 'in' ? roundHalfAway(value, storedDecimals) : value;
+  const number = formatNumber(stored * shown.perStored, decimals, options.signed ?? false);
   return shown.space ? `${number} ${shown.unit}` : `${number}${shown.unit}`;
 }
 
@@ -104,28 +108,11 @@ export function formatFindingFigure(value: number, unit: FigureUnit, system: Uni
 }
 
 /**
- * Inch steps tried for a threshold set in whole millimetres, coarsest first. Such a threshold (10 mm, 100 mm)
- * only claims the half millimetre it was rounded to, so any inch figure within ±0.5 mm of it states the rule as
- * well as any other; the roundest one is easiest to read off a rule: 10 mm reads 0.40 in (not 0.39 in), 100 mm
- * reads 3.95 in (not 3.94 in), 25 mm reads 1.00 in. A threshold set in inches (12.7 mm) reads exactly (0.50 in).
- * Common practice (no published source): shop rules are quoted in round figures of the shop's own unit.
- */
-const THRESHOLD_INCH_STEPS = [0.25, 0.1, 0.05] as const;
-const WHOLE_MM_HALF_WIDTH = 0.5;
-
-/**
- * A threshold (what a rule asks for) in the reader's system. Lengths set in whole millimetres are shown in
- * inches at the roundest step that stays within the half millimetre the rule was rounded to (see
- * {@link THRESHOLD_INCH_STEPS}); everything else as {@link formatQuantity}.
+ * A threshold (what a rule asks for) in the reader's system: exactly as {@link formatQuantity} writes any other
+ * figure of that quantity. A limit is never rounded to a coarser step than the figure held against it, so
+ * 3.0 mm reads 0.12 in, 50.0 mm 1.97 in and 100 mm 3.94 in, and found − needed = margin holds as shown.
  */
 export function formatThreshold(value: number, quantity: Quantity, system: UnitSystem, options: QuantityFormatOptions = {}): string {
-  const wholeMm = quantity === 'length' && system === 'in' && Math.abs(value - Math.round(value)) < 1e-9;
-  if (!wholeMm) return formatQuantity(value, quantity, system, options);
-  const inches = value / MM_PER_INCH;
-  for (const step of THRESHOLD_INCH_STEPS) {
-    const rounded = Math.round(inches / step) * step;
-    if (Math.abs(rounded * MM_PER_INCH - value) <= WHOLE_MM_HALF_WIDTH) return formatQuantity(rounded * MM_PER_INCH, quantity, system, options);
-  }
   return formatQuantity(value, quantity, system, options);
 }
 

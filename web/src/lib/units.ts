@@ -1,4 +1,4 @@
-import { formatMoney, formatQuantity, inchesToMm, mmToInches, parseLengthResult, renderText, textParts } from '@swapwright/shared';
+import { formatMoney, formatQuantity, inchesToMm, mmToShownInches, parseLengthResult, renderText, textParts } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -13,9 +13,9 @@ function round(value: number, decimals: number): number {
   return Math.round((value + Number.EPSILON) * f) / f;
 }
 
-/** mm (stored) → a number in the display unit, rounded to display precision. */
+/** mm (stored) → a number in the display unit, rounded to display precision (inches as {@link formatLength} shows them). */
 export function mmToDisplay(mm: number, system: UnitSystem): number {
-  return round(system === 'in' ? mmToInches(mm) : mm, lengthDecimals[system]);
+  return round(system === 'in' ? mmToShownInches(mm) : mm, lengthDecimals[system]);
 }
 
 /** A number in the given unit → mm (stored), without rounding. */

@@ -12,7 +12,7 @@ export function formatFigure(value: number | null | undefined, unit: FigureUnit,
   return formatFindingFigure(value, unit, units.system, options);
 }
 
-/** "at least 0.50 in", "at most 3.00°", "must match": the threshold shown as thresholds are (round-mm rules at round inches). */
+/** "at least 0.50 in", "at most 3.00°", "must match": the threshold at the same precision as the found figure and the margin. */
 export function formatRequirement(finding: Pick<Finding, 'required' | 'limit' | 'unit'>, units: Units): string {
   if (finding.limit === 'match') return 'must match';
   if (finding.required === null) return '—';

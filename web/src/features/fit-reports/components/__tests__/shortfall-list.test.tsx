@@ -1,29 +1,11 @@
-import { runFitCheck, type Finding } from '@swapwright/shared';
+import { runFitCheck } from '@swapwright/shared';
 import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { ShortfallList } from '../shortfall-list';
-
-function finding(over: Partial<Finding>): Finding {
-  return {
-    checkId: 'envelope.x',
-    group: 'envelope',
-    title: 'A check',
-    status: 'fails',
-    measured: 0,
-    required: 12.7,
-    margin: -12.7,
-    limit: 'min',
-    unit: 'mm',
-    message: 'Message.',
-    missing: [],
-    remedies: [],
-    thresholdSource: 'Common practice',
-    ...over,
-  };
-}
+import { finding } from './finding-fixture';
 
 const close = finding({ checkId: 'envelope.hood', title: 'Hood to intake', status: 'tight', measured: 15.875, margin: 3.175 });
 const slightlyBlocked = finding({ checkId: 'envelope.heads-firewall', title: 'Heads to firewall', measured: 6.35, margin: -6.35 });
@@ -71,9 +53,9 @@ describe('ShortfallList', () => {
     expect(within(row).getByText('at least 12.7 mm')).toBeInTheDocument();
   });
 
-  it('writes the sentence and remedy notes in the person’s system, inches first, the round-mm threshold at a round inch', () => {
+  it('writes the sentence and remedy notes in the person’s system, inches first, the threshold as precise as the figures', () => {
     // Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm. Derived: 96.0 mm = 3.78 in; a 100 mm rule reads
-    // 3.95 in (within the half millimetre the rule was rounded to); 126.2 L/h = 33.3 US gal/h; 58.0 psi = 399.9 kPa.
+    // 3.94 in (3.937 in, not rounded to a coarser step); 126.2 L/h = 33.3 US gal/h; 58.0 psi = 399.9 kPa.
     const ground = finding({
       checkId: 'envelope.ground-clearance',
       title: 'Ground clearance under the engine',
@@ -85,8 +67,8 @@ describe('ShortfallList', () => {
     });
     renderWithApp(<ShortfallList shortfalls={[ground]} />);
     const row = screen.getByTestId('shortfall-envelope.ground-clearance');
-    expect(within(row).getByText('The lowest point sits 3.78 in above the ground; at least 3.95 in is required.')).toBeInTheDocument();
-    expect(within(row).getByText('at least 3.95 in')).toBeInTheDocument();
+    expect(within(row).getByText('The lowest point sits 3.78 in above the ground; at least 3.94 in is required.')).toBeInTheDocument();
+    expect(within(row).getByText('at least 3.94 in')).toBeInTheDocument();
     expect(within(row).getByText('Fabricate: Raise the crossmember 0.16 in')).toBeInTheDocument();
     expect(within(row).getByText('A pump giving 33.3 gal/h at 58.0 psi.')).toBeInTheDocument();
     expect(row.textContent).not.toMatch(/\d mm\b|L\/h|kPa/);
