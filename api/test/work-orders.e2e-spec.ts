@@ -60,15 +60,16 @@ describe('job stages and the work order, from the first fit check to the finishe
     await t.http.post(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.estimator)).send({ objective: 'lowest-cost' }).expect(201);
     expect(await stage()).toBe('parts-planned');
 
-    // A draft without lines is drawn from the plan (parts at cost plus the shop's markup, the operations that install
-    // them) and names the plan version and the fit report it was built on.
+    // A draft without lines is drawn from the plan (parts at the plan's price, the operations that install them) and
+    // names the plan version and the fit report it was built on.
     const drafted = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({}).expect(201);
     const plan = (await t.http.get(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.estimator))).body[0];
     expect(drafted.body.revision).toMatchObject({ partsPlanId: plan.id, partsPlanVersion: plan.version, fitReportId: expect.any(String) });
-    const draftLines = drafted.body.revision.lines as { kind: string; source: string; catalogKind: string | null; catalogItemId: string | null; laborOperationId: string | null; pricing: string; markupPercent: number | null }[];
+    const draftLines = drafted.body.revision.lines as { kind: string; source: string; catalogKind: string | null; catalogItemId: string | null; laborOperationId: string | null; pricing: string; unitPriceCents: number; markupPercent: number | null }[];
     const planParts = draftLines.filter((line) => line.kind === 'part');
     expect(planParts.map((line) => line.catalogItemId).sort()).toEqual(plan.result.picks.map((pick: { partId: string }) => pick.partId).sort());
-    expect(planParts.every((line) => line.source === 'plan' && line.catalogKind === 'parts' && line.pricing === 'cost-plus' && line.markupPercent !== null)).toBe(true);
+    const planPrice = (partId: string | null) => plan.result.picks.find((pick: { partId: string }) => pick.partId === partId).priceCents;
+    expect(planParts.every((line) => line.source === 'plan' && line.catalogKind === 'parts' && line.pricing === 'list' && line.unitPriceCents === planPrice(line.catalogItemId))).toBe(true);
     const laborOperations = draftLines.filter((line) => line.kind === 'labor').map((line) => line.laborOperationId);
     expect(laborOperations).toEqual(expect.arrayContaining([operation('engine-remove-install').id, operation('oil-pan-pickup').id]));
     const pdf = await t.http.get(`/api/quotes/${drafted.body.id}/pdf`).set(...bearer(demo.estimator)).responseType('blob').expect(200);

@@ -11,6 +11,7 @@ export interface DemoLaborOperation {
   name: string;
   bookHours: number;
   buildOrder: number;
+  /** The part categories this operation installs (a quote draws its install labor, the work order its parts, by category). */
   matches: string[];
   hazards: DemoHazard[];
   torqueSpecs: { fastener: string; lbfFt: number; sequence: string | null }[];
@@ -26,7 +27,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Modify front crossmember for pan clearance',
     bookHours: 4.0,
     buildOrder: 10,
-    matches: ['crossmember', 'notch'],
+    matches: [],
     hazards: ['support', 'welding'],
     torqueSpecs: [],
     checks: [{ key: 'weld-inspected', label: 'Crossmember welds inspected: full fusion, no cracks or undercut', unit: null, min: null, max: null }],
@@ -37,7 +38,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Install camshaft and timing set',
     bookHours: 3.0,
     buildOrder: 20,
-    matches: ['cam', 'timing set'],
+    matches: ['cam-timing-set'],
     hazards: [],
     torqueSpecs: [{ fastener: 'Cam sprocket bolts', lbfFt: 25, sequence: 'Alternate bolts, in two stages (snug, then full torque)' }],
     checks: [
@@ -51,7 +52,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Install swap oil pan, pickup and pump',
     bookHours: 2.5,
     buildOrder: 30,
-    matches: ['oil-pan', 'oil-pickup', 'oil-pump', 'sump', 'oil pan'],
+    matches: ['oil-pan', 'oil-pickup', 'oil-pump'],
     hazards: ['support'],
     torqueSpecs: [
       { fastener: 'Oil pump to rear main cap', lbfFt: 18, sequence: null },
@@ -70,7 +71,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Fabricate or fit engine mount adapters',
     bookHours: 2.0,
     buildOrder: 40,
-    matches: ['mount-adapter', 'mount'],
+    matches: ['mount-adapter'],
     hazards: ['lifting', 'welding'],
     torqueSpecs: [{ fastener: 'Mount adapter to block bolts', lbfFt: 40, sequence: 'Upper bolts first, then lower, each side alike' }],
     checks: [],
@@ -81,7 +82,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Remove the old engine and install the swap engine and transmission',
     bookHours: 10.0,
     buildOrder: 50,
-    matches: ['bellhousing', 'placement'],
+    matches: ['bellhousing-adapter'],
     hazards: ['lifting', 'support', 'fuel'],
     torqueSpecs: [
       { fastener: 'Bellhousing to block bolts', lbfFt: 35, sequence: 'Alternate sides, in two stages' },
@@ -95,7 +96,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Shorten and balance the driveshaft',
     bookHours: 1.5,
     buildOrder: 60,
-    matches: ['driveshaft', 'slip-yoke', 'u-joint'],
+    matches: ['driveshaft', 'driveshaft-service'],
     hazards: ['support'],
     torqueSpecs: [{ fastener: 'U-joint strap bolts', lbfFt: 15, sequence: 'Alternate bolts' }],
     checks: [{ key: 'slip-engagement', label: 'Slip-yoke engagement at ride height', unit: 'mm', min: 25, max: null }],
@@ -106,7 +107,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Install fuel pump, regulator and lines',
     bookHours: 3.5,
     buildOrder: 70,
-    matches: ['fuel'],
+    matches: ['fuel-pump', 'fuel-regulator', 'fuel-lines'],
     hazards: ['fuel', 'support'],
     torqueSpecs: [],
     checks: [
@@ -120,9 +121,23 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     name: 'Wire the engine controller, sensors and pedal',
     bookHours: 6.0,
     buildOrder: 80,
-    matches: ['controller', 'sensor', 'throttle', 'engine-controller'],
+    matches: ['engine-controller', 'throttle-pedal'],
     hazards: [],
     torqueSpecs: [],
     checks: [{ key: 'no-faults', label: 'No fault codes with the engine running', unit: null, min: null, max: null }],
+  },
+  {
+    id: id(9),
+    code: 'transmission-crossmember',
+    name: 'Relocate or rework the transmission crossmember',
+    bookHours: 4.0,
+    buildOrder: 15,
+    matches: ['transmission-crossmember', 'transmission-mount'],
+    hazards: ['support', 'welding'],
+    torqueSpecs: [],
+    checks: [
+      { key: 'weld-inspected', label: 'Crossmember welds inspected: full fusion, no cracks or undercut', unit: null, min: null, max: null },
+      { key: 'mount-seated', label: 'Transmission mount bolted down flat on the crossmember pad, no spacer past the shop limit', unit: null, min: null, max: null },
+    ],
   },
 ];

@@ -1,4 +1,4 @@
-import type { FitReport, PartCategory, PartsPlanResult } from '@swapwright/shared';
+import { type FitReport, installerOfCategory, type PartCategory, type PartsPlanResult } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import type { LaborOperation } from '../labor-operations/labor-operation.entity';
 import type { QuoteLineInputDto } from './dto/quote-input.dto';
@@ -52,21 +52,29 @@ function operationAdder(lines: DraftLine[]): (operation: LaborOperation, source:
   };
 }
 
+/** The shop operation a fabrication remedy or planned operation is, by its operation code only (never by its words). */
+function operationOfCode(operations: readonly LaborOperation[], code: string | null | undefined): LaborOperation | null {
+  return code ? (operations.find((operation) => operation.code === code) ?? null) : null;
+}
+
+const tenthOfHour = (hours: number) => Math.round(hours * 10) / 10;
+
 /**
  * The first draft of a quote, drawn from the fit report: the base operations, a parts line for the first
- * catalog part of each part remedy (with the shop operation that installs it), and a labor line for each
- * fabrication remedy (the shop's own operation when one matches, else the remedy's hours). The estimator edits from there.
+ * catalog part of each part remedy (with the shop operation that installs its category), and a labor line for each
+ * fabrication remedy in the remedy's own words and hours (linked to the shop's operation only when the remedy names
+ * its operation code). The estimator edits from there.
  */
 export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
   const lines: DraftLine[] = [];
-  const match = (text: string) =>
-    inputs.operations.find((operation) => operation.matches.some((word) => word && text.toLowerCase().includes(word.toLowerCase()))) ?? null;
+  const ordered = [...inputs.operations].sort((a, b) => a.buildOrder - b.buildOrder);
   const addOperation = operationAdder(lines);
   for (const code of inputs.baseOperationCodes) {
     const operation = inputs.operations.find((candidate) => candidate.code === code);
     if (operation) addOperation(operation, 'manual');
   }
   const usedParts = new Set<string>();
+  const described = new Set<string>();
   for (const finding of inputs.report?.shortfalls ?? []) {
     for (const remedy of finding.remedies) {
       if (remedy.kind === 'part') {
@@ -87,60 +95,66 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
           pricing: 'list',
           unitPriceCents: row?.priceCents ?? 0,
         });
-        const installs = match(remedy.category);
+        const installs = installerOfCategory(ordered, remedy.category);
         if (installs) addOperation(installs, 'fit-remedy');
       } else if (remedy.kind === 'fabrication') {
-        const operation = match(remedy.operation);
-        if (operation) addOperation(operation, 'fit-remedy');
-        else lines.push({ key: randomUUID(), kind: 'labor', source: 'fit-remedy', description: remedy.operation.slice(0, 200), hours: Math.round(remedy.laborHours * 10) / 10 });
+        if (described.has(remedy.operation.toLowerCase())) continue;
+        described.add(remedy.operation.toLowerCase());
+        const operation = operationOfCode(inputs.operations, remedy.operationCode);
+        lines.push({
+          key: randomUUID(),
+          kind: 'labor',
+          source: 'fit-remedy',
+          description: remedy.operation.slice(0, 200),
+          ...(operation && { laborOperationId: operation.id }),
+          hours: tenthOfHour(remedy.laborHours),
+        });
       }
     }
   }
   return lines;
 }
 
-/** A part the plan picked, with the catalog's figures the quote prices it from. */
+/** A part the plan picked, at the price the plan shows for it. */
 export interface PlanPartForQuote {
   partId: string;
   sku?: string | null;
   description: string;
   category: string;
   quantity: number;
+  /** The plan's unit price (the part's list price when the plan was built): the quote charges exactly this. */
   priceCents: number;
-  /** 0 when the shop has not entered a cost: the line is then priced from the list. */
-  costCents: number;
+  /** The plan's install labor for the part, hours. */
+  laborHours: number;
 }
 
 export interface PlanDraftInputs {
-  plan: Pick<PartsPlanResult, 'operations' | 'picks'>;
+  plan: Pick<PartsPlanResult, 'operations'>;
   parts: PlanPartForQuote[];
-  report: FitReport | null;
   operations: LaborOperation[];
   baseOperationCodes: readonly string[];
-  defaultMarkupPercent: number;
 }
 
 /**
- * The first draft of a quote drawn from the parts plan: a parts line per pick (priced from its cost with the shop's
- * markup when a cost is known, else at its list price), the shop operation that installs each pick's category, the
- * plan's own operations, and the fabrication remedies of the fit report's shortfalls the plan leaves unresolved (the
- * shop's operation when one matches, else the remedy's own hours): a shortfall a picked part or planned operation
- * resolves is not quoted twice. Every line keeps where it came from.
+ * The first draft of a quote drawn from the parts plan, carrying exactly what the plan calls for:
+ * - the shop's base operations every swap needs (removing and installing the engine), marked as the shop's own lines;
+ * - a parts line per pick at the plan's price (the list price the plan, the catalog and the counter show);
+ * - the plan's install labor: the picks' hours summed per shop operation that installs their category (one line per
+ *   operation, in its name), or a line of their own for a part no operation installs;
+ * - a labor line per planned operation in the plan's own words and hours, linked to the shop's operation only when the
+ *   plan names its operation code (its hazards, torques and checks then reach the work order).
+ * Nothing else: a shortfall the plan leaves unresolved stays in the plan's list for the estimator to quote by hand.
  */
 export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
   const lines: DraftLine[] = [];
-  const words = (operation: LaborOperation) => operation.matches.filter(Boolean).map((word) => word.toLowerCase());
   const ordered = [...inputs.operations].sort((a, b) => a.buildOrder - b.buildOrder);
-  const installerOf = (category: string) =>
-    ordered.find((operation) => words(operation).includes(category)) ?? ordered.find((operation) => words(operation).some((word) => category.includes(word))) ?? null;
-  const matchText = (text: string) => ordered.find((operation) => words(operation).some((word) => text.toLowerCase().includes(word))) ?? null;
   const addOperation = operationAdder(lines);
   for (const code of inputs.baseOperationCodes) {
     const operation = inputs.operations.find((candidate) => candidate.code === code);
-    if (operation) addOperation(operation, 'plan');
+    if (operation) addOperation(operation, 'manual');
   }
+  const installs = new Map<LaborOperation | null, PlanPartForQuote[]>();
   for (const part of inputs.parts) {
-    const fromCost = part.costCents > 0;
     lines.push({
       key: randomUUID(),
       kind: 'part',
@@ -150,31 +164,37 @@ export function draftLinesFromPlan(inputs: PlanDraftInputs): DraftLine[] {
       catalogKind: 'parts',
       catalogItemId: part.partId,
       quantity: part.quantity,
-      ...(fromCost
-        ? { pricing: 'cost-plus' as const, unitCostCents: part.costCents, markupPercent: inputs.defaultMarkupPercent }
-        : { pricing: 'list' as const, unitPriceCents: part.priceCents }),
+      pricing: 'list',
+      unitPriceCents: part.priceCents,
     });
-    const installer = installerOf(part.category);
-    if (installer) addOperation(installer, 'plan');
+    const installer = installerOfCategory(ordered, part.category);
+    installs.set(installer, [...(installs.get(installer) ?? []), part]);
+  }
+  const labelled = new Set(lines.map((line) => line.laborOperationId).filter(Boolean));
+  for (const [operation, parts] of installs) {
+    if (operation === null) continue;
+    const hours = tenthOfHour(parts.reduce((sum, part) => sum + part.laborHours, 0));
+    if (hours <= 0) continue;
+    // A second line of an operation already quoted (a base operation that also installs a part) names the parts it fits.
+    const description = labelled.has(operation.id) ? `Fit ${parts.map((part) => part.sku || part.description).join(', ')}` : operation.name;
+    labelled.add(operation.id);
+    lines.push({ key: randomUUID(), kind: 'labor', source: 'plan', description: description.slice(0, 200), laborOperationId: operation.id, hours });
+  }
+  for (const part of installs.get(null) ?? []) {
+    const hours = tenthOfHour(part.laborHours);
+    if (hours <= 0) continue;
+    lines.push({ key: randomUUID(), kind: 'labor', source: 'plan', description: `Install ${part.sku ? `${part.sku} ` : ''}${part.description}`.slice(0, 200), hours });
   }
   for (const planned of inputs.plan.operations) {
-    const operation = matchText(planned.operation);
-    if (operation) addOperation(operation, 'plan');
-    else lines.push({ key: randomUUID(), kind: 'labor', source: 'plan', description: planned.operation.slice(0, 200), hours: Math.round(planned.laborHours * 10) / 10 });
-  }
-  const described = new Set(lines.map((line) => line.description.toLowerCase()));
-  const resolvedByPlan = new Set([...inputs.plan.picks, ...inputs.plan.operations].flatMap((pick) => (pick.resolves ?? []).map((shortfall) => shortfall.checkId)));
-  for (const finding of inputs.report?.shortfalls ?? []) {
-    if (resolvedByPlan.has(finding.checkId)) continue;
-    for (const remedy of finding.remedies) {
-      if (remedy.kind !== 'fabrication') continue;
-      const operation = matchText(remedy.operation);
-      if (operation) addOperation(operation, 'fit-remedy');
-      else if (!described.has(remedy.operation.toLowerCase())) {
-        described.add(remedy.operation.toLowerCase());
-        lines.push({ key: randomUUID(), kind: 'labor', source: 'fit-remedy', description: remedy.operation.slice(0, 200), hours: Math.round(remedy.laborHours * 10) / 10 });
-      }
-    }
+    const operation = operationOfCode(inputs.operations, planned.operationCode);
+    lines.push({
+      key: randomUUID(),
+      kind: 'labor',
+      source: 'plan',
+      description: planned.operation.slice(0, 200),
+      ...(operation && { laborOperationId: operation.id }),
+      hours: tenthOfHour(planned.laborHours),
+    });
   }
   return lines;
 }

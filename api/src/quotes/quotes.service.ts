@@ -207,7 +207,7 @@ export class QuotesService implements OnModuleInit {
     const lines = input.lines
       ? await this.linesFromInput(user, input.lines, [])
       : plan
-        ? await this.draftLinesFromPlan(user, plan, report?.results ?? null, settings.defaultMarkupPercent)
+        ? await this.draftLinesFromPlan(user, plan)
         : await this.draftLines(user, report?.results ?? null, settings.defaultMarkupPercent);
     const quoteId = randomUUID();
     const revision: Omit<QuoteRevision, 'lines' | 'totals' | 'createdAt'> & { lines: UnpricedLine[] } = {
@@ -463,9 +463,9 @@ export class QuotesService implements OnModuleInit {
     return drafted.map((line) => this.toUnpriced(line, line.source));
   }
 
-  private async draftLinesFromPlan(user: AuthUser, plan: PartsPlanRecord, report: FitReport | null, defaultMarkupPercent: number): Promise<UnpricedLine[]> {
+  /** The plan's own figures: each pick at the price and install hours the plan shows, each planned operation as planned. */
+  private async draftLinesFromPlan(user: AuthUser, plan: PartsPlanRecord): Promise<UnpricedLine[]> {
     const result = plan.result as unknown as PartsPlanResult;
-    const rows = new Map((await this.partsPlans.partsByIds(user, result.picks.map((pick) => pick.partId))).map((part) => [part.id, part]));
     const drafted = draftLinesFromPlan({
       plan: result,
       parts: result.picks.map((pick) => ({
@@ -474,13 +474,11 @@ export class QuotesService implements OnModuleInit {
         description: pick.description,
         category: pick.category,
         quantity: pick.quantity,
-        priceCents: rows.get(pick.partId)?.priceCents ?? pick.priceCents,
-        costCents: rows.get(pick.partId)?.costCents ?? 0,
+        priceCents: pick.priceCents,
+        laborHours: pick.laborHours,
       })),
-      report,
       operations: await this.operations.list(user),
       baseOperationCodes: BASE_OPERATION_CODES,
-      defaultMarkupPercent,
     });
     return drafted.map((line) => this.toUnpriced(line, line.source));
   }

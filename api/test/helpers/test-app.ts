@@ -113,3 +113,13 @@ export async function signUpThroughMail(
   const response = await http.post('/api/auth/sign-up/confirm').send({ token }).expect(201);
   return response.body as Session;
 }
+
+/** A fresh app on the demo data with the demo catalog and the shop's parts, and a session for every demo role. */
+export async function startAppWithParts(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
+  const { seedCatalog } = await import('../../src/database/seed/seed-catalog');
+  const { seedParts } = await import('../../src/database/seed/seed-parts');
+  const t = await startTestApp();
+  await seedCatalog(t.dataSource);
+  await seedParts(t.dataSource);
+  return { t, s: await signInAllRoles(t.http) };
+}

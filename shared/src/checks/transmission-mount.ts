@@ -49,6 +49,7 @@ export function runTransmissionMountPosition({ spec, settings }: CheckContext): 
       kind: 'fabrication',
       operation: `Relocate the transmission crossmember ${mmWithInches(measured)} ${o.dx >= 0 ? 'rearward' : 'forward'}`,
       laborHours: settings.transmissionCrossmemberFabricationHours,
+      operationCode: 'transmission-crossmember',
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
     });
     remedies.push({ kind: 'part', category: 'transmission-mount', requires: { offsetXMm: Math.round(o.dx * 10) / 10 }, partIds: [], note: 'An offset transmission mount can take up the difference when one is made for this crossmember.' });
@@ -89,7 +90,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
   } else if (dz > 0 && dz <= spacerMax) {
     message = `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within: a ${mmWithInches(dz)} spacer closes it.`;
     remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mmWithInches(dz)} spacer under the mount (at most ${mmWithInches(spacerMax)}).` });
-    remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, note: 'Support the transmission with a jack and the vehicle on stands.' });
+    remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, operationCode: 'transmission-crossmember', note: 'Support the transmission with a jack and the vehicle on stands.' });
   } else {
     message =
       dz > 0
@@ -99,6 +100,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
       kind: 'fabrication',
       operation: dz > 0 ? `Raise the crossmember pad ${mmWithInches(dz)}` : `Drop the crossmember ${mmWithInches(-dz)} or fit a drop crossmember`,
       laborHours: settings.transmissionCrossmemberFabricationHours,
+      operationCode: 'transmission-crossmember',
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',
     });
   }

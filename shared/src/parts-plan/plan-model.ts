@@ -1,4 +1,4 @@
-import type { FabricationRemedy, PartRemedy } from '../types/finding';
+import type { FabricationOperationCode, FabricationRemedy, PartRemedy } from '../types/finding';
 import { describeAttribute, describeAttributeList } from './attribute-words';
 import { missedRequirements, type PartAttributes } from './part-attributes';
 import { fitSpecKindOf, PART_CATEGORY_LABELS } from './part-categories';
@@ -19,7 +19,7 @@ export interface PlanColumn {
   slot: PlanSlot | null;
   part?: PlanPart;
   fitted?: FittedPart;
-  operation?: { operation: string; laborHours: number };
+  operation?: { operation: string; laborHours: number; operationCode?: FabricationOperationCode };
   shortfallIndex?: number;
   ruleId?: string;
   attributes: PartAttributes;
@@ -442,7 +442,7 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
       const laborCents = laborCentsOf(remedy.laborHours, rate);
       operationColumn.set(
         remedy.operation,
-        add({ kind: 'fabrication', slot: null, operation: { operation: remedy.operation, laborHours: remedy.laborHours }, attributes: {}, laborCents, costCents: laborCents, fabricationHours: remedy.laborHours }),
+        add({ kind: 'fabrication', slot: null, operation: { operation: remedy.operation, laborHours: remedy.laborHours, ...(remedy.operationCode && { operationCode: remedy.operationCode }) }, attributes: {}, laborCents, costCents: laborCents, fabricationHours: remedy.laborHours }),
       );
     }
   }

@@ -166,6 +166,7 @@ function explainPlan(model: PlanModel, input: PlanInput, chosen: Set<number>): O
         operation: column.operation.operation,
         laborHours: column.operation.laborHours,
         laborCents: column.laborCents,
+        operationCode: column.operation.operationCode ?? null,
         resolves,
         explanation: `${column.operation.operation}: resolves ${resolves.map((r) => r.title.toLowerCase()).join(' and ') || 'nothing on its own'}, ${column.operation.laborHours} h at the shop rate.`,
       });

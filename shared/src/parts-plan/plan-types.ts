@@ -1,4 +1,4 @@
-import type { Finding } from '../types/finding';
+import type { FabricationOperationCode, Finding } from '../types/finding';
 import type { PartAttributes } from './part-attributes';
 import type { CatalogPartCategory } from './part-categories';
 
@@ -132,6 +132,8 @@ export interface PlanPartPick {
 export interface PlanOperationPick {
   operation: string;
   laborHours: number;
+  /** The kind of shop labor operation it is (from the fit remedy), null when none; absent on plans saved before it was kept. */
+  operationCode?: FabricationOperationCode | null;
   laborCents: number;
   resolves: PlanShortfallRef[];
   explanation: string;

@@ -48,7 +48,17 @@ export interface FabricationRemedy {
   operation: string;
   laborHours: number;
   note: string;
+  /**
+   * The kind of shop labor operation this work is (a labor operation's stable `code`, see `FABRICATION_OPERATION_CODES`),
+   * when it is one: a quote links the shop's operation (its hazards, torques and checks) by this code only, never by
+   * words in `operation`.
+   */
+  operationCode?: FabricationOperationCode;
 }
+
+/** Kinds of fabrication work a shop keeps as labor operations (their `code`). */
+export const FABRICATION_OPERATION_CODES = ['crossmember-modify', 'mount-adapters', 'transmission-crossmember'] as const;
+export type FabricationOperationCode = (typeof FABRICATION_OPERATION_CODES)[number];
 
 export type Remedy = PartRemedy | PlacementRemedy | FabricationRemedy;
 

@@ -71,8 +71,12 @@ export interface WorkStep {
 
 export const OTHER_PARTS_STEP = { code: 'other-parts', name: 'Fit the other parts of the plan' } as const;
 
-/** The first operation in build order that installs a part of this category: an exact category word first, then a word it contains. */
-function installerOf(operations: readonly WorkOperationInput[], category: string): WorkOperationInput | null {
+/**
+ * The first operation (in the order given: build order) that installs a part of this category: an operation listing the
+ * category itself first, then one listing a word the category is made of (`fuel` for `fuel-pump`). Matched on the part's
+ * category only, never on a description's words; the quote draws its install labor and the work order its steps by it.
+ */
+export function installerOfCategory<T extends { matches: readonly string[] }>(operations: readonly T[], category: string): T | null {
   const exact = operations.find((operation) => operation.matches.some((word) => word.toLowerCase() === category));
   if (exact) return exact;
   return operations.find((operation) => operation.matches.some((word) => word && category.includes(word.toLowerCase()))) ?? null;
@@ -99,7 +103,7 @@ export function buildWorkSteps(operations: readonly WorkOperationInput[], parts:
   const ordered = [...operations].sort((a, b) => a.buildOrder - b.buildOrder);
   const partsOf = new Map<WorkOperationInput | null, WorkPartInput[]>();
   for (const part of parts) {
-    const installer = installerOf(ordered.filter((operation) => operation.id !== null), part.category);
+    const installer = installerOfCategory(ordered.filter((operation) => operation.id !== null), part.category);
     partsOf.set(installer, [...(partsOf.get(installer) ?? []), part]);
   }
   const step = (operation: WorkOperationInput, installed: WorkPartInput[]): WorkStep => ({

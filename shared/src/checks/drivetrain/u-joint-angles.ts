@@ -102,6 +102,7 @@ function uJointRemedies(transmissionDeg: number, pinionDeg: number, shimHours: n
       kind: 'fabrication',
       operation: 'Raise or lower the transmission crossmember to bring the shaft angle closer to the transmission and pinion',
       laborHours: 2,
+      operationCode: 'transmission-crossmember',
       note: 'Moving the transmission also changes the installed tilt; rerun the fit check afterwards.',
     },
   ];

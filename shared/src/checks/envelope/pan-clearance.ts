@@ -1,5 +1,5 @@
 import type { FitSettings } from '../../settings/fit-settings';
-import type { Finding, Remedy } from '../../types/finding';
+import type { FabricationOperationCode, Finding, Remedy } from '../../types/finding';
 import type { ChassisObstacle, ChassisPoint, FitSpec, OilPanSpec, Placement } from '../../types/fit-spec';
 import type { CheckContext, CheckDefinition } from '../check-definition';
 import { measuredFinding, unknownFinding } from '../check-definition';
@@ -180,7 +180,7 @@ export function evaluateCandidatePans(
 
 export interface PanCheckConfig extends PanObstacleRule {
   title: string;
-  fabrication: (settings: FitSettings) => { operation: string; laborHours: number; note: string };
+  fabrication: (settings: FitSettings) => { operation: string; laborHours: number; note: string; operationCode?: FabricationOperationCode };
 }
 
 function sumpNeeded(spec: FitSpec, obstacle: ChassisObstacle, best: OilPanSpec | undefined): OilPanSpec['sumpPosition'] {
@@ -239,7 +239,7 @@ export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanChe
     );
   }
   const fab = config.fabrication(settings);
-  remedies.push({ kind: 'fabrication', operation: fab.operation, laborHours: fab.laborHours, note: fab.note });
+  remedies.push({ kind: 'fabrication', operation: fab.operation, laborHours: fab.laborHours, note: fab.note, ...(fab.operationCode && { operationCode: fab.operationCode }) });
   return remedies;
 }
 

@@ -8,6 +8,7 @@ export const SUMP_CROSSMEMBER_CHECK = panCheck({
   fabrication: (settings) => ({
     operation: 'Notch and plate the front crossmember under the sump, or cut it out and relocate it',
     laborHours: settings.crossmemberFabricationHours,
+    operationCode: 'crossmember-modify',
     note: 'Structural welding on the frame: have it done by a qualified welder, keep the suspension pick-up points where they are, and check local rules for frame modifications.',
   }),
 });

@@ -88,6 +88,7 @@ function mountRemedies(spec: FitSpec, settings: CheckContext['settings'], o: Mou
     kind: 'fabrication',
     operation: `Fabricate and weld ${o.side} engine mount brackets`,
     laborHours: settings.mountFabricationHours,
+    operationCode: 'mount-adapters',
     note: 'Support the engine on a hoist or stand while fitting, never work under a hanging engine, and have frame welding done by a qualified welder.',
   });
   return remedies;

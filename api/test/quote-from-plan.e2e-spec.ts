@@ -1,0 +1,100 @@
+import { DEMO_LABOR_OPERATIONS, DEMO_STORY_JOBS, DemoRole } from '@swapwright/seed-data';
+import { bearer, Session, startAppWithParts, TestApp } from './helpers/test-app';
+
+type Line = {
+  kind: 'part' | 'labor';
+  source: string;
+  description: string;
+  sku: string | null;
+  catalogItemId: string | null;
+  laborOperationId: string | null;
+  quantity: number;
+  hours: number | null;
+  pricing: string;
+  unitPriceCents: number;
+  amountCents: number;
+};
+type PlanResult = {
+  picks: { partId: string; sku: string; quantity: number; priceCents: number; laborHours: number; category: string }[];
+  operations: { operation: string; laborHours: number; operationCode?: string | null }[];
+  totals: { partsCents: number; laborHours: number; laborCents: number };
+};
+
+const operation = (code: string) => DEMO_LABOR_OPERATIONS.find((candidate) => candidate.code === code)!;
+/** The parts-planned job of the demo story: a Stag 1984 whose transmission mount misses its crossmember. */
+const STAG = DEMO_STORY_JOBS.find((job) => job.stage === 'parts-planned')!;
+
+describe('the quote drafted from a locked parts plan carries exactly the plan', () => {
+  let t: TestApp;
+  let demo: Record<DemoRole, Session>;
+  let plan: { id: string; version: number; result: PlanResult };
+  let lines: Line[];
+  let totals: { partsSubtotalCents: number };
+
+  beforeAll(async () => {
+    ({ t, s: demo } = await startAppWithParts());
+    const as = (method: 'post' | 'put', path: string, body: object = {}) => t.http[method](path).set(...bearer(demo.estimator)).send(body);
+    const customer = await as('post', '/api/customers', { name: 'Test Customer Plan', email: 'plan.customer@example.test' }).expect(201);
+    const project = await as('post', '/api/projects', {
+      customerId: customer.body.id,
+      title: 'Stag with the crossmember to move',
+      vehicleDescription: STAG.vehicleDescription,
+      chassisModelId: STAG.chassisModelId,
+      engineProfileId: STAG.engineProfileId,
+      transmissionId: STAG.transmissionId,
+      goals: STAG.goals,
+      placement: STAG.placement,
+    }).expect(201);
+    await as('put', `/api/projects/${project.body.id}/fit-selections`, STAG.fitSelections!).expect(200);
+    const report = await as('post', `/api/projects/${project.body.id}/fit-reports`).expect(201);
+    const built = await as('post', `/api/projects/${project.body.id}/parts-plans`, { objective: 'lowest-cost', fitReportId: report.body.id }).expect(201);
+    await as('post', `/api/parts-plans/${built.body.id}/lock`).expect(200);
+    plan = built.body;
+    const drafted = await as('post', `/api/projects/${project.body.id}/quotes`).expect(201);
+    expect(drafted.body.revision).toMatchObject({ partsPlanId: plan.id, partsPlanVersion: plan.version });
+    lines = drafted.body.revision.lines;
+    totals = drafted.body.revision.totals;
+  }, 60_000);
+
+  afterAll(() => t.close());
+
+  it('the plan moves the transmission crossmember and raises its mount pad, and its pan clears the front crossmember', () => {
+    const planned = plan.result.operations.map((op) => op.operation);
+    expect(planned).toEqual(expect.arrayContaining([expect.stringMatching(/^Relocate the transmission crossmember .* rearward$/), 'Raise the crossmember mount pad']));
+    expect(planned.some((words) => /front crossmember/i.test(words))).toBe(false);
+  });
+
+  it('quotes every planned operation in its own words and hours, and nothing the plan does not call for', () => {
+    for (const planned of plan.result.operations) {
+      const quoted = lines.filter((line) => line.kind === 'labor' && line.description === planned.operation);
+      expect(quoted).toHaveLength(1);
+      // Common practice (no published source): labor is quoted in tenths of an hour.
+      expect(quoted[0]).toMatchObject({ source: 'plan', hours: Math.round(planned.laborHours * 10) / 10 });
+    }
+    const relocate = lines.find((line) => /^Relocate the transmission crossmember/.test(line.description))!;
+    const raise = lines.find((line) => line.description === 'Raise the crossmember mount pad')!;
+    // Both are transmission-crossmember work: the shop's operation (its welding and support cautions) by its code.
+    expect(relocate.laborOperationId).toBe(operation('transmission-crossmember').id);
+    expect(raise.laborOperationId).toBe(operation('transmission-crossmember').id);
+    // The rear-sump pan clears the front crossmember: no notch is quoted.
+    expect(lines.some((line) => line.laborOperationId === operation('crossmember-modify').id)).toBe(false);
+    expect(lines.some((line) => /front crossmember/i.test(line.description))).toBe(false);
+    // Every line but the shop's standing engine removal and installation comes from the plan, and its labor is the plan's.
+    const fromPlan = lines.filter((line) => line.source === 'plan');
+    expect(lines.filter((line) => line.source !== 'plan').map((line) => line.laborOperationId)).toEqual([operation('engine-remove-install').id]);
+    const planHours = fromPlan.filter((line) => line.kind === 'labor').reduce((sum, line) => sum + (line.hours ?? 0), 0);
+    expect(Math.round(planHours * 10) / 10).toBe(plan.result.totals.laborHours);
+  });
+
+  it('prices each part at the plan price, so the parts subtotal is the plan parts figure', () => {
+    const parts = lines.filter((line) => line.kind === 'part');
+    expect(parts.map((line) => line.catalogItemId).sort()).toEqual(plan.result.picks.map((pick) => pick.partId).sort());
+    for (const pick of plan.result.picks) {
+      const line = parts.find((candidate) => candidate.catalogItemId === pick.partId)!;
+      expect(line).toMatchObject({ source: 'plan', sku: pick.sku, pricing: 'list', unitPriceCents: pick.priceCents, quantity: pick.quantity });
+    }
+    const pan = parts.find((line) => line.sku === 'TR-4410');
+    if (pan) expect(pan.unitPriceCents).toBe(32_900);
+    expect(totals.partsSubtotalCents).toBe(plan.result.totals.partsCents);
+  });
+});
