@@ -68,6 +68,7 @@ export * from './checks/envelope/steering-box';
 export * from './checks/mounts/engine-mounts';
 export * from './checks/transmission-mount';
 export * from './fit-report/view-geometry';
+export * from './dates/calendar-date';
 export * from './quoting/exact-money';
 export * from './quoting/money-format';
 export * from './quoting/quote-money';

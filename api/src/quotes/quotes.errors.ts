@@ -1,3 +1,4 @@
+import { formatCalendarDate } from '@swapwright/shared';
 import { AppError } from '../common/errors/app-error';
 
 export const QuoteErrors = {
@@ -10,11 +11,19 @@ export const QuoteErrors = {
   noCustomerEmail: () =>
     new AppError(422, 'quote_customer_without_email', "The project's customer has no e-mail address; add one to the customer before sending."),
   pastValidity: (validUntil: string) =>
-    new AppError(422, 'quote_validity_past', `The quote is valid until ${validUntil}, which has passed; set a later date before sending.`),
+    new AppError(
+      422,
+      'quote_validity_past',
+      `This quote was valid until ${formatCalendarDate(validUntil)}, which has passed. Set a later day under "Discount, deposit and validity", then send it.`,
+    ),
+  validUntilPast: (validUntil: string) => {
+    const sentence = `The last day to accept, ${formatCalendarDate(validUntil)}, has already passed; choose today or a later day.`;
+    return new AppError(400, 'validation_failed', sentence, [sentence]);
+  },
   nothingToSend: () => new AppError(409, 'quote_already_sent', 'This revision was already sent; change the quote to make a new revision, then send that.'),
   notAwaitingAnswer: (status: string) => new AppError(409, 'quote_not_awaiting_answer', `This quote is ${status} and cannot be answered now.`),
   lapsed: (validUntil: string) =>
-    new AppError(409, 'quote_lapsed', `This quote was valid until ${validUntil}. Ask the shop for a fresh quote.`),
+    new AppError(409, 'quote_lapsed', `This quote was valid until ${formatCalendarDate(validUntil)}. Ask the shop for a fresh quote.`),
   reasonRequired: () => new AppError(400, 'validation_failed', 'Say why the quote is declined (reason).', ['reason must not be empty when declining']),
   fitReportNotOfProject: () => new AppError(400, 'validation_failed', 'fitReportId must be a fit report of this project.', ['fitReportId must be a fit report of this project']),
   badLine: (detail: string) => new AppError(400, 'validation_failed', detail, [detail]),

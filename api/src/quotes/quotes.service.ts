@@ -65,6 +65,11 @@ function addDays(iso: string, days: number): string {
   return todayIso(date);
 }
 
+/** A last valid day given by the estimator must be today or later (UTC, as sending and lapsing judge it). */
+function refusePastValidity(validUntil: string | undefined): void {
+  if (validUntil !== undefined && validUntil < todayIso()) throw QuoteErrors.validUntilPast(validUntil);
+}
+
 /** A quote awaiting an answer past its validity date reads as lapsed. */
 export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = todayIso()): QuoteStatus {
   if (quote.status === 'awaiting-answer' && sent && sent.validUntil < today) return 'lapsed';
@@ -200,6 +205,7 @@ export class QuotesService implements OnModuleInit {
 
   async create(user: AuthUser, projectId: string, input: CreateQuoteDto): Promise<QuoteView> {
     const project = await this.projects.get(user, projectId);
+    refusePastValidity(input.validUntil);
     const report = await this.reportFor(user, project, input.fitReportId);
     const [shop, settings] = await Promise.all([this.shops.getCurrent(user), this.settings.forShop(user)]);
     // The quote names the plan version and fit report it is built on; without lines it is drawn from them.
@@ -263,6 +269,7 @@ export class QuotesService implements OnModuleInit {
   async update(user: AuthUser, id: string, input: UpdateQuoteDto): Promise<QuoteView> {
     const view = await this.get(user, id);
     if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
+    refusePastValidity(input.validUntil);
     const latest = view.revisions[view.revisions.length - 1];
     const lines = input.lines ? await this.linesFromInput(user, input.lines, latest.lines) : latest.lines;
     const next = {

@@ -1,4 +1,4 @@
-import { Form } from 'antd';
+import { Form, type FormRule } from 'antd';
 import type { ReactNode } from 'react';
 import { BoundedNumberInput, plainNumberRule, type BoundedNumberInputProps } from '@/components/bounded-number-input';
 
@@ -12,10 +12,12 @@ export interface NumberFieldProps extends Omit<BoundedNumberInputProps, 'name' |
   example: string;
   /** Said when the figure is outside [min, max]; without it `min`/`max` only bound the arrows. */
   rangeMessage?: string;
+  /** More checks of the figure, after the plain-number and range ones. */
+  rules?: FormRule[];
 }
 
 /** A labelled number box of a form, bounded, its label doubling as the box's accessible name. */
-export function NumberField({ label, name, extra, required, example, rangeMessage, ...input }: NumberFieldProps) {
+export function NumberField({ label, name, extra, required, example, rangeMessage, rules = [], ...input }: NumberFieldProps) {
   const { min, max } = input;
   return (
     <Form.Item
@@ -27,6 +29,7 @@ export function NumberField({ label, name, extra, required, example, rangeMessag
         ...(required ? [{ required: true, message: required }] : []),
         plainNumberRule(label, example),
         ...(rangeMessage ? [{ type: 'number' as const, min: min === undefined ? undefined : Number(min), max: max === undefined ? undefined : Number(max), message: rangeMessage }] : []),
+        ...rules,
       ]}
     >
       <BoundedNumberInput aria-label={label} style={{ width: '100%' }} {...input} />

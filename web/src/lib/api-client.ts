@@ -105,7 +105,8 @@ apiClient.interceptors.response.use(
       const body = getApiErrorBody(error);
       notifyError({
         title: titleFor(status),
-        description: getErrorMessage(error) + (body?.correlationId ? ` (ref ${body.correlationId})` : ''),
+        description: getErrorMessage(error),
+        reference: body?.correlationId || undefined,
         key: body?.correlationId,
       });
     }
@@ -118,6 +119,8 @@ function titleFor(status: number | undefined): string {
   if (status === 403) return 'Not allowed for your role';
   if (status === 404) return 'Not found';
   if (status === 409) return 'Changed elsewhere';
+  // 422: the request was understood but the record is not ready for it (nothing to send, a date passed).
+  if (status === 422) return 'Not possible yet';
   if (status >= 400 && status < 500) return 'Check the form';
   return 'Server problem';
 }

@@ -1,6 +1,7 @@
 import { ArgumentMetadata, ValidationError, ValidationPipe } from '@nestjs/common';
 import { AppError, CommonErrors } from '../errors/app-error';
 import { compiledValidatorFor, hasCompiledValidation } from '../validation/compiled-body-validator';
+import { itemName } from '../validation/item-names';
 import { nullFieldProblems } from '../validation/null-fields';
 
 interface Problem {
@@ -27,14 +28,20 @@ const CONSTRAINT_RANK: Record<string, number> = {
 };
 const OTHER_RANK = 2;
 
-function flatten(errors: ValidationError[], parent = ''): Problem[] {
+/**
+ * Each problem with the path of its field. Inside a list item whose class names it (`@NamedInMessages`), the path
+ * up to the item becomes its name in words: "Line 1 (Notch crossmember): hours must be 0 or more".
+ */
+function flatten(errors: ValidationError[], parent = '', named = ''): Problem[] {
   return errors.flatMap((error) => {
+    const name = itemName(error.value, error.property);
+    if (name) return flatten(error.children ?? [], '', name);
     const path = parent ? `${parent}.${error.property}` : error.property;
-    const own = Object.entries(error.constraints ?? {}).map(([constraint, message]) => ({
-      constraint,
-      message: parent && message.startsWith(error.property) ? `${parent}.${message}` : message,
-    }));
-    return [...own, ...flatten(error.children ?? [], path)];
+    const own = Object.entries(error.constraints ?? {}).map(([constraint, message]) => {
+      const placed = parent && message.startsWith(error.property) ? `${parent}.${message}` : message;
+      return { constraint, message: named ? `${named}: ${placed}` : placed };
+    });
+    return [...own, ...flatten(error.children ?? [], path, named)];
   });
 }
 
@@ -78,7 +85,8 @@ export function createValidationPipe(): ValidationPipe {
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
-    validationError: { target: false, value: false },
+    // values are kept for naming list items in messages (never echoed back)
+    validationError: { target: false, value: true },
     exceptionFactory: (errors) => CommonErrors.validation(validationMessages(errors)),
   });
 }

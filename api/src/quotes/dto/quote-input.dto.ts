@@ -19,9 +19,15 @@ import {
 } from 'class-validator';
 import { IsOptionalDefined } from '../../common/decorators/optional-defined.decorator';
 import { Trim } from '../../common/decorators/trim.decorator';
+import { NamedInMessages, shortText } from '../../common/validation/item-names';
 
 const MAX_CENTS = 100_000_000_00; // 100 million in the shop's currency: beyond any swap job
 
+/** "Line 1 (Notch crossmember)", as the estimator sees the line in the list. */
+@NamedInMessages((line, index) => {
+  const description = shortText(line.description);
+  return description ? `Line ${index + 1} (${description})` : `Line ${index + 1}`;
+})
 export class QuoteLineInputDto {
   @ApiPropertyOptional({ description: 'Keep the key of a line you edit, so revisions can be compared line by line; omit for a new line.' })
   @IsOptionalDefined()
@@ -97,9 +103,9 @@ export class QuoteLineInputDto {
 
   @ApiPropertyOptional({ description: 'Labor lines: hours to a tenth' })
   @IsOptionalDefined()
-  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'hours are quoted to a tenth of an hour' })
-  @Min(0)
-  @Max(999)
+  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'hours are quoted to a tenth of an hour, for example 2.5' })
+  @Min(0, { message: 'hours must be 0 or more' })
+  @Max(999, { message: 'hours must be at most 999' })
   hours?: number;
 }
 

@@ -1,4 +1,34 @@
+import { hoursInTenths } from '@swapwright/shared';
 import type { QuoteLine, QuoteLineInput } from './types';
+
+/** The most hours one labor line takes (as the API does). */
+export const MAX_LINE_HOURS = 999;
+
+/**
+ * What is wrong with typed hours, in a sentence for the field, or null when they can be quoted: zero or more, at
+ * most 999, to a tenth of an hour (the quote rule's own test of tenths).
+ */
+export function hoursProblem(hours: number): string | null {
+  if (!Number.isFinite(hours)) return null; // the plain-number rule speaks for text that is not a figure
+  if (hours < 0) return 'Hours cannot be negative: enter 0 or more.';
+  if (hours > MAX_LINE_HOURS) return `Hours must be at most ${MAX_LINE_HOURS} on one line.`;
+  try {
+    hoursInTenths(hours);
+    return null;
+  } catch {
+    const down = Math.floor(hours * 10) / 10;
+    const up = Math.ceil(hours * 10) / 10;
+    return `Hours are quoted to a tenth of an hour: enter ${down.toFixed(1)} or ${up.toFixed(1)}.`;
+  }
+}
+
+/** Form rule for a labor line's hours (see `hoursProblem`). */
+export const hoursRule = {
+  validator: async (_: unknown, value: unknown) => {
+    const problem = typeof value === 'number' ? hoursProblem(value) : null;
+    if (problem) throw new Error(problem);
+  },
+};
 
 /** What the line form holds: money in the shop's currency units as typed (converted to cents once, here). */
 export type QuoteLineFormValues = {

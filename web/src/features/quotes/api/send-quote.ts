@@ -4,7 +4,8 @@ import type { Quote } from '../types';
 import { quoteKeys } from './quote-keys';
 
 export async function sendQuote(quoteId: string): Promise<Quote> {
-  const { data } = await apiClient.post<Quote>(`/quotes/${encodeURIComponent(quoteId)}/send`);
+  // Both places that send show a refusal themselves (beside the button), so no second, global notice.
+  const { data } = await apiClient.post<Quote>(`/quotes/${encodeURIComponent(quoteId)}/send`, undefined, { skipErrorNotification: true });
   return data;
 }
 

@@ -4,7 +4,7 @@ import { useEffect } from 'react';
 import { FormDrawer } from '@/components/form-drawer';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { useLaborOperations } from '../api/get-labor-operations';
-import { lineToForm, type QuoteLineFormValues } from '../quote-line-input';
+import { hoursRule, lineToForm, MAX_LINE_HOURS, type QuoteLineFormValues } from '../quote-line-input';
 import type { QuoteLine } from '../types';
 import { NumberField } from '@/components/number-field';
 import { ChoiceField } from './quote-fields';
@@ -78,7 +78,17 @@ export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPerce
           <Input aria-label="Description" />
         </Form.Item>
         {kind === 'labor' ? (
-          <NumberField label="Hours" name="hours" required="Enter the hours, to a tenth" example="3.5" min={0} max={999} step={0.1} suffix="h" />
+          <NumberField
+            label="Hours"
+            name="hours"
+            required="Enter the hours, to a tenth"
+            example="3.5"
+            min={0}
+            max={MAX_LINE_HOURS}
+            step={0.1}
+            suffix="h"
+            rules={[hoursRule]}
+          />
         ) : (
           <>
             <Row gutter={12}>

@@ -16,6 +16,13 @@ export interface QuoteLineEditorProps {
   defaultMarkupPercent?: number;
   /** More buttons beside "Add parts line" and "Add labor line". */
   actions?: ReactNode;
+  /**
+   * The page's one change of this quote, shared with its other forms, so a later success anywhere clears an
+   * earlier refusal; the editor keeps its own when none is given.
+   */
+  update?: ReturnType<typeof useUpdateQuote>;
+  /** Another form of the page is open and shows the refusal itself. */
+  otherFormOpen?: boolean;
 }
 
 type Editing = { kind: QuoteLine['kind']; line?: QuoteLine } | null;
@@ -29,9 +36,10 @@ const KIND_TAG: Record<QuoteLine['kind'], { color: string; label: string }> = {
  * The lines of the working revision, editable: add, change or remove a line. Each save sends the whole list
  * (every kept line with its key) and shows the figures the API priced.
  */
-export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteLineEditorProps) {
+export function QuoteLineEditor({ quote, defaultMarkupPercent, actions, update: shared, otherFormOpen = false }: QuoteLineEditorProps) {
   const [editing, setEditing] = useState<Editing>(null);
-  const update = useUpdateQuote(quote.id);
+  const own = useUpdateQuote(quote.id);
+  const update = shared ?? own;
   const lines = quote.revision.lines;
 
   const save = (values: QuoteLineFormValues) => {
@@ -41,9 +49,14 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteL
     update.mutate({ lines: next }, { onSuccess: () => setEditing(null) });
   };
   const remove = (key: string) => update.mutate({ lines: lines.filter((line) => line.key !== key).map(lineToInput) });
+  // A refusal belongs to the form that was sent: opening or closing a form starts clean.
   const open = (next: Editing) => {
     update.reset();
     setEditing(next);
+  };
+  const close = () => {
+    update.reset();
+    setEditing(null);
   };
   // Below antd's md (768 px) the lines stack with their commands, so nothing hides past the right edge of a phone.
   const narrow = Grid.useBreakpoint().md === false;
@@ -69,7 +82,7 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteL
         <Button onClick={() => open({ kind: 'labor' })}>Add labor line</Button>
         {actions}
       </Flex>
-      {!editing && <FormErrorAlert error={update.error} />}
+      {!editing && !otherFormOpen && <FormErrorAlert error={update.error} />}
       {narrow ? (
         <QuoteLineCards lines={lines} currency={currency} lead={kindTag} actions={lineActions} />
       ) : (
@@ -98,7 +111,7 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions }: QuoteL
         saving={update.isPending}
         error={update.error}
         onSubmit={save}
-        onClose={() => setEditing(null)}
+        onClose={close}
       />
     </>
   );

@@ -5,6 +5,7 @@ import { FormDrawer } from '@/components/form-drawer';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import type { UpdateQuoteBody } from '../api/update-quote';
 import { toCents } from '../quote-line-input';
+import { firstValidDay, validUntilRule } from '../quote-validity';
 import type { Quote } from '../types';
 import { NumberField } from '@/components/number-field';
 import { ChoiceField } from './quote-fields';
@@ -105,8 +106,9 @@ export function QuoteTermsDrawer({ open, revision, saving, error, onSubmit, onCl
             )}
           </Col>
           <Col span={12}>
-            <Form.Item label="Valid until" name="validUntil" rules={[{ required: true, message: 'Enter the last day the customer may accept' }]}>
-              <Input type="date" aria-label="Valid until" />
+            <Form.Item label="Valid until" name="validUntil" rules={[{ required: true, message: 'Enter the last day the customer may accept' }, validUntilRule()]}>
+              {/* the browser's date picker offers no day before the first valid one */}
+              <Input type="date" aria-label="Valid until" min={firstValidDay()} />
             </Form.Item>
           </Col>
         </Row>

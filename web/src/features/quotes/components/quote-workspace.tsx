@@ -107,6 +107,8 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
             <QuoteLineEditor
               quote={quote}
               defaultMarkupPercent={settings.data?.defaultMarkupPercent}
+              update={update}
+              otherFormOpen={termsOpen}
               actions={
                 <Button
                   onClick={() => {
@@ -124,7 +126,10 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
               saving={update.isPending}
               error={update.error}
               onSubmit={(changes) => update.mutate(changes, { onSuccess: () => setTermsOpen(false) })}
-              onClose={() => setTermsOpen(false)}
+              onClose={() => {
+                update.reset();
+                setTermsOpen(false);
+              }}
             />
           </>
         ) : (

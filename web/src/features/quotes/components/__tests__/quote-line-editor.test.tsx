@@ -7,7 +7,7 @@ import { createTestQueryClient, renderWithApp } from '@/test/render';
 import { setWindowWidth } from '@/test/viewport';
 import { useQuote } from '../../api/get-quote';
 import { quoteKeys } from '../../api/quote-keys';
-import { formToInput, toCents } from '../../quote-line-input';
+import { formToInput, hoursProblem, toCents } from '../../quote-line-input';
 import type { LaborOperation } from '../../types';
 import { QuoteLineEditor } from '../quote-line-editor';
 import { LINES, quoteStub, TOTALS } from './quote-stub';
@@ -122,6 +122,72 @@ describe('QuoteLineEditor', () => {
     const alert = await within(form).findByRole('alert');
     expect(alert).toHaveTextContent('The request has invalid fields.');
     expect(alert).toHaveTextContent(detail);
+  });
+
+  it('checks the hours before sending: 0 or more, to a tenth, said beside the field', async () => {
+    const patch = vi.spyOn(apiClient, 'patch').mockResolvedValue({ data: quoteStub() });
+    renderEditor();
+    await userEvent.click(screen.getByRole('button', { name: 'Edit Install pan and pickup' }));
+    const form = await screen.findByRole('form', { name: 'Edit labor line' });
+    const hours = within(form).getByRole('spinbutton', { name: 'Hours' });
+
+    fireEvent.input(hours, { target: { value: '-3' } });
+    fireEvent.change(hours, { target: { value: '-3' } });
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    expect(await within(form).findByText('Hours cannot be negative: enter 0 or more.')).toBeInTheDocument();
+
+    fireEvent.input(hours, { target: { value: '2.25' } });
+    fireEvent.change(hours, { target: { value: '2.25' } });
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    expect(await within(form).findByText('Hours are quoted to a tenth of an hour: enter 2.2 or 2.3.')).toBeInTheDocument();
+    expect(patch).not.toHaveBeenCalled();
+
+    fireEvent.input(hours, { target: { value: '2.3' } });
+    fireEvent.change(hours, { target: { value: '2.3' } });
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    await waitFor(() => expect(patch).toHaveBeenCalledTimes(1));
+    expect((patch.mock.calls[0][1] as PatchBody).lines[3]).toMatchObject({ key: 'line-install', hours: 2.3 });
+  });
+
+  it('says what is wrong with hours in words', () => {
+    // Common practice (no published source): labor is quoted to a tenth of an hour (6 minutes).
+    expect(hoursProblem(2.2)).toBeNull();
+    expect(hoursProblem(0)).toBeNull();
+    expect(hoursProblem(999)).toBeNull();
+    expect(hoursProblem(-3)).toBe('Hours cannot be negative: enter 0 or more.');
+    expect(hoursProblem(1000)).toBe('Hours must be at most 999 on one line.');
+    expect(hoursProblem(2.25)).toBe('Hours are quoted to a tenth of an hour: enter 2.2 or 2.3.');
+    // Binary floating point: 0.1 + 0.2 is 0.30000000000000004, still three tenths.
+    expect(hoursProblem(0.1 + 0.2)).toBeNull();
+  });
+
+  it("clears the API's refusal on Cancel and on a later success, so no old red banner stays on the quote", async () => {
+    const refusal = new AxiosError('400', 'ERR_BAD_REQUEST', undefined, undefined, {
+      status: 400,
+      statusText: 'Bad Request',
+      headers: {},
+      config: {} as never,
+      data: { statusCode: 400, error: 'Bad Request', code: 'validation_failed', message: 'Line 4 (Install pan and pickup): hours must be 0 or more', details: [] },
+    });
+    const patch = vi.spyOn(apiClient, 'patch').mockRejectedValueOnce(refusal).mockRejectedValueOnce(refusal).mockResolvedValue({ data: quoteStub() });
+    renderEditor();
+    // a refused edit, then Cancel: the quote shows no banner
+    await userEvent.click(screen.getByRole('button', { name: 'Edit Install pan and pickup' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    const form = await screen.findByRole('form', { name: 'Edit labor line' });
+    expect(await within(form).findByRole('alert')).toHaveTextContent('Line 4 (Install pan and pickup): hours must be 0 or more');
+    await userEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    await waitFor(() => expect(screen.queryByRole('form', { name: 'Edit labor line' })).not.toBeInTheDocument());
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
+
+    // a refused removal shows on the quote until a later save succeeds
+    await userEvent.click(screen.getByRole('button', { name: 'Remove Install pan and pickup' }));
+    await userEvent.click(await screen.findByRole('button', { name: 'Remove' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('hours must be 0 or more');
+    await userEvent.click(screen.getByRole('button', { name: 'Remove Install pan and pickup' }));
+    await userEvent.click((await screen.findAllByRole('button', { name: 'Remove' })).at(-1)!);
+    await waitFor(() => expect(patch).toHaveBeenCalledTimes(3));
+    await waitFor(() => expect(screen.queryByRole('alert')).not.toBeInTheDocument());
   });
 
   it('on a phone stacks each line: name, how many at what price, amount and its commands, with no sideways scrolling', async () => {
