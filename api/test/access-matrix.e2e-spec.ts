@@ -4,6 +4,7 @@ import { DEMO_SHOP_ID, DemoRole } from '@swapwright/seed-data';
 import * as bcrypt from 'bcryptjs';
 import { allowedRoles, DEMO_ROLES, ROUTE_POLICY } from './access/route-policy';
 import { bearer, Session, signIn, startSignedInApp, TestApp } from './helpers/test-app';
+import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { inParallel, RegisteredRoute, registeredRoutes, tableChecksums } from './helpers/routes';
 
 /**
@@ -41,6 +42,8 @@ describe('access matrix, generated from the router', () => {
     await inParallel(routes.filter((route) => route.method === 'get' && route.params.length === 0), PARALLEL, (route) =>
       t.http.get(route.path).set(...bearer(s.owner)).then(() => undefined),
     );
+    // The demo shop's catalog is the sample catalog: loaded now, the owner's probe of POST /api/catalog/sample adds nothing.
+    await seedCatalog(t.dataSource);
     checksumsBefore = await tableChecksums((sql) => t.dataSource.query(sql), tables);
   });
 

@@ -280,8 +280,8 @@ describe('fit reports', () => {
     const response = await t.http.post(`/api/projects/${OTHER_SHOP.projectId}/fit-reports`).set(...bearer(other));
     expect(response.status).toBe(422);
     expect(response.body.code).toBe('fit_check_not_ready');
-    expect(response.body.message).toMatch(/select an engine/);
-    expect(response.body.message).toMatch(/select a chassis/);
+    expect(response.body.message).toMatch(/choose an engine and a chassis under "What goes in" on the fit check page/);
+    expect(response.body.message).not.toMatch(/engineProfileId|chassisModelId/);
     expect(await countRows(t.dataSource, 'fit_reports')).toBe(before);
   });
 

@@ -107,6 +107,11 @@ export class CatalogService {
     return this.scoped(kind).findById(user, id);
   }
 
+  /** Whether the caller's shop has at least one record of this kind. */
+  async hasAny(kind: CatalogKind, user: Shop): Promise<boolean> {
+    return this.scoped(kind).repository.exists({ where: { shopId: user.shopId } });
+  }
+
   /** Which of the given ids exist in the caller's shop. */
   async existing(kind: CatalogKind, user: Shop, ids: string[]): Promise<Set<string>> {
     if (ids.length === 0) return new Set();

@@ -53,6 +53,29 @@ export class FitSpecBuilderService {
     @InjectRepository(ProjectFitSelection) private readonly selections: Repository<ProjectFitSelection>,
   ) {}
 
+  /**
+   * What to choose before the fit check can run, in words and with where: the engine and the chassis are picked under
+   * "What goes in" on the fit check page; a shop whose catalog has none is pointed at the catalog and its sample.
+   */
+  private async choosePartsFirst(user: Shop, project: Project, noEngine: boolean, noChassis: boolean): Promise<string> {
+    const what = noEngine && noChassis ? 'an engine and a chassis' : noEngine ? 'an engine' : 'a chassis';
+    const gone = [
+      noEngine && project.engineProfileId ? "the project's engine" : null,
+      noChassis && project.chassisModelId ? "the project's chassis" : null,
+    ].filter(Boolean);
+    let sentence = `choose ${what} under "What goes in" on the fit check page`;
+    if (gone.length > 0) sentence += ` (${gone.join(' and ')} ${gone.length === 1 ? 'is' : 'are'} no longer in the catalog)`;
+    const [engines, chassis] = await Promise.all([
+      noEngine ? this.catalog.hasAny('engines', user) : true,
+      noChassis ? this.catalog.hasAny('chassis', user) : true,
+    ]);
+    if (!engines || !chassis) {
+      const empty = !engines && !chassis ? 'engines or chassis' : !engines ? 'engines' : 'chassis';
+      sentence += `; your catalog has no ${empty} yet: add them on the Catalog page, or start from the sample catalog`;
+    }
+    return sentence;
+  }
+
   async build(user: Shop, project: Project, settingsOverrides: Partial<FitSettings> = {}): Promise<BuiltFitSpec> {
     const notes: string[] = [];
     const [engine, chassisRow, transmission] = await Promise.all([
@@ -60,22 +83,8 @@ export class FitSpecBuilderService {
       this.catalog.findRow('chassis', user, project.chassisModelId) as Promise<CatalogChassis | null>,
       this.catalog.findSpec<TransmissionSpec>('transmissions', user, project.transmissionId),
     ]);
+    if (!engine || !chassisRow) throw FitReportErrors.notReady([await this.choosePartsFirst(user, project, !engine, !chassisRow)]);
     const needed: string[] = [];
-    if (!engine) {
-      needed.push(
-        project.engineProfileId
-          ? "select an engine: the project's engine is no longer in the catalog"
-          : 'select an engine for the project (engineProfileId)',
-      );
-    }
-    if (!chassisRow) {
-      needed.push(
-        project.chassisModelId
-          ? "select a chassis: the project's chassis is no longer in the catalog"
-          : 'select a chassis for the project (chassisModelId)',
-      );
-    }
-    if (!engine || !chassisRow) throw FitReportErrors.notReady(needed);
     if (project.transmissionId && !transmission) notes.push("The project's transmission is no longer in the catalog; drivetrain checks are unknown.");
     if (!project.transmissionId) notes.push('No transmission selected; drivetrain checks are unknown.');
 

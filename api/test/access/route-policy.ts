@@ -95,6 +95,8 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'DELETE /api/projects/:id': SALES,
 
   ...catalogRoutes,
+  // Starting a shop's catalog from the sample: the owner's decision for the whole shop.
+  'POST /api/catalog/sample': OWNER,
 
   // Fit checks.
   'POST /api/projects/:id/fit-reports': BUILDERS,

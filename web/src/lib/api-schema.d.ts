@@ -341,6 +341,26 @@ export interface paths {
         patch: operations["ProjectsController_update"];
         trace?: never;
     };
+    "/api/catalog/sample": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Start the shop's catalog from Swapwright's sample catalog (invented engines, chassis and parts)
+         * @description Copies every sample record into your catalog in one transaction; records copied before stay as they are, so a second call adds nothing.
+         */
+        post: operations["copySampleCatalog"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/catalog/engines": {
         parameters: {
             query?: never;
@@ -2083,6 +2103,23 @@ export interface components {
             placement?: components["schemas"]["ProjectPlacementDto"] | null;
             /** @description Only the given goal fields change */
             goals?: components["schemas"]["UpdateProjectGoalsDto"];
+        };
+        SampleCatalogKindCountDto: {
+            /** @enum {string} */
+            kind: "engines" | "chassis" | "transmissions" | "oil-pans" | "oil-pickups" | "oil-pumps" | "controllers" | "mount-adapters" | "bellhousing-adapters" | "belts";
+            /** @description Records of this kind in the sample catalog */
+            inSample: number;
+            /** @description Of those, added to your catalog by this request */
+            added: number;
+        };
+        SampleCatalogResponseDto: {
+            /** @description Sample records added to your catalog by this request (0 when they were all there already) */
+            added: number;
+            /** @description Sample records your catalog already had, left as they are */
+            alreadyThere: number;
+            kinds: components["schemas"]["SampleCatalogKindCountDto"][];
+            /** @description What happened, in a sentence to show */
+            message: string;
         };
         EngineTopPointDto: {
             u: number;
@@ -5088,6 +5125,34 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ProjectResponseDto"];
+                };
+            };
+        };
+    };
+    copySampleCatalog: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SampleCatalogResponseDto"];
+                };
+            };
+            /** @description Only the shop owner starts the catalog from the sample */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
                 };
             };
         };

@@ -17,6 +17,7 @@ import { Role } from './role';
  * | PATCH /projects/:id                  | yes   | yes       | placement, status | -       | -          |
  * | GET /catalog/<kind>[/:id]            | yes   | yes       | yes               | yes     | -          |
  * | POST/PATCH/DELETE /catalog/<kind>    | yes   | yes       | -                 | yes     | -          |
+ * | POST /catalog/sample (start from it) | yes   | -         | -                 | -       | -          |
  * | GET /projects/:id/fit-selections     | yes   | yes       | yes               | yes     | -          |
  * | PUT /projects/:id/fit-selections     | yes   | yes       | yes               | -       | -          |
  * | POST /projects/:id/fit-reports       | yes   | yes       | yes               | -       | -          |

@@ -3,6 +3,7 @@ import { generateMeasurementTemplate } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In, IsNull } from 'typeorm';
 import { CATALOG_KINDS, CatalogKind } from '../../catalog/catalog-kinds';
+import { sampleCatalogRows } from '../../catalog/sample-catalog';
 import { ProjectFitSelection } from '../../fit-reports/project-fit-selection.entity';
 import { MeasurementTemplate } from '../../measurements/measurement-sheet.entity';
 import { Project } from '../../projects/project.entity';
@@ -11,37 +12,9 @@ export interface CatalogSeedResult {
   inserted: number;
 }
 
-type SeedRow = { spec: { id: string; name: string }; extras: Record<string, unknown> };
-
-function rowsOf(kind: CatalogKind): SeedRow[] {
-  const plain = (specs: Array<{ id: string; name: string }>) => specs.map((spec) => ({ spec, extras: {} }));
-  switch (kind) {
-    case 'engines':
-      return plain(DEMO_CATALOG.engines);
-    case 'oil-pans':
-      return plain(DEMO_CATALOG.oilPans);
-    case 'oil-pickups':
-      return plain(DEMO_CATALOG.oilPickups);
-    case 'oil-pumps':
-      return plain(DEMO_CATALOG.oilPumps);
-    case 'transmissions':
-      return plain(DEMO_CATALOG.transmissions);
-    case 'chassis':
-      return DEMO_CATALOG.chassis.map((item) => ({ spec: item.spec, extras: { defaultPlacement: item.defaultPlacement } }));
-    case 'controllers':
-      return plain(DEMO_CATALOG.controllers);
-    case 'mount-adapters':
-      return plain(DEMO_CATALOG.mountAdapters);
-    case 'bellhousing-adapters':
-      return plain(DEMO_CATALOG.bellhousingAdapters);
-    case 'belts':
-      return plain(DEMO_CATALOG.belts);
-  }
-}
-
 async function insertMissing(manager: EntityManager, kind: CatalogKind): Promise<number> {
   const definition = CATALOG_KINDS[kind];
-  const rows = rowsOf(kind);
+  const rows = sampleCatalogRows(kind);
   const present = await manager.find(definition.entity, { select: { id: true }, where: { id: In(rows.map((row) => row.spec.id)) } });
   const known = new Set(present.map((row) => row.id));
   const missing = rows.filter((row) => !known.has(row.spec.id));
