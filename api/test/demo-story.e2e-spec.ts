@@ -114,16 +114,33 @@ describe('the demo story: one job at each stage, through the API', () => {
     expect(done).toMatchObject({ state: 'finished', progress: { failed: 0, open: 0 } });
   });
 
-  it('the counter has set parts aside, ordered what was not on the shelf, and received it for the jobs in the bay', async () => {
+  it('the counter has set parts aside, ordered what was not on the shelf, received it for the jobs in the bay and issued it to them', async () => {
+    type Line = { id: string; sku: string; status: string; quantity: number; onHand: number; available: number };
     const linesOf = async (stage: string) => {
       const [plan] = await get(`/api/projects/${projectAt(stage)}/parts-plans`, s.counter);
-      return (await get(`/api/parts-plans/${plan.id}/counter-lines`, s.counter)) as Array<{ status: string }>;
+      return (await get(`/api/parts-plans/${plan.id}/counter-lines`, s.counter)) as Line[];
     };
+    // The job in the bay and the finished one have every part set aside or received for them, and issued to them.
+    const issued: Line[] = [];
     for (const stage of ['in-the-bay', 'done']) {
-      expect((await linesOf(stage)).every((line) => line.status === 'reserved' || line.status === 'received')).toBe(true);
+      const lines = await linesOf(stage);
+      expect(lines.length).toBeGreaterThan(0);
+      expect(lines.every((line) => line.status === 'issued')).toBe(true);
+      issued.push(...lines);
     }
     expect((await linesOf('deposit-paid')).map((line) => line.status)).toContain('ordered');
     expect((await linesOf('approved')).every((line) => line.status === 'open')).toBe(true);
+    const audit = (await get('/api/audit-events?kind=stock&pageSize=100')).items as Array<{ action: string; subjectId: string }>;
+    expect(audit.filter((event) => event.action === 'stock.issued').map((event) => event.subjectId).sort()).toEqual(issued.map((line) => line.id).sort());
+    // Issued parts are off the shelf: what each stock row holds set aside is exactly what the set-aside lines hold there.
+    const rows = (await t.dataSource.query(
+      `SELECT s.id, s.onHand, s.reserved, COALESCE(SUM(l.quantity), 0) AS held FROM part_stock s
+       LEFT JOIN counter_lines l ON l.stockId = s.id AND l.status IN ('reserved', 'received') GROUP BY s.id, s.onHand, s.reserved`,
+    )) as Array<{ onHand: number; reserved: number; held: number }>;
+    for (const row of rows) {
+      expect(Number(row.reserved)).toBe(Number(row.held));
+      expect(Number(row.onHand)).toBeGreaterThanOrEqual(Number(row.reserved));
+    }
   });
 
   it('a second run adds nothing', async () => {

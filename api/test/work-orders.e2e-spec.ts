@@ -43,6 +43,22 @@ describe('job stages and the work order, from the first fit check to the finishe
   const record = (body: object, session: Session = demo.fabricator) => t.http.post(`/api/work-orders/${workOrderId}/checks`).set(...bearer(session)).send(body);
   let stop: () => Promise<void>;
 
+  type Line = { id: string; sku: string; quantity: number; status: string; stockId: string | null; issuedAt: string | null; onHand: number; available: number; stock: Array<{ id: string; onHand: number; reserved: number }> };
+  const counterLines = async (): Promise<Line[]> => {
+    const [plan] = (await t.http.get(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.counter)).expect(200)).body;
+    return (await t.http.get(`/api/parts-plans/${plan.id}/counter-lines`).set(...bearer(demo.counter)).expect(200)).body;
+  };
+  const planId = async (): Promise<string> => (await t.http.get(`/api/projects/${RIDGEBACK}/parts-plans`).set(...bearer(demo.counter)).expect(200)).body[0].id;
+  const shelf = async (stockId: string) => {
+    const [row] = await t.dataSource.query('SELECT onHand, reserved FROM part_stock WHERE id = ?', [stockId]);
+    return { onHand: Number(row.onHand), reserved: Number(row.reserved) };
+  };
+  const counterPost = (path: string, session: Session = demo.counter) => t.http.post(`/api/${path}`).set(...bearer(session)).send({});
+  const stockEvents = async (action: string) =>
+    ((await t.http.get('/api/audit-events?kind=stock&pageSize=100').set(...bearer(demo.owner)).expect(200)).body.items as Array<{ action: string; subjectId: string; before: Record<string, number>; after: Record<string, number> }>).filter(
+      (event) => event.action === action,
+    );
+
   beforeAll(async () => {
     ({ t, fake, stop } = await startAppWithPayments());
     await resetData(t.dataSource);
@@ -90,6 +106,15 @@ describe('job stages and the work order, from the first fit check to the finishe
     // No work order before the deposit is paid.
     const none = await t.http.get(`/api/projects/${RIDGEBACK}/work-order`).set(...bearer(demo.fabricator)).expect(404);
     expect(none.body.message).toMatch(/deposit is paid/);
+  });
+
+  it('parts cannot be issued to a job before its deposit opens the work order', async () => {
+    const line = (await counterLines()).find((candidate) => candidate.available >= candidate.quantity)!;
+    await counterPost(`counter-lines/${line.id}/reserve`).expect(200);
+    const early = await counterPost(`counter-lines/${line.id}/issue`).expect(409);
+    expect(early.body).toMatchObject({ code: 'no_work_order', message: expect.stringMatching(/once its deposit has opened the work order/) });
+    expect((await counterPost(`parts-plans/${await planId()}/issue`)).status).toBe(409);
+    await counterPost(`counter-lines/${line.id}/release`).expect(200);
   });
 
   it('the settled deposit opens the work order exactly once, in build order, with torques in both units', async () => {
@@ -204,6 +229,60 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect((await t.http.delete(`/api/work-order-photos/${wrong.id}`).set(...bearer(demo.fabricator))).status).toBe(404);
   });
 
+  // Common practice (no published source): parts set aside for a job are issued to it when the bay takes them; issued
+  // parts are off the shelf (on hand and set aside both go down), so they can no longer be released and sold again.
+  it('the counter issues set-aside parts to the job in the bay: off the shelf, audited, never released after', async () => {
+    const lines = (await counterLines()).filter((line) => line.available >= line.quantity);
+    expect(lines.length).toBeGreaterThanOrEqual(3);
+    const [first, second, third] = lines;
+    for (const line of [first, second, third]) await counterPost(`counter-lines/${line.id}/reserve`).expect(200);
+    const reserved = (await counterLines()).find((line) => line.id === first.id)!;
+    const before = await shelf(reserved.stockId!);
+
+    const issued = await counterPost(`counter-lines/${first.id}/issue`).expect(200);
+    expect(issued.body).toMatchObject({ status: 'issued', stockId: reserved.stockId, issuedAt: expect.any(String) });
+    expect(await shelf(reserved.stockId!)).toEqual({ onHand: before.onHand - first.quantity, reserved: before.reserved - first.quantity });
+    expect(issued.body.onHand).toBe(before.onHand - first.quantity);
+    const [event] = (await stockEvents('stock.issued')).filter((candidate) => candidate.subjectId === first.id);
+    expect(event).toMatchObject({ before: { status: 'reserved', onHand: before.onHand, reserved: before.reserved }, after: { status: 'issued', onHand: before.onHand - first.quantity } });
+
+    // An issued line is never released (the parts are in the truck), nor issued twice.
+    const release = await counterPost(`counter-lines/${first.id}/release`).expect(409);
+    expect(release.body).toMatchObject({ code: 'counter_line_issued', message: expect.stringMatching(/was issued to the job: its parts left the shelf, so it cannot be released/) });
+    expect((await counterPost(`counter-lines/${first.id}/issue`)).status).toBe(409);
+    expect(await shelf(reserved.stockId!)).toEqual({ onHand: before.onHand - first.quantity, reserved: before.reserved - first.quantity });
+    // A line not set aside is not issued; the fabricator does not work the counter; another shop does not see the line.
+    const open = (await counterLines()).find((line) => line.status === 'open' || line.status === 'to-order' || line.status === 'ordered');
+    if (open) expect((await counterPost(`counter-lines/${open.id}/issue`)).body.code).toBe('counter_line_not_set_aside');
+    expect((await counterPost(`counter-lines/${second.id}/issue`, demo.fabricator)).status).toBe(403);
+    const other = await signIn(t.http, OTHER_SHOP.owner.email, OTHER_SHOP.owner.password);
+    expect((await counterPost(`counter-lines/${second.id}/issue`, other)).status).toBe(404);
+    expect((await counterPost(`counter-lines/${first.id}/return`, other)).status).toBe(404);
+    expect((await counterPost(`parts-plans/${await planId()}/issue`, other)).status).toBe(404);
+
+    // A part back unused goes on hand again through Return to shelf; the line is open and can be set aside again.
+    const returned = await counterPost(`counter-lines/${first.id}/return`).expect(200);
+    expect(returned.body).toMatchObject({ status: 'open', stockId: null, issuedAt: null });
+    expect(await shelf(reserved.stockId!)).toEqual({ onHand: before.onHand, reserved: before.reserved - first.quantity });
+    expect((await stockEvents('stock.returned')).filter((candidate) => candidate.subjectId === first.id)).toHaveLength(1);
+    expect((await counterPost(`counter-lines/${first.id}/return`)).body.code).toBe('counter_line_not_issued');
+    await counterPost(`counter-lines/${first.id}/reserve`).expect(200);
+
+    // Issue and release of the same line at once: exactly one wins, and the shelf agrees with it.
+    const secondStock = (await counterLines()).find((line) => line.id === second.id)!.stockId!;
+    const shelfBefore = await shelf(secondStock);
+    const raced = await Promise.all([counterPost(`counter-lines/${second.id}/issue`), counterPost(`counter-lines/${second.id}/release`, demo.owner)]);
+    expect(raced.map((response) => response.status).sort()).toEqual([200, 409]);
+    const won = raced[0].status === 200 ? 'issued' : 'open';
+    expect((await counterLines()).find((line) => line.id === second.id)!.status).toBe(won);
+    expect(await shelf(secondStock)).toEqual(
+      won === 'issued'
+        ? { onHand: shelfBefore.onHand - second.quantity, reserved: shelfBefore.reserved - second.quantity }
+        : { onHand: shelfBefore.onHand, reserved: shelfBefore.reserved - second.quantity },
+    );
+    if (won === 'open') await counterPost(`counter-lines/${second.id}/reserve`).expect(200);
+  });
+
   it('refuses a check recorded the wrong way, with a message that says what to send', async () => {
     expect((await record({ checkKey: 'oil-pan-pickup.screen-height', passed: true })).body.message).toMatch(/is measured: send value \(allowed 6–9 mm\)/);
     expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', value: 3 })).body.message).toMatch(/send passed true or false/);
@@ -219,9 +298,24 @@ describe('job stages and the work order, from the first fit check to the finishe
     for (const checkKey of ['oil-pan-pickup.pickup-tabs', 'oil-pan-pickup.rear-main-lip', 'cam-timing-set.cam-turns', 'cam-timing-set.cam-marks']) {
       await record({ checkKey, passed: true }).expect(200);
     }
+    const setAside = (await counterLines()).filter((line) => line.status === 'reserved' || line.status === 'received');
+    expect(setAside.length).toBeGreaterThan(0);
+    const shelvesBefore = await Promise.all(setAside.map((line) => shelf(line.stockId!)));
+    const issuedBefore = (await stockEvents('stock.issued')).length;
     const finished = await t.http.post(`/api/work-orders/${workOrderId}/finish`).set(...bearer(demo.fabricator)).expect(200);
     expect(finished.body).toMatchObject({ state: 'finished', progress: { total: 5, passed: 5, failed: 0, open: 0 } });
     expect(await stage()).toBe('done');
+    // Finishing issued whatever was still set aside for the job: off the shelf, one audit entry per line, nothing left to release.
+    const after = await counterLines();
+    for (const [index, line] of setAside.entries()) {
+      expect(after.find((candidate) => candidate.id === line.id)).toMatchObject({ status: 'issued', issuedAt: expect.any(String) });
+      expect(await shelf(line.stockId!)).toEqual({ onHand: shelvesBefore[index].onHand - line.quantity, reserved: shelvesBefore[index].reserved - line.quantity });
+    }
+    expect(after.some((line) => line.status === 'reserved' || line.status === 'received')).toBe(false);
+    expect((await stockEvents('stock.issued')).length).toBe(issuedBefore + setAside.length);
+    expect((await counterPost(`counter-lines/${setAside[0].id}/release`)).body.code).toBe('counter_line_issued');
+    // The job is done: nothing more is issued to it.
+    expect((await counterPost(`parts-plans/${await planId()}/issue`)).status).toBe(409);
     expect((await record({ checkKey: 'oil-pan-pickup.pickup-tabs', passed: false })).status).toBe(409);
     // A finished work order is signed off: its check photos stay as the record of the build.
     const [kept] = checkOf(finished.body, 'oil-pan-pickup.pickup-tabs').photos;

@@ -1,12 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { counterLineStateWords, type CounterStatus } from '@swapwright/shared';
+import { counterLineStateWords, SET_ASIDE_STATUSES, type CounterStatus } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { escapeFormula } from './csv-cells';
+import { WorkOrder } from '../work-orders/work-order.entity';
 import { CounterLine, PartStock } from './part.entity';
 import { PartsErrors } from './parts.errors';
 import { PartsPlansService } from './parts-plans.service';
@@ -83,6 +84,7 @@ export class CounterService {
   async release(user: AuthUser, id: string): Promise<CounterLineView> {
     await this.dataSource.transaction(async (manager) => {
       const line = await this.lockedLine(manager, user, id);
+      if (line.status === 'issued') throw PartsErrors.lineIssued(line.sku);
       if ((line.status !== 'reserved' && line.status !== 'received') || !line.stockId) throw PartsErrors.lineState(line.sku, line.status, 'released');
       const stock = await manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id', { id: line.stockId }).getOne();
       await this.audit.record(manager, {
@@ -142,6 +144,106 @@ export class CounterService {
       await manager.update(CounterLine, { id: line.id }, { status: 'received', stockId, updatedById: user.userId });
     });
     return this.view(user, id);
+  }
+
+  /**
+   * The fabricator takes the line's set-aside units to the bay: they leave the shelf (on hand and set aside both go
+   * down) and the line reads issued. The line, then its stock row, are locked as a reservation locks them.
+   */
+  async issue(user: AuthUser, id: string): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if (line.status === 'issued') throw PartsErrors.lineState(line.sku, 'already issued to the job', 'issued again');
+      if (!SET_ASIDE_STATUSES.includes(line.status)) throw PartsErrors.notSetAside(line.sku, line.status);
+      await this.assertJobInProgress(manager, user.shopId, line.projectId);
+      await this.issueLocked(manager, user, line);
+    });
+    return this.view(user, id);
+  }
+
+  /** Issues every set-aside line of a plan at once (the whole pick list goes to the bay); 409 when none is set aside. */
+  async issuePlan(user: AuthUser, planId: string): Promise<CounterLineView[]> {
+    const plan = await this.plans.get(user, planId);
+    await this.dataSource.transaction(async (manager) => {
+      const lines = await this.lockedSetAside(manager, user.shopId, { planId: plan.id });
+      if (lines.length === 0) throw PartsErrors.nothingToIssue();
+      await this.assertJobInProgress(manager, user.shopId, plan.projectId);
+      for (const line of lines) await this.issueLocked(manager, user, line);
+    });
+    return this.lines(user, planId);
+  }
+
+  /**
+   * The work order is finished: whatever is still set aside for its project is issued to it, inside the finishing
+   * transaction (`manager`), with an audit entry per line. Returns how many lines were issued.
+   */
+  async issueRestOfJob(manager: EntityManager, user: AuthUser, projectId: string): Promise<number> {
+    const lines = await this.lockedSetAside(manager, user.shopId, { projectId });
+    for (const line of lines) await this.issueLocked(manager, user, line);
+    return lines.length;
+  }
+
+  /** An issued part came back unused: it goes on hand again where it was taken from, and the line is open once more. */
+  async returnToShelf(user: AuthUser, id: string): Promise<CounterLineView> {
+    await this.dataSource.transaction(async (manager) => {
+      const line = await this.lockedLine(manager, user, id);
+      if (line.status !== 'issued') throw PartsErrors.notIssued(line.sku, line.status);
+      const stock = line.stockId ? await this.lockedStock(manager, user.shopId, line.stockId) : null;
+      if (!stock) throw PartsErrors.noStockLocation(line.sku);
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'stock',
+        action: 'stock.returned',
+        subjectId: line.id,
+        summary: `${line.quantity} × ${line.sku} returned to the shelf at ${stock.location}.`,
+        before: { status: line.status, location: stock.location, onHand: stock.onHand, reserved: stock.reserved },
+        after: { status: 'open', location: stock.location, onHand: stock.onHand + line.quantity, reserved: stock.reserved },
+      });
+      await manager.update(PartStock, { id: stock.id }, { onHand: stock.onHand + line.quantity });
+      await manager.update(CounterLine, { id: line.id }, { status: 'open', stockId: null, issuedAt: null, updatedById: user.userId });
+    });
+    return this.view(user, id);
+  }
+
+  /** Set-aside lines locked in id order (every issuer takes them in the same order), then each one's stock row. */
+  private async lockedSetAside(manager: EntityManager, shopId: string, where: { planId: string } | { projectId: string }): Promise<CounterLine[]> {
+    const [column, value] = 'planId' in where ? ['planId', where.planId] : ['projectId', where.projectId];
+    return manager
+      .getRepository(CounterLine)
+      .createQueryBuilder('l')
+      .setLock('pessimistic_write')
+      .where(`l.shopId = :shopId AND l.${column} = :value AND l.status IN (:...statuses)`, { shopId, value, statuses: SET_ASIDE_STATUSES })
+      .orderBy('l.id', 'ASC')
+      .getMany();
+  }
+
+  private lockedStock(manager: EntityManager, shopId: string, stockId: string): Promise<PartStock | null> {
+    return manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id AND s.shopId = :shopId', { id: stockId, shopId }).getOne();
+  }
+
+  /** Parts go to a job whose work order is open (ready or in the bay); before the deposit or after the finish, 409. */
+  private async assertJobInProgress(manager: EntityManager, shopId: string, projectId: string): Promise<void> {
+    const open = await manager.getRepository(WorkOrder).count({ where: { shopId, projectId, state: In(['ready', 'in-the-bay']) } });
+    if (open === 0) throw PartsErrors.noWorkOrder();
+  }
+
+  /** Takes a locked set-aside line's units off the shelf: on hand and set aside both drop by its quantity. */
+  private async issueLocked(manager: EntityManager, user: AuthUser, line: CounterLine): Promise<void> {
+    const stock = line.stockId ? await this.lockedStock(manager, user.shopId, line.stockId) : null;
+    const after = stock && { onHand: Math.max(0, stock.onHand - line.quantity), reserved: Math.max(0, stock.reserved - line.quantity) };
+    await this.audit.record(manager, {
+      shopId: user.shopId,
+      actor: user,
+      kind: 'stock',
+      action: 'stock.issued',
+      subjectId: line.id,
+      summary: `${line.quantity} × ${line.sku} issued to the job${stock ? ` from ${stock.location}` : ''}.`,
+      before: { status: line.status, ...(stock && { location: stock.location, onHand: stock.onHand, reserved: stock.reserved }) },
+      after: { status: 'issued', ...(stock && after && { location: stock.location, ...after }) },
+    });
+    if (stock && after) await manager.update(PartStock, { id: stock.id }, after);
+    await manager.update(CounterLine, { id: line.id }, { status: 'issued', issuedAt: new Date(), updatedById: user.userId });
   }
 
   async view(user: Pick<AuthUser, 'shopId'>, id: string): Promise<CounterLineView> {

@@ -212,6 +212,10 @@ export class CounterLine {
   @Column({ type: 'char', length: 36, nullable: true })
   stockId: string | null;
 
+  /** When the units were issued to the job (taken off the shelf); null while they are not. */
+  @Column({ type: 'datetime', precision: 3, nullable: true })
+  issuedAt: Date | null;
+
   @Column({ type: 'char', length: 36, nullable: true })
   updatedById: string | null;
 

@@ -31,6 +31,7 @@ export function mapCounterLine({ line, stock }: CounterLineView): CounterLineRes
     quantity: line.quantity,
     status: line.status,
     stockId: line.stockId,
+    issuedAt: line.issuedAt ? line.issuedAt.toISOString() : null,
     stock: mapped,
     onHand: mapped.reduce((sum, s) => sum + s.onHand, 0),
     available: mapped.reduce((sum, s) => sum + s.available, 0),

@@ -110,11 +110,44 @@ export class PartsPlansController {
   @Post('counter-lines/:id/release')
   @HttpCode(200)
   @Roles(...COUNTER_CLERKS)
-  @ApiOperation({ summary: 'Put reserved units back', operationId: 'releaseCounterLine' })
+  @ApiOperation({ summary: 'Put reserved units back (409 once they are issued to the job)', operationId: 'releaseCounterLine' })
   @ApiOkResponse({ type: CounterLineResponseDto })
   @ApiConflictResponse({ type: ErrorResponseDto })
   async release(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto> {
     return mapCounterLine(await this.counter.release(user, id));
+  }
+
+  @Post('parts-plans/:id/issue')
+  @HttpCode(200)
+  @Roles(...COUNTER_CLERKS)
+  @ApiOperation({ summary: "Issue every set-aside line of the plan to the job: the parts leave the shelf (409 when none is set aside)", operationId: 'issuePartsPlan' })
+  @ApiOkResponse({ type: [CounterLineResponseDto] })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
+  async issuePlan(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto[]> {
+    return (await this.counter.issuePlan(user, id)).map(mapCounterLine);
+  }
+
+  @Post('counter-lines/:id/issue')
+  @HttpCode(200)
+  @Roles(...COUNTER_CLERKS)
+  @ApiOperation({ summary: "Issue the line's set-aside units to the job: they leave the shelf and can no longer be released", operationId: 'issueCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
+  async issue(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto> {
+    return mapCounterLine(await this.counter.issue(user, id));
+  }
+
+  @Post('counter-lines/:id/return')
+  @HttpCode(200)
+  @Roles(...COUNTER_CLERKS)
+  @ApiOperation({ summary: 'An issued part came back unused: back on hand where it was taken from, the line open again', operationId: 'returnCounterLine' })
+  @ApiOkResponse({ type: CounterLineResponseDto })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
+  @ApiConflictResponse({ type: ErrorResponseDto })
+  async returnToShelf(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<CounterLineResponseDto> {
+    return mapCounterLine(await this.counter.returnToShelf(user, id));
   }
 
   @Post('counter-lines/:id/mark')

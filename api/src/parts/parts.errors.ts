@@ -29,5 +29,17 @@ export const PartsErrors = {
     ),
   lineState: (sku: string, status: string, action: string) =>
     new AppError(409, 'counter_line_state', `The ${sku} line is ${status}; it cannot be ${action} now. Refresh to see its current state.`),
+  lineIssued: (sku: string) =>
+    new AppError(
+      409,
+      'counter_line_issued',
+      `The ${sku} line was issued to the job: its parts left the shelf, so it cannot be released. If a part came back unused, return it to the shelf.`,
+    ),
+  notSetAside: (sku: string, status: string) =>
+    new AppError(409, 'counter_line_not_set_aside', `The ${sku} line is ${status}, not set aside: reserve it (or receive it) before issuing it to the job.`),
+  nothingToIssue: () => new AppError(409, 'nothing_to_issue', 'Nothing on this parts list is set aside: reserve or receive the parts before issuing them to the job.'),
+  notIssued: (sku: string, status: string) => new AppError(409, 'counter_line_not_issued', `The ${sku} line is ${status}, not issued: only parts issued to the job can come back to the shelf.`),
+  noWorkOrder: () =>
+    new AppError(409, 'no_work_order', "This job has no work order in progress: parts are issued to a job once its deposit has opened the work order, and not after it is finished."),
   noStockLocation: (sku: string) => new AppError(409, 'no_stock_location', `${sku} has no stock location yet; receive it into a location first.`),
 };

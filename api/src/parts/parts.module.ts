@@ -17,6 +17,6 @@ import { PartsService } from './parts.service';
   imports: [TypeOrmModule.forFeature(PARTS_ENTITIES), CatalogModule, ProjectsModule, FitReportsModule, ShopsModule],
   controllers: [PartsController, SuppliersController, PartsPlansController],
   providers: [PartsService, PartsImportService, PartsPlansService, CounterService, MipSolverService],
-  exports: [PartsPlansService, MipSolverService],
+  exports: [PartsPlansService, MipSolverService, CounterService],
 })
 export class PartsModule {}

@@ -15,6 +15,7 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { LaborOperation } from '../labor-operations/labor-operation.entity';
+import { CounterService } from '../parts/counter.service';
 import { Part } from '../parts/part.entity';
 import type { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
@@ -51,6 +52,7 @@ export class WorkOrdersService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly projects: ProjectsService,
     private readonly intake: PhotoIntakeService,
+    private readonly counter: CounterService,
   ) {
     this.orders = new TenantRepository(orders);
   }
@@ -244,7 +246,10 @@ export class WorkOrdersService {
     await this.intake.discard(photo.storageKey);
   }
 
-  /** The job is built: every check's newest recording must be a pass. The project moves to done with it. */
+  /**
+   * The job is built: every check's newest recording must be a pass. The project moves to done with it, and whatever
+   * the counter still has set aside for the job is issued to it (off the shelf), all in one transaction.
+   */
   async finish(user: AuthUser, id: string): Promise<WorkOrderView> {
     const view = await this.get(user, id);
     const { order } = view;
@@ -257,6 +262,7 @@ export class WorkOrdersService {
       const changed = await manager.update(WorkOrder, { id: order.id, shopId: user.shopId, state: 'in-the-bay' }, { state: 'finished', finishedAt: new Date(), finishedById: user.userId });
       if (!changed.affected) throw WorkOrderErrors.finished();
       await this.projects.advanceStatus(user.shopId, order.projectId, 'done', manager);
+      await this.counter.issueRestOfJob(manager, user, order.projectId);
     });
     return this.get(user, id);
   }

@@ -146,6 +146,9 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/parts-plans/:id/pick-list.csv': STAFF,
   'POST /api/counter-lines/:id/reserve': COUNTER_DESK,
   'POST /api/counter-lines/:id/release': COUNTER_DESK,
+  'POST /api/counter-lines/:id/issue': COUNTER_DESK,
+  'POST /api/counter-lines/:id/return': COUNTER_DESK,
+  'POST /api/parts-plans/:id/issue': COUNTER_DESK,
   'POST /api/counter-lines/:id/mark': COUNTER_DESK,
   'POST /api/counter-lines/:id/receive': COUNTER_DESK,
 

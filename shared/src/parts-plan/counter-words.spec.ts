@@ -1,5 +1,5 @@
 import { COUNTER_STATUSES } from '../types/value-lists';
-import { COUNTER_STATUS_LABELS, counterLineShortBy, counterLineStateWords } from './counter-words';
+import { COUNTER_STATUS_LABELS, counterLineSetAside, counterLineShortBy, counterLineStateWords } from './counter-words';
 
 describe('counter line words', () => {
   it('gives every counter state plain words, none of them the stored code', () => {
@@ -18,6 +18,17 @@ describe('counter line words', () => {
     expect(counterLineStateWords({ status: 'open', quantity: 2, available: -1 })).toBe('Short by 2');
     expect(counterLineShortBy({ status: 'reserved', quantity: 3, available: 0 })).toBe(0);
     expect(counterLineStateWords({ status: 'open', quantity: 2, available: 2 })).toBe('Not set aside');
+  });
+
+  // Common practice (no published source): parts set aside for a job stay on the shelf until issued to it; once issued
+  // they are off the shelf, so nothing is short and nothing is set aside any more.
+  it('an issued line reads issued to the job, is not set aside and is never short', () => {
+    expect(counterLineStateWords({ status: 'issued', quantity: 2, available: 0 })).toBe('Issued to the job');
+    expect(counterLineShortBy({ status: 'issued', quantity: 2, available: 0 })).toBe(0);
+    expect(counterLineSetAside({ status: 'issued' })).toBe(false);
+    expect(counterLineSetAside({ status: 'reserved' })).toBe(true);
+    expect(counterLineSetAside({ status: 'received' })).toBe(true);
+    expect(counterLineSetAside({ status: 'open' })).toBe(false);
   });
 
   it('shows an unknown code as it is rather than nothing', () => {

@@ -7,7 +7,16 @@ export const COUNTER_STATUS_LABELS: Record<CounterStatus, string> = {
   'to-order': 'To order',
   ordered: 'Ordered',
   received: 'Arrived, set aside',
+  issued: 'Issued to the job',
 };
+
+/** Lines whose units sit on the shelf for their job: the counter can issue them to the job or release them. */
+export const SET_ASIDE_STATUSES: readonly CounterStatus[] = ['reserved', 'received'];
+
+/** Whether the line's units are set aside on the shelf (not yet issued to the job). */
+export function counterLineSetAside(line: Pick<CounterLineState, 'status'>): boolean {
+  return (SET_ASIDE_STATUSES as readonly string[]).includes(line.status);
+}
 
 export interface CounterLineState {
   status: string;

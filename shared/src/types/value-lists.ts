@@ -93,8 +93,11 @@ export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 export const PROJECT_STATUSES = ['intake', 'measured', 'fit-checked', 'parts-planned', 'quote-sent', 'approved', 'deposit-paid', 'in-the-bay', 'done'] as const;
 export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
 
-/** A counter line's state: open (nothing done yet), reserved (units set aside from stock), to-order / ordered (none on the shelf), received (arrived and set aside). */
-export const COUNTER_STATUSES = ['open', 'reserved', 'to-order', 'ordered', 'received'] as const;
+/**
+ * A counter line's state: open (nothing done yet), reserved (units set aside from stock), to-order / ordered (none on
+ * the shelf), received (arrived and set aside), issued (taken off the shelf to the job: no longer on hand).
+ */
+export const COUNTER_STATUSES = ['open', 'reserved', 'to-order', 'ordered', 'received', 'issued'] as const;
 export type CounterStatus = (typeof COUNTER_STATUSES)[number];
 
 /** Hazards a labor operation carries; each prints its usual caution on the quote and the work order. */

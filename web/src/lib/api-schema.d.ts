@@ -1257,8 +1257,59 @@ export interface paths {
         };
         get?: never;
         put?: never;
-        /** Put reserved units back */
+        /** Put reserved units back (409 once they are issued to the job) */
         post: operations["releaseCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts-plans/{id}/issue": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Issue every set-aside line of the plan to the job: the parts leave the shelf (409 when none is set aside) */
+        post: operations["issuePartsPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/issue": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Issue the line's set-aside units to the job: they leave the shelf and can no longer be released */
+        post: operations["issueCounterLine"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/counter-lines/{id}/return": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** An issued part came back unused: back on hand where it was taken from, the line open again */
+        post: operations["returnCounterLine"];
         delete?: never;
         options?: never;
         head?: never;
@@ -3843,8 +3894,14 @@ export interface components {
             description: string;
             quantity: number;
             /** @enum {string} */
-            status: "open" | "reserved" | "to-order" | "ordered" | "received";
+            status: "open" | "reserved" | "to-order" | "ordered" | "received" | "issued";
+            /** @description The stock row the units are set aside at, or were issued from. */
             stockId: string | null;
+            /**
+             * Format: date-time
+             * @description When the units were issued to the job (taken off the shelf); null while they are not.
+             */
+            issuedAt: string | null;
             stock: components["schemas"]["StockResponseDto"][];
             onHand: number;
             available: number;
@@ -8596,6 +8653,117 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    issuePartsPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"][];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    issueCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
+                };
+            };
+        };
+    };
+    returnCounterLine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CounterLineResponseDto"];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
                 };
             };
             409: {

@@ -179,7 +179,9 @@ export class CounterLineResponseDto {
   @ApiProperty() description: string;
   @ApiProperty() quantity: number;
   @ApiProperty({ enum: COUNTER_STATUSES }) status: string;
-  @ApiProperty({ nullable: true, type: String }) stockId: string | null;
+  @ApiProperty({ nullable: true, type: String, description: 'The stock row the units are set aside at, or were issued from.' }) stockId: string | null;
+  @ApiProperty({ nullable: true, type: String, format: 'date-time', description: 'When the units were issued to the job (taken off the shelf); null while they are not.' })
+  issuedAt: string | null;
   @ApiProperty({ type: [StockResponseDto] }) stock: StockResponseDto[];
   @ApiProperty() onHand: number;
   @ApiProperty() available: number;

@@ -159,12 +159,16 @@ class Story {
     // The provider's test card; its signed webhook settles the deposit and the paid deposit opens the work order.
     await customer.post(`/quote-links/${link}/deposit`, { paymentMethod: 'pm_card_visa' });
     const workOrderId = await this.workOrderOf(projectId);
-    await this.counter(job, plan.id);
+    const fromShelf = await this.counter(job, plan.id);
     if (!reached(job, 'in-the-bay')) return;
 
     await fabricator.post(`/work-orders/${workOrderId}/start`);
+    if (job.stage === 'in-the-bay') await this.staff.counter.post(`/parts-plans/${plan.id}/issue`);
     await this.recordChecks(job, index, workOrderId);
-    if (job.stage === 'done') await fabricator.post(`/work-orders/${workOrderId}/finish`);
+    if (job.stage !== 'done') return;
+    // Finishing issues what is still set aside; the units it took off the shelf were reordered and have come back in.
+    await fabricator.post(`/work-orders/${workOrderId}/finish`);
+    await this.restock(fromShelf);
   }
 
   private async customerOf(job: DemoStoryJob): Promise<string> {
@@ -258,18 +262,35 @@ class Story {
     return (await estimator.get<WorkOrderResponseDto>(`/projects/${projectId}/work-order`)).id;
   }
 
-  /** The counter sets aside what is on the shelf and orders the rest; for a job already in the bay the order has come in. */
-  private async counter(job: DemoStoryJob, planId: string): Promise<void> {
+  /**
+   * The counter sets aside what is on the shelf and orders the rest; for a job already in the bay the order has come in.
+   * Returns the lines set aside from the shelf.
+   */
+  private async counter(job: DemoStoryJob, planId: string): Promise<CounterLineResponseDto[]> {
     const { counter } = this.staff;
     const lines = await counter.get<CounterLineResponseDto[]>(`/parts-plans/${planId}/counter-lines`);
+    const fromShelf: CounterLineResponseDto[] = [];
     for (const line of lines) {
       if (line.stock.length > 0 && line.available >= line.quantity) {
-        await counter.post(`/counter-lines/${line.id}/reserve`, {});
+        fromShelf.push(await counter.post<CounterLineResponseDto>(`/counter-lines/${line.id}/reserve`, {}));
         continue;
       }
       await counter.post(`/counter-lines/${line.id}/mark`, { status: 'to-order' });
       await counter.post(`/counter-lines/${line.id}/mark`, { status: 'ordered' });
       if (reached(job, 'in-the-bay')) await counter.post(`/counter-lines/${line.id}/receive`, { location: 'Main store', bin: 'RCV-1' });
+    }
+    return fromShelf;
+  }
+
+  /** The replacements of the shelf's units a finished job used are in: the counter counts them back on hand, bin by bin. */
+  private async restock(fromShelf: CounterLineResponseDto[]): Promise<void> {
+    const { counter } = this.staff;
+    for (const line of fromShelf) {
+      const row = line.stock.find((stock) => stock.id === line.stockId);
+      if (!line.partId || !row) continue;
+      const part = await counter.get<{ stock: Array<{ id: string; onHand: number }> }>(`/parts/${line.partId}`);
+      const now = part.stock.find((stock) => stock.id === row.id)?.onHand ?? 0;
+      await counter.put(`/parts/${line.partId}/stock`, { location: row.location, bin: row.bin, onHand: now + line.quantity });
     }
   }
 

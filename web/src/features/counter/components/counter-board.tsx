@@ -1,4 +1,4 @@
-import { counterLineShortBy, counterLineStateWords, type CounterStatus } from '@swapwright/shared';
+import { counterLineSetAside, counterLineShortBy, counterLineStateWords, type CounterStatus } from '@swapwright/shared';
 import { Button, Card, Empty, Flex, Grid, Select, Space, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { palette } from '@/config/theme';
@@ -6,12 +6,15 @@ import { formatMoneyCents } from '@/lib/units';
 import { downloadPickList } from '../api/download-pick-list';
 import { type CounterLine, useCounterLines } from '../api/get-counter-lines';
 import { useRecentPartsPlans } from '../api/get-recent-parts-plans';
+import { useIssueCounterLine } from '../api/issue-counter-line';
+import { useIssuePartsPlan } from '../api/issue-parts-plan';
 import { useMarkCounterLine } from '../api/mark-counter-line';
 import { useReceiveCounterLine } from '../api/receive-counter-line';
 import { useReleaseCounterLine } from '../api/release-counter-line';
 import { useReserveCounterLine } from '../api/reserve-counter-line';
+import { useReturnCounterLine } from '../api/return-counter-line';
 
-const STATUS_COLORS: Record<CounterStatus, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue' };
+const STATUS_COLORS: Record<CounterStatus, string> = { open: 'default', reserved: 'green', 'to-order': 'orange', ordered: 'gold', received: 'blue', issued: 'purple' };
 
 export type CounterBoardProps = {
   /** The shop's currency, for the plan's total. */
@@ -29,6 +32,10 @@ export function CounterBoard({ currency }: CounterBoardProps) {
   const release = useReleaseCounterLine();
   const mark = useMarkCounterLine();
   const receive = useReceiveCounterLine();
+  const issue = useIssueCounterLine();
+  const issueAll = useIssuePartsPlan();
+  const giveBack = useReturnCounterLine();
+  const setAsideCount = (lines.data ?? []).filter(counterLineSetAside).length;
   // Below antd's md (768 px) each line stacks (part, figures, bin, state, commands), so nothing hides past a phone's edge.
   const narrow = Grid.useBreakpoint().md === false;
 
@@ -64,9 +71,19 @@ export function CounterBoard({ currency }: CounterBoardProps) {
           Reserve
         </Button>
       )}
-      {(line.status === 'reserved' || line.status === 'received') && (
+      {counterLineSetAside(line) && (
+        <Button size="small" type="primary" loading={issue.isPending && issue.variables === line.id} onClick={() => issue.mutate(line.id)}>
+          Issue to job
+        </Button>
+      )}
+      {counterLineSetAside(line) && (
         <Button size="small" onClick={() => release.mutate(line.id)}>
           Release
+        </Button>
+      )}
+      {line.status === 'issued' && (
+        <Button size="small" loading={giveBack.isPending && giveBack.variables === line.id} onClick={() => giveBack.mutate(line.id)}>
+          Return to shelf
         </Button>
       )}
       {line.status === 'open' && (
@@ -85,6 +102,11 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         </Button>
       )}
       {whyNoReserve(line)}
+      {line.status === 'issued' && (
+        <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="issued-note">
+          Off the shelf{line.issuedAt ? ` since ${new Date(line.issuedAt).toLocaleDateString(undefined, { day: 'numeric', month: 'short' })}` : ''}. Came back unused? Return it to the shelf.
+        </Typography.Text>
+      )}
     </Space>
   );
 
@@ -108,6 +130,11 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         </Flex>
         {planId && (
           <Space className="no-print" wrap>
+            {setAsideCount > 0 && (
+              <Button type="primary" loading={issueAll.isPending} onClick={() => issueAll.mutate(planId)}>
+                Issue all set aside ({setAsideCount})
+              </Button>
+            )}
             <Button onClick={() => window.print()}>Print pick list</Button>
             <Button onClick={() => void downloadPickList(planId, plan ? `${plan.projectTitle} plan v${plan.version}` : undefined)}>Export CSV</Button>
           </Space>

@@ -24,8 +24,8 @@ const PLAN: PlanSummary = {
 const stock = (id: string, onHand: number, reserved: number) => ({ id, location: 'Main store', bin: 'A-01-2', onHand, reserved, available: onHand - reserved });
 
 const LINES: CounterLine[] = [
-  { id: 'line-1', planId: 'plan-1', partId: 'p1', sku: 'TR-4410', description: 'Rear-sump swap pan, invented rail', quantity: 1, status: 'open', stockId: null, stock: [stock('s1', 2, 0)], onHand: 2, available: 2 },
-  { id: 'line-2', planId: 'plan-1', partId: 'p2', sku: 'FP-190', description: 'In-tank injection pump, 190 L/h', quantity: 1, status: 'reserved', stockId: 's2', stock: [stock('s2', 1, 1)], onHand: 1, available: 0 },
+  { id: 'line-1', planId: 'plan-1', partId: 'p1', sku: 'TR-4410', description: 'Rear-sump swap pan, invented rail', quantity: 1, status: 'open', stockId: null, issuedAt: null, stock: [stock('s1', 2, 0)], onHand: 2, available: 2 },
+  { id: 'line-2', planId: 'plan-1', partId: 'p2', sku: 'FP-190', description: 'In-tank injection pump, 190 L/h', quantity: 1, status: 'reserved', stockId: 's2', issuedAt: null, stock: [stock('s2', 1, 1)], onHand: 1, available: 0 },
 ];
 
 function renderBoard() {
@@ -80,6 +80,39 @@ describe('CounterBoard', () => {
     const regulator = screen.getByTestId('counter-line-REG-58');
     expect(within(regulator).getByTestId('line-status')).toHaveTextContent('To order');
     expect(within(regulator).getByTestId('reserve-reason')).toHaveTextContent('None free to set aside.');
+  });
+
+  // Common practice (no published source): parts set aside for a job are issued to it when the bay takes them; once
+  // issued they are off the shelf, so the line offers a return to the shelf instead of a release.
+  it('a set-aside line can be issued to the job, all at once or line by line; an issued line reads so and offers Return to shelf, never Release', async () => {
+    setWindowWidth(1440);
+    const lines: CounterLine[] = [
+      ...LINES,
+      { ...LINES[1], id: 'line-5', sku: 'REG-58', description: 'Return-style regulator', status: 'issued', issuedAt: '2026-12-02T09:00:00.000Z', stock: [stock('s5', 2, 0)], onHand: 2, available: 2 },
+    ];
+    const post = vi.spyOn(apiClient, 'post').mockResolvedValue({ data: [] });
+    // the refetches after each command answer the same list
+    vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/parts-plans' ? [PLAN] : lines }));
+    const queryClient = createTestQueryClient();
+    queryClient.setQueryData(counterKeys.plans(), [PLAN]);
+    queryClient.setQueryData(counterKeys.lines('plan-1'), lines);
+    renderWithApp(<CounterBoard currency="USD" />, { queryClient });
+    const pump = within(screen.getByRole('table')).getByRole('row', { name: /FP-190/ });
+    expect(within(pump).getByTestId('line-status')).toHaveTextContent('Set aside');
+    expect(within(pump).getByRole('button', { name: 'Release' })).toBeInTheDocument();
+    const regulator = within(screen.getByRole('table')).getByRole('row', { name: /REG-58/ });
+    expect(within(regulator).getByTestId('line-status')).toHaveTextContent('Issued to the job');
+    expect(within(regulator).queryByRole('button', { name: 'Release' })).not.toBeInTheDocument();
+    expect(within(regulator).queryByRole('button', { name: 'Issue to job' })).not.toBeInTheDocument();
+    expect(within(regulator).getByTestId('issued-note')).toHaveTextContent(/^Off the shelf since .+\. Came back unused\? Return it to the shelf\.$/);
+
+    await userEvent.click(within(pump).getByRole('button', { name: 'Issue to job' }));
+    await waitFor(() => expect(post).toHaveBeenCalledWith('/counter-lines/line-2/issue', {}));
+    await userEvent.click(within(within(screen.getByRole('table')).getByRole('row', { name: /REG-58/ })).getByRole('button', { name: 'Return to shelf' }));
+    await waitFor(() => expect(post).toHaveBeenCalledWith('/counter-lines/line-5/return', {}));
+    // One line is set aside (the regulator is already issued, the pan not set aside): the header issues it with the rest.
+    await userEvent.click(screen.getByRole('button', { name: 'Issue all set aside (1)' }));
+    await waitFor(() => expect(post).toHaveBeenCalledWith('/parts-plans/plan-1/issue', {}));
   });
 
   it('names the exported pick list after the job', () => {
