@@ -94,7 +94,8 @@ export function ProjectDetailPage() {
         <Col xs={24} xl={12}>
           <ProjectSelectionsCard
             project={p}
-            names={partNames}
+            names={partNames.names}
+            nameStates={partNames.states}
             unnamedLabel={isCustomer ? 'Chosen by the shop' : undefined}
             fitPath={toProjectFit(p.id)}
             fitLinkLabel={canRunFitCheck(user.role) || canEdit ? 'Choose parts on the fit page' : 'Open the fit report'}

@@ -4,7 +4,8 @@ import type { CatalogItemOf, CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
 
 export async function getCatalogItem<K extends CatalogKind>(kind: K, id: string, signal?: AbortSignal): Promise<CatalogItemOf<K>> {
-  const { data } = await apiClient.get<CatalogItemOf<K>>(`/catalog/${kind}/${encodeURIComponent(id)}`, { signal });
+  // The page naming the item says itself when it is gone (404), so no global notice.
+  const { data } = await apiClient.get<CatalogItemOf<K>>(`/catalog/${kind}/${encodeURIComponent(id)}`, { signal, skipErrorNotification: true });
   return data;
 }
 

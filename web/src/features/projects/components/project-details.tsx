@@ -1,4 +1,4 @@
-import { Alert, Card, Descriptions, Typography } from 'antd';
+import { Alert, Card, Descriptions, Skeleton, Typography } from 'antd';
 import { Link } from 'react-router-dom';
 import { useUnits } from '@/hooks/use-units';
 import { formatMoneyCents, formatPower } from '@/lib/units';
@@ -31,10 +31,19 @@ export function ProjectGoalsCard({ project, currency = 'USD' }: ProjectGoalsCard
 
 export type ProjectPartNames = { chassis?: string; engine?: string; transmission?: string };
 
+/**
+ * Why a chosen part has no name to show yet: `loading` while it is fetched, `gone` when the record was removed from
+ * the catalog, `unavailable` when it could not be read just now. The card never shows the record's id instead.
+ */
+export type PartNameState = 'loading' | 'gone' | 'unavailable';
+export type ProjectPartNameStates = Partial<Record<keyof ProjectPartNames, PartNameState>>;
+
 export type ProjectSelectionsCardProps = {
   project: Project;
   /** Catalog names for the chosen ids, when the viewer may read them. */
   names?: ProjectPartNames;
+  /** For a chosen part without a name: why (loading, gone from the catalog, not readable now). */
+  nameStates?: ProjectPartNameStates;
   /** Shown for a chosen part whose name is not known (e.g. the viewer cannot read the catalog). */
   unnamedLabel?: string;
   /** Where the parts are chosen or the fit report is read. */
@@ -42,12 +51,20 @@ export type ProjectSelectionsCardProps = {
   fitLinkLabel?: string;
 };
 
-export function ProjectSelectionsCard({ project, names = {}, unnamedLabel, fitPath, fitLinkLabel = 'Choose parts on the fit page' }: ProjectSelectionsCardProps) {
-  const slot = (id: string | null, name: string | undefined, what: string) => {
+export function ProjectSelectionsCard({ project, names = {}, nameStates = {}, unnamedLabel, fitPath, fitLinkLabel = 'Choose parts on the fit page' }: ProjectSelectionsCardProps) {
+  const slot = (id: string | null, name: string | undefined, state: PartNameState | undefined, what: string) => {
     if (!id) return <Typography.Text type="secondary">No {what} chosen yet</Typography.Text>;
     if (name) return <Typography.Text>{name}</Typography.Text>;
-    if (unnamedLabel) return <Typography.Text type="secondary">{unnamedLabel}</Typography.Text>;
-    return <Typography.Text code>{id}</Typography.Text>;
+    if (state === 'loading' || (state === undefined && !unnamedLabel)) {
+      return (
+        <span role="status" aria-label={`Loading the ${what}'s name`} data-testid="part-name-loading">
+          <Skeleton.Input active size="small" style={{ width: 160, height: 18, minWidth: 0 }} />
+        </span>
+      );
+    }
+    if (state === 'gone') return <Typography.Text type="secondary">Not in the catalog any more</Typography.Text>;
+    if (state === 'unavailable') return <Typography.Text type="secondary">The name could not be loaded; reload the page to try again</Typography.Text>;
+    return <Typography.Text type="secondary">{unnamedLabel}</Typography.Text>;
   };
   return (
     <Card title="Chassis, engine and transmission" data-testid="project-selections">
@@ -55,9 +72,9 @@ export function ProjectSelectionsCard({ project, names = {}, unnamedLabel, fitPa
         column={1}
         items={[
           { key: 'vehicle', label: 'Vehicle as described', children: project.vehicleDescription || '—' },
-          { key: 'chassis', label: 'Chassis model', children: slot(project.chassisModelId, names.chassis, 'chassis model') },
-          { key: 'engine', label: 'Engine', children: slot(project.engineProfileId, names.engine, 'engine') },
-          { key: 'trans', label: 'Transmission', children: slot(project.transmissionId, names.transmission, 'transmission') },
+          { key: 'chassis', label: 'Chassis model', children: slot(project.chassisModelId, names.chassis, nameStates.chassis, 'chassis model') },
+          { key: 'engine', label: 'Engine', children: slot(project.engineProfileId, names.engine, nameStates.engine, 'engine') },
+          { key: 'trans', label: 'Transmission', children: slot(project.transmissionId, names.transmission, nameStates.transmission, 'transmission') },
         ]}
       />
       {fitPath && (
