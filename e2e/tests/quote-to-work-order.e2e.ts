@@ -239,10 +239,14 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       await expectVisible(thumb);
 
       // Common practice (no published source): the pickup screen sits 6–10 mm above the sump floor; 14 mm is outside.
+      // The demo shop works in inches: the range and the recording read in inches (Source: NIST SP 811, 1 in = 25.4 mm:
+      // 6 mm = 0.24 in, 9 mm = 0.35 in, 10 mm = 0.39 in, 14 mm = 0.55 in), and a figure typed in millimetres is read as such.
       const screen = page.getByTestId('check-oil-pan-pickup.screen-height');
-      await screen.getByRole('spinbutton', { name: /Value for/ }).fill('14');
+      await expectText(screen, /Allowed 0\.24–0\.(35|39) in/);
+      await screen.getByRole('textbox', { name: /Value for/ }).fill('14 mm');
+      await expectText(screen.getByTestId('check-reading'), /Reads as 0\.55 in \(14 mm\)/);
       await screen.getByRole('button', { name: 'Record value' }).click();
-      await expectText(screen.getByTestId('check-result'), /Failed · 14 mm/);
+      await expectText(screen.getByTestId('check-result'), /Failed · 0\.55 in/);
       await expectText(page.getByTestId('work-order-progress'), /1 failed/);
       await screen.scrollIntoViewIfNeeded();
       await expectFitsWidth(page);

@@ -88,7 +88,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
       { fastener: 'Bellhousing to block bolts', lbfFt: 35, sequence: 'Alternate sides, in two stages' },
       { fastener: 'Engine mount through-bolts', lbfFt: 55, sequence: null },
     ],
-    checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap with the engine on its mounts', unit: 'mm', min: 13, max: null, fitCheckId: 'envelope.sump-crossmember' }],
+    checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap with the engine on its mounts', unit: 'mm', min: 12.7, max: null, fitCheckId: 'envelope.sump-crossmember' }],
   },
   {
     id: id(6),
@@ -99,7 +99,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     matches: ['driveshaft', 'driveshaft-service'],
     hazards: ['support'],
     torqueSpecs: [{ fastener: 'U-joint strap bolts', lbfFt: 15, sequence: 'Alternate bolts' }],
-    checks: [{ key: 'slip-engagement', label: 'Slip-yoke engagement at ride height', unit: 'mm', min: 25, max: null }],
+    checks: [{ key: 'slip-engagement', label: 'Slip-yoke engagement at ride height', unit: 'mm', min: 25.4, max: null }],
   },
   {
     id: id(7),

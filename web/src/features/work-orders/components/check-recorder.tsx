@@ -1,8 +1,11 @@
+import { renderText, textParts } from '@swapwright/shared';
 import { App, Button, Flex, Input, InputNumber, Tag, Typography } from 'antd';
 import { useState } from 'react';
+import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
 import { useRecordCheck } from '../api/record-check';
+import { allowedRange, formatCheckLength, isLengthCheck, readCheckLength } from '../lib/check-units';
 import type { WorkCheck } from '../types';
 import { CheckPhotos } from './check-photos';
 
@@ -15,19 +18,28 @@ export interface CheckRecorderProps {
 
 const FIT_STATUS_WORDS = { ok: 'fits', tight: 'tight', fails: 'does not fit', unknown: 'not known' } as const;
 
-/** One check: what it asks, its allowed range, the newest recording with who and when, and the controls to record it. */
+/**
+ * One check: what it asks, its allowed range, the newest recording with who and when, and the controls to record it.
+ * A length check reads and takes lengths in the person's units (stored in mm): `1/2"`, `12.7 mm` or a bare number.
+ */
 export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderProps) {
   const record = useRecordCheck(workOrderId);
   const { message } = App.useApp();
+  const { system } = useUnits();
   const [value, setValue] = useState<number | null>(null);
+  const [lengthText, setLengthText] = useState('');
   const [note, setNote] = useState('');
   const latest = check.latest;
+  const isLength = isLengthCheck(check);
+  const reading = readCheckLength(lengthText, system);
+  const shownValue = (v: number) => (isLength ? formatCheckLength(v, system) : `${v} ${check.unit ?? ''}`.trimEnd());
   const send = (body: { value?: number; passed?: boolean }) =>
     record.mutate(
       { checkKey: check.key, ...body, ...(note.trim() && { note: note.trim() }) },
       {
         onSuccess: () => {
           setValue(null);
+          setLengthText('');
           setNote('');
         },
         onError: (error) => void message.error(getErrorMessage(error)),
@@ -40,7 +52,7 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
         {latest ? (
           <Tag color={latest.result === 'pass' ? 'success' : 'error'} data-testid="check-result">
             {latest.result === 'pass' ? 'Pass' : 'Failed'}
-            {latest.value !== null ? ` · ${latest.value} ${check.unit ?? ''}`.trimEnd() : ''}
+            {latest.value !== null ? ` · ${shownValue(latest.value)}` : ''}
           </Tag>
         ) : (
           <Tag data-testid="check-result">Open</Tag>
@@ -48,13 +60,13 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
       </Flex>
       {check.measured && (
         <Typography.Text type="secondary" style={{ display: 'block' }}>
-          Allowed {check.range}
+          Allowed {allowedRange(check, system)}
           {check.rangeFrom ? ` (from ${check.rangeFrom})` : ''}
         </Typography.Text>
       )}
       {check.fitFinding && (
         <Typography.Text type="secondary" style={{ display: 'block' }} data-testid="check-fit-finding">
-          Fit check, {check.fitFinding.title}: {FIT_STATUS_WORDS[check.fitFinding.status]}. {check.fitFinding.message}
+          Fit check, {check.fitFinding.title}: {FIT_STATUS_WORDS[check.fitFinding.status]}. {renderText(textParts(check.fitFinding.message), system)}
         </Typography.Text>
       )}
       {latest && (
@@ -66,7 +78,24 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
       )}
       {canRecord && (
         <div className="work-order-check__controls">
-          {check.measured ? (
+          {check.measured && isLength ? (
+            <>
+              <Input
+                aria-label={`Value for ${check.label}`}
+                placeholder={system === 'in' ? 'e.g. 1/2", 0.5 in or 13 mm' : 'e.g. 13 mm, 1/2" or 0.5 in'}
+                value={lengthText}
+                status={reading.ok === false ? 'error' : undefined}
+                onChange={(event) => setLengthText(event.target.value)}
+                onPressEnter={() => reading.ok === true && send({ value: reading.mm })}
+                inputMode="text"
+                autoComplete="off"
+                style={{ width: 190 }}
+              />
+              <Button type="primary" disabled={reading.ok !== true} loading={record.isPending} onClick={() => reading.ok === true && send({ value: reading.mm })}>
+                Record value
+              </Button>
+            </>
+          ) : check.measured ? (
             <>
               <InputNumber
                 aria-label={`Value for ${check.label}`}
@@ -93,6 +122,11 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
           )}
           <Input aria-label={`Note for ${check.label}`} placeholder="Note (optional)" value={note} onChange={(event) => setNote(event.target.value)} maxLength={500} style={{ flex: '1 1 160px' }} />
         </div>
+      )}
+      {canRecord && check.measured && isLength && reading.ok !== null && (
+        <Typography.Text type={reading.ok ? 'secondary' : 'danger'} role={reading.ok ? undefined : 'alert'} style={{ display: 'block', fontSize: 13 }} data-testid="check-reading">
+          {reading.ok ? `Reads as ${formatCheckLength(reading.mm, system)}${system === 'in' ? ` (${formatCheckLength(reading.mm, 'mm')})` : ''}` : reading.message}
+        </Typography.Text>
       )}
       <CheckPhotos workOrderId={workOrderId} check={check} canAdd={canRecord} />
     </div>
