@@ -71,6 +71,55 @@ describe('measurement sheets and photos', () => {
     await t.http.get(SHEET).set(...bearer(s.estimator)).expect(200);
   });
 
+  it('two saves typed over the same reading: the second is refused (409) with who saved what, nothing lost; saving over it is explicit', async () => {
+    const pinion = async () => {
+      const body = (await t.http.get(SHEET).set(...bearer(s.fabricator)).expect(200)).body;
+      return {
+        value: body.values.find((v: { pointId: string }) => v.pointId === 'pinion.height'),
+        history: body.history.filter((e: { pointId: string }) => e.pointId === 'pinion.height'),
+      };
+    };
+    const before = await pinion();
+    // four readings so far (first one, then three changes): version 4
+    expect(before.value).toMatchObject({ value: 370, version: 4 });
+
+    // Tab A and tab B both show version 4. A saves 17 1/2 in; B then saves 445 mm over what it saw.
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly, so 17 1/2 in = 444.5 mm.
+    const a = await setValue(s.fabricator, 'pinion.height', { value: '17 1/2"', seenVersion: 4 }).expect(200);
+    expect(a.body.values.find((v: { pointId: string }) => v.pointId === 'pinion.height')).toMatchObject({ value: 444.5, version: 5 });
+    const b = await setValue(s.owner, 'pinion.height', { value: '445 mm', seenVersion: 4 }).expect(409);
+    expect(b.body.code).toBe('measurement_reading_changed');
+    expect(b.body.message).toMatch(
+      new RegExp(`^${s.fabricator.user.name} recorded 17 1/2 in \\(444\\.5 mm\\) here at \\d\\d:\\d\\d UTC; yours \\(17 1/2 in \\(445\\.0 mm\\)\\) was not saved\\. Keep theirs, or save yours over it\\.$`),
+    );
+    const kept = await pinion();
+    expect(kept.value).toMatchObject({ value: 444.5, version: 5, measuredBy: s.fabricator.user.name });
+    expect(kept.history).toHaveLength(before.history.length + 1);
+
+    // Saving over it names the reading it replaces.
+    const over = await setValue(s.owner, 'pinion.height', { value: '445 mm', seenVersion: 5 }).expect(200);
+    expect(over.body.values.find((v: { pointId: string }) => v.pointId === 'pinion.height')).toMatchObject({ value: 445, version: 6 });
+    expect(over.body.history[0]).toMatchObject({ pointId: 'pinion.height', oldValue: 444.5, newValue: 445 });
+
+    // Two saves at the same moment from the same seen version: one is stored, the other refused.
+    const both = await Promise.all([
+      setValue(s.fabricator, 'pinion.height', { value: '371 mm', seenVersion: 6 }),
+      setValue(s.owner, 'pinion.height', { value: '372 mm', seenVersion: 6 }),
+    ]);
+    expect(both.map((r) => r.status).sort()).toEqual([200, 409]);
+    const after = await pinion();
+    expect(after.value.version).toBe(7);
+    expect(after.history).toHaveLength(before.history.length + 3);
+
+    // A version 0 says "there was no reading": refused where one exists; a point without a reading takes only 0.
+    expect((await setValue(s.fabricator, 'pinion.height', { value: '370', seenVersion: 0 }).expect(409)).body.code).toBe('measurement_reading_changed');
+    expect((await setValue(s.fabricator, 'front-crossmember.top', { value: '355', seenVersion: 2 }).expect(400)).body.message).toMatch(/has no reading yet; send 0/);
+    await setValue(s.fabricator, 'pinion.height', { value: '370', seenVersion: -1 }).expect(400);
+    await setValue(s.fabricator, 'pinion.height', { value: '370', seenVersion: 1.5 }).expect(400);
+    // back to 370 mm for the sign-off below
+    await setValue(s.fabricator, 'pinion.height', { value: '370', seenVersion: 7 }).expect(200);
+  });
+
   it('sign-off needs every required point; afterwards a change needs a reason, and both are logged', async () => {
     const incomplete = await t.http.post(`${SHEET}/sign-off`).set(...bearer(s.fabricator)).expect(409);
     expect(incomplete.body.code).toBe('measurement_sheet_incomplete');

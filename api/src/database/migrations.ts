@@ -3,6 +3,7 @@ import { CreateJobs1796269160589 } from './migrations/1796269160589-create-jobs'
 import { WorkOrderCheckPhotos1796270000000 } from './migrations/1796270000000-work-order-check-photos';
 import { JobSubjects1796280000000 } from './migrations/1796280000000-job-subjects';
 import { CounterLinesIssued1796290000000 } from './migrations/1796290000000-counter-lines-issued';
+import { MeasurementValueVersions1796300000000 } from './migrations/1796300000000-measurement-value-versions';
 import { CreateMeasurements1796240364406 } from './migrations/1796240364406-create-measurements';
 import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
@@ -53,4 +54,5 @@ export const MIGRATIONS = [
   WorkOrderCheckPhotos1796270000000,
   JobSubjects1796280000000,
   CounterLinesIssued1796290000000,
+  MeasurementValueVersions1796300000000,
 ];

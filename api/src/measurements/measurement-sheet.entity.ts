@@ -40,6 +40,8 @@ export class MeasurementValue {
   @Column({ type: 'char', length: 36 }) measuredById: string;
   @Column({ type: 'varchar', length: 120 }) measuredByName: string;
   @Column({ type: 'datetime', precision: 3 }) measuredAt: Date;
+  /** 1 for the point's first reading, one more on every change: a save names the version it replaces. */
+  @Column({ type: 'int', default: 1 }) version: number;
 }
 
 export type SheetEventKind = 'value' | 'sign-off';

@@ -38,6 +38,7 @@ export function mapMeasurementSheet(view: SheetView): MeasurementSheetResponseDt
       note: v.note,
       measuredBy: v.measuredByName,
       measuredAt: v.measuredAt.toISOString(),
+      version: v.version,
       deviation: inputs.get(v.pointId)?.deviation ?? null,
       flagged: inputs.get(v.pointId)?.flagged ?? false,
     })),

@@ -13,6 +13,12 @@ export const MeasurementErrors = {
     new AppError(409, 'measurement_reason_required', 'The sheet is signed off: say why the value changes (reason) to change it.'),
   incomplete: (labels: string[]) =>
     new AppError(409, 'measurement_sheet_incomplete', `Measure these points before signing off: ${labels.join('; ')}.`, labels),
+  readingChanged: (theirs: { by: string; reading: string; at: string }, yours: string) =>
+    new AppError(
+      409,
+      'measurement_reading_changed',
+      `${theirs.by} recorded ${theirs.reading} here at ${theirs.at}; yours (${yours}) was not saved. Keep theirs, or save yours over it.`,
+    ),
   alreadySignedOff: () => new AppError(409, 'measurement_sheet_signed_off', 'The sheet is already signed off.'),
   photoNotFound: () => new AppError(404, 'photo_not_found', 'That photo does not exist in your shop.'),
   photoNoFiles: () => new AppError(400, 'photo_missing', 'Attach at least one photo (field "photos").'),

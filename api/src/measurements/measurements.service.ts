@@ -3,7 +3,9 @@ import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   applyMeasurementSheet,
   DEFAULT_DEVIATION_LIMITS,
+  formatLength,
   generateMeasurementTemplate,
+  measurementUnit,
   missingPoints,
   parseMeasurementEntry,
   type AppliedMeasurements,
@@ -160,7 +162,10 @@ export class MeasurementsService {
     return { id: randomUUID(), shopId: user.shopId, sheetId: sheet.id, kind: 'value', pointId: null, oldValue: null, newValue: null, reason: null, byId: user.userId, byName: user.name, at: new Date(), ...fields };
   }
 
-  /** Records a reading; the old one goes to the history. After sign-off a reason is required and logged. */
+  /**
+   * Records a reading; the old one goes to the history. After sign-off a reason is required and logged. With
+   * `seenVersion`, a reading saved by someone else since the person looked is not replaced (409, nothing written).
+   */
   async setValue(user: AuthUser, projectId: string, pointId: string, input: SetMeasurementValueDto): Promise<void> {
     const project = await this.projects.get(user, projectId);
     const point = await this.pointOf(user, project, pointId);
@@ -176,7 +181,15 @@ export class MeasurementsService {
       const sheet = await this.sheetFor(manager, user, project.id);
       const reason = input.reason?.trim() || null;
       if (sheet.signedOffAt && !reason) throw MeasurementErrors.reasonRequired();
+      // the sheet row is locked, so no other save of this sheet runs between this read and the write below
       const old = await manager.findOne(MeasurementValue, { where: { sheetId: sheet.id, pointId } });
+      if (input.seenVersion !== undefined && input.seenVersion !== (old?.version ?? 0)) {
+        if (!old) throw MeasurementErrors.badValue(`seenVersion: "${point.label}" has no reading yet; send 0.`);
+        throw MeasurementErrors.readingChanged(
+          { by: old.measuredByName, reading: readingText(old.value, point), at: `${old.measuredAt.toISOString().slice(11, 16)} UTC` },
+          readingText(parsed.value, point),
+        );
+      }
       if (sheet.signedOffAt) {
         // a signed-off sheet changes only with a reason, and the change goes to the shop's audit log with it
         await this.audit.record(manager, {
@@ -201,6 +214,7 @@ export class MeasurementsService {
         measuredById: user.userId,
         measuredByName: user.name,
         measuredAt: new Date(),
+        version: (old?.version ?? 0) + 1,
       };
       await manager.save(MeasurementValue, row);
       await manager.insert(MeasurementSheetEvent, this.event(user, sheet, { pointId, oldValue: old?.value ?? null, newValue: parsed.value, reason }));
@@ -329,4 +343,10 @@ export class MeasurementsService {
     await this.photos.update({ id: photo.id }, { status: 'accepted' });
     return { ...photo, status: 'accepted' };
   }
+}
+
+/** A stored reading in a message: `17 1/2 in (444.5 mm)` for a length, `2.5°` for an angle. */
+function readingText(value: number, point: MeasurementPoint): string {
+  if (measurementUnit(point.kind) === 'deg') return `${Math.round(value * 100) / 100}°`;
+  return `${formatLength(value, { unit: 'in' })} (${formatLength(value, { unit: 'mm' })})`;
 }

@@ -3467,6 +3467,8 @@ export interface components {
             note: string | null;
             measuredBy: string;
             measuredAt: string;
+            /** @description 1 for the point's first reading, one more on every change; a save sends it back as `seenVersion`. */
+            version: number;
             /** @description Reading minus what the catalog predicts on this truck. */
             deviation: number | null;
             flagged: boolean;
@@ -3530,6 +3532,11 @@ export interface components {
             note?: string;
             /** @description Required once the sheet is signed off. */
             reason?: string;
+            /**
+             * @description The `version` of the point's reading the person typed over (0 when the point showed no reading). When someone saved another reading since, the save is refused with 409 `measurement_reading_changed` and nothing changes; to save over theirs, send again with their reading's version. Leave it out only to replace whatever reading is there.
+             * @example 0
+             */
+            seenVersion?: number;
         };
         MeasurementTemplateResponseDto: {
             chassisId: string;

@@ -27,6 +27,7 @@ export class MeasurementValueResponseDto {
   @ApiProperty({ type: String, nullable: true }) note: string | null;
   @ApiProperty() measuredBy: string;
   @ApiProperty() measuredAt: string;
+  @ApiProperty({ description: "1 for the point's first reading, one more on every change; a save sends it back as `seenVersion`." }) version: number;
   @ApiProperty({ type: Number, nullable: true, description: 'Reading minus what the catalog predicts on this truck.' }) deviation: number | null;
   @ApiProperty() flagged: boolean;
 }

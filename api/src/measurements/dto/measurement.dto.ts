@@ -5,6 +5,7 @@ import {
   IsArray,
   IsBoolean,
   IsIn,
+  IsInt,
   IsNumber,
   IsOptional,
   IsString,
@@ -49,6 +50,20 @@ export class SetMeasurementValueDto {
   @MinLength(3)
   @MaxLength(500)
   reason?: string;
+
+  @ApiPropertyOptional({
+    description:
+      "The `version` of the point's reading the person typed over (0 when the point showed no reading). When someone saved " +
+      'another reading since, the save is refused with 409 `measurement_reading_changed` and nothing changes; to save over ' +
+      "theirs, send again with their reading's version. Leave it out only to replace whatever reading is there.",
+    minimum: 0,
+    example: 0,
+  })
+  @IsOptional()
+  @IsInt({ message: 'seenVersion must be a whole number (the version of the reading you saw, 0 for none)' })
+  @Min(0, { message: 'seenVersion must be 0 or more' })
+  @Max(2_000_000_000, { message: 'seenVersion must be at most 2000000000' })
+  seenVersion?: number;
 }
 
 export class MeasurementPointDto {

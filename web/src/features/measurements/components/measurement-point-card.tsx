@@ -2,6 +2,7 @@ import { Alert, Button, Card, Collapse, Flex, Input, Tag, Typography } from 'ant
 import { useState } from 'react';
 import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
+import { isReadingChanged } from '../api/set-measurement-value';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
 import { formatDeviation, formatReading, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
 import type { SetMeasurementValueBody } from '../types';
@@ -57,32 +58,53 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
   const [askReason, setAskReason] = useState(false);
   const [saving, setSaving] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  /** The version of the reading shown when the person started typing (0: none): the one their save replaces. */
+  const [seenVersion, setSeenVersion] = useState<number | null>(null);
+  /** Someone saved another reading after the person started typing: the API's sentence and the reason given, if any. */
+  const [conflict, setConflict] = useState<{ message: string; seenVersion: number; reason?: string } | null>(null);
   const fmt = (v: number, unit: 'mm' | 'deg') => formatReading(v, unit, formatLength);
   const reading = readEntry(text, point, system);
   const toleranceReading = readEntry(tolerance, point, system);
   const unitHint = point.unit === 'deg' ? 'degrees, e.g. 2.5 or -1.5°' : system === 'in' ? 'e.g. 12 1/2", 12.5 in or 318 mm' : 'e.g. 318 mm, 12 1/2" or 12.5 in';
 
-  const save = async (reason?: string) => {
+  const clear = () => {
+    setText('');
+    setTolerance('');
+    setNote('');
+    setSeenVersion(null);
+    setConflict(null);
+  };
+
+  /** Saves over the reading the person saw, or (`overVersion`) over the one they chose to replace. */
+  const save = async (reason?: string, overVersion?: number) => {
     if (reading.ok !== true) return;
     if (toleranceReading.ok === false) return;
+    const replaces = overVersion ?? seenVersion ?? value?.version ?? 0;
     setSaving(true);
     setError(null);
     try {
       await onSave(
         point.id,
-        valueBody(reading, { toleranceMm: toleranceReading.ok ? Math.abs(toleranceReading.value) : null, note, reason }),
+        valueBody(reading, { toleranceMm: toleranceReading.ok ? Math.abs(toleranceReading.value) : null, note, reason, seenVersion: replaces }),
       );
-      setText('');
-      setTolerance('');
-      setNote('');
+      clear();
       setAskReason(false);
     } catch (e) {
-      setError(getErrorMessage(e));
+      if (isReadingChanged(e)) setConflict({ message: getErrorMessage(e), seenVersion: replaces, reason });
+      else setError(getErrorMessage(e));
       setAskReason(false);
     } finally {
       setSaving(false);
     }
   };
+
+  const onType = (next: string) => {
+    if (text.trim() === '' && next.trim() !== '') setSeenVersion(value?.version ?? 0);
+    if (next.trim() === '') setSeenVersion(null);
+    setText(next);
+  };
+  // their reading is on screen once the sheet is fetched again after the refusal
+  const theirsShown = conflict !== null && value !== null && value.version !== conflict.seenVersion;
 
   const status = row.flagged ? (
     <Tag color="red">Far from catalog</Tag>
@@ -161,7 +183,7 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               placeholder={value ? `New reading (${unitHint})` : unitHint}
               value={text}
               status={reading.ok === false ? 'error' : undefined}
-              onChange={(e) => setText(e.target.value)}
+              onChange={(e) => onType(e.target.value)}
               onPressEnter={() => (signedOff ? setAskReason(true) : void save())}
               style={{ fontSize: 20, height: 52 }}
             />
@@ -190,11 +212,48 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               </Typography.Text>
             )}
             {error && <Alert type="error" showIcon title="Not saved" description={error} />}
+            {conflict && (
+              <Alert
+                type="warning"
+                showIcon
+                data-testid="reading-conflict"
+                title="Someone else saved this reading meanwhile"
+                description={
+                  <Flex vertical gap={8}>
+                    <span>{conflict.message}</span>
+                    <dl style={{ margin: 0, display: 'grid', gridTemplateColumns: 'auto 1fr', gap: '2px 10px' }}>
+                      <dt>Theirs</dt>
+                      <dd style={{ margin: 0 }} data-testid="conflict-theirs">
+                        {theirsShown ? `${fmt(value.value, point.unit)} (${value.measuredBy}, ${formatDateTime(value.measuredAt)})` : 'Loading…'}
+                      </dd>
+                      <dt>Yours</dt>
+                      <dd style={{ margin: 0 }} data-testid="conflict-yours">
+                        {reading.ok === true ? fmt(reading.value, reading.unit) : '—'}
+                      </dd>
+                    </dl>
+                    <Flex gap={8} wrap>
+                      <Button onClick={clear} style={{ minHeight: 44 }}>
+                        Keep theirs
+                      </Button>
+                      <Button
+                        danger
+                        disabled={!theirsShown || reading.ok !== true}
+                        loading={saving}
+                        onClick={() => value && void save(conflict.reason, value.version)}
+                        style={{ minHeight: 44 }}
+                      >
+                        Save mine over it
+                      </Button>
+                    </Flex>
+                  </Flex>
+                }
+              />
+            )}
             <Button
               type="primary"
               size="large"
               block
-              disabled={reading.ok !== true || toleranceReading.ok === false}
+              disabled={reading.ok !== true || toleranceReading.ok === false || conflict !== null}
               loading={saving && !askReason}
               onClick={() => (signedOff ? setAskReason(true) : void save())}
               style={{ height: 48 }}

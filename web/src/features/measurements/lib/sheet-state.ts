@@ -116,14 +116,18 @@ export function reasonProblem(reason: string): string | null {
   return reason.trim().length >= MIN_REASON_LENGTH ? null : `Say in a few words why the reading changes (at least ${MIN_REASON_LENGTH} characters).`;
 }
 
-/** What the value route takes for a reading that `readEntry` accepted: the figure in mm (or degrees) as read. */
+/**
+ * What the value route takes for a reading that `readEntry` accepted: the figure in mm (or degrees) as read, and the
+ * version of the reading it was typed over (`seenVersion`, 0 for none), so it never replaces one the person did not see.
+ */
 export function valueBody(
   reading: { value: number },
-  extras: { toleranceMm?: number | null; note?: string; reason?: string } = {},
+  extras: { toleranceMm?: number | null; note?: string; reason?: string; seenVersion?: number } = {},
 ): SetMeasurementValueBody {
   return {
     value: String(reading.value),
     unit: 'mm',
+    ...(extras.seenVersion !== undefined && { seenVersion: extras.seenVersion }),
     ...(extras.toleranceMm !== undefined && extras.toleranceMm !== null && { tolerance: String(extras.toleranceMm) }),
     ...(extras.note?.trim() && { note: extras.note.trim() }),
     ...(extras.reason?.trim() && { reason: extras.reason.trim() }),

@@ -1,4 +1,6 @@
-import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { useState } from 'react';
+import { AxiosError, AxiosHeaders, type AxiosResponse } from 'axios';
 import { describe, expect, it, vi } from 'vitest';
 import { renderWithApp } from '@/test/render';
 import { sheetRows } from '../../lib/sheet-state';
@@ -46,7 +48,7 @@ describe('a point of the sheet', () => {
     // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly.
     expect(screen.getByTestId('reading-preview')).toHaveTextContent('317.5 mm');
     fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
-    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '317.5', unit: 'mm' }));
+    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '317.5', unit: 'mm', seenVersion: 0 }));
     expect(screen.getByRole('img', { name: 'Where to measure: Front crossmember: top' })).toBeInTheDocument();
     expect(screen.getByText('Missing')).toBeInTheDocument();
   });
@@ -82,7 +84,7 @@ describe('a point of the sheet', () => {
     expect(ok).toBeEnabled();
     fireEvent.click(ok);
     await waitFor(() =>
-      expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '335', unit: 'mm', reason: 'Crossmember sits lower than the book' }),
+      expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '335', unit: 'mm', seenVersion: 0, reason: 'Crossmember sits lower than the book' }),
     );
   });
 
@@ -91,6 +93,80 @@ describe('a point of the sheet', () => {
     renderCard({ row });
     expect(screen.getByText('Far from the catalog: take a second look')).toBeInTheDocument();
     expect(screen.getByTestId('measured-by')).toHaveTextContent('Measured by Sefa Lindqvist-Moro');
+  });
+});
+
+describe('a reading saved in another tab meanwhile', () => {
+  const faceRow = (version: number, value: number, measuredBy = 'Sefa Lindqvist-Moro') => {
+    const sheet = sheetStub();
+    return sheetRows({ ...sheet, values: sheet.values.map((v) => ({ ...v, version, value, measuredBy, deviation: value - 90 })) }).find(
+      (r) => r.point.id === 'front-crossmember.front-face',
+    )!;
+  };
+  const refused = (message: string) => {
+    const config = { headers: new AxiosHeaders() };
+    const response = { status: 409, statusText: 'Conflict', headers: {}, config, data: { statusCode: 409, error: 'Conflict', code: 'measurement_reading_changed', message, details: [], correlationId: 'c-1' } } as AxiosResponse;
+    return new AxiosError(message, 'ERR_BAD_REQUEST', config, undefined, response);
+  };
+  /** The card inside the app's providers; `showRow` plays the sheet coming back from the server. */
+  let showRow: (row: ReturnType<typeof faceRow>) => void = () => undefined;
+  function Harness({ first, onSave }: { first: ReturnType<typeof faceRow>; onSave: MeasurementPointCardProps['onSave'] }) {
+    const [row, setRow] = useState(first);
+    showRow = (next) => act(() => setRow(next));
+    return <MeasurementPointCard {...cardProps(row, onSave)} />;
+  }
+  const cardProps = (row: ReturnType<typeof faceRow>, onSave: MeasurementPointCardProps['onSave']): MeasurementPointCardProps => ({
+    row,
+    system: 'mm',
+    formatLength: (mm) => `${mm} mm`,
+    signedOff: false,
+    canEdit: true,
+    onSave,
+    uploads: [],
+    uploadedIds: new Set(),
+    photoActions: noPhotos,
+  });
+
+  it('sends the version it was typed over; refused, it shows theirs and mine and saves over theirs only when asked', async () => {
+    const message = 'Ana Quill recorded 17 1/2 in (444.5 mm) here at 14:05 UTC; yours (17 1/2 in (445.0 mm)) was not saved. Keep theirs, or save yours over it.';
+    const onSave = vi.fn<MeasurementPointCardProps['onSave']>().mockRejectedValueOnce(refused(message)).mockResolvedValue(undefined);
+    // the card shows version 2 (110 mm) when the person starts typing
+    renderWithApp(<Harness first={faceRow(2, 110)} onSave={onSave} />);
+    fireEvent.change(screen.getByRole('textbox', { name: 'Reading: Front crossmember: front face' }), { target: { value: '445 mm' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save new reading' }));
+    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.front-face', { value: '445', unit: 'mm', seenVersion: 2 }));
+
+    const conflict = await screen.findByTestId('reading-conflict');
+    expect(conflict).toHaveTextContent(message);
+    expect(screen.getByTestId('conflict-yours')).toHaveTextContent('445 mm');
+    // until their reading is fetched, there is nothing to choose between
+    expect(screen.getByTestId('conflict-theirs')).toHaveTextContent('Loading…');
+    expect(screen.getByRole('button', { name: 'Save mine over it' })).toBeDisabled();
+    expect(screen.getByRole('button', { name: 'Save new reading' })).toBeDisabled();
+
+    // the sheet comes back with theirs: 17 1/2 in, version 3 (Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly)
+    showRow(faceRow(3, 444.5, 'Ana Quill'));
+    expect(screen.getByTestId('point-value')).toHaveTextContent('444.5 mm');
+    expect(screen.getByTestId('conflict-theirs')).toHaveTextContent('444.5 mm (Ana Quill,');
+    expect(screen.getByTestId('conflict-yours')).toHaveTextContent('445 mm');
+    fireEvent.click(screen.getByRole('button', { name: 'Save mine over it' }));
+    await waitFor(() => expect(onSave).toHaveBeenLastCalledWith('front-crossmember.front-face', { value: '445', unit: 'mm', seenVersion: 3 }));
+    await waitFor(() => expect(screen.queryByTestId('reading-conflict')).not.toBeInTheDocument());
+    expect(onSave).toHaveBeenCalledTimes(2);
+  });
+
+  it('keeping theirs drops what was typed and saves nothing', async () => {
+    const onSave = vi.fn<MeasurementPointCardProps['onSave']>().mockRejectedValueOnce(refused('Ana Quill recorded 444.5 mm here.'));
+    renderWithApp(<Harness first={faceRow(2, 110)} onSave={onSave} />);
+    const box = screen.getByRole('textbox', { name: 'Reading: Front crossmember: front face' });
+    fireEvent.change(box, { target: { value: '445' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save new reading' }));
+    await screen.findByTestId('reading-conflict');
+    showRow(faceRow(3, 444.5, 'Ana Quill'));
+    fireEvent.click(screen.getByRole('button', { name: 'Keep theirs' }));
+    expect(screen.queryByTestId('reading-conflict')).not.toBeInTheDocument();
+    expect(box).toHaveValue('');
+    expect(onSave).toHaveBeenCalledTimes(1);
   });
 });
 

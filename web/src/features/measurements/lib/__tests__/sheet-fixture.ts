@@ -35,6 +35,7 @@ export function sheetStub(overrides: Partial<MeasurementSheet> = {}): Measuremen
         note: null,
         measuredBy: 'Sefa Lindqvist-Moro',
         measuredAt: '2026-11-30T08:14:00.000Z',
+        version: 2,
         deviation: 20,
         flagged: true,
       },

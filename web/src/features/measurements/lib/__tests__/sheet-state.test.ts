@@ -55,6 +55,9 @@ describe('reading what was typed at the truck', () => {
       note: 'yoke centre',
       reason: 're-measured',
     });
+    // the version typed over goes along, 0 included (a point that showed no reading)
+    expect(valueBody({ value: 317.5 }, { seenVersion: 0 })).toEqual({ value: '317.5', unit: 'mm', seenVersion: 0 });
+    expect(valueBody({ value: 317.5 }, { seenVersion: 4 })).toMatchObject({ seenVersion: 4 });
   });
 });
 
