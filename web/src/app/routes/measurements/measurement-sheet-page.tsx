@@ -37,6 +37,12 @@ export function MeasurementSheetPage() {
   const acceptPhoto = useAcceptMeasurementPhoto(projectId);
   const uploads = usePhotoUploads(projectId);
   const [filter, setFilter] = useState<SheetFilter | null>(null);
+  // points saved since the list was chosen stay in it (with their photo button) until the list changes or the page reloads
+  const [justSaved, setJustSaved] = useState<ReadonlySet<string>>(() => new Set());
+  const chooseFilter = (next: SheetFilter) => {
+    setFilter(next);
+    setJustSaved(new Set());
+  };
   const [editingTemplate, setEditingTemplate] = useState(false);
   const canEdit = canMeasure(user.role);
   const isCustomer = user.role === 'customer';
@@ -51,7 +57,7 @@ export function MeasurementSheetPage() {
   if (sheet.isError) return <ErrorState error={sheet.error} onRetry={() => void sheet.refetch()} />;
   const p = project.data;
   const s = shownSheet ?? sheet.data;
-  const shown = filterRows(rows, filter ?? initialFilter(counts));
+  const shown = filterRows(rows, filter ?? initialFilter(counts), justSaved);
 
   const photoActions: PhotoActions = {
     canAdd: canAddMeasurementPhotos(user.role),
@@ -113,7 +119,7 @@ export function MeasurementSheetPage() {
           <SheetOverview
             counts={counts}
             filter={filter ?? initialFilter(counts)}
-            onFilter={setFilter}
+            onFilter={chooseFilter}
             missingLabels={missingLabelsOf(s.points, s.missing)}
             signedOffAt={s.signedOffAt}
             signOff={signOffEvent(s)}
@@ -138,8 +144,11 @@ export function MeasurementSheetPage() {
             signedOff={s.signedOffAt !== null}
             canEdit={canEdit}
             onSave={async (pointId, body) => {
+              // the list in view is kept as it is, so the point does not vanish from Missing before its photo
+              if (filter === null) setFilter(initialFilter(counts));
               await setValue.mutateAsync({ pointId, body });
-              notifySuccess({ title: 'Reading saved', key: 'reading-saved' });
+              setJustSaved((saved) => new Set(saved).add(pointId));
+              notifySuccess({ title: 'Reading saved', description: 'Add its photo now if it needs one.', key: 'reading-saved' });
             }}
             uploads={uploadsFor(row.point.id)}
             uploadedIds={uploads.uploadedIds}

@@ -58,17 +58,24 @@ export function sheetCounts(rows: readonly SheetRow[]): SheetCounts {
   };
 }
 
-export function filterRows(rows: readonly SheetRow[], filter: SheetFilter): SheetRow[] {
-  switch (filter) {
-    case 'missing':
-      return rows.filter((r) => r.missing);
-    case 'flagged':
-      return rows.filter((r) => r.flagged);
-    case 'measured':
-      return rows.filter((r) => r.value !== null);
-    default:
-      return [...rows];
-  }
+/**
+ * The rows a list shows, in sheet order. `keep` holds points saved since the list was chosen: they stay where they
+ * were (a reading just saved leaves the Missing list only when the list is changed), so their photo can follow.
+ */
+export function filterRows(rows: readonly SheetRow[], filter: SheetFilter, keep: ReadonlySet<string> = new Set()): SheetRow[] {
+  const inList = (r: SheetRow): boolean => {
+    switch (filter) {
+      case 'missing':
+        return r.missing;
+      case 'flagged':
+        return r.flagged;
+      case 'measured':
+        return r.value !== null;
+      default:
+        return true;
+    }
+  };
+  return rows.filter((r) => inList(r) || keep.has(r.point.id));
 }
 
 /** The list to open on: what is still missing while anything is, else everything. */

@@ -75,6 +75,20 @@ describe('what is still missing', () => {
     expect(rows.find((r) => r.point.id === 'hood@400')).toMatchObject({ missing: false, value: null });
   });
 
+  it('a point saved under Missing stays listed, in its place, until the list is changed', () => {
+    // the crossmember top has just been measured: it is no longer missing, but the list keeps it for its photo
+    const sheet = sheetStub();
+    const saved = sheetRows({
+      ...sheet,
+      values: [...sheet.values, { ...sheet.values[0], pointId: 'front-crossmember.top', value: 355, version: 1, deviation: 0, flagged: false }],
+      missing: ['pinion.angle'],
+    });
+    expect(filterRows(saved, 'missing').map((r) => r.point.id)).toEqual(['pinion.angle']);
+    expect(filterRows(saved, 'missing', new Set(['front-crossmember.top'])).map((r) => r.point.id)).toEqual(['front-crossmember.top', 'pinion.angle']);
+    // kept in a list it already belongs to: listed once
+    expect(filterRows(saved, 'measured', new Set(['front-crossmember.top'])).map((r) => r.point.id)).toEqual(['front-crossmember.top', 'front-crossmember.front-face']);
+  });
+
   it('keeps each point its own history, newest first, and its own photos', () => {
     const photo: MeasurementPhoto = { id: 'ph-1', pointId: 'pinion.angle', contentType: 'image/jpeg', bytes: 10, widthPx: 4, heightPx: 3, status: 'accepted', uploadedBy: 'A', uploadedById: 'u', createdAt: '2026-11-30T08:00:00.000Z', url: '/x' };
     const loose: MeasurementPhoto = { ...photo, id: 'ph-2', pointId: null };
