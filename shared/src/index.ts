@@ -72,6 +72,7 @@ export * from './dates/calendar-date';
 export * from './quoting/exact-money';
 export * from './quoting/money-format';
 export * from './quoting/quote-money';
+export * from './quoting/quote-status-words';
 export * from './quoting/revision-diff';
 export * from './quoting/total-rows';
 export * from './parts-plan';

@@ -1,7 +1,7 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, formatMoney, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, formatMoney, QUOTE_STATUS_LABELS, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -76,13 +76,10 @@ export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, t
   return quote.status;
 }
 
-export const QUOTE_STATUS_WORDS: Record<QuoteStatus, string> = {
-  drafting: 'being written',
-  'awaiting-answer': 'awaiting the customer',
-  approved: 'approved',
-  'turned-down': 'turned down',
-  lapsed: 'lapsed',
-};
+/** A status inside a sentence: the app's label, lower-cased ("awaiting the customer"). */
+export const QUOTE_STATUS_WORDS = Object.fromEntries(
+  Object.entries(QUOTE_STATUS_LABELS).map(([status, label]) => [status, label.toLowerCase()]),
+) as Record<QuoteStatus, string>;
 
 @Injectable()
 export class QuotesService implements OnModuleInit {

@@ -36,7 +36,7 @@ export function ShopSettingsPage() {
       )}
       {user.role === 'owner' && (
         <div style={{ marginTop: 24 }}>
-          <AuditLogTable />
+          <AuditLogTable currency={shop.data && hasShopRates(shop.data) ? shop.data.currency : undefined} />
         </div>
       )}
     </>

@@ -7,20 +7,15 @@ import { EmptyState, ErrorState } from '@/components/query-state';
 import { formatDateTime } from '@/lib/dates';
 import { serverPagination } from '@/lib/table';
 import { useAuditEvents } from '../api/get-audit-events';
+import { changeWords } from '../audit-change-words';
 import type { AuditEvent, AuditEventQuery, AuditKind } from '../types';
 
 const KIND_LABELS: Record<AuditKind, string> = { money: 'Money', stock: 'Stock', 'sign-off': 'Sign-off', membership: 'Members', 'background-work': 'Background work' };
 const KIND_COLOURS: Record<AuditKind, string> = { money: 'gold', stock: 'blue', 'sign-off': 'green', membership: 'purple', 'background-work': 'cyan' };
 
-function figures(values: Record<string, unknown> | null): string {
-  if (!values) return '—';
-  return Object.entries(values)
-    .map(([key, value]) => `${key}: ${value === null ? '—' : String(value)}`)
-    .join(', ');
-}
 
 /** The shop's audit log: who changed money, stock, a sheet's sign-off or a membership, when, from what to what. */
-export function AuditLogTable() {
+export function AuditLogTable({ currency }: { currency?: string }) {
   const [query, setQuery] = useState<AuditEventQuery>({ page: 1, pageSize: 20 });
   const events = useAuditEvents(query);
 
@@ -34,7 +29,7 @@ export function AuditLogTable() {
       title: 'Before → after',
       render: (_value, event) => (
         <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-          {figures(event.before)} → {figures(event.after)}
+          {changeWords(event.action, event.before, currency)} → {changeWords(event.action, event.after, currency)}
         </Typography.Text>
       ),
     },

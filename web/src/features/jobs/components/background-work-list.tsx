@@ -8,6 +8,7 @@ import { notifySuccess } from '@/lib/notifier';
 import { serverPagination } from '@/lib/table';
 import { useJobs } from '../api/get-jobs';
 import { useRetryJob } from '../api/retry-job';
+import { jobSubjectWords } from '../job-subject-words';
 import { JOB_KIND_LABELS, JOB_STATE_COLOURS, JOB_STATE_LABELS, type Job, type JobState } from '../types';
 
 // Stopped first: the one state the owner acts on stays in view when a phone scrolls the strip.
@@ -145,8 +146,13 @@ export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListP
                 <Flex justify="space-between" align="flex-start" gap={12} wrap>
                   <div style={{ minWidth: 0, flex: '1 1 280px' }}>
                     <Typography.Text strong style={{ overflowWrap: 'anywhere' }}>
-                      {job.subject}
+                      {jobSubjectWords(job.subject).text}
                     </Typography.Text>
+                    {jobSubjectWords(job.subject).reference && (
+                      <Typography.Text type="secondary" style={{ display: 'block', fontSize: 12, overflowWrap: 'anywhere' }}>
+                        Provider reference {jobSubjectWords(job.subject).reference}
+                      </Typography.Text>
+                    )}
                     <Flex gap={6} wrap align="center" style={{ marginTop: 4 }}>
                       <Tag color={JOB_STATE_COLOURS[job.state]} style={{ marginInlineEnd: 0 }}>
                         {JOB_STATE_LABELS[job.state]}

@@ -1,18 +1,19 @@
+import { QUOTE_STATUS_LABELS } from '@swapwright/shared';
 import { Tag } from 'antd';
 import type { QuoteStatus } from '../types';
 
-const LOOK: Record<QuoteStatus, { color: string; label: string }> = {
-  drafting: { color: 'default', label: 'Being written' },
-  'awaiting-answer': { color: 'processing', label: 'Awaiting the customer' },
-  approved: { color: 'success', label: 'Approved' },
-  'turned-down': { color: 'error', label: 'Turned down' },
-  lapsed: { color: 'warning', label: 'Lapsed' },
+const COLOURS: Record<QuoteStatus, string> = {
+  drafting: 'default',
+  'awaiting-answer': 'processing',
+  approved: 'success',
+  'turned-down': 'error',
+  lapsed: 'warning',
 };
 
 /** `forCustomer`: the customer reads their own quote, so a quote waiting for them says so in their words. */
 export function QuoteStatusTag({ status, forCustomer = false }: { status: QuoteStatus; forCustomer?: boolean }) {
-  const label = forCustomer && status === 'awaiting-answer' ? 'Waiting for your answer' : LOOK[status].label;
-  return <Tag color={LOOK[status].color}>{label}</Tag>;
+  const label = forCustomer && status === 'awaiting-answer' ? 'Waiting for your answer' : QUOTE_STATUS_LABELS[status];
+  return <Tag color={COLOURS[status]}>{label}</Tag>;
 }
 
 export function DepositTag({ state }: { state: 'not-due' | 'due' | 'paid' }) {
