@@ -41,3 +41,6 @@ export const toWorkOrder = (workOrderId: string): string =>
 
 export const toSignIn = (next?: string): string =>
   next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;
+
+/** The catalog opened on one kind's tab (`/catalog?kind=engines`). */
+export const toCatalogKind = (kind: string): string => `${paths.catalog}?kind=${encodeURIComponent(kind)}`;

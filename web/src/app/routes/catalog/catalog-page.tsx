@@ -5,6 +5,7 @@ import { useListSearchParams } from '@/hooks/use-list-search-params';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { CatalogItemDrawer } from '@/features/catalog/components/catalog-item-drawer';
 import { CatalogTable } from '@/features/catalog/components/catalog-table';
+import { SampleCatalogOffer } from '@/features/catalog/components/sample-catalog-offer';
 import { kindDefinitions } from '@/features/catalog/lib/catalog-kinds';
 import { catalogKinds, type CatalogItem, type CatalogKind } from '@/features/catalog/types';
 import { canEditCatalog } from '../../navigation';
@@ -55,6 +56,7 @@ export function CatalogPage() {
                   canEdit={canEdit}
                   onEdit={(item) => setEditing({ item })}
                   onCreate={() => setEditing({ item: null })}
+                  emptyOffer={<SampleCatalogOffer canStart={user.role === 'owner'} title={`No ${kindDefinitions[kind].label.toLowerCase()} in your catalog yet`} />}
                 />
               ) : null,
           }))}

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
-import { toProjectDetail, toProjectMeasurements } from '@/config/paths';
+import { toCatalogKind, toProjectDetail, toProjectMeasurements } from '@/config/paths';
 import { useUnits } from '@/hooks/use-units';
 import { getErrorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notifier';
@@ -27,7 +27,8 @@ import { ReportInputSources } from '@/features/measurements/components/report-in
 import { useProject } from '@/features/projects/api/get-project';
 import { useUpdateProject } from '@/features/projects/api/update-project';
 import type { Project } from '@/features/projects/types';
-import { canEditProjects, canRunFitCheck, isFitReadOnly } from '../../navigation';
+import { SampleCatalogOffer } from '@/features/catalog/components/sample-catalog-offer';
+import { canEditCatalog, canEditProjects, canRunFitCheck, isFitReadOnly } from '../../navigation';
 import { engineSpecOf, pansOf, pickupsOf, selectionSlots, useFitCatalog, usePartNames } from './use-fit-selection-slots';
 import '@/features/fit-reports/components/fit-print.css';
 
@@ -90,11 +91,14 @@ export function ProjectFitPage() {
     engineSpec: engineSpecOf(catalog, p.engineProfileId) ?? spec?.engine,
     canPickSelections: canRun,
     canPickProjectParts: canEditProjects(user.role),
+    canAddToCatalog: canEditCatalog(user.role),
     savingSelections: edits.saving,
     savingProject: updateProject.isPending,
     onSelect: (patch) => void edits.save(patch),
     onProjectPart: (changes) => void updateProject.mutateAsync({ id: p.id, changes }),
   });
+  const catalogEmpty =
+    !readOnly && !catalog.engines.loading && !catalog.chassis.loading && (catalog.engines.options.length === 0 || catalog.chassis.options.length === 0);
   const chosenIds = [sel?.oilPanId, sel?.oilPickupId, sel?.oilPumpId, sel?.controllerId, sel?.accessoryDriveId, sel?.mountAdapterId].filter((x): x is string => Boolean(x));
 
   return (
@@ -127,7 +131,16 @@ export function ProjectFitPage() {
             {selections.isError ? (
               <ErrorState error={selections.error} onRetry={() => void selections.refetch()} />
             ) : (
-              <SelectionsPanel slots={slots} saving={edits.saving || updateProject.isPending} />
+              <Flex vertical gap={12}>
+                {catalogEmpty && (
+                  <SampleCatalogOffer
+                    canStart={user.role === 'owner'}
+                    title="Nothing to choose from yet"
+                    extra={<Link to={toCatalogKind('engines')}>Or add your own engine and chassis in the catalog</Link>}
+                  />
+                )}
+                <SelectionsPanel slots={slots} saving={edits.saving || updateProject.isPending} />
+              </Flex>
             )}
           </Card>
         )}

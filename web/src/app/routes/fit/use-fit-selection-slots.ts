@@ -1,5 +1,7 @@
 import type { EngineSpec, FitSpec, OilPanSpec, OilPickupSpec } from '@swapwright/shared';
-import { useMemo } from 'react';
+import { createElement, useMemo } from 'react';
+import { Link } from 'react-router-dom';
+import { toCatalogKind } from '@/config/paths';
 import { useCatalogItems } from '@/features/catalog/api/get-catalog-items';
 import type { CatalogItem, CatalogKind } from '@/features/catalog/types';
 import type { SelectionOption, SelectionSlot } from '@/features/fit-reports/components/selections-panel';
@@ -62,6 +64,8 @@ export type SelectionSlotsOptions = {
   engineSpec: EngineSpec | undefined;
   canPickSelections: boolean;
   canPickProjectParts: boolean;
+  /** Whether the person keeps the catalog (empty pickers then link to adding that kind). */
+  canAddToCatalog: boolean;
   savingSelections: boolean;
   savingProject: boolean;
   onSelect: (patch: FitSelectionsInput) => void;
@@ -70,10 +74,17 @@ export type SelectionSlotsOptions = {
 
 type ProjectPartKey = 'engineProfileId' | 'chassisModelId' | 'transmissionId';
 
+/** Where an empty picker sends a person who may add to the catalog: that kind's tab of the catalog. */
+function addInCatalog(kind: CatalogKind, words: string, canAdd: boolean) {
+  if (!canAdd) return `None in the catalog yet: ask the owner, an estimator or the parts counter to add ${words}.`;
+  return createElement(Link, { to: toCatalogKind(kind) }, `Add ${words} in the catalog`);
+}
+
 /** The slots of "What goes in": engine, chassis and transmission on the project, the rest in the fit selections. */
 export function selectionSlots(o: SelectionSlotsOptions): SelectionSlot[] {
   const { catalog, selections: sel } = o;
-  const slot = (key: FitSelectionKey, label: string, options: SelectionOption[], loading: boolean): SelectionSlot => ({
+  const empty = (kind: CatalogKind, words: string) => addInCatalog(kind, words, o.canAddToCatalog);
+  const slot = (key: FitSelectionKey, label: string, options: SelectionOption[], loading: boolean, emptyHelp?: SelectionSlot['emptyHelp']): SelectionSlot => ({
     key,
     label,
     value: sel?.[key] ?? null,
@@ -81,8 +92,9 @@ export function selectionSlots(o: SelectionSlotsOptions): SelectionSlot[] {
     loading: loading || o.selectionsLoading,
     disabled: !o.canPickSelections || o.savingSelections,
     onChange: (v) => o.onSelect({ [key]: v }),
+    emptyHelp,
   });
-  const projectSlot = (key: ProjectPartKey, label: string, options: SelectionOption[], loading: boolean): SelectionSlot => ({
+  const projectSlot = (key: ProjectPartKey, label: string, options: SelectionOption[], loading: boolean, emptyHelp: SelectionSlot['emptyHelp']): SelectionSlot => ({
     key,
     label,
     value: o.project[key],
@@ -90,16 +102,23 @@ export function selectionSlots(o: SelectionSlotsOptions): SelectionSlot[] {
     loading,
     disabled: !o.canPickProjectParts || o.savingProject,
     onChange: (v) => o.onProjectPart({ [key]: v }),
+    emptyHelp,
   });
   return [
-    projectSlot('engineProfileId', 'Engine', catalog.engines.options, catalog.engines.loading),
-    projectSlot('chassisModelId', 'Chassis', catalog.chassis.options, catalog.chassis.loading),
-    projectSlot('transmissionId', 'Transmission', catalog.transmissions.options, catalog.transmissions.loading),
-    slot('oilPanId', 'Oil pan', catalog.pans.options, catalog.pans.loading),
-    slot('oilPickupId', 'Oil pickup', catalog.pickups.options, catalog.pickups.loading),
-    slot('oilPumpId', 'Oil pump', catalog.pumps.options, catalog.pumps.loading),
-    slot('controllerId', 'Engine controller', catalog.controllers.options, catalog.controllers.loading),
-    slot('accessoryDriveId', 'Accessory drive', (o.engineSpec?.accessoryDrives ?? []).map((d) => ({ value: d.id, label: d.name })), false),
-    slot('mountAdapterId', 'Mount adapter', catalog.mountAdapters.options, catalog.mountAdapters.loading),
+    projectSlot('engineProfileId', 'Engine', catalog.engines.options, catalog.engines.loading, empty('engines', 'an engine')),
+    projectSlot('chassisModelId', 'Chassis', catalog.chassis.options, catalog.chassis.loading, empty('chassis', 'a chassis')),
+    projectSlot('transmissionId', 'Transmission', catalog.transmissions.options, catalog.transmissions.loading, empty('transmissions', 'a transmission')),
+    slot('oilPanId', 'Oil pan', catalog.pans.options, catalog.pans.loading, empty('oil-pans', 'an oil pan')),
+    slot('oilPickupId', 'Oil pickup', catalog.pickups.options, catalog.pickups.loading, empty('oil-pickups', 'an oil pickup')),
+    slot('oilPumpId', 'Oil pump', catalog.pumps.options, catalog.pumps.loading, empty('oil-pumps', 'an oil pump')),
+    slot('controllerId', 'Engine controller', catalog.controllers.options, catalog.controllers.loading, empty('controllers', 'an engine controller')),
+    slot(
+      'accessoryDriveId',
+      'Accessory drive',
+      (o.engineSpec?.accessoryDrives ?? []).map((d) => ({ value: d.id, label: d.name })),
+      false,
+      o.engineSpec ? addInCatalog('engines', "an accessory drive to the engine's entry", o.canAddToCatalog) : 'Choose an engine first: its accessory drives are offered here.',
+    ),
+    slot('mountAdapterId', 'Mount adapter', catalog.mountAdapters.options, catalog.mountAdapters.loading, empty('mount-adapters', 'a mount adapter')),
   ];
 }

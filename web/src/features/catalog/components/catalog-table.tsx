@@ -1,5 +1,6 @@
 import { Button, Flex, Input, Popconfirm, Space, Table, Typography } from 'antd';
 import type { ColumnsType } from 'antd/es/table';
+import type { ReactNode } from 'react';
 import { ErrorState } from '@/components/query-state';
 import { useUnits } from '@/hooks/use-units';
 import { formatDate, serverPagination } from '@/lib/table';
@@ -15,10 +16,12 @@ export type CatalogTableProps = {
   canEdit?: boolean;
   onEdit?: (item: CatalogItem) => void;
   onCreate?: () => void;
+  /** Shown above the table while this kind has no entries at all (no search): the way to fill an empty catalog. */
+  emptyOffer?: ReactNode;
 };
 
 /** One kind of the catalog: paginated and searched on the server. */
-export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEdit, onCreate }: CatalogTableProps) {
+export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEdit, onCreate, emptyOffer }: CatalogTableProps) {
   const def = kindDefinitions[kind];
   const items = useCatalogItems(kind, query);
   const remove = useDeleteCatalogItem();
@@ -84,8 +87,10 @@ export function CatalogTable({ kind, query, onQueryChange, canEdit = false, onEd
 
   if (items.isError) return <ErrorState error={items.error} onRetry={() => void items.refetch()} />;
 
+  const empty = items.data?.total === 0 && !query.search;
   return (
     <Flex vertical gap={12}>
+      {empty && emptyOffer}
       <Flex justify="space-between" gap={12} wrap>
         <Input.Search
           allowClear

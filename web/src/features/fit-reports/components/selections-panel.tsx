@@ -1,4 +1,5 @@
 import { Col, Row, Select, Typography } from 'antd';
+import type { ReactNode } from 'react';
 
 export type SelectionOption = { value: string; label: string };
 
@@ -13,6 +14,8 @@ export type SelectionSlot = {
   onChange: (value: string | null) => void;
   onSearch?: (text: string) => void;
   help?: string;
+  /** Shown under the picker when it has nothing to offer (where to add that kind). */
+  emptyHelp?: ReactNode;
 };
 
 export type SelectionsPanelProps = { slots: SelectionSlot[]; saving?: boolean };
@@ -41,8 +44,14 @@ export function SelectionsPanel({ slots, saving }: SelectionsPanelProps) {
               allowClear
               showSearch={slot.onSearch ? { filterOption: false, onSearch: slot.onSearch } : { optionFilterProp: 'label' }}
               placeholder={slot.placeholder ?? 'None chosen'}
+              notFoundContent={slot.options.length === 0 ? `Nothing to choose yet` : undefined}
               onChange={(v: string | undefined) => slot.onChange(v ?? null)}
             />
+            {slot.emptyHelp && !slot.loading && slot.options.length === 0 && (
+              <Typography.Text type="secondary" style={{ fontSize: 12, display: 'block' }} data-testid={`empty-${slot.key}`}>
+                {slot.emptyHelp}
+              </Typography.Text>
+            )}
             {slot.help && (
               <Typography.Text type="secondary" style={{ fontSize: 12 }}>
                 {slot.help}

@@ -1,4 +1,5 @@
 import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { authKeys } from '@/features/auth/api/auth-keys';
 import { apiClient } from '@/lib/api-client';
@@ -7,7 +8,7 @@ import { createTestQueryClient, renderWithApp } from '@/test/render';
 import { setWindowWidth } from '@/test/viewport';
 import { CatalogPage } from '../catalog-page';
 
-function renderAs(role: 'fabricator' | 'estimator') {
+function renderAs(role: 'fabricator' | 'estimator' | 'owner') {
   vi.spyOn(apiClient, 'get').mockResolvedValue({ data: pageOf([]) });
   const queryClient = createTestQueryClient();
   queryClient.setQueryData(authKeys.me(), userStub(role));
@@ -45,5 +46,26 @@ describe('CatalogPage', () => {
     const phone = renderAs('estimator');
     await within(phone.container).findByRole('tab', { name: 'Engines' });
     expect(phone.container.querySelector('.ant-tabs')).toHaveClass('ant-tabs-top');
+  });
+
+  it("offers the owner of an empty catalog the sample catalog in one press, and says what it added", async () => {
+    setWindowWidth(390);
+    const post = vi.spyOn(apiClient, 'post').mockResolvedValue({
+      data: { added: 33, alreadyThere: 0, kinds: [], message: 'Added 33 sample records to your catalog: 3 engines, 3 chassis.' },
+    });
+    renderAs('owner');
+    const offer = await screen.findByTestId('sample-catalog-offer');
+    expect(offer).toHaveTextContent('No engines in your catalog yet');
+    await userEvent.click(within(offer).getByRole('button', { name: 'Start from the sample catalog' }));
+    expect(post).toHaveBeenCalledWith('/catalog/sample');
+    expect(await within(offer).findByText('Added 33 sample records to your catalog: 3 engines, 3 chassis.')).toBeInTheDocument();
+  });
+
+  it('tells a role that cannot start it whom to ask, without the button', async () => {
+    setWindowWidth(390);
+    renderAs('estimator');
+    const offer = await screen.findByTestId('sample-catalog-offer');
+    expect(offer).toHaveTextContent('Ask the shop owner to start it from Swapwright’s sample catalog');
+    expect(within(offer).queryByRole('button', { name: 'Start from the sample catalog' })).toBeNull();
   });
 });

@@ -1,5 +1,5 @@
 import { DEMO_FIT_SPEC } from '@swapwright/shared/fixtures';
-import { screen, waitFor } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
@@ -88,5 +88,27 @@ describe('fit page by role', () => {
     expect(screen.getByRole('button', { name: 'Run fit check' })).toBeInTheDocument();
     expect(screen.getByText('What goes in')).toBeInTheDocument();
     await waitFor(() => expect(screen.getByRole('button', { name: 'Save placement' })).toBeInTheDocument());
+  });
+});
+
+describe('fit page with an empty catalog', () => {
+  it('offers the owner the sample catalog and links every empty picker to adding that kind', { timeout: 180_000 }, async () => {
+    mockApi();
+    renderFitPage('owner');
+    const offer = await screen.findByTestId('sample-catalog-offer', undefined, { timeout: 20_000 });
+    expect(offer).toHaveTextContent('Nothing to choose from yet');
+    expect(within(offer).getByRole('button', { name: 'Start from the sample catalog' })).toBeInTheDocument();
+    const engineHelp = await screen.findByTestId('empty-engineProfileId');
+    expect(within(engineHelp).getByRole('link', { name: 'Add an engine in the catalog' })).toHaveAttribute('href', '/catalog?kind=engines');
+    expect(within(screen.getByTestId('empty-chassisModelId')).getByRole('link', { name: 'Add a chassis in the catalog' })).toHaveAttribute('href', '/catalog?kind=chassis');
+    expect(within(screen.getByTestId('empty-oilPanId')).getByRole('link', { name: 'Add an oil pan in the catalog' })).toHaveAttribute('href', '/catalog?kind=oil-pans');
+  });
+
+  it('tells a fabricator, who does not keep the catalog, whom to ask', { timeout: 180_000 }, async () => {
+    mockApi();
+    renderFitPage('fabricator');
+    const offer = await screen.findByTestId('sample-catalog-offer', undefined, { timeout: 20_000 });
+    expect(within(offer).queryByRole('button', { name: 'Start from the sample catalog' })).toBeNull();
+    expect(await screen.findByTestId('empty-engineProfileId')).toHaveTextContent('ask the owner, an estimator or the parts counter to add an engine');
   });
 });
