@@ -1,8 +1,9 @@
-import { Alert, Spin } from 'antd';
+import { Alert, Button, Spin } from 'antd';
 import { useEffect, useRef } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useConfirmSignUp } from '@/features/auth/api/confirm-sign-up';
+import { useCurrentUser } from '@/features/auth/api/get-current-user';
 import { SignUpForm } from '@/features/auth/components/sign-up-form';
 import { getErrorMessage } from '@/lib/api-error';
 import { RedirectIfSignedIn } from '../../guards';
@@ -12,6 +13,7 @@ import { AuthHeading } from './auth-heading';
 function FinishSignUp({ token }: { token: string }) {
   const navigate = useNavigate();
   const confirm = useConfirmSignUp({ onSuccess: () => navigate(paths.home, { replace: true }) });
+  const { data: user } = useCurrentUser();
   const sent = useRef(false);
   useEffect(() => {
     if (sent.current) return;
@@ -19,6 +21,18 @@ function FinishSignUp({ token }: { token: string }) {
     confirm.mutate(token);
   }, [confirm, token]);
 
+  if (confirm.isError && user) {
+    // The link was used already (most often by this very person): they are in, so the way on is home.
+    return (
+      <>
+        <AuthHeading title="You are already signed in" subtitle={`as ${user.name}, in ${user.shop.name}.`} />
+        <Alert type="info" showIcon title="This sign-up link has been used. Your shop is ready; carry on from your home page." />
+        <Button type="primary" block style={{ marginTop: 16 }} onClick={() => navigate(paths.home, { replace: true })}>
+          Go to my home page
+        </Button>
+      </>
+    );
+  }
   if (confirm.isError) {
     return (
       <>

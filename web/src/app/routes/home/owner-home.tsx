@@ -1,28 +1,15 @@
-import { Button, Card, Col, Flex, Row, Typography } from 'antd';
-import { Link, useNavigate } from 'react-router-dom';
+import { Card, Col, Flex, Row, Typography } from 'antd';
+import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { PageHeader } from '@/components/page-header';
-import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { RecentCustomers } from '@/features/customers/components/recent-customers';
 import { StoppedWorkNotice } from '@/features/jobs/components/stopped-work-notice';
 import { ProjectsPanel } from '@/features/projects/components/projects-panel';
-import { greeting } from './greeting';
+import { HomeHeader } from './home-header';
 
 export function OwnerHome() {
-  const user = useSignedInUser();
-  const navigate = useNavigate();
   return (
     <>
-      <PageHeader
-        eyebrow={user.shop.name}
-        title={greeting(user.name)}
-        subtitle="Where every job in the shop stands."
-        extra={
-          <Button type="primary" onClick={() => navigate(`${paths.projects}?new=1`)}>
-            New project
-          </Button>
-        }
-      />
+      <HomeHeader subtitle="Where every job in the shop stands." />
       <StoppedWorkNotice to={`${paths.backgroundWork}?state=dead`} />
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>
