@@ -1,3 +1,4 @@
+import { JwtService } from '@nestjs/jwt';
 import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { formatCalendarDate } from '@swapwright/shared';
 import { bearer, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
@@ -76,5 +77,25 @@ describe('quote forms: refusals a person can act on', () => {
       `This quote was valid until ${formatCalendarDate('2020-01-01')}, which has passed. Set a later day under "Discount, deposit and validity", then send it.`,
     );
     expect(sent.body.message).not.toMatch(/2020-01-01|ref /);
+  });
+
+  it("an older revision's link, once a later revision was accepted and paid, says so with the dates", async () => {
+    const [{ shopId }] = await t.dataSource.query('SELECT shopId FROM quotes WHERE id = ?', [quoteId]);
+    await t.dataSource.query("UPDATE quotes SET status = 'approved', sentRevision = 2, latestRevision = 2, answeredAt = ?, depositState = 'paid', depositPaidAt = ? WHERE id = ?", [
+      new Date('2026-11-30T15:00:00Z'),
+      new Date('2026-12-01T09:30:00Z'),
+      quoteId,
+    ]);
+    const revisionOne = new JwtService({ secret: `${process.env.JWT_SECRET}:quote-links` }).sign(
+      { q: quoteId, s: shopId, r: 1, exp: Math.floor(Date.now() / 1000) + 3600 },
+      { audience: 'quote-approval' },
+    );
+    const opened = await t.http.get(`/api/quote-links/${revisionOne}`);
+    expect(opened.status).toBe(409);
+    expect(opened.body.code).toBe('quote_link_already_accepted');
+    expect(opened.body.message).toBe(
+      'This quote was already accepted on Nov 30, 2026 (revision 2), and the deposit was paid on Dec 1, 2026. There is nothing more to do with this link; the shop will be in touch about the work.',
+    );
+    expect(opened.body.message).not.toMatch(/newest e-mail/);
   });
 });

@@ -29,6 +29,13 @@ export const QuoteErrors = {
   badLine: (detail: string) => new AppError(400, 'validation_failed', detail, [detail]),
   linkInvalid: () => new AppError(401, 'quote_link_invalid', 'This quote link is not valid. Open the link from the e-mail exactly as sent, or ask the shop to send it again.'),
   linkExpired: () => new AppError(410, 'quote_link_expired', 'This quote link has expired. Ask the shop to send the quote again.'),
+  /** An older revision's link once a later revision was accepted: what happened and when, not "open the newest e-mail". */
+  linkAfterAcceptance: (revision: number | null, answeredAt: Date | null, depositPaidAt: Date | null) => {
+    const day = (at: Date) => formatCalendarDate(at.toISOString().slice(0, 10));
+    const accepted = `This quote was already accepted${answeredAt ? ` on ${day(answeredAt)}` : ''}${revision ? ` (revision ${revision})` : ''}`;
+    const deposit = depositPaidAt ? `, and the deposit was paid on ${day(depositPaidAt)}` : '';
+    return new AppError(409, 'quote_link_already_accepted', `${accepted}${deposit}. There is nothing more to do with this link; the shop will be in touch about the work.`);
+  },
   linkSuperseded: () => new AppError(409, 'quote_link_superseded', 'The shop has sent a newer revision of this quote; open the link in the newest e-mail.'),
   compareSame: () => new AppError(400, 'validation_failed', 'Give two different revision numbers to compare.', ['from and to must differ']),
 };

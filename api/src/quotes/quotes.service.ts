@@ -165,7 +165,10 @@ export class QuotesService implements OnModuleInit {
     const quote = await this.findQuote(claims.s, claims.q).catch(() => {
       throw QuoteErrors.linkInvalid();
     });
-    if (quote.sentRevision !== claims.r) throw QuoteErrors.linkSuperseded();
+    if (quote.sentRevision !== claims.r) {
+      if (quote.status === 'approved') throw QuoteErrors.linkAfterAcceptance(quote.sentRevision, quote.answeredAt, quote.depositState === 'paid' ? quote.depositPaidAt : null);
+      throw QuoteErrors.linkSuperseded();
+    }
     const reader = shopReader(claims.s);
     const project = await this.projects.get(reader, quote.projectId);
     return this.viewOf(reader, quote, project, true);
