@@ -1,5 +1,7 @@
 import { DEMO_LABOR_OPERATIONS, DEMO_STORY_JOBS, DemoRole } from '@swapwright/seed-data';
-import { bearer, Session, startAppWithParts, TestApp } from './helpers/test-app';
+import { startAppWithPayments, until } from './helpers/app-with-payments';
+import { lastMailId, waitForMail } from './helpers/mail-fake';
+import { bearer, seedWithParts, Session, TestApp } from './helpers/test-app';
 
 type Line = {
   kind: 'part' | 'labor';
@@ -30,9 +32,13 @@ describe('the quote drafted from a locked parts plan carries exactly the plan', 
   let plan: { id: string; version: number; result: PlanResult };
   let lines: Line[];
   let totals: { partsSubtotalCents: number };
+  let quoteId: string;
+  let projectId: string;
+  let stop: () => Promise<void>;
 
   beforeAll(async () => {
-    ({ t, s: demo } = await startAppWithParts());
+    ({ t, stop } = await startAppWithPayments());
+    demo = await seedWithParts(t);
     const as = (method: 'post' | 'put', path: string, body: object = {}) => t.http[method](path).set(...bearer(demo.estimator)).send(body);
     const customer = await as('post', '/api/customers', { name: 'Test Customer Plan', email: 'plan.customer@example.test' }).expect(201);
     const project = await as('post', '/api/projects', {
@@ -53,10 +59,12 @@ describe('the quote drafted from a locked parts plan carries exactly the plan', 
     const drafted = await as('post', `/api/projects/${project.body.id}/quotes`).expect(201);
     expect(drafted.body.revision).toMatchObject({ partsPlanId: plan.id, partsPlanVersion: plan.version });
     lines = drafted.body.revision.lines;
+    quoteId = drafted.body.id;
+    projectId = project.body.id;
     totals = drafted.body.revision.totals;
   }, 60_000);
 
-  afterAll(() => t.close());
+  afterAll(() => stop());
 
   it('the plan moves the transmission crossmember and raises its mount pad, and its pan clears the front crossmember', () => {
     const planned = plan.result.operations.map((op) => op.operation);
@@ -96,5 +104,33 @@ describe('the quote drafted from a locked parts plan carries exactly the plan', 
     const pan = parts.find((line) => line.sku === 'TR-4410');
     if (pan) expect(pan.unitPriceCents).toBe(32_900);
     expect(totals.partsSubtotalCents).toBe(plan.result.totals.partsCents);
+  });
+
+  it('the work order of the accepted quote has a step per quoted labor line, no front-crossmember work, and one figure per joint', async () => {
+    const before = await lastMailId();
+    await t.http.post(`/api/quotes/${quoteId}/send`).set(...bearer(demo.estimator)).expect(200);
+    const mail = await waitForMail('plan.customer@example.test', /quote Q-/, before);
+    const token = /\/quote-answer\/([A-Za-z0-9_\-.]+)/.exec(mail.text)![1];
+    await t.http.post(`/api/quote-links/${token}/answer`).send({ answer: 'accept' }).expect(200);
+    await t.http.post(`/api/quote-links/${token}/deposit`).send({ paymentMethod: 'pm_card_visa' }).expect(200);
+    const opened = await until(
+      async () => t.http.get(`/api/projects/${projectId}/work-order`).set(...bearer(demo.fabricator)),
+      (response) => response.status === 200,
+      'the work order',
+    );
+    type Step = { key: string; name: string; hours: number; hazards: string[]; torque: { joint: string | null; fastener: string; partSku: string | null }[]; checks: { label: string }[] };
+    const steps = opened.body.steps as Step[];
+    const labor = lines.filter((line) => line.kind === 'labor');
+    expect(steps.filter((step) => step.key !== 'other-parts').map((step) => [step.name, step.hours]).sort()).toEqual(labor.map((line) => [line.description, line.hours]).sort());
+    expect(steps.some((step) => /front crossmember/i.test(step.name) || step.key.startsWith('crossmember-modify'))).toBe(false);
+    // The transmission-crossmember work keeps its cautions: the vehicle on stands and frame welding.
+    const relocate = steps.find((step) => /^Relocate the transmission crossmember/.test(step.name))!;
+    expect(relocate.hazards).toEqual(expect.arrayContaining(['support', 'welding']));
+    expect(opened.body.cautions.map((c: { hazard: string }) => c.hazard)).toEqual(expect.arrayContaining(['lifting', 'support', 'welding']));
+    const joints = steps.flatMap((step) => step.torque.map((spec) => spec.joint ?? spec.fastener));
+    expect(new Set(joints).size).toBe(joints.length);
+    const pan = steps.flatMap((step) => step.torque).filter((spec) => spec.joint === 'oil-pan-to-block');
+    expect(pan).toHaveLength(1);
+    expect(pan[0].partSku).not.toBeNull();
   });
 });

@@ -42,7 +42,7 @@ describe('labor operations and quotes', () => {
     expect(list.body.length).toBeGreaterThanOrEqual(8);
     const pan = list.body.find((operation: { code: string }) => operation.code === 'oil-pan-pickup');
     // Source: NIST SP 811 (2008), appendix B.9: 1 lbf·ft = 1.355 818 N·m; 18 lbf·ft = 24.40 N·m, shown to a tenth.
-    expect(pan.torqueSpecs[0]).toEqual({ fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null });
+    expect(pan.torqueSpecs[0]).toEqual({ joint: 'oil-pump-to-main-cap', fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null });
     expect((await t.http.get('/api/labor-operations').set(...bearer(demo.customer))).status).toBe(403);
 
     const created = await t.http

@@ -27,7 +27,7 @@ const LINES = [
 ];
 
 type Check = { key: string; label: string; photos: { id: string; contentType: string; widthPx: number; heightPx: number; uploadedByName: string }[]; measured: boolean; range: string | null; rangeFrom: string | null; latest: { result: string; value: number | null; recordedByName: string; recordedAt: string } | null; fitFinding: { checkId: string } | null };
-type Step = { key: string; name: string; torque: { fastener: string; lbfFt: number; newtonMetres: number; sequence: string | null; partSku: string | null }[]; checks: Check[] };
+type Step = { key: string; name: string; torque: { joint: string | null; fastener: string; lbfFt: number; newtonMetres: number; sequence: string | null; partSku: string | null }[]; checks: Check[] };
 
 describe('job stages and the work order, from the first fit check to the finished build', () => {
   let t: TestApp;
@@ -130,8 +130,13 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(order.body.steps.map((step: Step) => step.key)).toEqual(['cam-timing-set', 'oil-pan-pickup']);
     const pan = order.body.steps[1] as Step;
     // Source: NIST SP 811 (2008), Appendix B.9: 1 lbf·ft = 1.355 817 948 331 4004 N·m, so 18 lbf·ft ≈ 24.4 N·m.
-    expect(pan.torque).toContainEqual({ fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null, partSku: null });
-    expect(pan.torque).toContainEqual(expect.objectContaining({ fastener: 'Oil pump to rear main cap bolts (M8)', lbfFt: 18, newtonMetres: 24.4, partSku: 'TR-OP-HV' }));
+    expect(pan.torque).toContainEqual(expect.objectContaining({ joint: 'oil-pump-to-main-cap', fastener: 'Oil pump to rear main cap bolts (M8)', lbfFt: 18, newtonMetres: 24.4, partSku: 'TR-OP-HV' }));
+    // One figure per joint: the parts' own data (pump, pan and pickup bolts) replaces the operation's general figures.
+    const joints = (order.body.steps as Step[]).flatMap((step) => step.torque.map((spec) => spec.joint ?? spec.fastener));
+    expect(new Set(joints).size).toBe(joints.length);
+    expect(pan.torque.filter((spec) => spec.partSku === null).map((spec) => spec.fastener)).toEqual([]);
+    // Source: NIST SP 811 (2008), Appendix B.9: the pan's own 12 N·m is 8.9 lbf·ft, and no 9.0 lbf·ft beside it.
+    expect(pan.torque.filter((spec) => spec.joint === 'oil-pan-to-block')).toEqual([expect.objectContaining({ lbfFt: 8.9, newtonMetres: 12, partSku: 'TR-4410' })]);
     const panBolts = pan.torque.find((spec) => spec.partSku === 'TR-4410' && /pan bolts/.test(spec.fastener))!;
     expect(panBolts.sequence).toMatch(/crisscross from the centre out, in two stages/);
     expect(checkOf(order.body, 'oil-pan-pickup.screen-height')).toMatchObject({ measured: true, range: '6–9 mm', rangeFrom: 'TR-4411', latest: null });

@@ -14,7 +14,8 @@ export interface DemoLaborOperation {
   /** The part categories this operation installs (a quote draws its install labor, the work order its parts, by category). */
   matches: string[];
   hazards: DemoHazard[];
-  torqueSpecs: { fastener: string; lbfFt: number; sequence: string | null }[];
+  /** `joint`: the stable name of the joint a figure tightens; a part's own figure for the same joint replaces it. */
+  torqueSpecs: { joint?: string; fastener: string; lbfFt: number; sequence: string | null }[];
   checks: { key: string; label: string; unit: string | null; min: number | null; max: number | null; fitCheckId?: string }[];
 }
 
@@ -40,7 +41,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     buildOrder: 20,
     matches: ['cam-timing-set'],
     hazards: [],
-    torqueSpecs: [{ fastener: 'Cam sprocket bolts', lbfFt: 25, sequence: 'Alternate bolts, in two stages (snug, then full torque)' }],
+    torqueSpecs: [{ joint: 'cam-sprocket', fastener: 'Cam sprocket bolts', lbfFt: 25, sequence: 'Alternate bolts, in two stages (snug, then full torque)' }],
     checks: [
       { key: 'cam-turns', label: 'Camshaft turns by hand after the cam bearings go in', unit: null, min: null, max: null },
       { key: 'cam-marks', label: 'Cam installed with the timing marks aligned (advance ground into the cam)', unit: null, min: null, max: null, fitCheckId: 'cam.timing-advance' },
@@ -55,9 +56,9 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     matches: ['oil-pan', 'oil-pickup', 'oil-pump'],
     hazards: ['support'],
     torqueSpecs: [
-      { fastener: 'Oil pump to rear main cap', lbfFt: 18, sequence: null },
-      { fastener: 'Pickup tube bolts', lbfFt: 9, sequence: 'Both tabs, snug, then full torque' },
-      { fastener: 'Oil pan bolts', lbfFt: 9, sequence: 'Crisscross from the centre out, in two stages (half, then full torque)' },
+      { joint: 'oil-pump-to-main-cap', fastener: 'Oil pump to rear main cap', lbfFt: 18, sequence: null },
+      { joint: 'pickup-tube-tabs', fastener: 'Pickup tube bolts', lbfFt: 9, sequence: 'Both tabs, snug, then full torque' },
+      { joint: 'oil-pan-to-block', fastener: 'Oil pan bolts', lbfFt: 9, sequence: 'Crisscross from the centre out, in two stages (half, then full torque)' },
     ],
     checks: [
       { key: 'pickup-tabs', label: 'Pickup bolted at both tabs', unit: null, min: null, max: null },
@@ -73,7 +74,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     buildOrder: 40,
     matches: ['mount-adapter'],
     hazards: ['lifting', 'welding'],
-    torqueSpecs: [{ fastener: 'Mount adapter to block bolts', lbfFt: 40, sequence: 'Upper bolts first, then lower, each side alike' }],
+    torqueSpecs: [{ joint: 'mount-adapter-to-block', fastener: 'Mount adapter to block bolts', lbfFt: 40, sequence: 'Upper bolts first, then lower, each side alike' }],
     checks: [],
   },
   {
@@ -85,8 +86,8 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     matches: ['bellhousing-adapter'],
     hazards: ['lifting', 'support', 'fuel'],
     torqueSpecs: [
-      { fastener: 'Bellhousing to block bolts', lbfFt: 35, sequence: 'Alternate sides, in two stages' },
-      { fastener: 'Engine mount through-bolts', lbfFt: 55, sequence: null },
+      { joint: 'bellhousing-to-block', fastener: 'Bellhousing to block bolts', lbfFt: 35, sequence: 'Alternate sides, in two stages' },
+      { joint: 'engine-mount-through-bolt', fastener: 'Engine mount through-bolts', lbfFt: 55, sequence: null },
     ],
     checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap with the engine on its mounts', unit: 'mm', min: 12.7, max: null, fitCheckId: 'envelope.sump-crossmember' }],
   },
@@ -98,7 +99,7 @@ export const DEMO_LABOR_OPERATIONS: DemoLaborOperation[] = [
     buildOrder: 60,
     matches: ['driveshaft', 'driveshaft-service'],
     hazards: ['support'],
-    torqueSpecs: [{ fastener: 'U-joint strap bolts', lbfFt: 15, sequence: 'Alternate bolts' }],
+    torqueSpecs: [{ joint: 'u-joint-straps', fastener: 'U-joint strap bolts', lbfFt: 15, sequence: 'Alternate bolts' }],
     checks: [{ key: 'slip-engagement', label: 'Slip-yoke engagement at ride height', unit: 'mm', min: 25.4, max: null }],
   },
   {

@@ -7,6 +7,8 @@ export { WORK_HAZARDS, type WorkHazard } from '@swapwright/shared';
 
 /** A fastener's torque as the part's data gives it (lbf·ft), with its tightening sequence in words. */
 export interface TorqueSpec {
+  /** The stable name of the joint it tightens (`oil-pan-to-block`); a part's own figure for the joint replaces it on a work order. */
+  joint?: string | null;
   fastener: string;
   lbfFt: number;
   /** e.g. "crisscross from the centre out, in two stages (half, then full)" */

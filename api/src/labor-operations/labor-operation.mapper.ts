@@ -4,7 +4,7 @@ import { LaborOperation, TorqueSpec } from './labor-operation.entity';
 
 /** N·m shown to a tenth (the figures on a torque wrench). */
 export function mapTorqueSpec(spec: TorqueSpec): TorqueSpecResponseDto {
-  return { fastener: spec.fastener, lbfFt: spec.lbfFt, newtonMetres: Math.round(lbFtToNm(spec.lbfFt) * 10) / 10, sequence: spec.sequence };
+  return { joint: spec.joint ?? null, fastener: spec.fastener, lbfFt: spec.lbfFt, newtonMetres: Math.round(lbFtToNm(spec.lbfFt) * 10) / 10, sequence: spec.sequence };
 }
 
 export function mapLaborOperation(operation: LaborOperation): LaborOperationResponseDto {

@@ -51,7 +51,7 @@ export class LaborOperationsService {
       buildOrder: input.buildOrder ?? 100,
       matches: input.matches ?? [],
       hazards: input.hazards ?? [],
-      torqueSpecs: (input.torqueSpecs ?? []).map((spec) => ({ fastener: spec.fastener, lbfFt: spec.lbfFt, sequence: spec.sequence ?? null })),
+      torqueSpecs: (input.torqueSpecs ?? []).map((spec) => ({ joint: spec.joint ?? null, fastener: spec.fastener, lbfFt: spec.lbfFt, sequence: spec.sequence ?? null })),
       checks: (input.checks ?? []).map((check) => ({ key: check.key, label: check.label, unit: check.unit ?? null, min: check.min ?? null, max: check.max ?? null })),
     });
     await this.scoped.repository.insert(operation);
@@ -70,7 +70,7 @@ export class LaborOperationsService {
       ...(input.buildOrder !== undefined && { buildOrder: input.buildOrder }),
       ...(input.matches !== undefined && { matches: input.matches }),
       ...(input.hazards !== undefined && { hazards: input.hazards }),
-      ...(input.torqueSpecs !== undefined && { torqueSpecs: input.torqueSpecs.map((spec) => ({ ...spec, sequence: spec.sequence ?? null })) }),
+      ...(input.torqueSpecs !== undefined && { torqueSpecs: input.torqueSpecs.map((spec) => ({ ...spec, joint: spec.joint ?? null, sequence: spec.sequence ?? null })) }),
       ...(input.checks !== undefined && { checks: input.checks.map((check) => ({ ...check, unit: check.unit ?? null, min: check.min ?? null, max: check.max ?? null })) }),
     });
     await this.scoped.repository.save(merged);

@@ -3,6 +3,8 @@ import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } fro
 import { decimalTransformer } from '../database/column-transformers';
 
 export interface TorqueSpec {
+  /** The stable name of the joint it tightens (`oil-pan-to-block`): the work order gives it this figure, not an operation's. */
+  joint?: string;
   fastener: string;
   newtonMetres: number;
   sequence?: string;

@@ -67,6 +67,8 @@ export function mapWorkOrder(order: WorkOrder, project: Project, records: readon
     finishedAt: order.finishedAt?.toISOString() ?? null,
     steps: order.steps.map((step) => ({
       ...step,
+      // Work orders opened before joints were named carry none.
+      torque: step.torque.map((spec) => ({ ...spec, joint: spec.joint ?? null })),
       checks: step.checks.map((check) => {
         const record = latest.get(check.key);
         return {

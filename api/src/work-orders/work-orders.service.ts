@@ -68,12 +68,25 @@ export class WorkOrdersService {
     const shopId = quote.shopId;
     const operationIds = revision.lines.map((line) => line.laborOperationId).filter((id): id is string => Boolean(id));
     const operations = operationIds.length ? await manager.find(LaborOperation, { where: { shopId, id: In(operationIds) } }) : [];
+    // One step per labor line of the accepted quote, in the line's own words and hours; a line of one of the shop's
+    // operations brings that operation's place in the build, hazards, torques and checks (a second line of the same
+    // operation gets a step key of its own, so its checks are recorded apart).
     const operationInputs: WorkOperationInput[] = [];
+    const stepsOfOperation = new Map<string, number>();
     revision.lines.forEach((line, index) => {
       if (line.kind !== 'labor') return;
       const operation = operations.find((candidate) => candidate.id === line.laborOperationId);
       if (operation) {
-        operationInputs.push({ ...operation, hours: line.hours ?? operation.bookHours, checks: operation.checks, torqueSpecs: operation.torqueSpecs });
+        const seen = (stepsOfOperation.get(operation.id) ?? 0) + 1;
+        stepsOfOperation.set(operation.id, seen);
+        operationInputs.push({
+          ...operation,
+          code: seen === 1 ? operation.code : `${operation.code}-${seen}`,
+          name: line.description,
+          hours: line.hours ?? operation.bookHours,
+          checks: operation.checks,
+          torqueSpecs: operation.torqueSpecs,
+        });
       } else {
         operationInputs.push({ id: null, code: `line-${index + 1}`, name: line.description, buildOrder: 900 + index, hours: line.hours ?? 0, matches: [], hazards: [], torqueSpecs: [], checks: [] });
       }

@@ -114,12 +114,12 @@ export async function signUpThroughMail(
   return response.body as Session;
 }
 
-/** A fresh app on the demo data with the demo catalog and the shop's parts, and a session for every demo role. */
-export async function startAppWithParts(): Promise<{ t: TestApp; s: Record<DemoRole, Session> }> {
+/** Fresh demo data with the demo catalog and the shop's parts, and a session for every demo role. */
+export async function seedWithParts(t: TestApp): Promise<Record<DemoRole, Session>> {
   const { seedCatalog } = await import('../../src/database/seed/seed-catalog');
   const { seedParts } = await import('../../src/database/seed/seed-parts');
-  const t = await startTestApp();
+  await resetData(t.dataSource);
   await seedCatalog(t.dataSource);
   await seedParts(t.dataSource);
-  return { t, s: await signInAllRoles(t.http) };
+  return signInAllRoles(t.http);
 }

@@ -52,8 +52,8 @@ describe('work order steps', () => {
   it('gives every torque in both units with its sequence and the part it comes from', () => {
     // Source: NIST SP 811 (2008), Appendix B.9 (1 lbf·ft = 1.355 817 948 331 4004 N·m): 18 lbf·ft ≈ 24.4 N·m; 12 N·m ≈ 8.9 lbf·ft.
     expect(steps[1].torque).toEqual([
-      { fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null, partSku: null },
-      { fastener: 'Oil pan bolts (M6)', lbfFt: 8.9, newtonMetres: 12, sequence: 'Crisscross from the centre out, in two stages', partSku: 'TR-4410' },
+      { joint: null, fastener: 'Oil pump to rear main cap', lbfFt: 18, newtonMetres: 24.4, sequence: null, partSku: null },
+      { joint: null, fastener: 'Oil pan bolts (M6)', lbfFt: 8.9, newtonMetres: 12, sequence: 'Crisscross from the centre out, in two stages', partSku: 'TR-4410' },
     ]);
     expect(steps[1].instructions).toEqual(['TR-4410: Fit the pickup before the pan.']);
   });
@@ -71,5 +71,39 @@ describe('work order steps', () => {
   it('always carries the lifting, support, fuel and welding cautions, each deferring to practice', () => {
     const cautions = workOrderCautions(['support', 'brakes']);
     expect(cautions.map((c) => c.hazard)).toEqual(['lifting', 'support', 'fuel', 'welding', 'brakes']);
+  });
+
+  it('gives each joint one figure: a part figure replaces the operation figure, in whichever step the operation lists it', () => {
+    const withJoints: WorkOperationInput = {
+      ...panOperation,
+      torqueSpecs: [
+        { joint: 'oil-pump-to-main-cap', fastener: 'Oil pump to rear main cap', lbfFt: 18, sequence: null },
+        { joint: 'oil-pan-to-block', fastener: 'Oil pan bolts', lbfFt: 9, sequence: 'Crisscross' },
+      ],
+    };
+    const mounts: WorkOperationInput = { ...camOperation, id: 'op-mount', code: 'mount-adapters', name: 'Fit mount adapters', buildOrder: 40, matches: ['mount-adapter'], checks: [], torqueSpecs: [{ joint: 'mount-adapter-to-block', fastener: 'Mount adapter to block bolts', lbfFt: 40, sequence: null }] };
+    const engine: WorkOperationInput = { ...camOperation, id: 'op-engine', code: 'engine-remove-install', name: 'Install the engine', buildOrder: 50, matches: [], checks: [], torqueSpecs: [{ joint: 'engine-mount-through-bolt', fastener: 'Engine mount through-bolts', lbfFt: 55, sequence: null }] };
+    const panWithJoint: WorkPartInput = { ...pan, torqueSpecs: [{ joint: 'oil-pan-to-block', fastener: 'Oil pan bolts (M6)', newtonMetres: 12 }] };
+    const kit: WorkPartInput = {
+      ...pan,
+      sku: 'SW-90',
+      category: 'mount-adapter',
+      instructions: null,
+      torqueSpecs: [
+        { joint: 'mount-adapter-to-block', fastener: 'Mount kit to block (M10)', newtonMetres: 50.2 },
+        { joint: 'engine-mount-through-bolt', fastener: 'Through-bolt (M12)', newtonMetres: 89.5 },
+      ],
+    };
+    const built = buildWorkSteps([withJoints, mounts, engine], [panWithJoint, kit]);
+    const all = built.flatMap((step) => step.torque);
+    const joints = all.map((spec) => spec.joint);
+    expect(new Set(joints).size).toBe(joints.length);
+    // Source: NIST SP 811 (2008), Appendix B.9: 12 N·m ≈ 8.9 lbf·ft, 50.2 N·m ≈ 37.0 lbf·ft, 89.5 N·m ≈ 66.0 lbf·ft.
+    expect(all.find((spec) => spec.joint === 'oil-pan-to-block')).toMatchObject({ lbfFt: 8.9, partSku: 'TR-4410' });
+    expect(all.find((spec) => spec.joint === 'mount-adapter-to-block')).toMatchObject({ lbfFt: 37, partSku: 'SW-90' });
+    expect(all.find((spec) => spec.joint === 'engine-mount-through-bolt')).toMatchObject({ lbfFt: 66, partSku: 'SW-90' });
+    // A joint no part gives keeps the operation's figure.
+    expect(all.find((spec) => spec.joint === 'oil-pump-to-main-cap')).toMatchObject({ lbfFt: 18, partSku: null });
+    expect(built.find((step) => step.key === 'engine-remove-install')!.torque).toEqual([]);
   });
 });

@@ -14,7 +14,8 @@ export interface WorkOperationInput {
   /** Words of part categories and remedies the operation answers (see the labor operations). */
   matches: string[];
   hazards: WorkHazard[];
-  torqueSpecs: { fastener: string; lbfFt: number; sequence: string | null }[];
+  /** `joint`: the stable name of the joint a figure tightens (see `WorkTorque.joint`). */
+  torqueSpecs: { joint?: string | null; fastener: string; lbfFt: number; sequence: string | null }[];
   checks: { key: string; label: string; unit: string | null; min: number | null; max: number | null; fitCheckId?: string | null }[];
 }
 
@@ -24,13 +25,18 @@ export interface WorkPartInput {
   description: string;
   category: string;
   quantity: number;
-  torqueSpecs: { fastener: string; newtonMetres: number; sequence?: string | null }[];
+  torqueSpecs: { joint?: string | null; fastener: string; newtonMetres: number; sequence?: string | null }[];
   instructions: string | null;
   /** A part may narrow a check's range: `<check key>.min` / `<check key>.max` numbers in its attributes. */
   attributes: Record<string, unknown>;
 }
 
 export interface WorkTorque {
+  /**
+   * The stable name of the joint it tightens (`oil-pan-to-block`), null when the data names none. A work order gives
+   * each joint one figure: the part's own when the job installs a part that gives it, else the operation's.
+   */
+  joint: string | null;
   fastener: string;
   lbfFt: number;
   newtonMetres: number;
@@ -69,6 +75,9 @@ export interface WorkStep {
   checks: WorkCheck[];
 }
 
+/** A joint's stable name in torque data: lower-case words joined by hyphens (`oil-pan-to-block`). */
+export const TORQUE_JOINT_PATTERN = /^[a-z0-9]+(-[a-z0-9]+)*$/;
+
 export const OTHER_PARTS_STEP = { code: 'other-parts', name: 'Fit the other parts of the plan' } as const;
 
 /**
@@ -80,6 +89,11 @@ export function installerOfCategory<T extends { matches: readonly string[] }>(op
   const exact = operations.find((operation) => operation.matches.some((word) => word.toLowerCase() === category));
   if (exact) return exact;
   return operations.find((operation) => operation.matches.some((word) => word && category.includes(word.toLowerCase()))) ?? null;
+}
+
+/** The joint a figure tightens: its stable name, or (for data that names none) the fastener's own words. */
+function jointKey(spec: { joint?: string | null; fastener: string }): string {
+  return spec.joint ? `joint:${spec.joint}` : `fastener:${spec.fastener.trim().toLowerCase()}`;
 }
 
 function rangeFor(check: WorkOperationInput['checks'][number], parts: readonly WorkPartInput[]): CheckRange & { from: string | null } {
@@ -97,7 +111,9 @@ function rangeFor(check: WorkOperationInput['checks'][number], parts: readonly W
  * The work order's steps: the quoted operations in build order, each with the parts it installs, the tightening
  * torques (the operation's and its parts', in lbf·ft and N·m) with their sequences, its hazards and the checks the bay
  * records (a part's data may narrow a measured check's range; a check tied to a fit check carries that result).
- * Parts no quoted operation installs go to a last step of their own.
+ * Parts no quoted operation installs go to a last step of their own. Each joint has one figure in the whole work order:
+ * a part's own figure replaces the operation's general one for the same joint, and a joint is listed where it is
+ * first tightened.
  */
 export function buildWorkSteps(operations: readonly WorkOperationInput[], parts: readonly WorkPartInput[], findings: readonly Finding[] = []): WorkStep[] {
   const ordered = [...operations].sort((a, b) => a.buildOrder - b.buildOrder);
@@ -106,6 +122,8 @@ export function buildWorkSteps(operations: readonly WorkOperationInput[], parts:
     const installer = installerOfCategory(ordered.filter((operation) => operation.id !== null), part.category);
     partsOf.set(installer, [...(partsOf.get(installer) ?? []), part]);
   }
+  // A joint a part of the job gives a figure for is tightened to the part's figure: the operation's general one goes.
+  const partJoints = new Set(parts.flatMap((part) => part.torqueSpecs.map(jointKey)));
   const step = (operation: WorkOperationInput, installed: WorkPartInput[]): WorkStep => ({
     key: operation.code,
     operationId: operation.id,
@@ -115,9 +133,17 @@ export function buildWorkSteps(operations: readonly WorkOperationInput[], parts:
     hazards: [...operation.hazards],
     parts: installed.map((part) => ({ sku: part.sku, description: part.description, quantity: part.quantity })),
     torque: [
-      ...operation.torqueSpecs.map((spec) => ({ fastener: spec.fastener, ...torqueInBothUnits({ lbfFt: spec.lbfFt }), sequence: spec.sequence, partSku: null })),
+      ...operation.torqueSpecs
+        .filter((spec) => !partJoints.has(jointKey(spec)))
+        .map((spec) => ({ joint: spec.joint ?? null, fastener: spec.fastener, ...torqueInBothUnits({ lbfFt: spec.lbfFt }), sequence: spec.sequence, partSku: null })),
       ...installed.flatMap((part) =>
-        part.torqueSpecs.map((spec) => ({ fastener: spec.fastener, ...torqueInBothUnits({ newtonMetres: spec.newtonMetres }), sequence: spec.sequence ?? null, partSku: part.sku })),
+        part.torqueSpecs.map((spec) => ({
+          joint: spec.joint ?? null,
+          fastener: spec.fastener,
+          ...torqueInBothUnits({ newtonMetres: spec.newtonMetres }),
+          sequence: spec.sequence ?? null,
+          partSku: part.sku,
+        })),
       ),
     ],
     instructions: installed.filter((part) => part.instructions).map((part) => `${part.sku}: ${part.instructions}`),
@@ -143,6 +169,16 @@ export function buildWorkSteps(operations: readonly WorkOperationInput[], parts:
   if (leftOver.length > 0) {
     const last = steps.reduce((max, s) => Math.max(max, s.buildOrder), 0);
     steps.push(step({ id: null, code: OTHER_PARTS_STEP.code, name: OTHER_PARTS_STEP.name, buildOrder: last + 10, hours: 0, matches: [], hazards: [], torqueSpecs: [], checks: [] }, leftOver));
+  }
+  // Each joint once in the whole work order: where it is first tightened.
+  const tightened = new Set<string>();
+  for (const built of steps) {
+    built.torque = built.torque.filter((spec) => {
+      const key = jointKey(spec);
+      if (tightened.has(key)) return false;
+      tightened.add(key);
+      return true;
+    });
   }
   return steps;
 }

@@ -3567,6 +3567,11 @@ export interface components {
             deviationLimitDeg: number;
         };
         TorqueSpecDto: {
+            /**
+             * @description The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's.
+             * @example oil-pan-to-block
+             */
+            joint?: string;
             fastener: string;
             /** @description Tightening torque, N·m. */
             newtonMetres: number;
@@ -3926,6 +3931,8 @@ export interface components {
             bin?: string;
         };
         TorqueSpecResponseDto: {
+            /** @description The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's. */
+            joint: string | null;
             fastener: string;
             lbfFt: number;
             /** @description N·m, from lbf·ft by the exact factor 1.3558179483314004 (NIST SP 811) */
@@ -4243,6 +4250,8 @@ export interface components {
             quantity: number;
         };
         WorkTorqueResponseDto: {
+            /** @description The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's. */
+            joint: string | null;
             fastener: string;
             /** @description lbf·ft, to a tenth */
             lbfFt: number;

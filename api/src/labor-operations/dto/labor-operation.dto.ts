@@ -15,11 +15,19 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { TORQUE_JOINT_PATTERN } from '@swapwright/shared';
 import { IsOptionalDefined } from '../../common/decorators/optional-defined.decorator';
 import { Trim } from '../../common/decorators/trim.decorator';
 import { WORK_HAZARDS, WorkHazard } from '../labor-operation.entity';
 
 export class TorqueSpecDto {
+  @ApiPropertyOptional({ type: String, nullable: true, maxLength: 60, example: 'oil-pump-to-main-cap', description: "The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's." })
+  @IsOptional()
+  @IsString()
+  @MaxLength(60)
+  @Matches(TORQUE_JOINT_PATTERN, { message: 'joint must be lower-case words joined by hyphens, e.g. oil-pan-to-block' })
+  joint?: string | null;
+
   @ApiProperty({ example: 'Oil pump to main cap' })
   @Trim()
   @IsString()
@@ -130,6 +138,7 @@ export class CreateLaborOperationDto {
 export class UpdateLaborOperationDto extends PartialType(CreateLaborOperationDto) {}
 
 export class TorqueSpecResponseDto {
+  @ApiProperty({ type: String, nullable: true, description: "The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's." }) joint: string | null;
   @ApiProperty() fastener: string;
   @ApiProperty() lbfFt: number;
   @ApiProperty({ description: 'N·m, from lbf·ft by the exact factor 1.3558179483314004 (NIST SP 811)' }) newtonMetres: number;

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import { PART_CATEGORIES, type CatalogPartCategory } from '@swapwright/shared';
+import { PART_CATEGORIES, TORQUE_JOINT_PATTERN, type CatalogPartCategory } from '@swapwright/shared';
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
@@ -28,6 +28,13 @@ export const SKU_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._/-]*$/;
 export const MAX_PRICE_CENTS = 100_000_000;
 
 export class TorqueSpecDto {
+  @ApiPropertyOptional({ maxLength: 60, example: 'oil-pan-to-block', description: "The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's." })
+  @IsOptional()
+  @IsString()
+  @MaxLength(60)
+  @Matches(TORQUE_JOINT_PATTERN, { message: 'joint must be lower-case words joined by hyphens, e.g. oil-pan-to-block' })
+  joint?: string;
+
   @ApiProperty({ maxLength: 120 })
   @Trim()
   @IsString()

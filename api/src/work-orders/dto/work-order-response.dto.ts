@@ -8,6 +8,7 @@ export class WorkPartResponseDto {
 }
 
 export class WorkTorqueResponseDto {
+  @ApiProperty({ type: String, nullable: true, description: "The stable name of the joint it tightens (lower-case words joined by hyphens, e.g. oil-pan-to-block): a work order gives each joint one figure, a part's own before an operation's." }) joint: string | null;
   @ApiProperty() fastener: string;
   @ApiProperty({ description: 'lbf·ft, to a tenth' }) lbfFt: number;
   @ApiProperty({ description: 'N·m, to a tenth (exact factor 1.3558179483314004, NIST SP 811)' }) newtonMetres: number;

@@ -138,7 +138,7 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
                       <li key={`${spec.partSku ?? 'op'}-${spec.fastener}`}>
                         <span>
                           {spec.fastener}
-                          {spec.partSku ? <Typography.Text type="secondary"> ({spec.partSku})</Typography.Text> : null}
+                          <Typography.Text type="secondary">{spec.partSku ? ` (from ${spec.partSku})` : ' (shop figure)'}</Typography.Text>
                         </span>
                         <span className="work-order-torque__figures">
                           {spec.lbfFt.toFixed(1)} lbf·ft · {spec.newtonMetres.toFixed(1)} N·m
