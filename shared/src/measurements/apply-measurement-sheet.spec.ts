@@ -72,6 +72,13 @@ describe('parseMeasurementEntry', () => {
     expect(parseMeasurementEntry('-20 mm', 'obstacle-top').ok).toBe(false);
     expect(parseMeasurementEntry('40 ft', 'obstacle-top').ok).toBe(false);
   });
+  it('says the range in the unit the person reads in', () => {
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly, so the 10 m bound is 10000 / 25.4 = 393.70 in.
+    const inches = parseMeasurementEntry('999 in', 'obstacle-top', 'in');
+    expect(inches).toEqual({ ok: false, message: 'A reading here is between 0 and 393.70 in; "999 in" is not.' });
+    expect(!inches.ok && inches.message).not.toMatch(/\d m\b/);
+    expect(parseMeasurementEntry('11000', 'obstacle-top', 'mm')).toEqual({ ok: false, message: 'A reading here is between 0 and 10 m; "11000" is not.' });
+  });
 });
 
 describe('applyMeasurementSheet', () => {

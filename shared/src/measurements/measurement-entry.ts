@@ -1,4 +1,4 @@
-import { parseLengthResult, type LengthUnit } from '../units/length';
+import { MM_PER_FOOT, MM_PER_INCH, parseLengthResult, type LengthUnit } from '../units/length';
 import { MEASUREMENT_KIND_INFO, type MeasurementPointKind } from './measurement-points';
 
 export type MeasurementEntryResult = { ok: true; value: number; unit: 'mm' | 'deg' } | { ok: false; message: string };
@@ -7,6 +7,13 @@ export type MeasurementEntryResult = { ok: true; value: number; unit: 'mm' | 'de
 export const MAX_MEASUREMENT_MM = 10_000;
 /** Angles are read against level; anything steeper than this is a misreading. */
 export const MAX_MEASUREMENT_DEG = 45;
+
+/** The 10 m bound in the unit the person reads in: `393.70 in` (1 in = 25.4 mm), `32.81 ft`, `10 m`. */
+function readingBound(unit: LengthUnit): string {
+  if (unit === 'in') return `${(MAX_MEASUREMENT_MM / MM_PER_INCH).toFixed(2)} in`;
+  if (unit === 'ft') return `${(MAX_MEASUREMENT_MM / MM_PER_FOOT).toFixed(2)} ft`;
+  return `${MAX_MEASUREMENT_MM / 1000} m`;
+}
 
 const ANGLE_PATTERN = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+))\s*(°|deg|degs|degree|degrees)?$/i;
 
@@ -30,7 +37,10 @@ export function parseMeasurementEntry(text: string, kind: MeasurementPointKind, 
   if (parsed.mm < min || parsed.mm > MAX_MEASUREMENT_MM) {
     return {
       ok: false,
-      message: min === 0 ? `A reading here is between 0 and ${MAX_MEASUREMENT_MM / 1000} m; "${input}" is not.` : `A reading here is within ${MAX_MEASUREMENT_MM / 1000} m of the front axle line; "${input}" is not.`,
+      message:
+        min === 0
+          ? `A reading here is between 0 and ${readingBound(defaultUnit)}; "${input}" is not.`
+          : `A reading here is within ${readingBound(defaultUnit)} of the front axle line; "${input}" is not.`,
     };
   }
   return { ok: true, value: Math.round(parsed.mm * 100) / 100, unit: 'mm' };

@@ -1,4 +1,4 @@
-import { formatMoney, formatQuantity, inchesToMm, mmToShownInches, parseLengthResult, renderText, textParts } from '@swapwright/shared';
+import { formatLength as formatLengthAs, formatMoney, formatQuantity, inchesToMm, mmToShownInches, parseLengthResult, textParts } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -31,11 +31,18 @@ export function formatLength(mm: number | null | undefined, system: UnitSystem):
 
 /**
  * Words written with figures in them (a measurement point's name, how to measure it): every length, pressure and
- * flow in the person's system, through the same path as the fit report's sentences ("300 mm behind the axle" reads
- * "11.81 in behind the axle" in inch mode).
+ * flow in the person's system. These lengths say where to hold a tape, so in inch mode they read as a tape does, to
+ * the nearest 1/16 in ("300 mm behind the axle" reads "11 13/16 in behind the axle"; 600 mm "23 5/8 in"), never as
+ * decimals no tape shows. Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly.
  */
 export function renderFigures(text: string, system: UnitSystem): string {
-  return renderText(textParts(text), system);
+  return textParts(text)
+    .map((part) => {
+      if (typeof part === 'string') return part;
+      if (part.quantity === 'length' && system === 'in') return formatLengthAs(part.value, { unit: 'in', denominator: 16 }).replace('-', '\u2212');
+      return formatQuantity(part.value, part.quantity, system, { decimals: part.decimals, signed: part.signed });
+    })
+    .join('');
 }
 
 export type ReadResult = { ok: true; value: number } | { ok: false; message: string };

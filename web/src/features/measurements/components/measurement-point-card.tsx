@@ -4,7 +4,7 @@ import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
 import { isReadingChanged } from '../api/set-measurement-value';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
-import { formatDeviation, formatReading, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
+import { formatDeviation, formatReading, formatTolerance, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
 import type { SetMeasurementValueBody } from '../types';
 import { PhotoStrip, type PhotoActions } from './photo-strip';
 import { PointDrawing } from './point-drawing';
@@ -144,7 +144,7 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
             <div style={{ fontSize: 22, fontWeight: 600 }} data-testid="point-value">
               {value ? fmt(value.value, point.unit) : '—'}
               {value?.tolerance !== null && value?.tolerance !== undefined && (
-                <span style={{ fontSize: 14, fontWeight: 400 }}> ± {fmt(value.tolerance, point.unit)}</span>
+                <span style={{ fontSize: 14, fontWeight: 400 }} data-testid="point-tolerance"> ± {formatTolerance(value.tolerance, point.unit, system, formatLength)}</span>
               )}
             </div>
           </div>

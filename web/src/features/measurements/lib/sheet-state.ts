@@ -1,4 +1,4 @@
-import { parseMeasurementEntry } from '@swapwright/shared';
+import { formatLength as formatLengthAs, formatQuantity, MM_PER_INCH, parseMeasurementEntry } from '@swapwright/shared';
 import type { MeasurementEvent, MeasurementPhoto, MeasurementPoint, MeasurementSheet, MeasurementValue, SetMeasurementValueBody } from '../types';
 
 export type UnitSystem = 'in' | 'mm';
@@ -157,6 +157,24 @@ export function formatReading(value: number | null | undefined, unit: 'mm' | 'de
   if (value === null || value === undefined) return '—';
   if (unit === 'deg') return `${Math.round(value * 100) / 100}°`;
   return formatLength(value);
+}
+
+/** Half the 0.01 mm a reading is kept to: a tolerance this close to a whole 1/64 in was typed as that fraction. */
+const KEPT_TO_HALF_MM = 0.0051;
+
+/**
+ * A reading's ± tolerance for people. In inches a tolerance typed as a tape fraction reads as that fraction (1/8 in,
+ * kept as 3.18 mm, reads "1/8 in", never "0.13 in"); any other reads to 0.001 in, fine enough for a feeler gauge
+ * (3 mm reads "0.118 in"). In millimetres and degrees as the reading itself.
+ * Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly; 1/64 in = 0.396875 mm.
+ */
+export function formatTolerance(value: number, unit: 'mm' | 'deg', system: UnitSystem, formatLength: (mm: number) => string): string {
+  if (unit === 'deg' || system !== 'in') return formatReading(value, unit, formatLength);
+  const sixtyFourths = Math.round((Math.abs(value) / MM_PER_INCH) * 64);
+  if (sixtyFourths > 0 && Math.abs((sixtyFourths * MM_PER_INCH) / 64 - Math.abs(value)) <= KEPT_TO_HALF_MM) {
+    return formatLengthAs(Math.abs(value), { unit: 'in', denominator: 64 });
+  }
+  return formatQuantity(Math.abs(value), 'length', 'in', { decimals: 2 });
 }
 
 /** A signed difference for people: "+3 mm", "−1.2°" (in their unit for lengths). */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { filterRows, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, unitSlip, valueBody } from '../sheet-state';
+import { formatLength } from '@/lib/units';
+import { filterRows, formatTolerance, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, unitSlip, valueBody } from '../sheet-state';
 import type { MeasurementPhoto } from '../../types';
 import { POINTS, sheetStub } from './sheet-fixture';
 
@@ -117,5 +118,27 @@ describe('sign-off', () => {
     expect(reasonProblem('  ')).toMatch(/why/);
     expect(reasonProblem('ok')).not.toBeNull();
     expect(reasonProblem('re-measured at ride height')).toBeNull();
+  });
+});
+
+describe('a reading’s tolerance', () => {
+  // Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly; 1/8 in = 3.175 mm, kept to 0.01 mm as 3.18 mm.
+  const inches = (mm: number) => formatLength(mm, 'in');
+  const mm = (v: number) => formatLength(v, 'mm');
+
+  it('typed as 1/8 in inch mode reads 1/8 in, never 0.13 in', () => {
+    const typed = readEntry('1/8', { kind: 'obstacle-top' }, 'in');
+    expect(typed).toEqual({ ok: true, value: 3.18, unit: 'mm' });
+    expect(formatTolerance(3.18, 'mm', 'in', inches)).toBe('1/8 in');
+    expect(formatTolerance(1.59, 'mm', 'in', inches)).toBe('1/16 in');
+    expect(formatTolerance(31.75, 'mm', 'in', inches)).toBe('1 1/4 in');
+  });
+
+  it('a tolerance that is no tape fraction reads to 0.001 in; in millimetres as any reading', () => {
+    // Derived: 3 mm / 25.4 = 0.1181 in; 2.54 mm = 0.100 in.
+    expect(formatTolerance(3, 'mm', 'in', inches)).toBe('0.118 in');
+    expect(formatTolerance(2.54, 'mm', 'in', inches)).toBe('0.100 in');
+    expect(formatTolerance(3.18, 'mm', 'mm', mm)).toBe('3.2 mm');
+    expect(formatTolerance(0.5, 'deg', 'in', inches)).toBe('0.5°');
   });
 });
