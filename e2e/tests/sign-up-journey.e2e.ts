@@ -19,6 +19,8 @@ async function mailsTo(email: string): Promise<CapturedMail[]> {
 
 describe('a new owner signs up and finishes through the e-mailed link', () => {
   let browser: BrowserSession;
+  let signUpLink: string;
+  let projectId: string;
 
   beforeAll(async () => {
     browser = await openBrowser();
@@ -49,6 +51,7 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     expect(mail.subject).toBe('Finish creating your Swapwright shop');
     const link = /https?:\/\/\S+\/sign-up\?token=[^\s"<>]+/.exec(mail.text)?.[0];
     expect(link).toBeDefined();
+    signUpLink = link!;
     await page.goto(link!);
     const nav = page.getByRole('navigation', { name: 'Main' });
     await nav.waitFor();
@@ -67,6 +70,7 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     expect(await form.getByRole('combobox', { name: 'Customer' }).count()).toBe(0);
     await form.getByLabel('Project title').fill('Own flatbed: diesel swap');
     await form.getByLabel('Vehicle').fill('Invented 1979 flatbed, long bed');
+    await form.getByLabel('Planned rev limit').fill('5800');
     await saveScreenshot(page, 'sign-up-own-truck-project');
     const created = page.waitForResponse((r) => r.url().endsWith('/api/projects') && r.request().method() === 'POST');
     await page.getByRole('button', { name: 'Open project' }).click();
@@ -74,6 +78,7 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     expect(response.status()).toBe(201);
     const project = (await response.json()) as { id: string; customer: { name: string } };
     expect(project.customer.name).toBe('Corvin Ashdale');
+    projectId = project.id;
     await page.waitForURL(new RegExp(`/projects/${project.id}`));
     await page.getByRole('heading', { name: 'Own flatbed: diesel swap' }).first().waitFor();
   });
@@ -103,5 +108,68 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     // the shop's only customer record is their own: the list of records to invite is empty
     await page.locator('.ant-select-dropdown:visible .ant-select-item-empty').waitFor();
     expect(await page.locator('.ant-select-dropdown:visible .ant-select-item-option').filter({ hasText: 'Corvin Ashdale' }).count()).toBe(0);
+  });
+
+  it('on a phone, starts the empty catalog from the sample on the fit page and gets a fit report', async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(`/projects/${projectId}/fit`);
+    const offer = page.getByTestId('sample-catalog-offer');
+    await offer.waitFor();
+    // Every empty picker says where to add that kind.
+    expect(await page.getByTestId('empty-engineProfileId').getByRole('link', { name: 'Add an engine in the catalog' }).getAttribute('href')).toBe('/catalog?kind=engines');
+    expect(await page.getByTestId('empty-chassisModelId').getByRole('link', { name: 'Add a chassis in the catalog' }).count()).toBe(1);
+    await saveScreenshot(page, 'sign-up-fit-empty-catalog-phone');
+
+    // Running now is refused in words: what to choose and where.
+    const refused = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${projectId}/fit-reports`) && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Run fit check' }).click();
+    const refusal = (await (await refused).json()) as { message: string };
+    expect(refusal.message).toMatch(/^Before the fit check can run, choose an engine and a chassis under "What goes in" on the fit check page/);
+    await page.getByText(/choose an engine and a chassis under "What goes in"/).first().waitFor();
+    expect(await page.getByText(/engineProfileId|chassisModelId/).count()).toBe(0);
+
+    const copied = page.waitForResponse((r) => r.url().endsWith('/api/catalog/sample') && r.request().method() === 'POST');
+    await offer.getByRole('button', { name: 'Start from the sample catalog' }).click();
+    const copy = await copied;
+    expect(copy.status()).toBe(200);
+    expect(((await copy.json()) as { added: number }).added).toBeGreaterThan(20);
+    await offer.waitFor({ state: 'detached' });
+
+    const choose = async (label: string, option: string, field: string) => {
+      const saved = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${projectId}`) && r.request().method() === 'PATCH');
+      await page.getByRole('combobox', { name: label, exact: true }).click();
+      await page.locator('.ant-select-dropdown:visible .ant-select-item-option').filter({ hasText: option }).click();
+      const response = await saved;
+      expect(response.status()).toBe(200);
+      expect(((await response.json()) as Record<string, unknown>)[field]).toBeTruthy();
+    };
+    await choose('Engine', 'Kestrel 5.3 V8 (truck)', 'engineProfileId');
+    await choose('Chassis', 'Harlan Ridgeback 1978 half-ton pickup', 'chassisModelId');
+
+    const ran = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${projectId}/fit-reports`) && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Run fit check' }).click();
+    expect((await ran).status()).toBe(201);
+    await page.getByText('Every check').first().waitFor();
+    // Nothing on the page is wider than the phone.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await saveScreenshot(page, 'sign-up-fit-report-phone');
+  });
+
+  it('home leads with their own projects, and the used sign-up link opened again leads home', async () => {
+    const { page } = browser;
+    await page.goto('/');
+    await page.getByText('Next steps').first().waitFor();
+    expect(await page.getByText('Own flatbed: diesel swap').count()).toBeGreaterThan(0);
+    expect(await page.getByText('Needs a quote').count()).toBe(0);
+    await saveScreenshot(page, 'sign-up-builder-home-phone');
+
+    await page.goto(signUpLink);
+    await page.getByText('You are already signed in').waitFor();
+    expect(await page.getByText('not valid any more').count()).toBe(0);
+    await saveScreenshot(page, 'sign-up-link-again-phone');
+    await page.getByRole('button', { name: 'Go to my home page' }).click();
+    await page.waitForURL((url) => url.pathname === '/');
+    await page.getByText('Next steps').first().waitFor();
   });
 });
