@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { Alert, Button, Card, Flex, Input, Popconfirm, Space, Typography } from 'antd';
 import { useState } from 'react';
 import { ErrorState } from '@/components/query-state';
-import { getErrorMessage } from '@/lib/api-error';
+import { getApiErrorBody, getErrorMessage } from '@/lib/api-error';
 import { formatDate } from '@/lib/dates';
 import { useAnswerQuote } from '../api/answer-quote';
 import { type AnswerQuoteBody as QuoteAnswerBody, useAnswerQuoteByLink } from '../api/answer-quote-by-link';
@@ -38,6 +38,10 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
   const pay = usePayDepositByLink(token);
   if (quote.isLoading) return <Card loading />;
   if (quote.isError || !quote.data) {
+    // an older revision's link after a later one was accepted: nothing is wrong, the answer is already in
+    if (getApiErrorBody(quote.error)?.code === 'quote_link_already_accepted') {
+      return <Alert type="success" showIcon title="This quote was already accepted" description={getErrorMessage(quote.error)} />;
+    }
     return <Alert type="error" showIcon message="This quote link cannot be opened" description={getErrorMessage(quote.error)} />;
   }
   return (
