@@ -179,9 +179,10 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
                 ))}
               </ul>
             )}
-            <Typography.Text type="secondary">
+            {/* a paragraph of its own: two inline texts side by side ran together ("above.Fuel system") */}
+            <Typography.Paragraph type="secondary" style={{ margin: '6px 0 0' }}>
               Fuel system, welding and lifting work carry risks: follow the cautions in the fit report and licensed practice.
-            </Typography.Text>
+            </Typography.Paragraph>
           </div>
           {canBuild && latest.status !== 'locked' && (
             <Button loading={lock.isPending} onClick={() => lock.mutate(latest.id)}>

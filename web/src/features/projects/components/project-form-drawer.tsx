@@ -5,6 +5,7 @@ import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
 import { hpToKw, kwToHp } from '@/lib/units';
+import { TARGET_POWER_BOUNDS } from '../lib/target-power';
 import type { UnitSystem } from '@swapwright/shared';
 import { useCreateProject } from '../api/create-project';
 import { useUpdateProject } from '../api/update-project';
@@ -71,8 +72,7 @@ export function ProjectFormDrawer({
   const drawerSize = useDrawerSize(520);
   const isEdit = Boolean(project);
   const powerUnit = unitSystem === 'in' ? 'hp' : 'kW';
-  // the API takes 1 to 2,000 kW
-  const maxPower = unitSystem === 'in' ? Math.floor(kwToHp(2000)) : 2000;
+  const power = TARGET_POWER_BOUNDS[unitSystem === 'in' ? 'hp' : 'kW'];
   const done = (saved: Project) => {
     notifySuccess({ title: isEdit ? 'Project saved' : 'Project opened', description: saved.title });
     onSaved?.(saved);
@@ -213,9 +213,9 @@ export function ProjectFormDrawer({
               label={`Target power (${powerUnit})`}
               validateFirst
               name="targetPower"
-              rules={[plainNumberRule('Target power', `350`), { type: 'number', min: 1, max: maxPower, message: `Between 1 and ${maxPower.toLocaleString('en-US')} ${powerUnit}` }]}
+              rules={[plainNumberRule('Target power', `350`), { type: 'number', min: power.min, max: power.max, message: power.message }]}
             >
-              <BoundedNumberInput style={{ width: '100%' }} min={1} max={maxPower} precision={0} suffix={powerUnit} aria-label="Target power" />
+              <BoundedNumberInput style={{ width: '100%' }} min={power.min} max={power.max} precision={0} suffix={powerUnit} aria-label="Target power" />
             </Form.Item>
           </Col>
           <Col span={12}>

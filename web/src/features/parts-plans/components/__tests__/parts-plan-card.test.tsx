@@ -65,6 +65,8 @@ describe('PartsPlanCard', () => {
     expect(within(stillShort).getByText('Blocked').closest('[data-status]')).toHaveAttribute('data-status', 'fails');
     expect(stillShort).not.toHaveTextContent('(fails)');
     expect(screen.getByRole('button', { name: 'Lock version 2 for a quote' })).toBeInTheDocument();
+    // the caution is a paragraph of its own, never run on from the sentence before it
+    expect(screen.getByText(/^Fuel system, welding and lifting work carry risks/).tagName).toBe('DIV');
   });
 
   it('gives each pick its total with labor, the figure the cheaper parts not chosen are compared on', async () => {
