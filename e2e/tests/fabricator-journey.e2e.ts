@@ -1,5 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
-import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { expectFitsWidth, expectTargetsAtLeast, expectText, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
 
 describe('the fabricator checks the chassis waiting to be measured', () => {
@@ -46,5 +46,41 @@ describe('the fabricator checks the chassis waiting to be measured', () => {
     await expectText(header, /Customer/);
     await expectText(header, /Vehicle/);
     await page.emulateMedia({ media: 'screen' });
+  });
+
+  it('on a phone, links and icons that act are thumb-sized targets, like the buttons', async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 390, height: 844 });
+    const link = { width: 44, height: 44 };
+    // a home card's "All"
+    await page.goto('/');
+    await expectVisible(page.locator('.ant-card-extra > a'));
+    await expectTargetsAtLeast(page, '.ant-card-extra > a', link);
+    // a page's way back, on the project and on its measurement sheet
+    await page.goto('/projects');
+    await page.getByRole('link', { name: /Harlan Ridgeback 1978/ }).first().click();
+    await expectVisible(page.getByRole('link', { name: '← Projects' }));
+    await expectTargetsAtLeast(page, 'a.back-link', link);
+    await page.getByRole('button', { name: 'Measurement sheet' }).click();
+    await expectVisible(page.getByRole('heading', { name: 'Measurement sheet' }));
+    await expectTargetsAtLeast(page, 'a.back-link', link);
+    // the "x" that clears a fit page's picker (it shows on hover or touch)
+    await page.getByRole('button', { name: 'Fit check' }).click();
+    const picker = page.locator('.ant-select').filter({ has: page.locator('.ant-select-clear') }).first();
+    await picker.hover();
+    await expectTargetsAtLeast(page, '.ant-select-clear', { width: 24, height: 24 });
+    await expectFitsWidth(page);
+  });
+
+  it('on a phone, the password eye is a thumb-sized target', async () => {
+    const fresh = await openBrowser();
+    try {
+      await fresh.page.setViewportSize({ width: 390, height: 844 });
+      await fresh.page.goto('/');
+      await expectVisible(fresh.page.getByLabel('Password', { exact: true }));
+      await expectTargetsAtLeast(fresh.page, '.ant-input-password-icon', { width: 44, height: 24 });
+    } finally {
+      await fresh.close();
+    }
   });
 });

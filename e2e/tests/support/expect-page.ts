@@ -40,3 +40,26 @@ export async function expectThumbSizedButtons(scope: Locator): Promise<Array<{ n
   expect(buttons.filter((button) => button.height < (button.small ? 40 : 44) - 0.5)).toEqual([]);
   return buttons;
 }
+
+/**
+ * Every visible element matching `selector` inside the scope (links standing alone as controls, an icon that acts)
+ * is at least `min` CSS px: 44 px high for a link, as the phone rule holds buttons; at least 24 x 24 for an icon's
+ * target. Source: W3C WCAG 2.2, Success Criterion 2.5.8 Target Size (Minimum), 24 x 24 CSS px; 2.5.5 (Enhanced),
+ * 44 x 44 CSS px. Answers the sizes it measured, by name.
+ */
+export async function expectTargetsAtLeast(
+  scope: Locator | Page,
+  selector: string,
+  min: { width: number; height: number },
+): Promise<Array<{ name: string; width: number; height: number }>> {
+  const targets = await scope.locator(`${selector} >> visible=true`).evaluateAll((elements) =>
+    elements.map((element) => {
+      const box = element.getBoundingClientRect();
+      return { name: (element.getAttribute('aria-label') ?? element.textContent ?? '').trim(), width: box.width, height: box.height };
+    }),
+  );
+  expect(targets.length).toBeGreaterThan(0);
+  // a failure lists each target under the floor with its measured size
+  expect(targets.filter((target) => target.width < min.width - 0.5 || target.height < min.height - 0.5)).toEqual([]);
+  return targets;
+}

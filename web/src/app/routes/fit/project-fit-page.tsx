@@ -104,7 +104,7 @@ export function ProjectFitPage() {
   return (
     <div className="fit-page">
       <Typography.Text className="fit-control">
-        <Link to={toProjectDetail(p.id)}>← {p.title}</Link>
+        <Link to={toProjectDetail(p.id)} className="back-link">← {p.title}</Link>
       </Typography.Text>
       <PageHeader
         eyebrow={p.customer?.name}

@@ -78,7 +78,7 @@ export function MeasurementSheetPage() {
   return (
     <div style={{ maxWidth: 760, margin: '0 auto' }}>
       <Typography.Text>
-        <Link to={toProjectDetail(p.id)}>← {p.title}</Link>
+        <Link to={toProjectDetail(p.id)} className="back-link">← {p.title}</Link>
       </Typography.Text>
       <PageHeader
         eyebrow={p.customer?.name}

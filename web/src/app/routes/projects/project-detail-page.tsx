@@ -46,7 +46,7 @@ export function ProjectDetailPage() {
   return (
     <>
       <Typography.Text>
-        <Link to={backTo}>← {user.role === 'customer' ? 'My projects' : 'Projects'}</Link>
+        <Link to={backTo} className="back-link">← {user.role === 'customer' ? 'My projects' : 'Projects'}</Link>
       </Typography.Text>
       <PageHeader
         eyebrow={user.role === 'customer' ? user.shop.name : p.customer?.name}

@@ -16,7 +16,7 @@ export function WorkOrderPage() {
   return (
     <>
       <Typography.Text className="no-print">
-        <Link to={paths.workOrders}>← Work orders</Link>
+        <Link to={paths.workOrders} className="back-link">← Work orders</Link>
       </Typography.Text>
       <WorkOrderSheet order={order.data} canWork={canWorkOrders(user.role)} projectPath={toProjectDetail(order.data.projectId)} />
     </>

@@ -39,7 +39,7 @@ export function WorkOrdersTable({ state, toWorkOrder }: WorkOrdersTableProps) {
             narrow ? (
               <Flex vertical gap={2} data-testid={`work-order-${order.label}`}>
                 <Flex justify="space-between" align="baseline" gap={8}>
-                  <Link to={toWorkOrder(order.id)}>{order.label}</Link>
+                  <Link to={toWorkOrder(order.id)} className="record-link">{order.label}</Link>
                   <WorkOrderStateTag state={order.state} />
                 </Flex>
                 <span>
@@ -51,7 +51,7 @@ export function WorkOrdersTable({ state, toWorkOrder }: WorkOrdersTableProps) {
                 </Typography.Text>
               </Flex>
             ) : (
-              <Link to={toWorkOrder(order.id)}>{order.label}</Link>
+              <Link to={toWorkOrder(order.id)} className="record-link">{order.label}</Link>
             ),
         },
         {
