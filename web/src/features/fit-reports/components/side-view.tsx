@@ -157,6 +157,10 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
 
   return (
     <figure className="fit-side-view" data-testid="side-view" style={{ margin: 0 }}>
+      {/* above the frame, where it is read before the cut-off right edge, not under a drawing taller than the screen */}
+      <Typography.Text type="secondary" className="drawing-scroll-hint" style={{ fontSize: 12 }}>
+        Swipe the drawing sideways to see all of it.
+      </Typography.Text>
       <div className="drawing-scroll" data-testid="side-view-scroll">
         <div ref={drawingRef} style={{ minWidth: MIN_DRAWING_PX }}>
           <svg
@@ -332,9 +336,6 @@ export function SideView({ spec, findings = [], window, proposed, maxDimensions 
           </svg>
         </div>
       </div>
-      <Typography.Text type="secondary" className="drawing-scroll-hint" style={{ fontSize: 12 }}>
-        Swipe the drawing sideways to see all of it.
-      </Typography.Text>
       <figcaption>
         <Flex wrap gap="4px 16px" style={{ marginTop: 8, fontSize: 13 }} className="fit-legend">
           {legend

@@ -45,7 +45,10 @@ describe('SideView on a phone', () => {
     const drawing = frame.firstElementChild as HTMLElement;
     expect(drawing.style.minWidth).toBe('640px');
     expect(within(drawing).getByRole('img', { name: /Side view of the engine in the chassis/ })).toBeInTheDocument();
-    expect(screen.getByText('Swipe the drawing sideways to see all of it.').className).toContain('drawing-scroll-hint');
+    const hint = screen.getByText('Swipe the drawing sideways to see all of it.');
+    expect(hint.className).toContain('drawing-scroll-hint');
+    // the hint comes before the frame, so it is read before the drawing's cut-off right edge
+    expect(hint.compareDocumentPosition(frame) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
   });
 });
 
