@@ -3,12 +3,31 @@ import { openBrowser, saveScreenshot, type BrowserSession } from './support/brow
 import { makeJpeg } from './support/images';
 import { expectFitsWidth, expectText, expectThumbSizedButtons, expectVisible } from './support/expect-page';
 import { signInAs } from './support/session';
+import { withE2eDatabase } from './support/database';
 
 const PHONE = { width: 390, height: 844 };
 const PROJECT = DEMO_PROJECT_IDS.ridgeback;
 
 describe("the customer's own photos: added before the truck arrives, accepted or replaced by the fabricator", () => {
   let browser: BrowserSession;
+  let signOff: { signedOffAt: Date | null; signedOffById: string | null } | undefined;
+
+  // The measurement journey signs this sheet off, and a signed-off sheet keeps its photos; these steps need it open
+  // whichever journey ran first, and leave the sign-off as they found it.
+  beforeAll(async () => {
+    signOff = await withE2eDatabase(async (db) => {
+      const [rows] = await db.query('SELECT signedOffAt, signedOffById FROM measurement_sheets WHERE projectId = ?', [PROJECT]);
+      await db.query('UPDATE measurement_sheets SET signedOffAt = NULL, signedOffById = NULL WHERE projectId = ?', [PROJECT]);
+      return (rows as Array<{ signedOffAt: Date | null; signedOffById: string | null }>)[0];
+    });
+  });
+
+  afterAll(async () => {
+    if (!signOff?.signedOffAt) return;
+    await withE2eDatabase((db) =>
+      db.query('UPDATE measurement_sheets SET signedOffAt = ?, signedOffById = ? WHERE projectId = ?', [signOff!.signedOffAt, signOff!.signedOffById, PROJECT]),
+    );
+  });
 
   afterEach(async () => {
     await browser?.close();
