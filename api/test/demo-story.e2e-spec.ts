@@ -35,9 +35,13 @@ describe('the demo story: one job at each stage, through the API', () => {
 
   afterAll(async () => {
     // The other suites start from the minimal seed: leave it as they expect.
-    await jobsSettled(t.dataSource);
-    await resetData(t.dataSource);
-    await stop();
+    // A failed set-up still closes the app, so the next suites get its port.
+    try {
+      await jobsSettled(t.dataSource);
+      await resetData(t.dataSource);
+    } finally {
+      await stop?.();
+    }
   });
 
   it('leaves one new job at each stage beside the two demo projects at intake', async () => {

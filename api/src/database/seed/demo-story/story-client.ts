@@ -10,6 +10,9 @@ export class StoryHttpError extends Error {
   }
 }
 
+/** How long one request of the story may take; the slowest (a quote with its PDF on a busy machine) takes seconds. */
+const REQUEST_TIMEOUT_MS = 60_000;
+
 export class StoryClient {
   private constructor(
     private readonly apiUrl: string,
@@ -57,7 +60,12 @@ export class StoryClient {
       headers['content-type'] = 'application/json';
       payload = JSON.stringify(body);
     }
-    const response = await fetch(`${this.apiUrl}${path}`, { method, headers, body: payload });
+    // A request that never answers fails the story with its name instead of holding it (and `npm start`) forever.
+    const response = await fetch(`${this.apiUrl}${path}`, { method, headers, body: payload, signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS) }).catch(
+      (error: unknown) => {
+        throw new Error(`${method} ${path} did not answer: ${error instanceof Error ? error.message : String(error)}`);
+      },
+    );
     const text = await response.text();
     let parsed: unknown = text;
     try {

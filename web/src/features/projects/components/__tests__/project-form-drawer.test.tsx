@@ -35,7 +35,8 @@ describe('ProjectFormDrawer: whose vehicle', () => {
     const post = mockCreate();
     renderWithApp(<ProjectFormDrawer open onClose={vi.fn()} customerOptions={[]} noOtherCustomers />);
     expect(await screen.findByRole('radio', { name: 'My own truck' })).toBeChecked();
-    expect(screen.queryByRole('combobox', { name: 'Customer' })).toBeNull();
+    // The picker follows the watched choice one render after the radio is set.
+    await waitFor(() => expect(screen.queryByRole('combobox', { name: 'Customer' })).toBeNull());
     expect(screen.getByTestId('own-truck-note')).toBeInTheDocument();
     await fillTitleAndVehicle();
     await userEvent.click(screen.getByRole('button', { name: 'Open project' }));
