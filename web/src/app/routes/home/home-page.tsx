@@ -34,11 +34,10 @@ export function HomePage() {
  * home leads with their projects. Any other shop gets the shop's home.
  */
 function OwnersHome() {
-  const user = useSignedInUser();
   const members = useMemberships();
   const customers = useCustomers({ page: 1, pageSize: 2 });
   if (members.isPending || customers.isPending) return <LoadingState rows={6} />;
   const alone = members.data !== undefined && members.data.length <= 1;
-  const onlySelf = customers.data !== undefined && customers.data.items.every((c) => c.userId === user.id);
+  const onlySelf = customers.data !== undefined && customers.data.items.every((c) => c.ownRecord);
   return alone && onlySelf ? <BuilderHome /> : <OwnerHome />;
 }

@@ -7,8 +7,8 @@ import { createTestQueryClient, renderWithApp } from '@/test/render';
 import { HomePage } from '../home-page';
 
 const owner = userStub('owner');
-const ownRecord = { id: 'cust-self', name: owner.name, email: owner.email, phone: null, notes: null, userId: owner.id };
-const otherCustomer = { ...ownRecord, id: 'cust-2', name: 'Marlo Penhallow', email: 'marlo@example.com', userId: null };
+const ownRecord = { id: 'cust-self', name: owner.name, email: owner.email, phone: null, notes: null, userId: owner.id, ownRecord: true };
+const otherCustomer = { ...ownRecord, id: 'cust-2', name: 'Marlo Penhallow', email: 'marlo@example.com', userId: null, ownRecord: false };
 const member = { id: 'm-1', userId: owner.id, role: 'owner', user: { id: owner.id, name: owner.name, email: owner.email } };
 const ownProject = {
   id: 'p-own',
