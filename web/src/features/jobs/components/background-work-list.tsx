@@ -145,14 +145,7 @@ export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListP
               >
                 <Flex justify="space-between" align="flex-start" gap={12} wrap>
                   <div style={{ minWidth: 0, flex: '1 1 280px' }}>
-                    <Typography.Text strong style={{ overflowWrap: 'anywhere' }}>
-                      {jobSubjectWords(job.subject).text}
-                    </Typography.Text>
-                    {jobSubjectWords(job.subject).reference && (
-                      <Typography.Text type="secondary" style={{ display: 'block', fontSize: 12, overflowWrap: 'anywhere' }}>
-                        Provider reference {jobSubjectWords(job.subject).reference}
-                      </Typography.Text>
-                    )}
+                    <JobSubject subject={job.subject} />
                     <Flex gap={6} wrap align="center" style={{ marginTop: 4 }}>
                       <Tag color={JOB_STATE_COLOURS[job.state]} style={{ marginInlineEnd: 0 }}>
                         {JOB_STATE_LABELS[job.state]}
@@ -193,5 +186,22 @@ export function BackgroundWorkList({ state, onStateChange }: BackgroundWorkListP
         </>
       )}
     </Card>
+  );
+}
+
+/** A job's subject in words, with a payment provider's reference (if any) in small print under it. */
+function JobSubject({ subject }: { subject: string }) {
+  const { text, reference } = jobSubjectWords(subject);
+  return (
+    <>
+      <Typography.Text strong style={{ overflowWrap: 'anywhere' }}>
+        {text}
+      </Typography.Text>
+      {reference && (
+        <Typography.Text type="secondary" style={{ display: 'block', fontSize: 12, overflowWrap: 'anywhere' }}>
+          Provider reference {reference}
+        </Typography.Text>
+      )}
+    </>
   );
 }
