@@ -143,11 +143,13 @@ export class MeasurementsService {
   }
 
   /**
-   * The project's sheet, locked for this transaction. The row is made first, in a statement of its own: a locking
-   * read of a row that does not exist yet takes a gap lock, and two first readings on different projects in the same
-   * gap would each wait for the other's insert (a deadlock, which reached the user as a 500).
+   * Runs `work` in a transaction with the project's sheet row locked. The row is made first, in a statement of its own
+   * before the transaction: a locking read of a row that does not exist yet takes a gap lock, and two first readings on
+   * different projects in the same gap would each wait for the other's insert (a deadlock, which reached the user as a
+   * 500). It runs before the transaction, not inside it on a second connection: a transaction holding one pooled
+   * connection while it waits for another hangs for good once parallel saves hold every connection of the pool.
    */
-  private async sheetFor(manager: EntityManager, user: Shop, projectId: string): Promise<MeasurementSheet> {
+  private async inLockedSheet<T>(user: Shop, projectId: string, work: (manager: EntityManager, sheet: MeasurementSheet) => Promise<T>): Promise<T> {
     await this.dataSource
       .createQueryBuilder()
       .insert()
@@ -155,7 +157,10 @@ export class MeasurementsService {
       .values({ id: randomUUID(), shopId: user.shopId, projectId, signedOffAt: null, signedOffById: null })
       .orIgnore()
       .execute();
-    return manager.findOneOrFail(MeasurementSheet, { where: { shopId: user.shopId, projectId }, lock: { mode: 'pessimistic_write' } });
+    return this.dataSource.transaction(async (manager) => {
+      const sheet = await manager.findOneOrFail(MeasurementSheet, { where: { shopId: user.shopId, projectId }, lock: { mode: 'pessimistic_write' } });
+      return work(manager, sheet);
+    });
   }
 
   private event(user: AuthUser, sheet: MeasurementSheet, fields: Partial<MeasurementSheetEvent>): MeasurementSheetEvent {
@@ -177,8 +182,7 @@ export class MeasurementsService {
       if (!tol.ok || tol.value < 0) throw MeasurementErrors.badValue(`tolerance: ${tol.ok ? 'must not be negative' : tol.message}`);
       tolerance = tol.value;
     }
-    await this.dataSource.transaction(async (manager) => {
-      const sheet = await this.sheetFor(manager, user, project.id);
+    await this.inLockedSheet(user, project.id, async (manager, sheet) => {
       const reason = input.reason?.trim() || null;
       if (sheet.signedOffAt && !reason) throw MeasurementErrors.reasonRequired();
       // the sheet row is locked, so no other save of this sheet runs between this read and the write below
@@ -225,8 +229,7 @@ export class MeasurementsService {
     const project = await this.projects.get(user, projectId);
     if (!project.chassisModelId) throw MeasurementErrors.noChassis();
     const points = await this.template(user, project.chassisModelId);
-    await this.dataSource.transaction(async (manager) => {
-      const sheet = await this.sheetFor(manager, user, project.id);
+    await this.inLockedSheet(user, project.id, async (manager, sheet) => {
       if (sheet.signedOffAt) throw MeasurementErrors.alreadySignedOff();
       const measured = await manager.find(MeasurementValue, { where: { sheetId: sheet.id } });
       const missing = missingPoints(points, new Set(measured.map((v) => v.pointId)));
@@ -260,8 +263,7 @@ export class MeasurementsService {
     const written: string[] = [];
     let replaced: MeasurementPhoto | null = null;
     try {
-      const rows = await this.dataSource.transaction(async (manager) => {
-        const sheet = await this.sheetFor(manager, user, project.id);
+      const rows = await this.inLockedSheet(user, project.id, async (manager, sheet) => {
         if (input.replacesPhotoId) {
           replaced = await manager.findOne(MeasurementPhoto, { where: { id: input.replacesPhotoId.toLowerCase(), sheetId: sheet.id } });
           if (!replaced) throw MeasurementErrors.photoNotFound();
