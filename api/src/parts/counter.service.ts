@@ -59,24 +59,19 @@ export class CounterService {
         .createQueryBuilder('s')
         .setLock('pessimistic_write')
         .where('s.partId = :partId AND s.shopId = :shopId', { partId: line.partId, shopId: user.shopId })
-        .orderBy('s.location', 'ASC')
+        .orderBy('s.id', 'ASC') // stock rows are locked in id order everywhere
         .getMany();
       const usable = rows.filter((row) => !location || row.location === location);
-      const best = usable.sort((a, b) => b.onHand - b.reserved - (a.onHand - a.reserved))[0];
+      // the most free units first; between equals, the first location by name
+      const best = usable.sort((a, b) => b.onHand - b.reserved - (a.onHand - a.reserved) || a.location.localeCompare(b.location))[0];
       const free = best ? best.onHand - best.reserved : 0;
       if (!best || free < line.quantity) throw PartsErrors.outOfStock(line.sku, free, line.quantity);
-      await this.audit.record(manager, {
-        shopId: user.shopId,
-        actor: user,
-        kind: 'stock',
+      await this.moveUnits(manager, user, line, best, {
         action: 'stock.reserved',
-        subjectId: line.id,
         summary: `${line.quantity} × ${line.sku} reserved at ${best.location}.`,
-        before: { status: line.status, location: best.location, onHand: best.onHand, reserved: best.reserved },
-        after: { status: 'reserved', location: best.location, onHand: best.onHand, reserved: best.reserved + line.quantity },
+        reserved: line.quantity,
+        line: { status: 'reserved', stockId: best.id },
       });
-      await manager.update(PartStock, { id: best.id }, { reserved: best.reserved + line.quantity });
-      await manager.update(CounterLine, { id: line.id }, { status: 'reserved', stockId: best.id, updatedById: user.userId });
     });
     return this.view(user, id);
   }
@@ -86,19 +81,13 @@ export class CounterService {
       const line = await this.lockedLine(manager, user, id);
       if (line.status === 'issued') throw PartsErrors.lineIssued(line.sku);
       if ((line.status !== 'reserved' && line.status !== 'received') || !line.stockId) throw PartsErrors.lineState(line.sku, line.status, 'released');
-      const stock = await manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id', { id: line.stockId }).getOne();
-      await this.audit.record(manager, {
-        shopId: user.shopId,
-        actor: user,
-        kind: 'stock',
+      const [stock] = await this.lockedStock(manager, user.shopId, [line.stockId]);
+      await this.moveUnits(manager, user, line, stock ?? null, {
         action: 'stock.released',
-        subjectId: line.id,
         summary: `${line.quantity} × ${line.sku} released${stock ? ` at ${stock.location}` : ''}.`,
-        before: { status: line.status, ...(stock && { location: stock.location, onHand: stock.onHand, reserved: stock.reserved }) },
-        after: { status: 'open', ...(stock && { location: stock.location, onHand: stock.onHand, reserved: Math.max(0, stock.reserved - line.quantity) }) },
+        reserved: -line.quantity,
+        line: { status: 'open', stockId: null },
       });
-      if (stock) await manager.update(PartStock, { id: stock.id }, { reserved: Math.max(0, stock.reserved - line.quantity) });
-      await manager.update(CounterLine, { id: line.id }, { status: 'open', stockId: null, updatedById: user.userId });
     });
     return this.view(user, id);
   }
@@ -156,7 +145,7 @@ export class CounterService {
       if (line.status === 'issued') throw PartsErrors.lineState(line.sku, 'already issued to the job', 'issued again');
       if (!SET_ASIDE_STATUSES.includes(line.status)) throw PartsErrors.notSetAside(line.sku, line.status);
       await this.assertJobInProgress(manager, user.shopId, line.projectId);
-      await this.issueLocked(manager, user, line);
+      await this.issueLocked(manager, user, [line]);
     });
     return this.view(user, id);
   }
@@ -168,7 +157,7 @@ export class CounterService {
       const lines = await this.lockedSetAside(manager, user.shopId, { planId: plan.id });
       if (lines.length === 0) throw PartsErrors.nothingToIssue();
       await this.assertJobInProgress(manager, user.shopId, plan.projectId);
-      for (const line of lines) await this.issueLocked(manager, user, line);
+      await this.issueLocked(manager, user, lines);
     });
     return this.lines(user, planId);
   }
@@ -179,7 +168,7 @@ export class CounterService {
    */
   async issueRestOfJob(manager: EntityManager, user: AuthUser, projectId: string): Promise<number> {
     const lines = await this.lockedSetAside(manager, user.shopId, { projectId });
-    for (const line of lines) await this.issueLocked(manager, user, line);
+    await this.issueLocked(manager, user, lines);
     return lines.length;
   }
 
@@ -188,25 +177,19 @@ export class CounterService {
     await this.dataSource.transaction(async (manager) => {
       const line = await this.lockedLine(manager, user, id);
       if (line.status !== 'issued') throw PartsErrors.notIssued(line.sku, line.status);
-      const stock = line.stockId ? await this.lockedStock(manager, user.shopId, line.stockId) : null;
+      const [stock] = line.stockId ? await this.lockedStock(manager, user.shopId, [line.stockId]) : [];
       if (!stock) throw PartsErrors.noStockLocation(line.sku);
-      await this.audit.record(manager, {
-        shopId: user.shopId,
-        actor: user,
-        kind: 'stock',
+      await this.moveUnits(manager, user, line, stock, {
         action: 'stock.returned',
-        subjectId: line.id,
         summary: `${line.quantity} × ${line.sku} returned to the shelf at ${stock.location}.`,
-        before: { status: line.status, location: stock.location, onHand: stock.onHand, reserved: stock.reserved },
-        after: { status: 'open', location: stock.location, onHand: stock.onHand + line.quantity, reserved: stock.reserved },
+        onHand: line.quantity,
+        line: { status: 'open', stockId: null, issuedAt: null },
       });
-      await manager.update(PartStock, { id: stock.id }, { onHand: stock.onHand + line.quantity });
-      await manager.update(CounterLine, { id: line.id }, { status: 'open', stockId: null, issuedAt: null, updatedById: user.userId });
     });
     return this.view(user, id);
   }
 
-  /** Set-aside lines locked in id order (every issuer takes them in the same order), then each one's stock row. */
+  /** Set-aside lines locked in id order (every issuer takes them in the same order); their stock rows come after. */
   private async lockedSetAside(manager: EntityManager, shopId: string, where: { planId: string } | { projectId: string }): Promise<CounterLine[]> {
     const [column, value] = 'planId' in where ? ['planId', where.planId] : ['projectId', where.projectId];
     return manager
@@ -218,8 +201,16 @@ export class CounterService {
       .getMany();
   }
 
-  private lockedStock(manager: EntityManager, shopId: string, stockId: string): Promise<PartStock | null> {
-    return manager.getRepository(PartStock).createQueryBuilder('s').setLock('pessimistic_write').where('s.id = :id AND s.shopId = :shopId', { id: stockId, shopId }).getOne();
+  /** Stock rows locked in id order, as every counter action locks them: always after the line(s), never before. */
+  private async lockedStock(manager: EntityManager, shopId: string, stockIds: string[]): Promise<PartStock[]> {
+    if (stockIds.length === 0) return [];
+    return manager
+      .getRepository(PartStock)
+      .createQueryBuilder('s')
+      .setLock('pessimistic_write')
+      .where('s.id IN (:...ids) AND s.shopId = :shopId', { ids: stockIds, shopId })
+      .orderBy('s.id', 'ASC')
+      .getMany();
   }
 
   /** Parts go to a job whose work order is open (ready or in the bay); before the deposit or after the finish, 409. */
@@ -228,22 +219,50 @@ export class CounterService {
     if (open === 0) throw PartsErrors.noWorkOrder();
   }
 
-  /** Takes a locked set-aside line's units off the shelf: on hand and set aside both drop by its quantity. */
-  private async issueLocked(manager: EntityManager, user: AuthUser, line: CounterLine): Promise<void> {
-    const stock = line.stockId ? await this.lockedStock(manager, user.shopId, line.stockId) : null;
-    const after = stock && { onHand: Math.max(0, stock.onHand - line.quantity), reserved: Math.max(0, stock.reserved - line.quantity) };
+  /** Takes locked set-aside lines' units off the shelf: on hand and set aside both drop by each line's quantity. */
+  private async issueLocked(manager: EntityManager, user: AuthUser, lines: CounterLine[]): Promise<void> {
+    const ids = [...new Set(lines.flatMap((line) => (line.stockId ? [line.stockId] : [])))];
+    const stocks = new Map((await this.lockedStock(manager, user.shopId, ids)).map((row) => [row.id, row]));
+    for (const line of lines) {
+      const stock = (line.stockId && stocks.get(line.stockId)) || null;
+      await this.moveUnits(manager, user, line, stock, {
+        action: 'stock.issued',
+        summary: `${line.quantity} × ${line.sku} issued to the job${stock ? ` from ${stock.location}` : ''}.`,
+        onHand: -line.quantity,
+        reserved: -line.quantity,
+        line: { status: 'issued', issuedAt: new Date() },
+      });
+    }
+  }
+
+  /**
+   * One move of a locked line's units, in the caller's transaction: the audit entry (the line's state and the stock
+   * row before and after), the stock row's new counts (`onHand` and `reserved` are changes, never below 0), the line's
+   * new state. The stock row object is left holding its new counts, for a next move of the same transaction.
+   */
+  private async moveUnits(
+    manager: EntityManager,
+    user: AuthUser,
+    line: CounterLine,
+    stock: PartStock | null,
+    move: { action: string; summary: string; onHand?: number; reserved?: number; line: Partial<CounterLine> & { status: CounterStatus } },
+  ): Promise<void> {
+    const after = stock && { onHand: Math.max(0, stock.onHand + (move.onHand ?? 0)), reserved: Math.max(0, stock.reserved + (move.reserved ?? 0)) };
     await this.audit.record(manager, {
       shopId: user.shopId,
       actor: user,
       kind: 'stock',
-      action: 'stock.issued',
+      action: move.action,
       subjectId: line.id,
-      summary: `${line.quantity} × ${line.sku} issued to the job${stock ? ` from ${stock.location}` : ''}.`,
+      summary: move.summary,
       before: { status: line.status, ...(stock && { location: stock.location, onHand: stock.onHand, reserved: stock.reserved }) },
-      after: { status: 'issued', ...(stock && after && { location: stock.location, ...after }) },
+      after: { status: move.line.status, ...(stock && after && { location: stock.location, ...after }) },
     });
-    if (stock && after) await manager.update(PartStock, { id: stock.id }, after);
-    await manager.update(CounterLine, { id: line.id }, { status: 'issued', issuedAt: new Date(), updatedById: user.userId });
+    if (stock && after) {
+      await manager.update(PartStock, { id: stock.id }, after);
+      Object.assign(stock, after);
+    }
+    await manager.update(CounterLine, { id: line.id }, { ...move.line, updatedById: user.userId });
   }
 
   async view(user: Pick<AuthUser, 'shopId'>, id: string): Promise<CounterLineView> {
