@@ -7,6 +7,7 @@ import { DataSource, EntityManager, In } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { AuthUser } from '../common/tenant/auth-user';
 import { escapeFormula } from './csv-cells';
+import { mapCounterLine } from './parts-plan.mapper';
 import { WorkOrder } from '../work-orders/work-order.entity';
 import { CounterLine, PartStock } from './part.entity';
 import { PartsErrors } from './parts.errors';
@@ -278,11 +279,10 @@ export class CounterService {
    */
   async pickListCsv(user: Pick<AuthUser, 'shopId'>, planId: string): Promise<string> {
     const views = await this.lines(user, planId);
-    const rows = views.map(({ line, stock }) => {
-      const from = stock.find((s) => s.id === line.stockId) ?? stock[0];
-      const available = stock.reduce((sum, s) => sum + s.onHand - s.reserved, 0);
-      const state = counterLineStateWords({ status: line.status, quantity: line.quantity, available });
-      return [line.sku, line.description, line.quantity, from?.location ?? '', from?.bin ?? '', state].map(escapeFormula);
+    // the line as the counter screen gets it, so the words are the screen's from the same figures
+    const rows = views.map(mapCounterLine).map((line) => {
+      const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
+      return [line.sku, line.description, line.quantity, from?.location ?? '', from?.bin ?? '', counterLineStateWords(line)].map(escapeFormula);
     });
     return Papa.unparse({ fields: ['sku', 'description', 'quantity', 'location', 'bin', 'status'], data: rows });
   }
