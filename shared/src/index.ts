@@ -73,6 +73,7 @@ export * from './quoting/exact-money';
 export * from './quoting/money-format';
 export * from './quoting/quote-money';
 export * from './quoting/quote-status-words';
+export * from './jobs/job-state-words';
 export * from './quoting/revision-diff';
 export * from './quoting/total-rows';
 export * from './parts-plan';

@@ -1,4 +1,4 @@
-import { COUNTER_STATUS_LABELS, formatMoney, QUOTE_STATUS_LABELS } from '@swapwright/shared';
+import { COUNTER_STATUS_LABELS, formatMoney, JOB_STATE_LABELS, QUOTE_STATUS_LABELS } from '@swapwright/shared';
 import { formatDateTime } from '@/lib/dates';
 
 /** The recorded fields in words, as the owner reads them in the audit log. */
@@ -44,6 +44,7 @@ function stateWords(action: string, code: string): string {
   if (action.startsWith('quote.')) return QUOTE_STATUS_LABELS[code as keyof typeof QUOTE_STATUS_LABELS] ?? humanise(code);
   if (action.startsWith('stock.') || action.startsWith('counter.')) return COUNTER_STATUS_LABELS[code as keyof typeof COUNTER_STATUS_LABELS] ?? humanise(code);
   if (action.startsWith('deposit.') || action.startsWith('payment.')) return PAYMENT_STATE_WORDS[code] ?? humanise(code);
+  if (action.startsWith('job.')) return JOB_STATE_LABELS[code as keyof typeof JOB_STATE_LABELS] ?? humanise(code);
   return humanise(code);
 }
 

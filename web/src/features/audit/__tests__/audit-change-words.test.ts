@@ -26,7 +26,7 @@ describe('the audit log in words', () => {
 
   it('gives any other field and code readable words, and nothing recorded as a dash', () => {
     expect(changeWords('shop.rates-changed', { laborRatePerHour: 135 })).toBe('Labor rate per hour: 135');
-    expect(changeWords('job.retried', { state: 'queued', attempts: 0 })).toBe('State: Queued, Attempts: 0');
+    expect(changeWords('job.retried', { state: 'queued', attempts: 0 })).toBe('State: Waiting, Attempts: 0');
     expect(changeWords('quote.sent', null)).toBe('—');
     expect(changeWords('payment.settled', { eventId: 'evt_1' })).toBe('—');
   });
