@@ -6,7 +6,7 @@
  * Warm-up runs first so the JIT has compiled the hot paths; times are wall-clock per call.
  */
 import os from 'node:os';
-import { DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../src/fixtures/demo-fit-spec';
+import { DEMO_CENTER_SUMP_PAN, DEMO_FIT_SPEC, DEMO_REAR_SUMP_PAN } from '../src/fixtures/demo-fit-spec';
 import { runFitCheck } from '../src/fit-report/fit-report';
 import { computeFitWindow } from '../src/fit-window/fit-window';
 import { proposePlacement } from '../src/fit-window/placement-proposal';
@@ -27,10 +27,19 @@ function measure(label: string, runs: number, warmup: number, fn: () => void): {
 }
 
 const rearSump = { ...DEMO_FIT_SPEC, oilPan: DEMO_REAR_SUMP_PAN };
+// The centre-sump pan fitted, with a pan-left dipstick: the crossmember, pan/pickup/pump and dipstick checks all fail
+// and each offers candidate pans judged against every rule below the engine (once per run, shared between them).
+const centreSump = {
+  ...DEMO_FIT_SPEC,
+  oilPan: DEMO_CENTER_SUMP_PAN,
+  engine: { ...DEMO_FIT_SPEC.engine, dipstickLocation: 'pan-left' as const },
+  candidates: { ...DEMO_FIT_SPEC.candidates, oilPans: [...(DEMO_FIT_SPEC.candidates?.oilPans ?? []), DEMO_CENTER_SUMP_PAN] },
+};
 console.log(`Swapwright fit engine bench — node ${process.version}, ${os.cpus().length} CPUs (${os.cpus()[0]?.model ?? 'unknown'}), load ${os.loadavg()[0].toFixed(2)}`);
 
 const check = measure('runFitCheck, demo spec (stock pan failing, remedies computed)', 2000, 300, () => runFitCheck(DEMO_FIT_SPEC));
 measure('runFitCheck, demo spec with the rear-sump pan', 2000, 300, () => runFitCheck(rearSump));
+measure('runFitCheck, centre-sump pan (three checks offer pans)', 2000, 300, () => runFitCheck(centreSump));
 const windowRun = () =>
   computeFitWindow(rearSump, { setbackFromMm: DEMO_FIT_SPEC.placement.setbackMm - 150, setbackToMm: DEMO_FIT_SPEC.placement.setbackMm + 150, stepMm: 1 });
 const win = measure('fit window, 300 mm of setback at 1 mm steps (rear-sump pan)', 60, 15, windowRun);

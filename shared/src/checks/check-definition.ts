@@ -2,10 +2,22 @@ import type { CheckGroup, CheckStatus, Finding, FigureUnit, Remedy } from '../ty
 import type { FitSpec } from '../types/fit-spec';
 import type { FitSettings } from '../settings/fit-settings';
 import type { WindowTermsOf } from './envelope/window-terms';
+import type { PanJudgement } from './envelope/pan-clearance';
 
 export interface CheckContext {
   spec: FitSpec;
   settings: FitSettings;
+  /**
+   * One run's memo of the candidate pans judged at the spec's own placement, by pan id (see `judgeCandidatePans`):
+   * the below-pan checks, the ground clearance and the oiling checks all offer pans, and share one judgement of
+   * each within a run that passes the same context to every check (`runFitCheck`). Absent: nothing is kept.
+   */
+  judgedPans?: Map<string, PanJudgement>;
+}
+
+/** A context for running several checks on one spec and settings, sharing work between them (see {@link CheckContext}). */
+export function sharedCheckContext(spec: FitSpec, settings: FitSettings): CheckContext {
+  return { spec, settings, judgedPans: new Map() };
 }
 
 export interface CheckDefinition {

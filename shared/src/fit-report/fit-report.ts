@@ -2,7 +2,7 @@ import { ENVELOPE_CHECKS } from '../checks/envelope';
 import { MOUNT_CHECKS } from '../checks/mounts/engine-mounts';
 import { SYSTEM_CHECKS } from '../checks/system-checks';
 import { TRANSMISSION_MOUNT_CHECKS } from '../checks/transmission-mount';
-import type { CheckDefinition } from '../checks/check-definition';
+import { sharedCheckContext, type CheckContext, type CheckDefinition } from '../checks/check-definition';
 import { resolveFitSettings, type FitSettings } from '../settings/fit-settings';
 import { STATUS_SEVERITY, type CheckStatus, type FigureUnit, type Finding } from '../types/finding';
 import type { FitSpec, Placement } from '../types/fit-spec';
@@ -78,9 +78,9 @@ export function worstStatus(summary: FitReportSummary): CheckStatus {
   return present.reduce<CheckStatus>((worst, status) => (STATUS_SEVERITY[status] > STATUS_SEVERITY[worst] ? status : worst), 'ok');
 }
 
-function runOne(check: CheckDefinition, spec: FitSpec, settings: FitSettings): Finding {
+function runOne(check: CheckDefinition, context: CheckContext): Finding {
   try {
-    return check.run({ spec, settings });
+    return check.run(context);
   } catch (error) {
     // One broken rule must not hide the others: report it as unknown with the reason.
     return {
@@ -104,7 +104,9 @@ function runOne(check: CheckDefinition, spec: FitSpec, settings: FitSettings): F
 /** Runs every envelope, mount and transmission-mount check and the system checks on one placement. */
 export function runFitCheck(spec: FitSpec, settings?: Partial<FitSettings>): FitReport {
   const resolved = resolveFitSettings(settings);
-  const findings = allChecks().map((check) => runOne(check, spec, resolved));
+  // One context for every check: the candidate pans several checks offer are judged once per run.
+  const context = sharedCheckContext(spec, resolved);
+  const findings = allChecks().map((check) => runOne(check, context));
   const shortfalls = findings.filter((f) => f.status === 'tight' || f.status === 'fails').sort(compareShortfalls);
   return {
     engineVersion: FIT_ENGINE_VERSION,

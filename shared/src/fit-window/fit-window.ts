@@ -1,4 +1,5 @@
 import { ENVELOPE_CHECKS } from '../checks/envelope';
+import { sharedCheckContext } from '../checks/check-definition';
 import { placeEngine, type PlacedEngine } from '../checks/envelope/placed-engine';
 import type { WindowBound } from '../checks/envelope/window-terms';
 import { goldenSectionMax } from '../geometry/golden-section';
@@ -350,8 +351,8 @@ function maximiseOnInterval(model: ColumnModel, fromMm: number, toMm: number): {
 
 /** Margins of the envelope checks at a placement, from the check functions themselves. */
 export function envelopeMargins(spec: FitSpec, settings: FitSettings, placement: Placement): WindowMargin[] {
-  const placed = { ...spec, placement };
-  return ENVELOPE_CHECKS.map((check) => check.run({ spec: placed, settings }))
+  const context = sharedCheckContext({ ...spec, placement }, settings);
+  return ENVELOPE_CHECKS.map((check) => check.run(context))
     .filter((finding) => finding.margin !== null)
     .map((finding) => ({ checkId: finding.checkId, against: finding.against ?? '', marginMm: finding.margin as number, status: finding.status }));
 }
@@ -416,7 +417,8 @@ export function computeFitWindow(spec: FitSpec, options: FitWindowOptions = {}, 
       best.limitedBy = { checkId: smallest.checkId, against: smallest.against };
     }
   }
-  const notChecked = ENVELOPE_CHECKS.map((c) => c.run({ spec, settings }))
+  const checkContext = sharedCheckContext(spec, settings);
+  const notChecked = ENVELOPE_CHECKS.map((c) => c.run(checkContext))
     .filter((finding) => finding.status === 'unknown')
     .map((finding) => finding.checkId);
   return { tiltDeg, stepMm, columns, best, notChecked };

@@ -17,7 +17,8 @@ export const LOWEST_PART_WORDS: Record<LowestPart, string> = {
   transmission: 'the bellhousing or transmission case',
 };
 
-export function runGroundClearance({ spec, settings }: CheckContext): Finding {
+export function runGroundClearance(context: CheckContext): Finding {
+  const { spec, settings } = context;
   const fields = {
     checkId: GROUND_CLEARANCE_ID,
     group: 'envelope' as const,
@@ -36,7 +37,7 @@ export function runGroundClearance({ spec, settings }: CheckContext): Finding {
     const target = fig.status === 'fails' ? 0 : settings.tightBandMm;
     // A shallower pan helps only when the pan is what hangs lowest.
     if (low.part === 'oil pan') {
-      const shallow = evaluateCandidatePans(spec, settings, []).filter((c) => c.smallestMargin >= target);
+      const shallow = evaluateCandidatePans(context, []).filter((c) => c.smallestMargin >= target);
       remedies.push({
         kind: 'part',
         category: 'oil-pan',

@@ -97,13 +97,19 @@ export function judgePan(spec: FitSpec, settings: FitSettings, pan: OilPanSpec, 
 
 /**
  * The candidate pans that bolt to this engine's block (the fitted one aside) and that `accept` lets through, each
- * judged in the spec's placement (see {@link judgePan}), in the candidates' order.
+ * judged in the spec's placement (see {@link judgePan}), in the candidates' order. A pan already judged in this run
+ * (the context's `judgedPans`) is not placed and measured again.
  */
-export function judgeCandidatePans(spec: FitSpec, settings: FitSettings, accept: (pan: OilPanSpec) => boolean = () => true): PanJudgement[] {
+export function judgeCandidatePans({ spec, settings, judgedPans }: CheckContext, accept: (pan: OilPanSpec) => boolean = () => true): PanJudgement[] {
   const pattern = spec.engine.panRail.pattern;
-  return (spec.candidates?.oilPans ?? [])
-    .filter((pan) => pan.railPattern === pattern && pan.id !== spec.oilPan?.id && accept(pan))
-    .map((pan) => judgePan(spec, settings, pan));
+  const judge = (pan: OilPanSpec): PanJudgement => {
+    const known = judgedPans?.get(pan.id);
+    if (known) return known;
+    const judged = judgePan(spec, settings, pan);
+    judgedPans?.set(pan.id, judged);
+    return judged;
+  };
+  return (spec.candidates?.oilPans ?? []).filter((pan) => pan.railPattern === pattern && pan.id !== spec.oilPan?.id && accept(pan)).map(judge);
 }
 
 /** The judged pans that keep every rule below the engine, best first (largest smallest margin). */
@@ -136,7 +142,7 @@ export function leftOutPanWords(judged: PanJudgement): string {
  */
 export function panClearanceRefusals(spec: FitSpec, settings: FitSettings): Record<string, string> {
   const refusals: Record<string, string> = {};
-  for (const judged of judgeCandidatePans(spec, settings)) {
+  for (const judged of judgeCandidatePans({ spec, settings })) {
     if (judged.failing) refusals[judged.pan.id] = `${panMissWords(judged.failing)} at this placement`;
   }
   return refusals;
@@ -170,12 +176,8 @@ function clearingPans(judged: readonly PanJudgement[], kinds: readonly ChassisOb
  * below the engine: crossmember, steering, axle and ground clearance. Only pans that pass all of them and
  * clear this check are returned, best first (largest smallest margin).
  */
-export function evaluateCandidatePans(
-  spec: FitSpec,
-  settings: FitSettings,
-  kinds: readonly ChassisObstacle['kind'][],
-): PanCandidateResult[] {
-  return clearingPans(judgeCandidatePans(spec, settings), kinds);
+export function evaluateCandidatePans(context: CheckContext, kinds: readonly ChassisObstacle['kind'][]): PanCandidateResult[] {
+  return clearingPans(judgeCandidatePans(context), kinds);
 }
 
 export interface PanCheckConfig extends PanObstacleRule {
@@ -194,13 +196,14 @@ function sumpNeeded(spec: FitSpec, obstacle: ChassisObstacle, best: OilPanSpec |
   return obstacleMidX < panMidX ? 'rear' : 'front';
 }
 
-export function panRemedies(spec: FitSpec, settings: FitSettings, config: PanCheckConfig, worst: ObstacleGap, failing: boolean): Remedy[] {
+export function panRemedies(context: CheckContext, config: PanCheckConfig, worst: ObstacleGap, failing: boolean): Remedy[] {
+  const { spec, settings } = context;
   const remedies: Remedy[] = [];
   const pan = spec.oilPan as OilPanSpec;
   const required = settings.minGapBelowMm;
   // A failing check is brought to the limit; a tight one to the edge of the tight band.
   const target = failing ? 0 : settings.tightBandMm;
-  const judged = judgeCandidatePans(spec, settings);
+  const judged = judgeCandidatePans(context);
   const candidates = clearingPans(judged, config.kinds);
   const sumpPosition = sumpNeeded(spec, worst.obstacle, candidates[0]?.pan);
   remedies.push({
@@ -260,7 +263,7 @@ export function runPanCheck(context: CheckContext, config: PanCheckConfig): Find
     gap >= 0
       ? `The oil pan clears ${name} by ${mmWithInches(gap)}; at least ${mmWithInches(fig.required)} is required: ${marginWords(fig.margin, mmWithInches)}.`
       : `The oil pan runs ${mmWithInches(-gap)} into ${name}: it would have to rise ${mmWithInches(-gap)} just to touch free and ${mmWithInches(-fig.margin)} to leave the required ${mmWithInches(fig.required)}.`;
-  const remedies = fig.status === 'ok' ? [] : panRemedies(spec, settings, config, worst, fig.status === 'fails');
+  const remedies = fig.status === 'ok' ? [] : panRemedies(context, config, worst, fig.status === 'fails');
   return measuredFinding({ ...fields, against: worst.obstacle.id }, fig, message, remedies);
 }
 

@@ -11,7 +11,8 @@ const FIELDS: FindingFields = {
   thresholdSource: "The engine's dipstick location must be one the pan provides for (tube hole or clearance).",
 };
 
-export function checkDipstick({ spec, settings }: CheckContext): Finding {
+export function checkDipstick(context: CheckContext): Finding {
+  const { spec } = context;
   const pan = spec.oilPan;
   if (!pan) return unknownFinding(FIELDS, ['oilPan']);
   const location = spec.engine.dipstickLocation;
@@ -21,7 +22,7 @@ export function checkDipstick({ spec, settings }: CheckContext): Finding {
   }
   const provided = pan.dipstickProvision.length > 0 ? pan.dipstickProvision.join(', ') : 'no dipstick';
   // Offered only when it also keeps every clearance below the engine here, as the envelope checks measure it.
-  const judged = judgeCandidatePans(spec, settings, (p) => p.railPattern === pan.railPattern && p.sumpPosition === pan.sumpPosition && p.dipstickProvision.includes(location));
+  const judged = judgeCandidatePans(context, (p) => p.railPattern === pan.railPattern && p.sumpPosition === pan.sumpPosition && p.dipstickProvision.includes(location));
   const kept = pansThatClear(judged);
   return measuredFinding(
     fields,

@@ -17,7 +17,8 @@ export function missingOilParts(spec: FitSpec, parts: Array<'oilPan' | 'oilPicku
   return parts.filter((part) => spec[part] === undefined);
 }
 
-export function checkPanPickupPump({ spec, settings }: CheckContext): Finding {
+export function checkPanPickupPump(context: CheckContext): Finding {
+  const { spec } = context;
   const missing = missingOilParts(spec, ['oilPan', 'oilPickup', 'oilPump']);
   const { oilPan: pan, oilPickup: pickup, oilPump: pump } = spec;
   if (!pan || !pickup || !pump) return unknownFinding(FIELDS, missing);
@@ -38,7 +39,7 @@ export function checkPanPickupPump({ spec, settings }: CheckContext): Finding {
   }
   if (fields2.has('pumpInlet')) remedies.push(pumpRemedy(spec, pickup));
   if (fields2.has('railPattern') || fields2.has('sumpPosition') || fields2.has('pickupMount')) {
-    remedies.push(panRemedy({ spec, settings }, pickup, fields2.has('railPattern')));
+    remedies.push(panRemedy(context, pickup, fields2.has('railPattern')));
   }
   return measuredFinding(fields, { measured: mismatches.length, required: 0, margin: -1, status: 'fails' }, message, remedies);
 }
@@ -75,9 +76,9 @@ function pumpRemedy(spec: FitSpec, pickup: OilPickupSpec): Remedy {
  * keep every clearance below the engine at this placement, judged by the envelope checks' own measure; the note
  * names each one left out and the rule it would fail.
  */
-function panRemedy({ spec, settings }: CheckContext, pickup: OilPickupSpec, railMismatch: boolean): Remedy {
-  const railPattern = spec.engine.panRail.pattern;
-  const judged = judgeCandidatePans(spec, settings, (p) => railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount));
+function panRemedy(context: CheckContext, pickup: OilPickupSpec, railMismatch: boolean): Remedy {
+  const railPattern = context.spec.engine.panRail.pattern;
+  const judged = judgeCandidatePans(context, (p) => railMismatch || (p.sumpPosition === pickup.sumpPosition && p.pickupMount === pickup.mount));
   const kept = pansThatClear(judged);
   const wanted = railMismatch ? "A pan for this engine's block that" : `A pan whose sump and pickup mounting suit the ${pickup.name} and that`;
   const note = kept.length

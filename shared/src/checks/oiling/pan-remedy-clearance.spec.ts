@@ -9,7 +9,10 @@ import {
 } from '../../fixtures/demo-fit-spec';
 import type { PartRemedy } from '../../types/finding';
 import type { FitSpec, OilPanSpec, OilPickupSpec } from '../../types/fit-spec';
+import { sharedCheckContext } from '../check-definition';
+import { judgeCandidatePans } from '../envelope/pan-clearance';
 import { SUMP_CROSSMEMBER_CHECK } from '../envelope/sump-crossmember';
+import { resolveFitSettings } from '../../settings/fit-settings';
 import { DIPSTICK_CHECK } from './dipstick';
 import { PAN_PICKUP_PUMP_CHECK } from './pan-pickup-pump';
 
@@ -123,5 +126,22 @@ describe('pans offered by the oiling checks keep the clearances below the engine
     expect(pan.partIds).toEqual([DEMO_REAR_SUMP_PAN.id]);
     expect(pan.note).toContain('Trailhand TR-4410 rear-sump swap pan by 51.2 mm (2.02 in)');
     expect(pan.note).toContain('Left out at this placement: Trailhand TR-4480 deep rear-sump pan runs 3.8 mm (0.15 in) into the front crossmember.');
+  });
+});
+
+describe('one judgement of each candidate pan per run', () => {
+  it('checks that share a context judge each pan once and offer the same pans as when run alone', () => {
+    // Same taller-framed truck as above: the centre-sump pan fails the crossmember, its pickup disagrees with the rear-sump pan.
+    const spec = stagSpec(DEMO_CENTER_SUMP_PAN, DEMO_REAR_SUMP_PICKUP);
+    const context = sharedCheckContext(spec, resolveFitSettings());
+    const crossmember = SUMP_CROSSMEMBER_CHECK.run(context);
+    const judged = [...context.judgedPans!.values()];
+    expect(judged.map((j) => j.pan.id).sort()).toEqual([DEMO_DEEP_REAR_SUMP_PAN.id, DEMO_REAR_SUMP_PAN.id].sort());
+    const pickup = PAN_PICKUP_PUMP_CHECK.run(context);
+    // The second check reused the first one's judgements: the very same objects, nothing judged again.
+    expect(judgeCandidatePans(context).every((j) => judged.includes(j))).toBe(true);
+    expect(context.judgedPans!.size).toBe(2);
+    expect(crossmember).toEqual(runCheck(SUMP_CROSSMEMBER_CHECK, spec));
+    expect(pickup).toEqual(runCheck(PAN_PICKUP_PUMP_CHECK, spec));
   });
 });
