@@ -1,4 +1,4 @@
-import { formatLength as formatLengthAs, formatMoney, formatQuantity, inchesToMm, mmToShownInches, parseLengthResult, textParts } from '@swapwright/shared';
+import { formatLength as formatLengthAs, formatMoney, formatQuantity, inchesToMm, MINUS, mmToShownInches, parseLengthResult, textParts } from '@swapwright/shared';
 import type { UnitSystem } from '@swapwright/shared';
 
 export { MM_PER_INCH, hpToKw, inchesToMm, kwToHp, mmToInches } from '@swapwright/shared';
@@ -39,7 +39,7 @@ export function renderFigures(text: string, system: UnitSystem): string {
   return textParts(text)
     .map((part) => {
       if (typeof part === 'string') return part;
-      if (part.quantity === 'length' && system === 'in') return formatLengthAs(part.value, { unit: 'in', denominator: 16 }).replace('-', '\u2212');
+      if (part.quantity === 'length' && system === 'in') return formatLengthAs(part.value, { unit: 'in', denominator: 16 }).replace('-', MINUS);
       return formatQuantity(part.value, part.quantity, system, { decimals: part.decimals, signed: part.signed });
     })
     .join('');
