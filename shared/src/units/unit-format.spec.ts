@@ -1,4 +1,4 @@
-import { formatFindingFigure, formatQuantity, formatThreshold, MINUS, renderFindingText, renderRemedyText, textParts } from './unit-format';
+import { formatFindingFigure, formatQuantity, MINUS, renderFindingText, renderRemedyText, textParts } from './unit-format';
 import { DEMO_FIT_SPEC } from '../fixtures/demo-fit-spec';
 import { mmWithInches } from './figure-format';
 import { mmToShownInches } from './length';
@@ -51,15 +51,14 @@ describe('one formatting path in the reader’s units', () => {
     // Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly.
     // Derived: 3 mm = 0.1181 in → 0.12 in; 50 mm = 1.9685 in → 1.97 in; 10 mm = 0.3937 in → 0.39 in;
     // 100 mm = 3.937 in → 3.94 in; 25 mm = 0.9843 in → 0.98 in; 6 mm = 0.2362 in → 0.24 in; 12.7 mm = 0.5 in.
-    expect(formatThreshold(3, 'length', 'in')).toBe('0.12 in');
-    expect(formatThreshold(50, 'length', 'in')).toBe('1.97 in');
-    expect(formatThreshold(10, 'length', 'in')).toBe('0.39 in');
-    expect(formatThreshold(100, 'length', 'in')).toBe('3.94 in');
-    expect(formatThreshold(25, 'length', 'in')).toBe('0.98 in');
-    expect(formatThreshold(6, 'length', 'in')).toBe('0.24 in');
-    expect(formatThreshold(12.7, 'length', 'in')).toBe('0.50 in');
-    expect(formatThreshold(100, 'length', 'mm')).toBe('100.0 mm');
-    expect(formatThreshold(100, 'length', 'in')).toBe(formatQuantity(100, 'length', 'in'));
+    expect(formatQuantity(3, 'length', 'in')).toBe('0.12 in');
+    expect(formatQuantity(50, 'length', 'in')).toBe('1.97 in');
+    expect(formatQuantity(10, 'length', 'in')).toBe('0.39 in');
+    expect(formatQuantity(100, 'length', 'in')).toBe('3.94 in');
+    expect(formatQuantity(25, 'length', 'in')).toBe('0.98 in');
+    expect(formatQuantity(6, 'length', 'in')).toBe('0.24 in');
+    expect(formatQuantity(12.7, 'length', 'in')).toBe('0.50 in');
+    expect(formatQuantity(100, 'length', 'mm')).toBe('100.0 mm');
   });
 
   it('renders the threshold a sentence quotes as the table shows it', () => {
@@ -67,7 +66,7 @@ describe('one formatting path in the reader’s units', () => {
     const finding = { message: 'The lowest point sits 96.0 mm (3.78 in) above the ground; at least 100.0 mm (3.94 in) is required.', required: 100, unit: 'mm' as const };
     expect(renderFindingText(finding, 'in')).toBe('The lowest point sits 3.78 in above the ground; at least 3.94 in is required.');
     expect(renderFindingText(finding, 'mm')).toBe('The lowest point sits 96.0 mm above the ground; at least 100.0 mm is required.');
-    expect(formatFindingFigure(100, 'mm', 'in', { threshold: true })).toBe('3.94 in');
+    expect(formatFindingFigure(100, 'mm', 'in')).toBe('3.94 in');
   });
 
   it('writes a finding’s figures in one system: lb/h, gal/h, psi, hp in inches; kg/h, L/h, kPa, kW in millimetres', () => {
@@ -117,13 +116,13 @@ describe('one inch text for one length', () => {
       [46.7, 50, 3.3, 'max'],
       [-97.43, 12.7, -110.13, 'min'],
     ];
-    const shown = (mm: number, threshold = false) => Number(formatFindingFigure(mm, 'mm', 'in', { threshold }).replace(MINUS, '-').replace(/ in$/, ''));
+    const shown = (mm: number) => Number(formatFindingFigure(mm, 'mm', 'in').replace(MINUS, '-').replace(/ in$/, ''));
     for (const [found, needed, margin, limit] of rows) {
-      const difference = limit === 'max' ? shown(needed, true) - shown(found) : shown(found) - shown(needed, true);
+      const difference = limit === 'max' ? shown(needed) - shown(found) : shown(found) - shown(needed);
       expect(Math.abs(difference - shown(margin))).toBeLessThanOrEqual(0.0100001);
     }
-    expect(formatFindingFigure(3, 'mm', 'in', { threshold: true })).toBe('0.12 in');
-    expect(formatFindingFigure(50, 'mm', 'in', { threshold: true })).toBe('1.97 in');
+    expect(formatFindingFigure(3, 'mm', 'in')).toBe('0.12 in');
+    expect(formatFindingFigure(50, 'mm', 'in')).toBe('1.97 in');
     expect(formatFindingFigure(-65.54, 'mm', 'in', { signed: true })).toBe(`${MINUS}2.58 in`);
     expect(formatFindingFigure(3.3, 'mm', 'in', { signed: true })).toBe('+0.13 in');
   });

@@ -1,6 +1,6 @@
 import type { FigureUnit, Finding, Remedy } from '../types/finding';
 import type { UnitSystem } from '../types/value-lists';
-import { MM_PER_INCH, roundHalfAway } from './length';
+import { MM_PER_INCH, mmToShownInches } from './length';
 import { KG_PER_LB, KPA_PER_PSI, KW_PER_HP, L_PER_US_GAL } from './quantities';
 
 /**
@@ -71,8 +71,8 @@ export function formatQuantity(value: number, quantity: Quantity, system: UnitSy
   const decimals = shownDecimals(quantity, system, storedDecimals);
   // A length in inches is converted from the millimetres as they would be written (mmToShownInches), so the
   // same stored length reads the same wherever it appears and a figure, its limit and its margin agree.
-  const stored = quantity === 'length' && system === 'in' ? roundHalfAway(value, storedDecimals) : value;
-  const number = formatNumber(stored * shown.perStored, decimals, options.signed ?? false);
+  const converted = quantity === 'length' && system === 'in' ? mmToShownInches(value, storedDecimals) : value * shown.perStored;
+  const number = formatNumber(converted, decimals, options.signed ?? false);
   return shown.space ? `${number} ${shown.unit}` : `${number}${shown.unit}`;
 }
 
@@ -92,28 +92,19 @@ const PLAIN_SUFFIX: Partial<Record<FigureUnit, string>> = { rpm: ' rpm', 'cc/min
 
 export interface FigureFormatOptions {
   signed?: boolean;
-  /** Shown as a rule's threshold ({@link formatThreshold}). */
-  threshold?: boolean;
 }
 
 /**
  * A finding's figure (measured, required, margin) in the reader's system: `formatFindingFigure(11.6, 'mm', 'in')`
  * → `0.46 in`, `(58, 'psi', 'mm')` → `399.9 kPa`, `(298.3, 'kW', 'in')` → `400 hp`, `(3200, 'rpm', …)` → `3200 rpm`.
+ * A rule's threshold is written like any other figure, at the same precision as the figure held against it, so
+ * 3.0 mm reads 0.12 in, 50.0 mm 1.97 in and 100 mm 3.94 in, and found − needed = margin holds as shown.
  */
 export function formatFindingFigure(value: number, unit: FigureUnit, system: UnitSystem, options: FigureFormatOptions = {}): string {
   const quantity = FIGURE_QUANTITY[unit];
   const format = { decimals: FIGURE_DECIMALS[unit], signed: options.signed };
-  if (quantity) return options.threshold ? formatThreshold(value, quantity, system, format) : formatQuantity(value, quantity, system, format);
+  if (quantity) return formatQuantity(value, quantity, system, format);
   return `${formatNumber(value, format.decimals, options.signed)}${PLAIN_SUFFIX[unit] ?? ''}`;
-}
-
-/**
- * A threshold (what a rule asks for) in the reader's system: exactly as {@link formatQuantity} writes any other
- * figure of that quantity. A limit is never rounded to a coarser step than the figure held against it, so
- * 3.0 mm reads 0.12 in, 50.0 mm 1.97 in and 100 mm 3.94 in, and found − needed = margin holds as shown.
- */
-export function formatThreshold(value: number, quantity: Quantity, system: UnitSystem, options: QuantityFormatOptions = {}): string {
-  return formatQuantity(value, quantity, system, options);
 }
 
 /** A figure read back from an engine sentence: its stored value and how it was written. */
@@ -161,26 +152,13 @@ export function textParts(text: string): TextPart[] {
   return parts;
 }
 
-/** Writes parts in the reader's system; `isThreshold` picks the figures shown as a rule's threshold. */
-export function renderText(parts: readonly TextPart[], system: UnitSystem, isThreshold: (figure: TextFigure) => boolean = () => false): string {
-  return parts
-    .map((part) => {
-      if (typeof part === 'string') return part;
-      const options = { decimals: part.decimals, signed: part.signed };
-      return isThreshold(part) ? formatThreshold(part.value, part.quantity, system, options) : formatQuantity(part.value, part.quantity, system, options);
-    })
-    .join('');
+/** Writes parts in the reader's system, each figure to the precision it was written with. */
+export function renderText(parts: readonly TextPart[], system: UnitSystem): string {
+  return parts.map((part) => (typeof part === 'string' ? part : formatQuantity(part.value, part.quantity, system, { decimals: part.decimals, signed: part.signed }))).join('');
 }
 
-/** The part of a finding its sentence is rendered from: the sentence, and the threshold figure it may quote. */
-export type FindingText = Pick<Finding, 'message'> & Partial<Pick<Finding, 'required' | 'unit'>>;
-
-/** A length figure of the sentence that quotes the finding's threshold (as written, to its decimals). */
-function quotesThreshold(finding: FindingText): (figure: TextFigure) => boolean {
-  const required = finding.required;
-  if (required === null || required === undefined || finding.unit !== 'mm') return () => false;
-  return (figure) => figure.quantity === 'length' && !figure.signed && figure.value === Number(required.toFixed(figure.decimals));
-}
+/** The part of a finding its sentence is rendered from. */
+export type FindingText = Pick<Finding, 'message'>;
 
 /** The finding's sentence as structured parts (figures in their stored units). */
 export function findingTextParts(finding: FindingText): TextPart[] {
@@ -188,12 +166,11 @@ export function findingTextParts(finding: FindingText): TextPart[] {
 }
 
 /**
- * The finding's sentence in the reader's unit system: every figure in that system's units, inches first in
- * inch mode, one minus sign, and the rule's threshold (when the finding gives it) as {@link formatThreshold}
- * shows thresholds. The stored report keeps the engine's own message.
+ * The finding's sentence in the reader's unit system: every figure in that system's units (a threshold it quotes
+ * as the table shows it), inches first in inch mode, one minus sign. The stored report keeps the engine's own message.
  */
 export function renderFindingText(finding: FindingText, system: UnitSystem): string {
-  return renderText(findingTextParts(finding), system, quotesThreshold(finding));
+  return renderText(findingTextParts(finding), system);
 }
 
 /** A remedy's note (or a fabrication's operation) in the reader's unit system. */

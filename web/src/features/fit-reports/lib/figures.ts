@@ -16,7 +16,7 @@ export function formatFigure(value: number | null | undefined, unit: FigureUnit,
 export function formatRequirement(finding: Pick<Finding, 'required' | 'limit' | 'unit'>, units: Units): string {
   if (finding.limit === 'match') return 'must match';
   if (finding.required === null) return '—';
-  return `${finding.limit === 'max' ? 'at most' : 'at least'} ${formatFindingFigure(finding.required, finding.unit, units.system, { threshold: true })}`;
+  return `${finding.limit === 'max' ? 'at most' : 'at least'} ${formatFindingFigure(finding.required, finding.unit, units.system)}`;
 }
 
 /** The margin with a sign: "+0.25 in" or "−0.50 in" (one minus sign, U+2212, as every figure). */
