@@ -5,31 +5,25 @@ import type { CatalogKind } from './catalog-kinds';
 /** One record of Swapwright's sample catalog: the spec (its `id` is the sample's own) and the fields kept beside it. */
 export type SampleCatalogRow = { spec: { id: string; name: string }; extras: Record<string, unknown> };
 
+const plain = (specs: Array<{ id: string; name: string }>): SampleCatalogRow[] => specs.map((spec) => ({ spec, extras: {} }));
+
+/** The invented sample records of each kind (the demo shop's catalog), with their fixed ids. */
+const SAMPLE_ROWS: Record<CatalogKind, SampleCatalogRow[]> = {
+  engines: plain(DEMO_CATALOG.engines),
+  'oil-pans': plain(DEMO_CATALOG.oilPans),
+  'oil-pickups': plain(DEMO_CATALOG.oilPickups),
+  'oil-pumps': plain(DEMO_CATALOG.oilPumps),
+  transmissions: plain(DEMO_CATALOG.transmissions),
+  chassis: DEMO_CATALOG.chassis.map((item) => ({ spec: item.spec, extras: { defaultPlacement: item.defaultPlacement } })),
+  controllers: plain(DEMO_CATALOG.controllers),
+  'mount-adapters': plain(DEMO_CATALOG.mountAdapters),
+  'bellhousing-adapters': plain(DEMO_CATALOG.bellhousingAdapters),
+  belts: plain(DEMO_CATALOG.belts),
+};
+
 /** The invented sample records of one kind (the demo shop's catalog), with their fixed ids. */
 export function sampleCatalogRows(kind: CatalogKind): SampleCatalogRow[] {
-  const plain = (specs: Array<{ id: string; name: string }>) => specs.map((spec) => ({ spec, extras: {} }));
-  switch (kind) {
-    case 'engines':
-      return plain(DEMO_CATALOG.engines);
-    case 'oil-pans':
-      return plain(DEMO_CATALOG.oilPans);
-    case 'oil-pickups':
-      return plain(DEMO_CATALOG.oilPickups);
-    case 'oil-pumps':
-      return plain(DEMO_CATALOG.oilPumps);
-    case 'transmissions':
-      return plain(DEMO_CATALOG.transmissions);
-    case 'chassis':
-      return DEMO_CATALOG.chassis.map((item) => ({ spec: item.spec, extras: { defaultPlacement: item.defaultPlacement } }));
-    case 'controllers':
-      return plain(DEMO_CATALOG.controllers);
-    case 'mount-adapters':
-      return plain(DEMO_CATALOG.mountAdapters);
-    case 'bellhousing-adapters':
-      return plain(DEMO_CATALOG.bellhousingAdapters);
-    case 'belts':
-      return plain(DEMO_CATALOG.belts);
-  }
+  return SAMPLE_ROWS[kind];
 }
 
 /**
@@ -45,14 +39,14 @@ export function sampleIdInShop(shopId: string, sampleId: string): string {
 }
 
 /**
- * A sample record as it goes into another shop: its own id, the demo shop's name taken off its name, and no
- * shelf count (the sample's belts on hand are the demo shop's stock, not theirs). The demo shop's catalog is the
- * sample itself, so there it is the record as it stands (already there: nothing to add).
+ * A sample record as it goes into another shop: its own id, and no shelf count (the sample's belts on hand are the
+ * demo shop's stock, not theirs, so a belt is named by what it is rather than as the demo shop's stock). The demo
+ * shop's catalog is the sample itself, so there it is the record as it stands (already there: nothing to add).
  */
 export function sampleRecordForShop(kind: CatalogKind, row: SampleCatalogRow, shopId: string): SampleCatalogRow {
   if (shopId === DEMO_SHOP_ID) return row;
   const id = sampleIdInShop(shopId, row.spec.id);
-  const spec: Record<string, unknown> & { id: string; name: string } = { ...row.spec, id, name: row.spec.name.replace(/^Ironbark (stock )?/, '') };
+  const spec: Record<string, unknown> & { id: string; name: string } = { ...row.spec, id };
   if (kind === 'belts') {
     delete spec.stockOnHand;
     spec.name = `${String(spec.designation)} serpentine belt`;

@@ -310,7 +310,8 @@ const controllers: EngineControllerSpec[] = [
   },
 ];
 
-const mountAdapterNames = ['Ironbark MP-40 mount plates', 'Ironbark MP-60 drop mount plates', 'Ironbark MP-90 heavy mount kit'];
+// Named by what they are, without the demo shop's name: they are also the sample catalog other shops start from.
+const mountAdapterNames = ['MP-40 mount plates', 'MP-60 drop mount plates', 'MP-90 heavy mount kit'];
 const mountAdapterIds = [IDS.mountAdapters.plates40, IDS.mountAdapters.drop60, IDS.mountAdapters.heavy90];
 const mountAdapters: MountAdapterSpec[] = BASE.candidates!.mountAdapters!.map((adapter, index) => ({
   ...adapter,
