@@ -21,20 +21,11 @@ export interface SampleCatalogCopy {
   message: string;
 }
 
-const PLURAL: Record<CatalogKind, [string, string]> = {
-  engines: ['engine', 'engines'],
-  chassis: ['chassis', 'chassis'],
-  transmissions: ['transmission', 'transmissions'],
-  'oil-pans': ['oil pan', 'oil pans'],
-  'oil-pickups': ['oil pickup', 'oil pickups'],
-  'oil-pumps': ['oil pump', 'oil pumps'],
-  controllers: ['engine controller', 'engine controllers'],
-  'mount-adapters': ['mount adapter', 'mount adapters'],
-  'bellhousing-adapters': ['bellhousing adapter', 'bellhousing adapters'],
-  belts: ['serpentine belt', 'serpentine belts'],
-};
-
-const countOf = (kind: CatalogKind, n: number) => `${n} ${PLURAL[kind][n === 1 ? 0 : 1]}`;
+/** "3 oil pans", "1 chassis": the kind's own singular words, with an s for more than one (chassis stays chassis). */
+function countOf(kind: CatalogKind, n: number): string {
+  const one = CATALOG_KINDS[kind].singular;
+  return `${n} ${n === 1 || one.endsWith('s') ? one : `${one}s`}`;
+}
 
 /**
  * Starts a shop's catalog from Swapwright's sample catalog (the invented demo engines, chassis and parts): every
