@@ -437,6 +437,28 @@ describe('measurement templates, settings and a project without a catalog chassi
     }
   });
 
+  it('more saves at once than the pool has connections all land: no save waits on a second connection', async () => {
+    const project = (
+      await t.http
+        .post('/api/projects')
+        .set(...bearer(s.estimator))
+        .send({ customerId: DEMO_CUSTOMER_IDS.juno, title: 'Busy-bay sheet', chassisModelId: DEMO_CATALOG_IDS.chassis.ridgeback78 })
+        .expect(201)
+    ).body.id as string;
+    // Three times the driver's default pool of 10: a save that held one pooled connection while it waited for
+    // another hung here once every connection was held.
+    const values = Array.from({ length: 30 }, (_, n) => 360 + n);
+    const answers = await Promise.all(
+      values.map((mm) => t.http.put(`/api/projects/${project}/measurement-sheet/values/pinion.height`).set(...bearer(s.fabricator)).send({ value: `${mm} mm` })),
+    );
+    expect(answers.map((answer) => answer.status)).toEqual(answers.map(() => 200));
+    const sheet = (await t.http.get(`/api/projects/${project}/measurement-sheet`).set(...bearer(s.fabricator)).expect(200)).body;
+    const reading = sheet.values.find((v: { pointId: string }) => v.pointId === 'pinion.height');
+    // one version per save, each save after the one before it
+    expect(reading.version).toBe(values.length);
+    expect(values).toContain(reading.value);
+  }, 60_000);
+
   it('a project whose chassis is not chosen from the catalog: the sheet is empty and a reading is refused with what to do', async () => {
     const created = await t.http
       .post('/api/projects')
