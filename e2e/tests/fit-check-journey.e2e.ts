@@ -21,10 +21,13 @@ async function saveTilt(page: Page, degrees: string): Promise<void> {
   await savePlacement(page);
 }
 
-async function runFitCheck(page: Page): Promise<void> {
+/** Runs the fit check and answers the new report's id. */
+async function runFitCheck(page: Page): Promise<string> {
   const ran = page.waitForResponse((r) => /\/api\/projects\/[^/]+\/fit-reports$/.test(r.url()) && r.request().method() === 'POST');
   await page.getByRole('button', { name: 'Run fit check' }).click();
-  expect((await ran).status()).toBe(201);
+  const response = await ran;
+  expect(response.status()).toBe(201);
+  return ((await response.json()) as { id: string }).id;
 }
 
 describe('the estimator fits the demo engine and clears the crossmember with a rear-sump pan', () => {
@@ -89,11 +92,16 @@ describe('the estimator fits the demo engine and clears the crossmember with a r
     const { page } = browser;
     // The demo placement's 3° tilt raised to 4.5°: the joint angles and the clearances both move.
     await saveTilt(page, '4.5');
-    await runFitCheck(page);
+    const tilted = await runFitCheck(page);
     const history = page.getByTestId('report-history');
     const picks = history.getByRole('checkbox');
-    // The stock-pan, rear-sump-pan and tilted runs, newest first, once the list has the one just run.
-    await page.waitForFunction(() => document.querySelectorAll('[data-testid="report-history"] input[type="checkbox"]').length >= 3);
+    // Newest first: pick only once the list shows the run just made on top. The project may hold older runs of
+    // other journeys, so a count of rows can be met before the new run arrives, and a row arriving between the
+    // two picks would shift them.
+    await page.waitForFunction(
+      (id) => document.querySelector('[data-testid="report-history"] tbody tr[data-row-key]')?.getAttribute('data-row-key') === id,
+      tilted,
+    );
     await picks.nth(0).check();
     await picks.nth(1).check();
     await expectVisible(history.getByRole('button', { name: 'Compare the two picked', disabled: false }));
