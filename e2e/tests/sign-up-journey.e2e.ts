@@ -1,4 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
+import { expectVisible } from './support/expect-page';
 
 interface CapturedMail {
   to: string[];
@@ -118,7 +119,7 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     await offer.waitFor();
     // Every empty picker says where to add that kind.
     expect(await page.getByTestId('empty-engineProfileId').getByRole('link', { name: 'Add an engine in the catalog' }).getAttribute('href')).toBe('/catalog?kind=engines');
-    expect(await page.getByTestId('empty-chassisModelId').getByRole('link', { name: 'Add a chassis in the catalog' }).count()).toBe(1);
+    await expectVisible(page.getByTestId('empty-chassisModelId').getByRole('link', { name: 'Add a chassis in the catalog' }));
     await saveScreenshot(page, 'sign-up-fit-empty-catalog-phone');
 
     // Running now is refused in words: what to choose and where.
@@ -160,7 +161,8 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     const { page } = browser;
     await page.goto('/');
     await page.getByText('Next steps').first().waitFor();
-    expect(await page.getByText('Own flatbed: diesel swap').count()).toBeGreaterThan(0);
+    // The heading shows before the projects load: wait for the project itself, then look for what must not be there.
+    await expectVisible(page.getByText('Own flatbed: diesel swap'));
     expect(await page.getByText('Needs a quote').count()).toBe(0);
     await saveScreenshot(page, 'sign-up-builder-home-phone');
 
