@@ -40,6 +40,8 @@ describe('the owner sets the shop up and brings in a new estimator', () => {
     const terms = page.getByRole('form', { name: 'Quote terms' });
     const deposit = terms.getByRole('spinbutton', { name: 'Deposit' });
     await deposit.waitFor();
+    // The form shows its boxes before it fills them with the stored terms: read the share to put back once it is in.
+    await page.waitForFunction(() => ((document.querySelector('input[aria-label="Deposit"]') as HTMLInputElement | null)?.value ?? '') !== '');
     const before = await deposit.inputValue();
     const save = async (value: string) => {
       await deposit.fill(value);
