@@ -1,7 +1,7 @@
 import { join } from 'node:path';
 import { ARTIFACTS_DIR, openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { makeJpeg } from './support/images';
-import { expectFitsWidth, expectText, expectVisible } from './support/expect-page';
+import { expectFitsWidth, expectText, expectVisible, waitForPicture } from './support/expect-page';
 import { demoSignIn, signInAs } from './support/session';
 
 const DEMO_PROJECT = 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap';
@@ -215,6 +215,7 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       expect((await uploaded).status()).toBe(201);
       const thumb = tabs.getByTestId('check-photo').getByRole('img');
       await expectVisible(thumb);
+      await waitForPicture(thumb);
       expect(await thumb.evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBe(320);
       await tabs.scrollIntoViewIfNeeded();
       await tabs.screenshot({ path: join(ARTIFACTS_DIR, 'screenshots', 'fabricator-check-photo-phone.png') });

@@ -12,6 +12,15 @@ export async function expectText(locator: Locator, pattern: RegExp, timeout = 15
   expect(await locator.first().innerText()).toMatch(pattern);
 }
 
+/**
+ * Waits until the image has its picture: an <img> shows (with its box) while its file is still being fetched or decoded,
+ * and reads naturalWidth 0 until then.
+ */
+export async function waitForPicture(image: Locator, timeout = 15_000): Promise<void> {
+  const element = await image.elementHandle({ timeout });
+  await image.page().waitForFunction((img) => img instanceof HTMLImageElement && img.complete && img.naturalWidth > 0, element, { timeout });
+}
+
 /** The page is no wider than the window: nothing makes the person scroll sideways. */
 export async function expectFitsWidth(page: Page): Promise<void> {
   const { scrollWidth, clientWidth } = await page.evaluate(() => ({
