@@ -1,5 +1,6 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
 import { restoreDemoFitSelections } from './support/demo-state';
+import { expectText } from './support/expect-page';
 import { signInAs } from './support/session';
 
 const DEMO_PROJECT = 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap';
@@ -24,7 +25,14 @@ describe('parts plan: the estimator plans, the counter reserves and prints', () 
     // the projects list, not the home page's panels (which also link the project) that may still be on screen
     await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: DEMO_PROJECT }).click();
     const card = page.getByTestId('parts-plan-card');
+    const built = page.waitForResponse((r) => /\/parts-plans$/.test(r.url()) && r.request().method() === 'POST');
     await card.getByRole('button', { name: 'Build plan' }).click();
+    const response = await built;
+    expect(response.status()).toBe(201);
+    // The card shows the project's latest plan, and another journey may have built one with the same picks already:
+    // read the picks once it shows the version just built (the list comes again with a query of its own).
+    const { version } = (await response.json()) as { version: number };
+    await expectText(card.locator('.ant-descriptions-item').filter({ hasText: /^Version/ }).locator('.ant-descriptions-item-content'), new RegExp(`^${version}\\b`));
     await card.getByTestId('pick-TR-4410').getByText(/Resolves: .*crossmember/i).waitFor();
     await card.getByTestId('pick-TR-4411').getByText(/agrees with the chosen oil pan TR-4410/).waitFor();
     await card.getByTestId('pick-TR-4411').getByText(/BR-220 .*does not agree/).waitFor();
