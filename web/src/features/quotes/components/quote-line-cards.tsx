@@ -3,6 +3,7 @@ import { Flex, Typography } from 'antd';
 import type { ReactNode } from 'react';
 import { palette } from '@/config/theme';
 import type { QuoteLine } from '../types';
+import { LineDescription } from './line-description';
 
 export interface QuoteLineCardsProps {
   lines: QuoteLine[];
@@ -31,7 +32,7 @@ export function QuoteLineCards({ lines, currency, lead, actions }: QuoteLineCard
           <Flex gap={8} align="baseline" wrap>
             {lead?.(line)}
             <Typography.Text strong style={{ flex: '1 1 12em', minWidth: 0 }}>
-              {line.description}
+              <LineDescription text={line.description} />
             </Typography.Text>
           </Flex>
           {line.sku && (

@@ -2,6 +2,7 @@ import { formatMoney } from '@swapwright/shared';
 import { Grid, Table, Typography } from 'antd';
 import type { TableColumnsType } from 'antd';
 import type { Quote, QuoteLine } from '../types';
+import { LineDescription } from './line-description';
 import { QuoteLineCards } from './quote-line-cards';
 import { QuoteTotals } from './quote-totals';
 
@@ -12,7 +13,7 @@ export const quoteLineColumns = (currency: string): TableColumnsType<QuoteLine> 
     dataIndex: 'description',
     render: (_, line) => (
       <>
-        {line.description}
+        <LineDescription text={line.description} />
         {line.sku && (
           <Typography.Text type="secondary" style={{ display: 'block', fontSize: 12 }}>
             Part no. {line.sku}

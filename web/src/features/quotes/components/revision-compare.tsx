@@ -5,6 +5,7 @@ import { getErrorMessage } from '@/lib/api-error';
 import { formatDate } from '@/lib/dates';
 import { useQuoteRevisionCompare } from '../api/compare-quote-revisions';
 import type { Quote, QuoteRevisionDiff } from '../types';
+import { LineDescription } from './line-description';
 
 type DiffLine = QuoteRevisionDiff['lines'][number];
 type Side = NonNullable<DiffLine['before']>;
@@ -98,7 +99,7 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
                           <Flex vertical gap={2}>
                             <span>
                               <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag>
-                              {line.description}
+                              <LineDescription text={line.description} />
                             </span>
                             <span>
                               {beforeAfter(line, (side) => amountOf(line, side))} × {beforeAfter(line, (side) => money(side.unitPriceCents))}
@@ -110,7 +111,7 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
                     ]
                   : [
                       { title: 'Change', key: 'change', render: (_, line) => <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag> },
-                      { title: 'Description', dataIndex: 'description' },
+                      { title: 'Description', dataIndex: 'description', render: (_, line) => <LineDescription text={line.description} /> },
                       { title: 'Qty / hours', key: 'amount', align: 'right', render: (_, line) => beforeAfter(line, (side) => amountOf(line, side)) },
                       { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.unitPriceCents)) },
                       { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.lineTotalCents)) },

@@ -48,7 +48,7 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
   return (
     <div className="work-order-check" data-testid={`check-${check.key}`} data-result={latest?.result ?? 'open'}>
       <Flex justify="space-between" gap={8} wrap>
-        <Typography.Text strong>{check.label}</Typography.Text>
+        <Typography.Text strong>{renderText(textParts(check.label), system)}</Typography.Text>
         {latest ? (
           <Tag color={latest.result === 'pass' ? 'success' : 'error'} data-testid="check-result">
             {latest.result === 'pass' ? 'Pass' : 'Failed'}

@@ -1,5 +1,7 @@
+import { renderText, textParts } from '@swapwright/shared';
 import { Alert, App, Button, Card, Flex, Progress, Space, Tag, Typography } from 'antd';
 import { Link } from 'react-router-dom';
+import { useUnits } from '@/hooks/use-units';
 import { getErrorMessage } from '@/lib/api-error';
 import { formatDateTime } from '@/lib/dates';
 import { useFinishWorkOrder } from '../api/finish-work-order';
@@ -23,6 +25,9 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
   const start = useStartWorkOrder();
   const finish = useFinishWorkOrder();
   const { message } = App.useApp();
+  const { system } = useUnits();
+  // The plan's words (an operation, a remedy's line, a part's note) keep the engine's figures; they read in the person's system.
+  const say = (text: string) => renderText(textParts(text), system);
   const inBay = order.state === 'in-the-bay';
   const { progress } = order;
   return (
@@ -108,7 +113,7 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               data-testid={`step-${step.key}`}
               title={
                 <span style={{ whiteSpace: 'normal' }}>
-                  {index + 1}. {step.name}
+                  {index + 1}. {say(step.name)}
                 </span>
               }
               extra={step.hours ? <Typography.Text type="secondary">{step.hours.toFixed(1)} h</Typography.Text> : null}
@@ -125,7 +130,7 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               {step.parts.length > 0 && (
                 <Typography.Paragraph style={{ marginBottom: 8 }}>
                   <Typography.Text type="secondary">Parts: </Typography.Text>
-                  {step.parts.map((part) => `${part.quantity} × ${part.sku ? `${part.sku} ` : ''}${part.description}`).join('; ')}
+                  {step.parts.map((part) => `${part.quantity} × ${part.sku ? `${part.sku} ` : ''}${say(part.description)}`).join('; ')}
                 </Typography.Paragraph>
               )}
               {step.torque.length > 0 && (
@@ -152,7 +157,7 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               {step.instructions.length > 0 && (
                 <ul style={{ margin: '8px 0', paddingLeft: 18 }}>
                   {step.instructions.map((text) => (
-                    <li key={text}>{text}</li>
+                    <li key={text}>{say(text)}</li>
                   ))}
                 </ul>
               )}

@@ -1,0 +1,37 @@
+import { screen } from '@testing-library/react';
+import { afterEach, describe, expect, it } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import type { QuoteLine } from '../../types';
+import { QuoteLineCards } from '../quote-line-cards';
+import { QuoteLines } from '../quote-lines';
+import { LINES, quoteStub } from './quote-stub';
+
+// Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly. 8.7 mm ÷ 25.4 = 0.3425 in → 0.34 in.
+const DROP: QuoteLine = {
+  ...LINES[2],
+  key: 'line-drop',
+  description: 'Drop the crossmember 8.7 mm (0.34 in) or fit a drop crossmember',
+  laborOperationId: null,
+  hours: 4,
+  lineTotalCents: 54000,
+};
+
+describe('a quote line drawn from the parts plan reads in the person’s units', () => {
+  afterEach(() => window.localStorage.removeItem('swapwright.unitSystem'));
+
+  it('in inches in the lines table, once and in inches; the stored description stays', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const quote = quoteStub({ lines: [...LINES, DROP] });
+    renderWithApp(<QuoteLines quote={quote} />);
+    expect(screen.getByText('Drop the crossmember 0.34 in or fit a drop crossmember')).toBeInTheDocument();
+    expect(document.body.textContent).not.toContain('8.7 mm');
+    expect(quote.revision.lines.at(-1)?.description).toBe('Drop the crossmember 8.7 mm (0.34 in) or fit a drop crossmember');
+  });
+
+  it('in millimetres on the phone cards, once and in millimetres', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'mm');
+    renderWithApp(<QuoteLineCards lines={[DROP]} currency="USD" />);
+    expect(screen.getByTestId('quote-line-line-drop')).toHaveTextContent('Drop the crossmember 8.7 mm or fit a drop crossmember');
+    expect(screen.getByTestId('quote-line-line-drop').textContent).not.toContain('0.34 in');
+  });
+});

@@ -1,0 +1,65 @@
+import { screen } from '@testing-library/react';
+import { afterEach, describe, expect, it } from 'vitest';
+import { renderWithApp } from '@/test/render';
+import type { WorkOrder } from '../../types';
+import { WorkOrderSheet } from '../work-order-sheet';
+
+// Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly.
+// 8.7 mm ÷ 25.4 = 0.3425 in → 0.34 in; 72.3 mm ÷ 25.4 = 2.8465 in → 2.85 in; 6.0 mm ÷ 25.4 = 0.236 in → 0.24 in.
+
+const order: WorkOrder = {
+  id: 'wo-1',
+  label: 'W-0001',
+  state: 'ready',
+  projectId: 'p-1',
+  projectTitle: 'Brindle Hauler V8 swap',
+  customerName: 'Wren Calloway',
+  createdAt: '2026-12-01T08:00:00.000Z',
+  progress: { total: 0, passed: 0, failed: 0, open: 0 },
+  vehicleDescription: '1972 Brindle Hauler 1/2 ton',
+  quoteId: 'q-1',
+  quoteLabel: 'Q-0001',
+  quoteRevision: 1,
+  fitReportId: null,
+  partsPlanVersion: 2,
+  startedAt: null,
+  finishedAt: null,
+  steps: [
+    {
+      key: 'drop-crossmember',
+      operationId: null,
+      name: 'Drop the crossmember 8.7 mm (0.34 in) or fit a drop crossmember',
+      buildOrder: 10,
+      hours: 4,
+      hazards: ['lifting', 'welding'],
+      parts: [{ sku: '', description: 'Relocate the transmission crossmember 72.3 mm (2.85 in) rearward', quantity: 1 }],
+      torque: [],
+      instructions: ['XM-100: shim the mount by 6.0 mm (0.24 in) at most'],
+      checks: [],
+    },
+  ],
+  cautions: [{ hazard: 'lifting', caution: 'Support the vehicle on rated stands before working under it.' }],
+  deference: 'Follow local codes and licensed practice.',
+};
+
+// Each system writes each figure once, in its own unit; the other unit never shows.
+const READS = [
+  { system: 'in', figures: ['0.34 in', '2.85 in', '0.24 in'], never: /\d mm\b/ },
+  { system: 'mm', figures: ['8.7 mm', '72.3 mm', '6.0 mm'], never: /\d in\b/ },
+] as const;
+
+describe('the work order reads the plan’s words in the person’s units', () => {
+  afterEach(() => window.localStorage.removeItem('swapwright.unitSystem'));
+
+  it.each(READS)('in $system writes each figure once, in that system, and keeps the stored text as it is', ({ system, figures, never }) => {
+    window.localStorage.setItem('swapwright.unitSystem', system);
+    const stored = structuredClone(order);
+    renderWithApp(<WorkOrderSheet order={order} canWork={false} projectPath="/projects/p-1" />);
+    const step = screen.getByTestId('step-drop-crossmember');
+    expect(step).toHaveTextContent(`1. Drop the crossmember ${figures[0]} or fit a drop crossmember`);
+    expect(step).toHaveTextContent(`Relocate the transmission crossmember ${figures[1]} rearward`);
+    expect(step).toHaveTextContent(`XM-100: shim the mount by ${figures[2]} at most`);
+    expect(step.textContent).not.toMatch(never);
+    expect(order).toEqual(stored);
+  });
+});
