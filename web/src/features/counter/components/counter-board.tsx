@@ -1,6 +1,7 @@
 import { counterLineSetAside, counterLineShortBy, counterLineStateWords, type CounterStatus } from '@swapwright/shared';
 import { Button, Card, Empty, Flex, Grid, Select, Space, Table, Tag, Typography } from 'antd';
 import { useState } from 'react';
+import { BinCode } from '@/components/bin-code';
 import { palette } from '@/config/theme';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPickList } from '../api/download-pick-list';
@@ -49,7 +50,14 @@ export function CounterBoard({ currency }: CounterBoardProps) {
 
   const binOf = (line: CounterLine) => {
     const from = line.stock.find((s) => s.id === line.stockId) ?? line.stock[0];
-    return from ? `${from.location} · ${from.bin || 'no bin'}` : 'no location';
+    // The store may wrap; the bin code never breaks inside itself (at its hyphens), on screen or on the printed pick list.
+    return from ? (
+      <>
+        {from.location} · <BinCode code={from.bin || 'no bin'} />
+      </>
+    ) : (
+      'no location'
+    );
   };
   // The words come from shared, as in the exported pick list; a short line (the shelf cannot cover it) is red.
   const statusTag = (line: CounterLine) => (

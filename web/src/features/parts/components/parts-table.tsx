@@ -1,6 +1,7 @@
 import { Button, Input, Select, Space, Switch, Table, Typography } from 'antd';
 import { PART_CATEGORIES, PART_CATEGORY_LABELS, type CatalogPartCategory } from '@swapwright/shared';
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
+import { BinCode } from '@/components/bin-code';
 import { serverPagination } from '@/lib/table';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPartsCsv } from '../api/download-parts-csv';
@@ -68,7 +69,26 @@ export function PartsTable({ canEdit = false, currency }: { canEdit?: boolean; c
           { title: 'Supplier', dataIndex: 'supplierName', responsive: ['md'], render: (v: string | null, p) => (v ? `${v}${p.supplierSku ? ` · ${p.supplierSku}` : ''}` : '—') },
           { title: 'On hand', dataIndex: 'onHand', align: 'right', responsive: ['md'] },
           { title: 'Free', dataIndex: 'available', align: 'right' },
-          { title: 'Bins', key: 'bins', render: (_, p) => p.stock.map((s) => `${s.location} ${s.bin}`.trim()).join(', ') || '—' },
+          {
+            title: 'Bins',
+            key: 'bins',
+            // Each place wraps between the store and its bin, never inside the bin code.
+            render: (_, p) =>
+              p.stock.length === 0
+                ? '—'
+                : p.stock.map((s, i) => (
+                    <Fragment key={s.id}>
+                      {i > 0 && ', '}
+                      {s.location}
+                      {s.bin && (
+                        <>
+                          {' '}
+                          <BinCode code={s.bin} />
+                        </>
+                      )}
+                    </Fragment>
+                  )),
+          },
           ...(canEdit
             ? [{ title: '', key: 'edit', width: 70, render: (_: unknown, p: Part) => <Button size="small" aria-label={`Edit ${p.sku}`} onClick={() => setEditing(p)}>Edit</Button> }]
             : []),
