@@ -1,5 +1,5 @@
 import { mapStock } from './part.mapper';
-import { CounterLineResponseDto, PartsPlanResponseDto } from './dto/plan.dto';
+import { CounterLineResponseDto, CustomerPartsPlanResponseDto, PartsPlanResponseDto } from './dto/plan.dto';
 import { PartsPlanRecord } from './part.entity';
 import type { CounterLineView } from './counter.service';
 
@@ -18,6 +18,41 @@ export function mapPlan(plan: PartsPlanRecord): PartsPlanResponseDto {
     result: plan.result,
     recheck: plan.recheck,
   };
+}
+
+/**
+ * The customer's view of a plan: built field by field (never a copy of the record with fields removed), so nothing the
+ * shop keeps to itself (stock, candidates passed over, solver figures) reaches the customer when the plan grows.
+ */
+export function mapPlanForCustomer(plan: PartsPlanRecord): CustomerPartsPlanResponseDto {
+  const { picks, operations, totals, unresolved, notes } = plan.result;
+  return {
+    id: plan.id,
+    projectId: plan.projectId,
+    version: plan.version,
+    status: plan.status,
+    lockedAt: plan.lockedAt ? plan.lockedAt.toISOString() : null,
+    createdAt: plan.createdAt.toISOString(),
+    parts: picks.map((pick) => ({
+      sku: pick.sku,
+      description: pick.description,
+      category: pick.category,
+      quantity: pick.quantity,
+      priceCents: pick.priceCents,
+      laborHours: pick.laborHours,
+      totalCents: pick.totalCents,
+      resolves: pick.resolves.map((r) => r.title),
+    })),
+    operations: operations.map((op) => ({ operation: op.operation, laborHours: op.laborHours, laborCents: op.laborCents, resolves: op.resolves.map((r) => r.title) })),
+    totals: { partsCents: totals.partsCents, laborHours: totals.laborHours, laborCents: totals.laborCents, fabricationHours: totals.fabricationHours, totalCents: totals.totalCents },
+    unresolved: unresolved.map((u) => ({ checkId: u.checkId, title: u.title, message: u.message })),
+    notes: [...notes],
+  };
+}
+
+/** The plan for whoever reads it: the whole plan for the shop's members, the customer's view for a customer. */
+export function mapPlanFor(user: { role: string }, plan: PartsPlanRecord): PartsPlanResponseDto | CustomerPartsPlanResponseDto {
+  return user.role === 'customer' ? mapPlanForCustomer(plan) : mapPlan(plan);
 }
 
 export function mapCounterLine({ line, stock }: CounterLineView): CounterLineResponseDto {

@@ -1,23 +1,53 @@
 import { Body, Controller, Get, Header, HttpCode, Param, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiConflictResponse, ApiCreatedResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBearerAuth,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiExtraModels,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiProduces,
+  ApiTags,
+  getSchemaPath,
+} from '@nestjs/swagger';
 import { ErrorResponseDto } from '../common/errors/error-response.dto';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import { AuthUser } from '../common/tenant/auth-user';
 import { Role } from '../common/roles/role';
+import { PARTS_PLAN_READERS } from '../common/roles/role-matrix';
 import { CounterService } from './counter.service';
-import { BuildPlanDto, CounterLineResponseDto, MarkLineDto, PartsPlanResponseDto, PlanSummaryResponseDto, ReceiveDto, ReserveDto } from './dto/plan.dto';
-import { mapCounterLine, mapPlan } from './parts-plan.mapper';
+import {
+  BuildPlanDto,
+  CounterLineResponseDto,
+  CustomerPartsPlanResponseDto,
+  MarkLineDto,
+  PartsPlanResponseDto,
+  PlanSummaryResponseDto,
+  ReceiveDto,
+  ReserveDto,
+} from './dto/plan.dto';
+import { mapCounterLine, mapPlan, mapPlanFor } from './parts-plan.mapper';
 import { PartsPlansService } from './parts-plans.service';
 
-/** Build and lock plans: owner and estimator; read them: all staff; work the counter: owner and counter. */
+/**
+ * Build and lock plans: owner and estimator; read them: all staff (and the project's own customer, in the customer's
+ * view, through PARTS_PLAN_READERS); the counter's lists: all staff; work the counter: owner and counter.
+ */
 export const PLAN_BUILDERS: Role[] = ['owner', 'estimator'];
 export const PLAN_READERS: Role[] = ['owner', 'estimator', 'fabricator', 'counter'];
 export const COUNTER_CLERKS: Role[] = ['owner', 'counter'];
 
+/** Whom a plan answer is for: the whole plan for the shop's members, the customer's view for a customer. */
+const PLAN_FOR_READER = { oneOf: [{ $ref: getSchemaPath(PartsPlanResponseDto) }, { $ref: getSchemaPath(CustomerPartsPlanResponseDto) }] };
+const FOR_READER_WORDS =
+  "Staff get the whole plan (PartsPlanResponseDto); the project's customer gets CustomerPartsPlanResponseDto: the parts at the plan's prices, operations with hours, totals, unresolved shortfalls and notes, without stock, candidates passed over or solver figures. Another customer's project answers 404.";
+
 @ApiTags('parts-plans')
 @ApiBearerAuth()
+@ApiExtraModels(PartsPlanResponseDto, CustomerPartsPlanResponseDto)
 @Controller()
 export class PartsPlansController {
   constructor(
@@ -35,11 +65,12 @@ export class PartsPlansController {
   }
 
   @Get('projects/:projectId/parts-plans')
-  @Roles(...PLAN_READERS)
-  @ApiOperation({ summary: "The project's plan versions, newest first", operationId: 'listPartsPlans' })
-  @ApiOkResponse({ type: [PartsPlanResponseDto] })
-  async list(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<PartsPlanResponseDto[]> {
-    return (await this.plans.list(user, projectId)).map(mapPlan);
+  @Roles(...PARTS_PLAN_READERS)
+  @ApiOperation({ summary: "The project's plan versions, newest first", description: FOR_READER_WORDS, operationId: 'listPartsPlans' })
+  @ApiOkResponse({ schema: { type: 'array', items: PLAN_FOR_READER } })
+  @ApiNotFoundResponse({ type: ErrorResponseDto })
+  async list(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<Array<PartsPlanResponseDto | CustomerPartsPlanResponseDto>> {
+    return (await this.plans.list(user, projectId)).map((plan) => mapPlanFor(user, plan));
   }
 
   @Get('parts-plans')
@@ -60,12 +91,12 @@ export class PartsPlansController {
   }
 
   @Get('parts-plans/:id')
-  @Roles(...PLAN_READERS)
-  @ApiOperation({ summary: 'One plan version', operationId: 'getPartsPlan' })
-  @ApiOkResponse({ type: PartsPlanResponseDto })
+  @Roles(...PARTS_PLAN_READERS)
+  @ApiOperation({ summary: 'One plan version', description: FOR_READER_WORDS, operationId: 'getPartsPlan' })
+  @ApiOkResponse({ schema: PLAN_FOR_READER })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
-  async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<PartsPlanResponseDto> {
-    return mapPlan(await this.plans.get(user, id));
+  async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<PartsPlanResponseDto | CustomerPartsPlanResponseDto> {
+    return mapPlanFor(user, await this.plans.read(user, id));
   }
 
   @Post('parts-plans/:id/lock')

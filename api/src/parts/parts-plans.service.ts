@@ -199,6 +199,7 @@ export class PartsPlansService {
     };
   }
 
+  /** The project's plan versions, newest first; a customer's own projects only (the projects service scopes them). */
   async list(user: AuthUser, projectId: string): Promise<PartsPlanRecord[]> {
     const project = await this.projects.get(user, projectId);
     return this.dataSource.getRepository(PartsPlanRecord).find({ where: { shopId: user.shopId, projectId: project.id }, order: { version: 'DESC' }, take: 50 });
@@ -222,6 +223,13 @@ export class PartsPlansService {
   async get(user: Pick<AuthUser, 'shopId'>, id: string): Promise<PartsPlanRecord> {
     const plan = await this.dataSource.getRepository(PartsPlanRecord).findOne({ where: { id, shopId: user.shopId } });
     if (!plan) throw PartsErrors.planNotFound();
+    return plan;
+  }
+
+  /** One plan version for a reader: the shop's; a customer only sees plans of their own projects (another's is not found). */
+  async read(user: AuthUser, id: string): Promise<PartsPlanRecord> {
+    const plan = await this.get(user, id);
+    if (!(await this.projects.isReadableBy(user, plan.projectId))) throw PartsErrors.planNotFound();
     return plan;
   }
 

@@ -138,9 +138,10 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'PATCH /api/suppliers/:id': STOCK_KEEPERS,
   'DELETE /api/suppliers/:id': STOCK_KEEPERS,
   'POST /api/projects/:projectId/parts-plans': SALES,
-  'GET /api/projects/:projectId/parts-plans': STAFF,
+  // Customers read their own projects' plans, in the customer's view (the service scopes them; another's is not found).
+  'GET /api/projects/:projectId/parts-plans': ALL,
   'GET /api/parts-plans': STAFF,
-  'GET /api/parts-plans/:id': STAFF,
+  'GET /api/parts-plans/:id': ALL,
   'POST /api/parts-plans/:id/lock': SALES,
   'GET /api/parts-plans/:id/counter-lines': STAFF,
   'GET /api/parts-plans/:id/pick-list.csv': STAFF,

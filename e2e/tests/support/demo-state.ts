@@ -1,4 +1,4 @@
-import { DEMO_FIT_SELECTIONS } from '@swapwright/seed-data';
+import { DEMO_FIT_SELECTIONS, DEMO_PROJECT_IDS } from '@swapwright/seed-data';
 import { BASE_URL } from './browser';
 import { demoSignIn, type DemoRole } from './session';
 
@@ -27,4 +27,19 @@ export async function restoreDemoFitSelections(): Promise<void> {
     });
     if (!response.ok) throw new Error(`Restoring the demo fit selections answered ${response.status}: ${await response.text()}`);
   }
+}
+
+/**
+ * Makes sure the demo customer's project (the Ridgeback) has a parts plan, built as the estimator through the public
+ * route when it has none yet (the journeys' seed holds no plans; the plan journeys build their own newer versions).
+ */
+export async function ensureDemoPartsPlan(): Promise<void> {
+  const token = await accessTokenOf('estimator');
+  const url = `${BASE_URL}/api/projects/${DEMO_PROJECT_IDS.ridgeback}/parts-plans`;
+  const headers = { 'content-type': 'application/json', authorization: `Bearer ${token}` };
+  const existing = await fetch(url, { headers });
+  if (!existing.ok) throw new Error(`Reading the demo project's plans answered ${existing.status}: ${await existing.text()}`);
+  if (((await existing.json()) as unknown[]).length > 0) return;
+  const built = await fetch(url, { method: 'POST', headers, body: JSON.stringify({ objective: 'lowest-cost' }) });
+  if (!built.ok) throw new Error(`Building the demo project's plan answered ${built.status}: ${await built.text()}`);
 }

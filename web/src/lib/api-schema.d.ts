@@ -1135,7 +1135,10 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** The project's plan versions, newest first */
+        /**
+         * The project's plan versions, newest first
+         * @description Staff get the whole plan (PartsPlanResponseDto); the project's customer gets CustomerPartsPlanResponseDto: the parts at the plan's prices, operations with hours, totals, unresolved shortfalls and notes, without stock, candidates passed over or solver figures. Another customer's project answers 404.
+         */
         get: operations["listPartsPlans"];
         put?: never;
         /** Build a new plan version from the project's fit report and the catalog */
@@ -1170,7 +1173,10 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** One plan version */
+        /**
+         * One plan version
+         * @description Staff get the whole plan (PartsPlanResponseDto); the project's customer gets CustomerPartsPlanResponseDto: the parts at the plan's prices, operations with hours, totals, unresolved shortfalls and notes, without stock, candidates passed over or solver figures. Another customer's project answers 404.
+         */
         get: operations["getPartsPlan"];
         put?: never;
         post?: never;
@@ -3751,20 +3757,6 @@ export interface components {
             email?: string | null;
             phone?: string | null;
         };
-        BuildPlanDto: {
-            /**
-             * @default lowest-cost
-             * @enum {string}
-             */
-            objective?: "lowest-cost" | "least-fabrication" | "in-stock";
-            /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
-            resolve?: string[];
-            /**
-             * Format: uuid
-             * @description A stored fit report of this project to plan from; a new fit check is run and stored when absent.
-             */
-            fitReportId?: string;
-        };
         PlanShortfallRefDto: {
             checkId: string;
             title: string;
@@ -3887,6 +3879,67 @@ export interface components {
             result: components["schemas"]["PartsPlanResultDto"];
             /** @description The fit check run again with the chosen parts. */
             recheck: components["schemas"]["PlanRecheckDto"];
+        };
+        CustomerPlanPartDto: {
+            sku: string;
+            description: string;
+            /** @enum {string} */
+            category: "engine" | "transmission" | "oil-pan" | "oil-pickup" | "oil-pump" | "windage-tray" | "dipstick" | "engine-controller" | "harness" | "throttle-pedal" | "mount-adapter" | "transmission-mount" | "transmission-crossmember" | "bellhousing-adapter" | "flexplate-flywheel" | "crank-spacer" | "pilot-bearing" | "driveshaft" | "driveshaft-service" | "fuel-pump" | "fuel-regulator" | "fuel-lines" | "injector" | "accessory-drive" | "belt" | "tensioner" | "cam-timing-set" | "timing-chain-damper" | "radiator" | "fan" | "hoses" | "exhaust-manifold" | "exhaust" | "other";
+            quantity: number;
+            /** @description The part's price in the plan (the shop's list price), cents. */
+            priceCents: number;
+            /** @description Hours to fit it. */
+            laborHours: number;
+            /** @description Price plus fitting labor at the shop rate, cents. */
+            totalCents: number;
+            /** @description What it answers: the titles of the fit shortfalls it resolves. */
+            resolves: string[];
+        };
+        CustomerPlanOperationDto: {
+            operation: string;
+            laborHours: number;
+            /** @description The hours at the shop rate, cents. */
+            laborCents: number;
+            /** @description The titles of the fit shortfalls it resolves. */
+            resolves: string[];
+        };
+        CustomerPlanUnresolvedDto: {
+            checkId: string;
+            title: string;
+            message: string;
+        };
+        CustomerPartsPlanResponseDto: {
+            id: string;
+            projectId: string;
+            version: number;
+            /**
+             * @description locked: the version a quote is drawn from.
+             * @enum {string}
+             */
+            status: "draft" | "locked";
+            lockedAt: string | null;
+            createdAt: string;
+            parts: components["schemas"]["CustomerPlanPartDto"][];
+            operations: components["schemas"]["CustomerPlanOperationDto"][];
+            totals: components["schemas"]["PlanTotalsDto"];
+            /** @description Shortfalls the plan does not resolve. */
+            unresolved: components["schemas"]["CustomerPlanUnresolvedDto"][];
+            /** @description The plan's own notes and cautions (for example when no consistent set of parts exists). */
+            notes: string[];
+        };
+        BuildPlanDto: {
+            /**
+             * @default lowest-cost
+             * @enum {string}
+             */
+            objective?: "lowest-cost" | "least-fabrication" | "in-stock";
+            /** @description Check ids of the shortfalls to resolve; every shortfall when absent. */
+            resolve?: string[];
+            /**
+             * Format: uuid
+             * @description A stored fit report of this project to plan from; a new fit check is run and stored when absent.
+             */
+            fitReportId?: string;
         };
         PlanSummaryResponseDto: {
             id: string;
@@ -8462,7 +8515,15 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["PartsPlanResponseDto"][];
+                    "application/json": (components["schemas"]["PartsPlanResponseDto"] | components["schemas"]["CustomerPartsPlanResponseDto"])[];
+                };
+            };
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponseDto"];
                 };
             };
         };
@@ -8535,7 +8596,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["PartsPlanResponseDto"];
+                    "application/json": components["schemas"]["PartsPlanResponseDto"] | components["schemas"]["CustomerPartsPlanResponseDto"];
                 };
             };
             404: {

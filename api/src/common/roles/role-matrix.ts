@@ -25,6 +25,7 @@ import { Role } from './role';
  * | POST /fit-reports/what-if            | yes   | yes       | yes               | yes     | -          |
  * | GET /fit-settings                    | yes   | yes       | yes               | yes     | -          |
  * | PUT /fit-settings                    | yes   | -         | -                 | -       | -          |
+ * | GET parts plans (project's, one)     | yes   | yes       | yes               | yes     | own (view) |
  * | GET /labor-operations                | yes   | yes       | yes               | yes     | -          |
  * | POST/PATCH/DELETE /labor-operations  | yes   | yes       | -                 | -       | -          |
  * | GET quotes (list, one, PDF, compare) | yes   | yes       | yes               | yes     | own, sent  |
@@ -64,6 +65,11 @@ export const FIT_REPORT_READERS: Role[] = ALL_ROLES;
 export const FIT_WHAT_IF_USERS: Role[] = STAFF;
 export const FIT_SETTINGS_READERS: Role[] = STAFF;
 export const FIT_SETTINGS_WRITERS: Role[] = SHOP_ADMINS;
+/**
+ * Customers read the plans of their own projects only (the service scopes them), as the customer's view: parts,
+ * operations and totals at the plan's prices, without stock, candidates or solver figures.
+ */
+export const PARTS_PLAN_READERS: Role[] = ALL_ROLES;
 export const LABOR_OPERATION_READERS: Role[] = STAFF;
 export const LABOR_OPERATION_WRITERS: Role[] = ['owner', 'estimator'];
 /** Customers read the sent revisions of quotes on their own projects (the service scopes them). */

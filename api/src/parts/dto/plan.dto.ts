@@ -160,6 +160,49 @@ export class PartsPlanResponseDto {
   recheck: PlanRecheckDto;
 }
 
+export class CustomerPlanPartDto {
+  @ApiProperty() sku: string;
+  @ApiProperty() description: string;
+  @ApiProperty({ enum: PART_CATEGORIES }) category: CatalogPartCategory;
+  @ApiProperty() quantity: number;
+  @ApiProperty({ description: "The part's price in the plan (the shop's list price), cents." }) priceCents: number;
+  @ApiProperty({ description: 'Hours to fit it.' }) laborHours: number;
+  @ApiProperty({ description: 'Price plus fitting labor at the shop rate, cents.' }) totalCents: number;
+  @ApiProperty({ type: [String], description: 'What it answers: the titles of the fit shortfalls it resolves.' }) resolves: string[];
+}
+
+export class CustomerPlanOperationDto {
+  @ApiProperty() operation: string;
+  @ApiProperty() laborHours: number;
+  @ApiProperty({ description: 'The hours at the shop rate, cents.' }) laborCents: number;
+  @ApiProperty({ type: [String], description: 'The titles of the fit shortfalls it resolves.' }) resolves: string[];
+}
+
+export class CustomerPlanUnresolvedDto {
+  @ApiProperty() checkId: string;
+  @ApiProperty() title: string;
+  @ApiProperty() message: string;
+}
+
+/**
+ * A parts plan as the project's customer sees it: the chosen parts at the plan's prices, the operations with their
+ * hours, the totals and what the plan leaves unresolved. No stock, bins, suppliers, costs, counter states, passed-over
+ * candidates or solver figures.
+ */
+export class CustomerPartsPlanResponseDto {
+  @ApiProperty() id: string;
+  @ApiProperty() projectId: string;
+  @ApiProperty() version: number;
+  @ApiProperty({ enum: ['draft', 'locked'], description: 'locked: the version a quote is drawn from.' }) status: string;
+  @ApiProperty({ nullable: true, type: String }) lockedAt: string | null;
+  @ApiProperty() createdAt: string;
+  @ApiProperty({ type: [CustomerPlanPartDto] }) parts: CustomerPlanPartDto[];
+  @ApiProperty({ type: [CustomerPlanOperationDto] }) operations: CustomerPlanOperationDto[];
+  @ApiProperty({ type: PlanTotalsDto }) totals: PlanTotalsDto;
+  @ApiProperty({ type: [CustomerPlanUnresolvedDto], description: 'Shortfalls the plan does not resolve.' }) unresolved: CustomerPlanUnresolvedDto[];
+  @ApiProperty({ type: [String], description: "The plan's own notes and cautions (for example when no consistent set of parts exists)." }) notes: string[];
+}
+
 export class PlanSummaryResponseDto {
   @ApiProperty() id: string;
   @ApiProperty() projectId: string;

@@ -14,6 +14,7 @@ import { ProjectFormDrawer } from '@/features/projects/components/project-form-d
 import { ProjectStageSteps } from '@/features/projects/components/project-stage-steps';
 import { ProjectStatusTag } from '@/features/projects/components/project-status-tag';
 import { projectStatuses } from '@/features/projects/types';
+import { CustomerPartsPlanCard } from '@/features/parts-plans/components/customer-parts-plan-card';
 import { PartsPlanCard } from '@/features/parts-plans/components/parts-plan-card';
 import { ProjectQuotesCard } from '@/features/quotes/components/project-quotes-card';
 import { ProjectWorkOrderCard } from '@/features/work-orders/components/project-work-order-card';
@@ -110,6 +111,8 @@ export function ProjectDetailPage() {
           </Col>
         )}
       </Row>
+      {/* the customer's read-only view of the plan; nothing while the project has none */}
+      {isCustomer && <CustomerPartsPlanCard projectId={p.id} currency={currency} />}
       {canEdit && (
         <ProjectFormDrawer
           open={editing}
