@@ -66,7 +66,7 @@ describe('the customer follows their own swap', () => {
       const total = (shown.totals.totalCents / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
       await expectText(card.getByTestId('customer-plan-total'), new RegExp(total.replace(/[.,]/g, '\\$&')));
       if (shown.parts.length > 0) await expectVisible(card.getByText(shown.parts[0].sku, { exact: false }));
-      await expectVisible(card.getByTestId('planning-note'));
+      await expectText(card.getByTestId('plan-caution'), /welding and lifting work carry risks/);
       // nothing to build, lock or reserve on the customer's card, and no stock or bin words
       expect(await card.getByRole('button').count()).toBe(0);
       expect(await card.innerText()).not.toMatch(/\bon hand\b|\bbin\b|\bavailable\b|cheaper, not chosen/i);

@@ -1,6 +1,5 @@
 import { Alert, Card, Descriptions, Grid, List, Space, Table, Tag, Typography } from 'antd';
 import { renderText, textParts } from '@swapwright/shared';
-import { PlanningNote } from '@/components/planning-note';
 import { useUnits } from '@/hooks/use-units';
 import { formatMoneyCents } from '@/lib/units';
 import { useCustomerPartsPlans, type CustomerPartsPlan } from '../api/get-customer-parts-plans';
@@ -129,7 +128,11 @@ export function CustomerPartsPlanCard({ projectId, currency }: CustomerPartsPlan
         <Typography.Text type="secondary">
           These are the plan&apos;s prices; the quote you approve adds shop supplies and tax where they apply.
         </Typography.Text>
-        <PlanningNote />
+        {/* the page's footer carries the full planning-aid caution; this names the risky work of a plan */}
+        <Typography.Paragraph type="secondary" style={{ margin: 0 }} data-testid="plan-caution">
+          Fuel-system, welding and lifting work carry risks: the shop does it under the cautions in the fit report, local
+          codes and licensed practice.
+        </Typography.Paragraph>
       </Space>
     </Card>
   );

@@ -60,7 +60,7 @@ describe('CustomerPartsPlanCard', () => {
     expect(operation).toHaveTextContent('For: Oil pan to front crossmember');
     expect(card).toHaveTextContent('Fuel pressure: The stock pump is short of the pressure needed.');
     expect(card).toHaveTextContent('Left as they are, by choice: Hood to air cleaner.');
-    expect(within(card).getByTestId('planning-note')).toHaveTextContent(/planning aid/);
+    expect(within(card).getByTestId('plan-caution')).toHaveTextContent(/welding and lifting work carry risks/);
     // read-only: nothing to build, lock or reserve
     expect(within(card).queryByRole('button')).toBeNull();
   });
