@@ -1,4 +1,5 @@
 import { JwtService } from '@nestjs/jwt';
+import { formatUtcDay } from '@swapwright/shared';
 import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { bearer, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
@@ -106,7 +107,7 @@ describe('labor operations and quotes', () => {
     let token: string;
 
     it('sends: the customer gets the PDF (totals, rounding rule, cautions) and a signed link', async () => {
-      const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: HAND_LINES });
+      const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: HAND_LINES, validUntil: '2099-01-15' });
       quoteId = created.body.id;
       expect((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.customer))).status).toBe(404);
       const before = await lastMailId();
@@ -129,6 +130,14 @@ describe('labor operations and quotes', () => {
       expect(text).toMatch(/Lifting an engine/);
       expect(text).toMatch(/halves away from zero/);
       expect(text).toContain('Ironbark Swap Works');
+      // The customer reads days as days, in the app's one date style, never as ISO dates; a calendar day stays that day.
+      // Source: Unicode CLDR, locale "en", medium date pattern "MMM d, y" (ECMA-402 Intl.DateTimeFormat, month short).
+      expect(text).toContain('Valid until Jan 15, 2099');
+      expect(text).toContain(`Issued ${formatUtcDay(new Date(sent.body.revision.sentAt))}`);
+      expect(text).toMatch(/Fit report [0-9a-f]{8} of [A-Z][a-z]{2} \d{1,2}, \d{4}:/);
+      expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+      expect(mail.text).toContain('(the link works until Jan 15, 2099)');
+      expect(mail.text.replace(/\/quote-answer\/\S+/, '')).not.toMatch(/\d{4}-\d{2}-\d{2}/);
       token = tokenOf(mail.text);
       const project = await t.http.get(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.estimator));
       expect(project.body.status).toBe('quote-sent');

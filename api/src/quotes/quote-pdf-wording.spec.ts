@@ -1,4 +1,7 @@
-import { resolvedByLine } from './quote-pdf.service';
+import type { Shop } from '../shops/shop.entity';
+import { pdfText } from '../../test/helpers/pdf-text';
+import { QuotePdfService, resolvedByLine } from './quote-pdf.service';
+import type { QuoteView } from './quotes.service';
 
 describe('the quote PDF: remedies under a shortfall', () => {
   it('reads as one sentence, each remedy without its own full stop before the separator', () => {
@@ -7,5 +10,42 @@ describe('the quote PDF: remedies under a shortfall', () => {
       'Resolved by: A rear-sump pan that bolts to this engine clears the crossmember; Notch the crossmember (3.5 h).',
     );
     expect(resolvedByLine(['Raise the engine 12 mm. '])).toBe('Resolved by: Raise the engine 12 mm.');
+  });
+});
+
+describe('the quote PDF: days', () => {
+  const totals = { partsSubtotalCents: 0, laborSubtotalCents: 13500, suppliesCents: 0, partsDiscountCents: 0, laborDiscountCents: 0, partsTaxCents: 0, laborTaxCents: 0, taxCents: 0, totalCents: 13500, depositCents: 4050 };
+  const view = (sentAt: Date | null) =>
+    ({
+      quote: { number: 3 },
+      project: { title: 'Invented flatbed: diesel swap', vehicleDescription: '', customer: { name: 'Test Customer', email: 'customer@example.test', phone: null } },
+      revision: {
+        number: 2,
+        sentAt,
+        createdAt: new Date('2026-12-01T10:00:00Z'),
+        validUntil: '2027-01-15',
+        currency: 'USD',
+        laborRateCents: 13500,
+        lines: [{ kind: 'labor', source: 'manual', description: 'Remove and install engine', quantity: 1, hours: 1, unitPriceCents: 13500, lineTotalCents: 13500 }],
+        totals,
+        depositKind: 'percent',
+        depositPercent: 30,
+        terms: 'Deposit due on approval.',
+        partsPlanVersion: null,
+      },
+    }) as unknown as QuoteView;
+  const render = (sentAt: Date | null) => new QuotePdfService().render({ view: view(sentAt), shop: { name: 'Test Garage' } as Shop, report: null });
+
+  it('prints the last valid day and the issue day as days a customer reads, never as ISO dates', async () => {
+    // Source: Unicode CLDR, locale "en", medium date pattern "MMM d, y" (ECMA-402 Intl.DateTimeFormat, month short).
+    // A calendar day is that day in every zone; the day of sending is its UTC day, the day the API dates quotes by.
+    const text = await pdfText(await render(new Date('2026-12-03T23:30:00-08:00')));
+    expect(text).toContain('Valid until Jan 15, 2027');
+    expect(text).toContain('Issued Dec 4, 2026');
+    expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+  });
+
+  it('dates a revision not sent yet by the day it was written', async () => {
+    expect(await pdfText(await render(null))).toContain('Issued Dec 1, 2026');
   });
 });

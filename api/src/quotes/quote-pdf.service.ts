@@ -2,7 +2,9 @@ import { Injectable } from '@nestjs/common';
 import {
   FIT_REPORT_CAUTION,
   FIT_REPORT_SAFETY,
+  formatCalendarDate,
   formatMoney,
+  formatUtcDay,
   QUOTE_ROUNDING_RULE,
   quoteTotalRows,
   sideViewGeometry,
@@ -69,8 +71,8 @@ export class QuotePdfService {
     const label = `Quote Q-${String(quote.number).padStart(4, '0')} · revision ${revision.number}`;
     doc.font('bold').fontSize(12).fillColor(INK).text(label, 50, 50, { width, align: 'right' });
     doc.font('body').fontSize(10).fillColor(MUTED);
-    doc.text(`Issued ${(revision.sentAt ?? revision.createdAt).toISOString().slice(0, 10)}`, { width, align: 'right' });
-    doc.text(`Valid until ${revision.validUntil}`, { width, align: 'right' });
+    doc.text(`Issued ${formatUtcDay(revision.sentAt ?? revision.createdAt)}`, { width, align: 'right' });
+    doc.text(`Valid until ${formatCalendarDate(revision.validUntil)}`, { width, align: 'right' });
     doc.moveDown(1.2);
 
     // Customer and vehicle
@@ -131,7 +133,7 @@ export class QuotePdfService {
     const lines = revision.lines;
     const plan = revision.partsPlanVersion !== null ? ` Parts from parts plan version ${revision.partsPlanVersion}.` : '';
     doc.fillColor(MUTED).fontSize(9).text(
-      `Fit report ${record.id.slice(0, 8)} of ${record.createdAt.toISOString().slice(0, 10)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.${plan}`,
+      `Fit report ${record.id.slice(0, 8)} of ${formatUtcDay(record.createdAt)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.${plan}`,
       50,
       doc.y,
       { width },

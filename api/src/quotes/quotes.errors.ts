@@ -1,4 +1,4 @@
-import { formatCalendarDate } from '@swapwright/shared';
+import { formatCalendarDate, formatUtcDay } from '@swapwright/shared';
 import { AppError } from '../common/errors/app-error';
 
 export const QuoteErrors = {
@@ -31,9 +31,8 @@ export const QuoteErrors = {
   linkExpired: () => new AppError(410, 'quote_link_expired', 'This quote link has expired. Ask the shop to send the quote again.'),
   /** An older revision's link once a later revision was accepted: what happened and when, not "open the newest e-mail". */
   linkAfterAcceptance: (revision: number | null, answeredAt: Date | null, depositPaidAt: Date | null) => {
-    const day = (at: Date) => formatCalendarDate(at.toISOString().slice(0, 10));
-    const accepted = `This quote was already accepted${answeredAt ? ` on ${day(answeredAt)}` : ''}${revision ? ` (revision ${revision})` : ''}`;
-    const deposit = depositPaidAt ? `, and the deposit was paid on ${day(depositPaidAt)}` : '';
+    const accepted = `This quote was already accepted${answeredAt ? ` on ${formatUtcDay(answeredAt)}` : ''}${revision ? ` (revision ${revision})` : ''}`;
+    const deposit = depositPaidAt ? `, and the deposit was paid on ${formatUtcDay(depositPaidAt)}` : '';
     return new AppError(409, 'quote_link_already_accepted', `${accepted}${deposit}. There is nothing more to do with this link; the shop will be in touch about the work.`);
   },
   linkSuperseded: () => new AppError(409, 'quote_link_superseded', 'The shop has sent a newer revision of this quote; open the link in the newest e-mail.'),

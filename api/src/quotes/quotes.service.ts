@@ -1,7 +1,7 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, formatMoney, QUOTE_STATUS_LABELS, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -568,7 +568,7 @@ export class QuotesService implements OnModuleInit {
           `Hello ${customer.name},\n\n` +
           `${shop.name} has prepared quote ${quoteLabel(view.quote)} (revision ${view.revision.number}) for "${view.project.title}". ` +
           `Total ${formatMoney(view.revision.totals.totalCents, view.revision.currency)}, deposit on approval ${formatMoney(view.revision.totals.depositCents, view.revision.currency)}. ` +
-          `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${view.revision.validUntil}):\n${link}\n\n` +
+          `The PDF is attached.\n\nRead it and approve or decline it here (the link works until ${formatCalendarDate(view.revision.validUntil)}):\n${link}\n\n` +
           `This quote is a planning aid built on the figures measured so far; the shop confirms every measurement before cutting or ordering.\n`,
         attachments: [{ filename: fileName, content, contentType: 'application/pdf' }],
       },

@@ -1,4 +1,4 @@
-import { formatCalendarDate, utcToday } from './calendar-date';
+import { formatCalendarDate, formatUtcDay, utcToday } from './calendar-date';
 
 describe('calendar days', () => {
   it('writes a calendar day as "Jan 1, 2020"', () => {
@@ -16,5 +16,12 @@ describe('calendar days', () => {
   it("dates today by UTC, whatever the clock's zone", () => {
     expect(utcToday(new Date('2026-12-03T23:30:00-08:00'))).toBe('2026-12-04');
     expect(utcToday(new Date('2026-12-03T00:10:00Z'))).toBe('2026-12-03');
+  });
+
+  it('writes the UTC day of a moment in the same style, whatever the zone it was taken in', () => {
+    // Source: ISO 8601 (UTC offsets): 2026-12-31T20:30-05:00 is 2027-01-01T01:30Z; medium "en" pattern as above.
+    expect(formatUtcDay(new Date('2026-12-31T20:30:00-05:00'))).toBe('Jan 1, 2027');
+    expect(formatUtcDay(new Date('2027-01-15T00:00:00Z'))).toBe('Jan 15, 2027');
+    expect(formatUtcDay(new Date('2027-01-15T23:59:59.999Z'))).toBe('Jan 15, 2027');
   });
 });

@@ -13,6 +13,14 @@ export function formatCalendarDate(iso: string): string {
   return Number.isNaN(date.getTime()) ? iso : dayFormat.format(date);
 }
 
+/**
+ * The calendar day of a moment (a quote's sending, a report's making) in UTC, the day the API dates quotes by, written as
+ * "Jan 15, 2027": the same day whatever the zone of the server that writes it.
+ */
+export function formatUtcDay(at: Date): string {
+  return formatCalendarDate(utcToday(at));
+}
+
 /** Today's calendar day in UTC ("2027-01-15"), the day the API dates quotes by. */
 export function utcToday(now: Date = new Date()): string {
   return now.toISOString().slice(0, 10);
