@@ -2,7 +2,7 @@ import { JwtService } from '@nestjs/jwt';
 import { formatUtcDay } from '@swapwright/shared';
 import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
-import { bearer, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
+import { bearer, countRows, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
 import { pdfText } from './helpers/pdf-text';
 
@@ -324,6 +324,31 @@ describe('labor operations and quotes', () => {
       expect(declined.status).toBe(200);
       expect(declined.body).toMatchObject({ status: 'turned-down', declineReason: 'Going with the smaller engine' });
       expect((await t.http.post(`/api/quotes/${created.body.id}/answer`).set(...bearer(demo.estimator)).send({ answer: 'accept' })).status).toBe(403);
+    });
+  });
+
+  describe('a quote of a member\'s own truck', () => {
+    it('is not sent: 422 saying there is no customer, nothing frozen, no e-mail queued; the author reads it as their own', async () => {
+      const project = await t.http.post('/api/projects').set(...bearer(demo.estimator)).send({ forMyself: true, title: 'Estimator own truck: budget' }).expect(201);
+      const created = await t.http.post(`/api/projects/${project.body.id}/quotes`).set(...bearer(demo.estimator)).send({ lines: HAND_LINES }).expect(201);
+      expect(created.body.forMyself).toBe(true);
+      const jobsBefore = await countRows(t.dataSource, 'jobs');
+      const refused = await t.http.post(`/api/quotes/${created.body.id}/send`).set(...bearer(demo.estimator));
+      expect(refused.status).toBe(422);
+      expect(refused.body.code).toBe('quote_own_project');
+      expect(refused.body.message).toBe('This project is your own truck, so there is no customer to send the quote to. Keep the quote as the budget of your build.');
+      expect(await countRows(t.dataSource, 'jobs')).toBe(jobsBefore);
+      const after = await t.http.get(`/api/quotes/${created.body.id}`).set(...bearer(demo.estimator)).expect(200);
+      expect(after.body).toMatchObject({ status: 'drafting', sentRevision: null, forMyself: true });
+      expect(after.body.revision.sent).toBe(false);
+      const listed = await t.http.get(`/api/projects/${project.body.id}/quotes`).set(...bearer(demo.estimator)).expect(200);
+      expect(listed.body.map((quote: { forMyself: boolean }) => quote.forMyself)).toEqual([true]);
+
+      // To the shop's owner it is a colleague's truck, one more customer record: theirs to send, like any other.
+      const asOwner = await t.http.get(`/api/quotes/${created.body.id}`).set(...bearer(demo.owner)).expect(200);
+      expect(asOwner.body.forMyself).toBe(false);
+      const customers = await t.http.get(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).expect(200);
+      expect(customers.body.every((quote: { forMyself: boolean }) => quote.forMyself === false)).toBe(true);
     });
   });
 });

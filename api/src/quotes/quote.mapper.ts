@@ -7,10 +7,11 @@ import {
   QuoteRevisionResponseDto,
   QuoteSettingsResponseDto,
 } from './dto/quote-response.dto';
+import type { AuthUser } from '../common/tenant/auth-user';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuoteRevision } from './quote-revision.entity';
 import { QuoteSettings } from './quote-settings.entity';
-import { quoteLabel, QuoteView } from './quotes.service';
+import { isOwnProject, quoteLabel, QuoteView } from './quotes.service';
 
 /**
  * Who reads the quote: the shop's own people see how each price was made; the customer (signed in, or holding the
@@ -21,6 +22,9 @@ export type QuoteAudience = 'shop' | 'customer';
 export function quoteAudienceOf(user: { role: string }): QuoteAudience {
   return user.role === 'customer' ? 'customer' : 'shop';
 }
+
+/** Who asks: a signed-in person, or the holder of the e-mailed link (who sees the quote as its customer). */
+export type QuoteViewer = Pick<AuthUser, 'role' | 'userId'> | 'link';
 
 export function mapQuoteRevision(revision: QuoteRevision, audience: QuoteAudience = 'shop'): QuoteRevisionResponseDto {
   return {
@@ -55,13 +59,15 @@ export function mapQuoteRevision(revision: QuoteRevision, audience: QuoteAudienc
   };
 }
 
-export function mapQuote(view: QuoteView, audience: QuoteAudience = 'shop'): QuoteResponseDto {
+export function mapQuote(view: QuoteView, viewer: QuoteViewer): QuoteResponseDto {
   const { quote, project } = view;
+  const audience: QuoteAudience = viewer === 'link' ? 'customer' : quoteAudienceOf(viewer);
   return {
     id: quote.id,
     projectId: project.id,
     projectTitle: project.title,
     customerName: project.customer?.name ?? null,
+    forMyself: viewer !== 'link' && isOwnProject(project, viewer),
     label: quoteLabel(quote),
     status: view.status,
     latestRevision: quote.latestRevision,

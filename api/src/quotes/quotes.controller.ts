@@ -20,7 +20,7 @@ import {
   QuoteRevisionDiffResponseDto,
   QuoteSettingsResponseDto,
 } from './dto/quote-response.dto';
-import { mapQuote, mapQuoteNotification, mapQuoteSettings, mapRevisionDiff, quoteAudienceOf } from './quote.mapper';
+import { mapQuote, mapQuoteNotification, mapQuoteSettings, mapRevisionDiff } from './quote.mapper';
 import { QuoteSettingsService } from './quote-settings.service';
 import { QUOTE_STATUSES } from './quote.entity';
 import { QuotesService } from './quotes.service';
@@ -40,14 +40,14 @@ export class ProjectQuotesController {
   @Roles(...QUOTE_READERS)
   @ApiOkResponse({ type: [QuoteResponseDto] })
   async list(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string): Promise<QuoteResponseDto[]> {
-    return (await this.quotes.listForProject(user, projectId)).map((view) => mapQuote(view, quoteAudienceOf(user)));
+    return (await this.quotes.listForProject(user, projectId)).map((view) => mapQuote(view, user));
   }
 
   @Post()
   @Roles(...QUOTE_WRITERS)
   @ApiCreatedResponse({ type: QuoteResponseDto, description: 'Without lines, the first draft is drawn from the fit report and the shop\'s labor operations.' })
   async create(@CurrentUser() user: AuthUser, @Param('projectId', ParseIdPipe) projectId: string, @Body() body: CreateQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.create(user, projectId, body));
+    return mapQuote(await this.quotes.create(user, projectId, body), user);
   }
 }
 
@@ -62,7 +62,7 @@ export class QuotesController {
   @ApiOkResponse({ type: [QuoteResponseDto], description: "The shop's newest quotes (up to 100), optionally of one status" })
   @ApiQuery({ name: 'status', required: false, enum: QUOTE_STATUSES })
   async list(@CurrentUser() user: AuthUser, @Query('status') status?: string): Promise<QuoteResponseDto[]> {
-    return (await this.quotes.listForShop(user, status)).map((view) => mapQuote(view, 'shop'));
+    return (await this.quotes.listForShop(user, status)).map((view) => mapQuote(view, user));
   }
 
   @Get('notifications')
@@ -81,14 +81,14 @@ export class QuotesController {
     @Param('id', ParseIdPipe) id: string,
     @Query('revision', new ParseIntPipe({ optional: true })) revision?: number,
   ): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.revision(user, id, revision), quoteAudienceOf(user));
+    return mapQuote(await this.quotes.revision(user, id, revision), user);
   }
 
   @Patch(':id')
   @Roles(...QUOTE_WRITERS)
   @ApiOkResponse({ type: QuoteResponseDto, description: 'Edits the working revision; once the newest was sent, the edit starts the next revision.' })
   async update(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: UpdateQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.update(user, id, body));
+    return mapQuote(await this.quotes.update(user, id, body), user);
   }
 
   @Post(':id/send')
@@ -96,7 +96,7 @@ export class QuotesController {
   @Roles(...QUOTE_WRITERS)
   @ApiOkResponse({ type: QuoteResponseDto, description: 'Freezes the working revision and queues its e-mail with the PDF and an approval link (sent by the background worker within moments).' })
   async send(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.send(user, id));
+    return mapQuote(await this.quotes.send(user, id), user);
   }
 
   @Post(':id/answer')
@@ -104,7 +104,7 @@ export class QuotesController {
   @Roles(...QUOTE_ANSWERERS)
   @ApiOkResponse({ type: QuoteResponseDto })
   async answer(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: AnswerQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.answer({ kind: 'member', user }, id, body), quoteAudienceOf(user));
+    return mapQuote(await this.quotes.answer({ kind: 'member', user }, id, body), user);
   }
 
   @Get(':id/compare')
@@ -143,7 +143,7 @@ export class QuoteLinksController {
   @Get()
   @ApiOkResponse({ type: QuoteResponseDto })
   async get(@Param('token') token: string): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.getByLink(token), 'customer');
+    return mapQuote(await this.quotes.getByLink(token), 'link');
   }
 
   @Public()
@@ -151,7 +151,7 @@ export class QuoteLinksController {
   @HttpCode(200)
   @ApiOkResponse({ type: QuoteResponseDto })
   async answer(@Param('token') token: string, @Body() body: AnswerQuoteDto): Promise<QuoteResponseDto> {
-    return mapQuote(await this.quotes.answer({ kind: 'link', shopId: '' }, token, body), 'customer');
+    return mapQuote(await this.quotes.answer({ kind: 'link', shopId: '' }, token, body), 'link');
   }
 
   @Public()

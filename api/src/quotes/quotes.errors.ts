@@ -10,6 +10,12 @@ export const QuoteErrors = {
   emptyQuote: () => new AppError(422, 'quote_empty', 'Add at least one parts or labor line before sending the quote.'),
   noCustomerEmail: () =>
     new AppError(422, 'quote_customer_without_email', "The project's customer has no e-mail address; add one to the customer before sending."),
+  ownProject: () =>
+    new AppError(
+      422,
+      'quote_own_project',
+      'This project is your own truck, so there is no customer to send the quote to. Keep the quote as the budget of your build.',
+    ),
   pastValidity: (validUntil: string) =>
     new AppError(
       422,

@@ -70,6 +70,14 @@ function refusePastValidity(validUntil: string | undefined): void {
   if (validUntil !== undefined && validUntil < todayIso()) throw QuoteErrors.validUntilPast(validUntil);
 }
 
+/**
+ * Whether the project is the member's own truck: filed under their own customer record ("My own truck"). A quote of it
+ * is their budget, with nobody to send it to. A customer signed in to their own project is not a member building it.
+ */
+export function isOwnProject(project: Project, user: Pick<AuthUser, 'role' | 'userId'>): boolean {
+  return user.role !== 'customer' && project.customer?.userId != null && project.customer.userId === user.userId;
+}
+
 /** A quote awaiting an answer past its validity date reads as lapsed. */
 export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = todayIso()): QuoteStatus {
   if (quote.status === 'awaiting-answer' && sent && sent.validUntil < today) return 'lapsed';
@@ -313,6 +321,7 @@ export class QuotesService implements OnModuleInit {
   async send(user: AuthUser, id: string): Promise<QuoteView> {
     const view = await this.get(user, id);
     if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
+    if (isOwnProject(view.project, user)) throw QuoteErrors.ownProject();
     const latest = view.revisions[view.revisions.length - 1];
     if (latest.lines.length === 0) throw QuoteErrors.emptyQuote();
     if (latest.validUntil < todayIso()) throw QuoteErrors.pastValidity(latest.validUntil);

@@ -72,6 +72,11 @@ export class QuoteResponseDto {
   @ApiProperty() projectId: string;
   @ApiProperty() projectTitle: string;
   @ApiProperty({ type: String, nullable: true }) customerName: string | null;
+  @ApiProperty({
+    description:
+      "True when the project is the signed-in member's own truck (filed under their own customer record): there is no customer to send the quote to, and sending it is refused",
+  })
+  forMyself: boolean;
   @ApiProperty({ example: 'Q-0007' }) label: string;
   @ApiProperty({ enum: QUOTE_STATUSES }) status: QuoteStatus;
   @ApiProperty() latestRevision: number;

@@ -7,6 +7,7 @@ import { useCreateQuote } from '../api/create-quote';
 import { useProjectQuotes } from '../api/get-project-quotes';
 import { useSendQuote } from '../api/send-quote';
 import { formatDate } from '@/lib/dates';
+import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 
 export interface ProjectQuotesCardProps {
@@ -24,7 +25,10 @@ function customerAction(quote: { status: string; depositState: string }): string
   return 'Open quote';
 }
 
-/** The project's quotes: draft one from the parts plan and the fit report, send it to the customer, follow the answer and the deposit. */
+/**
+ * The project's quotes: draft one from the parts plan and the fit report, send it to the customer, follow the answer and the
+ * deposit. A quote of the member's own truck has nobody to send it to: it says so in place of the button.
+ */
 export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: ProjectQuotesCardProps) {
   const quotes = useProjectQuotes(projectId);
   const create = useCreateQuote(projectId);
@@ -61,7 +65,7 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
                   {customerAction(quote)}
                 </Button>
               ),
-              canWrite && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
+              canWrite && !quote.forMyself && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
                 <Button
                   key="send"
                   type="primary"
@@ -91,6 +95,11 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
                 {formatDate(quote.revision.validUntil)}
                 {quote.declineReason ? ` · reason: ${quote.declineReason}` : ''}
               </Typography.Text>
+              {canWrite && quote.forMyself && quote.status !== 'approved' && (
+                <Typography.Text type="secondary" data-testid="own-truck-quote-note">
+                  {OWN_TRUCK_QUOTE_NOTE}
+                </Typography.Text>
+              )}
             </Flex>
           </List.Item>
         )}

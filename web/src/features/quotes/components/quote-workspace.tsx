@@ -12,6 +12,7 @@ import { useQuote } from '../api/get-quote';
 import { useQuoteSettings } from '../api/get-quote-settings';
 import { useSendQuote } from '../api/send-quote';
 import { useUpdateQuote } from '../api/update-quote';
+import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
 import type { Quote } from '../types';
 import { QuoteLineEditor } from './quote-line-editor';
 import { QuoteLines } from './quote-lines';
@@ -48,7 +49,7 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
   const revision = quote.revision;
   const approved = quote.status === 'approved';
   const editable = canWrite && !approved && !revision.sent && shownNumber === undefined;
-  const canSend = canWrite && !approved && !revision.sent && shownNumber === undefined;
+  const canSend = canWrite && !quote.forMyself && !approved && !revision.sent && shownNumber === undefined;
 
   const startRevision = () =>
     update.mutate({}, { onSuccess: (next) => notifySuccess({ title: `Revision ${next.latestRevision} started`, description: 'Change its lines, then send it.' }) });
@@ -79,6 +80,7 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
           </>
         }
       />
+      {canWrite && quote.forMyself && !approved && <Alert type="info" showIcon title={OWN_TRUCK_QUOTE_NOTE} style={{ marginBottom: 16 }} data-testid="own-truck-quote-note" />}
       {send.isError && <Alert type="error" showIcon title={getErrorMessage(send.error)} style={{ marginBottom: 16 }} />}
       <Card
         data-testid="quote-revision"
