@@ -62,6 +62,7 @@ export function InviteForm({ customerOptions, customersLoading, onCustomerSearch
             showSearch={{ filterOption: false, onSearch: onCustomerSearch }}
             options={customerOptions}
             loading={customersLoading}
+            notFoundContent={customersLoading ? 'Looking…' : 'No customer found'}
             placeholder="Search customers"
             aria-label="Customer record"
           />
