@@ -1,4 +1,4 @@
-import { DEMO_LABOR_OPERATIONS, DEMO_PARTS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import Stripe from 'stripe';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { seedParts } from '../src/database/seed/seed-parts';
@@ -7,6 +7,7 @@ import exifr from 'exifr';
 import { readdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
+import { demoOperation, demoPart, SHOP_QUOTE_LINES } from './fixtures/shop-quote-lines';
 import { bearer, countRows, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
 import { jpegWithGps, makeJpeg } from './helpers/test-images';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
@@ -14,17 +15,9 @@ import { pdfText } from './helpers/pdf-text';
 import { RunningPaymentFake } from './helpers/payment-fake-process';
 
 const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
-const operation = (code: string) => DEMO_LABOR_OPERATIONS.find((candidate) => candidate.code === code)!;
-const part = (sku: string) => DEMO_PARTS.find((candidate) => candidate.sku === sku)!;
-
-/** A quote as an estimator builds it from the plan: shop operations and catalog parts. */
-const LINES = [
-  { kind: 'labor', description: operation('oil-pan-pickup').name, laborOperationId: operation('oil-pan-pickup').id, hours: 2.5 },
-  { kind: 'labor', description: operation('cam-timing-set').name, laborOperationId: operation('cam-timing-set').id, hours: 3 },
-  { kind: 'part', description: part('TR-4410').description, catalogKind: 'parts', catalogItemId: part('TR-4410').id, quantity: 1, pricing: 'list', unitPriceCents: 32900 },
-  { kind: 'part', description: part('TR-4411').description, catalogKind: 'parts', catalogItemId: part('TR-4411').id, quantity: 1, pricing: 'list', unitPriceCents: 6400 },
-  { kind: 'part', description: part('TR-OP-HV').description, catalogKind: 'parts', catalogItemId: part('TR-OP-HV').id, quantity: 1, pricing: 'list', unitPriceCents: 13900 },
-];
+const operation = demoOperation;
+const part = demoPart;
+const LINES = SHOP_QUOTE_LINES;
 
 type Check = { key: string; label: string; photos: { id: string; contentType: string; widthPx: number; heightPx: number; uploadedByName: string }[]; measured: boolean; range: string | null; rangeFrom: string | null; latest: { result: string; value: number | null; recordedByName: string; recordedAt: string } | null; fitFinding: { checkId: string } | null };
 type Step = { key: string; name: string; torque: { joint: string | null; fastener: string; lbfFt: number; newtonMetres: number; sequence: string | null; partSku: string | null }[]; checks: Check[] };

@@ -15,6 +15,7 @@ import {
 import { AuthUser } from '../common/tenant/auth-user';
 import { AnswerQuoteDto, CreateQuoteDto, UpdateQuoteDto, UpdateQuoteSettingsDto } from './dto/quote-input.dto';
 import {
+  OwnBuildResponseDto,
   QuoteNotificationResponseDto,
   QuoteResponseDto,
   QuoteRevisionDiffResponseDto,
@@ -97,6 +98,19 @@ export class QuotesController {
   @ApiOkResponse({ type: QuoteResponseDto, description: 'Freezes the working revision and queues its e-mail with the PDF and an approval link (sent by the background worker within moments).' })
   async send(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<QuoteResponseDto> {
     return mapQuote(await this.quotes.send(user, id), user);
+  }
+
+  @Post(':id/start-own-build')
+  @HttpCode(200)
+  @Roles(...QUOTE_WRITERS)
+  @ApiOkResponse({
+    type: OwnBuildResponseDto,
+    description:
+      "Only for a quote of the member's own truck: freezes the working revision as the approved budget (no e-mail, no deposit due), moves the project to its deposit-paid stage and opens the work order. Once started, answers 409.",
+  })
+  async startOwnBuild(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<OwnBuildResponseDto> {
+    const { view, workOrderId } = await this.quotes.startOwnBuild(user, id);
+    return { quote: mapQuote(view, user), workOrderId };
   }
 
   @Post(':id/answer')

@@ -16,6 +16,20 @@ export const QuoteErrors = {
       'quote_own_project',
       'This project is your own truck, so there is no customer to send the quote to. Keep the quote as the budget of your build.',
     ),
+  notOwnProject: () =>
+    new AppError(
+      422,
+      'quote_not_own_project',
+      "Only a quote of your own truck starts a build this way. A customer's quote opens its work order once the customer approves it and pays the deposit.",
+    ),
+  ownBuildWithoutLabor: () =>
+    new AppError(422, 'quote_own_build_without_labor', 'Add at least one labor line first: the build sheet has a step for each labor line of your budget.'),
+  ownBuildStarted: (revision: number | null) =>
+    new AppError(
+      409,
+      'quote_own_build_started',
+      `Your build was already started from this budget${revision ? ` (revision ${revision})` : ''}; open its work order under Work orders. For further work, start a new quote.`,
+    ),
   pastValidity: (validUntil: string) =>
     new AppError(
       422,

@@ -10,6 +10,7 @@ import { PartsModule } from '../parts/parts.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { ShopsModule } from '../shops/shops.module';
 import { UsersModule } from '../users/users.module';
+import { WorkOrdersModule } from '../work-orders/work-orders.module';
 import { QuoteLinksService } from './quote-links.service';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuotePdfService } from './quote-pdf.service';
@@ -39,6 +40,7 @@ import { QuotesService } from './quotes.service';
     CatalogModule,
     ShopsModule,
     UsersModule,
+    WorkOrdersModule,
   ],
   controllers: [ProjectQuotesController, QuotesController, QuoteLinksController, QuoteSettingsController],
   providers: [QuotesService, QuoteSettingsService, QuoteLinksService, QuotePdfService],

@@ -24,6 +24,7 @@ import { ProjectsService } from '../projects/projects.service';
 import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
 import { UsersService } from '../users/users.service';
+import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { AnswerQuoteDto, CreateQuoteDto, QuoteLineInputDto, UpdateQuoteDto } from './dto/quote-input.dto';
 import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromPlan, draftLinesFromReport } from './quote-draft.builder';
 import { QuoteLinksService } from './quote-links.service';
@@ -107,6 +108,7 @@ export class QuotesService implements OnModuleInit {
     private readonly catalog: CatalogService,
     private readonly shops: ShopsService,
     private readonly users: UsersService,
+    private readonly workOrders: WorkOrdersService,
     private readonly settings: QuoteSettingsService,
     private readonly links: QuoteLinksService,
     private readonly audit: AuditService,
@@ -396,6 +398,48 @@ export class QuotesService implements OnModuleInit {
     });
     const answered = await this.findQuote(shopId, view.quote.id);
     return this.viewOf(shopReader(shopId), answered, view.project, true);
+  }
+
+  /**
+   * A member's own truck has no customer to approve the budget or pay a deposit: starting the build freezes the working
+   * revision as the approved one (no e-mail, no deposit due), moves the project to where the work order opens and opens
+   * it, as a paid deposit does, with the audit entry, all in one transaction. Once started, a second call is refused.
+   */
+  async startOwnBuild(user: AuthUser, id: string): Promise<{ view: QuoteView; workOrderId: string }> {
+    const view = await this.get(user, id);
+    if (!isOwnProject(view.project, user)) throw QuoteErrors.notOwnProject();
+    if (view.quote.status === 'approved') throw QuoteErrors.ownBuildStarted(view.quote.sentRevision);
+    const latest = view.revisions[view.revisions.length - 1];
+    if (!latest.lines.some((line) => line.kind === 'labor')) throw QuoteErrors.ownBuildWithoutLabor();
+    const now = new Date();
+    const workOrderId = await this.dataSource.transaction(async (manager) => {
+      await this.audit.record(manager, {
+        shopId: user.shopId,
+        actor: user,
+        kind: 'money',
+        action: 'quote.own-build-started',
+        subjectId: view.quote.id,
+        summary: `Quote ${quoteLabel(view.quote)} revision ${latest.number} kept as the budget of ${user.name}'s own build: total ${formatMoney(latest.totals.totalCents, latest.currency)}, no deposit.`,
+        before: { status: view.quote.status, sentRevision: view.quote.sentRevision ?? null },
+        after: { status: 'approved', sentRevision: latest.number, totalCents: latest.totals.totalCents, depositCents: 0 },
+      });
+      if (latest.sentAt === null) await manager.update(QuoteRevision, { id: latest.id, shopId: user.shopId, sentAt: IsNull() }, { sentAt: now });
+      // Guarded by the status read above: of two calls at once, the second finds the quote changed and changes nothing.
+      const changed = await manager.update(
+        Quote,
+        { id: view.quote.id, shopId: user.shopId, status: view.quote.status, latestRevision: latest.number },
+        { status: 'approved', sentRevision: latest.number, sentById: user.userId, answeredAt: now, declineReason: null, depositState: 'not-due' },
+      );
+      if (!changed.affected) throw QuoteErrors.ownBuildStarted(null);
+      await this.projects.advanceStatus(user.shopId, view.project.id, 'deposit-paid', manager);
+      const opened = await this.workOrders.openForQuote(manager, {
+        quote: { ...view.quote, status: 'approved', sentRevision: latest.number },
+        revision: { ...latest, sentAt: latest.sentAt ?? now },
+      });
+      if (!opened) throw QuoteErrors.ownBuildStarted(latest.number);
+      return opened;
+    });
+    return { view: await this.get(user, id), workOrderId };
   }
 
   // ------------------------------------------------------------------ for the payments and work-order modules

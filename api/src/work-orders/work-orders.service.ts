@@ -60,10 +60,11 @@ export class WorkOrdersService {
   // ------------------------------------------------------------------ opening (inside the deposit's transaction)
 
   /**
-   * Opens the work order of an approved quote, in the transaction that settles its deposit; a second call for the same
-   * quote changes nothing (one work order per quote, by a unique key). Returns whether one was opened.
+   * Opens the work order of an approved quote, in the transaction that settles its deposit (or, for a member's own
+   * truck, the one that starts their build: `QuotesService.startOwnBuild`); a second call for the same
+   * quote changes nothing (one work order per quote, by a unique key). Returns the id of the one opened, or null.
    */
-  async openForQuote(manager: EntityManager, approved: ApprovedQuote): Promise<boolean> {
+  async openForQuote(manager: EntityManager, approved: ApprovedQuote): Promise<string | null> {
     const { quote, revision } = approved;
     const shopId = quote.shopId;
     const operationIds = revision.lines.map((line) => line.laborOperationId).filter((id): id is string => Boolean(id));
@@ -103,12 +104,13 @@ export class WorkOrdersService {
     }
     const report = revision.fitReportId ? await manager.findOne(FitReportRecord, { where: { shopId, id: revision.fitReportId } }) : null;
     const findings = (report?.results as FitReport | undefined)?.findings ?? [];
+    const id = randomUUID();
     const result = await manager
       .createQueryBuilder()
       .insert()
       .into(WorkOrder)
       .values({
-        id: randomUUID(),
+        id,
         shopId,
         projectId: quote.projectId,
         quoteId: quote.id,
@@ -125,7 +127,7 @@ export class WorkOrdersService {
       })
       .orIgnore()
       .execute();
-    return (result.raw as { affectedRows?: number }).affectedRows === 1;
+    return (result.raw as { affectedRows?: number }).affectedRows === 1 ? id : null;
   }
 
   /** The shop's part a quote line prices: a part row itself (`parts`), or the part carrying that fit spec. */

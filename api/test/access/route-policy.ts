@@ -165,6 +165,7 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'GET /api/quotes/:id': ALL,
   'PATCH /api/quotes/:id': SALES,
   'POST /api/quotes/:id/send': SALES,
+  'POST /api/quotes/:id/start-own-build': SALES,
   'POST /api/quotes/:id/answer': CUSTOMER_ONLY,
   'GET /api/quotes/:id/compare': ALL,
   'GET /api/quotes/:id/pdf': ALL,

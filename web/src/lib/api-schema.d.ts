@@ -1468,6 +1468,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/quotes/{id}/start-own-build": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["QuotesController_startOwnBuild"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/quotes/{id}/answer": {
         parameters: {
             query?: never;
@@ -4223,6 +4239,14 @@ export interface components {
             validUntil?: string;
             terms?: string;
             notes?: string;
+        };
+        OwnBuildResponseDto: {
+            quote: components["schemas"]["QuoteResponseDto"];
+            /**
+             * Format: uuid
+             * @description The work order opened from the budget: its steps, torques, cautions and checks to record
+             */
+            workOrderId: string;
         };
         AnswerQuoteDto: {
             /** @enum {string} */
@@ -9162,6 +9186,28 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["QuoteResponseDto"];
+                };
+            };
+        };
+    };
+    QuotesController_startOwnBuild: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Only for a quote of the member's own truck: freezes the working revision as the approved budget (no e-mail, no deposit due), moves the project to its deposit-paid stage and opens the work order. Once started, answers 409. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OwnBuildResponseDto"];
                 };
             };
         };

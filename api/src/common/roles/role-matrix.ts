@@ -30,6 +30,7 @@ import { Role } from './role';
  * | POST/PATCH/DELETE /labor-operations  | yes   | yes       | -                 | -       | -          |
  * | GET quotes (list, one, PDF, compare) | yes   | yes       | yes               | yes     | own, sent  |
  * | POST/PATCH quotes, send              | yes   | yes       | -                 | -       | -          |
+ * | start own build (own truck's quote)  | yes   | yes       | -                 | -       | -          |
  * | answer a quote, pay its deposit      | -     | -         | -                 | -       | own only   |
  * | GET/PUT /quote-settings              | yes   | read      | -                 | -       | -          |
  * | GET work orders                      | yes   | yes       | yes               | -       | -          |

@@ -91,6 +91,13 @@ export class QuoteResponseDto {
   @ApiProperty({ type: [QuoteRevisionSummaryDto] }) revisions: QuoteRevisionSummaryDto[];
 }
 
+/** A started own build: the budget as now approved, and the work order (build sheet) it opened. */
+export class OwnBuildResponseDto {
+  @ApiProperty({ type: QuoteResponseDto }) quote: QuoteResponseDto;
+  @ApiProperty({ format: 'uuid', description: 'The work order opened from the budget: its steps, torques, cautions and checks to record' })
+  workOrderId: string;
+}
+
 export class QuoteNotificationResponseDto {
   @ApiProperty() id: string;
   @ApiProperty() quoteId: string;
