@@ -8,3 +8,4 @@ export type QuoteRevisionDiff = Schemas['QuoteRevisionDiffResponseDto'];
 export type LaborOperation = Schemas['LaborOperationResponseDto'];
 export type DepositPayment = Schemas['DepositPaymentResponseDto'];
 export type QuoteSettings = Schemas['QuoteSettingsResponseDto'];
+export type OwnBuild = Schemas['OwnBuildResponseDto'];

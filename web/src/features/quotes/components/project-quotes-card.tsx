@@ -9,6 +9,7 @@ import { useSendQuote } from '../api/send-quote';
 import { formatDate } from '@/lib/dates';
 import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+import { StartOwnBuildButton } from './start-own-build-button';
 
 export interface ProjectQuotesCardProps {
   projectId: string;
@@ -27,7 +28,8 @@ function customerAction(quote: { status: string; depositState: string }): string
 
 /**
  * The project's quotes: draft one from the parts plan and the fit report, send it to the customer, follow the answer and the
- * deposit. A quote of the member's own truck has nobody to send it to: it says so in place of the button.
+ * deposit. A quote of the member's own truck has nobody to send it to: it says so, and offers to start the build from it
+ * (the work order opens) in place of the button.
  */
 export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: ProjectQuotesCardProps) {
   const quotes = useProjectQuotes(projectId);
@@ -81,6 +83,7 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
                   Send to customer
                 </Button>
               ),
+              canWrite && quote.forMyself && quote.status !== 'approved' && <StartOwnBuildButton key="start-build" quote={quote} size="small" />,
             ].filter(Boolean)}
           >
             <Flex vertical gap={4}>

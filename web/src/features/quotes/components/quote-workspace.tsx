@@ -19,6 +19,7 @@ import { QuoteLines } from './quote-lines';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 import { QuoteTermsDrawer } from './quote-terms-drawer';
 import { RevisionCompare } from './revision-compare';
+import { StartOwnBuildButton } from './start-own-build-button';
 
 export interface QuoteWorkspaceProps {
   quoteId: string;
@@ -50,6 +51,7 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
   const approved = quote.status === 'approved';
   const editable = canWrite && !approved && !revision.sent && shownNumber === undefined;
   const canSend = canWrite && !quote.forMyself && !approved && !revision.sent && shownNumber === undefined;
+  const canStartBuild = canWrite && quote.forMyself && !approved && shownNumber === undefined;
 
   const startRevision = () =>
     update.mutate({}, { onSuccess: (next) => notifySuccess({ title: `Revision ${next.latestRevision} started`, description: 'Change its lines, then send it.' }) });
@@ -77,6 +79,7 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
                 Send revision {revision.number} to the customer
               </Button>
             )}
+            {canStartBuild && <StartOwnBuildButton quote={quote} />}
           </>
         }
       />
