@@ -1,5 +1,5 @@
 import { openBrowser, saveScreenshot, type BrowserSession } from './support/browser';
-import { expectVisible } from './support/expect-page';
+import { expectText, expectVisible } from './support/expect-page';
 import { expectReportShown, runFitCheck } from './support/fit-check';
 
 interface CapturedMail {
@@ -179,5 +179,42 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     await page.getByRole('button', { name: 'Go to my home page' }).click();
     await page.waitForURL((url) => url.pathname === '/');
     await page.getByText('Next steps').first().waitFor();
+  });
+
+  it('keeps the quote of their own truck as the budget, starts the build from it and lands on the work order', async () => {
+    const { page } = browser;
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.goto(`/projects/${projectId}`);
+    const drafted = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${projectId}/quotes`) && r.request().method() === 'POST');
+    await page.getByRole('button', { name: 'Draft a quote' }).click();
+    const draft = (await (await drafted).json()) as { label: string; forMyself: boolean };
+    expect(draft.forMyself).toBe(true);
+    const item = page.getByTestId(`quote-${draft.label}`);
+    await expectText(item.getByTestId('own-truck-quote-note'), /no customer to send this quote to/);
+    expect(await item.getByRole('button', { name: 'Send to customer' }).count()).toBe(0);
+
+    // The builder adds work of their own to the budget as a free-text labor line.
+    await item.getByRole('link', { name: 'Edit lines' }).click();
+    await page.getByRole('button', { name: 'Add labor line' }).click();
+    const line = page.getByRole('form', { name: 'Add a labor line' });
+    await line.getByLabel('Description').fill('Remove and install engine');
+    await line.getByLabel('Hours').fill('8.5');
+    const saved = page.waitForResponse((r) => /\/api\/quotes\/[^/]+$/.test(r.url()) && r.request().method() === 'PATCH');
+    await page.getByRole('button', { name: 'Add line' }).click();
+    expect((await saved).status()).toBe(200);
+
+    await page.getByRole('button', { name: 'Start my build' }).click();
+    const confirm = page.locator('.ant-popconfirm').filter({ hasText: `Start your build from ${draft.label}?` });
+    await confirm.waitFor({ state: 'visible' });
+    await expectText(confirm, /frozen as the budget of your build, and the work order opens[\s\S]*No e-mail, no deposit/);
+    await saveScreenshot(page, 'sign-up-start-own-build-confirm');
+    const started = page.waitForResponse((r) => /\/start-own-build$/.test(r.url()));
+    await confirm.getByRole('button', { name: 'Start my build' }).click();
+    expect((await started).status()).toBe(200);
+    await page.waitForURL(/\/work-orders\/[^/]+$/);
+    await expectText(page.getByRole('heading', { level: 2 }), new RegExp(`Work order`));
+    await expectVisible(page.getByText(`From quote ${draft.label} revision`));
+    await expectVisible(page.getByText('Remove and install engine').first());
+    await saveScreenshot(page, 'sign-up-own-build-work-order');
   });
 });
