@@ -1,4 +1,4 @@
-import { type FitReport, installerOfCategory, type PartCategory, type PartsPlanResult } from '@swapwright/shared';
+import { combineFabricationRemedies, type FabricationRemedy, type FitReport, installerOfCategory, type PartCategory, type PartsPlanResult } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import type { LaborOperation } from '../labor-operations/labor-operation.entity';
 import type { QuoteLineInputDto } from './dto/quote-input.dto';
@@ -63,7 +63,8 @@ const tenthOfHour = (hours: number) => Math.round(hours * 10) / 10;
  * The first draft of a quote, drawn from the fit report: the base operations, a parts line for the first
  * catalog part of each part remedy (with the shop operation that installs its category), and a labor line for each
  * fabrication remedy in the remedy's own words and hours (linked to the shop's operation only when the remedy names
- * its operation code). The estimator edits from there.
+ * its operation code); remedies of one operation code for several shortfalls are one line, as in the parts plan
+ * (`combineFabricationRemedies`). The estimator edits from there.
  */
 export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
   const lines: DraftLine[] = [];
@@ -74,8 +75,12 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
     if (operation) addOperation(operation, 'manual');
   }
   const usedParts = new Set<string>();
-  const described = new Set<string>();
-  for (const finding of inputs.report?.shortfalls ?? []) {
+  const shortfalls = inputs.report?.shortfalls ?? [];
+  // Work on one member asked by several shortfalls is one line (as in the parts plan), placed where it is first asked.
+  const fabrication = combineFabricationRemedies(shortfalls.map((finding) => finding.remedies.filter((r): r is FabricationRemedy => r.kind === 'fabrication')));
+  const quoted = new Set<number>();
+  shortfalls.forEach((finding, findingIndex) => {
+    let fabricationIndex = 0;
     for (const remedy of finding.remedies) {
       if (remedy.kind === 'part') {
         const kind = CATALOG_KIND_OF_CATEGORY[remedy.category] ?? null;
@@ -98,20 +103,22 @@ export function draftLinesFromReport(inputs: DraftInputs): DraftLine[] {
         const installs = installerOfCategory(ordered, remedy.category);
         if (installs) addOperation(installs, 'fit-remedy');
       } else if (remedy.kind === 'fabrication') {
-        if (described.has(remedy.operation.toLowerCase())) continue;
-        described.add(remedy.operation.toLowerCase());
-        const operation = operationOfCode(inputs.operations, remedy.operationCode);
+        const index = fabrication.operationOf[findingIndex][fabricationIndex++];
+        if (quoted.has(index)) continue;
+        quoted.add(index);
+        const combined = fabrication.operations[index];
+        const operation = operationOfCode(inputs.operations, combined.operationCode);
         lines.push({
           key: randomUUID(),
           kind: 'labor',
           source: 'fit-remedy',
-          description: remedy.operation.slice(0, 200),
+          description: combined.operation.slice(0, 200),
           ...(operation && { laborOperationId: operation.id }),
-          hours: tenthOfHour(remedy.laborHours),
+          hours: tenthOfHour(combined.laborHours),
         });
       }
     }
-  }
+  });
   return lines;
 }
 

@@ -44,6 +44,14 @@ describe('drivetrain.transmission-mount-height', () => {
     expect(below.message).toMatch(/sits 10\.0 mm \(0\.39 in\) below the crossmember pad, past the ±3\.0 mm \(0\.12 in\) it bolts down within/);
     expect(below.remedies.map((r) => r.kind)).toEqual(['fabrication']);
   });
+  it('names the transmission crossmember in every height remedy (the front crossmember is another member)', () => {
+    const operations = [340, 310, 360].flatMap((z) => runCheck(TRANSMISSION_MOUNT_HEIGHT_CHECK, withCrossmember(1520, z)).remedies.flatMap((r) => (r.kind === 'fabrication' ? [r.operation] : [])));
+    expect(operations).toEqual([
+      "Raise the transmission crossmember's mount pad",
+      "Raise the transmission crossmember's pad 40.0 mm (1.57 in)",
+      'Drop the transmission crossmember 10.0 mm (0.39 in), or fit a drop crossmember',
+    ]);
+  });
   it('a band either side of level: the figure is the size of the offset, so "found" is past "at most" exactly when it fails', () => {
     // Common practice (no published source): a mount within the shop's direct-fit tolerance of level, above or
     // below, bolts down; the fixture's mount sits at z 350, so a crossmember at 350 − dz puts it dz above the pad.

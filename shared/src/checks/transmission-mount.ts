@@ -90,7 +90,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
   } else if (dz > 0 && dz <= spacerMax) {
     message = `The transmission mount sits ${mmWithInches(dz)} above the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within: a ${mmWithInches(dz)} spacer closes it.`;
     remedies.push({ kind: 'part', category: 'transmission-mount', requires: { spacerMm: Math.round(dz * 10) / 10 }, partIds: [], note: `A ${mmWithInches(dz)} spacer under the mount (at most ${mmWithInches(spacerMax)}).` });
-    remedies.push({ kind: 'fabrication', operation: 'Raise the crossmember mount pad', laborHours: settings.transmissionCrossmemberFabricationHours, operationCode: 'transmission-crossmember', note: 'Support the transmission with a jack and the vehicle on stands.' });
+    remedies.push({ kind: 'fabrication', operation: "Raise the transmission crossmember's mount pad", laborHours: settings.transmissionCrossmemberFabricationHours, operationCode: 'transmission-crossmember', note: 'Support the transmission with a jack and the vehicle on stands.' });
   } else {
     message =
       dz > 0
@@ -98,7 +98,7 @@ export function runTransmissionMountHeight({ spec, settings }: CheckContext): Fi
         : `The transmission mount sits ${mmWithInches(-dz)} below the crossmember pad, past the ±${mmWithInches(tol)} it bolts down within: the crossmember must be dropped or replaced.`;
     remedies.push({
       kind: 'fabrication',
-      operation: dz > 0 ? `Raise the crossmember pad ${mmWithInches(dz)}` : `Drop the crossmember ${mmWithInches(-dz)} or fit a drop crossmember`,
+      operation: dz > 0 ? `Raise the transmission crossmember's pad ${mmWithInches(dz)}` : `Drop the transmission crossmember ${mmWithInches(-dz)}, or fit a drop crossmember`,
       laborHours: settings.transmissionCrossmemberFabricationHours,
       operationCode: 'transmission-crossmember',
       note: 'Support the transmission with a jack and the vehicle on stands before unbolting the crossmember.',

@@ -5,3 +5,4 @@ export * from './part-attributes';
 export * from './plan-types';
 export * from './plan-model';
 export * from './plan-parts';
+export * from './fabrication-operations';

@@ -1,5 +1,6 @@
 import type { FabricationOperationCode, FabricationRemedy, PartRemedy } from '../types/finding';
 import { describeAttribute, describeAttributeList } from './attribute-words';
+import { combineFabricationRemedies } from './fabrication-operations';
 import { missedRequirements, type PartAttributes } from './part-attributes';
 import { fitSpecKindOf, PART_CATEGORY_LABELS } from './part-categories';
 import {
@@ -435,17 +436,20 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     if (slot) pushSlot(slot, index);
   }
   for (const refused of refusedFitted) if ((slotColumns.get(refused.slot) ?? []).length > 0) slotExactlyOne.add(refused.slot);
-  const operationColumn = new Map<string, number>();
-  for (const info of targetedInfo) {
-    for (const remedy of info.fabrication) {
-      if (operationColumn.has(remedy.operation)) continue;
-      const laborCents = laborCentsOf(remedy.laborHours, rate);
-      operationColumn.set(
-        remedy.operation,
-        add({ kind: 'fabrication', slot: null, operation: { operation: remedy.operation, laborHours: remedy.laborHours, ...(remedy.operationCode && { operationCode: remedy.operationCode }) }, attributes: {}, laborCents, costCents: laborCents, fabricationHours: remedy.laborHours }),
-      );
-    }
-  }
+  // One column per fabrication operation: remedies of one operation code for several shortfalls are one operation.
+  const fabrication = combineFabricationRemedies(targetedInfo.map((info) => info.fabrication));
+  const operationColumns = fabrication.operations.map((operation) => {
+    const laborCents = laborCentsOf(operation.laborHours, rate);
+    return add({
+      kind: 'fabrication',
+      slot: null,
+      operation: { operation: operation.operation, laborHours: operation.laborHours, ...(operation.operationCode && { operationCode: operation.operationCode }) },
+      attributes: {},
+      laborCents,
+      costCents: laborCents,
+      fabricationHours: operation.laborHours,
+    });
+  });
 
   const rows: PlanRow[] = [];
   const row = (name: string, terms: Array<[number, number]>, sense: PlanRow['sense'], rhs: number) => rows.push({ name, terms, sense, rhs });
@@ -520,7 +524,7 @@ export function buildPlanModel(input: PlanInput, options: { ruleSlack?: boolean 
     const kit = KITS.find((categories) => categories.every((category) => info.parts.some((r) => r.category === category)));
     const single = info.parts.filter((remedy) => !kit?.includes(remedy.category));
     const kitGroups = kit ? kit.map((category) => info.parts.filter((r) => r.category === category).flatMap(meeting)) : [];
-    const cover = [...single.flatMap(meeting), ...info.fabrication.map((remedy) => operationColumn.get(remedy.operation)!)];
+    const cover = [...single.flatMap(meeting), ...fabrication.coveredBy[index].map((operation) => operationColumns[operation])];
     if (kit && kitGroups.every((group) => group.length > 0)) {
       const both = add({ kind: 'kit', slot: null, attributes: {}, laborCents: 0, costCents: 0, fabricationHours: 0 });
       for (const group of kitGroups) row(`kit_${both}`, [[1, both], ...group.map((i): [number, number] => [-1, i])], '<=', 0);

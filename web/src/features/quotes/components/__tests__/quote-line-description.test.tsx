@@ -6,7 +6,8 @@ import { QuoteLineCards } from '../quote-line-cards';
 import { QuoteLines } from '../quote-lines';
 import { LINES, quoteStub } from './quote-stub';
 
-// Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly. 8.7 mm ÷ 25.4 = 0.3425 in → 0.34 in.
+// Source: NIST SP 811 (2008), Appendix B: 1 in = 25.4 mm exactly. 8.7 mm ÷ 25.4 = 0.3425 in → 0.34 in;
+// 72.3 mm ÷ 25.4 = 2.8465 in → 2.85 in.
 const DROP: QuoteLine = {
   ...LINES[2],
   key: 'line-drop',
@@ -33,5 +34,17 @@ describe('a quote line drawn from the parts plan reads in the person’s units',
     renderWithApp(<QuoteLineCards lines={[DROP]} currency="USD" />);
     expect(screen.getByTestId('quote-line-line-drop')).toHaveTextContent('Drop the crossmember 8.7 mm or fit a drop crossmember');
     expect(screen.getByTestId('quote-line-line-drop').textContent).not.toContain('0.34 in');
+  });
+
+  it('the plan’s one transmission crossmember rework names both moves, each figure in inches', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const rework: QuoteLine = {
+      ...DROP,
+      key: 'line-rework',
+      description: 'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and drop it 8.7 mm (0.34 in), or fit a drop crossmember',
+    };
+    renderWithApp(<QuoteLineCards lines={[rework]} currency="USD" />);
+    expect(screen.getByTestId('quote-line-line-rework')).toHaveTextContent('Rework the transmission crossmember: relocate it 2.85 in rearward and drop it 0.34 in, or fit a drop crossmember');
+    expect(screen.getByTestId('quote-line-line-rework').textContent).not.toMatch(/\d mm\b/);
   });
 });

@@ -26,13 +26,13 @@ const order: WorkOrder = {
   finishedAt: null,
   steps: [
     {
-      key: 'drop-crossmember',
+      key: 'transmission-crossmember',
       operationId: null,
-      name: 'Drop the crossmember 8.7 mm (0.34 in) or fit a drop crossmember',
+      name: 'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and drop it 8.7 mm (0.34 in), or fit a drop crossmember',
       buildOrder: 10,
       hours: 4,
       hazards: ['lifting', 'welding'],
-      parts: [{ sku: '', description: 'Relocate the transmission crossmember 72.3 mm (2.85 in) rearward', quantity: 1 }],
+      parts: [{ sku: '', description: 'Drop crossmember, 72.3 mm (2.85 in) setback', quantity: 1 }],
       torque: [],
       instructions: ['XM-100: shim the mount by 6.0 mm (0.24 in) at most'],
       checks: [],
@@ -55,9 +55,9 @@ describe('the work order reads the plan’s words in the person’s units', () =
     window.localStorage.setItem('swapwright.unitSystem', system);
     const stored = structuredClone(order);
     renderWithApp(<WorkOrderSheet order={order} canWork={false} projectPath="/projects/p-1" />);
-    const step = screen.getByTestId('step-drop-crossmember');
-    expect(step).toHaveTextContent(`1. Drop the crossmember ${figures[0]} or fit a drop crossmember`);
-    expect(step).toHaveTextContent(`Relocate the transmission crossmember ${figures[1]} rearward`);
+    const step = screen.getByTestId('step-transmission-crossmember');
+    expect(step).toHaveTextContent(`1. Rework the transmission crossmember: relocate it ${figures[1]} rearward and drop it ${figures[0]}, or fit a drop crossmember`);
+    expect(step).toHaveTextContent(`Drop crossmember, ${figures[1]} setback`);
     expect(step).toHaveTextContent(`XM-100: shim the mount by ${figures[2]} at most`);
     expect(step.textContent).not.toMatch(never);
     expect(order).toEqual(stored);
