@@ -68,14 +68,22 @@ describe('combineFabricationRemedies', () => {
 
   it('raising the pad reads as the member\'s own pad; three moves are listed with semicolons', () => {
     const raise = fab("Raise the transmission crossmember's mount pad", 4, 'transmission-crossmember');
-    const angle = fab('Raise or lower the transmission crossmember to bring the shaft angle closer to the transmission and pinion', 2, 'transmission-crossmember');
+    const angle = fab('Raise or lower the transmission crossmember to even out the U-joint angles', 2, 'transmission-crossmember');
     expect(combineFabricationRemedies([[RELOCATE], [raise]]).operations[0].operation).toBe(
       'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and raise its mount pad',
     );
     expect(combineFabricationRemedies([[RELOCATE], [DROP], [angle]]).operations[0]).toMatchObject({
-      operation: `${MERGED.replace(' rearward and', ' rearward;')}; and raise or lower it to bring the shaft angle closer to the transmission and pinion`,
+      operation: `${MERGED.replace(' rearward and', ' rearward;')}; and raise or lower it to even out the U-joint angles`,
       laborHours: 4,
     });
+  });
+
+  it('the longest crossmember rework, every move at its widest figures, still fits one quote line (200 characters)', () => {
+    const far = fab('Relocate the transmission crossmember 188.8 mm (7.43 in) rearward', 4, 'transmission-crossmember');
+    const deep = fab('Drop the transmission crossmember 188.8 mm (7.43 in), or fit a drop crossmember', 4, 'transmission-crossmember');
+    const angle = fab('Raise or lower the transmission crossmember to even out the U-joint angles', 2, 'transmission-crossmember');
+    const { operation } = combineFabricationRemedies([[far], [deep], [angle]]).operations[0];
+    expect(operation.length).toBeLessThanOrEqual(200);
   });
 
   it('brackets made for each side are one line with their hours added', () => {

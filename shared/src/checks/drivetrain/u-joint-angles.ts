@@ -100,7 +100,7 @@ function uJointRemedies(transmissionDeg: number, pinionDeg: number, shimHours: n
     },
     {
       kind: 'fabrication',
-      operation: 'Raise or lower the transmission crossmember to bring the shaft angle closer to the transmission and pinion',
+      operation: 'Raise or lower the transmission crossmember to even out the U-joint angles',
       laborHours: 2,
       operationCode: 'transmission-crossmember',
       note: 'Moving the transmission also changes the installed tilt; rerun the fit check afterwards.',
