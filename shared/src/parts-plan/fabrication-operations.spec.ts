@@ -91,12 +91,20 @@ describe('combineFabricationRemedies', () => {
     const right = fab('Fabricate and weld right engine mount brackets', 3, 'mount-adapters');
     expect(combineFabricationRemedies([[left], [right]]).operations).toEqual([
       {
-        operation: 'Make the engine mount brackets: fabricate and weld left engine mount brackets and fabricate and weld right engine mount brackets',
+        operation: 'Fabricate and weld left and right engine mount brackets',
         laborHours: 6,
         operationCode: 'mount-adapters',
         covers: [0, 1],
       },
     ]);
+  });
+
+  it('pieces whose words differ in more than one place keep the heading and each piece as a clause', () => {
+    const left = fab('Fabricate and weld left engine mount brackets', 3, 'mount-adapters');
+    const plate = fab('Cut and plate the right frame rail', 2, 'mount-adapters');
+    expect(combineFabricationRemedies([[left], [plate]]).operations[0].operation).toBe(
+      'Make the engine mount brackets: fabricate and weld left engine mount brackets and cut and plate the right frame rail',
+    );
   });
 
   it('is the same whichever run builds it (deterministic)', () => {

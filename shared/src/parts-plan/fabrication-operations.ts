@@ -40,6 +40,20 @@ function joinClauses(clauses: string[]): string {
 }
 
 /**
+ * Moves that differ in one word only ("Fabricate and weld left engine mount brackets", "… right …") said once with the
+ * words joined ("Fabricate and weld left and right engine mount brackets"); null when they differ in more.
+ */
+function oneSentenceForEach(moves: string[]): string | null {
+  const words = moves.map((move) => move.split(' '));
+  if (words.some((w) => w.length !== words[0].length)) return null;
+  const differing = words[0].map((_, i) => i).filter((i) => words.some((w) => w[i] !== words[0][i]));
+  if (differing.length !== 1) return null;
+  const [at] = differing;
+  const joined = [...new Set(words.map((w) => w[at]))];
+  return [...words[0].slice(0, at), joinClauses(joined).replace(/;/g, ','), ...words[0].slice(at + 1)].join(' ');
+}
+
+/**
  * The fabrication operations a plan can choose for its shortfalls (each given as its fabrication remedies), in the
  * order they first appear. Common practice (no published source): a shop works a member once, so remedies that
  * name the same operation code for different shortfalls become ONE operation covering all of them, in one sentence
@@ -86,7 +100,9 @@ export function combineFabricationRemedies(shortfalls: readonly (readonly Fabric
     const words = COMBINED_WORDS[group.code];
     const hours = [...moves.values()];
     const laborHours = words.hours === 'sum' ? Math.round(hours.reduce((sum, h) => sum + h, 0) * 10) / 10 : Math.max(...hours);
-    const operation = `${words.heading}: ${joinClauses([...moves.keys()].map((move) => moveClause(move, words.member)))}`;
+    const operation =
+      (words.hours === 'sum' && oneSentenceForEach([...moves.keys()])) ||
+      `${words.heading}: ${joinClauses([...moves.keys()].map((move) => moveClause(move, words.member)))}`;
     return { operation, laborHours, ...code, covers: group.covers };
   });
   return { operations, coveredBy: operationOf.map((indices) => [...new Set(indices)]), operationOf };
