@@ -26,6 +26,12 @@ const box = (x0: number, z0: number, x1: number, z1: number): ChassisPoint[] => 
   { x: x0, z: z1 },
 ];
 
+/**
+ * outlineGap counts outlines closer than √EPS (about 3e-5 mm) as touching, gap 0; a reference distance inside that band
+ * may read 0 here, so exact agreement is asked for only past it (a found case: jsts 1.0e-6 mm, outlineGap 0).
+ */
+const TOUCHING_MM = 1e-4;
+
 /** A convex polygon: points on an ellipse at sorted angles (counter-clockwise). */
 const convexPolygon = fc
   .record({
@@ -113,13 +119,13 @@ describe('outlineGap (hand path)', () => {
       fc.property(convexPolygon, convexPolygon, (a, b) => {
         const r = outlineGap(a, true, b);
         const ref = jstsDistance(a, true, b);
-        if (ref > 1e-6) {
+        if (ref > TOUCHING_MM) {
           expect(r.overlapping).toBe(false);
           expect(r.gap).toBeCloseTo(ref, 6);
           // the witness points realise the distance
           expect(Math.hypot(r.from.x - r.to.x, r.from.z - r.to.z)).toBeCloseTo(ref, 6);
         } else {
-          expect(r.gap).toBeLessThanOrEqual(1e-6);
+          expect(r.gap).toBeLessThanOrEqual(TOUCHING_MM);
         }
       }),
       { numRuns: 400 },
@@ -131,8 +137,8 @@ describe('outlineGap (hand path)', () => {
       fc.property(convexPolygon, fc.array(fc.record({ x: fc.double({ min: -800, max: 800, noNaN: true }), z: fc.double({ min: -800, max: 800, noNaN: true }) }), { minLength: 2, maxLength: 5 }), (b, line) => {
         const ref = jstsDistance(line, false, b);
         const r = outlineGap(line, false, b);
-        if (ref > 1e-6) expect(r.gap).toBeCloseTo(ref, 6);
-        else expect(r.gap).toBeLessThanOrEqual(1e-6);
+        if (ref > TOUCHING_MM) expect(r.gap).toBeCloseTo(ref, 6);
+        else expect(r.gap).toBeLessThanOrEqual(TOUCHING_MM);
       }),
       { numRuns: 300 },
     );
