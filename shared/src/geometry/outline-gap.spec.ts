@@ -32,6 +32,14 @@ const box = (x0: number, z0: number, x1: number, z1: number): ChassisPoint[] => 
  */
 const TOUCHING_MM = 1e-4;
 
+/**
+ * Two ways of computing one distance agree to a micrometre, or to a part per million of the distance past a metre of
+ * coordinates (their rounding grows with the figures: a found case, 256.9431910 against 256.9431905 mm).
+ */
+function expectSameDistance(actual: number, expected: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(1e-6 * Math.max(1, Math.abs(expected)));
+}
+
 /** A convex polygon: points on an ellipse at sorted angles (counter-clockwise). */
 const convexPolygon = fc
   .record({
@@ -121,9 +129,9 @@ describe('outlineGap (hand path)', () => {
         const ref = jstsDistance(a, true, b);
         if (ref > TOUCHING_MM) {
           expect(r.overlapping).toBe(false);
-          expect(r.gap).toBeCloseTo(ref, 6);
+          expectSameDistance(r.gap, ref);
           // the witness points realise the distance
-          expect(Math.hypot(r.from.x - r.to.x, r.from.z - r.to.z)).toBeCloseTo(ref, 6);
+          expectSameDistance(Math.hypot(r.from.x - r.to.x, r.from.z - r.to.z), ref);
         } else {
           expect(r.gap).toBeLessThanOrEqual(TOUCHING_MM);
         }
@@ -137,7 +145,7 @@ describe('outlineGap (hand path)', () => {
       fc.property(convexPolygon, fc.array(fc.record({ x: fc.double({ min: -800, max: 800, noNaN: true }), z: fc.double({ min: -800, max: 800, noNaN: true }) }), { minLength: 2, maxLength: 5 }), (b, line) => {
         const ref = jstsDistance(line, false, b);
         const r = outlineGap(line, false, b);
-        if (ref > TOUCHING_MM) expect(r.gap).toBeCloseTo(ref, 6);
+        if (ref > TOUCHING_MM) expectSameDistance(r.gap, ref);
         else expect(r.gap).toBeLessThanOrEqual(TOUCHING_MM);
       }),
       { numRuns: 300 },
@@ -149,8 +157,8 @@ describe('outlineGap (hand path)', () => {
       fc.property(convexPolygon, convexPolygon, (a, b) => {
         const ref = jstsDistance(a, true, b);
         fc.pre(ref > 1e-3);
-        expect(flattenDistance(a, true, b).distance).toBeCloseTo(ref, 6);
-        expect(outlineGap(a, true, b).gap).toBeCloseTo(flattenDistance(a, true, b).distance, 6);
+        expectSameDistance(flattenDistance(a, true, b).distance, ref);
+        expectSameDistance(outlineGap(a, true, b).gap, flattenDistance(a, true, b).distance);
       }),
       { numRuns: 200 },
     );
@@ -178,7 +186,7 @@ describe('outlineGap (hand path)', () => {
         const general = verticalSeparationLift(a, true, b).lift;
         const closed = verticalLiftConvex(a, true, b);
         expect(closed).not.toBeNull();
-        expect(closed!.lift).toBeCloseTo(general, 6);
+        expectSameDistance(closed!.lift, general);
       }),
       { numRuns: 300 },
     );
