@@ -1,7 +1,7 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, utcToday, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -20,6 +20,7 @@ import { MailService } from '../mail/mail.service';
 import { JobHandlers } from '../jobs/job-handlers';
 import { JobsService } from '../jobs/jobs.service';
 import { Project } from '../projects/project.entity';
+import { isOwnCustomerRecord } from '../customers/customer.mapper';
 import { ProjectsService } from '../projects/projects.service';
 import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
@@ -56,19 +57,15 @@ function shopReader(shopId: string): AuthUser {
   return { userId: '', email: '', name: 'Quote link', membershipId: '', shopId, role: 'estimator', customerId: null };
 }
 
-export function todayIso(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
-}
-
 function addDays(iso: string, days: number): string {
   const date = new Date(`${iso}T00:00:00Z`);
   date.setUTCDate(date.getUTCDate() + days);
-  return todayIso(date);
+  return utcToday(date);
 }
 
 /** A last valid day given by the estimator must be today or later (UTC, as sending and lapsing judge it). */
 function refusePastValidity(validUntil: string | undefined): void {
-  if (validUntil !== undefined && validUntil < todayIso()) throw QuoteErrors.validUntilPast(validUntil);
+  if (validUntil !== undefined && validUntil < utcToday()) throw QuoteErrors.validUntilPast(validUntil);
 }
 
 /**
@@ -76,11 +73,11 @@ function refusePastValidity(validUntil: string | undefined): void {
  * is their budget, with nobody to send it to. A customer signed in to their own project is not a member building it.
  */
 export function isOwnProject(project: Project, user: Pick<AuthUser, 'role' | 'userId'>): boolean {
-  return user.role !== 'customer' && project.customer?.userId != null && project.customer.userId === user.userId;
+  return user.role !== 'customer' && project.customer != null && isOwnCustomerRecord(project.customer, user);
 }
 
 /** A quote awaiting an answer past its validity date reads as lapsed. */
-export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = todayIso()): QuoteStatus {
+export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = utcToday()): QuoteStatus {
   if (quote.status === 'awaiting-answer' && sent && sent.validUntil < today) return 'lapsed';
   return quote.status;
 }
@@ -234,7 +231,7 @@ export class QuotesService implements OnModuleInit {
       fitReportId: report?.id ?? null,
       partsPlanId: plan?.id ?? null,
       partsPlanVersion: plan?.version ?? null,
-      validUntil: input.validUntil ?? addDays(todayIso(), settings.validityDays),
+      validUntil: input.validUntil ?? addDays(utcToday(), settings.validityDays),
       currency: shop.currency,
       laborRateCents: Math.round(shop.laborRatePerHour * 100),
       suppliesPercent: shop.shopSuppliesPercent,
@@ -326,7 +323,7 @@ export class QuotesService implements OnModuleInit {
     if (isOwnProject(view.project, user)) throw QuoteErrors.ownProject();
     const latest = view.revisions[view.revisions.length - 1];
     if (latest.lines.length === 0) throw QuoteErrors.emptyQuote();
-    if (latest.validUntil < todayIso()) throw QuoteErrors.pastValidity(latest.validUntil);
+    if (latest.validUntil < utcToday()) throw QuoteErrors.pastValidity(latest.validUntil);
     if (!view.project.customer?.email) throw QuoteErrors.noCustomerEmail();
     if (latest.sentAt !== null && view.quote.status !== 'awaiting-answer') throw QuoteErrors.nothingToSend();
     if (latest.sentAt === null) {
