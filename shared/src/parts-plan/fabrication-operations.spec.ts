@@ -73,9 +73,19 @@ describe('combineFabricationRemedies', () => {
       'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and raise its mount pad',
     );
     expect(combineFabricationRemedies([[RELOCATE], [DROP], [angle]]).operations[0]).toMatchObject({
-      operation: `${MERGED.replace(' rearward and', ' rearward;')}; and raise or lower it to even out the U-joint angles`,
+      operation: `${MERGED.replace(' rearward and', ' rearward;')}; and set the new height to even out the U-joint angles`,
       laborHours: 4,
     });
+    expect(combineFabricationRemedies([[raise], [angle]]).operations[0].operation).toBe(
+      'Rework the transmission crossmember: raise its mount pad and set the new height to even out the U-joint angles',
+    );
+  });
+
+  it('without a height move of its own, the U-joint move keeps its either-way words', () => {
+    const angle = fab('Raise or lower the transmission crossmember to even out the U-joint angles', 2, 'transmission-crossmember');
+    expect(combineFabricationRemedies([[RELOCATE], [angle]]).operations[0].operation).toBe(
+      'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and raise or lower it to even out the U-joint angles',
+    );
   });
 
   it('the longest crossmember rework, every move at its widest figures, still fits one quote line (200 characters)', () => {

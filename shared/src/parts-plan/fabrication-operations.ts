@@ -40,6 +40,16 @@ function joinClauses(clauses: string[]): string {
 }
 
 /**
+ * Beside a move that already raises or drops the member, an "either way" height move ("raise or lower it to even out
+ * the U-joint angles") is not a second move but a condition on the one height: "set the new height to even out …".
+ */
+function oneHeightMove(clauses: string[]): string[] {
+  const either = /^raise or lower it\b/;
+  if (!clauses.some((clause) => /^(raise|drop|lower) (it|its)\b/.test(clause))) return clauses;
+  return clauses.map((clause) => clause.replace(either, 'set the new height'));
+}
+
+/**
  * Moves that differ in one word only ("Fabricate and weld left engine mount brackets", "… right …") said once with the
  * words joined ("Fabricate and weld left and right engine mount brackets"); null when they differ in more.
  */
@@ -102,7 +112,7 @@ export function combineFabricationRemedies(shortfalls: readonly (readonly Fabric
     const laborHours = words.hours === 'sum' ? Math.round(hours.reduce((sum, h) => sum + h, 0) * 10) / 10 : Math.max(...hours);
     const operation =
       (words.hours === 'sum' && oneSentenceForEach([...moves.keys()])) ||
-      `${words.heading}: ${joinClauses([...moves.keys()].map((move) => moveClause(move, words.member)))}`;
+      `${words.heading}: ${joinClauses(oneHeightMove([...moves.keys()].map((move) => moveClause(move, words.member))))}`;
     return { operation, laborHours, ...code, covers: group.covers };
   });
   return { operations, coveredBy: operationOf.map((indices) => [...new Set(indices)]), operationOf };
