@@ -49,3 +49,40 @@ describe('the quote PDF: days', () => {
     expect(await pdfText(await render(null))).toContain('Issued Dec 1, 2026');
   });
 });
+
+describe('the quote PDF: figures in the shop\'s units', () => {
+  const line = 'Rework the transmission crossmember: relocate it 72.3 mm (2.85 in) rearward and drop it 8.7 mm (0.34 in), or fit a drop crossmember';
+  const view = {
+    quote: { number: 4 },
+    project: { title: 'Invented flatbed: diesel swap', vehicleDescription: '', customer: { name: 'Test Customer', email: null, phone: null } },
+    revision: {
+      number: 1,
+      sentAt: null,
+      createdAt: new Date('2026-12-01T10:00:00Z'),
+      validUntil: '2027-01-15',
+      currency: 'USD',
+      laborRateCents: 10000,
+      lines: [{ kind: 'labor', source: 'parts-plan', description: line, quantity: 1, hours: 4, unitPriceCents: 10000, lineTotalCents: 40000 }],
+      totals: { partsSubtotalCents: 0, laborSubtotalCents: 40000, suppliesCents: 0, partsDiscountCents: 0, laborDiscountCents: 0, partsTaxCents: 0, laborTaxCents: 0, taxCents: 0, totalCents: 40000, depositCents: 12000 },
+      depositKind: 'percent',
+      depositPercent: 30,
+      terms: 'Deposit due on approval.',
+      partsPlanVersion: 2,
+    },
+  } as unknown as QuoteView;
+  const text = async (unitSystem: Shop['unitSystem']) =>
+    (await pdfText(await new QuotePdfService().render({ view, shop: { name: 'Test Garage', unitSystem } as Shop, report: null }))).replace(/\s+/g, ' ');
+
+  it('an inch shop\'s quote reads every length in inches only', async () => {
+    // Source: NIST SP 811 (2008), Appendix B.8: 1 in = 25.4 mm exactly; 72.3 mm = 2.85 in and 8.7 mm = 0.34 in to two places.
+    const pdf = await text('in');
+    expect(pdf).toContain('relocate it 2.85 in rearward and drop it 0.34 in');
+    expect(pdf).not.toMatch(/\d mm/);
+  });
+
+  it('a millimetre shop\'s quote reads them in millimetres only', async () => {
+    const pdf = await text('mm');
+    expect(pdf).toContain('relocate it 72.3 mm rearward and drop it 8.7 mm');
+    expect(pdf).not.toMatch(/\d(\.\d+)? in\b/);
+  });
+});

@@ -7,10 +7,13 @@ import {
   formatUtcDay,
   QUOTE_ROUNDING_RULE,
   quoteTotalRows,
+  renderText,
   sideViewGeometry,
+  textParts,
   type ChassisPoint,
   type FitReport,
   type QuoteTotals,
+  type UnitSystem,
 } from '@swapwright/shared';
 import PDFDocument from 'pdfkit';
 import type { FitReportRecord } from '../fit-reports/fit-report-record.entity';
@@ -29,6 +32,14 @@ export interface QuotePdfInput {
   view: QuoteView;
   shop: Shop;
   report: FitReportRecord | null;
+}
+
+/**
+ * The engine's words ("drop it 8.7 mm (0.34 in)") with every figure in the shop's unit system only: the PDF goes to a
+ * customer whose unit choice the server does not know, so it reads as the shop's own paperwork does.
+ */
+function inUnits(text: string, system: UnitSystem): string {
+  return renderText(textParts(text), system);
 }
 
 const STATUS_WORDS: Record<string, string> = { fails: 'does not fit', tight: 'tight', unknown: 'not checked', ok: 'fits' };
@@ -93,12 +104,12 @@ export class QuotePdfService {
     if (!report) {
       doc.fillColor(MUTED).text('No fit report was stored when this quote was written; the lines are the estimate of the shop.', 50);
     } else {
-      this.fitSummary(doc, report.results, report, revision, width);
+      this.fitSummary(doc, report.results, report, revision, width, shop.unitSystem);
     }
 
     // Lines
     heading('Parts and labor');
-    this.lines(doc, view, width);
+    this.lines(doc, view, width, shop.unitSystem);
 
     // Totals and deposit
     heading('Totals');
@@ -128,7 +139,14 @@ export class QuotePdfService {
     return done;
   }
 
-  private fitSummary(doc: PDFKit.PDFDocument, results: FitReport, record: FitReportRecord, revision: QuoteView['revision'], width: number): void {
+  private fitSummary(
+    doc: PDFKit.PDFDocument,
+    results: FitReport,
+    record: FitReportRecord,
+    revision: QuoteView['revision'],
+    width: number,
+    units: UnitSystem,
+  ): void {
     const { summary } = results;
     const lines = revision.lines;
     const plan = revision.partsPlanVersion !== null ? ` Parts from parts plan version ${revision.partsPlanVersion}.` : '';
@@ -152,12 +170,12 @@ export class QuotePdfService {
     const shown = results.shortfalls.slice(0, 6);
     for (const finding of shown) {
       doc.font('bold').fontSize(9.5).fillColor(INK).text(`${finding.title} — ${STATUS_WORDS[finding.status] ?? finding.status}`, 50, doc.y, { width: textWidth });
-      doc.font('body').fontSize(9).fillColor(MUTED).text(firstSentence(finding.message), { width: textWidth });
+      doc.font('body').fontSize(9).fillColor(MUTED).text(inUnits(firstSentence(finding.message), units), { width: textWidth });
       const resolved = finding.remedies
         .map((remedy) => (remedy.kind === 'fabrication' ? remedy.operation : remedy.kind === 'part' ? firstSentence(remedy.note) : null))
         .filter((text): text is string => Boolean(text));
       if (resolved.length > 0) {
-        doc.fillColor(INK).text(resolvedByLine(resolved.slice(0, 2)), { width: textWidth });
+        doc.fillColor(INK).text(inUnits(resolvedByLine(resolved.slice(0, 2)), units), { width: textWidth });
       }
       doc.moveDown(0.2);
     }
@@ -209,7 +227,7 @@ export class QuotePdfService {
     doc.restore();
   }
 
-  private lines(doc: PDFKit.PDFDocument, view: QuoteView, width: number): void {
+  private lines(doc: PDFKit.PDFDocument, view: QuoteView, width: number, units: UnitSystem): void {
     const { revision } = view;
     const columns = { description: 50, quantity: 50 + width - 250, unit: 50 + width - 170, total: 50 + width - 80 };
     const row = (cells: [string, string, string, string], bold = false) => {
@@ -230,7 +248,7 @@ export class QuotePdfService {
       doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${formatMoney(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
       for (const line of lines) {
         row([
-          line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description,
+          inUnits(line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description, units),
           kind === 'part' ? String(line.quantity) : `${(line.hours ?? 0).toFixed(1)} h`,
           formatMoney(line.unitPriceCents, revision.currency),
           formatMoney(line.lineTotalCents, revision.currency),
