@@ -1,6 +1,6 @@
 import { JwtService } from '@nestjs/jwt';
-import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
-import { formatCalendarDate } from '@swapwright/shared';
+import { DEMO_PROJECT_IDS, DEMO_SHOP, DemoRole } from '@swapwright/seed-data';
+import { formatCalendarDate, todayIn } from '@swapwright/shared';
 import { bearer, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 
 const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
@@ -61,7 +61,8 @@ describe('quote forms: refusals a person can act on', () => {
     expect(created.status).toBe(400);
     expect(created.body.message).toMatch(/Jan 1, 2020, has already passed/);
 
-    const today = new Date().toISOString().slice(0, 10);
+    // today in the shop's own time zone
+    const today = todayIn(DEMO_SHOP.timeZone);
     const saved = await patch({ validUntil: today });
     expect(saved.status).toBe(200);
     expect(saved.body.revision.validUntil).toBe(today);

@@ -1,6 +1,6 @@
 import { JwtService } from '@nestjs/jwt';
-import { formatUtcDay } from '@swapwright/shared';
-import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
+import { formatDayIn } from '@swapwright/shared';
+import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DEMO_SHOP, DemoRole } from '@swapwright/seed-data';
 import { seedCatalog } from '../src/database/seed/seed-catalog';
 import { bearer, countRows, createTestApp, resetData, Session, signInAllRoles, TestApp } from './helpers/test-app';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
@@ -133,7 +133,8 @@ describe('labor operations and quotes', () => {
       // The customer reads days as days, in the app's one date style, never as ISO dates; a calendar day stays that day.
       // Source: Unicode CLDR, locale "en", medium date pattern "MMM d, y" (ECMA-402 Intl.DateTimeFormat, month short).
       expect(text).toContain('Valid until Jan 15, 2099');
-      expect(text).toContain(`Issued ${formatUtcDay(new Date(sent.body.revision.sentAt))}`);
+      // The day it was sent in the shop's own time zone.
+      expect(text).toContain(`Issued ${formatDayIn(new Date(sent.body.revision.sentAt), DEMO_SHOP.timeZone)}`);
       expect(text).toMatch(/Fit report [0-9a-f]{8} of [A-Z][a-z]{2} \d{1,2}, \d{4}:/);
       expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
       expect(mail.text).toContain('(the link works until Jan 15, 2099)');

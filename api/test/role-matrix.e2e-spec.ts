@@ -138,9 +138,9 @@ describe('role matrix', () => {
     }
   });
 
-  it('shows the shop rates to staff only; a customer gets id, name, units and currency', async () => {
+  it('shows the shop rates to staff only; a customer gets id, name, units, currency and the time zone its quotes are dated in', async () => {
     const customer = await t.http.get('/api/shops/current').set(...bearer(sessions.customer)).expect(200);
-    expect(Object.keys(customer.body).sort()).toEqual(['currency', 'id', 'name', 'unitSystem', 'view']);
+    expect(Object.keys(customer.body).sort()).toEqual(['currency', 'id', 'name', 'timeZone', 'unitSystem', 'view']);
     expect(customer.body.view).toBe('summary');
     for (const role of STAFF) {
       const staff = await t.http.get('/api/shops/current').set(...bearer(sessions[role])).expect(200);

@@ -12,6 +12,8 @@ export interface DemoShop {
   taxRatePercent: number;
   shopSuppliesPercent: number;
   currency: string;
+  /** IANA time zone name: the shop's calendar day for quotes. */
+  timeZone: string;
 }
 
 export const DEMO_SHOP: DemoShop = {
@@ -22,6 +24,7 @@ export const DEMO_SHOP: DemoShop = {
   taxRatePercent: 8.25,
   shopSuppliesPercent: 4,
   currency: 'USD',
+  timeZone: 'America/Denver',
 };
 
 export interface DemoUser {

@@ -16,6 +16,10 @@ export class PendingSignUp extends OneTimeLinkColumns {
   @Column({ type: 'varchar', length: 120 })
   shopName: string;
 
+  /** The zone the person's browser reported at sign-up, for the new shop (see Shop.timeZone). */
+  @Column({ type: 'varchar', length: 64, default: 'UTC' })
+  timeZone: string;
+
   @Column({ type: 'varchar', length: 100 })
   passwordHash: string;
 }

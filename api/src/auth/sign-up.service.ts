@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
+import { canonicalTimeZone } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, MoreThan } from 'typeorm';
 import { EnvironmentVariables } from '../config/env.validation';
@@ -60,6 +61,7 @@ export class SignUpService {
         email,
         name: input.name.trim(),
         shopName: input.shopName.trim(),
+        timeZone: input.timeZone ? canonicalTimeZone(input.timeZone) : 'UTC',
         passwordHash,
         tokenHash: hash,
         expiresAt: new Date(Date.now() + SIGN_UP_LINK_TTL_MS),
@@ -79,7 +81,7 @@ export class SignUpService {
       if (used.affected !== 1) throw AuthErrors.signUpLinkInvalid();
       // Another link for the same address may have been opened first: users.create refuses it (409 email_taken).
       const user = await this.users.create(manager, { email: pending.email, name: pending.name, passwordHash: pending.passwordHash });
-      const shop = await this.shops.create(manager, pending.shopName);
+      const shop = await this.shops.create(manager, pending.shopName, pending.timeZone);
       const membership = await this.memberships.create(manager, { shopId: shop.id, userId: user.id, role: 'owner' });
       return this.sessions.issue(membership.id, manager);
     });

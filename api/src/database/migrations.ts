@@ -4,6 +4,7 @@ import { WorkOrderCheckPhotos1796270000000 } from './migrations/1796270000000-wo
 import { JobSubjects1796280000000 } from './migrations/1796280000000-job-subjects';
 import { CounterLinesIssued1796290000000 } from './migrations/1796290000000-counter-lines-issued';
 import { MeasurementValueVersions1796300000000 } from './migrations/1796300000000-measurement-value-versions';
+import { ShopTimeZone1796310000000 } from './migrations/1796310000000-shop-time-zone';
 import { CreateMeasurements1796240364406 } from './migrations/1796240364406-create-measurements';
 import { CreateUsers1796100000000 } from './migrations/1796100000000-create-users';
 import { CreateShops1796100001000 } from './migrations/1796100001000-create-shops';
@@ -55,4 +56,5 @@ export const MIGRATIONS = [
   JobSubjects1796280000000,
   CounterLinesIssued1796290000000,
   MeasurementValueVersions1796300000000,
+  ShopTimeZone1796310000000,
 ];

@@ -34,15 +34,22 @@ describe('the quote PDF: days', () => {
         partsPlanVersion: null,
       },
     }) as unknown as QuoteView;
-  const render = (sentAt: Date | null) => new QuotePdfService().render({ view: view(sentAt), shop: { name: 'Test Garage' } as Shop, report: null });
+  const render = (sentAt: Date | null, timeZone = 'UTC') =>
+    new QuotePdfService().render({ view: view(sentAt), shop: { name: 'Test Garage', timeZone } as Shop, report: null });
 
   it('prints the last valid day and the issue day as days a customer reads, never as ISO dates', async () => {
     // Source: Unicode CLDR, locale "en", medium date pattern "MMM d, y" (ECMA-402 Intl.DateTimeFormat, month short).
-    // A calendar day is that day in every zone; the day of sending is its UTC day, the day the API dates quotes by.
+    // A calendar day is that day in every zone; the day of sending is its day in the shop's time zone.
     const text = await pdfText(await render(new Date('2026-12-03T23:30:00-08:00')));
     expect(text).toContain('Valid until Jan 15, 2027');
     expect(text).toContain('Issued Dec 4, 2026');
     expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+  });
+
+  it("dates the sending by the shop's own day, not the UTC day", async () => {
+    // Source: IANA tz database: America/Denver is UTC−7 in winter (MST); 2026-12-04T03:30Z is 20:30 on Dec 3 there.
+    expect(await pdfText(await render(new Date('2026-12-04T03:30:00Z'), 'America/Denver'))).toContain('Issued Dec 3, 2026');
+    expect(await pdfText(await render(new Date('2026-12-04T03:30:00Z'), 'UTC'))).toContain('Issued Dec 4, 2026');
   });
 
   it('dates a revision not sent yet by the day it was written', async () => {
@@ -71,7 +78,7 @@ describe('the quote PDF: figures in the shop\'s units', () => {
     },
   } as unknown as QuoteView;
   const text = async (unitSystem: Shop['unitSystem']) =>
-    (await pdfText(await new QuotePdfService().render({ view, shop: { name: 'Test Garage', unitSystem } as Shop, report: null }))).replace(/\s+/g, ' ');
+    (await pdfText(await new QuotePdfService().render({ view, shop: { name: 'Test Garage', unitSystem, timeZone: 'UTC' } as Shop, report: null }))).replace(/\s+/g, ' ');
 
   it('an inch shop\'s quote reads every length in inches only', async () => {
     // Source: NIST SP 811 (2008), Appendix B.8: 1 in = 25.4 mm exactly; 72.3 mm = 2.85 in and 8.7 mm = 0.34 in to two places.

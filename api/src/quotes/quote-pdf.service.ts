@@ -4,7 +4,7 @@ import {
   FIT_REPORT_SAFETY,
   formatCalendarDate,
   formatMoney,
-  formatUtcDay,
+  formatDayIn,
   QUOTE_ROUNDING_RULE,
   quoteTotalRows,
   renderText,
@@ -82,7 +82,7 @@ export class QuotePdfService {
     const label = `Quote Q-${String(quote.number).padStart(4, '0')} · revision ${revision.number}`;
     doc.font('bold').fontSize(12).fillColor(INK).text(label, 50, 50, { width, align: 'right' });
     doc.font('body').fontSize(10).fillColor(MUTED);
-    doc.text(`Issued ${formatUtcDay(revision.sentAt ?? revision.createdAt)}`, { width, align: 'right' });
+    doc.text(`Issued ${formatDayIn(revision.sentAt ?? revision.createdAt, shop.timeZone)}`, { width, align: 'right' });
     doc.text(`Valid until ${formatCalendarDate(revision.validUntil)}`, { width, align: 'right' });
     doc.moveDown(1.2);
 
@@ -104,7 +104,7 @@ export class QuotePdfService {
     if (!report) {
       doc.fillColor(MUTED).text('No fit report was stored when this quote was written; the lines are the estimate of the shop.', 50);
     } else {
-      this.fitSummary(doc, report.results, report, revision, width, shop.unitSystem);
+      this.fitSummary(doc, report.results, report, revision, width, shop.unitSystem, shop.timeZone);
     }
 
     // Lines
@@ -146,12 +146,13 @@ export class QuotePdfService {
     revision: QuoteView['revision'],
     width: number,
     units: UnitSystem,
+    timeZone: string,
   ): void {
     const { summary } = results;
     const lines = revision.lines;
     const plan = revision.partsPlanVersion !== null ? ` Parts from parts plan version ${revision.partsPlanVersion}.` : '';
     doc.fillColor(MUTED).fontSize(9).text(
-      `Fit report ${record.id.slice(0, 8)} of ${formatUtcDay(record.createdAt)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.${plan}`,
+      `Fit report ${record.id.slice(0, 8)} of ${formatDayIn(record.createdAt, timeZone)}: ${summary.total} checks, ${summary.ok} fit, ${summary.tight} tight, ${summary.fails} do not fit, ${summary.unknown} not checked.${plan}`,
       50,
       doc.y,
       { width },

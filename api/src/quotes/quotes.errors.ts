@@ -1,4 +1,4 @@
-import { formatCalendarDate, formatUtcDay } from '@swapwright/shared';
+import { formatCalendarDate, formatDayIn } from '@swapwright/shared';
 import { AppError } from '../common/errors/app-error';
 
 export const QuoteErrors = {
@@ -50,9 +50,9 @@ export const QuoteErrors = {
   linkInvalid: () => new AppError(401, 'quote_link_invalid', 'This quote link is not valid. Open the link from the e-mail exactly as sent, or ask the shop to send it again.'),
   linkExpired: () => new AppError(410, 'quote_link_expired', 'This quote link has expired. Ask the shop to send the quote again.'),
   /** An older revision's link once a later revision was accepted: what happened and when, not "open the newest e-mail". */
-  linkAfterAcceptance: (revision: number | null, answeredAt: Date | null, depositPaidAt: Date | null) => {
-    const accepted = `This quote was already accepted${answeredAt ? ` on ${formatUtcDay(answeredAt)}` : ''}${revision ? ` (revision ${revision})` : ''}`;
-    const deposit = depositPaidAt ? `, and the deposit was paid on ${formatUtcDay(depositPaidAt)}` : '';
+  linkAfterAcceptance: (revision: number | null, answeredAt: Date | null, depositPaidAt: Date | null, timeZone: string) => {
+    const accepted = `This quote was already accepted${answeredAt ? ` on ${formatDayIn(answeredAt, timeZone)}` : ''}${revision ? ` (revision ${revision})` : ''}`;
+    const deposit = depositPaidAt ? `, and the deposit was paid on ${formatDayIn(depositPaidAt, timeZone)}` : '';
     return new AppError(409, 'quote_link_already_accepted', `${accepted}${deposit}. There is nothing more to do with this link; the shop will be in touch about the work.`);
   },
   linkSuperseded: () => new AppError(409, 'quote_link_superseded', 'The shop has sent a newer revision of this quote; open the link in the newest e-mail.'),

@@ -1,7 +1,7 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { diffRevisions, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, utcToday, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
+import { diffRevisions, endOfDayIn, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, todayIn, utcToday, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
@@ -63,9 +63,9 @@ function addDays(iso: string, days: number): string {
   return utcToday(date);
 }
 
-/** A last valid day given by the estimator must be today or later (UTC, as sending and lapsing judge it). */
-function refusePastValidity(validUntil: string | undefined): void {
-  if (validUntil !== undefined && validUntil < utcToday()) throw QuoteErrors.validUntilPast(validUntil);
+/** A last valid day given by the estimator must be the shop's today or later (its day, as sending and lapsing judge it). */
+function refusePastValidity(validUntil: string | undefined, today: string): void {
+  if (validUntil !== undefined && validUntil < today) throw QuoteErrors.validUntilPast(validUntil);
 }
 
 /**
@@ -76,8 +76,8 @@ export function isOwnProject(project: Project, user: Pick<AuthUser, 'role' | 'us
   return user.role !== 'customer' && project.customer != null && isOwnCustomerRecord(project.customer, user);
 }
 
-/** A quote awaiting an answer past its validity date reads as lapsed. */
-export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today = utcToday()): QuoteStatus {
+/** A quote awaiting an answer reads as lapsed once the shop's today (`todayIn(shop.timeZone)`) is past its last valid day. */
+export function effectiveQuoteStatus(quote: Quote, sent: QuoteRevision | null, today: string): QuoteStatus {
   if (quote.status === 'awaiting-answer' && sent && sent.validUntil < today) return 'lapsed';
   return quote.status;
 }
@@ -152,8 +152,9 @@ export class QuotesService implements OnModuleInit {
       throw QuoteErrors.badLine(`status must be one of: ${QUOTE_STATUSES.join(', ')}`);
     }
     const quotes = await this.quotes.repository.find({ where: this.quotes.where(user), order: { number: 'DESC' }, take: 100 });
+    const today = await this.shopToday(user.shopId);
     const views: QuoteView[] = [];
-    for (const quote of quotes) views.push(await this.viewOf(user, quote, await this.projects.get(user, quote.projectId)));
+    for (const quote of quotes) views.push(await this.viewOf(user, quote, await this.projects.get(user, quote.projectId), undefined, today));
     return status ? views.filter((view) => view.status === status) : views;
   }
 
@@ -173,7 +174,10 @@ export class QuotesService implements OnModuleInit {
       throw QuoteErrors.linkInvalid();
     });
     if (quote.sentRevision !== claims.r) {
-      if (quote.status === 'approved') throw QuoteErrors.linkAfterAcceptance(quote.sentRevision, quote.answeredAt, quote.depositState === 'paid' ? quote.depositPaidAt : null);
+      if (quote.status === 'approved') {
+        const { timeZone } = await this.shops.getById(quote.shopId);
+        throw QuoteErrors.linkAfterAcceptance(quote.sentRevision, quote.answeredAt, quote.depositState === 'paid' ? quote.depositPaidAt : null, timeZone);
+      }
       throw QuoteErrors.linkSuperseded();
     }
     const reader = shopReader(claims.s);
@@ -212,9 +216,10 @@ export class QuotesService implements OnModuleInit {
 
   async create(user: AuthUser, projectId: string, input: CreateQuoteDto): Promise<QuoteView> {
     const project = await this.projects.get(user, projectId);
-    refusePastValidity(input.validUntil);
-    const report = await this.reportFor(user, project, input.fitReportId);
     const [shop, settings] = await Promise.all([this.shops.getCurrent(user), this.settings.forShop(user)]);
+    const today = todayIn(shop.timeZone);
+    refusePastValidity(input.validUntil, today);
+    const report = await this.reportFor(user, project, input.fitReportId);
     // The quote names the plan version and fit report it is built on; without lines it is drawn from them.
     const plan = await this.partsPlans.forQuote(user, project.id);
     const lines = input.lines
@@ -231,7 +236,7 @@ export class QuotesService implements OnModuleInit {
       fitReportId: report?.id ?? null,
       partsPlanId: plan?.id ?? null,
       partsPlanVersion: plan?.version ?? null,
-      validUntil: input.validUntil ?? addDays(utcToday(), settings.validityDays),
+      validUntil: input.validUntil ?? addDays(today, settings.validityDays),
       currency: shop.currency,
       laborRateCents: Math.round(shop.laborRatePerHour * 100),
       suppliesPercent: shop.shopSuppliesPercent,
@@ -276,7 +281,7 @@ export class QuotesService implements OnModuleInit {
   async update(user: AuthUser, id: string, input: UpdateQuoteDto): Promise<QuoteView> {
     const view = await this.get(user, id);
     if (view.quote.status === 'approved') throw QuoteErrors.notEditable(QUOTE_STATUS_WORDS.approved);
-    refusePastValidity(input.validUntil);
+    refusePastValidity(input.validUntil, await this.shopToday(user.shopId));
     const latest = view.revisions[view.revisions.length - 1];
     const lines = input.lines ? await this.linesFromInput(user, input.lines, latest.lines) : latest.lines;
     const next = {
@@ -323,7 +328,7 @@ export class QuotesService implements OnModuleInit {
     if (isOwnProject(view.project, user)) throw QuoteErrors.ownProject();
     const latest = view.revisions[view.revisions.length - 1];
     if (latest.lines.length === 0) throw QuoteErrors.emptyQuote();
-    if (latest.validUntil < utcToday()) throw QuoteErrors.pastValidity(latest.validUntil);
+    if (latest.validUntil < (await this.shopToday(user.shopId))) throw QuoteErrors.pastValidity(latest.validUntil);
     if (!view.project.customer?.email) throw QuoteErrors.noCustomerEmail();
     if (latest.sentAt !== null && view.quote.status !== 'awaiting-answer') throw QuoteErrors.nothingToSend();
     if (latest.sentAt === null) {
@@ -473,12 +478,17 @@ export class QuotesService implements OnModuleInit {
     return quote;
   }
 
-  private async viewOf(user: AuthUser, quote: Quote, project: Project, sentOnly = user.role === 'customer'): Promise<QuoteView> {
+  /** The shop's calendar day now, in its own time zone: the day quotes are dated and lapse by. */
+  private async shopToday(shopId: string): Promise<string> {
+    return todayIn((await this.shops.getById(shopId)).timeZone);
+  }
+
+  private async viewOf(user: AuthUser, quote: Quote, project: Project, sentOnly = user.role === 'customer', today?: string): Promise<QuoteView> {
     const all = await this.revisions.repository.find({ where: this.revisions.where(user, { quoteId: quote.id }), order: { number: 'ASC' } });
     const revisions = sentOnly ? all.filter((revision) => revision.sentAt !== null) : all;
     const sent = all.find((revision) => revision.number === quote.sentRevision) ?? null;
     const revision = sentOnly ? (sent ?? revisions[revisions.length - 1]) : all[all.length - 1];
-    return { quote, status: effectiveQuoteStatus(quote, sent), project, revision, revisions };
+    return { quote, status: effectiveQuoteStatus(quote, sent, today ?? (await this.shopToday(quote.shopId))), project, revision, revisions };
   }
 
   private editable(revision: QuoteRevision): Partial<QuoteRevision> {
@@ -586,8 +596,9 @@ export class QuotesService implements OnModuleInit {
     return { fileName: `${quoteLabel(view.quote)}-rev${view.revision.number}.pdf`, content };
   }
 
-  private approvalLink(view: QuoteView): string {
-    const expiresAt = new Date(`${view.revision.validUntil}T23:59:59Z`);
+  /** The link works to the end of the last valid day in the shop's own zone. */
+  private approvalLink(view: QuoteView, timeZone: string): string {
+    const expiresAt = endOfDayIn(view.revision.validUntil, timeZone);
     const token = this.links.sign({ q: view.quote.id, s: view.quote.shopId, r: view.revision.number }, expiresAt);
     return `${this.config.get('APP_URL', { infer: true })}/quote-answer/${token}`;
   }
@@ -607,7 +618,7 @@ export class QuotesService implements OnModuleInit {
   private async mailQuote(view: QuoteView, messageId: string): Promise<void> {
     const { fileName, content } = await this.renderPdf(view);
     const shop: Shop = await this.shops.getCurrent(shopReader(view.quote.shopId));
-    const link = this.approvalLink(view);
+    const link = this.approvalLink(view, shop.timeZone);
     const customer = view.project.customer;
     if (!customer?.email) throw new Error('the customer of this quote has no e-mail address any more');
     await this.mail.send(

@@ -27,6 +27,10 @@ export class Shop {
   @Column({ type: 'char', length: 3, default: 'USD' })
   currency: string;
 
+  /** IANA time zone name ("America/Denver"): the shop's calendar day, by which quotes are dated and lapse. */
+  @Column({ type: 'varchar', length: 64, default: 'UTC' })
+  timeZone: string;
+
   @CreateDateColumn({ type: 'datetime', precision: 3 })
   createdAt: Date;
 

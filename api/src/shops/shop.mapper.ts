@@ -4,7 +4,7 @@ import { CurrentShopResponseDto, ShopResponseDto, ShopSummaryResponseDto } from 
 import { Shop } from './shop.entity';
 
 export function mapShopSummary(shop: Shop): ShopSummaryResponseDto {
-  return { view: 'summary', id: shop.id, name: shop.name, unitSystem: shop.unitSystem, currency: shop.currency };
+  return { view: 'summary', id: shop.id, name: shop.name, unitSystem: shop.unitSystem, currency: shop.currency, timeZone: shop.timeZone };
 }
 
 export function mapShop(shop: Shop): ShopResponseDto {
@@ -17,6 +17,7 @@ export function mapShop(shop: Shop): ShopResponseDto {
     taxRatePercent: shop.taxRatePercent,
     shopSuppliesPercent: shop.shopSuppliesPercent,
     currency: shop.currency,
+    timeZone: shop.timeZone,
   };
 }
 

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
+import { canonicalTimeZone } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { EntityManager, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
@@ -54,12 +55,13 @@ export class ShopsService {
       const sent = Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined));
       Object.assign(shop, sent, changes.name !== undefined ? { name: changes.name.trim() } : {});
       if (changes.currency) shop.currency = changes.currency.toUpperCase();
+      if (changes.timeZone) shop.timeZone = canonicalTimeZone(changes.timeZone);
       return manager.save(shop);
     });
   }
 
-  /** Inside the sign-up transaction. */
-  create(manager: EntityManager, name: string): Promise<Shop> {
+  /** Inside the sign-up transaction; `timeZone` is the zone the owner's browser reported (else UTC). */
+  create(manager: EntityManager, name: string, timeZone = 'UTC'): Promise<Shop> {
     return manager.save(
       manager.create(Shop, {
         id: randomUUID(),
@@ -69,6 +71,7 @@ export class ShopsService {
         taxRatePercent: 0,
         shopSuppliesPercent: 0,
         currency: 'USD',
+        timeZone: canonicalTimeZone(timeZone),
       }),
     );
   }

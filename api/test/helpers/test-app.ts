@@ -106,7 +106,7 @@ export async function startSignedInApp(): Promise<{ t: TestApp; s: Record<DemoRo
 /** Signs up the way a person does: the form, then the e-mailed link. Returns the session the link opens. */
 export async function signUpThroughMail(
   http: TestApp['http'],
-  input: { email: string; password: string; name: string; shopName: string },
+  input: { email: string; password: string; name: string; shopName: string; timeZone?: string },
 ): Promise<Session> {
   await http.post('/api/auth/sign-up').send(input).expect(202);
   const token = await signUpTokenFor(input.email);

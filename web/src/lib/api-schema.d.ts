@@ -1916,6 +1916,11 @@ export interface components {
              */
             currency: string;
             /**
+             * @description IANA time zone name: the shop's calendar day, by which its quotes are dated and lapse
+             * @example America/Denver
+             */
+            timeZone: string;
+            /**
              * @description Tells this view apart from the summary (enum property replaced by openapi-typescript)
              * @enum {string}
              */
@@ -1937,6 +1942,11 @@ export interface components {
              */
             currency: string;
             /**
+             * @description IANA time zone name: the shop's calendar day, by which its quotes are dated and lapse
+             * @example America/Denver
+             */
+            timeZone: string;
+            /**
              * @description Tells this view apart from the full one (enum property replaced by openapi-typescript)
              * @enum {string}
              */
@@ -1951,6 +1961,11 @@ export interface components {
             shopSuppliesPercent?: number;
             /** @example USD */
             currency?: string;
+            /**
+             * @description The shop's time zone: quotes are dated, and lapse, by its calendar day
+             * @example America/Denver
+             */
+            timeZone?: string;
         };
         MembershipResponseDto: {
             /** Format: uuid */
@@ -2007,6 +2022,11 @@ export interface components {
             name: string;
             /** @example Back Forty Garage */
             shopName: string;
+            /**
+             * @description The new shop's time zone (the web sends the browser's); UTC when not given
+             * @example America/Denver
+             */
+            timeZone?: string;
         };
         SignUpAcceptedResponseDto: {
             /** @example Check your e-mail: we sent builder@example.test a link to finish creating your shop. */

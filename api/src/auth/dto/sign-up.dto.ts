@@ -1,6 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsNotEmpty, IsString, MaxLength, MinLength } from 'class-validator';
 import { Trim } from '../../common/decorators/trim.decorator';
+import { TimeZoneField } from '../../shops/dto/time-zone.field';
 
 export const PASSWORD_MIN = 8;
 // bcrypt reads at most 72 bytes.
@@ -31,6 +32,9 @@ export class SignUpDto {
   @IsNotEmpty({ message: 'shopName must not be empty' })
   @MaxLength(120)
   shopName: string;
+
+  @TimeZoneField("The new shop's time zone (the web sends the browser's); UTC when not given")
+  timeZone?: string;
 }
 
 export class SignUpConfirmDto {

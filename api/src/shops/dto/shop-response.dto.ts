@@ -11,6 +11,8 @@ abstract class ShopBasicsDto {
   @ApiProperty() name: string;
   @ApiProperty({ enum: UNIT_SYSTEMS }) unitSystem: UnitSystem;
   @ApiProperty({ example: 'USD', description: 'ISO 4217 code' }) currency: string;
+  @ApiProperty({ example: 'America/Denver', description: "IANA time zone name: the shop's calendar day, by which its quotes are dated and lapse" })
+  timeZone: string;
 }
 
 /** What every member of the shop, customers included, may see. */

@@ -2,6 +2,7 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsISO4217CurrencyCode, IsNotEmpty, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { UNIT_SYSTEMS, UnitSystem } from '../shop.entity';
 import { Trim } from '../../common/decorators/trim.decorator';
+import { TimeZoneField } from './time-zone.field';
 
 export class UpdateShopDto {
   @ApiPropertyOptional({ maxLength: 120 })
@@ -42,4 +43,7 @@ export class UpdateShopDto {
   @IsOptional()
   @IsISO4217CurrencyCode({ message: 'currency must be a three-letter ISO 4217 code such as USD or EUR' })
   currency?: string;
+
+  @TimeZoneField("The shop's time zone: quotes are dated, and lapse, by its calendar day")
+  timeZone?: string;
 }

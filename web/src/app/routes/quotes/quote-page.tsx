@@ -6,6 +6,7 @@ import { CustomerQuotePanel } from '@/features/quotes/components/quote-answer-pa
 import { QuoteWorkspace } from '@/features/quotes/components/quote-workspace';
 import { paths, toProjectDetail } from '@/config/paths';
 import { useQuote } from '@/features/quotes/api/get-quote';
+import { useShop } from '@/features/shop/api/get-shop';
 import { canWriteQuotes } from '../../navigation';
 
 export function QuotePage() {
@@ -14,6 +15,7 @@ export function QuotePage() {
   const navigate = useNavigate();
   const isCustomer = user.role === 'customer';
   const quote = useQuote(quoteId);
+  const shop = useShop({ enabled: !isCustomer });
   if (isCustomer) {
     // the customer reads the quote of their own project (the API scopes it), accepts or declines and pays the deposit
     return (
@@ -23,5 +25,6 @@ export function QuotePage() {
       </>
     );
   }
-  return <QuoteWorkspace quoteId={quoteId} canWrite={canWriteQuotes(user.role)} />;
+  // the shop's own day dates its quotes; UTC (what the API assumes of a shop without a zone) until the shop is read
+  return <QuoteWorkspace quoteId={quoteId} canWrite={canWriteQuotes(user.role)} timeZone={shop.data?.timeZone ?? 'UTC'} />;
 }

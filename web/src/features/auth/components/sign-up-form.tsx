@@ -27,7 +27,8 @@ export function SignUpForm({ onBack }: SignUpFormProps) {
       requiredMark={false}
       aria-label="Create your shop"
       onFinish={({ name, shopName, email, password }) =>
-        signUp.mutate({ name: name.trim(), shopName: shopName.trim(), email: email.trim(), password })
+        // the new shop dates its quotes by the day where its owner is (the browser's zone; the API takes UTC without one)
+        signUp.mutate({ name: name.trim(), shopName: shopName.trim(), email: email.trim(), password, timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || undefined })
       }
     >
       <FormErrorAlert error={signUp.error} />

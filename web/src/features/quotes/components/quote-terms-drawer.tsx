@@ -26,6 +26,8 @@ type QuoteTermsFormValues = {
 export interface QuoteTermsDrawerProps {
   open: boolean;
   revision: Revision;
+  /** The shop's IANA time zone: the last valid day is the shop's today or later. */
+  timeZone: string;
   saving: boolean;
   error: unknown;
   onSubmit: (changes: UpdateQuoteBody) => void;
@@ -35,7 +37,7 @@ export interface QuoteTermsDrawerProps {
 const fromCents = (cents: number | null) => (cents === null ? null : cents / 100);
 
 /** The working revision's discount, deposit, last valid day and notes (shop supplies and tax follow the shop's settings). */
-export function QuoteTermsDrawer({ open, revision, saving, error, onSubmit, onClose }: QuoteTermsDrawerProps) {
+export function QuoteTermsDrawer({ open, revision, timeZone, saving, error, onSubmit, onClose }: QuoteTermsDrawerProps) {
   const [form] = Form.useForm<QuoteTermsFormValues>();
   const discountKind = Form.useWatch('discountKind', form);
   const depositKind = Form.useWatch('depositKind', form);
@@ -106,9 +108,9 @@ export function QuoteTermsDrawer({ open, revision, saving, error, onSubmit, onCl
             )}
           </Col>
           <Col span={12}>
-            <Form.Item label="Valid until" name="validUntil" rules={[{ required: true, message: 'Enter the last day the customer may accept' }, validUntilRule()]}>
+            <Form.Item label="Valid until" name="validUntil" rules={[{ required: true, message: 'Enter the last day the customer may accept' }, validUntilRule(timeZone)]}>
               {/* the browser's date picker offers no day before the first valid one */}
-              <Input type="date" aria-label="Valid until" min={firstValidDay()} />
+              <Input type="date" aria-label="Valid until" min={firstValidDay(timeZone)} />
             </Form.Item>
           </Col>
         </Row>

@@ -25,6 +25,8 @@ export interface QuoteWorkspaceProps {
   quoteId: string;
   /** Owner and estimator write lines, start revisions and send. */
   canWrite: boolean;
+  /** The shop's IANA time zone, whose today is the first day a quote may be valid until. */
+  timeZone: string;
 }
 
 function revisionLabel(revision: Quote['revisions'][number], currency: string): string {
@@ -32,7 +34,7 @@ function revisionLabel(revision: Quote['revisions'][number], currency: string): 
 }
 
 /** One quote for the shop: the working revision's lines (editable until sent), earlier revisions, and what changed between two. */
-export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
+export function QuoteWorkspace({ quoteId, canWrite, timeZone }: QuoteWorkspaceProps) {
   const working = useQuote(quoteId);
   const [viewing, setViewing] = useState<number | undefined>(undefined);
   const latestNumber = working.data?.latestRevision;
@@ -128,6 +130,7 @@ export function QuoteWorkspace({ quoteId, canWrite }: QuoteWorkspaceProps) {
             <QuoteTermsDrawer
               open={termsOpen}
               revision={revision}
+              timeZone={timeZone}
               saving={update.isPending}
               error={update.error}
               onSubmit={(changes) => update.mutate(changes, { onSuccess: () => setTermsOpen(false) })}

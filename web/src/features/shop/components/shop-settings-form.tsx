@@ -1,9 +1,10 @@
 import { moneySign } from '@swapwright/shared';
-import { Button, Card, Col, Form, Input, Radio, Row, Typography } from 'antd';
-import { useEffect } from 'react';
+import { Button, Card, Col, Form, Input, Radio, Row, Select, Typography } from 'antd';
+import { useEffect, useMemo } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
 import { notifySuccess } from '@/lib/notifier';
 import { useUpdateShop } from '../api/update-shop';
+import { timeZoneMatches, timeZoneOptions } from '../time-zones';
 import type { Shop, UpdateShopInput } from '../types';
 import { NumberField } from '@/components/number-field';
 
@@ -22,8 +23,10 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
       laborRatePerHour: shop.laborRatePerHour,
       taxRatePercent: shop.taxRatePercent,
       shopSuppliesPercent: shop.shopSuppliesPercent,
+      timeZone: shop.timeZone,
     });
   }, [shop, form]);
+  const zones = useMemo(() => timeZoneOptions(shop.timeZone), [shop.timeZone]);
 
   const submit = (v: ShopSettingsValues) => {
     const changes: UpdateShopInput = {};
@@ -74,6 +77,14 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
               { value: 'mm', label: 'Millimetres' },
             ]}
           />
+        </Form.Item>
+        <Form.Item
+          label="Time zone for quote dates"
+          name="timeZone"
+          extra="Quotes are dated by the shop's own day in this zone: the day a quote is issued, the first day it may be valid until, and the day after its last valid day, when it lapses."
+          rules={[{ required: true, message: 'Choose the time zone the shop works in' }]}
+        >
+          <Select showSearch options={zones} filterOption={timeZoneMatches} placeholder="Type a city, e.g. Denver" style={{ maxWidth: 360 }} />
         </Form.Item>
       </Card>
       <Card title="Rates for quotes" style={{ marginBottom: 16 }}>

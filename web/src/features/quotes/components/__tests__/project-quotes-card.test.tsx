@@ -95,7 +95,7 @@ describe('QuoteWorkspace: sending a quote of one’s own truck', () => {
   it('puts the reason in place of the send button', async () => {
     const quote = quoteStub({}, { forMyself: true });
     vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url.startsWith('/quotes/quote-7') ? quote : {} }));
-    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite />);
+    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite timeZone="UTC" />);
     expect(await screen.findByTestId('own-truck-quote-note')).toHaveTextContent('Your own truck: no customer to send this quote to.');
     expect(screen.queryByRole('button', { name: /^Send revision/ })).toBeNull();
   });
@@ -104,7 +104,7 @@ describe('QuoteWorkspace: sending a quote of one’s own truck', () => {
     const quote = quoteStub({}, { forMyself: true });
     vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url.startsWith('/quotes/quote-7') ? quote : {} }));
     const post = vi.spyOn(apiClient, 'post').mockResolvedValue({ data: STARTED });
-    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite />);
+    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite timeZone="UTC" />);
     await userEvent.click(await screen.findByRole('button', { name: 'Start my build' }));
     await userEvent.click((await screen.findAllByRole('button', { name: 'Start my build' })).at(-1)!);
     await waitFor(() => expect(post).toHaveBeenCalledWith('/quotes/quote-7/start-own-build', undefined, expect.anything()));
@@ -114,7 +114,7 @@ describe('QuoteWorkspace: sending a quote of one’s own truck', () => {
   it('offers no start to someone who only reads quotes', async () => {
     const quote = quoteStub({}, { forMyself: true });
     vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url.startsWith('/quotes/quote-7') ? quote : {} }));
-    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite={false} />);
+    renderWithApp(<QuoteWorkspace quoteId="quote-7" canWrite={false} timeZone="UTC" />);
     expect(await screen.findByText(/Q-0007/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Start my build' })).toBeNull();
   });
