@@ -4,7 +4,7 @@ import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
 import { isReadingChanged } from '../api/set-measurement-value';
 import type { PhotoUpload } from '../hooks/use-photo-uploads';
-import { formatDeviation, formatReading, formatTolerance, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
+import { compareReading, formatReading, formatTolerance, readEntry, unitSlip, valueBody, type SheetRow, type UnitSystem } from '../lib/sheet-state';
 import type { SetMeasurementValueBody } from '../types';
 import { PhotoStrip, type PhotoActions } from './photo-strip';
 import { PointDrawing } from './point-drawing';
@@ -63,6 +63,8 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
   /** Someone saved another reading after the person started typing: the API's sentence and the reason given, if any. */
   const [conflict, setConflict] = useState<{ message: string; seenVersion: number; reason?: string } | null>(null);
   const fmt = (v: number, unit: 'mm' | 'deg') => formatReading(v, unit, formatLength);
+  const comparison = value ? compareReading(value, point, system, formatLength) : null;
+  const against = comparison?.movedByRideHeight ? 'what the catalog predicts at this ride height' : 'the catalog';
   const reading = readEntry(text, point, system);
   const toleranceReading = readEntry(tolerance, point, system);
   const unitHint = point.unit === 'deg' ? 'degrees, e.g. 2.5 or -1.5°' : system === 'in' ? 'e.g. 12 1/2", 12.5 in or 318 mm' : 'e.g. 318 mm, 12 1/2" or 12.5 in';
@@ -153,23 +155,35 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               <Typography.Text type="secondary" style={{ fontSize: 12 }}>
                 Catalog
               </Typography.Text>
-              <div style={{ fontSize: 16, paddingTop: 4 }}>{fmt(point.catalogValue, point.unit)}</div>
+              <div style={{ fontSize: 16, paddingTop: 4 }} data-testid="point-catalog">
+                {fmt(point.catalogValue, point.unit)}
+              </div>
+            </div>
+          )}
+          {comparison?.movedByRideHeight && (
+            <div>
+              <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+                Expected at this ride height
+              </Typography.Text>
+              <div style={{ fontSize: 16, paddingTop: 4 }} data-testid="point-expected">
+                {fmt(comparison.expected, point.unit)}
+              </div>
             </div>
           )}
         </Flex>
         {value && (
           <Typography.Text type="secondary" style={{ fontSize: 13 }} data-testid="measured-by">
             Measured by {value.measuredBy}, {formatDateTime(value.measuredAt)}
-            {value.deviation !== null && ` · ${formatDeviation(value.deviation, point.unit, formatLength)} from the catalog`}
+            {comparison && ` · ${comparison.difference} from ${comparison.movedByRideHeight ? 'the expected figure' : 'the catalog'}`}
             {value.note && ` · ${value.note}`}
           </Typography.Text>
         )}
-        {row.flagged && value?.deviation !== null && value?.deviation !== undefined && (
+        {row.flagged && comparison && (
           <Alert
             type="warning"
             showIcon
             title="Far from the catalog: take a second look"
-            description={`This reading is ${formatDeviation(value.deviation, point.unit, formatLength)} from what the catalog predicts for this truck. Measure it again before cutting or ordering; if it holds, the fit check uses it.`}
+            description={`This reading is ${comparison.difference} from ${against}. Measure it again before cutting or ordering; if it holds, the fit check uses it.`}
           />
         )}
 

@@ -1,4 +1,5 @@
 import { formatLength as formatLengthAs, formatQuantity, MM_PER_INCH, parseMeasurementEntry } from '@swapwright/shared';
+import { displayToMm, mmToDisplay } from '@/lib/units';
 import type { MeasurementEvent, MeasurementPhoto, MeasurementPoint, MeasurementSheet, MeasurementValue, SetMeasurementValueBody } from '../types';
 
 export type UnitSystem = 'in' | 'mm';
@@ -181,4 +182,43 @@ export function formatTolerance(value: number, unit: 'mm' | 'deg', system: UnitS
 export function formatDeviation(value: number, unit: 'mm' | 'deg', formatLength: (mm: number) => string): string {
   const sign = value > 0 ? '+' : value < 0 ? '−' : '±';
   return `${sign}${formatReading(Math.abs(value), unit, formatLength)}`;
+}
+
+/** A reading beside the figure it is compared with, each as the sheet shows it. */
+export interface ReadingComparison {
+  /**
+   * What the tape should show on this truck: the catalog's figure, moved by the measured ride height for a height
+   * read from the floor (a truck sitting lower reads every floor height lower without anything being bent).
+   */
+  expected: number;
+  /** The expected figure shows differently from the catalog's (the ride height moved it by a shown step or more). */
+  movedByRideHeight: boolean;
+  /** Reading minus expected as shown ("−0.05 in"): the two shown figures subtracted, so a reader's check agrees. */
+  difference: string;
+}
+
+/**
+ * Compares a stored reading with what the catalog predicts for this truck. The API keeps readings to 0.01 mm and
+ * measures the difference in mm; the sheet shows 0.01 in (or 0.1 mm, 0.01°). Subtracting the rounded figures rather
+ * than rounding the difference keeps "reading − expected = difference" true to the last digit shown.
+ */
+export function compareReading(
+  value: Pick<MeasurementValue, 'value' | 'deviation'>,
+  point: Pick<MeasurementPoint, 'unit' | 'catalogValue'>,
+  system: UnitSystem,
+  formatLength: (mm: number) => string,
+): ReadingComparison | null {
+  if (value.deviation === null) return null;
+  const expected = value.value - value.deviation;
+  const decimals = point.unit === 'deg' ? 2 : system === 'in' ? 2 : 1;
+  const f = 10 ** decimals;
+  const shown = (v: number): number => (point.unit === 'deg' ? Math.round(v * f) / f : mmToDisplay(v, system));
+  const diff = Math.round((shown(value.value) - shown(expected)) * f) / f;
+  const sign = diff > 0 ? '+' : diff < 0 ? '−' : '±';
+  const size = point.unit === 'deg' ? `${Math.abs(diff)}°` : formatLength(displayToMm(Math.abs(diff), system));
+  return {
+    expected,
+    movedByRideHeight: point.catalogValue !== null && shown(expected) !== shown(point.catalogValue),
+    difference: `${sign}${size}`,
+  };
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatLength } from '@/lib/units';
-import { filterRows, formatTolerance, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, unitSlip, valueBody } from '../sheet-state';
+import { compareReading, filterRows, formatTolerance, generalPhotos, initialFilter, needsReason, readEntry, reasonProblem, sheetCounts, sheetRows, signOffEvent, unitSlip, valueBody } from '../sheet-state';
 import type { MeasurementPhoto } from '../../types';
 import { POINTS, sheetStub } from './sheet-fixture';
 
@@ -140,5 +140,44 @@ describe('a reading’s tolerance', () => {
     expect(formatTolerance(2.54, 'mm', 'in', inches)).toBe('0.100 in');
     expect(formatTolerance(3.18, 'mm', 'mm', mm)).toBe('3.2 mm');
     expect(formatTolerance(0.5, 'deg', 'in', inches)).toBe('0.5°');
+  });
+});
+
+describe('a reading beside the catalog, as a reader checks it', () => {
+  const inches = (mm: number) => formatLength(mm, 'in');
+  const mm = (v: number) => formatLength(v, 'mm');
+  const lengthPoint = { unit: 'mm' as const, catalogValue: 355 };
+
+  it('gives the difference of the two figures shown, not the rounded difference of the stored ones', () => {
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly.
+    // 355.35 mm = 13.990 in (shown 13.99), catalog 355 mm = 13.976 in (shown 13.98): the sheet says +0.01 in,
+    // although 0.35 mm alone would round to 0.02 in.
+    const c = compareReading({ value: 355.35, deviation: 0.35 }, lengthPoint, 'in', inches);
+    expect(inches(355.35)).toBe('13.99 in');
+    expect(inches(355)).toBe('13.98 in');
+    expect(c).toMatchObject({ movedByRideHeight: false, difference: '+0.01 in' });
+    // 13.98 in typed = 355.092 mm, kept as 355.09; beside a catalog of 355 mm both read 13.98 in: no difference shown.
+    expect(compareReading({ value: 355.09, deviation: 0.09 }, lengthPoint, 'in', inches)?.difference).toBe('±0.00 in');
+    // In millimetres to the 0.1 mm shown: 355.35 reads 355.4 (half away from zero), 355 reads 355.0: +0.4 mm.
+    expect(compareReading({ value: 355.35, deviation: 0.35 }, lengthPoint, 'mm', mm)?.difference).toBe('+0.4 mm');
+  });
+
+  it('names the figure a floor height is compared with when the measured ride height moved it', () => {
+    // Source: NIST SP 811 (2008) B.8: 1 in = 25.4 mm exactly. A reading of 13.98 in (355.09 mm) against a catalog of
+    // 13.98 in that the measured ride height raises by 1.27 mm (0.05 in) to 356.36 mm = 14.03 in: −0.05 in from 14.03 in.
+    const c = compareReading({ value: 355.09, deviation: -1.27 }, { unit: 'mm', catalogValue: 355.09 }, 'in', inches);
+    expect(c?.movedByRideHeight).toBe(true);
+    expect(inches(c!.expected)).toBe('14.03 in');
+    expect(c?.difference).toBe('−0.05 in');
+  });
+
+  it('compares angles to the 0.01° shown', () => {
+    // Common practice (no published source): angle finders read to 0.1°; the sheet shows 0.01°.
+    // 2.456° shows 2.46°, catalog 1.5° shows 1.5°: +0.96°.
+    expect(compareReading({ value: 2.456, deviation: 0.956 }, { unit: 'deg', catalogValue: 1.5 }, 'in', inches)).toMatchObject({
+      movedByRideHeight: false,
+      difference: '+0.96°',
+    });
+    expect(compareReading({ value: 2, deviation: null }, { unit: 'deg', catalogValue: 1.5 }, 'in', inches)).toBeNull();
   });
 });
