@@ -134,6 +134,11 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(panBolts.sequence).toMatch(/crisscross from the centre out, in two stages/);
     expect(checkOf(order.body, 'oil-pan-pickup.screen-height')).toMatchObject({ measured: true, range: '6–9 mm', rangeFrom: 'TR-4411', latest: null });
     expect(checkOf(order.body, 'cam-timing-set.cam-marks').fitFinding).toMatchObject({ checkId: 'cam.timing-advance' });
+    // What the locked plan resolves is said beside a shortfall the check quotes; a finding that fits has nothing to resolve.
+    for (const step of order.body.steps as { checks: { fitFinding: { status: string; resolvedBy: string | null } | null }[] }[]) {
+      for (const { fitFinding } of step.checks) if (fitFinding && fitFinding.status === 'ok') expect(fitFinding.resolvedBy).toBeNull();
+    }
+    expect(checkOf(order.body, 'cam-timing-set.cam-marks').fitFinding).toHaveProperty('resolvedBy');
     expect(order.body.cautions.map((c: { hazard: string }) => c.hazard)).toEqual(['lifting', 'support', 'fuel', 'welding']);
     expect(order.body.deference).toMatch(/licensed practice/);
 
@@ -171,8 +176,15 @@ describe('job stages and the work order, from the first fit check to the finishe
     expect(latest).toMatchObject({ result: 'fail', value: 9.5 });
     expect(Date.parse(latest.recordedAt)).not.toBeNaN();
     expect(outside.body.progress).toEqual({ total: 5, passed: 0, failed: 1, open: 4 });
-    const rolled = await record({ checkKey: 'oil-pan-pickup.rear-main-lip', passed: false }).expect(200);
-    expect(checkOf(rolled.body, 'oil-pan-pickup.rear-main-lip').latest!.result).toBe('fail');
+    // Common practice (no published source): a check marked not right says what is wrong, or the next person cannot put it right.
+    for (const note of [undefined, '   ']) {
+      const bare = await record({ checkKey: 'oil-pan-pickup.rear-main-lip', passed: false, ...(note !== undefined && { note }) }).expect(400);
+      expect(bare.body).toMatchObject({ code: 'validation_failed', message: expect.stringMatching(/marked not right: say in the note what is wrong/) });
+    }
+    const unchanged = await t.http.get(`/api/work-orders/${workOrderId}`).set(...bearer(demo.fabricator)).expect(200);
+    expect(checkOf(unchanged.body, 'oil-pan-pickup.rear-main-lip').latest).toBeNull();
+    const rolled = await record({ checkKey: 'oil-pan-pickup.rear-main-lip', passed: false, note: 'Seal lip rolled at the left corner' }).expect(200);
+    expect(checkOf(rolled.body, 'oil-pan-pickup.rear-main-lip').latest).toMatchObject({ result: 'fail', note: 'Seal lip rolled at the left corner' });
   });
 
   it('a photo of a check is stored without its location, served to the shop and the project\'s customer with nosniff, not found for another shop', async () => {

@@ -73,6 +73,8 @@ export function mapWorkOrder(order: WorkOrder, project: Project, records: readon
         const record = latest.get(check.key);
         return {
           ...check,
+          // Work orders opened before plan resolutions were kept carry none.
+          fitFinding: check.fitFinding ? { ...check.fitFinding, resolvedBy: check.fitFinding.resolvedBy ?? null } : null,
           latest: record ? mapRecord(record) : null,
           recordings: counts.get(check.key) ?? 0,
           photos: photos.filter((photo) => photo.checkKey === check.key).map(mapCheckPhoto),

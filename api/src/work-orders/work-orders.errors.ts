@@ -12,6 +12,10 @@ export const WorkOrderErrors = {
     new AppError(400, 'validation_failed', `"${label}" is measured: send value (allowed ${range})`, [`"${label}" is measured: send value (allowed ${range})`]),
   passedRequired: (label: string) =>
     new AppError(400, 'validation_failed', `"${label}" is confirmed, not measured: send passed true or false`, [`"${label}" is confirmed, not measured: send passed true or false`]),
+  noteRequired: (label: string) =>
+    new AppError(400, 'validation_failed', `"${label}" is marked not right: say in the note what is wrong (what you found, where), so the next person can put it right`, [
+      `note: say what is not right with "${label}"`,
+    ]),
   checksOutstanding: (labels: string[]) =>
     new AppError(409, 'work_order_checks_outstanding', `Finish every check with a pass first. Still open or failed: ${labels.join('; ')}.`, labels),
   photoNotFound: () => new AppError(404, 'photo_not_found', 'That photo does not exist in your shop.'),

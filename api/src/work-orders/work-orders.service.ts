@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import {
   buildWorkSteps,
+  planResolutions,
   measuredCheckResult,
   type FitReport,
   type WorkCheck,
@@ -16,7 +17,7 @@ import { TenantRepository } from '../common/tenant/tenant-repository';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { LaborOperation } from '../labor-operations/labor-operation.entity';
 import { CounterService } from '../parts/counter.service';
-import { Part } from '../parts/part.entity';
+import { Part, PartsPlanRecord } from '../parts/part.entity';
 import type { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import type { Quote } from '../quotes/quote.entity';
@@ -104,6 +105,8 @@ export class WorkOrdersService {
     }
     const report = revision.fitReportId ? await manager.findOne(FitReportRecord, { where: { shopId, id: revision.fitReportId } }) : null;
     const findings = (report?.results as FitReport | undefined)?.findings ?? [];
+    // The plan the quote was drawn from: a shortfall it resolves is measured once fitted, not read as the verdict.
+    const plan = revision.partsPlanId ? await manager.findOne(PartsPlanRecord, { where: { shopId, id: revision.partsPlanId } }) : null;
     const id = randomUUID();
     const result = await manager
       .createQueryBuilder()
@@ -117,7 +120,7 @@ export class WorkOrdersService {
         quoteRevision: revision.number,
         number: quote.number,
         state: 'ready',
-        steps: buildWorkSteps(operationInputs, parts, findings),
+        steps: buildWorkSteps(operationInputs, parts, findings, planResolutions(plan?.result)),
         fitReportId: revision.fitReportId,
         partsPlanVersion: revision.partsPlanVersion,
         startedAt: null,
@@ -188,6 +191,8 @@ export class WorkOrdersService {
     } else {
       if (input.passed === undefined) throw WorkOrderErrors.passedRequired(check.label);
       result = input.passed ? 'pass' : 'fail';
+      // a failure with no word of what is wrong leaves the next person nothing to put right
+      if (result === 'fail' && !input.note?.trim()) throw WorkOrderErrors.noteRequired(check.label);
     }
     await this.checks.insert({
       id: randomUUID(),

@@ -1,5 +1,5 @@
 import type { Finding } from '../types/finding';
-import { buildWorkSteps, OTHER_PARTS_STEP, type WorkOperationInput, type WorkPartInput } from './work-steps';
+import { buildWorkSteps, OTHER_PARTS_STEP, planResolutions, type WorkOperationInput, type WorkPartInput } from './work-steps';
 import { workOrderCautions } from './work-cautions';
 
 const panOperation: WorkOperationInput = {
@@ -65,7 +65,35 @@ describe('work order steps', () => {
   });
 
   it('shows the fit check result beside the check that confirms it', () => {
-    expect(steps[0].checks[0].fitFinding).toEqual({ checkId: 'cam.timing-advance', title: 'Cam timing', status: 'ok', message: 'Advance 4° of 4° recommended.' });
+    expect(steps[0].checks[0].fitFinding).toEqual({ checkId: 'cam.timing-advance', title: 'Cam timing', status: 'ok', message: 'Advance 4° of 4° recommended.', resolvedBy: null });
+  });
+
+  it('says what in the locked plan resolves a shortfall the check quotes, instead of the bare verdict of the truck as it came', () => {
+    // Common practice (no published source): a clearance the plan fixes by a part or a cut is measured again once fitted.
+    const gapOperation: WorkOperationInput = {
+      ...camOperation,
+      id: 'op-fit',
+      code: 'engine-remove-install',
+      checks: [{ key: 'mount-gap', label: 'Oil pan to crossmember gap', unit: 'mm', min: 12.7, max: null, fitCheckId: 'envelope.sump-crossmember' }],
+    };
+    const shortfall = { checkId: 'envelope.sump-crossmember', title: 'Oil pan to crossmember', status: 'fails', message: 'The oil pan runs 74.4 mm into the front crossmember.' } as Finding;
+    const plan = {
+      picks: [{ sku: 'TR-4410', description: 'Rear-sump swap pan', resolves: [{ checkId: 'envelope.sump-crossmember' }] }],
+      operations: [
+        { operation: 'Notch the crossmember', resolves: [{ checkId: 'envelope.sump-crossmember' }] },
+        { operation: 'Shorten the driveshaft', resolves: [{ checkId: 'driveline.length' }] },
+      ],
+    };
+    const resolutions = planResolutions(plan);
+    expect(resolutions.get('envelope.sump-crossmember')).toBe('the part TR-4410 Rear-sump swap pan and the operation Notch the crossmember');
+    const [built] = buildWorkSteps([gapOperation], [], [shortfall], resolutions);
+    expect(built.checks[0].fitFinding).toMatchObject({ status: 'fails', resolvedBy: 'the part TR-4410 Rear-sump swap pan and the operation Notch the crossmember' });
+    // Without a plan, or when the plan leaves it unresolved, the finding stands as found.
+    expect(buildWorkSteps([gapOperation], [], [shortfall])[0].checks[0].fitFinding?.resolvedBy).toBeNull();
+    expect(buildWorkSteps([gapOperation], [], [shortfall], planResolutions(null))[0].checks[0].fitFinding?.resolvedBy).toBeNull();
+    // A check that fits needs no resolution, whatever the plan lists.
+    const fits = { ...shortfall, status: 'ok' } as Finding;
+    expect(buildWorkSteps([gapOperation], [], [fits], resolutions)[0].checks[0].fitFinding?.resolvedBy).toBeNull();
   });
 
   it('always carries the lifting, support, fuel and welding cautions, each deferring to practice', () => {

@@ -59,7 +59,36 @@ export interface WorkCheck {
   /** Where the range comes from: a part's SKU, or null for the operation's default. */
   rangeFrom: string | null;
   /** The fit check's result this check confirms on the vehicle (e.g. the cam timing), when there is one. */
-  fitFinding: { checkId: string; title: string; status: CheckStatus; message: string } | null;
+  fitFinding: WorkFitFinding | null;
+}
+
+export interface WorkFitFinding {
+  checkId: string;
+  title: string;
+  status: CheckStatus;
+  message: string;
+  /**
+   * For a shortfall (tight or does not fit) the locked parts plan resolves: what resolves it, in the plan's words
+   * ("the part RS-1 Rear-sump oil pan", "the operation Notch the crossmember"); null otherwise. The finding is the
+   * fit check of the truck as it came in, so the bay measures the fitted result instead of reading it as the verdict.
+   * Absent on work orders opened before it was kept.
+   */
+  resolvedBy?: string | null;
+}
+
+/** What resolves a shortfall in a parts plan: its picked parts and planned operations, by the fit check they resolve. */
+export interface PlanResolutionInput {
+  picks: readonly { sku: string; description: string; resolves: readonly { checkId: string }[] }[];
+  operations: readonly { operation: string; resolves: readonly { checkId: string }[] }[];
+}
+
+/** Per fit check id, what in the plan resolves it, in words (parts first, then operations, joined by "and"). */
+export function planResolutions(plan: PlanResolutionInput | null | undefined): Map<string, string> {
+  const words = new Map<string, string[]>();
+  const add = (checkId: string, what: string) => words.set(checkId, [...(words.get(checkId) ?? []), what]);
+  for (const pick of plan?.picks ?? []) for (const ref of pick.resolves) add(ref.checkId, `the part ${[pick.sku, pick.description].filter(Boolean).join(' ')}`);
+  for (const op of plan?.operations ?? []) for (const ref of op.resolves) add(ref.checkId, `the operation ${op.operation}`);
+  return new Map([...words].map(([checkId, list]) => [checkId, [...new Set(list)].join(' and ')]));
 }
 
 export interface WorkStep {
@@ -110,12 +139,18 @@ function rangeFor(check: WorkOperationInput['checks'][number], parts: readonly W
 /**
  * The work order's steps: the quoted operations in build order, each with the parts it installs, the tightening
  * torques (the operation's and its parts', in lbf·ft and N·m) with their sequences, its hazards and the checks the bay
- * records (a part's data may narrow a measured check's range; a check tied to a fit check carries that result).
+ * records (a part's data may narrow a measured check's range; a check tied to a fit check carries that result, and what in the
+ * locked parts plan resolves it when it is a shortfall: `resolutions`, from {@link planResolutions}).
  * Parts no quoted operation installs go to a last step of their own. Each joint has one figure in the whole work order:
  * a part's own figure replaces the operation's general one for the same joint, and a joint is listed where it is
  * first tightened.
  */
-export function buildWorkSteps(operations: readonly WorkOperationInput[], parts: readonly WorkPartInput[], findings: readonly Finding[] = []): WorkStep[] {
+export function buildWorkSteps(
+  operations: readonly WorkOperationInput[],
+  parts: readonly WorkPartInput[],
+  findings: readonly Finding[] = [],
+  resolutions: ReadonlyMap<string, string> = new Map(),
+): WorkStep[] {
   const ordered = [...operations].sort((a, b) => a.buildOrder - b.buildOrder);
   const partsOf = new Map<WorkOperationInput | null, WorkPartInput[]>();
   for (const part of parts) {
@@ -160,7 +195,15 @@ export function buildWorkSteps(operations: readonly WorkOperationInput[], parts:
         max: range.max,
         range: measured ? describeRange(range, check.unit) : null,
         rangeFrom: measured ? range.from : null,
-        fitFinding: finding ? { checkId: finding.checkId, title: finding.title, status: finding.status, message: finding.message } : null,
+        fitFinding: finding
+          ? {
+              checkId: finding.checkId,
+              title: finding.title,
+              status: finding.status,
+              message: finding.message,
+              resolvedBy: finding.status === 'fails' || finding.status === 'tight' ? (resolutions.get(finding.checkId) ?? null) : null,
+            }
+          : null,
       };
     }),
   });

@@ -4367,6 +4367,8 @@ export interface components {
             /** @enum {string} */
             status: "ok" | "tight" | "fails" | "unknown";
             message: string;
+            /** @description For a shortfall the locked parts plan resolves: the part or operation that resolves it (measure after fitting); null otherwise */
+            resolvedBy: string | null;
         };
         RecordedCheckResponseDto: {
             id: string;

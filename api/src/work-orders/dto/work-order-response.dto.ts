@@ -21,6 +21,12 @@ export class FitFindingRefResponseDto {
   @ApiProperty() title: string;
   @ApiProperty({ enum: CHECK_STATUSES }) status: CheckStatus;
   @ApiProperty() message: string;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'For a shortfall the locked parts plan resolves: the part or operation that resolves it (measure after fitting); null otherwise',
+  })
+  resolvedBy: string | null;
 }
 
 export class RecordedCheckResponseDto {

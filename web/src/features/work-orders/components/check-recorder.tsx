@@ -29,6 +29,8 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
   const [value, setValue] = useState<number | null>(null);
   const [lengthText, setLengthText] = useState('');
   const [note, setNote] = useState('');
+  /** "Not right" was pressed with an empty note: the note box asks what is wrong. */
+  const [noteWanted, setNoteWanted] = useState(false);
   const latest = check.latest;
   const isLength = isLengthCheck(check);
   const reading = readCheckLength(lengthText, system);
@@ -41,10 +43,18 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
           setValue(null);
           setLengthText('');
           setNote('');
+          setNoteWanted(false);
         },
         onError: (error) => void message.error(getErrorMessage(error)),
       },
     );
+  const notRight = () => {
+    if (!note.trim()) {
+      setNoteWanted(true);
+      return;
+    }
+    send({ passed: false });
+  };
   return (
     <div className="work-order-check" data-testid={`check-${check.key}`} data-result={latest?.result ?? 'open'}>
       <Flex justify="space-between" gap={8} wrap>
@@ -66,7 +76,9 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
       )}
       {check.fitFinding && (
         <Typography.Text type="secondary" style={{ display: 'block' }} data-testid="check-fit-finding">
-          Fit check, {check.fitFinding.title}: {FIT_STATUS_WORDS[check.fitFinding.status]}. {renderText(textParts(check.fitFinding.message), system)}
+          {check.fitFinding.resolvedBy
+            ? `Fit check, ${check.fitFinding.title}: resolved in the plan by ${check.fitFinding.resolvedBy}: measure after fitting.`
+            : `Fit check, ${check.fitFinding.title}: ${FIT_STATUS_WORDS[check.fitFinding.status]}. ${renderText(textParts(check.fitFinding.message), system)}`}
         </Typography.Text>
       )}
       {latest && (
@@ -112,16 +124,41 @@ export function CheckRecorder({ workOrderId, check, canRecord }: CheckRecorderPr
             </>
           ) : (
             <>
-              <Button type="primary" loading={record.isPending} onClick={() => send({ passed: true })}>
+              {/* solid only for what is recorded: the buttons never contradict the badge */}
+              <Button
+                type={latest?.result === 'pass' ? 'primary' : 'default'}
+                aria-pressed={latest?.result === 'pass'}
+                loading={record.isPending}
+                onClick={() => send({ passed: true })}
+              >
                 Done as described
               </Button>
-              <Button danger loading={record.isPending} onClick={() => send({ passed: false })}>
+              <Button
+                danger
+                type={latest?.result === 'fail' ? 'primary' : 'default'}
+                aria-pressed={latest?.result === 'fail'}
+                loading={record.isPending}
+                onClick={notRight}
+              >
                 Not right
               </Button>
             </>
           )}
-          <Input aria-label={`Note for ${check.label}`} placeholder="Note (optional)" value={note} onChange={(event) => setNote(event.target.value)} maxLength={500} style={{ flex: '1 1 160px' }} />
+          <Input
+            aria-label={`Note for ${check.label}`}
+            placeholder={check.measured ? 'Note (optional)' : 'Note (say what is wrong when not right)'}
+            value={note}
+            status={noteWanted && !note.trim() ? 'error' : undefined}
+            onChange={(event) => setNote(event.target.value)}
+            maxLength={500}
+            style={{ flex: '1 1 160px' }}
+          />
         </div>
+      )}
+      {canRecord && noteWanted && !note.trim() && (
+        <Typography.Text type="danger" role="alert" style={{ display: 'block', fontSize: 13 }} data-testid="check-note-wanted">
+          Say in the note what is not right (what you found and where), then press Not right again.
+        </Typography.Text>
       )}
       {canRecord && check.measured && isLength && reading.ok !== null && (
         <Typography.Text type={reading.ok ? 'secondary' : 'danger'} role={reading.ok ? undefined : 'alert'} style={{ display: 'block', fontSize: 13 }} data-testid="check-reading">

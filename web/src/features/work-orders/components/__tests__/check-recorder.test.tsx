@@ -22,6 +22,7 @@ const gap: WorkCheck = {
     title: 'Oil pan to crossmember',
     status: 'ok',
     message: 'The oil pan clears the front crossmember by 49.4 mm (1.94 in); at least 12.7 mm (0.50 in) is required: 36.7 mm (1.44 in) to spare.',
+    resolvedBy: null,
   },
   latest: { id: 'rec-1', result: 'fail', value: 7.5, note: '', recordedByName: 'Dara Quill', recordedAt: '2026-12-03T09:15:00.000Z' },
   recordings: 1,
@@ -76,5 +77,80 @@ describe('a length check in the person’s units', () => {
     expect(screen.getByText('Allowed at least 12.7 mm')).toBeInTheDocument();
     expect(screen.getByTestId('check-result')).toHaveTextContent('Failed · 7.5 mm');
     expect(screen.getByTestId('check-fit-finding')).toHaveTextContent('by 49.4 mm; at least 12.7 mm is required');
+  });
+});
+
+const welds: WorkCheck = {
+  key: 'crossmember.welds',
+  label: 'Crossmember welds inspected',
+  measured: false,
+  unit: null,
+  min: null,
+  max: null,
+  range: null,
+  rangeFrom: null,
+  fitFinding: null,
+  latest: null,
+  recordings: 0,
+  photos: [],
+};
+
+describe('a fit finding the plan resolves', () => {
+  it('says what in the plan resolves it and to measure after fitting, not the bare verdict of the truck as it came', () => {
+    // Common practice (no published source): a clearance fixed by a part is measured again with the part fitted.
+    const resolved: WorkCheck = {
+      ...gap,
+      latest: null,
+      recordings: 0,
+      fitFinding: {
+        checkId: 'envelope.sump-crossmember',
+        title: 'Oil pan to crossmember',
+        status: 'fails',
+        message: 'The oil pan runs 74.4 mm (2.93 in) into the front crossmember.',
+        resolvedBy: 'the part TR-4410 Rear-sump swap pan',
+      },
+    };
+    renderWithApp(<CheckRecorder workOrderId="wo-1" check={resolved} canRecord />);
+    const words = screen.getByTestId('check-fit-finding');
+    expect(words).toHaveTextContent('Fit check, Oil pan to crossmember: resolved in the plan by the part TR-4410 Rear-sump swap pan: measure after fitting.');
+    expect(words).not.toHaveTextContent('does not fit');
+  });
+});
+
+describe('a confirmation that is not right', () => {
+  let posted: unknown[];
+  beforeEach(() => {
+    posted = [];
+    vi.spyOn(apiClient, 'post').mockImplementation(async (_url: string, body: unknown) => {
+      posted.push(body);
+      return { data: { id: 'wo-1', steps: [] } };
+    });
+  });
+  afterEach(() => vi.restoreAllMocks());
+
+  it('asks what is wrong before it records a failure, and sends the note with it', async () => {
+    // Common practice (no published source): a failed weld inspection is written up with what was found and where.
+    renderWithApp(<CheckRecorder workOrderId="wo-1" check={welds} canRecord />);
+    fireEvent.click(screen.getByRole('button', { name: 'Not right' }));
+    expect(screen.getByTestId('check-note-wanted')).toHaveTextContent('Say in the note what is not right');
+    expect(posted).toEqual([]);
+    fireEvent.change(screen.getByRole('textbox', { name: /^Note for / }), { target: { value: 'Undercut on the left gusset weld' } });
+    expect(screen.queryByTestId('check-note-wanted')).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Not right' }));
+    await vi.waitFor(() => expect(posted).toEqual([{ checkKey: welds.key, passed: false, note: 'Undercut on the left gusset weld' }]));
+  });
+
+  it('shows the recorded result on the buttons: neither solid while open, only "Not right" once failed', () => {
+    const { unmount } = renderWithApp(<CheckRecorder workOrderId="wo-1" check={welds} canRecord />);
+    expect(screen.getByRole('button', { name: 'Done as described' })).toHaveAttribute('aria-pressed', 'false');
+    expect(screen.getByRole('button', { name: 'Done as described' })).not.toHaveClass('ant-btn-variant-solid');
+    unmount();
+    const failed = { ...welds, latest: { id: 'rec-2', result: 'fail' as const, value: null, note: 'Undercut', recordedByName: 'Dara Quill', recordedAt: '2026-12-03T09:15:00.000Z' }, recordings: 1 };
+    renderWithApp(<CheckRecorder workOrderId="wo-1" check={failed} canRecord />);
+    expect(screen.getByTestId('check-result')).toHaveTextContent('Failed');
+    expect(screen.getByRole('button', { name: 'Done as described' })).toHaveAttribute('aria-pressed', 'false');
+    expect(screen.getByRole('button', { name: 'Done as described' })).not.toHaveClass('ant-btn-variant-solid');
+    expect(screen.getByRole('button', { name: 'Not right' })).toHaveAttribute('aria-pressed', 'true');
+    expect(screen.getByRole('button', { name: 'Not right' })).toHaveClass('ant-btn-variant-solid');
   });
 });
