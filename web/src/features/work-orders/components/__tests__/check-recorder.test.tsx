@@ -29,14 +29,20 @@ const gap: WorkCheck = {
   photos: [],
 };
 
+/** Every body the recorder posts, answered with an empty work order. */
+function recordPosts(): unknown[] {
+  const posted: unknown[] = [];
+  vi.spyOn(apiClient, 'post').mockImplementation(async (_url: string, body: unknown) => {
+    posted.push(body);
+    return { data: { id: 'wo-1', steps: [] } };
+  });
+  return posted;
+}
+
 describe('a length check in the person’s units', () => {
   let posted: unknown[];
   beforeEach(() => {
-    posted = [];
-    vi.spyOn(apiClient, 'post').mockImplementation(async (_url: string, body: unknown) => {
-      posted.push(body);
-      return { data: { id: 'wo-1', steps: [] } };
-    });
+    posted = recordPosts();
   });
   afterEach(() => {
     vi.restoreAllMocks();
@@ -80,20 +86,8 @@ describe('a length check in the person’s units', () => {
   });
 });
 
-const welds: WorkCheck = {
-  key: 'crossmember.welds',
-  label: 'Crossmember welds inspected',
-  measured: false,
-  unit: null,
-  min: null,
-  max: null,
-  range: null,
-  rangeFrom: null,
-  fitFinding: null,
-  latest: null,
-  recordings: 0,
-  photos: [],
-};
+/** A confirmation: no unit, no range. */
+const welds: WorkCheck = { ...gap, key: 'crossmember.welds', label: 'Crossmember welds inspected', measured: false, unit: null, min: null, range: null, fitFinding: null, latest: null, recordings: 0 };
 
 describe('a fit finding the plan resolves', () => {
   it('says what in the plan resolves it and to measure after fitting, not the bare verdict of the truck as it came', () => {
@@ -120,11 +114,7 @@ describe('a fit finding the plan resolves', () => {
 describe('a confirmation that is not right', () => {
   let posted: unknown[];
   beforeEach(() => {
-    posted = [];
-    vi.spyOn(apiClient, 'post').mockImplementation(async (_url: string, body: unknown) => {
-      posted.push(body);
-      return { data: { id: 'wo-1', steps: [] } };
-    });
+    posted = recordPosts();
   });
   afterEach(() => vi.restoreAllMocks());
 
