@@ -350,6 +350,22 @@ describe('fit reports', () => {
     expect(run.body.inputs.spec.oilPan).toBeUndefined();
   });
 
+  it('runs without a planned rev limit: the checks that read it say they are not checked, the rest are checked', async () => {
+    const project = await t.http.get(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.owner)).expect(200);
+    const revLimitRpm = project.body.goals.revLimitRpm as number;
+    await t.http.patch(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.owner)).send({ goals: { revLimitRpm: null } }).expect(200);
+    try {
+      const run = await t.http.post(`/api/projects/${RIDGEBACK}/fit-reports`).set(...bearer(demo.owner));
+      expect(run.status).toBe(201);
+      // Common practice (no published source): oil pump speed is crank (or half crank) speed at the rev limit.
+      expect(finding(run.body.report, 'oiling.pump-speed')).toMatchObject({ status: 'unknown', missing: ['goals.revLimitRpm'] });
+      expect(finding(run.body.report, SUMP).status).not.toBe('unknown');
+      expect(run.body.inputs.spec.goals.revLimitRpm).toBeUndefined();
+    } finally {
+      await t.http.patch(`/api/projects/${RIDGEBACK}`).set(...bearer(demo.owner)).send({ goals: { revLimitRpm } }).expect(200);
+    }
+  });
+
   it("uses the shop's threshold overrides (owner sets them)", async () => {
     expect((await t.http.put('/api/fit-settings').set(...bearer(demo.estimator)).send({ overrides: { minGapBelowMm: 30 } })).status).toBe(403);
     const bad = await t.http.put('/api/fit-settings').set(...bearer(demo.owner)).send({ overrides: { minGapBelowMm: -3, shiny: 1 } });

@@ -171,12 +171,12 @@ export class FitSpecBuilderService {
       notes.push(`No target power in the project's goals: used the engine's rated ${engine.ratedPowerKw} kW.`);
     }
     if (targetPowerKw === null) needed.push("set the target power in the project's goals (the engine has no rated power)");
-    if (project.goalRevLimitRpm === null) needed.push("set the planned rev limit in the project's goals");
-    if (targetPowerKw === null || project.goalRevLimitRpm === null) return null;
+    // No rev limit is no reason to stop: the checks that read it (oil pump and driveshaft speed) say they are not checked.
+    if (targetPowerKw === null) return null;
     return {
       use: project.goalUse,
       targetPowerKw,
-      revLimitRpm: project.goalRevLimitRpm,
+      ...(project.goalRevLimitRpm !== null && { revLimitRpm: project.goalRevLimitRpm }),
       ...(selection?.continuousPowerKw != null && { continuousPowerKw: selection.continuousPowerKw }),
       ...(selection?.topSpeedKph != null && { topSpeedKph: selection.topSpeedKph }),
       ...(selection?.tireDiameterMm != null && { tireDiameterMm: selection.tireDiameterMm }),

@@ -285,7 +285,8 @@ export interface SwapGoals {
   targetPowerKw: number;
   /** Power held for long periods (towing, climbing); the radiator is sized for this. */
   continuousPowerKw?: number;
-  revLimitRpm: number;
+  /** The planned rev limit; without it the checks that read it (oil pump speed, driveshaft speed) are not checked. */
+  revLimitRpm?: number;
   topSpeedKph?: number;
   tireDiameterMm?: number;
   axleRatio?: number;

@@ -3145,7 +3145,8 @@ export interface components {
             targetPowerKw: number;
             /** @description Power held for long periods; the radiator is sized for this */
             continuousPowerKw?: number;
-            revLimitRpm: number;
+            /** @description The planned rev limit; without it the oil pump and driveshaft speed checks are not checked */
+            revLimitRpm?: number;
             topSpeedKph?: number;
             tireDiameterMm?: number;
             axleRatio?: number;

@@ -36,7 +36,7 @@ export class SwapGoalsDto implements SwapGoals {
   @OneOf(SWAP_USES) use: (typeof SWAP_USES)[number];
   @NumberIn(1, 2000) targetPowerKw: number;
   @OptionalNumberIn(1, 2000, 'Power held for long periods; the radiator is sized for this') continuousPowerKw?: number;
-  @NumberIn(500, 12000) revLimitRpm: number;
+  @OptionalNumberIn(500, 12000, 'The planned rev limit; without it the oil pump and driveshaft speed checks are not checked') revLimitRpm?: number;
   @OptionalNumberIn(10, 400) topSpeedKph?: number;
   @OptionalNumberIn(300, 1600) tireDiameterMm?: number;
   @OptionalNumberIn(1, 8) axleRatio?: number;

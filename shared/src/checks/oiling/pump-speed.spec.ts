@@ -33,4 +33,12 @@ describe('oiling.pump-speed', () => {
   it('unknown without a pump', () => {
     expect(run(specWith((s) => delete s.oilPump))).toMatchObject({ status: 'unknown', missing: ['oilPump'] });
   });
+
+  it('not checked without a planned rev limit, saying so', () => {
+    // Common practice (no published source): pump speed is crank (or half crank) speed at the rev limit; with no rev limit
+    // there is no speed to compare against the pump's rating.
+    const finding = run(specWith((s) => delete s.goals.revLimitRpm));
+    expect(finding).toMatchObject({ status: 'unknown', missing: ['goals.revLimitRpm'] });
+    expect(finding.message).toBe('Cannot check oil pump speed at the rev limit: missing the rev limit.');
+  });
 });

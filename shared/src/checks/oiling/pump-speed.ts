@@ -20,15 +20,17 @@ export function statedPumpLimitRpm(speedLimitRpm: number): number | null {
 export function checkOilPumpSpeed({ spec, settings }: CheckContext): Finding {
   const pump = spec.oilPump;
   if (!pump) return unknownFinding(FIELDS, ['oilPump']);
+  const revLimitRpm = spec.goals.revLimitRpm;
+  if (revLimitRpm === undefined) return unknownFinding(FIELDS, ['goals.revLimitRpm']);
   const drive = spec.engine.oilPumpDrive;
-  const pumpRpm = oilPumpRpm(spec.goals.revLimitRpm, drive);
+  const pumpRpm = oilPumpRpm(revLimitRpm, drive);
   const stated = statedPumpLimitRpm(pump.speedLimitRpm);
   const limitRpm = stated ?? settings.stockOilPumpLimitRpm;
   const margin = limitRpm - pumpRpm;
   const status = statusFromMargin(margin, settings.oilPumpTightBandRpm);
   const driveText = drive === 'crank' ? 'at crank speed' : 'at half crank speed from the cam';
   const limitText = stated === null ? `the stock-pump limit of ${Math.round(limitRpm)} rpm` : `its rating of ${Math.round(limitRpm)} rpm`;
-  const message = `The ${pump.name} turns ${driveText}: ${Math.round(pumpRpm)} rpm at the ${Math.round(spec.goals.revLimitRpm)} rpm rev limit, against ${limitText}.`;
+  const message = `The ${pump.name} turns ${driveText}: ${Math.round(pumpRpm)} rpm at the ${Math.round(revLimitRpm)} rpm rev limit, against ${limitText}.`;
   const inlet = spec.oilPickup?.pumpInlet ?? pump.inlet;
   const partIds = (spec.candidates?.oilPumps ?? [])
     .filter((p) => p.inlet === inlet && (statedPumpLimitRpm(p.speedLimitRpm) ?? 0) >= pumpRpm + settings.oilPumpTightBandRpm)
