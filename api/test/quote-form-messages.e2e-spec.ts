@@ -31,24 +31,47 @@ describe('quote forms: refusals a person can act on', () => {
   it('names the line in words when its hours are refused, not by its place in the body', async () => {
     const negative = await patch({ lines: [LINES[0], { ...LINES[1], hours: -3 }] });
     expect(negative.status).toBe(400);
-    expect(negative.body.message).toBe('Line 2 (Notch crossmember): hours must be 0 or more');
-    expect(negative.body.details).toEqual(['Line 2 (Notch crossmember): hours must be 0 or more']);
+    expect(negative.body.message).toBe('Line 2 (Notch crossmember): Hours must be 0 or more');
+    expect(negative.body.details).toEqual(['Line 2 (Notch crossmember): Hours must be 0 or more']);
 
     // Common practice (no published source): labor is quoted to a tenth of an hour.
     const quarter = await patch({ lines: [{ ...LINES[1], hours: 2.25 }] });
     expect(quarter.status).toBe(400);
-    expect(quarter.body.message).toBe('Line 1 (Notch crossmember): hours are quoted to a tenth of an hour, for example 2.5');
+    expect(quarter.body.message).toBe('Line 1 (Notch crossmember): Hours are quoted to a tenth of an hour, for example 2.5');
     expect(JSON.stringify(quarter.body)).not.toMatch(/lines\.\d/);
 
     // A long description is shortened in the name; a line without one is named by its place.
     const long = 'Fabricate and weld transmission crossmember brackets to the frame rails';
     const unnamed = await patch({ lines: [{ kind: 'labor', description: long, hours: 1000 }, { kind: 'labor', description: '', hours: 1 }] });
     expect(unnamed.status).toBe(400);
-    expect(unnamed.body.details).toContain('Line 1 (Fabricate and weld transmission crossmember…): hours must be at most 999');
+    expect(unnamed.body.details).toContain('Line 1 (Fabricate and weld transmission crossmember…): Hours must be at most 999');
     expect(unnamed.body.details).toContain('Line 2: each line needs a description');
     // nothing was written
     const read = await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.estimator));
     expect(read.body.revision.lines.map((line: { hours: number | null }) => line.hours)).toEqual([null, 3.5]);
+  });
+
+  it("words a line's price, cost, markup and quantity limits as the shop reads them, with the line's name in front", async () => {
+    const lines = [
+      { kind: 'part', description: 'Rear-sump oil pan', quantity: 1, pricing: 'list', unitPriceCents: 99_999_999_999 },
+      { kind: 'part', description: 'Motor mount kit', quantity: 20_000, pricing: 'cost-plus', unitCostCents: -5, markupPercent: 1500 },
+      { kind: 'part', description: 'Header gasket', quantity: 0.5, pricing: 'list', unitPriceCents: 12.5 },
+    ];
+    const refused = await patch({ lines });
+    expect(refused.status).toBe(400);
+    expect(refused.body.code).toBe('validation_failed');
+    // Common practice (no published source): a person reads an amount in money and a count in whole units, never as field names.
+    expect(refused.body.details).toEqual(
+      expect.arrayContaining([
+        'Line 1 (Rear-sump oil pan): Unit price must be at most 100,000,000.00',
+        'Line 2 (Motor mount kit): Quantity must be at most 10,000',
+        'Line 2 (Motor mount kit): Unit cost must be 0.00 or more',
+        'Line 2 (Motor mount kit): Markup must be at most 1,000%',
+        'Line 3 (Header gasket): Quantity must be a whole number, for example 2',
+        'Line 3 (Header gasket): Unit price must be a whole number of cents',
+      ]),
+    );
+    expect(JSON.stringify(refused.body)).not.toMatch(/unitPriceCents|unitCostCents|markupPercent|greater than|less than|10000000000/);
   });
 
   it('refuses a past last valid day on save with the date written as on screen, and accepts today', async () => {

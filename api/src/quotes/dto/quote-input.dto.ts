@@ -22,6 +22,11 @@ import { Trim } from '../../common/decorators/trim.decorator';
 import { NamedInMessages, shortText } from '../../common/validation/item-names';
 
 const MAX_CENTS = 100_000_000_00; // 100 million in the shop's currency: beyond any swap job
+/** The largest amount as a person reads it; the DTO does not know the shop's currency, so no sign. */
+const MAX_AMOUNT_WORDS = '100,000,000.00';
+const MAX_QUANTITY = 10_000;
+const MAX_HOURS = 999;
+const MAX_MARKUP_PERCENT = 1000;
 
 /** "Line 1 (Notch crossmember)", as the estimator sees the line in the list. */
 @NamedInMessages((line, index) => {
@@ -70,9 +75,9 @@ export class QuoteLineInputDto {
 
   @ApiPropertyOptional({ description: 'Part lines: whole units', default: 1 })
   @IsOptionalDefined()
-  @IsInt({ message: 'quantity must be a whole number' })
-  @Min(1)
-  @Max(10000)
+  @IsInt({ message: 'Quantity must be a whole number, for example 2' })
+  @Min(1, { message: 'Quantity must be at least 1' })
+  @Max(MAX_QUANTITY, { message: 'Quantity must be at most 10,000' })
   quantity?: number;
 
   @ApiPropertyOptional({ enum: PART_PRICINGS, default: 'list' })
@@ -82,30 +87,30 @@ export class QuoteLineInputDto {
 
   @ApiPropertyOptional({ description: 'Part lines priced from the list: the unit price in cents' })
   @IsOptionalDefined()
-  @IsInt({ message: 'unitPriceCents must be a whole number of cents' })
-  @Min(0)
-  @Max(MAX_CENTS)
+  @IsInt({ message: 'Unit price must be a whole number of cents' })
+  @Min(0, { message: 'Unit price must be 0.00 or more' })
+  @Max(MAX_CENTS, { message: `Unit price must be at most ${MAX_AMOUNT_WORDS}` })
   unitPriceCents?: number;
 
   @ApiPropertyOptional({ description: 'Part lines priced from cost: the unit cost in cents' })
   @IsOptionalDefined()
-  @IsInt({ message: 'unitCostCents must be a whole number of cents' })
-  @Min(0)
-  @Max(MAX_CENTS)
+  @IsInt({ message: 'Unit cost must be a whole number of cents' })
+  @Min(0, { message: 'Unit cost must be 0.00 or more' })
+  @Max(MAX_CENTS, { message: `Unit cost must be at most ${MAX_AMOUNT_WORDS}` })
   unitCostCents?: number;
 
   @ApiPropertyOptional({ description: 'Part lines priced from cost: markup in percent' })
   @IsOptionalDefined()
-  @IsNumber({ maxDecimalPlaces: 4 })
-  @Min(0)
-  @Max(1000)
+  @IsNumber({ maxDecimalPlaces: 4 }, { message: 'Markup must be a percentage with at most 4 decimals, for example 35' })
+  @Min(0, { message: 'Markup must be 0% or more' })
+  @Max(MAX_MARKUP_PERCENT, { message: 'Markup must be at most 1,000%' })
   markupPercent?: number;
 
   @ApiPropertyOptional({ description: 'Labor lines: hours to a tenth' })
   @IsOptionalDefined()
-  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'hours are quoted to a tenth of an hour, for example 2.5' })
-  @Min(0, { message: 'hours must be 0 or more' })
-  @Max(999, { message: 'hours must be at most 999' })
+  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'Hours are quoted to a tenth of an hour, for example 2.5' })
+  @Min(0, { message: 'Hours must be 0 or more' })
+  @Max(MAX_HOURS, { message: 'Hours must be at most 999' })
   hours?: number;
 }
 
