@@ -104,7 +104,12 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
   const waiting = paying && q.depositState !== 'paid';
   const submitCard = () => {
     setPayError(null);
-    const method = TEST_CARDS[card.replace(/\s/g, '')];
+    const digits = card.replace(/\s/g, '');
+    if (!digits) {
+      setPayError('Enter a card number.');
+      return;
+    }
+    const method = TEST_CARDS[digits];
     if (!method) {
       setPayError('That card number is not one of the test cards of the local payment service.');
       return;

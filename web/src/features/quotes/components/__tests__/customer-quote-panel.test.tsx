@@ -46,6 +46,19 @@ describe('CustomerQuotePanel (the signed-in customer answers a sent quote)', () 
     expect(await screen.findByText(/waiting for the payment service to confirm it/)).toBeInTheDocument();
   });
 
+  it('asks for a card number when the field is empty, and sends nothing', async () => {
+    const post = vi.spyOn(apiClient, 'post');
+    renderPanel(quoteStub({ sent: true }, { ...SENT, status: 'approved', depositState: 'due' }));
+    await userEvent.click(await screen.findByRole('button', { name: 'Pay the deposit' }));
+    expect(await screen.findByText('Enter a card number.')).toBeInTheDocument();
+    expect(screen.queryByText(/not one of the test cards/)).not.toBeInTheDocument();
+    // blanks only count as empty too
+    await userEvent.type(screen.getByLabelText('Card number (local test payment service)'), '   ');
+    await userEvent.click(screen.getByRole('button', { name: 'Pay the deposit' }));
+    expect(await screen.findByText('Enter a card number.')).toBeInTheDocument();
+    expect(post).not.toHaveBeenCalled();
+  });
+
   it('once paid, states the amount received and that the rest is not charged here', async () => {
     renderPanel(quoteStub({ sent: true }, { ...SENT, status: 'approved', depositState: 'paid', depositPaidAt: '2026-12-03T11:00:00.000Z' }));
     expect(await screen.findByText(/Deposit paid\. Thank you/)).toBeInTheDocument();
