@@ -109,6 +109,8 @@ describe('labor operations and quotes', () => {
     it('sends: the customer gets the PDF (totals, rounding rule, cautions) and a signed link', async () => {
       const created = await t.http.post(`/api/projects/${RIDGEBACK}/quotes`).set(...bearer(demo.estimator)).send({ lines: HAND_LINES, validUntil: '2099-01-15' });
       quoteId = created.body.id;
+      // The send confirmation names where the e-mail goes before anything is sent.
+      expect(created.body).toMatchObject({ customerEmail: CUSTOMER_EMAIL, sentRevision: null });
       expect((await t.http.get(`/api/quotes/${quoteId}`).set(...bearer(demo.customer))).status).toBe(404);
       const before = await lastMailId();
       const sent = await t.http.post(`/api/quotes/${quoteId}/send`).set(...bearer(demo.estimator));

@@ -90,6 +90,12 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
     await page.getByRole('button', { name: 'Back to the project' }).click();
 
     await item.getByRole('button', { name: 'Send to customer' }).click();
+    // Sending e-mails the customer: it asks first, naming where the e-mail goes, the total and the deposit.
+    const sendConfirm = page.locator('.ant-popconfirm').filter({ hasText: `Send revision 1 of ${quoteLabel} to` });
+    await sendConfirm.waitFor({ state: 'visible' });
+    await expectText(sendConfirm, /It is e-mailed to .+ \(\S+@\S+\) with the PDF: total \$[\d,]+\.\d\d, deposit on approval \$[\d,]+\.\d\d\./);
+    await saveScreenshot(page, 'estimator-quote-send-confirm');
+    await sendConfirm.getByRole('button', { name: 'Send', exact: true }).click();
     await expectText(item, /Awaiting the customer/);
     await expectText(page.locator('[aria-label="Project stage"]'), /Quote sent/);
     await saveScreenshot(page, 'estimator-quote-sent');
@@ -109,6 +115,9 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
     await page.setViewportSize({ width: 1366, height: 900 });
     const resent = page.waitForResponse((r) => /\/quotes\/[^/]+\/send$/.test(r.url()));
     await page.getByRole('button', { name: 'Send revision 2 to the customer' }).click();
+    const resendConfirm = page.locator('.ant-popconfirm').filter({ hasText: `Send revision 2 of ${quoteLabel} to` });
+    await resendConfirm.waitFor({ state: 'visible' });
+    await resendConfirm.getByRole('button', { name: 'Send', exact: true }).click();
     expect((await resent).status()).toBe(200);
     await expectText(page.getByTestId('quote-revision'), /Revision 2 \(sent, frozen\)/);
     await page.getByRole('button', { name: 'Back to the project' }).click();

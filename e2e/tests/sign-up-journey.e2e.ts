@@ -203,13 +203,21 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     await page.getByRole('button', { name: 'Add line' }).click();
     expect((await saved).status()).toBe(200);
 
+    // The budget page says labor is counted as the builder's own time in a new garage (no labor rate yet).
+    await expectText(page.getByTestId('own-time-labor'), /Labor is counted at \$0 per hour: [\d.]+ h of your own time/);
     await page.getByRole('button', { name: 'Start my build' }).click();
-    const confirm = page.locator('.ant-popconfirm').filter({ hasText: `Start your build from ${draft.label}?` });
+    const confirm = page.getByRole('dialog', { name: `Start your build from ${draft.label}?` });
     await confirm.waitFor({ state: 'visible' });
     await expectText(confirm, /frozen as the budget of your build, and the work order opens[\s\S]*No e-mail, no deposit/);
+    // Before freezing, what is still open on the budget, each with where to fix it: nothing was measured on this truck.
+    const open = confirm.getByTestId('own-build-open-items');
+    await expectText(open, /Labor is counted at \$0 per hour: [\d.]+ h of your own time/);
+    await expectText(open, /The chassis has not been measured/);
+    await expectVisible(open.getByRole('link', { name: /set a labor rate in shop settings/ }));
+    await expectVisible(open.getByRole('link', { name: 'Measure the chassis' }));
     await saveScreenshot(page, 'sign-up-start-own-build-confirm');
     const started = page.waitForResponse((r) => /\/start-own-build$/.test(r.url()));
-    await confirm.getByRole('button', { name: 'Start my build' }).click();
+    await confirm.getByRole('button', { name: 'Start anyway' }).click();
     expect((await started).status()).toBe(200);
     await page.waitForURL(/\/work-orders\/[^/]+$/);
     await expectText(page.getByRole('heading', { level: 2 }), new RegExp(`Work order`));

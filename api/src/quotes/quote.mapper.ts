@@ -67,6 +67,7 @@ export function mapQuote(view: QuoteView, viewer: QuoteViewer): QuoteResponseDto
     projectId: project.id,
     projectTitle: project.title,
     customerName: project.customer?.name ?? null,
+    customerEmail: project.customer?.email ?? null,
     forMyself: viewer !== 'link' && isOwnProject(project, viewer),
     label: quoteLabel(quote),
     status: view.status,

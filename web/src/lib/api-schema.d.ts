@@ -4166,6 +4166,8 @@ export interface components {
             projectId: string;
             projectTitle: string;
             customerName: string | null;
+            /** @description Where sending the quote e-mails it; null when the customer has no e-mail address (sending is refused) */
+            customerEmail: string | null;
             /** @description True when the project is the signed-in member's own truck (filed under their own customer record): there is no customer to send the quote to, and sending it is refused */
             forMyself: boolean;
             /** @example Q-0007 */

@@ -72,6 +72,8 @@ export class QuoteResponseDto {
   @ApiProperty() projectId: string;
   @ApiProperty() projectTitle: string;
   @ApiProperty({ type: String, nullable: true }) customerName: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Where sending the quote e-mails it; null when the customer has no e-mail address (sending is refused)' })
+  customerEmail: string | null;
   @ApiProperty({
     description:
       "True when the project is the signed-in member's own truck (filed under their own customer record): there is no customer to send the quote to, and sending it is refused",

@@ -9,6 +9,7 @@ import { useSendQuote } from '../api/send-quote';
 import { formatDate } from '@/lib/dates';
 import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+import { SendQuoteConfirm } from './send-quote-confirm';
 import { StartOwnBuildButton } from './start-own-build-button';
 
 export interface ProjectQuotesCardProps {
@@ -68,20 +69,20 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
                 </Button>
               ),
               canWrite && !quote.forMyself && quote.status !== 'approved' && quote.latestRevision !== quote.sentRevision && (
-                <Button
+                <SendQuoteConfirm
                   key="send"
-                  type="primary"
-                  size="small"
-                  loading={send.isPending}
-                  onClick={() =>
+                  quote={quote}
+                  onConfirm={() =>
                     send.mutate(quote.id, {
                       onSuccess: (sent) => void message.success(`Quote ${sent.label} is on its way to ${sent.customerName ?? 'the customer'}: the e-mail goes out in a moment`),
                       onError: (error) => void message.error(getErrorMessage(error)),
                     })
                   }
                 >
-                  Send to customer
-                </Button>
+                  <Button type="primary" size="small" loading={send.isPending}>
+                    Send to customer
+                  </Button>
+                </SendQuoteConfirm>
               ),
               canWrite && quote.forMyself && quote.status !== 'approved' && <StartOwnBuildButton key="start-build" quote={quote} size="small" />,
             ].filter(Boolean)}

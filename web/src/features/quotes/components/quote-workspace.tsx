@@ -1,7 +1,7 @@
 import { formatMoney } from '@swapwright/shared';
 import { Alert, Button, Card, Select, Space, Typography } from 'antd';
 import { useState } from 'react';
-import { useNavigate } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { toProjectDetail } from '@/config/paths';
@@ -13,12 +13,14 @@ import { useQuoteSettings } from '../api/get-quote-settings';
 import { useSendQuote } from '../api/send-quote';
 import { useUpdateQuote } from '../api/update-quote';
 import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
+import { ownTimeLaborSentence, PAID_HELP_LINK } from '../own-build-open-items';
 import type { Quote } from '../types';
 import { QuoteLineEditor } from './quote-line-editor';
 import { QuoteLines } from './quote-lines';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 import { QuoteTermsDrawer } from './quote-terms-drawer';
 import { RevisionCompare } from './revision-compare';
+import { SendQuoteConfirm } from './send-quote-confirm';
 import { StartOwnBuildButton } from './start-own-build-button';
 
 export interface QuoteWorkspaceProps {
@@ -54,6 +56,7 @@ export function QuoteWorkspace({ quoteId, canWrite, timeZone }: QuoteWorkspacePr
   const editable = canWrite && !approved && !revision.sent && shownNumber === undefined;
   const canSend = canWrite && !quote.forMyself && !approved && !revision.sent && shownNumber === undefined;
   const canStartBuild = canWrite && quote.forMyself && !approved && shownNumber === undefined;
+  const ownTimeLabor = ownTimeLaborSentence(revision);
 
   const startRevision = () =>
     update.mutate({}, { onSuccess: (next) => notifySuccess({ title: `Revision ${next.latestRevision} started`, description: 'Change its lines, then send it.' }) });
@@ -77,15 +80,32 @@ export function QuoteWorkspace({ quoteId, canWrite, timeZone }: QuoteWorkspacePr
           <>
             <Button onClick={() => navigate(toProjectDetail(quote.projectId))}>Back to the project</Button>
             {canSend && (
-              <Button type="primary" loading={send.isPending} onClick={sendQuote}>
-                Send revision {revision.number} to the customer
-              </Button>
+              <SendQuoteConfirm quote={quote} onConfirm={sendQuote}>
+                <Button type="primary" loading={send.isPending}>
+                  Send revision {revision.number} to the customer
+                </Button>
+              </SendQuoteConfirm>
             )}
             {canStartBuild && <StartOwnBuildButton quote={quote} />}
           </>
         }
       />
-      {canWrite && quote.forMyself && !approved && <Alert type="info" showIcon title={OWN_TRUCK_QUOTE_NOTE} style={{ marginBottom: 16 }} data-testid="own-truck-quote-note" />}
+      {canWrite && quote.forMyself && !approved && (
+        <Alert
+          type="info"
+          showIcon
+          title={OWN_TRUCK_QUOTE_NOTE}
+          description={
+            ownTimeLabor && (
+              <span data-testid="own-time-labor">
+                {ownTimeLabor} <Link to={PAID_HELP_LINK.to}>{PAID_HELP_LINK.label}</Link>.
+              </span>
+            )
+          }
+          style={{ marginBottom: 16 }}
+          data-testid="own-truck-quote-note"
+        />
+      )}
       {send.isError && <Alert type="error" showIcon title={getErrorMessage(send.error)} style={{ marginBottom: 16 }} />}
       <Card
         data-testid="quote-revision"

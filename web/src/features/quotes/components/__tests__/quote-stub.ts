@@ -28,6 +28,7 @@ export function quoteStub(overrides: Partial<Quote['revision']> = {}, quote: Par
     projectId: 'project-1',
     projectTitle: 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap',
     customerName: 'Marlo Penhallow',
+    customerEmail: 'marlo@penhallow.test',
     forMyself: false,
     label: 'Q-0007',
     status: 'drafting',
