@@ -30,7 +30,7 @@ const OTHER_RANK = 2;
 
 /**
  * Each problem with the path of its field. Inside a list item whose class names it (`@NamedInMessages`), the path
- * up to the item becomes its name in words: "Line 1 (Notch crossmember): hours must be 0 or more".
+ * up to the item becomes its name in words: "Line 1 (Notch crossmember): Hours must be 0 or more".
  */
 function flatten(errors: ValidationError[], parent = '', named = ''): Problem[] {
   return errors.flatMap((error) => {

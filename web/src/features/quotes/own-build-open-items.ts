@@ -27,9 +27,15 @@ export interface OwnBuildFacts {
 
 const plural = (count: number, one: string, many = `${one}s`) => `${count} ${count === 1 ? one : many}`;
 
+/** A line's description as a short name in a sentence: no closing full stop, cut at 40 characters. */
+function shortName(description: string, max = 40): string {
+  const name = description.trim().replace(/[.;,]+$/, '');
+  return name.length > max ? `${name.slice(0, max - 1).trimEnd()}…` : name;
+}
+
 /** "a, b, c and 3 more" */
 function someOf(names: string[], shown = 3): string {
-  const listed = names.slice(0, shown);
+  const listed = names.slice(0, shown).map((name) => shortName(name));
   const rest = names.length - listed.length;
   if (rest > 0) return `${listed.join(', ')} and ${rest} more`;
   if (listed.length <= 1) return listed.join('');

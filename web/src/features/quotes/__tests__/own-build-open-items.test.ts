@@ -43,6 +43,13 @@ describe('what is still open on a builder’s budget before it is frozen', () =>
     expect(items.filter((item) => item.open)).toHaveLength(5);
   });
 
+  it('names long part lines shortly, without their closing full stop', () => {
+    const long = { ...LINES[0], description: 'A radiator with its inlet and outlet on the engine’s sides.', unitPriceCents: 0, lineTotalCents: 0 };
+    const short = { ...LINES[0], description: 'An electronic pedal assembly.', unitPriceCents: 0, lineTotalCents: 0 };
+    const [, parts] = ownBuildOpenItems({ quote: quoteStub({ laborRateCents: 0, lines: [long, short] }) });
+    expect(parts.sentence).toBe('2 part lines are priced at $0.00: A radiator with its inlet and outlet on… and An electronic pedal assembly.');
+  });
+
   it('says when no fit check was run, and counts the required measurements still missing', () => {
     const items = ownBuildOpenItems({ quote: quoteStub(), fitReport: null, partsPlan: null, sheet: { values: [{}], missing: ['rail-bottom'] } });
     expect(items.map((item) => item.sentence)).toEqual(['No fit check has been run on this truck yet.', '1 required chassis measurement is still missing.']);
