@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
@@ -15,7 +15,7 @@ export async function acceptInvitation(input: AcceptInvitationInput): Promise<Se
 
 export function useAcceptInvitation({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {
   const storeSession = useStoreSession();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: acceptInvitation,
     onSuccess: (session) => {
       storeSession(session);

@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
@@ -12,7 +12,7 @@ export async function confirmSignUp(token: string): Promise<Session> {
 
 export function useConfirmSignUp({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {
   const storeSession = useStoreSession();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: confirmSignUp,
     onSuccess: (session) => {
       storeSession(session);

@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 
@@ -9,5 +9,5 @@ export async function requestPasswordReset(input: PasswordResetRequestInput): Pr
 }
 
 export function useRequestPasswordReset() {
-  return useMutation({ mutationFn: requestPasswordReset });
+  return useSingleFlightMutation({ mutationFn: requestPasswordReset });
 }

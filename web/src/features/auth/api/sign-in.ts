@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf, Session } from '@/lib/api-types';
 import { useStoreSession } from '../hooks/use-store-session';
@@ -17,7 +17,7 @@ export type UseSignInOptions = { onSuccess?: (session: Session) => void };
 
 export function useSignIn({ onSuccess }: UseSignInOptions = {}) {
   const storeSession = useStoreSession();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: signIn,
     onSuccess: (session) => {
       storeSession(session);

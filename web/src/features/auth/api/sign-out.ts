@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import { tokenStorage } from '@/lib/token-storage';
@@ -10,7 +11,7 @@ export async function signOut(refreshToken: string): Promise<void> {
 
 export function useSignOut({ onSettled }: { onSettled?: () => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: async () => {
       const refreshToken = tokenStorage.getRefreshToken();
       tokenStorage.clear();

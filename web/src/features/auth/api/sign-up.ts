@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf, Schemas } from '@/lib/api-types';
 
@@ -16,5 +16,5 @@ export async function signUp(input: SignUpInput): Promise<SignUpAccepted> {
 }
 
 export function useSignUp() {
-  return useMutation({ mutationFn: signUp });
+  return useSingleFlightMutation({ mutationFn: signUp });
 }

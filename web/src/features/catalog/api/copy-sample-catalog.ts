@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { ResponseOf } from '@/lib/api-types';
 import { catalogKeys } from './catalog-keys';
@@ -13,7 +14,7 @@ export async function copySampleCatalog(): Promise<SampleCatalogCopy> {
 
 export function useCopySampleCatalog({ onSuccess }: { onSuccess?: (copy: SampleCatalogCopy) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: copySampleCatalog,
     onSuccess: (copy) => {
       void queryClient.invalidateQueries({ queryKey: catalogKeys.all });

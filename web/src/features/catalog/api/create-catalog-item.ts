@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CatalogItem, CatalogItemInputOf, CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
@@ -13,7 +14,7 @@ export async function createCatalogItem({ kind, input }: CreateCatalogItemArgs):
 
 export function useCreateCatalogItem({ onSuccess }: { onSuccess?: (item: CatalogItem) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: createCatalogItem,
     onSuccess: (item, { kind }) => {
       queryClient.setQueryData(catalogKeys.detail(kind, item.id), item);

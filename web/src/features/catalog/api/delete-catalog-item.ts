@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
@@ -11,7 +12,7 @@ export async function deleteCatalogItem({ kind, id }: DeleteCatalogItemArgs): Pr
 
 export function useDeleteCatalogItem() {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: deleteCatalogItem,
     onSuccess: (_, { kind, id }) => {
       queryClient.removeQueries({ queryKey: catalogKeys.detail(kind, id) });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CatalogItem, CatalogItemChangesOf, CatalogKind } from '../types';
 import { catalogKeys } from './catalog-keys';
@@ -12,7 +13,7 @@ export async function updateCatalogItem({ kind, id, changes }: UpdateCatalogItem
 
 export function useUpdateCatalogItem({ onSuccess }: { onSuccess?: (item: CatalogItem) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateCatalogItem,
     onSuccess: (item, { kind }) => {
       queryClient.setQueryData(catalogKeys.detail(kind, item.id), item);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CounterLine } from './get-counter-lines';
 import { counterKeys } from './counter-keys';
@@ -11,5 +12,5 @@ export async function issueCounterLine(lineId: string): Promise<CounterLine> {
 
 export function useIssueCounterLine() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: issueCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: issueCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
 }

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { CounterLine } from './get-counter-lines';
@@ -13,5 +14,5 @@ export async function markCounterLine({ lineId, status }: { lineId: string; stat
 
 export function useMarkCounterLine() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: markCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: markCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
 }

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CounterLine } from './get-counter-lines';
 import { counterKeys } from './counter-keys';
@@ -10,5 +11,5 @@ export async function receiveCounterLine({ lineId, location }: { lineId: string;
 
 export function useReceiveCounterLine() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: receiveCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: receiveCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
 }

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CounterLine } from './get-counter-lines';
 import { counterKeys } from './counter-keys';
@@ -10,5 +11,5 @@ export async function releaseCounterLine(lineId: string): Promise<CounterLine> {
 
 export function useReleaseCounterLine() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: releaseCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: releaseCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
 }

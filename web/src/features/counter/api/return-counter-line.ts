@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CounterLine } from './get-counter-lines';
 import { counterKeys } from './counter-keys';
@@ -11,5 +12,5 @@ export async function returnCounterLine(lineId: string): Promise<CounterLine> {
 
 export function useReturnCounterLine() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: returnCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: returnCounterLine, onSettled: () => client.invalidateQueries({ queryKey: counterKeys.all }) });
 }

@@ -72,6 +72,7 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         {line.status === 'open' ? ': mark it To order.' : '.'}
       </Typography.Text>
     ) : null;
+  const marking = (line: CounterLine, status: CounterStatus) => mark.isPending && mark.variables?.lineId === line.id && mark.variables.status === status;
   const lineActions = (line: CounterLine) => (
     <Space wrap>
       {['open', 'to-order', 'ordered'].includes(line.status) && (
@@ -85,7 +86,7 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         </Button>
       )}
       {counterLineSetAside(line) && (
-        <Button size="small" onClick={() => release.mutate(line.id)}>
+        <Button size="small" loading={release.isPending && release.variables === line.id} onClick={() => release.mutate(line.id)}>
           Release
         </Button>
       )}
@@ -95,17 +96,17 @@ export function CounterBoard({ currency }: CounterBoardProps) {
         </Button>
       )}
       {line.status === 'open' && (
-        <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'to-order' })}>
+        <Button size="small" loading={marking(line, 'to-order')} onClick={() => mark.mutate({ lineId: line.id, status: 'to-order' })}>
           To order
         </Button>
       )}
       {(line.status === 'open' || line.status === 'to-order') && (
-        <Button size="small" onClick={() => mark.mutate({ lineId: line.id, status: 'ordered' })}>
+        <Button size="small" loading={marking(line, 'ordered')} onClick={() => mark.mutate({ lineId: line.id, status: 'ordered' })}>
           Ordered
         </Button>
       )}
       {(line.status === 'ordered' || line.status === 'to-order') && (
-        <Button size="small" onClick={() => receive.mutate({ lineId: line.id, location: line.stock[0]?.location ?? 'Main store' })}>
+        <Button size="small" loading={receive.isPending && receive.variables?.lineId === line.id} onClick={() => receive.mutate({ lineId: line.id, location: line.stock[0]?.location ?? 'Main store' })}>
           Received
         </Button>
       )}

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Customer, CustomerInput } from '../types';
 import { customerKeys } from './customer-keys';
@@ -10,7 +11,7 @@ export async function createCustomer(input: CustomerInput): Promise<Customer> {
 
 export function useCreateCustomer({ onSuccess }: { onSuccess?: (customer: Customer) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: createCustomer,
     onSuccess: (customer) => {
       void queryClient.invalidateQueries({ queryKey: customerKeys.lists() });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { customerKeys } from './customer-keys';
 
@@ -8,7 +9,7 @@ export async function deleteCustomer(id: string): Promise<void> {
 
 export function useDeleteCustomer() {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: deleteCustomer,
     onSuccess: (_, id) => {
       queryClient.removeQueries({ queryKey: customerKeys.detail(id) });

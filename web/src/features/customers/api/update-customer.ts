@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Customer, CustomerChanges } from '../types';
 import { customerKeys } from './customer-keys';
@@ -14,7 +15,7 @@ export async function updateCustomer({ id, changes }: UpdateCustomerInput): Prom
 
 export function useUpdateCustomer({ onSuccess }: { onSuccess?: (customer: Customer) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateCustomer,
     onSuccess: (customer) => {
       queryClient.setQueryData(customerKeys.detail(customer.id), customer);

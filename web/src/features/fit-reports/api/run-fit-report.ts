@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { StoredFitReport } from '../types';
 import { fitReportKeys } from './fit-report-keys';
@@ -11,7 +12,7 @@ export async function runFitReport(projectId: string): Promise<StoredFitReport> 
 
 export function useRunFitReport({ onSuccess }: { onSuccess?: (report: StoredFitReport) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: runFitReport,
     onSuccess: (report, projectId) => {
       queryClient.setQueryData(fitReportKeys.detail(report.id), report);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { FitSelections, FitSelectionsInput } from '../types';
 import { fitReportKeys } from './fit-report-keys';
@@ -13,7 +14,7 @@ export async function updateFitSelections({ projectId, changes }: UpdateFitSelec
 
 export function useUpdateFitSelections({ onSuccess }: { onSuccess?: (selections: FitSelections) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateFitSelections,
     onSuccess: (selections, { projectId }) => {
       queryClient.setQueryData(fitReportKeys.selections(projectId), selections);

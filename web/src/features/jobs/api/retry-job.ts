@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Job } from '../types';
 import { jobKeys } from './job-keys';
@@ -11,7 +12,7 @@ export async function retryJob(id: string): Promise<Job> {
 
 export function useRetryJob({ onSuccess }: { onSuccess?: (job: Job) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: retryJob,
     onSuccess: (job) => onSuccess?.(job),
     onSettled: () => queryClient.invalidateQueries({ queryKey: jobKeys.lists() }),

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { MeasurementPhoto } from '../types';
 import { measurementKeys } from './measurement-keys';
@@ -11,7 +12,7 @@ export async function acceptMeasurementPhoto(photoId: string): Promise<Measureme
 
 export function useAcceptMeasurementPhoto(projectId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: acceptMeasurementPhoto,
     onSuccess: () => client.invalidateQueries({ queryKey: measurementKeys.sheet(projectId) }),
   });

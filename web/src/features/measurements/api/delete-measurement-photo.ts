@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { measurementKeys } from './measurement-keys';
 
@@ -8,7 +9,7 @@ export async function deleteMeasurementPhoto(photoId: string): Promise<void> {
 
 export function useDeleteMeasurementPhoto(projectId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: deleteMeasurementPhoto,
     onSuccess: () => client.invalidateQueries({ queryKey: measurementKeys.sheet(projectId) }),
   });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { getApiErrorBody } from '@/lib/api-error';
 import type { MeasurementSheet, SetMeasurementValueBody } from '../types';
@@ -28,7 +29,7 @@ export async function setMeasurementValue(projectId: string, { pointId, body }: 
 
 export function useSetMeasurementValue(projectId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (input: SetMeasurementValueInput) => setMeasurementValue(projectId, input),
     onSuccess: (sheet) => client.setQueryData(measurementKeys.sheet(projectId), sheet),
     // their reading is fetched at once, so the person sees both before choosing

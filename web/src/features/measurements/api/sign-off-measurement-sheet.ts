@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { MeasurementSheet } from '../types';
 import { measurementKeys } from './measurement-keys';
@@ -11,7 +12,7 @@ export async function signOffMeasurementSheet(projectId: string): Promise<Measur
 
 export function useSignOffMeasurementSheet(projectId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: () => signOffMeasurementSheet(projectId),
     onSuccess: (sheet) => client.setQueryData(measurementKeys.sheet(projectId), sheet),
   });

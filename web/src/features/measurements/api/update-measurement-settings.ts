@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { MeasurementSettings, MeasurementSettingsBody } from '../types';
 import { measurementKeys } from './measurement-keys';
@@ -11,7 +12,7 @@ export async function updateMeasurementSettings(body: MeasurementSettingsBody): 
 
 export function useUpdateMeasurementSettings({ onSuccess }: { onSuccess?: (settings: MeasurementSettings) => void } = {}) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateMeasurementSettings,
     onSuccess: (settings) => {
       client.setQueryData(measurementKeys.settings(), settings);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { MeasurementTemplate, MeasurementTemplateBody } from '../types';
 import { measurementKeys } from './measurement-keys';
@@ -11,7 +12,7 @@ export async function updateMeasurementTemplate(chassisId: string, body: Measure
 
 export function useUpdateMeasurementTemplate(chassisId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: MeasurementTemplateBody) => updateMeasurementTemplate(chassisId, body),
     onSuccess: (template) => {
       client.setQueryData(measurementKeys.template(chassisId), template);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CreateInvitationInput, Invitation } from '../types';
 import { memberKeys } from './member-keys';
@@ -10,7 +11,7 @@ export async function createInvitation(input: CreateInvitationInput): Promise<In
 
 export function useCreateInvitation({ onSuccess }: { onSuccess?: (invitation: Invitation) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: createInvitation,
     onSuccess: (invitation) => {
       void queryClient.invalidateQueries({ queryKey: memberKeys.invitations() });

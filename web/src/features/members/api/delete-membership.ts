@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { memberKeys } from './member-keys';
 
@@ -8,7 +9,7 @@ export async function deleteMembership(id: string): Promise<void> {
 
 export function useDeleteMembership() {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: deleteMembership,
     onSettled: () => queryClient.invalidateQueries({ queryKey: memberKeys.memberships() }),
   });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Membership, MembershipChanges } from '../types';
 import { memberKeys } from './member-keys';
@@ -12,7 +13,7 @@ export async function updateMembership({ id, role }: UpdateMembershipInput): Pro
 
 export function useUpdateMembership() {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateMembership,
     onSettled: () => queryClient.invalidateQueries({ queryKey: memberKeys.memberships() }),
   });

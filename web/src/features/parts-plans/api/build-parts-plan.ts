@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { PartsPlan } from './get-project-parts-plans';
@@ -13,7 +14,7 @@ export async function buildPartsPlan(projectId: string, body: BuildPartsPlanBody
 
 export function useBuildPartsPlan(projectId: string) {
   const client = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: BuildPartsPlanBody) => buildPartsPlan(projectId, body),
     onSuccess: () => client.invalidateQueries({ queryKey: partsPlanKeys.all }),
   });

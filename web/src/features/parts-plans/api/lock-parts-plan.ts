@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { PartsPlan } from './get-project-parts-plans';
 import { partsPlanKeys } from './parts-plan-keys';
@@ -10,5 +11,5 @@ export async function lockPartsPlan(planId: string): Promise<PartsPlan> {
 
 export function useLockPartsPlan() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: lockPartsPlan, onSuccess: () => client.invalidateQueries({ queryKey: partsPlanKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: lockPartsPlan, onSuccess: () => client.invalidateQueries({ queryKey: partsPlanKeys.all }) });
 }

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { importForm, type ImportPreview, type ImportRequest } from './preview-parts-import';
 import { partsKeys } from './parts-keys';
@@ -12,5 +13,5 @@ export async function importParts(request: ImportRequest): Promise<ImportPreview
 
 export function useImportParts() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: importParts, onSuccess: () => client.invalidateQueries({ queryKey: partsKeys.all }) });
+  return useSingleFlightMutation({ mutationFn: importParts, onSuccess: () => client.invalidateQueries({ queryKey: partsKeys.all }) });
 }

@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Schemas } from '@/lib/api-types';
 
@@ -20,5 +20,5 @@ export async function previewPartsImport(request: ImportRequest): Promise<Import
 }
 
 export function usePreviewPartsImport() {
-  return useMutation({ mutationFn: previewPartsImport });
+  return useSingleFlightMutation({ mutationFn: previewPartsImport });
 }

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Part } from './get-parts';
@@ -20,7 +21,7 @@ export async function updatePart({ id, changes }: { id: string; changes: PartCha
 /** Creates the part, or saves the changes of the one with `id`; the parts lists refresh either way. */
 export function useSavePart({ onSuccess }: { onSuccess?: (part: Part) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (input: { id?: string; body: NewPart }) => (input.id ? updatePart({ id: input.id, changes: input.body }) : createPart(input.body)),
     onSuccess: (part) => {
       void queryClient.invalidateQueries({ queryKey: partsKeys.all });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Supplier } from './get-suppliers';
@@ -19,7 +20,7 @@ export async function updateSupplier({ id, changes }: { id: string; changes: Req
 /** Creates the supplier, or saves the changes of the one with `id`. */
 export function useSaveSupplier({ onSuccess }: { onSuccess?: (supplier: Supplier) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (input: { id?: string; body: NewSupplier }) => (input.id ? updateSupplier({ id: input.id, changes: input.body }) : createSupplier(input.body)),
     onSuccess: (supplier) => {
       void queryClient.invalidateQueries({ queryKey: partsKeys.suppliers });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Part } from './get-parts';
@@ -14,7 +15,7 @@ export async function setPartStock({ id, stock }: { id: string; stock: StockInpu
 /** Sets the units on hand (and the bin) of a part at one location. */
 export function useSetPartStock({ onSuccess }: { onSuccess?: (part: Part) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: setPartStock,
     onSuccess: (part) => {
       void queryClient.invalidateQueries({ queryKey: partsKeys.all });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { CreateProjectInput, Project } from '../types';
 import { projectKeys } from './project-keys';
@@ -10,7 +11,7 @@ export async function createProject(input: CreateProjectInput): Promise<Project>
 
 export function useCreateProject({ onSuccess }: { onSuccess?: (project: Project) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: createProject,
     onSuccess: (project) => {
       queryClient.setQueryData(projectKeys.detail(project.id), project);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import { projectKeys } from './project-keys';
 
@@ -8,7 +9,7 @@ export async function deleteProject(id: string): Promise<void> {
 
 export function useDeleteProject({ onSuccess }: { onSuccess?: () => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: deleteProject,
     onSuccess: (_, id) => {
       queryClient.removeQueries({ queryKey: projectKeys.detail(id) });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Project, UpdateProjectInput } from '../types';
 import { projectKeys } from './project-keys';
@@ -14,7 +15,7 @@ export async function updateProject({ id, changes }: UpdateProjectArgs): Promise
 
 export function useUpdateProject({ onSuccess }: { onSuccess?: (project: Project) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateProject,
     onSuccess: (project) => {
       queryClient.setQueryData(projectKeys.detail(project.id), project);

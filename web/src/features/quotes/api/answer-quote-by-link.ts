@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Quote } from '../types';
@@ -13,7 +14,7 @@ export async function answerQuoteByLink(token: string, body: AnswerQuoteBody): P
 
 export function useAnswerQuoteByLink(token: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: AnswerQuoteBody) => answerQuoteByLink(token, body),
     onSuccess: (quote) => queryClient.setQueryData(quoteKeys.link(token), quote),
   });

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Quote } from '../types';
@@ -13,7 +14,7 @@ export async function createQuote(projectId: string, body: CreateQuoteBody): Pro
 
 export function useCreateQuote(projectId: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: CreateQuoteBody) => createQuote(projectId, body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) }),
   });

@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { DepositPayment } from '../types';
 
@@ -12,5 +12,5 @@ export async function payDepositByLink(token: string, paymentMethod: string): Pr
 }
 
 export function usePayDepositByLink(token: string) {
-  return useMutation({ mutationFn: (paymentMethod: string) => payDepositByLink(token, paymentMethod) });
+  return useSingleFlightMutation({ mutationFn: (paymentMethod: string) => payDepositByLink(token, paymentMethod) });
 }

@@ -1,4 +1,4 @@
-import { useMutation } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { DepositPayment } from '../types';
 
@@ -9,5 +9,5 @@ export async function payDeposit(quoteId: string, paymentMethod: string): Promis
 }
 
 export function usePayDeposit(quoteId: string) {
-  return useMutation({ mutationFn: (paymentMethod: string) => payDeposit(quoteId, paymentMethod) });
+  return useSingleFlightMutation({ mutationFn: (paymentMethod: string) => payDeposit(quoteId, paymentMethod) });
 }

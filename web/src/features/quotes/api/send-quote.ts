@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Quote } from '../types';
 import { quoteKeys } from './quote-keys';
@@ -11,7 +12,7 @@ export async function sendQuote(quoteId: string): Promise<Quote> {
 
 export function useSendQuote(projectId: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: sendQuote,
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: quoteKeys.project(projectId) });

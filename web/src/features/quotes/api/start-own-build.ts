@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { OwnBuild } from '../types';
 import { quoteKeys } from './quote-keys';
@@ -12,7 +13,7 @@ export async function startOwnBuild(quoteId: string): Promise<OwnBuild> {
 
 export function useStartOwnBuild(projectId: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: startOwnBuild,
     onSuccess: (started) => {
       queryClient.setQueryData(quoteKeys.detail(started.quote.id), started.quote);

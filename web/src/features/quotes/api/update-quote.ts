@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RequestBodyOf } from '@/lib/api-types';
 import type { Quote } from '../types';
@@ -14,7 +15,7 @@ export async function updateQuote(quoteId: string, body: UpdateQuoteBody): Promi
 
 export function useUpdateQuote(quoteId: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: UpdateQuoteBody) => updateQuote(quoteId, body),
     onSuccess: (quote) => {
       queryClient.setQueryData(quoteKeys.detail(quoteId), quote);

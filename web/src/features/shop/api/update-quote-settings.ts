@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { QuoteSettings, UpdateQuoteSettingsInput } from '../types';
 import { shopKeys } from './shop-keys';
@@ -10,7 +11,7 @@ export async function updateQuoteSettings(changes: UpdateQuoteSettingsInput): Pr
 
 export function useUpdateQuoteSettings({ onSuccess }: { onSuccess?: (settings: QuoteSettings) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateQuoteSettings,
     onSuccess: (settings) => {
       queryClient.setQueryData(shopKeys.quoteSettings(), settings);

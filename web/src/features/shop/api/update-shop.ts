@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { Shop, UpdateShopInput } from '../types';
 import { shopKeys } from './shop-keys';
@@ -10,7 +11,7 @@ export async function updateShop(changes: UpdateShopInput): Promise<Shop> {
 
 export function useUpdateShop({ onSuccess }: { onSuccess?: (shop: Shop) => void } = {}) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: updateShop,
     onSuccess: (shop) => {
       queryClient.setQueryData(shopKeys.current(), shop);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { WorkOrder } from '../types';
 import { workOrderKeys } from './work-order-keys';
@@ -10,7 +11,7 @@ export async function finishWorkOrder(id: string): Promise<WorkOrder> {
 
 export function useFinishWorkOrder() {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: finishWorkOrder,
     onSuccess: (order) => {
       queryClient.setQueryData(workOrderKeys.detail(order.id), order);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { RecordCheckBody, WorkOrder } from '../types';
 import { workOrderKeys } from './work-order-keys';
@@ -10,7 +11,7 @@ export async function recordCheck(id: string, body: RecordCheckBody): Promise<Wo
 
 export function useRecordCheck(id: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: (body: RecordCheckBody) => recordCheck(id, body),
     onSuccess: (order) => {
       queryClient.setQueryData(workOrderKeys.detail(order.id), order);

@@ -1,4 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useSingleFlightMutation } from '@/hooks/use-single-flight-mutation';
 import { apiClient } from '@/lib/api-client';
 import type { WorkOrder } from '../types';
 import { workOrderKeys } from './work-order-keys';
@@ -18,7 +19,7 @@ const withoutPhoto = (order: WorkOrder, photoId: string): WorkOrder => ({
 
 export function useRemoveCheckPhoto(workOrderId: string) {
   const queryClient = useQueryClient();
-  return useMutation({
+  return useSingleFlightMutation({
     mutationFn: removeCheckPhoto,
     onSuccess: (_, photoId) => {
       // the photo leaves the check at once; the work order is read again to be sure

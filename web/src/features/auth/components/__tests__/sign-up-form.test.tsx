@@ -2,6 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
+import { doubleClick, expectSentOnce, heldAnswer } from '@/test/double-click';
 import { renderWithApp } from '@/test/render';
 import { SignUpForm } from '../sign-up-form';
 
@@ -28,5 +29,23 @@ describe('SignUpForm', () => {
         expect.anything(),
       ),
     );
+  });
+
+  it('sends one sign-up (one e-mail) on a double-click of Create shop', async () => {
+    const answer = heldAnswer<{ data: { message: string } }>();
+    const post = vi.spyOn(apiClient, 'post').mockImplementation(() => answer.promise);
+    renderWithApp(<SignUpForm />);
+    await userEvent.type(screen.getByLabelText('Your name'), 'Merrin Tolland');
+    await userEvent.type(screen.getByLabelText('Shop or garage name'), 'Ironbark Swap Works');
+    await userEvent.type(screen.getByLabelText('Email'), 'merrin@ironbark.example');
+    await userEvent.type(screen.getByLabelText('Password'), 'correct horse battery');
+    await userEvent.type(screen.getByLabelText('Repeat password'), 'correct horse battery');
+
+    doubleClick(screen.getByRole('button', { name: 'Create shop' }));
+    await expectSentOnce(post, '/auth/sign-up');
+
+    answer.resolve({ data: { message: 'We sent a link to merrin@ironbark.example.' } });
+    expect(await screen.findByText('Check your e-mail')).toBeInTheDocument();
+    expect(post).toHaveBeenCalledTimes(1);
   });
 });
