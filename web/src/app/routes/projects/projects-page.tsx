@@ -8,7 +8,7 @@ import { useUnits } from '@/hooks/use-units';
 import { useSignedInUser } from '@/features/auth/api/get-current-user';
 import { useCustomer } from '@/features/customers/api/get-customer';
 import { CustomerFormDrawer } from '@/features/customers/components/customer-form-drawer';
-import { ProjectFormDrawer } from '@/features/projects/components/project-form-drawer';
+import { ProjectFormDrawer, type CustomerOption } from '@/features/projects/components/project-form-drawer';
 import { ProjectsTable } from '@/features/projects/components/projects-table';
 import { projectSortFields, projectStatuses, type ProjectListQuery, type ProjectStatus } from '@/features/projects/types';
 import { useShop } from '@/features/shop/api/get-shop';
@@ -25,6 +25,7 @@ export function ProjectsPage() {
   const [searchParams, setSearchParams] = useSearchParams();
   const creating = canEdit && searchParams.get('new') === '1';
   const [addingCustomer, setAddingCustomer] = useState(false);
+  const [addedCustomer, setAddedCustomer] = useState<CustomerOption | null>(null);
   const customers = useCustomerOptions({ enabled: creating, ownUserId: user.id });
   const filterCustomer = useCustomer(params.customerId as string | undefined);
 
@@ -39,13 +40,15 @@ export function ProjectsPage() {
     customerId: params.customerId as string | undefined,
   };
 
-  const setNew = (on: boolean) =>
+  const setNew = (on: boolean) => {
+    setAddedCustomer(null);
     setSearchParams((prev) => {
       const next = new URLSearchParams(prev);
       if (on) next.set('new', '1');
       else next.delete('new');
       return next;
     });
+  };
 
   return (
     <>
@@ -78,12 +81,17 @@ export function ProjectsPage() {
             customersLoading={customers.loading}
             onCustomerSearch={customers.onSearch}
             onAddCustomer={() => setAddingCustomer(true)}
+            addedCustomer={addedCustomer}
             unitSystem={system}
             currency={shop.data?.currency}
             defaultCustomerId={query.customerId}
             noOtherCustomers={customers.noOtherCustomers}
           />
-          <CustomerFormDrawer open={addingCustomer} onClose={() => setAddingCustomer(false)} />
+          <CustomerFormDrawer
+            open={addingCustomer}
+            onClose={() => setAddingCustomer(false)}
+            onSaved={(customer) => setAddedCustomer({ value: customer.id, label: customer.name })}
+          />
         </>
       )}
     </>

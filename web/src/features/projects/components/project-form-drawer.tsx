@@ -28,6 +28,8 @@ export type ProjectFormDrawerProps = {
   customersLoading?: boolean;
   onCustomerSearch?: (text: string) => void;
   onAddCustomer?: () => void;
+  /** A customer just added from "Customer not listed? Add one": picked in the Customer field, by name before the list refetches. */
+  addedCustomer?: CustomerOption | null;
   unitSystem?: UnitSystem;
   currency?: string;
   /** Prefill the customer when opened from a customer. */
@@ -63,6 +65,7 @@ export function ProjectFormDrawer({
   customersLoading,
   onCustomerSearch,
   onAddCustomer,
+  addedCustomer,
   unitSystem = 'in',
   currency = 'USD',
   defaultCustomerId,
@@ -109,6 +112,13 @@ export function ProjectFormDrawer({
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [open, isEdit, startOwner]);
 
+  useEffect(() => {
+    if (!open || !addedCustomer) return;
+    form.setFieldValue('owner', 'customer');
+    form.setFields([{ name: 'customerId', value: addedCustomer.value, errors: [] }]);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [open, addedCustomer]);
+
   const submit = (v: ProjectFormValues) => {
     const goals: ProjectGoals = {
       use: v.use,
@@ -127,11 +137,9 @@ export function ProjectFormDrawer({
     else create.mutate({ ...base, customerId: v.customerId });
   };
 
-  // Keep the current customer selectable even when the search result does not include it.
-  const options =
-    project && !customerOptions.some((o) => o.value === project.customerId)
-      ? [{ value: project.customerId, label: project.customer.name }, ...customerOptions]
-      : customerOptions;
+  // Keep the current and the just-added customer selectable (by name) even when the search result does not include them.
+  const kept = [project ? { value: project.customerId, label: project.customer.name } : null, addedCustomer ?? null];
+  const options = [...kept.filter((o): o is CustomerOption => o !== null && !customerOptions.some((c) => c.value === o.value)), ...customerOptions];
 
   return (
     <Drawer

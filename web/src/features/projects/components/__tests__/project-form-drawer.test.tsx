@@ -1,7 +1,9 @@
-import { screen, waitFor } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { useState } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
+import { doubleClick, expectSentOnce, heldAnswer } from '@/test/double-click';
 import { renderWithApp } from '@/test/render';
 import { setWindowWidth } from '@/test/viewport';
 import type { Project } from '../../types';
@@ -83,5 +85,47 @@ describe('ProjectFormDrawer: whose vehicle', () => {
     renderWithApp(<ProjectFormDrawer open project={saved} onClose={vi.fn()} customerOptions={customerOptions} />);
     expect(await screen.findByRole('combobox', { name: 'Customer' })).toBeInTheDocument();
     expect(screen.queryByRole('radio', { name: 'My own truck' })).toBeNull();
+  });
+});
+
+describe('ProjectFormDrawer: one project per submit', () => {
+  it('opens one project when "Open project" is double-clicked', async () => {
+    setWindowWidth(1440);
+    const answer = heldAnswer<{ data: Project }>();
+    const post = vi.spyOn(apiClient, 'post').mockImplementation(() => answer.promise);
+    const onSaved = vi.fn();
+    renderWithApp(<ProjectFormDrawer open onClose={vi.fn()} onSaved={onSaved} customerOptions={customerOptions} defaultCustomerId="cust-1" />);
+    await fillTitleAndVehicle();
+    doubleClick(screen.getByRole('button', { name: 'Open project' }));
+    await expectSentOnce(post, '/projects');
+    answer.resolve({ data: saved });
+    await waitFor(() => expect(onSaved).toHaveBeenCalledTimes(1));
+    expect(post).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('ProjectFormDrawer: a customer just added', () => {
+  it('picks the added customer, shows their name before the list has them, and sends their id', async () => {
+    setWindowWidth(1440);
+    const post = mockCreate();
+    function WithAddedCustomer() {
+      const [added, setAdded] = useState<{ value: string; label: string } | null>(null);
+      return (
+        <>
+          <button type="button" onClick={() => setAdded({ value: 'cust-new', label: 'Odile Brackenridge' })}>
+            Customer saved
+          </button>
+          <ProjectFormDrawer open onClose={vi.fn()} customerOptions={customerOptions} noOtherCustomers={false} addedCustomer={added} />
+        </>
+      );
+    }
+    renderWithApp(<WithAddedCustomer />);
+    await fillTitleAndVehicle();
+    fireEvent.click(screen.getByRole('button', { name: 'Customer saved' }));
+    const field = screen.getByRole('combobox', { name: 'Customer' }).closest('.ant-select') as HTMLElement;
+    expect(await within(field).findByText('Odile Brackenridge')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Open project' }));
+    await waitFor(() => expect(post).toHaveBeenCalled());
+    expect(post.mock.calls[0][1]).toMatchObject({ customerId: 'cust-new' });
   });
 });
