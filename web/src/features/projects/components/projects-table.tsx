@@ -18,6 +18,17 @@ export type ProjectsTableProps = {
   emptyText?: string;
 };
 
+/** The table's usual funnel, named for the screen reader (antd's own trigger reads only "filter"). */
+function FunnelIcon({ label }: { label: string }) {
+  return (
+    <span role="img" aria-label={label} className="anticon">
+      <svg viewBox="64 64 896 896" width="1em" height="1em" fill="currentColor" aria-hidden="true" focusable="false">
+        <path d="M349 838c0 17.7 14.2 32 31.8 32h262.4c17.6 0 31.8-14.3 31.8-32V642H349v196zm531.1-684H143.9c-24.5 0-39.8 26.7-27.5 48l221.3 376h348.8l221.3-376c12.1-21.3-3.2-48-27.7-48z" />
+      </svg>
+    </span>
+  );
+}
+
 export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCreate, emptyText }: ProjectsTableProps) {
   const projects = useProjects(query);
   // Below antd's md (768 px) the customer rides under the title and the stage filter sits beside the search,
@@ -60,6 +71,7 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
       sortOrder: sortOrderFor('status', query.sort, query.order),
       filters: projectStatuses.map((s) => ({ text: statusLabels[s], value: s })),
       filterMultiple: false,
+      filterIcon: () => <FunnelIcon label="Filter by stage" />,
       filteredValue: query.status ? [query.status] : null,
       render: (status: ProjectStatus) => <ProjectStatusTag status={status} />,
     },
@@ -109,6 +121,7 @@ export function ProjectsTable({ query, onQueryChange, showCustomer = true, onCre
           allowClear
           placeholder="Search by project or vehicle"
           aria-label="Search projects"
+          enterButton={<Button aria-label="Search projects by title or vehicle">Search</Button>}
           defaultValue={query.search}
           onSearch={(value) => onQueryChange({ search: value.trim() || undefined, page: 1 })}
           style={{ maxWidth: 360, flex: '1 1 220px' }}

@@ -25,6 +25,14 @@ export interface QuoteLineDrawerProps {
 
 const FREE_TEXT = '';
 
+/** What the line will charge, in the shop's words (the quote rule's own steps). */
+export function linePriceNote(kind: QuoteLine['kind'], pricing: QuoteLineFormValues['pricing'] | undefined): string {
+  const rest = 'The quote’s totals, shop supplies, discount and tax follow when you save.';
+  if (kind === 'labor') return `The line charges these hours at the shop’s labor rate, to the nearest cent. ${rest}`;
+  if (pricing === 'cost-plus') return `Each part is charged at its cost plus the markup, to the nearest cent, times the quantity. ${rest}`;
+  return `The line charges the unit price times the quantity. ${rest}`;
+}
+
 /** Adds or edits one line of the working revision: a part (price, or cost and markup) or labor (an operation's book hours, or free text). */
 export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPercent, saving, error, onSubmit, onClose }: QuoteLineDrawerProps) {
   const [form] = Form.useForm<QuoteLineFormValues>();
@@ -102,8 +110,9 @@ export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPerce
               </Col>
             </Row>
             <ChoiceField
-              label="Priced from"
+              label="Price each part by"
               name="pricing"
+              required="Choose how to price the part"
               options={[
                 { value: 'list', label: 'Unit price' },
                 { value: 'cost-plus', label: 'Cost and markup' },
@@ -123,8 +132,8 @@ export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPerce
             )}
           </>
         )}
-        <Typography.Paragraph type="secondary" style={{ fontSize: 12 }}>
-          The server prices the line and the totals by the shop's quote rule when you save.
+        <Typography.Paragraph type="secondary" style={{ fontSize: 12 }} data-testid="line-price-note">
+          {linePriceNote(kind, pricing)}
         </Typography.Paragraph>
       </Form>
     </FormDrawer>

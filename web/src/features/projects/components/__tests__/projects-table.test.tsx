@@ -50,5 +50,8 @@ describe('ProjectsTable', () => {
     expect(within(table).getByRole('columnheader', { name: /Customer/ })).toBeInTheDocument();
     expect(within(table).getByText('Marlo Penhallow')).toBeInTheDocument();
     expect(screen.queryByRole('combobox', { name: 'Stage' })).toBeNull();
+    // The search button and the stage filter's funnel say what they do.
+    expect(screen.getByRole('button', { name: 'Search projects by title or vehicle' })).toBeInTheDocument();
+    expect(within(table).getByRole('button', { name: 'Filter by stage' })).toBeInTheDocument();
   });
 });

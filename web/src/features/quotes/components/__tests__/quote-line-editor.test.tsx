@@ -93,6 +93,22 @@ describe('QuoteLineEditor', () => {
     expect(body.lines[4]).toEqual({ kind: 'labor', description: 'Modify front crossmember', laborOperationId: 'op-crossmember', hours: 3.5 });
   });
 
+  it('labels the required pricing choice as required and says in plain words what price the line will take', async () => {
+    renderEditor();
+    await userEvent.click(screen.getByRole('button', { name: 'Add parts line' }));
+    const form = await screen.findByRole('form', { name: 'Add a parts line' });
+    const pricing = within(form).getByRole('radiogroup', { name: 'Price each part by' });
+    const label = within(form).getByText('Price each part by').closest('label') as HTMLElement;
+    expect(label).not.toHaveTextContent(/optional/i);
+    expect(within(pricing).getByRole('radio', { name: 'Unit price' })).toBeChecked();
+    const note = within(form).getByTestId('line-price-note');
+    expect(note).toHaveTextContent('The line charges the unit price times the quantity.');
+    expect(note).not.toHaveTextContent(/server/i);
+
+    await userEvent.click(within(pricing).getByText('Cost and markup'));
+    expect(note).toHaveTextContent('Each part is charged at its cost plus the markup, to the nearest cent, times the quantity.');
+  });
+
   it('removes a line after asking', async () => {
     const patch = vi.spyOn(apiClient, 'patch').mockResolvedValue({ data: quoteStub() });
     renderEditor();
