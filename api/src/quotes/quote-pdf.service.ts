@@ -13,6 +13,7 @@ import {
   type ChassisPoint,
   type FitReport,
   type QuoteTotals,
+  type TextPartsOptions,
   type UnitSystem,
 } from '@swapwright/shared';
 import PDFDocument from 'pdfkit';
@@ -38,8 +39,8 @@ export interface QuotePdfInput {
  * The engine's words ("drop it 8.7 mm (0.34 in)") with every figure in the shop's unit system only: the PDF goes to a
  * customer whose unit choice the server does not know, so it reads as the shop's own paperwork does.
  */
-function inUnits(text: string, system: UnitSystem): string {
-  return renderText(textParts(text), system);
+function inUnits(text: string, system: UnitSystem, options?: TextPartsOptions): string {
+  return renderText(textParts(text, options), system);
 }
 
 const STATUS_WORDS: Record<string, string> = { fails: 'does not fit', tight: 'tight', unknown: 'not checked', ok: 'fits' };
@@ -249,7 +250,8 @@ export class QuotePdfService {
       doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${formatMoney(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
       for (const line of lines) {
         row([
-          inUnits(line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description, units),
+          // A part line's lone figures belong to the part's name as its maker prints it.
+          inUnits(line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description, units, { pairedLengthsOnly: kind === 'part' }),
           kind === 'part' ? String(line.quantity) : `${(line.hours ?? 0).toFixed(1)} h`,
           formatMoney(line.unitPriceCents, revision.currency),
           formatMoney(line.lineTotalCents, revision.currency),

@@ -1,4 +1,4 @@
-import { formatFindingFigure, formatQuantity, MINUS, renderFindingText, renderRemedyText, textParts } from './unit-format';
+import { formatFindingFigure, formatQuantity, MINUS, renderFindingText, renderRemedyText, renderText, textParts } from './unit-format';
 import { DEMO_FIT_SPEC } from '../fixtures/demo-fit-spec';
 import { mmWithInches } from './figure-format';
 import { mmToShownInches } from './length';
@@ -34,6 +34,15 @@ describe('one formatting path in the reader’s units', () => {
     expect(renderFindingText({ message: sentence }, 'mm')).toBe(
       `The pan clears it by 11.6 mm; the pump gives 126.2 L/h at 399.9 kPa for 298.3 kW, 6PK1225, ${MINUS}2.50°.`,
     );
+  });
+
+  it('in a part name reads only the engine’s paired lengths, leaving the maker’s own figures as printed', () => {
+    // Derived: 72.3 mm / 25.4 = 2.846 in. "90 mm" and "190 L/h" are part of invented catalog names.
+    const name = 'Heavy mount kit, 90 mm, with 190 L/h lift pump: drop crossmember 72.3 mm (2.85 in) setback';
+    expect(renderText(textParts(name, { pairedLengthsOnly: true }), 'in')).toBe(
+      'Heavy mount kit, 90 mm, with 190 L/h lift pump: drop crossmember 2.85 in setback',
+    );
+    expect(renderText(textParts(name), 'in')).toContain('3.54 in');
   });
 
   it('renders every finding and remedy of the demo report without a stray millimetre in inch mode', () => {

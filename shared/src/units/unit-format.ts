@@ -136,12 +136,22 @@ function readNumber(text: string): { value: number; decimals: number; signed: bo
   return { value: Number(normal), decimals: dot < 0 ? 0 : normal.length - dot - 1, signed };
 }
 
+export interface TextPartsOptions {
+  /**
+   * Read only the engine's paired lengths (`72.3 mm (2.85 in)`) as figures and leave every other figure as written:
+   * for words that hold a part's name as its maker prints it ("Heavy mount kit, 90 mm", "190 L/h lift pump"), where
+   * a lone figure is part of the name, not a measurement to convert.
+   */
+  pairedLengthsOnly?: boolean;
+}
+
 /** Splits a sentence written by the engine into plain text and structured figures. */
-export function textParts(text: string): TextPart[] {
+export function textParts(text: string, options: TextPartsOptions = {}): TextPart[] {
   const parts: TextPart[] = [];
   let last = 0;
   for (const match of text.matchAll(FIGURE_PATTERN)) {
-    const [whole, lengthOrOther, , otherUnit, degrees] = match;
+    const [whole, lengthOrOther, inches, otherUnit, degrees] = match;
+    if (options.pairedLengthsOnly && inches === undefined) continue;
     const index = match.index ?? 0;
     if (index > last) parts.push(text.slice(last, index));
     if (degrees !== undefined) parts.push({ quantity: 'angle', ...readNumber(degrees) });

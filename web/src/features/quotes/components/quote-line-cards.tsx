@@ -32,7 +32,7 @@ export function QuoteLineCards({ lines, currency, lead, actions }: QuoteLineCard
           <Flex gap={8} align="baseline" wrap>
             {lead?.(line)}
             <Typography.Text strong style={{ flex: '1 1 12em', minWidth: 0 }}>
-              <LineDescription text={line.description} />
+              <LineDescription line={line} />
             </Typography.Text>
           </Flex>
           {line.sku && (

@@ -13,7 +13,7 @@ export const quoteLineColumns = (currency: string): TableColumnsType<QuoteLine> 
     dataIndex: 'description',
     render: (_, line) => (
       <>
-        <LineDescription text={line.description} />
+        <LineDescription line={line} />
         {line.sku && (
           <Typography.Text type="secondary" style={{ display: 'block', fontSize: 12 }}>
             Part no. {line.sku}

@@ -99,7 +99,7 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
                           <Flex vertical gap={2}>
                             <span>
                               <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag>
-                              <LineDescription text={line.description} />
+                              <LineDescription line={line} />
                             </span>
                             <span>
                               {beforeAfter(line, (side) => amountOf(line, side))} × {beforeAfter(line, (side) => money(side.unitPriceCents))}
@@ -111,7 +111,7 @@ export function RevisionCompare({ quote }: RevisionCompareProps) {
                     ]
                   : [
                       { title: 'Change', key: 'change', render: (_, line) => <Tag color={CHANGE_TAG[line.change].color}>{CHANGE_TAG[line.change].label}</Tag> },
-                      { title: 'Description', dataIndex: 'description', render: (_, line) => <LineDescription text={line.description} /> },
+                      { title: 'Description', dataIndex: 'description', render: (_, line) => <LineDescription line={line} /> },
                       { title: 'Qty / hours', key: 'amount', align: 'right', render: (_, line) => beforeAfter(line, (side) => amountOf(line, side)) },
                       { title: 'Unit', key: 'unit', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.unitPriceCents)) },
                       { title: 'Amount', key: 'total', align: 'right', render: (_, line) => beforeAfter(line, (side) => money(side.lineTotalCents)) },

@@ -28,6 +28,8 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
   const { system } = useUnits();
   // The plan's words (an operation, a remedy's line, a part's note) keep the engine's figures; they read in the person's system.
   const say = (text: string) => renderText(textParts(text), system);
+  // A part's name keeps its maker's figures ("Heavy mount kit, 90 mm"); only the plan's paired lengths convert.
+  const sayName = (text: string) => renderText(textParts(text, { pairedLengthsOnly: true }), system);
   const inBay = order.state === 'in-the-bay';
   const { progress } = order;
   return (
@@ -130,7 +132,7 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
               {step.parts.length > 0 && (
                 <Typography.Paragraph style={{ marginBottom: 8 }}>
                   <Typography.Text type="secondary">Parts: </Typography.Text>
-                  {step.parts.map((part) => `${part.quantity} × ${part.sku ? `${part.sku} ` : ''}${say(part.description)}`).join('; ')}
+                  {step.parts.map((part) => `${part.quantity} × ${part.sku ? `${part.sku} ` : ''}${sayName(part.description)}`).join('; ')}
                 </Typography.Paragraph>
               )}
               {step.torque.length > 0 && (

@@ -47,4 +47,14 @@ describe('a quote line drawn from the parts plan reads in the person’s units',
     expect(screen.getByTestId('quote-line-line-rework')).toHaveTextContent('Rework the transmission crossmember: relocate it 2.85 in rearward and drop it 0.34 in, or fit a drop crossmember');
     expect(screen.getByTestId('quote-line-line-rework').textContent).not.toMatch(/\d mm\b/);
   });
+
+  it('a part line keeps the figures of the part’s own name, so customer and counter read one name', () => {
+    window.localStorage.setItem('swapwright.unitSystem', 'in');
+    const kit: QuoteLine = { ...LINES[0], key: 'line-kit', kind: 'part', description: 'Heavy mount kit, 90 mm' };
+    const labor: QuoteLine = { ...DROP, key: 'line-labor', description: 'Fit the mount kit and shim it 6.0 mm (0.24 in)' };
+    renderWithApp(<QuoteLineCards lines={[kit, labor]} currency="USD" />);
+    expect(screen.getByTestId('quote-line-line-kit')).toHaveTextContent('Heavy mount kit, 90 mm');
+    expect(screen.getByTestId('quote-line-line-kit').textContent).not.toContain('3.54 in');
+    expect(screen.getByTestId('quote-line-line-labor')).toHaveTextContent('Fit the mount kit and shim it 0.24 in');
+  });
 });
