@@ -30,6 +30,10 @@ export function notifyError({ title, description, key, reference }: NotifyOption
   instance?.error({ title, description: withReference(description, reference), key, placement: 'topRight' });
 }
 
+/**
+ * Bottom right: a confirmation must not land under the pointer on the page header's buttons
+ * (where most saves and sends are clicked), since hovering keeps it open over them.
+ */
 export function notifySuccess({ title, description, key }: NotifyOptions): void {
-  instance?.success({ title, description, key, placement: 'topRight', duration: 3 });
+  instance?.success({ title, description, key, placement: 'bottomRight', duration: 3 });
 }

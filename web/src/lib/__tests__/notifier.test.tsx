@@ -1,6 +1,7 @@
 import { render, screen } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
-import { withReference } from '../notifier';
+import type { NotificationInstance } from 'antd/es/notification/interface';
+import { describe, expect, it, vi } from 'vitest';
+import { notifySuccess, registerNotifier, withReference } from '../notifier';
 
 describe('error notices', () => {
   it('keep the sentence plain and put the request reference in small print of its own', () => {
@@ -13,5 +14,15 @@ describe('error notices', () => {
 
   it('without a reference is the sentence alone', () => {
     expect(withReference('The server could not be reached.', undefined)).toBe('The server could not be reached.');
+  });
+});
+
+describe('success notices', () => {
+  it('appear at the bottom right, clear of the page header where the button was just clicked', () => {
+    const success = vi.fn();
+    registerNotifier({ success } as unknown as NotificationInstance);
+    notifySuccess({ title: 'Quote Q-1 sent' });
+    registerNotifier(null);
+    expect(success).toHaveBeenCalledWith(expect.objectContaining({ title: 'Quote Q-1 sent', placement: 'bottomRight' }));
   });
 });
