@@ -55,6 +55,24 @@ describe('the estimator fits the demo engine and clears the crossmember with a r
     await page.getByTestId('side-view').screenshot({ path: `${__dirname}/../test-results/screenshots/fit-side-view-stock-pan.png` });
   });
 
+  it('previews a move from the shortfall list: the page brings the preview\'s counts into view, beside the stored ones', async () => {
+    const { page } = browser;
+    await page.getByTestId(`shortfall-${SUMP_CHECK}`).getByRole('button', { name: 'Preview this move' }).first().click();
+    const summary = page.getByTestId('report-summary');
+    await expectText(summary, /Preview at the new placement/);
+    await expectVisible(summary.getByTestId('stored-counts'));
+    await page.waitForFunction(() => {
+      const box = document.querySelector('[data-testid="report-summary"]')?.getBoundingClientRect();
+      return Boolean(box && box.top >= 0 && box.top < window.innerHeight);
+    });
+    await saveScreenshot(page, 'fit-preview-move');
+    await summary.getByRole('button', { name: 'Save or undo this move' }).click();
+    const back = page.getByRole('button', { name: 'Back to saved' });
+    await expectVisible(back);
+    await back.click();
+    await expectText(summary, /^Report/);
+  });
+
   it('switches to the rear-sump pan the remedy suggests and the check clears', async () => {
     const { page } = browser;
     const shortfall = page.getByTestId(`shortfall-${SUMP_CHECK}`);

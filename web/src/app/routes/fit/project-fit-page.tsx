@@ -1,5 +1,6 @@
 import { Alert, Button, Card, Col, Flex, Row, Space, Typography } from 'antd';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
+import type { PlacementRemedy } from '@swapwright/shared';
 import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
@@ -51,6 +52,8 @@ export function ProjectFitPage() {
   const partNames = usePartNames(spec, catalog);
   /** Parts or placement changed since the report on screen was stored. */
   const [stale, setStale] = useState(false);
+  const summaryRef = useRef<HTMLDivElement>(null);
+  const placementRef = useRef<HTMLDivElement>(null);
 
   const run = useRunFitReport({
     onSuccess: (r) => {
@@ -81,6 +84,14 @@ export function ProjectFitPage() {
     await updateProject.mutateAsync({ id: p.id, changes: { placement: rounded } });
     notifySuccess({ title: 'Placement saved', description: 'Run the fit check to store a report at this placement.' });
   };
+
+  /** The list re-sorts at the moved placement, so the page brings the preview's counts into view instead. */
+  const previewMove = (remedy: PlacementRemedy) => {
+    preview.tryRemedy(remedy);
+    summaryRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+    summaryRef.current?.focus({ preventScroll: true });
+  };
+  const goToPlacement = () => placementRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
 
   const sel = selections.data;
   const slots = selectionSlots({
@@ -167,14 +178,20 @@ export function ProjectFitPage() {
           </Card>
         ) : (
           <>
-            <ReportSummaryCard stored={stored} shown={shown} isPreview={preview.isPreview} />
+            <ReportSummaryCard
+              ref={summaryRef}
+              stored={stored}
+              shown={shown}
+              isPreview={preview.isPreview}
+              previewActions={!readOnly && <Button onClick={goToPlacement}>Save or undo this move</Button>}
+            />
 
             <Card title={`Shortfalls (${shown.shortfalls.length}), worst first`} className="fit-shortfalls-card">
               <ShortfallList
                 shortfalls={shown.shortfalls}
                 parts={partNames}
                 onUsePart={canRun ? (r, id) => void edits.choosePart(r, id) : undefined}
-                onTryPlacement={canRun ? preview.tryRemedy : undefined}
+                onTryPlacement={canRun ? previewMove : undefined}
                 chosenIds={chosenIds}
                 busyPartId={edits.busyPartId}
               />
@@ -186,7 +203,7 @@ export function ProjectFitPage() {
               </Col>
               {!readOnly && (
                 <Col xs={24} xl={8}>
-                  <Card className="fit-control">
+                  <Card className="fit-control" ref={placementRef}>
                     <PlacementControls
                       value={placement}
                       onChange={preview.setPreview}

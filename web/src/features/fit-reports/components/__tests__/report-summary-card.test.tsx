@@ -29,4 +29,34 @@ describe('ReportSummaryCard', () => {
     expect(storedAt.closest('.ant-card-head')).toBeNull();
     expect(screen.getByText(/need input$/).closest('.ant-card-head')).toBeNull();
   });
+
+  it('with a preview, shows the stored report\'s counts beside the preview\'s and what to do next', () => {
+    setWindowWidth(1440);
+    renderWithApp(
+      <ReportSummaryCard
+        stored={stored}
+        shown={{ ...report, summary: { ...report.summary, fails: 0, tight: 1 } }}
+        isPreview
+        previewActions={<button type="button">Save or undo this move</button>}
+      />,
+    );
+    expect(screen.getByText('Preview, not saved')).toBeInTheDocument();
+    expect(screen.getByTestId('stored-counts')).toHaveTextContent(/The stored report had/);
+    expect(screen.getByRole('button', { name: 'Save or undo this move' })).toBeInTheDocument();
+  });
+
+  it('without a preview, shows no stored counts and no preview actions', () => {
+    setWindowWidth(1440);
+    renderWithApp(<ReportSummaryCard stored={stored} shown={report} isPreview={false} previewActions={<button type="button">Save or undo this move</button>} />);
+    expect(screen.queryByTestId('stored-counts')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Save or undo this move' })).toBeNull();
+  });
+
+  it('writes a figure in a note in the shop\'s units: an engine\'s rated power in hp for a shop in inches', () => {
+    setWindowWidth(1440);
+    const withPower = storedFitReportStub({ inputs: { ...storedFitReportStub().inputs, notes: ["No target power in the project's goals: used the engine's rated 270 kW."] } });
+    renderWithApp(<ReportSummaryCard stored={withPower} shown={withPower.report} isPreview={false} />);
+    // Source: NIST SP 811 (2008), Appendix B.9: 1 hp (550 ft·lbf/s) = 745.6999 W, so 270 kW = 362 hp.
+    expect(screen.getByText(/used the engine's rated/)).toHaveTextContent("used the engine's rated 362 hp.");
+  });
 });
