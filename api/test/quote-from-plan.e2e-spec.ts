@@ -1,21 +1,10 @@
-import { DEMO_LABOR_OPERATIONS, DEMO_STORY_JOBS, DemoRole } from '@swapwright/seed-data';
+import { DEMO_LABOR_OPERATIONS, DemoRole } from '@swapwright/seed-data';
+import { planStagForNewCustomer, type QuoteLineBody } from './fixtures/planned-stag.fixture';
 import { startAppWithPayments, until } from './helpers/app-with-payments';
 import { lastMailId, waitForMail } from './helpers/mail-fake';
 import { bearer, seedWithParts, Session, TestApp } from './helpers/test-app';
 
-type Line = {
-  kind: 'part' | 'labor';
-  source: string;
-  description: string;
-  sku: string | null;
-  catalogItemId: string | null;
-  laborOperationId: string | null;
-  quantity: number;
-  hours: number | null;
-  pricing: string;
-  unitPriceCents: number;
-  amountCents: number;
-};
+type Line = QuoteLineBody;
 type PlanResult = {
   picks: { partId: string; sku: string; quantity: number; priceCents: number; laborHours: number; category: string }[];
   operations: { operation: string; laborHours: number; operationCode?: string | null }[];
@@ -23,8 +12,6 @@ type PlanResult = {
 };
 
 const operation = (code: string) => DEMO_LABOR_OPERATIONS.find((candidate) => candidate.code === code)!;
-/** The parts-planned job of the demo story: a Stag 1984 whose transmission mount misses its crossmember. */
-const STAG = DEMO_STORY_JOBS.find((job) => job.stage === 'parts-planned')!;
 
 describe('the quote drafted from a locked parts plan carries exactly the plan', () => {
   let t: TestApp;
@@ -39,28 +26,14 @@ describe('the quote drafted from a locked parts plan carries exactly the plan', 
   beforeAll(async () => {
     ({ t, stop } = await startAppWithPayments());
     demo = await seedWithParts(t);
-    const as = (method: 'post' | 'put', path: string, body: object = {}) => t.http[method](path).set(...bearer(demo.estimator)).send(body);
-    const customer = await as('post', '/api/customers', { name: 'Test Customer Plan', email: 'plan.customer@example.test' }).expect(201);
-    const project = await as('post', '/api/projects', {
-      customerId: customer.body.id,
-      title: 'Stag with the crossmember to move',
-      vehicleDescription: STAG.vehicleDescription,
-      chassisModelId: STAG.chassisModelId,
-      engineProfileId: STAG.engineProfileId,
-      transmissionId: STAG.transmissionId,
-      goals: STAG.goals,
-      placement: STAG.placement,
-    }).expect(201);
-    await as('put', `/api/projects/${project.body.id}/fit-selections`, STAG.fitSelections!).expect(200);
-    const report = await as('post', `/api/projects/${project.body.id}/fit-reports`).expect(201);
-    const built = await as('post', `/api/projects/${project.body.id}/parts-plans`, { objective: 'lowest-cost', fitReportId: report.body.id }).expect(201);
-    await as('post', `/api/parts-plans/${built.body.id}/lock`).expect(200);
-    plan = built.body;
-    const drafted = await as('post', `/api/projects/${project.body.id}/quotes`).expect(201);
+    const as = (method: 'post', path: string) => t.http[method](path).set(...bearer(demo.estimator)).send({});
+    const planned = await planStagForNewCustomer(t, demo.estimator, { name: 'Test Customer Plan', email: 'plan.customer@example.test' }, 'Stag with the crossmember to move');
+    plan = planned.plan as typeof plan;
+    const drafted = await as('post', `/api/projects/${planned.projectId}/quotes`).expect(201);
     expect(drafted.body.revision).toMatchObject({ partsPlanId: plan.id, partsPlanVersion: plan.version });
     lines = drafted.body.revision.lines;
     quoteId = drafted.body.id;
-    projectId = project.body.id;
+    projectId = planned.projectId;
     totals = drafted.body.revision.totals;
   }, 60_000);
 

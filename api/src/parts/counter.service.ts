@@ -13,6 +13,25 @@ import { CounterLine, PartStock } from './part.entity';
 import { PartsErrors } from './parts.errors';
 import { PartsPlansService } from './parts-plans.service';
 
+/** A part of an accepted quote revision that the shop's catalog holds. */
+export interface AcceptedPart {
+  partId: string;
+  sku: string;
+  description: string;
+  quantity: number;
+}
+
+export interface AcceptedQuoteParts {
+  shopId: string;
+  projectId: string;
+  /** The plan the revision was drawn from; without one there is no counter list to match. */
+  planId: string | null;
+  quoteLabel: string;
+  parts: AcceptedPart[];
+  /** Every part line of the revision is a part of the shop's list (none written by hand). */
+  everyPartLinked: boolean;
+}
+
 export interface CounterLineView {
   line: CounterLine;
   stock: PartStock[];
@@ -38,6 +57,66 @@ export class CounterService {
     const partIds = lines.map((l) => l.partId).filter((id): id is string => !!id);
     const stock = partIds.length > 0 ? await this.dataSource.getRepository(PartStock).find({ where: { shopId: user.shopId, partId: In(partIds) }, order: { location: 'ASC' } }) : [];
     return lines.map((line) => ({ line, stock: stock.filter((s) => s.partId === line.partId) }));
+  }
+
+  /**
+   * Brings the counter's list of the quote's plan in line with the parts of the accepted revision, in the transaction
+   * that opens its work order: a part the estimator added to the quote gets a line, a changed quantity gets the
+   * difference as an open line (or takes units off an open line), and an open line of a part the quote dropped goes
+   * (only when every part line of the quote is one of the shop's parts).
+   * Units already set aside, ordered or issued are left for the counter to release by hand.
+   */
+  async matchAcceptedQuote(manager: EntityManager, accepted: AcceptedQuoteParts): Promise<void> {
+    const { shopId, projectId, planId, quoteLabel, parts } = accepted;
+    if (!planId) return;
+    const lines = await manager.getRepository(CounterLine).createQueryBuilder('l').setLock('pessimistic_write').where('l.planId = :planId AND l.shopId = :shopId', { planId, shopId }).orderBy('l.id', 'ASC').getMany();
+    const wanted = new Map<string, AcceptedPart>();
+    for (const part of parts) {
+      const seen = wanted.get(part.partId);
+      wanted.set(part.partId, seen ? { ...seen, quantity: seen.quantity + part.quantity } : { ...part });
+    }
+    const changes: string[] = [];
+    const added: CounterLine[] = [];
+    const reduced: { line: CounterLine; keep: number }[] = [];
+    for (const part of wanted.values()) {
+      const ofPart = lines.filter((line) => line.partId === part.partId);
+      let difference = part.quantity - ofPart.reduce((sum, line) => sum + line.quantity, 0);
+      if (difference > 0) {
+        added.push(manager.create(CounterLine, { id: randomUUID(), shopId, planId, projectId, partId: part.partId, sku: part.sku, description: part.description.slice(0, 240), quantity: difference, status: 'open', stockId: null, updatedById: null }));
+        changes.push(`${part.sku} +${difference}`);
+        continue;
+      }
+      for (const line of ofPart) {
+        if (difference >= 0) break;
+        if (line.status !== 'open') continue;
+        const keep = Math.max(0, line.quantity + difference);
+        difference += line.quantity - keep;
+        reduced.push({ line, keep });
+        changes.push(`${line.sku} −${line.quantity - keep}`);
+      }
+    }
+    // A part line written by hand may stand for a planned part, so with one on the quote no planned line is dropped.
+    for (const line of accepted.everyPartLinked ? lines : []) {
+      if (line.status !== 'open' || (line.partId && wanted.has(line.partId))) continue;
+      reduced.push({ line, keep: 0 });
+      changes.push(`${line.sku} −${line.quantity} (not in the quote)`);
+    }
+    if (changes.length === 0) return;
+    await this.audit.record(manager, {
+      shopId,
+      actor: { userId: null, name: 'Quote acceptance' },
+      kind: 'stock',
+      action: 'counter.matched-to-quote',
+      subjectId: planId,
+      summary: `Counter list matched to the accepted quote ${quoteLabel}: ${changes.join(', ')}.`,
+      before: { lines: lines.map((line) => ({ sku: line.sku, quantity: line.quantity, status: line.status })) },
+      after: { changes },
+    });
+    for (const { line, keep } of reduced) {
+      if (keep === 0) await manager.delete(CounterLine, { id: line.id, shopId });
+      else await manager.update(CounterLine, { id: line.id, shopId }, { quantity: keep });
+    }
+    if (added.length > 0) await manager.insert(CounterLine, added);
   }
 
   private async lockedLine(manager: EntityManager, user: Pick<AuthUser, 'shopId'>, id: string): Promise<CounterLine> {

@@ -28,6 +28,7 @@ import { UsersService } from '../users/users.service';
 import { WorkOrdersService } from '../work-orders/work-orders.service';
 import { AnswerQuoteDto, CreateQuoteDto, QuoteLineInputDto, UpdateQuoteDto } from './dto/quote-input.dto';
 import { CATALOG_KIND_OF_CATEGORY, catalogPriceCents, draftLinesFromPlan, draftLinesFromReport } from './quote-draft.builder';
+import { quoteLabel } from './quote-label';
 import { QuoteLinksService } from './quote-links.service';
 import { priceRevision, UnpricedLine } from './quote-money.adapter';
 import { QuoteNotification } from './quote-notification.entity';
@@ -662,6 +663,4 @@ export class QuotesService implements OnModuleInit {
   }
 }
 
-export function quoteLabel(quote: Pick<Quote, 'number'>): string {
-  return `Q-${String(quote.number).padStart(4, '0')}`;
-}
+export { quoteLabel } from './quote-label';

@@ -16,11 +16,12 @@ import { AuthUser } from '../common/tenant/auth-user';
 import { TenantRepository } from '../common/tenant/tenant-repository';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { LaborOperation } from '../labor-operations/labor-operation.entity';
-import { CounterService } from '../parts/counter.service';
+import { CounterService, type AcceptedPart } from '../parts/counter.service';
 import { Part, PartsPlanRecord } from '../parts/part.entity';
 import type { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import type { Quote } from '../quotes/quote.entity';
+import { quoteLabel } from '../quotes/quote-label';
 import type { QuoteRevision } from '../quotes/quote-revision.entity';
 import { RecordCheckDto } from './dto/record-check.dto';
 import { PhotoIntakeService, type UploadedPhotoFile } from '../measurements/photo-intake.service';
@@ -94,9 +95,11 @@ export class WorkOrdersService {
       }
     });
     const parts: WorkPartInput[] = [];
+    const counterParts: AcceptedPart[] = [];
     for (const line of revision.lines) {
       if (line.kind !== 'part') continue;
       const part = await this.partOfLine(manager, shopId, line.catalogKind, line.catalogItemId);
+      if (part) counterParts.push({ partId: part.id, sku: part.sku, description: part.description, quantity: line.quantity });
       parts.push(
         part
           ? { sku: part.sku, description: part.description, category: part.category, quantity: line.quantity, torqueSpecs: part.torqueSpecs, instructions: part.instructions, attributes: part.attributes }
@@ -130,7 +133,9 @@ export class WorkOrdersService {
       })
       .orIgnore()
       .execute();
-    return (result.raw as { affectedRows?: number }).affectedRows === 1 ? id : null;
+    if ((result.raw as { affectedRows?: number }).affectedRows !== 1) return null;
+    await this.counter.matchAcceptedQuote(manager, { shopId, projectId: quote.projectId, planId: revision.partsPlanId, quoteLabel: quoteLabel(quote), parts: counterParts, everyPartLinked: counterParts.length === parts.length });
+    return id;
   }
 
   /** The shop's part a quote line prices: a part row itself (`parts`), or the part carrying that fit spec. */
