@@ -35,6 +35,12 @@ export const radius = { sm: 4, md: 6, lg: 10 } as const;
 
 export const siderWidth = 232;
 
+/** The app bar stays on top while the page scrolls. */
+export const headerHeight = 56;
+
+/** For a card the page scrolls to: it stops below the app bar, not under it. */
+export const belowHeader = { scrollMarginTop: headerHeight + spacing.md } as const;
+
 export const theme: ThemeConfig = {
   token: {
     colorPrimary: palette.teal600,
@@ -65,7 +71,7 @@ export const theme: ThemeConfig = {
     Layout: {
       siderBg: palette.teal900,
       headerBg: palette.white,
-      headerHeight: 56,
+      headerHeight,
       headerPadding: `0 ${spacing.lg}px`,
       bodyBg: palette.paper,
       footerBg: palette.paper,

@@ -5,6 +5,7 @@ import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { toCatalogKind, toProjectDetail, toProjectMeasurements } from '@/config/paths';
+import { belowHeader } from '@/config/theme';
 import { useUnits } from '@/hooks/use-units';
 import { getErrorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notifier';
@@ -203,7 +204,7 @@ export function ProjectFitPage() {
               </Col>
               {!readOnly && (
                 <Col xs={24} xl={8}>
-                  <Card className="fit-control" ref={placementRef}>
+                  <Card className="fit-control" ref={placementRef} style={belowHeader}>
                     <PlacementControls
                       value={placement}
                       onChange={preview.setPreview}

@@ -1,6 +1,7 @@
 import { renderText, textParts } from '@swapwright/shared';
 import { Card, Flex, Tag, Typography } from 'antd';
 import { forwardRef, type ReactNode } from 'react';
+import { belowHeader } from '@/config/theme';
 import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
 import type { FitReport, StoredFitReport } from '../types';
@@ -23,7 +24,7 @@ export const ReportSummaryCard = forwardRef<HTMLDivElement, ReportSummaryCardPro
   const notes = stored.inputs.notes;
   const { system } = useUnits();
   return (
-    <Card ref={ref} className="fit-report-summary" size="small" title={isPreview ? 'Preview at the new placement' : 'Report'} tabIndex={-1} data-testid="report-summary">
+    <Card ref={ref} className="fit-report-summary" size="small" title={isPreview ? 'Preview at the new placement' : 'Report'} tabIndex={-1} style={belowHeader} data-testid="report-summary">
       <Flex vertical gap={8}>
         <Flex gap={8} align="center" wrap justify="space-between">
           {isPreview ? (
