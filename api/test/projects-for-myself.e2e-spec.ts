@@ -59,6 +59,12 @@ describe('projects for oneself', () => {
     expect(a.body.customer.name).toBe(estimator.user.name);
     const byCustomer = await t.http.post('/api/projects').set(...bearer(owner)).send({ customerId: DEMO_CUSTOMER_IDS.juno, title: 'For a customer' }).expect(201);
     expect(byCustomer.body.customerId).toBe(DEMO_CUSTOMER_IDS.juno);
+    // Each project says whose truck it is to the one reading it: the estimator's own is theirs, to the owner a shop job.
+    expect([a.body.forMyself, b.body.forMyself, byCustomer.body.forMyself]).toEqual([true, true, false]);
+    expect((await t.http.get(`/api/projects/${a.body.id}`).set(...bearer(owner)).expect(200)).body.forMyself).toBe(false);
+    const listed = await t.http.get('/api/projects?pageSize=100').set(...bearer(estimator)).expect(200);
+    const own = new Map(listed.body.items.map((p: { id: string; forMyself: boolean }) => [p.id, p.forMyself]));
+    expect([own.get(a.body.id), own.get(b.body.id), own.get(byCustomer.body.id)]).toEqual([true, false, false]);
   });
 
   it("marks the member's own record as theirs in the customers list and by id, and nobody else's", async () => {

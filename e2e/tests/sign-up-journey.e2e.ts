@@ -186,7 +186,7 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
     await page.setViewportSize({ width: 1366, height: 900 });
     await page.goto(`/projects/${projectId}`);
     const drafted = page.waitForResponse((r) => r.url().endsWith(`/api/projects/${projectId}/quotes`) && r.request().method() === 'POST');
-    await page.getByRole('button', { name: 'Draft a quote' }).click();
+    await page.getByRole('button', { name: 'Draft a budget' }).click();
     const draft = (await (await drafted).json()) as { label: string; forMyself: boolean };
     expect(draft.forMyself).toBe(true);
     const item = page.getByTestId(`quote-${draft.label}`);

@@ -1,7 +1,17 @@
+import { AuthUser } from '../common/tenant/auth-user';
+import { isOwnCustomerRecord } from '../customers/customer.mapper';
 import { ProjectResponseDto } from './dto/project-response.dto';
 import { Project } from './project.entity';
 
-export function mapProject(project: Project): ProjectResponseDto {
+/**
+ * Whether the project is the member's own truck: filed under their own customer record ("My own truck"). A quote of it
+ * is their budget, with nobody to send it to. A customer signed in to their own project is not a member building it.
+ */
+export function isOwnProject(project: Project, user: Pick<AuthUser, 'role' | 'userId'>): boolean {
+  return user.role !== 'customer' && project.customer != null && isOwnCustomerRecord(project.customer, user);
+}
+
+export function mapProject(project: Project, viewer: Pick<AuthUser, 'role' | 'userId'>): ProjectResponseDto {
   const hasPlacement =
     project.placementSetbackMm !== null && project.placementHeightMm !== null && project.placementTiltDeg !== null;
   return {
@@ -10,6 +20,7 @@ export function mapProject(project: Project): ProjectResponseDto {
     status: project.status,
     customerId: project.customerId,
     customer: { id: project.customerId, name: project.customer?.name ?? '' },
+    forMyself: isOwnProject(project, viewer),
     vehicleDescription: project.vehicleDescription,
     chassisModelId: project.chassisModelId,
     engineProfileId: project.engineProfileId,

@@ -25,14 +25,14 @@ export class ProjectsController {
   @Roles(...PROJECT_READERS)
   @ApiPageResponse(ProjectResponseDto)
   async list(@CurrentUser() user: AuthUser, @Query() query: ListProjectsQueryDto): Promise<Page<ProjectResponseDto>> {
-    return mapPage(await this.projects.list(user, query), mapProject);
+    return mapPage(await this.projects.list(user, query), (project) => mapProject(project, user));
   }
 
   @Post()
   @Roles(...PROJECT_WRITERS)
   @ApiCreatedResponse({ type: ProjectResponseDto })
   async create(@CurrentUser() user: AuthUser, @Body() body: CreateProjectDto): Promise<ProjectResponseDto> {
-    return mapProject(await this.projects.create(user, body));
+    return mapProject(await this.projects.create(user, body), user);
   }
 
   @Get(':id')
@@ -40,7 +40,7 @@ export class ProjectsController {
   @ApiOkResponse({ type: ProjectResponseDto })
   @ApiNotFoundResponse({ type: ErrorResponseDto })
   async get(@CurrentUser() user: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<ProjectResponseDto> {
-    return mapProject(await this.projects.get(user, id));
+    return mapProject(await this.projects.get(user, id), user);
   }
 
   @Patch(':id')
@@ -51,7 +51,7 @@ export class ProjectsController {
     @Param('id', ParseIdPipe) id: string,
     @Body() body: UpdateProjectDto,
   ): Promise<ProjectResponseDto> {
-    return mapProject(await this.projects.update(user, id, body));
+    return mapProject(await this.projects.update(user, id, body), user);
   }
 
   @Delete(':id')

@@ -8,10 +8,11 @@ import {
   QuoteSettingsResponseDto,
 } from './dto/quote-response.dto';
 import type { AuthUser } from '../common/tenant/auth-user';
+import { isOwnProject } from '../projects/project.mapper';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuoteRevision } from './quote-revision.entity';
 import { QuoteSettings } from './quote-settings.entity';
-import { isOwnProject, quoteLabel, QuoteView } from './quotes.service';
+import { quoteLabel, QuoteView } from './quotes.service';
 
 /**
  * Who reads the quote: the shop's own people see how each price was made; the customer (signed in, or holding the

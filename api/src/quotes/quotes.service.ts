@@ -20,7 +20,7 @@ import { MailService } from '../mail/mail.service';
 import { JobHandlers } from '../jobs/job-handlers';
 import { JobsService } from '../jobs/jobs.service';
 import { Project } from '../projects/project.entity';
-import { isOwnCustomerRecord } from '../customers/customer.mapper';
+import { isOwnProject } from '../projects/project.mapper';
 import { ProjectsService } from '../projects/projects.service';
 import { Shop } from '../shops/shop.entity';
 import { ShopsService } from '../shops/shops.service';
@@ -67,14 +67,6 @@ function addDays(iso: string, days: number): string {
 /** A last valid day given by the estimator must be the shop's today or later (its day, as sending and lapsing judge it). */
 function refusePastValidity(validUntil: string | undefined, today: string): void {
   if (validUntil !== undefined && validUntil < today) throw QuoteErrors.validUntilPast(validUntil);
-}
-
-/**
- * Whether the project is the member's own truck: filed under their own customer record ("My own truck"). A quote of it
- * is their budget, with nobody to send it to. A customer signed in to their own project is not a member building it.
- */
-export function isOwnProject(project: Project, user: Pick<AuthUser, 'role' | 'userId'>): boolean {
-  return user.role !== 'customer' && project.customer != null && isOwnCustomerRecord(project.customer, user);
 }
 
 /** A quote awaiting an answer reads as lapsed once the shop's today (`todayIn(shop.timeZone)`) is past its last valid day. */

@@ -2133,6 +2133,8 @@ export interface components {
             /** Format: uuid */
             customerId: string;
             customer: components["schemas"]["ProjectCustomerRefDto"];
+            /** @description True when the project is the signed-in member's own vehicle (filed under their own customer record): its quotes are the builder's budget, with nobody to send them to */
+            forMyself: boolean;
             vehicleDescription: string;
             chassisModelId: string | null;
             engineProfileId: string | null;

@@ -25,6 +25,10 @@ export class ProjectResponseDto {
   @ApiProperty({ enum: PROJECT_STATUSES }) status: ProjectStatus;
   @ApiProperty({ format: 'uuid' }) customerId: string;
   @ApiProperty({ type: ProjectCustomerRefDto }) customer: ProjectCustomerRefDto;
+  @ApiProperty({
+    description: "True when the project is the signed-in member's own vehicle (filed under their own customer record): its quotes are the builder's budget, with nobody to send them to",
+  })
+  forMyself: boolean;
   @ApiProperty() vehicleDescription: string;
   @ApiProperty({ type: String, nullable: true }) chassisModelId: string | null;
   @ApiProperty({ type: String, nullable: true }) engineProfileId: string | null;

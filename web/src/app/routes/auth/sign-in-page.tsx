@@ -19,7 +19,7 @@ export function SignInPage() {
       </p>
       <Divider plain>New here?</Divider>
       <p style={{ textAlign: 'center', margin: 0 }}>
-        <Link to={paths.signUp}>Create a shop</Link> — free for a one-person garage.
+        <Link to={paths.signUp}>Set up your shop or garage</Link> — free for one person building their own truck.
       </p>
     </RedirectIfSignedIn>
   );

@@ -86,7 +86,7 @@ export function ProjectDetailPage() {
       <Card style={{ marginBottom: 16 }} title="Stage">
         <ProjectStageSteps status={p.status} />
       </Card>
-      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} canAnswer={user.role === 'customer'} />}
+      {user.role !== 'fabricator' && user.role !== 'counter' && <ProjectQuotesCard projectId={p.id} canWrite={canEdit} canAnswer={user.role === 'customer'} forMyself={p.forMyself} />}
       {canWorkOrders(user.role) && <ProjectWorkOrderCard projectId={p.id} toWorkOrder={toWorkOrder} opened={projectStatuses.indexOf(p.status) >= projectStatuses.indexOf('deposit-paid')} />}
       <Row gutter={[16, 16]}>
         <Col xs={24} xl={12}>

@@ -18,6 +18,8 @@ export interface ProjectQuotesCardProps {
   canWrite: boolean;
   /** The customer opens a sent quote of their own project to read it, answer it and pay the deposit. */
   canAnswer?: boolean;
+  /** The member's own truck: its quote is their budget, and the card says so. */
+  forMyself?: boolean;
 }
 
 /** What the customer's link on a sent quote says: what is waiting for them. */
@@ -32,7 +34,7 @@ function customerAction(quote: { status: string; depositState: string }): string
  * deposit. A quote of the member's own truck has nobody to send it to: it says so, and offers to start the build from it
  * (the work order opens) in place of the button.
  */
-export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: ProjectQuotesCardProps) {
+export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false, forMyself = false }: ProjectQuotesCardProps) {
   const quotes = useProjectQuotes(projectId);
   const create = useCreateQuote(projectId);
   const send = useSendQuote(projectId);
@@ -40,19 +42,19 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false }: Pr
   const navigate = useNavigate();
   return (
     <Card
-      title="Quotes"
+      title={forMyself ? 'Budget' : 'Quotes'}
       style={{ marginBottom: 16 }}
       extra={
         canWrite && (
-          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`Quote ${quote.label} drafted from the parts plan and the fit report`) })} loading={create.isPending}>
-            Draft a quote
+          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`${forMyself ? 'Budget' : 'Quote'} ${quote.label} drafted from the parts plan and the fit report`) })} loading={create.isPending}>
+            {forMyself ? 'Draft a budget' : 'Draft a quote'}
           </Button>
         )
       }
     >
       <List
         dataSource={quotes.data ?? []}
-        locale={{ emptyText: <Empty image={Empty.PRESENTED_IMAGE_SIMPLE} description="No quote yet" /> }}
+        locale={{ emptyText: <Empty image={Empty.PRESENTED_IMAGE_SIMPLE} description={forMyself ? 'No budget yet: draft one from the parts plan' : 'No quote yet'} /> }}
         loading={quotes.isLoading}
         renderItem={(quote) => (
           <List.Item

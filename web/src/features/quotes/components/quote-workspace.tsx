@@ -66,7 +66,7 @@ export function QuoteWorkspace({ quoteId, canWrite, timeZone }: QuoteWorkspacePr
   return (
     <>
       <PageHeader
-        eyebrow="Quote"
+        eyebrow={quote.forMyself ? 'Budget of your own build' : 'Quote'}
         title={`${quote.label} · ${quote.projectTitle}`}
         subtitle={
           <Space wrap size={8}>

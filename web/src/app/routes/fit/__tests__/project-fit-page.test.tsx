@@ -19,6 +19,7 @@ const project: Project = {
   status: 'fit-checked',
   customerId: 'cust-1',
   customer: { id: 'cust-1', name: 'A customer' },
+  forMyself: false,
   vehicleDescription: 'Long-bed pickup',
   chassisModelId: 'ch-1',
   engineProfileId: 'en-1',

@@ -31,7 +31,7 @@ function mockGets(quote: Quote, { counts, unresolved, measured }: ProjectFacts =
 
 function renderCard(quote: Quote, canWrite = true, facts?: ProjectFacts) {
   mockGets(quote, facts);
-  return renderWithApp(<ProjectQuotesCard projectId="project-1" canWrite={canWrite} />);
+  return renderWithApp(<ProjectQuotesCard projectId="project-1" canWrite={canWrite} forMyself={quote.forMyself} />);
 }
 
 /** The confirmation's own button, once it has read what is still open. */
@@ -65,6 +65,9 @@ describe('ProjectQuotesCard: sending a quote', () => {
     // the lines stay the owner's to change
     expect(screen.getByRole('link', { name: 'Edit lines' })).toBeInTheDocument();
     expect(post).not.toHaveBeenCalled();
+    // the card of one's own truck speaks of a budget
+    expect(screen.getByText('Budget', { selector: '.ant-card-head-title' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Draft a budget' })).toBeInTheDocument();
   });
 
   it('shows neither the button nor the note to someone who only reads quotes', async () => {
