@@ -6,7 +6,7 @@ export interface QuoteTotalsProps {
   quote: Quote;
 }
 
-/** The revision's totals as the API worked them out, with the rounding rule the figures follow. */
+/** The revision's totals as the API worked them out (a customer's quote with its deposit), with the rounding rule the figures follow. */
 export function QuoteTotals({ quote }: QuoteTotalsProps) {
   const { revision } = quote;
   const money = (cents: number) => formatMoney(cents, revision.currency);
@@ -30,12 +30,15 @@ export function QuoteTotals({ quote }: QuoteTotalsProps) {
               <strong>{money(totals.totalCents)}</strong>
             </td>
           </tr>
-          <tr>
-            <td style={{ paddingRight: 24 }}>Deposit on approval</td>
-            <td style={{ textAlign: 'right' }} data-testid="quote-deposit">
-              {money(totals.depositCents)}
-            </td>
-          </tr>
+          {/* the budget of one's own build has nobody to pay a deposit to */}
+          {!quote.forMyself && (
+            <tr>
+              <td style={{ paddingRight: 24 }}>Deposit on approval</td>
+              <td style={{ textAlign: 'right' }} data-testid="quote-deposit">
+                {money(totals.depositCents)}
+              </td>
+            </tr>
+          )}
         </tbody>
       </table>
       <Typography.Paragraph type="secondary" style={{ marginTop: 12, fontSize: 12 }}>
