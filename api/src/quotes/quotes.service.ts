@@ -114,6 +114,7 @@ export class QuotesService implements OnModuleInit {
   }
 
   onModuleInit(): void {
+    this.shops.onRatesChanged((manager, shop, actor) => this.repriceDrafts(manager, shop, actor));
     // The quote's e-mail is rendered (PDF included) and sent by the background worker, from the revision that was sent.
     this.jobHandlers.register('quote.mail', async (payload, { job }) => {
       const { shopId, quoteId, revision } = payload as { shopId: string; quoteId: string; revision: number };
@@ -482,6 +483,39 @@ export class QuotesService implements OnModuleInit {
     const sent = all.find((revision) => revision.number === quote.sentRevision) ?? null;
     const revision = sentOnly ? (sent ?? revisions[revisions.length - 1]) : all[all.length - 1];
     return { quote, status: effectiveQuoteStatus(quote, sent, today ?? (await this.shopToday(quote.shopId))), project, revision, revisions };
+  }
+
+  /**
+   * A quote still being written (its working revision not sent, the quote not approved) takes the shop's new labor,
+   * supplies and parts-tax rates, in the transaction of the rate change, one audit entry each. A sent revision keeps
+   * the rates it was sent with; changing it makes the next revision, which takes the rates it carries.
+   */
+  private async repriceDrafts(manager: EntityManager, shop: Shop, actor: AuthUser): Promise<void> {
+    const drafts = await manager
+      .createQueryBuilder(QuoteRevision, 'r')
+      .innerJoin(Quote, 'q', 'q.id = r.quoteId AND q.shopId = r.shopId AND q.latestRevision = r.number')
+      .where("r.shopId = :shopId AND r.sentAt IS NULL AND q.status <> 'approved'", { shopId: shop.id })
+      .orderBy('r.id', 'ASC')
+      .setLock('pessimistic_write')
+      .getMany();
+    const rates = { laborRateCents: Math.round(shop.laborRatePerHour * 100), suppliesPercent: shop.shopSuppliesPercent, partsTaxPercent: shop.taxRatePercent };
+    for (const draft of drafts) {
+      const next = { ...draft, ...rates };
+      const priced = priceRevision(next);
+      if (priced.totals.totalCents === draft.totals.totalCents && rates.laborRateCents === draft.laborRateCents) continue;
+      const [quote] = await manager.query('SELECT number FROM quotes WHERE id = ?', [draft.quoteId]);
+      await this.audit.record(manager, {
+        shopId: shop.id,
+        actor,
+        kind: 'money',
+        action: 'quote.repriced-at-shop-rates',
+        subjectId: draft.quoteId,
+        summary: `Quote ${quoteLabel({ number: Number(quote.number) })} revision ${draft.number}, still being written, repriced at the shop's new rates: total ${formatMoney(draft.totals.totalCents, draft.currency)} → ${formatMoney(priced.totals.totalCents, draft.currency)}.`,
+        before: { laborRateCents: draft.laborRateCents, suppliesPercent: Number(draft.suppliesPercent), partsTaxPercent: Number(draft.partsTaxPercent), totalCents: draft.totals.totalCents },
+        after: { ...rates, totalCents: priced.totals.totalCents },
+      });
+      await manager.update(QuoteRevision, { id: draft.id, shopId: shop.id, sentAt: IsNull() }, { ...rates, lines: priced.lines, totals: priced.totals });
+    }
   }
 
   private editable(revision: QuoteRevision): Partial<QuoteRevision> {

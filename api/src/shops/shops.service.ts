@@ -13,12 +13,22 @@ import { ShopErrors } from './shops.errors';
 /** The shop fields that price work: their changes are audited. */
 const MONEY_FIELDS = ['laborRatePerHour', 'taxRatePercent', 'shopSuppliesPercent'] as const;
 
+/** Work another module does, in the same transaction, when the shop's rates change (the quotes module reprices its drafts). */
+export type ShopRatesChanged = (manager: EntityManager, shop: Shop, actor: AuthUser) => Promise<void>;
+
 @Injectable()
 export class ShopsService {
+  private readonly ratesChangedHandlers: ShopRatesChanged[] = [];
+
   constructor(
     @InjectRepository(Shop) private readonly shops: Repository<Shop>,
     private readonly audit: AuditService,
   ) {}
+
+  /** Registers work to do, inside the change's transaction, after the shop's rates change. */
+  onRatesChanged(handler: ShopRatesChanged): void {
+    this.ratesChangedHandlers.push(handler);
+  }
 
   async getCurrent(user: Pick<AuthUser, 'shopId'>): Promise<Shop> {
     const shop = await this.shops.findOne({ where: { id: user.shopId } });
@@ -56,7 +66,9 @@ export class ShopsService {
       Object.assign(shop, sent, changes.name !== undefined ? { name: changes.name.trim() } : {});
       if (changes.currency) shop.currency = changes.currency.toUpperCase();
       if (changes.timeZone) shop.timeZone = canonicalTimeZone(changes.timeZone);
-      return manager.save(shop);
+      const saved = await manager.save(shop);
+      if (moved) for (const handler of this.ratesChangedHandlers) await handler(manager, saved, user);
+      return saved;
     });
   }
 

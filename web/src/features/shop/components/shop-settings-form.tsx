@@ -100,7 +100,9 @@ export function ShopSettingsForm({ shop, canEdit }: ShopSettingsFormProps) {
           </Col>
         </Row>
         <Typography.Text type="secondary">
-          Currency: {shop.currency}. Check the tax rate against your local rules; quotes use it as entered.
+          Currency: {shop.currency}. Check the tax rate against your local rules; quotes use it as entered. Quotes still
+          being written (and budgets of your own builds not yet started) take new rates when you save; a quote already
+          sent keeps the rates it was sent with.
         </Typography.Text>
       </Card>
       {canEdit && (

@@ -2,7 +2,8 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { apiClient } from '@/lib/api-client';
-import { renderWithApp } from '@/test/render';
+import { quoteKeys } from '@/features/quotes/api/quote-keys';
+import { createTestQueryClient, renderWithApp } from '@/test/render';
 import { timeZoneMatches, timeZoneOptions } from '../../time-zones';
 import type { Shop } from '../../types';
 import { ShopSettingsForm } from '../shop-settings-form';
@@ -53,5 +54,21 @@ describe('ShopSettingsForm: time zone for quote dates', () => {
     renderWithApp(<ShopSettingsForm shop={shop} canEdit={false} />);
     expect(screen.getByRole('combobox', { name: 'Time zone for quote dates' })).toBeDisabled();
     expect(screen.queryByRole('button', { name: 'Save settings' })).toBeNull();
+  });
+});
+
+describe('ShopSettingsForm: rates for quotes', () => {
+  it('saves a new labor rate and has open quotes read again, since the drafts were repriced with it', async () => {
+    const patch = vi.spyOn(apiClient, 'patch').mockImplementation(async (_url, body) => ({ data: { ...shop, ...(body as object) } }));
+    const queryClient = createTestQueryClient();
+    queryClient.setQueryData(quoteKeys.detail('quote-7'), { id: 'quote-7' });
+    renderWithApp(<ShopSettingsForm shop={shop} canEdit />, { queryClient });
+    expect(screen.getByText(/Quotes still being written .* take new rates when you save/)).toBeInTheDocument();
+    const rate = screen.getByRole('spinbutton', { name: 'Labor rate per hour' });
+    await userEvent.clear(rate);
+    await userEvent.type(rate, '150');
+    await userEvent.click(screen.getByRole('button', { name: 'Save settings' }));
+    await waitFor(() => expect(patch).toHaveBeenCalledWith('/shops/current', { laborRatePerHour: 150 }, expect.anything()));
+    await waitFor(() => expect(queryClient.getQueryState(quoteKeys.detail('quote-7'))?.isInvalidated).toBe(true));
   });
 });
