@@ -51,4 +51,17 @@ describe("a quote still being written follows the shop's rates; a sent one keeps
     expect(repriced.map((event) => event.subjectId)).not.toContain(sentId);
     expect(repriced.find((event) => event.subjectId === draftId)?.summary).toMatch(/still being written, repriced at the shop's new rates: total \$[\d,.]+ → \$[\d,.]+\.$/);
   });
+
+  it('takes a new tax on labor from the quote terms too, on labor with its supplies share', async () => {
+    const before = await revisionOf(draftId);
+    await t.http.put('/api/quote-settings').set(...bearer(demo.owner)).send({ laborTaxPercent: 5 }).expect(200);
+    const after = (await t.http.get(`/api/quotes/${draftId}`).set(...bearer(demo.estimator)).expect(200)).body.revision;
+    // Source: the quote's printed rounding rule: labor tax is (labor after discount + supplies) × the labor tax rate,
+    // rounded half away from zero to the cent. No discount here, so it is (1,151.75 + supplies) × 5 %.
+    const laborTax = Math.round((115175 + after.totals.suppliesCents) * 0.05);
+    expect(after.laborTaxPercent).toBe(5);
+    expect(after.totals.laborTaxCents).toBe(laborTax);
+    expect(after.totals.totalCents).toBe(before.totals.totalCents + laborTax);
+    expect((await revisionOf(sentId)).totals.totalCents).toBe(sentBefore.totals.totalCents);
+  });
 });

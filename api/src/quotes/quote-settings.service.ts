@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Repository } from 'typeorm';
+import { EntityManager, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { changedFigures } from '../audit/changed-figures';
 import { AuthUser } from '../common/tenant/auth-user';
@@ -14,13 +14,24 @@ export const DEFAULT_QUOTE_TERMS =
 
 /** The quote terms that price work (tax on labor, supplies cap, deposit, markup): their changes are audited as money. */
 const MONEY_TERMS = ['laborTaxPercent', 'suppliesCapCents', 'depositPercent', 'defaultMarkupPercent'] as const;
+/** The terms every revision carries into its totals: a change reprices the quotes still being written. */
+const PRICING_TERMS = ['laborTaxPercent', 'suppliesCapCents'] as const;
+
+export type QuotePricingChanged = (manager: EntityManager, shopId: string, actor: AuthUser) => Promise<void>;
 
 @Injectable()
 export class QuoteSettingsService {
+  private readonly pricingChangedHandlers: QuotePricingChanged[] = [];
+
   constructor(
     @InjectRepository(QuoteSettings) private readonly settings: Repository<QuoteSettings>,
     private readonly audit: AuditService,
   ) {}
+
+  /** Registers work to do, inside the change's transaction, after the tax on labor or the supplies cap changes. */
+  onPricingChanged(handler: QuotePricingChanged): void {
+    this.pricingChangedHandlers.push(handler);
+  }
 
   async forShop(user: Pick<AuthUser, 'shopId'>): Promise<QuoteSettings> {
     const stored = await this.settings.findOne({ where: { shopId: user.shopId } });
@@ -45,6 +56,7 @@ export class QuoteSettingsService {
       const stored = await manager.findOne(QuoteSettings, { where: { shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
       const current = stored ?? (await this.forShop(user));
       const moved = changedFigures(current, changes, MONEY_TERMS);
+      const repriced = changedFigures(current, changes, PRICING_TERMS) !== null;
       if (moved) {
         await this.audit.record(manager, {
           shopId: user.shopId,
@@ -66,6 +78,7 @@ export class QuoteSettingsService {
         ...(changes.terms !== undefined && { terms: changes.terms }),
       });
       await manager.save(QuoteSettings, merged);
+      if (repriced) for (const handler of this.pricingChangedHandlers) await handler(manager, user.shopId, user);
     });
     return this.forShop(user);
   }

@@ -34,6 +34,7 @@ import { priceRevision, UnpricedLine } from './quote-money.adapter';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuotePdfService } from './quote-pdf.service';
 import { QuoteLine, QuoteRevision } from './quote-revision.entity';
+import { QuoteSettings } from './quote-settings.entity';
 import { QuoteSettingsService } from './quote-settings.service';
 import { Quote, QUOTE_STATUSES, QuoteStatus } from './quote.entity';
 import { QuoteErrors } from './quotes.errors';
@@ -114,7 +115,8 @@ export class QuotesService implements OnModuleInit {
   }
 
   onModuleInit(): void {
-    this.shops.onRatesChanged((manager, shop, actor) => this.repriceDrafts(manager, shop, actor));
+    this.shops.onRatesChanged((manager, shop, actor) => this.repriceDrafts(manager, shop.id, actor));
+    this.settings.onPricingChanged((manager, shopId, actor) => this.repriceDrafts(manager, shopId, actor));
     // The quote's e-mail is rendered (PDF included) and sent by the background worker, from the revision that was sent.
     this.jobHandlers.register('quote.mail', async (payload, { job }) => {
       const { shopId, quoteId, revision } = payload as { shopId: string; quoteId: string; revision: number };
@@ -486,35 +488,49 @@ export class QuotesService implements OnModuleInit {
   }
 
   /**
-   * A quote still being written (its working revision not sent, the quote not approved) takes the shop's new labor,
-   * supplies and parts-tax rates, in the transaction of the rate change, one audit entry each. A sent revision keeps
-   * the rates it was sent with; changing it makes the next revision, which takes the rates it carries.
+   * A quote still being written (its working revision not sent, the quote not approved) takes the shop's new labor
+   * rate, supplies rate and cap, and parts and labor tax, in the transaction of the change (read inside it), one audit
+   * entry each. A sent revision keeps the rates it was sent with; changing it makes the next revision, with its own.
    */
-  private async repriceDrafts(manager: EntityManager, shop: Shop, actor: AuthUser): Promise<void> {
+  private async repriceDrafts(manager: EntityManager, shopId: string, actor: AuthUser): Promise<void> {
+    const shop = await manager.findOneOrFail(Shop, { where: { id: shopId } });
+    const terms = await manager.findOne(QuoteSettings, { where: { shopId } });
     const drafts = await manager
       .createQueryBuilder(QuoteRevision, 'r')
       .innerJoin(Quote, 'q', 'q.id = r.quoteId AND q.shopId = r.shopId AND q.latestRevision = r.number')
-      .where("r.shopId = :shopId AND r.sentAt IS NULL AND q.status <> 'approved'", { shopId: shop.id })
+      .where("r.shopId = :shopId AND r.sentAt IS NULL AND q.status <> 'approved'", { shopId })
       .orderBy('r.id', 'ASC')
       .setLock('pessimistic_write')
       .getMany();
-    const rates = { laborRateCents: Math.round(shop.laborRatePerHour * 100), suppliesPercent: shop.shopSuppliesPercent, partsTaxPercent: shop.taxRatePercent };
+    const rates = {
+      laborRateCents: Math.round(shop.laborRatePerHour * 100),
+      suppliesPercent: shop.shopSuppliesPercent,
+      suppliesCapCents: terms?.suppliesCapCents ?? null,
+      partsTaxPercent: shop.taxRatePercent,
+      laborTaxPercent: terms?.laborTaxPercent ?? 0,
+    };
     for (const draft of drafts) {
-      const next = { ...draft, ...rates };
-      const priced = priceRevision(next);
-      if (priced.totals.totalCents === draft.totals.totalCents && rates.laborRateCents === draft.laborRateCents) continue;
+      if ((Object.keys(rates) as (keyof typeof rates)[]).every((rate) => draft[rate] === rates[rate])) continue;
+      const priced = priceRevision({ ...draft, ...rates });
       const [quote] = await manager.query('SELECT number FROM quotes WHERE id = ?', [draft.quoteId]);
       await this.audit.record(manager, {
-        shopId: shop.id,
+        shopId,
         actor,
         kind: 'money',
         action: 'quote.repriced-at-shop-rates',
         subjectId: draft.quoteId,
         summary: `Quote ${quoteLabel({ number: Number(quote.number) })} revision ${draft.number}, still being written, repriced at the shop's new rates: total ${formatMoney(draft.totals.totalCents, draft.currency)} → ${formatMoney(priced.totals.totalCents, draft.currency)}.`,
-        before: { laborRateCents: draft.laborRateCents, suppliesPercent: Number(draft.suppliesPercent), partsTaxPercent: Number(draft.partsTaxPercent), totalCents: draft.totals.totalCents },
+        before: {
+          laborRateCents: draft.laborRateCents,
+          suppliesPercent: draft.suppliesPercent,
+          suppliesCapCents: draft.suppliesCapCents,
+          partsTaxPercent: draft.partsTaxPercent,
+          laborTaxPercent: draft.laborTaxPercent,
+          totalCents: draft.totals.totalCents,
+        },
         after: { ...rates, totalCents: priced.totals.totalCents },
       });
-      await manager.update(QuoteRevision, { id: draft.id, shopId: shop.id, sentAt: IsNull() }, { ...rates, lines: priced.lines, totals: priced.totals });
+      await manager.update(QuoteRevision, { id: draft.id, shopId, sentAt: IsNull() }, { ...rates, lines: priced.lines, totals: priced.totals });
     }
   }
 

@@ -92,7 +92,8 @@ export function QuoteTermsForm({ canEdit, currency = 'USD' }: QuoteTermsFormProp
           <Input.TextArea autoSize={{ minRows: 3, maxRows: 10 }} showCount maxLength={4000} />
         </Form.Item>
         <Typography.Paragraph type="secondary">
-          New quotes and revisions use these; a sent quote keeps the terms it was sent with. Check the tax rates against your local rules.
+          New quotes and revisions use these, and quotes still being written take a new tax on labor or supplies cap when
+          you save; a sent quote keeps the terms it was sent with. Check the tax rates against your local rules.
         </Typography.Paragraph>
         {canEdit && (
           <Button type="primary" htmlType="submit" loading={update.isPending}>
