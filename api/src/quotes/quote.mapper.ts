@@ -12,7 +12,8 @@ import { isOwnProject } from '../projects/project.mapper';
 import { QuoteNotification } from './quote-notification.entity';
 import { QuoteRevision } from './quote-revision.entity';
 import { QuoteSettings } from './quote-settings.entity';
-import { quoteLabel, QuoteView } from './quotes.service';
+import { quoteLabel } from './quote-label';
+import { QuoteView } from './quotes.service';
 
 /**
  * Who reads the quote: the shop's own people see how each price was made; the customer (signed in, or holding the

@@ -3,7 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { diffRevisions, endOfDayIn, formatCalendarDate, formatMoney, QUOTE_STATUS_LABELS, todayIn, utcToday, type FitReport, type PartsPlanResult, type RevisionDiff } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
-import { DataSource, EntityManager, IsNull, Repository } from 'typeorm';
+import { DataSource, EntityManager, In, IsNull, Repository } from 'typeorm';
 import { CatalogService } from '../catalog/catalog.service';
 import { CatalogKind } from '../catalog/catalog-kinds';
 import { AuditService } from '../audit/audit.service';
@@ -115,8 +115,9 @@ export class QuotesService implements OnModuleInit {
   }
 
   onModuleInit(): void {
-    this.shops.onRatesChanged((manager, shop, actor) => this.repriceDrafts(manager, shop.id, actor));
-    this.settings.onPricingChanged((manager, shopId, actor) => this.repriceDrafts(manager, shopId, actor));
+    const reprice = (manager: EntityManager, shopId: string, actor: AuthUser) => this.repriceDrafts(manager, shopId, actor);
+    this.shops.onRatesChanged(reprice);
+    this.settings.onPricingChanged(reprice);
     // The quote's e-mail is rendered (PDF included) and sent by the background worker, from the revision that was sent.
     this.jobHandlers.register('quote.mail', async (payload, { job }) => {
       const { shopId, quoteId, revision } = payload as { shopId: string; quoteId: string; revision: number };
@@ -509,17 +510,18 @@ export class QuotesService implements OnModuleInit {
       partsTaxPercent: shop.taxRatePercent,
       laborTaxPercent: terms?.laborTaxPercent ?? 0,
     };
-    for (const draft of drafts) {
-      if ((Object.keys(rates) as (keyof typeof rates)[]).every((rate) => draft[rate] === rates[rate])) continue;
+    const changed = drafts.filter((draft) => (Object.keys(rates) as (keyof typeof rates)[]).some((rate) => draft[rate] !== rates[rate]));
+    if (changed.length === 0) return;
+    const numbers = new Map((await manager.find(Quote, { select: { id: true, number: true }, where: { shopId, id: In(changed.map((draft) => draft.quoteId)) } })).map((quote) => [quote.id, quote.number]));
+    for (const draft of changed) {
       const priced = priceRevision({ ...draft, ...rates });
-      const [quote] = await manager.query('SELECT number FROM quotes WHERE id = ?', [draft.quoteId]);
       await this.audit.record(manager, {
         shopId,
         actor,
         kind: 'money',
         action: 'quote.repriced-at-shop-rates',
         subjectId: draft.quoteId,
-        summary: `Quote ${quoteLabel({ number: Number(quote.number) })} revision ${draft.number}, still being written, repriced at the shop's new rates: total ${formatMoney(draft.totals.totalCents, draft.currency)} → ${formatMoney(priced.totals.totalCents, draft.currency)}.`,
+        summary: `Quote ${quoteLabel({ number: numbers.get(draft.quoteId) ?? 0 })} revision ${draft.number}, still being written, repriced at the shop's new rates: total ${formatMoney(draft.totals.totalCents, draft.currency)} → ${formatMoney(priced.totals.totalCents, draft.currency)}.`,
         before: {
           laborRateCents: draft.laborRateCents,
           suppliesPercent: draft.suppliesPercent,
@@ -705,4 +707,3 @@ export class QuotesService implements OnModuleInit {
   }
 }
 
-export { quoteLabel } from './quote-label';

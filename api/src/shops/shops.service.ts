@@ -14,7 +14,7 @@ import { ShopErrors } from './shops.errors';
 const MONEY_FIELDS = ['laborRatePerHour', 'taxRatePercent', 'shopSuppliesPercent'] as const;
 
 /** Work another module does, in the same transaction, when the shop's rates change (the quotes module reprices its drafts). */
-export type ShopRatesChanged = (manager: EntityManager, shop: Shop, actor: AuthUser) => Promise<void>;
+export type ShopRatesChanged = (manager: EntityManager, shopId: string, actor: AuthUser) => Promise<void>;
 
 @Injectable()
 export class ShopsService {
@@ -67,7 +67,7 @@ export class ShopsService {
       if (changes.currency) shop.currency = changes.currency.toUpperCase();
       if (changes.timeZone) shop.timeZone = canonicalTimeZone(changes.timeZone);
       const saved = await manager.save(shop);
-      if (moved) for (const handler of this.ratesChangedHandlers) await handler(manager, saved, user);
+      if (moved) for (const handler of this.ratesChangedHandlers) await handler(manager, saved.id, user);
       return saved;
     });
   }

@@ -1,6 +1,6 @@
 import { renderText, textParts } from '@swapwright/shared';
 import { Card, Flex, Tag, Typography } from 'antd';
-import { forwardRef, type ReactNode } from 'react';
+import type { ReactNode, Ref } from 'react';
 import { belowHeader } from '@/config/theme';
 import { useUnits } from '@/hooks/use-units';
 import { formatDateTime } from '@/lib/dates';
@@ -14,13 +14,15 @@ export type ReportSummaryCardProps = {
   isPreview: boolean;
   /** Shown with a preview: what to do with it (keep the placement, or go back to the stored one). */
   previewActions?: ReactNode;
+  /** The card's element, for the page to scroll to (React 19 passes a ref as a prop). */
+  ref?: Ref<HTMLDivElement>;
 };
 
 /**
  * Which report is on screen, its counts, and what the server filled in or left out when it ran. The date and the
  * counts sit in the card's body, where they wrap on a phone (in the card's head they were cut off at 390 px).
  */
-export const ReportSummaryCard = forwardRef<HTMLDivElement, ReportSummaryCardProps>(function ReportSummaryCard({ stored, shown, isPreview, previewActions }, ref) {
+export function ReportSummaryCard({ stored, shown, isPreview, previewActions, ref }: ReportSummaryCardProps) {
   const notes = stored.inputs.notes;
   const { system } = useUnits();
   return (
@@ -62,4 +64,4 @@ export const ReportSummaryCard = forwardRef<HTMLDivElement, ReportSummaryCardPro
       </Flex>
     </Card>
   );
-});
+}
