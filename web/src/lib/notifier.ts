@@ -31,9 +31,9 @@ export function notifyError({ title, description, key, reference }: NotifyOption
 }
 
 /**
- * Bottom right: a confirmation must not land under the pointer on the page header's buttons
- * (where most saves and sends are clicked), since hovering keeps it open over them.
+ * A confirmation closes after 3 s even under the pointer: it appears where buttons were just clicked (the page header,
+ * a drawer's footer), and pausing on hover kept it open over them.
  */
 export function notifySuccess({ title, description, key }: NotifyOptions): void {
-  instance?.success({ title, description, key, placement: 'bottomRight', duration: 3 });
+  instance?.success({ title, description, key, placement: 'topRight', duration: 3, pauseOnHover: false });
 }

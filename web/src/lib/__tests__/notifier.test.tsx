@@ -18,11 +18,11 @@ describe('error notices', () => {
 });
 
 describe('success notices', () => {
-  it('appear at the bottom right, clear of the page header where the button was just clicked', () => {
+  it('close on time even under the pointer, so they never keep covering the button just clicked', () => {
     const success = vi.fn();
     registerNotifier({ success } as unknown as NotificationInstance);
     notifySuccess({ title: 'Quote Q-1 sent' });
     registerNotifier(null);
-    expect(success).toHaveBeenCalledWith(expect.objectContaining({ title: 'Quote Q-1 sent', placement: 'bottomRight' }));
+    expect(success).toHaveBeenCalledWith(expect.objectContaining({ title: 'Quote Q-1 sent', duration: 3, pauseOnHover: false }));
   });
 });
