@@ -1,6 +1,7 @@
 import { DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { OTHER_SHOP } from './fixtures/other-shop.fixture';
 import { demoOperation, SHOP_QUOTE_LINES } from './fixtures/shop-quote-lines';
+import { pdfText } from './helpers/pdf-text';
 import { bearer, countRows, createTestApp, jobsSettled, seedWithParts, Session, signIn, signUpThroughMail, TestApp } from './helpers/test-app';
 
 const RIDGEBACK = DEMO_PROJECT_IDS.ridgeback;
@@ -68,6 +69,30 @@ describe('starting the build of one’s own truck', () => {
     // Nothing to mail: no quote e-mail, no answer e-mail, no payment.
     expect(await countRows(t.dataSource, 'jobs')).toBe(jobsBefore);
     expect(await countRows(t.dataSource, 'deposit_payments')).toBe(0);
+  });
+
+  it('prints the budget as a budget: no deposit, approval terms or last valid day; a colleague reading it gets the quote', async () => {
+    const { quoteId } = await ownQuote(demo.estimator, HAND_LINES, 'Estimator own truck: print');
+    const download = (session: Session) =>
+      t.http
+        .get(`/api/quotes/${quoteId}/pdf`)
+        .set(...bearer(session))
+        .buffer(true)
+        .parse((res, done) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (chunk: Buffer) => chunks.push(chunk));
+          res.on('end', () => done(null, Buffer.concat(chunks)));
+        });
+    const own = await download(demo.estimator);
+    expect(own.status).toBe(200);
+    expect(own.headers['content-disposition']).toMatch(/filename="Budget-Q-\d{4}-rev1\.pdf"/);
+    const budget = (await pdfText(own.body as Buffer)).replace(/\s+/g, ' ');
+    expect(budget).toContain('Budget of your own build');
+    expect(budget).not.toMatch(/Deposit due|Valid until/);
+
+    const colleague = await download(demo.owner);
+    expect(colleague.headers['content-disposition']).toMatch(/filename="Q-\d{4}-rev1\.pdf"/);
+    expect((await pdfText(colleague.body as Buffer)).replace(/\s+/g, ' ')).toContain('Deposit due on approval');
   });
 
   it('answers 409 when started again, and nothing doubles', async () => {

@@ -205,6 +205,10 @@ describe('a new owner signs up and finishes through the e-mailed link', () => {
 
     // The budget page says labor is counted as the builder's own time in a new garage (no labor rate yet).
     await expectText(page.getByTestId('own-time-labor'), /Labor is counted at \$0 per hour: [\d.]+ h of your own time/);
+    // The budget prints as a budget, named as one.
+    const download = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download PDF' }).click();
+    expect((await download).suggestedFilename()).toBe(`budget-${draft.label}-revision-1.pdf`);
     await page.getByRole('button', { name: 'Start my build' }).click();
     const confirm = page.getByRole('dialog', { name: `Start your build from ${draft.label}?` });
     await confirm.waitFor({ state: 'visible' });

@@ -55,6 +55,20 @@ describe('the quote PDF: days', () => {
   it('dates a revision not sent yet by the day it was written', async () => {
     expect(await pdfText(await render(null))).toContain('Issued Dec 1, 2026');
   });
+
+  it("prints a builder's own budget without a deposit, approval terms or a last valid day", async () => {
+    const quote = (await pdfText(await render(null))).replace(/\s+/g, ' ');
+    expect(quote).toContain('Deposit due on approval');
+    const budget = (
+      await pdfText(await new QuotePdfService().render({ view: view(null), shop: { name: 'Test Garage', timeZone: 'UTC' } as Shop, report: null, forMyself: true }))
+    ).replace(/\s+/g, ' ');
+    expect(budget).toContain('Budget Q-0003');
+    expect(budget).toContain('Written Dec 1, 2026');
+    expect(budget).not.toMatch(/Deposit due|The deposit is|Valid until|\b[Qq]uote\b/);
+    expect(budget).toContain('Builder Test Customer');
+    expect(budget).toContain('the lines are your own estimate');
+    expect(budget).toContain('Total $135.00');
+  });
 });
 
 describe('the quote PDF: figures in the shop\'s units', () => {

@@ -33,6 +33,8 @@ export interface QuotePdfInput {
   view: QuoteView;
   shop: Shop;
   report: FitReportRecord | null;
+  /** The member's own build: a budget, without the customer's approval and deposit. */
+  forMyself?: boolean;
 }
 
 /**
@@ -57,10 +59,10 @@ export function resolvedByLine(remedies: string[]): string {
 @Injectable()
 export class QuotePdfService {
   render(input: QuotePdfInput): Promise<Buffer> {
-    const { view, shop, report } = input;
+    const { view, shop, report, forMyself = false } = input;
     const { quote, revision, project } = view;
     const currency = revision.currency;
-    const doc = new PDFDocument({ size: 'LETTER', margin: 50, info: { Title: `Quote Q-${String(quote.number).padStart(4, '0')}`, Author: shop.name } });
+    const doc = new PDFDocument({ size: 'LETTER', margin: 50, info: { Title: `${forMyself ? 'Budget' : 'Quote'} Q-${String(quote.number).padStart(4, '0')}`, Author: shop.name } });
     doc.registerFont('body', FONTS.regular);
     doc.registerFont('bold', FONTS.semibold);
     const chunks: Buffer[] = [];
@@ -79,17 +81,17 @@ export class QuotePdfService {
 
     // Header
     doc.font('bold').fontSize(18).fillColor(INK).text(shop.name, 50, 50);
-    doc.font('body').fontSize(10).fillColor(MUTED).text('Engine swap quote', 50);
-    const label = `Quote Q-${String(quote.number).padStart(4, '0')} · revision ${revision.number}`;
+    doc.font('body').fontSize(10).fillColor(MUTED).text(forMyself ? 'Budget of your own build' : 'Engine swap quote', 50);
+    const label = `${forMyself ? 'Budget' : 'Quote'} Q-${String(quote.number).padStart(4, '0')} · revision ${revision.number}`;
     doc.font('bold').fontSize(12).fillColor(INK).text(label, 50, 50, { width, align: 'right' });
     doc.font('body').fontSize(10).fillColor(MUTED);
-    doc.text(`Issued ${formatDayIn(revision.sentAt ?? revision.createdAt, shop.timeZone)}`, { width, align: 'right' });
-    doc.text(`Valid until ${formatCalendarDate(revision.validUntil)}`, { width, align: 'right' });
+    doc.text(`${forMyself ? 'Written' : 'Issued'} ${formatDayIn(revision.sentAt ?? revision.createdAt, shop.timeZone)}`, { width, align: 'right' });
+    if (!forMyself) doc.text(`Valid until ${formatCalendarDate(revision.validUntil)}`, { width, align: 'right' });
     doc.moveDown(1.2);
 
     // Customer and vehicle
     const top = doc.y;
-    doc.fillColor(INK).font('bold').fontSize(11).text('Customer', 50, top);
+    doc.fillColor(INK).font('bold').fontSize(11).text(forMyself ? 'Builder' : 'Customer', 50, top);
     doc.font('body').fontSize(10).text(project.customer?.name ?? '—');
     if (project.customer?.email) doc.text(project.customer.email);
     if (project.customer?.phone) doc.text(project.customer.phone);
@@ -101,9 +103,16 @@ export class QuotePdfService {
     doc.x = 50;
 
     // Fit summary
-    heading('Fit check this quote is built on');
+    heading(`Fit check this ${forMyself ? 'budget' : 'quote'} is built on`);
     if (!report) {
-      doc.fillColor(MUTED).text('No fit report was stored when this quote was written; the lines are the estimate of the shop.', 50);
+      doc
+        .fillColor(MUTED)
+        .text(
+          forMyself
+            ? 'No fit report was stored when this budget was written; the lines are your own estimate.'
+            : 'No fit report was stored when this quote was written; the lines are the estimate of the shop.',
+          50,
+        );
     } else {
       this.fitSummary(doc, report.results, report, revision, width, shop.unitSystem, shop.timeZone);
     }
@@ -115,6 +124,24 @@ export class QuotePdfService {
     // Totals and deposit
     heading('Totals');
     this.totals(doc, revision.totals, currency, width);
+    if (!forMyself) this.deposit(doc, revision, currency, width);
+
+    // Terms, rounding rule, cautions
+    if (!forMyself) {
+      heading('Terms');
+      doc.fillColor(INK).fontSize(9).text(revision.terms, 50, doc.y, { width });
+    }
+    heading('How the figures are rounded');
+    doc.fillColor(INK).fontSize(9).text(QUOTE_ROUNDING_RULE, 50, doc.y, { width });
+    heading('Planning aid and safety');
+    doc.fillColor(INK).fontSize(9).text(`Planning aid: ${FIT_REPORT_CAUTION}`, 50, doc.y, { width });
+    doc.moveDown(0.3);
+    for (const caution of FIT_REPORT_SAFETY) doc.text(`• ${caution}`, 58, doc.y, { width: width - 8 });
+    doc.end();
+    return done;
+  }
+
+  private deposit(doc: PDFKit.PDFDocument, revision: QuoteView['revision'], currency: string, width: number): void {
     doc.moveDown(0.4).font('bold').fontSize(11).fillColor(INK);
     doc.text(`Deposit due on approval: ${formatMoney(revision.totals.depositCents, currency)}`, 50, doc.y, { width, align: 'right' });
     doc.font('body').fontSize(9).fillColor(MUTED);
@@ -126,18 +153,6 @@ export class QuotePdfService {
       doc.y,
       { width, align: 'right' },
     );
-
-    // Terms, rounding rule, cautions
-    heading('Terms');
-    doc.fillColor(INK).fontSize(9).text(revision.terms, 50, doc.y, { width });
-    heading('How the figures are rounded');
-    doc.fillColor(INK).fontSize(9).text(QUOTE_ROUNDING_RULE, 50, doc.y, { width });
-    heading('Planning aid and safety');
-    doc.fillColor(INK).fontSize(9).text(`Planning aid: ${FIT_REPORT_CAUTION}`, 50, doc.y, { width });
-    doc.moveDown(0.3);
-    for (const caution of FIT_REPORT_SAFETY) doc.text(`• ${caution}`, 58, doc.y, { width: width - 8 });
-    doc.end();
-    return done;
   }
 
   private fitSummary(

@@ -202,7 +202,8 @@ export class QuotesService implements OnModuleInit {
   }
 
   async pdfOf(user: AuthUser, id: string, number?: number): Promise<{ fileName: string; content: Buffer }> {
-    return this.renderPdf(await this.revision(user, id, number));
+    const view = await this.revision(user, id, number);
+    return this.renderPdf(view, isOwnProject(view.project, user));
   }
 
   async pdfByLink(token: string): Promise<{ fileName: string; content: Buffer }> {
@@ -633,12 +634,14 @@ export class QuotesService implements OnModuleInit {
     };
   }
 
-  private async renderPdf(view: QuoteView): Promise<{ fileName: string; content: Buffer }> {
+  /** `forMyself`: the member's own build, printed as a budget (nobody to approve it or pay a deposit). */
+  private async renderPdf(view: QuoteView, forMyself = false): Promise<{ fileName: string; content: Buffer }> {
     const reader = shopReader(view.quote.shopId);
     const shop = await this.shops.getCurrent(reader);
     const report = view.revision.fitReportId ? await this.fitReports.get(reader, view.revision.fitReportId).catch(() => null) : null;
-    const content = await this.pdf.render({ view, shop, report });
-    return { fileName: `${quoteLabel(view.quote)}-rev${view.revision.number}.pdf`, content };
+    const content = await this.pdf.render({ view, shop, report, forMyself });
+    const stem = forMyself ? `Budget-${quoteLabel(view.quote)}` : quoteLabel(view.quote);
+    return { fileName: `${stem}-rev${view.revision.number}.pdf`, content };
   }
 
   /** The link works to the end of the last valid day in the shop's own zone. */

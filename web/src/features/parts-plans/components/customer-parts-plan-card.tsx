@@ -49,7 +49,7 @@ export function CustomerPartsPlanCard({ projectId, currency }: CustomerPartsPlan
           </Descriptions.Item>
         </Descriptions>
         {plan.notes.map((note) => (
-          <Alert key={note} type="info" showIcon message={say(note)} />
+          <Alert key={note} type="info" showIcon title={say(note)} />
         ))}
         {plan.parts.length > 0 &&
           (narrow ? (
@@ -113,7 +113,7 @@ export function CustomerPartsPlanCard({ projectId, currency }: CustomerPartsPlan
           <Alert
             type="warning"
             showIcon
-            message="Not answered by this plan yet"
+            title="Not answered by this plan yet"
             description={
               <ul style={{ margin: 0, paddingLeft: 18 }}>
                 {plan.unresolved.map((u) => (

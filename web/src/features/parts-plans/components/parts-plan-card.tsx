@@ -98,7 +98,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             <Descriptions.Item label="Fabrication">{result.totals.fabricationHours} h</Descriptions.Item>
           </Descriptions>
           {result.notes.map((note) => (
-            <Alert key={note} type="info" showIcon message={say(note)} />
+            <Alert key={note} type="info" showIcon title={say(note)} />
           ))}
           {narrow ? (
             <List<Pick>
@@ -152,7 +152,7 @@ export function PartsPlanCard({ projectId, canBuild, currency }: PartsPlanCardPr
             <Alert
               type="warning"
               showIcon
-              message="Not resolved by this plan"
+              title="Not resolved by this plan"
               description={
                 <ul style={{ margin: 0, paddingLeft: 18 }}>
                   {result.unresolved.map((u) => (

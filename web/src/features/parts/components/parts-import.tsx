@@ -114,19 +114,19 @@ export function PartsImport() {
               ))}
             </Form>
             {result.unmapped.length > 0 ? (
-              <Alert type="info" showIcon message={`Choose the file's columns for: ${result.unmapped.map(fieldLabel).join(', ')}.`} />
+              <Alert type="info" showIcon title={`Choose the file's columns for: ${result.unmapped.map(fieldLabel).join(', ')}.`} />
             ) : result.errors.length > 0 ? (
               <Alert
                 type="error"
                 showIcon
-                message={`${result.rejected.length} of ${result.rowCount} rows have errors. Nothing is imported until every row is right.`}
+                title={`${result.rejected.length} of ${result.rowCount} rows have errors. Nothing is imported until every row is right.`}
                 action={<Button onClick={() => downloadRejected(result)}>Download rejected rows</Button>}
               />
             ) : (
-              <Alert type="success" showIcon message={`${result.validCount} rows ready to import.`} data-testid="import-ready" />
+              <Alert type="success" showIcon title={`${result.validCount} rows ready to import.`} data-testid="import-ready" />
             )}
             {result.warnings.length > 0 && (
-              <Alert type="warning" showIcon message={`${result.warnings.length} cells start like spreadsheet formulas; they are stored as plain text and exported escaped.`} />
+              <Alert type="warning" showIcon title={`${result.warnings.length} cells start like spreadsheet formulas; they are stored as plain text and exported escaped.`} />
             )}
             {result.errors.length > 0 && (
               <Table

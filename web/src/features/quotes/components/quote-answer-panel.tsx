@@ -9,11 +9,11 @@ import { useAnswerQuote } from '../api/answer-quote';
 import { type AnswerQuoteBody as QuoteAnswerBody, useAnswerQuoteByLink } from '../api/answer-quote-by-link';
 import { useQuoteByLink } from '../api/get-quote-by-link';
 import { quoteQueryOptions } from '../api/get-quote';
-import { downloadQuotePdf } from '../api/get-quote-pdf';
 import { usePayDeposit } from '../api/pay-deposit';
 import { usePayDepositByLink } from '../api/pay-deposit-by-link';
 import type { Quote } from '../types';
 import { QuoteLines } from './quote-lines';
+import { QuotePdfButton } from './quote-pdf-button';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 
 /**
@@ -42,7 +42,7 @@ export function QuoteAnswerPanel({ token }: QuoteAnswerPanelProps) {
     if (getApiErrorBody(quote.error)?.code === 'quote_link_already_accepted') {
       return <Alert type="success" showIcon title="This quote was already accepted" description={getErrorMessage(quote.error)} />;
     }
-    return <Alert type="error" showIcon message="This quote link cannot be opened" description={getErrorMessage(quote.error)} />;
+    return <Alert type="error" showIcon title="This quote link cannot be opened" description={getErrorMessage(quote.error)} />;
   }
   return (
     <QuoteAnswerView
@@ -73,7 +73,7 @@ export function CustomerQuotePanel({ quoteId }: CustomerQuotePanelProps) {
   return (
     <QuoteAnswerView
       quote={quote.data}
-      pdf={{ download: () => downloadQuotePdf(quoteId, `quote-${label}-revision-${revision.number}.pdf`) }}
+      pdf={{ quoteId, label, revision: revision.number }}
       answer={answer}
       pay={pay}
       paying={paying}
@@ -85,7 +85,7 @@ export function CustomerQuotePanel({ quoteId }: CustomerQuotePanelProps) {
 interface QuoteAnswerViewProps {
   quote: Quote;
   /** The PDF: a plain link for the e-mailed link's holder; a download through the session when signed in (the link carries no token). */
-  pdf: { href: string } | { download: () => Promise<void> };
+  pdf: { href: string } | { quoteId: string; label: string; revision: number };
   answer: { mutate: (body: QuoteAnswerBody) => void; isPending: boolean; isError: boolean; error: unknown };
   pay: { mutate: (paymentMethod: string, callbacks: { onSuccess: () => void; onError: (error: unknown) => void }) => void; isPending: boolean };
   /** A payment went to the provider; its confirmation (the webhook) is awaited. */
@@ -98,7 +98,6 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
   const [reason, setReason] = useState('');
   const [card, setCard] = useState('');
   const [payError, setPayError] = useState<string | null>(null);
-  const [pdfLoading, setPdfLoading] = useState(false);
   const money = (cents: number) => formatMoney(cents, q.revision.currency);
   const { totalCents, depositCents } = q.revision.totals;
   const waiting = paying && q.depositState !== 'paid';
@@ -140,18 +139,10 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
               Open the quote as a PDF
             </a>
           ) : (
-            <Button
-              loading={pdfLoading}
-              onClick={() => {
-                setPdfLoading(true);
-                void pdf.download().finally(() => setPdfLoading(false));
-              }}
-            >
-              Download the quote as a PDF
-            </Button>
+            <QuotePdfButton {...pdf}>Download the quote as a PDF</QuotePdfButton>
           )}
         </Typography.Paragraph>
-        <Alert type="warning" showIcon message="Planning aid" description={FIT_REPORT_CAUTION} />
+        <Alert type="warning" showIcon title="Planning aid" description={FIT_REPORT_CAUTION} />
       </Card>
 
       {q.revision.terms.trim() && (
@@ -169,7 +160,7 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
             step. Nothing is charged when you accept; the shop books your truck into the bay once the deposit is paid. The remaining{' '}
             {money(totalCents - depositCents)} is not charged here.
           </Typography.Paragraph>
-          {answer.isError && <Alert type="error" showIcon message={getErrorMessage(answer.error)} style={{ marginBottom: 12 }} />}
+          {answer.isError && <Alert type="error" showIcon title={getErrorMessage(answer.error)} style={{ marginBottom: 12 }} />}
           {!declining ? (
             <Space wrap>
               <Popconfirm
@@ -207,9 +198,9 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
             payment service; the shop books your truck into the bay once it is paid. The remaining {money(totalCents - depositCents)} is not
             charged here.
           </Typography.Paragraph>
-          {payError && <Alert type="error" showIcon message={payError} style={{ marginBottom: 12 }} />}
+          {payError && <Alert type="error" showIcon title={payError} style={{ marginBottom: 12 }} />}
           {waiting ? (
-            <Alert type="info" showIcon message="Payment sent; waiting for the payment service to confirm it…" />
+            <Alert type="info" showIcon title="Payment sent; waiting for the payment service to confirm it…" />
           ) : (
             <Flex vertical gap={8} style={{ maxWidth: 360 }}>
               <label htmlFor="card-number">Card number (local test payment service)</label>
@@ -226,11 +217,11 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
         <Alert
           type="success"
           showIcon
-          message="Deposit paid. Thank you: the shop will book your truck into the bay."
+          title="Deposit paid. Thank you: the shop will book your truck into the bay."
           description={`${money(depositCents)} received${q.depositPaidAt ? ` on ${formatDate(q.depositPaidAt)}` : ''}. The remaining ${money(totalCents - depositCents)} is not charged here.`}
         />
       )}
-      {q.status === 'turned-down' && <Alert type="info" showIcon message="You declined this quote. The shop has been told." />}
+      {q.status === 'turned-down' && <Alert type="info" showIcon title="You declined this quote. The shop has been told." />}
     </Flex>
   );
 }

@@ -17,6 +17,7 @@ import { ownTimeLaborSentence, PAID_HELP_LINK } from '../own-build-open-items';
 import type { Quote } from '../types';
 import { QuoteLineEditor } from './quote-line-editor';
 import { QuoteLines } from './quote-lines';
+import { QuotePdfButton } from './quote-pdf-button';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
 import { QuoteTermsDrawer } from './quote-terms-drawer';
 import { RevisionCompare } from './revision-compare';
@@ -79,6 +80,9 @@ export function QuoteWorkspace({ quoteId, canWrite, timeZone }: QuoteWorkspacePr
         extra={
           <>
             <Button onClick={() => navigate(toProjectDetail(quote.projectId))}>Back to the project</Button>
+            <QuotePdfButton quoteId={quote.id} label={quote.label} revision={shownNumber ?? revision.number} forMyself={quote.forMyself}>
+              {shownNumber === undefined ? 'Download PDF' : `Download revision ${shownNumber} as PDF`}
+            </QuotePdfButton>
             {canSend && (
               <SendQuoteConfirm quote={quote} onConfirm={sendQuote}>
                 <Button type="primary" loading={send.isPending}>
