@@ -83,7 +83,7 @@ describe("the signed-in customer's quote", () => {
     renderAsCustomer();
 
     await userEvent.click(await screen.findByRole('button', { name: 'Download the quote as a PDF' }));
-    await waitFor(() => expect(get).toHaveBeenCalledWith('/quotes/quote-7/pdf', { responseType: 'blob' }));
+    await waitFor(() => expect(get).toHaveBeenCalledWith('/quotes/quote-7/pdf', { responseType: 'blob', params: { revision: 1 } }));
     await waitFor(() => expect(click).toHaveBeenCalled());
     expect(createObjectURL).toHaveBeenCalledWith(expect.any(Blob));
     expect((click.mock.contexts[0] as HTMLAnchorElement).download).toBe('quote-Q-0007-revision-1.pdf');
