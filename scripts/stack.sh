@@ -161,7 +161,7 @@ payment_start() {
     tries=$((tries + 1)); [ $tries -gt 200 ] && { cat "$PAYMENT_DIR/payments.log"; fail "payment fake did not start"; }
     sleep 0.1
   done
-  echo "Payment fake: http://127.0.0.1:$PAYMENT_FAKE_PORT (test cards: pm_card_visa pays, pm_card_chargeDeclined is declined)"
+  echo "Payment fake: http://127.0.0.1:$PAYMENT_FAKE_PORT (test cards on the deposit form: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined)"
 }
 
 stop_pid_file() { [ -f "$1" ] && kill "$(cat "$1")" 2>/dev/null || true; rm -f "$1"; }

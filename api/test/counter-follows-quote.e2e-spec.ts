@@ -5,7 +5,7 @@ import { lastMailId, waitForMail } from './helpers/mail-fake';
 import { bearer, seedWithParts, Session, TestApp } from './helpers/test-app';
 
 type Line = QuoteLineBody;
-type CounterLine = { sku: string; quantity: number; status: string };
+type CounterLine = { id: string; sku: string; quantity: number; status: string };
 
 
 const asInput = (line: Line) => ({
@@ -21,7 +21,7 @@ const asInput = (line: Line) => ({
 });
 
 type Setup = { t: TestApp; demo: Record<DemoRole, Session>; stop: () => Promise<void> };
-type Accepted = { planId: string; planLines: CounterLine[]; lines: Line[] };
+type Accepted = { projectId: string; planId: string; planLines: CounterLine[]; lines: Line[] };
 
 /** A project of the parts-planned demo job with a locked plan and a quote drawn from it, edited, sent, accepted and paid. */
 async function acceptEditedQuote({ t, demo }: Setup, email: string, edit: (lines: Line[]) => Promise<object[]>): Promise<Accepted> {
@@ -43,7 +43,7 @@ async function acceptEditedQuote({ t, demo }: Setup, email: string, edit: (lines
     (response) => response.status === 200,
     'the work order',
   );
-  return { planId: plan.id, planLines, lines };
+  return { projectId, planId: plan.id, planLines, lines };
 }
 
 const unitsOf = (lines: CounterLine[], sku: string | null) => lines.filter((line) => line.sku === sku).reduce((sum, line) => sum + line.quantity, 0);
@@ -105,6 +105,28 @@ describe("the counter's list follows the accepted quote, not only the plan it wa
     const lines = await counterLines(alsoDropped.planId);
     expect(unitsOf(lines, handWritten.sku)).toBe(unitsOf(alsoDropped.planLines, handWritten.sku));
     expect(lines.map((line) => [line.sku, line.quantity]).sort()).toEqual(alsoDropped.planLines.map((line) => [line.sku, line.quantity]).sort());
+  });
+
+  it("the work order tells the bay which of the job's parts are not with it yet, and counts a reserved one as with it", async () => {
+    const workOrder = async () =>
+      (await setup.t.http.get(`/api/projects/${accepted.projectId}/work-order`).set(...bearer(setup.demo.fabricator)).expect(200)).body.partsAtCounter as {
+        planId: string;
+        total: number;
+        withTheJob: number;
+        waiting: { sku: string; quantity: number; status: string }[];
+      };
+    const lines = await counterLines(accepted.planId);
+    const before = await workOrder();
+    expect(before.planId).toBe(accepted.planId);
+    expect(before.total).toBe(lines.length);
+    expect(before.withTheJob).toBe(lines.filter((line) => ['reserved', 'received', 'issued'].includes(line.status)).length);
+    expect(before.waiting).toContainEqual({ sku: added.sku, description: added.description, quantity: 3, status: 'open' });
+
+    const open = lines.find((line) => line.status === 'open' && line.sku !== added.sku)!;
+    await setup.t.http.post(`/api/counter-lines/${open.id}/reserve`).set(...bearer(setup.demo.counter)).send({}).expect(200);
+    const after = await workOrder();
+    expect(after.withTheJob).toBe(before.withTheJob + 1);
+    expect(after.waiting.map((line) => line.sku)).not.toContain(open.sku);
   });
 
   it('the owner reads the change in the audit log, by the quote that made it', async () => {

@@ -83,6 +83,7 @@ describe('labor operations and quotes', () => {
     });
     expect(response.body).toMatchObject({ status: 'drafting', label: expect.stringMatching(/^Q-\d{4}$/), latestRevision: 1, sentRevision: null });
     expect(response.body.roundingRule).toMatch(/halves away from zero/);
+    expect(response.body.roundingRule).toMatch(/cost x \(1 \+ markup\)/);
     const bad = await t.http
       .post(`/api/projects/${RIDGEBACK}/quotes`)
       .set(...bearer(demo.estimator))
@@ -139,6 +140,7 @@ describe('labor operations and quotes', () => {
       expect(text).toContain(`Issued ${formatDayIn(new Date(sent.body.revision.sentAt), DEMO_SHOP.timeZone)}`);
       expect(text).toMatch(/Fit report [0-9a-f]{8} of [A-Z][a-z]{2} \d{1,2}, \d{4}:/);
       expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+      expect(text).not.toMatch(/markup/);
       expect(mail.text).toContain('(the link works until Jan 15, 2099)');
       expect(mail.text.replace(/\/quote-answer\/\S+/, '')).not.toMatch(/\d{4}-\d{2}-\d{2}/);
       token = tokenOf(mail.text);
@@ -150,6 +152,9 @@ describe('labor operations and quotes', () => {
       const opened = await t.http.get(`/api/quote-links/${token}`);
       expect(opened.status).toBe(200);
       expect(opened.body.revision.totals.totalCents).toBe(181071);
+      // The customer reads how the figures are rounded, not how the shop marks its cost up.
+      expect(opened.body.roundingRule).toMatch(/halves away from zero/);
+      expect(opened.body.roundingRule).not.toMatch(/markup|cost/);
       const pdf = await t.http.get(`/api/quote-links/${token}/pdf`).buffer(true).parse((res, done) => {
         const chunks: Buffer[] = [];
         res.on('data', (chunk: Buffer) => chunks.push(chunk));

@@ -210,7 +210,14 @@ describe('from the quote to the work order: estimator, customer, fabricator', ()
       await signInAs(page, 'fabricator');
       await page.setViewportSize({ width: 390, height: 844 });
       await page.goto(workOrderPath);
+      // Nobody at the counter has set the job's parts aside yet: the sheet says so, and starting asks first, naming them.
+      await expectText(page.getByTestId('parts-at-counter'), /Parts: 0 of \d+ counter lines? with the job[\s\S]*waiting:/);
       await page.getByRole('button', { name: 'Start in the bay' }).click();
+      const confirm = page.locator('.ant-popconfirm').filter({ hasText: 'Start with parts still waiting?' });
+      await confirm.waitFor({ state: 'visible' });
+      await expectText(confirm, /Not with the job yet: \d+ × /);
+      await saveScreenshot(page, 'fabricator-start-with-parts-waiting-phone');
+      await confirm.getByRole('button', { name: 'Start in the bay' }).click();
       await expectText(page.getByRole('heading', { level: 2 }), /In the bay/);
 
       const tabs = page.getByTestId('check-oil-pan-pickup.pickup-tabs');

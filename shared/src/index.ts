@@ -74,6 +74,7 @@ export * from './quoting/money-format';
 export * from './quoting/quote-money';
 export * from './quoting/quote-status-words';
 export * from './jobs/job-state-words';
+export * from './quoting/line-text';
 export * from './quoting/revision-diff';
 export * from './quoting/total-rows';
 export * from './parts-plan';

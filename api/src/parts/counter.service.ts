@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { counterLineStateWords, SET_ASIDE_STATUSES, type CounterStatus } from '@swapwright/shared';
+import { COUNTER_STATUS_LABELS, counterLineStateWords, SET_ASIDE_STATUSES, type CounterStatus } from '@swapwright/shared';
 import Papa from 'papaparse';
 import { randomUUID } from 'node:crypto';
 import { DataSource, EntityManager, In } from 'typeorm';
@@ -109,7 +109,7 @@ export class CounterService {
       action: 'counter.matched-to-quote',
       subjectId: planId,
       summary: `Counter list matched to the accepted quote ${quoteLabel}: ${changes.join(', ')}.`,
-      before: { lines: lines.map((line) => ({ sku: line.sku, quantity: line.quantity, status: line.status })) },
+      before: { lines: lines.map((line) => `${line.sku} ×${line.quantity} (${COUNTER_STATUS_LABELS[line.status]})`) },
       after: { changes },
     });
     for (const { line, keep } of reduced) {

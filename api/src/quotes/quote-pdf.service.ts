@@ -5,7 +5,8 @@ import {
   formatCalendarDate,
   formatMoney,
   formatDayIn,
-  QUOTE_ROUNDING_RULE,
+  QUOTE_ROUNDING_RULE_FOR_CUSTOMER,
+  quoteLineTextOptions,
   quoteTotalRows,
   renderText,
   sideViewGeometry,
@@ -132,7 +133,7 @@ export class QuotePdfService {
       doc.fillColor(INK).fontSize(9).text(revision.terms, 50, doc.y, { width });
     }
     heading('How the figures are rounded');
-    doc.fillColor(INK).fontSize(9).text(QUOTE_ROUNDING_RULE, 50, doc.y, { width });
+    doc.fillColor(INK).fontSize(9).text(QUOTE_ROUNDING_RULE_FOR_CUSTOMER, 50, doc.y, { width });
     heading('Planning aid and safety');
     doc.fillColor(INK).fontSize(9).text(`Planning aid: ${FIT_REPORT_CAUTION}`, 50, doc.y, { width });
     doc.moveDown(0.3);
@@ -265,8 +266,7 @@ export class QuotePdfService {
       doc.font('bold').fontSize(9).fillColor(MUTED).text(kind === 'part' ? 'Parts' : `Labor at ${formatMoney(revision.laborRateCents, revision.currency)} per hour`, 50, doc.y + 2);
       for (const line of lines) {
         row([
-          // A part line's lone figures belong to the part's name as its maker prints it.
-          inUnits(line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description, units, { pairedLengthsOnly: kind === 'part' }),
+          inUnits(line.source === 'fit-remedy' ? `${line.description} (from the fit check)` : line.description, units, quoteLineTextOptions(line)),
           kind === 'part' ? String(line.quantity) : `${(line.hours ?? 0).toFixed(1)} h`,
           formatMoney(line.unitPriceCents, revision.currency),
           formatMoney(line.lineTotalCents, revision.currency),

@@ -4,6 +4,7 @@ import { EntityManager, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { changedFigures } from '../audit/changed-figures';
 import { AuthUser } from '../common/tenant/auth-user';
+import { Shop } from '../shops/shop.entity';
 import { UpdateQuoteSettingsDto } from './dto/quote-input.dto';
 import { QuoteSettings } from './quote-settings.entity';
 
@@ -55,7 +56,8 @@ export class QuoteSettingsService {
     await this.settings.manager.transaction(async (manager) => {
       const stored = await manager.findOne(QuoteSettings, { where: { shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
       const current = stored ?? (await this.forShop(user));
-      const moved = changedFigures(current, changes, MONEY_TERMS);
+      const shop = await manager.findOne(Shop, { select: { id: true, currency: true }, where: { id: user.shopId } });
+      const moved = changedFigures(current, changes, MONEY_TERMS, shop?.currency);
       const repriced = changedFigures(current, changes, PRICING_TERMS) !== null;
       if (moved) {
         await this.audit.record(manager, {

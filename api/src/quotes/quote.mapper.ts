@@ -1,4 +1,4 @@
-import { QUOTE_ROUNDING_RULE, type ComparableLine, type RevisionDiff } from '@swapwright/shared';
+import { QUOTE_ROUNDING_RULE, QUOTE_ROUNDING_RULE_FOR_CUSTOMER, type ComparableLine, type RevisionDiff } from '@swapwright/shared';
 import {
   QuoteNotificationResponseDto,
   QuoteResponseDto,
@@ -79,7 +79,7 @@ export function mapQuote(view: QuoteView, viewer: QuoteViewer): QuoteResponseDto
     declineReason: quote.declineReason,
     depositState: quote.depositState,
     depositPaidAt: quote.depositPaidAt?.toISOString() ?? null,
-    roundingRule: QUOTE_ROUNDING_RULE,
+    roundingRule: audience === 'customer' ? QUOTE_ROUNDING_RULE_FOR_CUSTOMER : QUOTE_ROUNDING_RULE,
     revision: mapQuoteRevision(view.revision, audience),
     revisions: view.revisions.map((revision) => ({ number: revision.number, sentAt: revision.sentAt?.toISOString() ?? null, totalCents: revision.totals.totalCents })),
   };

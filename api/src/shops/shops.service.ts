@@ -48,7 +48,7 @@ export class ShopsService {
     return this.shops.manager.transaction(async (manager) => {
       const shop = await manager.findOne(Shop, { where: { id: user.shopId }, lock: { mode: 'pessimistic_write' } });
       if (!shop) throw ShopErrors.notFound();
-      const moved = changedFigures(shop, changes, MONEY_FIELDS);
+      const moved = changedFigures(shop, changes, MONEY_FIELDS, shop.currency);
       if (moved) {
         await this.audit.record(manager, {
           shopId: user.shopId,

@@ -1,6 +1,7 @@
-import { WORK_ORDER_DEFERENCE, workOrderCautions } from '@swapwright/shared';
+import { counterReadiness, WORK_ORDER_DEFERENCE, workOrderCautions } from '@swapwright/shared';
+import type { CounterLine } from '../parts/part.entity';
 import type { Project } from '../projects/project.entity';
-import { RecordedCheckResponseDto, WorkCheckPhotoResponseDto, WorkOrderResponseDto, WorkOrderSummaryResponseDto, WorkProgressResponseDto } from './dto/work-order-response.dto';
+import { RecordedCheckResponseDto, WorkCheckPhotoResponseDto, WorkOrderResponseDto, WorkOrderSummaryResponseDto, WorkPartsAtCounterResponseDto, WorkProgressResponseDto } from './dto/work-order-response.dto';
 import { WorkOrder, WorkOrderCheck, WorkOrderCheckPhoto } from './work-order.entity';
 
 export function workOrderLabel(order: Pick<WorkOrder, 'number'>): string {
@@ -51,7 +52,13 @@ export function mapWorkOrderSummary(order: WorkOrder, project: Project, records:
   };
 }
 
-export function mapWorkOrder(order: WorkOrder, project: Project, records: readonly WorkOrderCheck[], photos: readonly WorkOrderCheckPhoto[]): WorkOrderResponseDto {
+export function mapWorkOrder(
+  order: WorkOrder,
+  project: Project,
+  records: readonly WorkOrderCheck[],
+  photos: readonly WorkOrderCheckPhoto[],
+  counterLines: { planId: string; lines: readonly CounterLine[] } | null,
+): WorkOrderResponseDto {
   const latest = latestByCheck(records);
   const counts = new Map<string, number>();
   for (const record of records) counts.set(record.checkKey, (counts.get(record.checkKey) ?? 0) + 1);
@@ -83,5 +90,11 @@ export function mapWorkOrder(order: WorkOrder, project: Project, records: readon
     })),
     cautions: workOrderCautions(order.steps.flatMap((step) => step.hazards)),
     deference: WORK_ORDER_DEFERENCE,
+    partsAtCounter: counterLines ? mapPartsAtCounter(counterLines.planId, counterLines.lines) : null,
   };
+}
+
+function mapPartsAtCounter(planId: string, lines: readonly CounterLine[]): WorkPartsAtCounterResponseDto {
+  const { total, withTheJob, waiting } = counterReadiness(lines);
+  return { planId, total, withTheJob, waiting: waiting.map(({ sku, description, quantity, status }) => ({ sku, description, quantity, status })) };
 }

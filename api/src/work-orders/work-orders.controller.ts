@@ -14,7 +14,7 @@ import { WorkOrderResponseDto, WorkOrderSummaryResponseDto } from './dto/work-or
 import { mapWorkOrder, mapWorkOrderSummary } from './work-order.mapper';
 import { WorkOrdersService, WorkOrderView } from './work-orders.service';
 
-const mapView = (view: WorkOrderView): WorkOrderResponseDto => mapWorkOrder(view.order, view.project, view.records, view.photos);
+const mapView = (view: WorkOrderView): WorkOrderResponseDto => mapWorkOrder(view.order, view.project, view.records, view.photos, view.counterLines);
 
 @ApiTags('work-orders')
 @ApiBearerAuth()

@@ -17,7 +17,7 @@ import { TenantRepository } from '../common/tenant/tenant-repository';
 import { FitReportRecord } from '../fit-reports/fit-report-record.entity';
 import { LaborOperation } from '../labor-operations/labor-operation.entity';
 import { CounterService, type AcceptedPart } from '../parts/counter.service';
-import { Part, PartsPlanRecord } from '../parts/part.entity';
+import { CounterLine, Part, PartsPlanRecord } from '../parts/part.entity';
 import type { Project } from '../projects/project.entity';
 import { ProjectsService } from '../projects/projects.service';
 import type { Quote } from '../quotes/quote.entity';
@@ -34,6 +34,8 @@ export interface WorkOrderView {
   project: Project;
   records: WorkOrderCheck[];
   photos: WorkOrderCheckPhoto[];
+  /** The counter's lines of the plan the approved revision was drawn from; null when it was drawn from none. */
+  counterLines: { planId: string; lines: CounterLine[] } | null;
 }
 
 /** The quote a work order is opened from: the approved quote and the revision the customer approved. */
@@ -305,6 +307,16 @@ export class WorkOrdersService {
   private async viewOf(user: AuthUser, order: WorkOrder, project?: Project): Promise<WorkOrderView> {
     const records = await this.checks.find({ where: { shopId: user.shopId, workOrderId: order.id }, order: { recordedAt: 'ASC', id: 'ASC' } });
     const photos = await this.photos.find({ where: { shopId: user.shopId, workOrderId: order.id }, order: { createdAt: 'ASC', id: 'ASC' } });
-    return { order, project: project ?? (await this.projects.get(user, order.projectId)), records, photos };
+    const counterLines = await this.counterLinesOf(user.shopId, order);
+    return { order, project: project ?? (await this.projects.get(user, order.projectId)), records, photos, counterLines };
+  }
+
+  private async counterLinesOf(shopId: string, order: WorkOrder): Promise<WorkOrderView['counterLines']> {
+    const revision = await this.dataSource
+      .getRepository<QuoteRevision>('QuoteRevision')
+      .findOne({ select: { id: true, partsPlanId: true }, where: { shopId, quoteId: order.quoteId, number: order.quoteRevision } });
+    if (!revision?.partsPlanId) return null;
+    const lines = await this.dataSource.getRepository(CounterLine).find({ where: { shopId, planId: revision.partsPlanId }, order: { sku: 'ASC' } });
+    return { planId: revision.partsPlanId, lines };
   }
 }

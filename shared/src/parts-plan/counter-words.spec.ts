@@ -1,5 +1,5 @@
 import { COUNTER_STATUSES } from '../types/value-lists';
-import { COUNTER_STATUS_LABELS, counterLineSetAside, counterLineShortBy, counterLineStateWords } from './counter-words';
+import { COUNTER_STATUS_LABELS, counterLineSetAside, counterLineShortBy, counterLineStateWords, counterReadiness } from './counter-words';
 
 describe('counter line words', () => {
   it('gives every counter state plain words, none of them the stored code', () => {
@@ -33,5 +33,22 @@ describe('counter line words', () => {
 
   it('shows an unknown code as it is rather than nothing', () => {
     expect(counterLineStateWords({ status: 'lost', quantity: 1, available: 1 })).toBe('lost');
+  });
+});
+
+describe('counterReadiness', () => {
+  it('counts the lines on the shelf or issued as with the job, and lists the others as waiting', () => {
+    const lines = [
+      { sku: 'A', status: 'reserved' },
+      { sku: 'B', status: 'open' },
+      { sku: 'C', status: 'received' },
+      { sku: 'D', status: 'ordered' },
+      { sku: 'E', status: 'issued' },
+      { sku: 'F', status: 'to-order' },
+    ];
+    const readiness = counterReadiness(lines);
+    expect(readiness).toMatchObject({ total: 6, withTheJob: 3 });
+    expect(readiness.waiting.map((line) => line.sku)).toEqual(['B', 'D', 'F']);
+    expect(counterReadiness([])).toEqual({ total: 0, withTheJob: 0, waiting: [] });
   });
 });

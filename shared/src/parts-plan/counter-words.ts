@@ -36,3 +36,21 @@ export function counterLineStateWords(line: CounterLineState): string {
   if (short > 0) return `Short by ${short}`;
   return COUNTER_STATUS_LABELS[line.status as CounterStatus] ?? line.status;
 }
+
+/** Lines whose units are with the job: on its shelf or already issued to it. */
+export const WITH_THE_JOB_STATUSES: readonly CounterStatus[] = ['reserved', 'received', 'issued'];
+
+export interface CounterReadiness<T> {
+  /** The counter's lines of the job's plan. */
+  total: number;
+  /** Those on the job's shelf or issued to it. */
+  withTheJob: number;
+  /** The others (not set aside, to order, ordered), in the order given. */
+  waiting: T[];
+}
+
+/** How far the counter has the job's parts ready: what the bay checks before it takes the job. */
+export function counterReadiness<T extends { status: string }>(lines: readonly T[]): CounterReadiness<T> {
+  const waiting = lines.filter((line) => !(WITH_THE_JOB_STATUSES as readonly string[]).includes(line.status));
+  return { total: lines.length, withTheJob: lines.length - waiting.length, waiting };
+}

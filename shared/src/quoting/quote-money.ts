@@ -11,13 +11,21 @@ import { assertCents, divideRounded, markedUp, MoneyInputError, percentOf, scale
  * 6. total = parts - parts discount + labor - labor discount + supplies + tax
  * 7. deposit: round(total x deposit %) or a fixed amount, never more than the total
  */
-export const QUOTE_ROUNDING_RULE =
-  'Every amount is worked in whole cents. Each parts line is its unit price times its quantity (a unit priced from cost is cost x (1 + markup), rounded); ' +
+const ROUNDING_RULE_AFTER_PARTS =
   'each labor line is hours (to a tenth) x the shop rate, rounded; shop supplies are the labor subtotal x the supplies rate, rounded, ' +
   'and never more than the cap; a percent discount is taken from parts and from labor, each rounded; a fixed discount is split between ' +
   'parts and labor in proportion to their subtotals (the parts share rounded, labor takes the rest); tax is parts after discount x the ' +
   'parts tax rate, rounded, plus labor after discount with supplies x the labor tax rate, rounded; the deposit is the total x the deposit ' +
   'rate, rounded, or a fixed amount, never more than the total. Rounding is to the nearest cent, halves away from zero, only at these steps.';
+
+/** The rounding rule as the shop reads it, with how a unit priced from cost is worked out. */
+export const QUOTE_ROUNDING_RULE =
+  'Every amount is worked in whole cents. Each parts line is its unit price times its quantity (a unit priced from cost is cost x (1 + markup), rounded); ' +
+  ROUNDING_RULE_AFTER_PARTS;
+
+/** The same rule as the customer reads it (quote page, PDF): the shop's cost and markup are its own business. */
+export const QUOTE_ROUNDING_RULE_FOR_CUSTOMER =
+  'Every amount is worked in whole cents. Each parts line is its unit price times its quantity; ' + ROUNDING_RULE_AFTER_PARTS;
 
 export const PART_PRICINGS = ['list', 'cost-plus'] as const;
 export type PartPricing = (typeof PART_PRICINGS)[number];

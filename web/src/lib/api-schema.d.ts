@@ -4432,6 +4432,23 @@ export interface components {
             hazard: "lifting" | "support" | "fuel" | "welding" | "steering" | "brakes";
             caution: string;
         };
+        WaitingCounterLineResponseDto: {
+            sku: string;
+            description: string;
+            quantity: number;
+            /** @enum {string} */
+            status: "open" | "reserved" | "to-order" | "ordered" | "received" | "issued";
+        };
+        WorkPartsAtCounterResponseDto: {
+            /** @description The parts plan whose counter lines these are */
+            planId: string;
+            /** @description The counter's lines of the parts plan the approved quote was drawn from */
+            total: number;
+            /** @description Lines on the job’s shelf or issued to it */
+            withTheJob: number;
+            /** @description Lines not yet set aside, to order or ordered */
+            waiting: components["schemas"]["WaitingCounterLineResponseDto"][];
+        };
         WorkOrderResponseDto: {
             id: string;
             /** @example W-0007 */
@@ -4455,6 +4472,8 @@ export interface components {
             steps: components["schemas"]["WorkStepResponseDto"][];
             cautions: components["schemas"]["WorkCautionResponseDto"][];
             deference: string;
+            /** @description Null when the quote was not drawn from a parts plan */
+            partsAtCounter: components["schemas"]["WorkPartsAtCounterResponseDto"] | null;
         };
         RecordCheckDto: {
             /** @example oil-pan-pickup.screen-height */

@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { CHECK_RESULTS, CHECK_STATUSES, WORK_HAZARDS, WORK_ORDER_STATES, type CheckResult, type CheckStatus, type WorkHazard, type WorkOrderState } from '@swapwright/shared';
+import { CHECK_RESULTS, CHECK_STATUSES, COUNTER_STATUSES, WORK_HAZARDS, WORK_ORDER_STATES, type CheckResult, type CheckStatus, type CounterStatus, type WorkHazard, type WorkOrderState } from '@swapwright/shared';
 
 export class WorkPartResponseDto {
   @ApiProperty() sku: string;
@@ -100,6 +100,20 @@ export class WorkOrderSummaryResponseDto {
   @ApiProperty({ type: WorkProgressResponseDto }) progress: WorkProgressResponseDto;
 }
 
+export class WaitingCounterLineResponseDto {
+  @ApiProperty() sku: string;
+  @ApiProperty() description: string;
+  @ApiProperty() quantity: number;
+  @ApiProperty({ enum: COUNTER_STATUSES }) status: CounterStatus;
+}
+
+export class WorkPartsAtCounterResponseDto {
+  @ApiProperty({ description: 'The parts plan whose counter lines these are' }) planId: string;
+  @ApiProperty({ description: "The counter's lines of the parts plan the approved quote was drawn from" }) total: number;
+  @ApiProperty({ description: 'Lines on the job’s shelf or issued to it' }) withTheJob: number;
+  @ApiProperty({ type: [WaitingCounterLineResponseDto], description: 'Lines not yet set aside, to order or ordered' }) waiting: WaitingCounterLineResponseDto[];
+}
+
 export class WorkOrderResponseDto extends WorkOrderSummaryResponseDto {
   @ApiProperty() vehicleDescription: string;
   @ApiProperty() quoteId: string;
@@ -112,4 +126,6 @@ export class WorkOrderResponseDto extends WorkOrderSummaryResponseDto {
   @ApiProperty({ type: [WorkStepResponseDto] }) steps: WorkStepResponseDto[];
   @ApiProperty({ type: [WorkCautionResponseDto] }) cautions: WorkCautionResponseDto[];
   @ApiProperty() deference: string;
+  @ApiProperty({ type: WorkPartsAtCounterResponseDto, nullable: true, description: 'Null when the quote was not drawn from a parts plan' })
+  partsAtCounter: WorkPartsAtCounterResponseDto | null;
 }

@@ -25,6 +25,15 @@ const FIELD_WORDS: Record<string, string> = {
   reason: 'Reason',
   readings: 'Readings',
   signedOffAt: 'Signed off',
+  laborRatePerHour: 'Labor rate',
+  taxRatePercent: 'Tax on parts',
+  shopSuppliesPercent: 'Shop supplies',
+  laborTaxPercent: 'Tax on labor',
+  suppliesCapCents: 'Shop supplies cap',
+  depositPercent: 'Deposit share',
+  defaultMarkupPercent: 'Default markup',
+  lines: 'Lines',
+  changes: 'Changes',
 };
 
 /** Record ids and the provider's references: kept in the entry, not spelled out in the change. */
@@ -51,9 +60,13 @@ function stateWords(action: string, code: string): string {
 function valueWords(action: string, field: string, value: unknown, currency: string): string {
   if (value === null || value === undefined) return '—';
   if (field.endsWith('Cents') && typeof value === 'number') return formatMoney(value, currency);
+  if (field === 'laborRatePerHour' && typeof value === 'number') return `${formatMoney(Math.round(value * 100), currency)} per hour`;
+  if (field.endsWith('Percent') && typeof value === 'number') return `${value.toLocaleString('en-US')} %`;
   if ((field === 'status' || field === 'state') && typeof value === 'string') return stateWords(action, value);
   if (field.endsWith('At') && typeof value === 'string') return formatDateTime(value);
   if (typeof value === 'number') return value.toLocaleString('en-US');
+  if (Array.isArray(value)) return value.length === 0 ? 'none' : value.map((item) => valueWords(action, field, item, currency)).join('; ');
+  if (typeof value === 'object') return `(${changeWords(action, value as Record<string, unknown>, currency)})`;
   return String(value);
 }
 

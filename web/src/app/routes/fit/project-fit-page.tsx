@@ -113,6 +113,9 @@ export function ProjectFitPage() {
     !readOnly && !catalog.engines.loading && !catalog.chassis.loading && (catalog.engines.options.length === 0 || catalog.chassis.options.length === 0);
   const chosenIds = [sel?.oilPanId, sel?.oilPickupId, sel?.oilPumpId, sel?.controllerId, sel?.accessoryDriveId, sel?.mountAdapterId].filter((x): x is string => Boolean(x));
 
+  // The API refuses a run without both; the page says so before the press.
+  const needsFirst = !p.engineProfileId && !p.chassisModelId ? 'an engine and a chassis' : !p.engineProfileId ? 'an engine' : !p.chassisModelId ? 'a chassis' : null;
+
   return (
     <div className="fit-page">
       <Typography.Text className="fit-control">
@@ -128,7 +131,7 @@ export function ProjectFitPage() {
               Print
             </Button>
             {canRun && (
-              <Button type="primary" loading={run.isPending} onClick={() => run.mutate(projectId)}>
+              <Button type="primary" loading={run.isPending} disabled={Boolean(needsFirst)} onClick={() => run.mutate(projectId)}>
                 Run fit check
               </Button>
             )}
@@ -157,6 +160,11 @@ export function ProjectFitPage() {
           </Card>
         )}
 
+        {canRun && needsFirst && !catalogEmpty && (
+          <Typography.Text type="secondary" className="fit-control" data-testid="run-needs">
+            Choose {needsFirst} under “What goes in” to run the fit check.
+          </Typography.Text>
+        )}
         {run.isError && <Alert type="error" showIcon title="The fit check could not run" description={getErrorMessage(run.error)} />}
         {stale && stored && (
           <Alert

@@ -25,9 +25,18 @@ describe('the audit log in words', () => {
   });
 
   it('gives any other field and code readable words, and nothing recorded as a dash', () => {
-    expect(changeWords('shop.rates-changed', { laborRatePerHour: 135 })).toBe('Labor rate per hour: 135');
+    expect(changeWords('shop.rates-changed', { laborRatePerHour: 135, taxRatePercent: 8.25 })).toBe('Labor rate: $135.00 per hour, Tax on parts: 8.25 %');
+    expect(changeWords('quote-terms.changed', { suppliesCapCents: null, depositPercent: 30 })).toBe('Shop supplies cap: —, Deposit share: 30 %');
     expect(changeWords('job.retried', { state: 'queued', attempts: 0 })).toBe('State: Waiting, Attempts: 0');
     expect(changeWords('quote.sent', null)).toBe('—');
+    expect(changeWords('job.retried', { lastErrorCode: 'SMTP_DOWN' })).toBe('Last error code: SMTP_DOWN');
     expect(changeWords('payment.settled', { eventId: 'evt_1' })).toBe('—');
+  });
+
+  it('writes lists and nested records as words, never as [object Object]', () => {
+    expect(changeWords('counter.matched-to-quote', { lines: ['SW-90 ×1 (Not set aside)', 'PK-12 ×2 (Ordered)'] })).toBe('Lines: SW-90 ×1 (Not set aside); PK-12 ×2 (Ordered)');
+    expect(changeWords('counter.matched-to-quote', { lines: [{ sku: 'SW-90', quantity: 1, status: 'open' }], changes: [] })).toBe(
+      'Lines: (Sku: SW-90, Quantity: 1, Status: Not set aside), Changes: none',
+    );
   });
 });

@@ -1,6 +1,6 @@
 import { counterLineSetAside, counterLineShortBy, counterLineStateWords, type CounterStatus } from '@swapwright/shared';
 import { Button, Card, Empty, Flex, Grid, Select, Space, Table, Tag, Typography } from 'antd';
-import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
 import { BinCode } from '@/components/bin-code';
 import { palette } from '@/config/theme';
 import { formatMoneyCents } from '@/lib/units';
@@ -25,7 +25,17 @@ export type CounterBoardProps = {
 /** The counter's job board: each project's latest plan as a matched parts list with stock and bins, reservations and a printable pick list. */
 export function CounterBoard({ currency }: CounterBoardProps) {
   const plans = useRecentPartsPlans();
-  const [chosen, setChosen] = useState<string>();
+  // The job chosen is in the address (?plan=), so a reload or a link from its work order opens the same list.
+  const [params, setParams] = useSearchParams();
+  const chosen = params.get('plan') ?? undefined;
+  const setChosen = (id: string) =>
+    setParams(
+      (current) => {
+        current.set('plan', id);
+        return current;
+      },
+      { replace: true },
+    );
   const planId = chosen ?? plans.data?.[0]?.id;
   const plan = plans.data?.find((p) => p.id === planId);
   const lines = useCounterLines(planId);

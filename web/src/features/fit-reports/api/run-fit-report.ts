@@ -4,9 +4,9 @@ import { apiClient } from '@/lib/api-client';
 import type { StoredFitReport } from '../types';
 import { fitReportKeys } from './fit-report-keys';
 
-/** Runs the fit check on the server with the project's current inputs and stores the report. */
+/** Runs the fit check on the server with the project's current inputs and stores the report. A refusal is shown on the page, not as a notice. */
 export async function runFitReport(projectId: string): Promise<StoredFitReport> {
-  const { data } = await apiClient.post<StoredFitReport>(`/projects/${encodeURIComponent(projectId)}/fit-reports`, {});
+  const { data } = await apiClient.post<StoredFitReport>(`/projects/${encodeURIComponent(projectId)}/fit-reports`, {}, { skipErrorNotification: true });
   return data;
 }
 

@@ -31,7 +31,7 @@ function PartRemedyView({ remedy, parts, onUsePart, chosenIds, busyPartId }: { r
       {remedy.note && <Typography.Text type="secondary">: {renderRemedyText(remedy, units.system)}</Typography.Text>}
       {remedy.partIds.length === 0 ? (
         <Typography.Paragraph type="secondary" style={{ margin: 0, fontSize: 13 }}>
-          No catalog part matches yet. Add one to the catalog with: {Object.entries(remedy.requires).map(([k, v]) => describeRequirement(k, v, units)).join(', ')}.
+          No catalog part matches yet. Add one to the catalog: {Object.entries(remedy.requires).map(([k, v]) => describeRequirement(k, v, units)).join(', ')}.
         </Typography.Paragraph>
       ) : (
         <ul className="fit-remedy-parts" style={{ margin: '4px 0 0', paddingLeft: 18 }}>

@@ -1,4 +1,4 @@
-import { renderText, textParts } from '@swapwright/shared';
+import { quoteLineTextOptions, renderText, textParts, type QuoteLineWords } from '@swapwright/shared';
 import { useUnits } from '@/hooks/use-units';
 
 export interface LineDescriptionProps {
@@ -7,15 +7,11 @@ export interface LineDescriptionProps {
    * ("8.7 mm (0.34 in)"); a part line carries the part's name as its maker prints it ("Heavy mount kit, 90 mm"),
    * perhaps with the plan's paired figures after it.
    */
-  line: { kind: 'part' | 'labor'; description: string };
+  line: QuoteLineWords & { description: string };
 }
 
-/**
- * A quote line's description with the engine's figures in the reader's unit system. A part line converts only the
- * engine's paired lengths: a lone figure there is part of the name, which the customer, the counter and the supplier
- * must all read alike. The stored words stay as they are.
- */
+/** A quote line's description with the engine's figures in the reader's unit system (see quoteLineTextOptions); the stored words stay as they are. */
 export function LineDescription({ line }: LineDescriptionProps) {
   const { system } = useUnits();
-  return <>{renderText(textParts(line.description, { pairedLengthsOnly: line.kind === 'part' }), system)}</>;
+  return <>{renderText(textParts(line.description, quoteLineTextOptions(line)), system)}</>;
 }

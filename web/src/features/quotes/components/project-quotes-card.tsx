@@ -9,6 +9,7 @@ import { useSendQuote } from '../api/send-quote';
 import { formatDate } from '@/lib/dates';
 import { OWN_TRUCK_QUOTE_NOTE } from '../own-truck-quote';
 import { DepositTag, QuoteStatusTag } from './quote-status-tag';
+import { draftedFromWords } from '../drafted-from-words';
 import { SendQuoteConfirm } from './send-quote-confirm';
 import { StartOwnBuildButton } from './start-own-build-button';
 
@@ -46,7 +47,7 @@ export function ProjectQuotesCard({ projectId, canWrite, canAnswer = false, forM
       style={{ marginBottom: 16 }}
       extra={
         canWrite && (
-          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(`${forMyself ? 'Budget' : 'Quote'} ${quote.label} drafted from the parts plan and the fit report`) })} loading={create.isPending}>
+          <Button onClick={() => create.mutate({}, { onSuccess: (quote) => void message.success(draftedFromWords(quote)) })} loading={create.isPending}>
             {forMyself ? 'Draft a budget' : 'Draft a quote'}
           </Button>
         )

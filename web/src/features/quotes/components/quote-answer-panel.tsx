@@ -110,7 +110,7 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
     }
     const method = TEST_CARDS[digits];
     if (!method) {
-      setPayError('That card number is not one of the test cards of the local payment service.');
+      setPayError('That card number is not one of the local payment service’s test cards: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined.');
       return;
     }
     pay.mutate(method, { onSuccess: onPaymentSent, onError: (error) => setPayError(getErrorMessage(error)) });

@@ -90,7 +90,7 @@ export function QuoteLineEditor({ quote, defaultMarkupPercent, actions, update: 
           size="small"
           rowKey="key"
           pagination={false}
-          scroll={{ x: 'max-content' }}
+          scroll={{ x: 720 }}
           dataSource={lines}
           loading={update.isPending && !editing}
           onRow={(line) => ({ 'data-testid': `quote-line-${line.key}` }) as HTMLAttributes<HTMLElement>}

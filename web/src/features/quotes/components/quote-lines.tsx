@@ -41,7 +41,7 @@ export function QuoteLines({ quote }: QuoteLinesProps) {
       {narrow ? (
         <QuoteLineCards lines={lines} currency={currency} />
       ) : (
-        <Table<QuoteLine> size="small" rowKey="key" pagination={false} scroll={{ x: 'max-content' }} dataSource={lines} columns={quoteLineColumns(currency)} />
+        <Table<QuoteLine> size="small" rowKey="key" pagination={false} scroll={{ x: 720 }} dataSource={lines} columns={quoteLineColumns(currency)} />
       )}
       <QuoteTotals quote={quote} />
     </>

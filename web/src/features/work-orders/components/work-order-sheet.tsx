@@ -1,6 +1,7 @@
-import { renderText, textParts } from '@swapwright/shared';
-import { Alert, App, Button, Card, Flex, Progress, Space, Tag, Typography } from 'antd';
+import { COUNTER_STATUS_LABELS, renderText, textParts } from '@swapwright/shared';
+import { Alert, App, Button, Card, Flex, Popconfirm, Progress, Space, Tag, Typography } from 'antd';
 import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { useUnits } from '@/hooks/use-units';
 import { getErrorMessage } from '@/lib/api-error';
 import { formatDateTime } from '@/lib/dates';
@@ -52,12 +53,11 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
             {order.startedAt ? ` · in the bay since ${formatDateTime(order.startedAt)}` : ''}
             {order.finishedAt ? ` · finished ${formatDateTime(order.finishedAt)}` : ''}
           </Typography.Text>
+          {order.partsAtCounter && order.state !== 'finished' && <PartsAtCounter parts={order.partsAtCounter} />}
         </div>
         <Space wrap className="no-print">
           {canWork && order.state === 'ready' && (
-            <Button type="primary" loading={start.isPending} onClick={() => start.mutate(order.id, { onError: (error) => void message.error(getErrorMessage(error)) })}>
-              Start in the bay
-            </Button>
+            <StartInBayButton order={order} loading={start.isPending} onStart={() => start.mutate(order.id, { onError: (error) => void message.error(getErrorMessage(error)) })} />
           )}
           {canWork && inBay && (
             <Button
@@ -178,5 +178,54 @@ export function WorkOrderSheet({ order, canWork, projectPath }: WorkOrderSheetPr
         ))}
       </ol>
     </div>
+  );
+}
+
+type PartsAtCounterState = NonNullable<WorkOrder['partsAtCounter']>;
+
+/** "Parts: 6 of 7 counter lines with the job", and what the rest wait for, with the way to the counter. */
+function PartsAtCounter({ parts }: { parts: PartsAtCounterState }) {
+  const allThere = parts.waiting.length === 0;
+  return (
+    <Typography.Paragraph style={{ margin: '4px 0 0' }} data-testid="parts-at-counter">
+      <Tag color={allThere ? 'green' : 'gold'}>
+        Parts: {parts.withTheJob} of {parts.total} counter {parts.total === 1 ? 'line' : 'lines'} with the job
+      </Tag>
+      {!allThere && (
+        <Typography.Text type="secondary" style={{ fontSize: 13 }}>
+          waiting: {waitingWords(parts)} · <Link to={`${paths.partsCounter}?plan=${encodeURIComponent(parts.planId)}`}>Parts counter</Link>
+        </Typography.Text>
+      )}
+    </Typography.Paragraph>
+  );
+}
+
+function waitingWords(parts: PartsAtCounterState): string {
+  return parts.waiting.map((line) => `${line.quantity} × ${line.sku || line.description} (${COUNTER_STATUS_LABELS[line.status]})`).join(', ');
+}
+
+/** Starting with parts still waiting at the counter asks first, naming them; with every part there it starts at once. */
+function StartInBayButton({ order, loading, onStart }: { order: WorkOrder; loading: boolean; onStart: () => void }) {
+  const waiting = order.partsAtCounter?.waiting ?? [];
+  const button = (
+    <Button type="primary" loading={loading} onClick={waiting.length === 0 ? onStart : undefined}>
+      Start in the bay
+    </Button>
+  );
+  if (waiting.length === 0) return button;
+  return (
+    <Popconfirm
+      title="Start with parts still waiting?"
+      description={
+        <span style={{ display: 'block', maxWidth: 320 }}>
+          Not with the job yet: {waitingWords(order.partsAtCounter!)}. The bay may stop at the steps that need them.
+        </span>
+      }
+      okText="Start in the bay"
+      cancelText="Not yet"
+      onConfirm={onStart}
+    >
+      {button}
+    </Popconfirm>
   );
 }

@@ -86,7 +86,8 @@ describe('fit page by role', () => {
     mockApi();
     renderFitPage('estimator');
     await screen.findByText('Every check', undefined, { timeout: 20_000 });
-    expect(screen.getByRole('button', { name: 'Run fit check' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Run fit check' })).toBeEnabled();
+    expect(screen.queryByTestId('run-needs')).toBeNull();
     expect(screen.getByText('What goes in')).toBeInTheDocument();
     await waitFor(() => expect(screen.getByRole('button', { name: 'Save placement' })).toBeInTheDocument());
   });

@@ -1,5 +1,7 @@
-import { screen } from '@testing-library/react';
-import { afterEach, describe, expect, it } from 'vitest';
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { apiClient } from '@/lib/api-client';
 import { renderWithApp } from '@/test/render';
 import type { WorkOrder } from '../../types';
 import { WorkOrderSheet } from '../work-order-sheet';
@@ -43,6 +45,7 @@ const order: WorkOrder = {
   ],
   cautions: [{ hazard: 'lifting', caution: 'Support the vehicle on rated stands before working under it.' }],
   deference: 'Follow local codes and licensed practice.',
+  partsAtCounter: null,
 };
 
 // Each system writes each figure once, in its own unit; the other unit never shows.
@@ -66,5 +69,41 @@ describe('the work order reads the plan’s words in the person’s units', () =
     expect(step).toHaveTextContent(`XM-100: shim the mount by ${figures[2]} at most`);
     expect(step.textContent?.replace('Heavy mount kit, 90 mm', '')).not.toMatch(never);
     expect(order).toEqual(stored);
+  });
+});
+
+describe('starting in the bay with the counter’s parts in view', () => {
+  const waiting: WorkOrder['partsAtCounter'] = {
+    planId: 'plan-1',
+    total: 3,
+    withTheJob: 1,
+    waiting: [
+      { sku: 'PN-220', description: 'Rear-sump pan', quantity: 1, status: 'ordered' },
+      { sku: 'PU-31', description: 'Pickup', quantity: 2, status: 'open' },
+    ],
+  };
+
+  it('says how many counter lines are with the job, and asks before starting with the rest waiting', async () => {
+    const post = vi.spyOn(apiClient, 'post').mockResolvedValue({ data: { ...order, state: 'in-the-bay' } });
+    renderWithApp(<WorkOrderSheet order={{ ...order, partsAtCounter: waiting }} canWork projectPath="/projects/p-1" />);
+    const parts = screen.getByTestId('parts-at-counter');
+    expect(parts).toHaveTextContent('Parts: 1 of 3 counter lines with the job');
+    expect(parts).toHaveTextContent('waiting: 1 × PN-220 (Ordered), 2 × PU-31 (Not set aside)');
+    expect(within(parts).getByRole('link', { name: 'Parts counter' })).toHaveAttribute('href', '/parts-counter?plan=plan-1');
+
+    await userEvent.click(screen.getByRole('button', { name: 'Start in the bay' }));
+    const confirm = await screen.findByRole('tooltip');
+    expect(confirm).toHaveTextContent('Not with the job yet: 1 × PN-220 (Ordered), 2 × PU-31 (Not set aside)');
+    expect(post).not.toHaveBeenCalled();
+    await userEvent.click(within(confirm).getByRole('button', { name: 'Start in the bay' }));
+    await waitFor(() => expect(post).toHaveBeenCalledWith('/work-orders/wo-1/start'));
+  });
+
+  it('starts at once when every part is with the job', async () => {
+    const post = vi.spyOn(apiClient, 'post').mockResolvedValue({ data: { ...order, state: 'in-the-bay' } });
+    renderWithApp(<WorkOrderSheet order={{ ...order, partsAtCounter: { planId: 'plan-1', total: 2, withTheJob: 2, waiting: [] } }} canWork projectPath="/projects/p-1" />);
+    expect(screen.getByTestId('parts-at-counter')).toHaveTextContent('Parts: 2 of 2 counter lines with the job');
+    await userEvent.click(screen.getByRole('button', { name: 'Start in the bay' }));
+    await waitFor(() => expect(post).toHaveBeenCalledWith('/work-orders/wo-1/start'));
   });
 });
