@@ -152,6 +152,7 @@ describe('labor operations and quotes', () => {
       const opened = await t.http.get(`/api/quote-links/${token}`);
       expect(opened.status).toBe(200);
       expect(opened.body.revision.totals.totalCents).toBe(181071);
+      expect(opened.body.shopName).toBe('Ironbark Swap Works');
       // The customer reads how the figures are rounded, not how the shop marks its cost up.
       expect(opened.body.roundingRule).toMatch(/halves away from zero/);
       expect(opened.body.roundingRule).not.toMatch(/markup|cost/);

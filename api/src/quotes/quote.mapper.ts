@@ -68,6 +68,7 @@ export function mapQuote(view: QuoteView, viewer: QuoteViewer): QuoteResponseDto
     id: quote.id,
     projectId: project.id,
     projectTitle: project.title,
+    shopName: view.shopName,
     customerName: project.customer?.name ?? null,
     customerEmail: project.customer?.email ?? null,
     forMyself: viewer !== 'link' && isOwnProject(project, viewer),

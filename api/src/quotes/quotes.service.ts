@@ -45,6 +45,8 @@ export const BASE_OPERATION_CODES = ['engine-remove-install'] as const;
 /** Everything one view of a quote needs. */
 export interface QuoteView {
   quote: Quote;
+  /** The shop's name, which the customer reads the quote under. */
+  shopName: string;
   status: QuoteStatus;
   project: Project;
   revision: QuoteRevision;
@@ -149,9 +151,9 @@ export class QuotesService implements OnModuleInit {
       throw QuoteErrors.badLine(`status must be one of: ${QUOTE_STATUSES.join(', ')}`);
     }
     const quotes = await this.quotes.repository.find({ where: this.quotes.where(user), order: { number: 'DESC' }, take: 100 });
-    const today = await this.shopToday(user.shopId);
+    const shop = await this.shops.getById(user.shopId);
     const views: QuoteView[] = [];
-    for (const quote of quotes) views.push(await this.viewOf(user, quote, await this.projects.get(user, quote.projectId), undefined, today));
+    for (const quote of quotes) views.push(await this.viewOf(user, quote, await this.projects.get(user, quote.projectId), undefined, shop));
     return status ? views.filter((view) => view.status === status) : views;
   }
 
@@ -481,12 +483,14 @@ export class QuotesService implements OnModuleInit {
     return todayIn((await this.shops.getById(shopId)).timeZone);
   }
 
-  private async viewOf(user: AuthUser, quote: Quote, project: Project, sentOnly = user.role === 'customer', today?: string): Promise<QuoteView> {
+  /** `shop`: the quote's shop when the caller has it already (a list reads it once). */
+  private async viewOf(user: AuthUser, quote: Quote, project: Project, sentOnly = user.role === 'customer', shop?: Pick<Shop, 'name' | 'timeZone'>): Promise<QuoteView> {
     const all = await this.revisions.repository.find({ where: this.revisions.where(user, { quoteId: quote.id }), order: { number: 'ASC' } });
     const revisions = sentOnly ? all.filter((revision) => revision.sentAt !== null) : all;
     const sent = all.find((revision) => revision.number === quote.sentRevision) ?? null;
     const revision = sentOnly ? (sent ?? revisions[revisions.length - 1]) : all[all.length - 1];
-    return { quote, status: effectiveQuoteStatus(quote, sent, today ?? (await this.shopToday(quote.shopId))), project, revision, revisions };
+    const { name, timeZone } = shop ?? (await this.shops.getById(quote.shopId));
+    return { quote, shopName: name, status: effectiveQuoteStatus(quote, sent, todayIn(timeZone)), project, revision, revisions };
   }
 
   /**

@@ -4167,6 +4167,8 @@ export interface components {
             id: string;
             projectId: string;
             projectTitle: string;
+            /** @description The shop the quote is from, as the customer reads it */
+            shopName: string;
             customerName: string | null;
             /** @description Where sending the quote e-mails it; null when the customer has no e-mail address (sending is refused) */
             customerEmail: string | null;

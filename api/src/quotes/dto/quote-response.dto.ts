@@ -71,6 +71,7 @@ export class QuoteResponseDto {
   @ApiProperty() id: string;
   @ApiProperty() projectId: string;
   @ApiProperty() projectTitle: string;
+  @ApiProperty({ description: 'The shop the quote is from, as the customer reads it' }) shopName: string;
   @ApiProperty({ type: String, nullable: true }) customerName: string | null;
   @ApiProperty({ type: String, nullable: true, description: 'Where sending the quote e-mails it; null when the customer has no e-mail address (sending is refused)' })
   customerEmail: string | null;

@@ -15,7 +15,7 @@ export function SignUpForm({ onBack }: SignUpFormProps) {
       <Result
         status="success"
         title="Check your e-mail"
-        subTitle={`${signUp.data.message} The link works once, for 24 hours. Already have an account with that address? The e-mail says so instead.`}
+        subTitle={`We sent ${signUp.variables.email} a link to finish creating your shop. It works once, for 24 hours. Already have an account with that address? The e-mail says so instead.`}
         extra={onBack && <Button onClick={onBack}>Back to sign in</Button>}
       />
     );

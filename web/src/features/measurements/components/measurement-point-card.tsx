@@ -1,4 +1,4 @@
-import { Alert, Button, Card, Collapse, Flex, Input, Tag, Typography } from 'antd';
+import { Alert, Button, Card, Collapse, Flex, Input, Popconfirm, Tag, Typography } from 'antd';
 import { useState } from 'react';
 import { formatDateTime } from '@/lib/dates';
 import { getErrorMessage } from '@/lib/api-error';
@@ -62,11 +62,17 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
   const [seenVersion, setSeenVersion] = useState<number | null>(null);
   /** Someone saved another reading after the person started typing: the API's sentence and the reason given, if any. */
   const [conflict, setConflict] = useState<{ message: string; seenVersion: number; reason?: string } | null>(null);
+  /** A reading far from the catalog (most often a figure in the other unit) is saved only after a second yes. */
+  const [confirmingSlip, setConfirmingSlip] = useState(false);
   const fmt = (v: number, unit: 'mm' | 'deg') => formatReading(v, unit, formatLength);
   const comparison = value ? compareReading(value, point, system, formatLength) : null;
   const against = comparison?.movedByRideHeight ? 'what the catalog predicts at this ride height' : 'the catalog';
   const reading = readEntry(text, point, system);
   const toleranceReading = readEntry(tolerance, point, system);
+  const slip = reading.ok === true && point.catalogValue !== null && unitSlip(reading, { catalogValue: point.catalogValue });
+  /** Saves, after the reason for changing a signed-off sheet when it is one. */
+  const commit = () => (signedOff ? setAskReason(true) : void save());
+  const submit = () => (slip ? setConfirmingSlip(true) : commit());
   const unitHint = point.unit === 'deg' ? 'degrees, e.g. 2.5 or -1.5°' : system === 'in' ? 'e.g. 12 1/2", 12.5 in or 318 mm' : 'e.g. 318 mm, 12 1/2" or 12.5 in';
 
   const clear = () => {
@@ -198,7 +204,7 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
               value={text}
               status={reading.ok === false ? 'error' : undefined}
               onChange={(e) => onType(e.target.value)}
-              onPressEnter={() => (signedOff ? setAskReason(true) : void save())}
+              onPressEnter={submit}
               style={{ fontSize: 20, height: 52 }}
             />
             <ReadingPreview reading={reading} fmt={fmt} catalogValue={point.catalogValue} system={system} />
@@ -263,17 +269,37 @@ export function MeasurementPointCard({ row, system, formatLength, signedOff, can
                 }
               />
             )}
-            <Button
-              type="primary"
-              size="large"
-              block
-              disabled={reading.ok !== true || toleranceReading.ok === false || conflict !== null}
-              loading={saving && !askReason}
-              onClick={() => (signedOff ? setAskReason(true) : void save())}
-              style={{ height: 48 }}
+            <Popconfirm
+              open={confirmingSlip && slip}
+              onOpenChange={(open) => !open && setConfirmingSlip(false)}
+              title="Far from the catalog: save it as read?"
+              description={
+                reading.ok === true && point.catalogValue !== null ? (
+                  <span style={{ display: 'block', maxWidth: 300 }} data-testid="unit-slip-confirm">
+                    It reads as {fmt(reading.value, reading.unit)}; the catalog has {fmt(point.catalogValue, 'mm')}. If the tape said something else, fix the
+                    figure or add its unit (mm, in or ft).
+                  </span>
+                ) : null
+              }
+              okText="Save as read"
+              cancelText="Fix it"
+              onConfirm={() => {
+                setConfirmingSlip(false);
+                commit();
+              }}
             >
-              {value ? 'Save new reading' : 'Save reading'}
-            </Button>
+              <Button
+                type="primary"
+                size="large"
+                block
+                disabled={reading.ok !== true || toleranceReading.ok === false || conflict !== null}
+                loading={saving && !askReason}
+                onClick={submit}
+                style={{ height: 48 }}
+              >
+                {value ? 'Save new reading' : 'Save reading'}
+              </Button>
+            </Popconfirm>
           </Flex>
         )}
 

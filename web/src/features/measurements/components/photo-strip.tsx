@@ -110,7 +110,7 @@ function UploadTile({ upload, alt, actions }: { upload: PhotoUpload; alt: string
                   </Button>
                 )}
                 <Button block style={{ height: TOUCH }} onClick={() => actions.onDismiss(upload.key)}>
-                  Drop
+                  Discard
                 </Button>
               </Flex>
             </>

@@ -104,7 +104,7 @@ export function ProjectPlacementCard({ project }: ProjectPlacementCardProps) {
         />
       ) : (
         <Typography.Paragraph type="secondary" style={{ margin: 0 }}>
-          Not placed yet. The placement is set once the chassis is measured and a fit check has run.
+          No placement saved yet: each fit check places the engine itself, at the best placement it finds in the engine bay. Save one on the fit check page to keep it.
         </Typography.Paragraph>
       )}
       <Alert

@@ -130,7 +130,7 @@ function QuoteAnswerView({ quote: q, pdf, answer, pay, paying, onPaymentSent }: 
         }
       >
         <Typography.Paragraph>
-          {q.projectTitle} · for {q.customerName} · valid until {formatDate(q.revision.validUntil)}
+          From <Typography.Text strong>{q.shopName}</Typography.Text> · {q.projectTitle} · for {q.customerName} · valid until {formatDate(q.revision.validUntil)}
         </Typography.Paragraph>
         <QuoteLines quote={q} />
         <Typography.Paragraph style={{ marginTop: 12 }}>

@@ -150,7 +150,7 @@ export function CheckPhotos({ workOrderId, check, canAdd }: CheckPhotosProps) {
                             </Button>
                           )}
                           <Button size="small" onClick={() => drop(upload.key)}>
-                            Drop
+                            Discard
                           </Button>
                         </Flex>
                       </>

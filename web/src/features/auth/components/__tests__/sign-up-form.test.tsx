@@ -46,6 +46,7 @@ describe('SignUpForm', () => {
 
     answer.resolve({ data: { message: 'We sent a link to merrin@ironbark.example.' } });
     expect(await screen.findByText('Check your e-mail')).toBeInTheDocument();
+    expect(screen.getByText(/^We sent merrin@ironbark.example a link to finish creating your shop./)).toBeInTheDocument();
     expect(post).toHaveBeenCalledTimes(1);
   });
 });

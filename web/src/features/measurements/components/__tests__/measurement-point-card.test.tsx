@@ -60,10 +60,32 @@ describe('a point of the sheet', () => {
     fireEvent.change(box, { target: { value: '12 1/2 ft' } });
     expect(screen.getByTestId('reading-preview')).toHaveTextContent('3810 mm');
     expect(screen.getByTestId('unit-slip')).toHaveTextContent(/check the unit\. A bare number is read in inches/);
-    // It still saves (the truck may really be that way): the warning only asks for a look.
+    // It still saves (the truck may really be that way), after a second yes naming both figures.
     expect(screen.getByRole('button', { name: 'Save reading' })).toBeEnabled();
     fireEvent.change(box, { target: { value: '14' } });
     expect(screen.queryByTestId('unit-slip')).not.toBeInTheDocument();
+  });
+
+  it('saves a reading far from the catalog only after a second yes', async () => {
+    const { onSave } = renderCard();
+    const box = screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' });
+    // A bare 135 in an inch shop: 135 in = 3429 mm (NIST SP 811 B.8), most likely 135 mm typed without its unit.
+    fireEvent.change(box, { target: { value: '135' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
+    expect(await screen.findByTestId('unit-slip-confirm')).toHaveTextContent(/It reads as 3429 mm; the catalog has \d+(\.\d+)? mm/);
+    expect(onSave).not.toHaveBeenCalled();
+    fireEvent.click(screen.getByRole('button', { name: 'Fix it' }));
+    fireEvent.change(box, { target: { value: '135 mm' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
+    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '135', unit: 'mm', seenVersion: 0 }));
+  });
+
+  it('saves the far reading as read when the person says so', async () => {
+    const { onSave } = renderCard();
+    fireEvent.change(screen.getByRole('textbox', { name: 'Reading: Front crossmember: top' }), { target: { value: '135' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save reading' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Save as read' }));
+    await waitFor(() => expect(onSave).toHaveBeenCalledWith('front-crossmember.top', { value: '3429', unit: 'mm', seenVersion: 0 }));
   });
 
   it('will not save what it cannot read', () => {

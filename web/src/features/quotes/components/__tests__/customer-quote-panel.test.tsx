@@ -25,6 +25,8 @@ describe('CustomerQuotePanel (the signed-in customer answers a sent quote)', () 
     );
     expect(screen.getByTestId('answer-money')).toHaveTextContent('The remaining $1,267.50 is not charged here.');
     expect(screen.getByText(/never work under a vehicle held only by a jack/i)).toBeInTheDocument();
+    // The customer reads whose quote it is.
+    expect(screen.getByText('Test Garage')).toBeInTheDocument();
   });
 
   it('accepts through the signed-in route, then pays the deposit with the local test card', async () => {

@@ -27,6 +27,7 @@ export function quoteStub(overrides: Partial<Quote['revision']> = {}, quote: Par
     id: 'quote-7',
     projectId: 'project-1',
     projectTitle: 'Harlan Ridgeback 1978: Kestrel 5.3 V8 swap',
+    shopName: 'Test Garage',
     customerName: 'Marlo Penhallow',
     customerEmail: 'marlo@penhallow.test',
     forMyself: false,

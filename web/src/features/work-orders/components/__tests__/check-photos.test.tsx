@@ -118,7 +118,7 @@ describe('a wrong check photo is removed after a confirmation', () => {
     const refused = await screen.findByTestId('check-photo-upload');
     expect(await within(refused).findByRole('alert')).toHaveTextContent(message);
     expect(within(refused).queryByRole('button', { name: 'Retry' })).toBeNull();
-    fireEvent.click(within(refused).getByRole('button', { name: 'Drop' }));
+    fireEvent.click(within(refused).getByRole('button', { name: 'Discard' }));
     await waitFor(() => expect(screen.queryByTestId('check-photo-upload')).toBeNull());
   });
 });
