@@ -1,8 +1,19 @@
 import { DEMO_CUSTOMER_IDS, DEMO_PROJECT_IDS, DemoRole } from '@swapwright/seed-data';
 import { bearer, countRows, createTestApp, resetData, Session, signIn, signInAllRoles, TestApp } from './helpers/test-app';
 
+/** The links of the invitation mails to an address used once, in the order sent (the fake lists the newest first; the background worker sends them: up to 5 s). */
+async function invitationTokensFor(email: string, count: number): Promise<string[]> {
+  let mails: Array<{ to: string[]; text: string }> = [];
+  for (let attempt = 0; attempt < 50 && mails.length < count; attempt++) {
+    mails = ((await (await fetch(process.env.MAIL_FAKE_URL!)).json()) as Array<{ to: string[]; text: string }>).filter((m) => m.to.includes(email)).reverse();
+    if (mails.length < count) await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  if (mails.length < count) throw new Error(`${mails.length} invitation mails for ${email}, not ${count}`);
+  return mails.slice(0, count).map((mail) => decodeURIComponent(/accept-invite\?token=([A-Za-z0-9_%-]+)/.exec(mail.text)![1]));
+}
+
+/** The link of the newest invitation mail to `email` (one sent by this run: the fake keeps earlier runs' mail, newest first). */
 async function invitationTokenFor(email: string): Promise<string> {
-  // The background worker sends the invitation: wait up to 5 s for it.
   let mail: { to: string[]; text: string } | undefined;
   for (let attempt = 0; attempt < 50 && !mail; attempt++) {
     const mails = (await (await fetch(process.env.MAIL_FAKE_URL!)).json()) as Array<{ to: string[]; text: string }>;
@@ -27,7 +38,8 @@ describe('memberships and invitations', () => {
   afterAll(() => t.close());
 
   it('invites a customer login linked to a customer record; accepting shows their projects only', async () => {
-    const email = 'odile.login@example.test';
+    // An address of this run's own: the mail fake keeps the mail of earlier runs.
+    const email = `odile.login.${Date.now()}@example.test`;
     const invitation = await t.http
       .post('/api/invitations')
       .set(...bearer(s.owner))
@@ -60,7 +72,7 @@ describe('memberships and invitations', () => {
   });
 
   it('refuses an expired invitation and creates no user', async () => {
-    const email = 'late@example.test';
+    const email = `late.${Date.now()}@example.test`;
     await t.http.post('/api/invitations').set(...bearer(s.owner)).send({ email, role: 'fabricator' }).expect(201);
     const token = await invitationTokenFor(email);
     await t.dataSource.query('UPDATE invitations SET expiresAt = NOW(3) - INTERVAL 1 MINUTE WHERE email = ?', [email]);
@@ -94,5 +106,38 @@ describe('memberships and invitations', () => {
     expect(response.body.code).toBe('membership_revoked');
     await t.http.post('/api/auth/sign-in').send({ email: 'fabricator@ironbark.test', password: 'swap-demo-2026' }).expect(403);
     await signIn(t.http, 'owner@ironbark.test');
+  });
+
+  it('sends a pending invitation again with a new link (the old one stops working), withdraws one, and logs both', async () => {
+    // Addresses of this run's own: the mail fake keeps the mail of earlier runs.
+    const email = `again.${Date.now()}@example.test`;
+    const invited = await t.http.post('/api/invitations').set(...bearer(s.owner)).send({ email, role: 'fabricator' }).expect(201);
+    const [first] = await invitationTokensFor(email, 1);
+    const resent = await t.http.post(`/api/invitations/${invited.body.id}/resend`).set(...bearer(s.owner)).expect(200);
+    expect(resent.body).toMatchObject({ id: invited.body.id, email, role: 'fabricator', acceptedAt: null });
+    expect(Date.parse(resent.body.expiresAt)).toBeGreaterThanOrEqual(Date.parse(invited.body.expiresAt));
+    const [, second] = await invitationTokensFor(email, 2);
+    expect(second).not.toBe(first);
+    expect((await t.http.post('/api/invitations/accept').send({ token: first, name: 'Old Link', password: 'old-link-pass' }).expect(400)).body.code).toBe('invitation_invalid');
+    await t.http.post('/api/invitations/accept').send({ token: second, name: 'New Link', password: 'new-link-pass' }).expect(200);
+    // Accepted: nothing left to send again or withdraw.
+    const accepted = await t.http.post(`/api/invitations/${invited.body.id}/resend`).set(...bearer(s.owner)).expect(409);
+    expect(accepted.body.code).toBe('invitation_accepted');
+    await t.http.delete(`/api/invitations/${invited.body.id}`).set(...bearer(s.owner)).expect(409);
+
+    const withdrawnEmail = `withdrawn.${Date.now()}@example.test`;
+    const withdrawn = await t.http.post('/api/invitations').set(...bearer(s.owner)).send({ email: withdrawnEmail, role: 'counter' }).expect(201);
+    const [token] = await invitationTokensFor(withdrawnEmail, 1);
+    await t.http.delete(`/api/invitations/${withdrawn.body.id}`).set(...bearer(s.owner)).expect(204);
+    const users = await countRows(t.dataSource, 'users');
+    await t.http.post('/api/invitations/accept').send({ token, name: 'Too Late', password: 'too-late-pass' }).expect(400);
+    expect(await countRows(t.dataSource, 'users')).toBe(users);
+    const listed = await t.http.get('/api/invitations').set(...bearer(s.owner)).expect(200);
+    expect(listed.body.map((i: { id: string }) => i.id)).not.toContain(withdrawn.body.id);
+    expect((await t.http.delete(`/api/invitations/${withdrawn.body.id}`).set(...bearer(s.owner)).expect(404)).body.code).toBe('invitation_not_found');
+
+    const log = await t.http.get('/api/audit-events?kind=membership&pageSize=100').set(...bearer(s.owner)).expect(200);
+    const actions = (log.body.items as { action: string; subjectId: string; actorName: string }[]).filter((event) => [invited.body.id, withdrawn.body.id].includes(event.subjectId));
+    expect(actions.map((event) => event.action).sort()).toEqual(['invitation.resent', 'invitation.sent', 'invitation.sent', 'invitation.withdrawn']);
   });
 });

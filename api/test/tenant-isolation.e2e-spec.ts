@@ -158,6 +158,7 @@ describe("tenant isolation of every object route, generated from the router", ()
       'checks:checkKey': 'oil-pan-pickup.pickup-tabs',
       'work-order-photos:id': shop.workOrderPhotoId,
       'jobs:id': shop.deadJobId,
+      'invitations:id': shop.invitationId,
     };
     return ids[`${segment.split('/').pop()}:${param}`];
   }

@@ -3,7 +3,8 @@ import { ConfigService } from '@nestjs/config';
 import { EnvironmentVariables } from '../config/env.validation';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { DataSource, IsNull, MoreThan, Repository } from 'typeorm';
+import { DataSource, EntityManager, IsNull, MoreThan, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { PasswordHasher } from '../auth/password-hasher';
 import { IssuedSession, SessionsService } from '../auth/sessions.service';
 import { hashToken, newOpaqueToken } from '../auth/token-hash';
@@ -22,6 +23,9 @@ import { InvitationErrors } from './invitations.errors';
 
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
+/** What the audit log keeps of an invitation (never its token). */
+const invitationState = (invitation: Invitation) => ({ email: invitation.email, role: invitation.role, expiresAt: invitation.expiresAt.toISOString() });
+
 @Injectable()
 export class InvitationsService {
   private readonly scoped: TenantRepository<Invitation>;
@@ -37,6 +41,7 @@ export class InvitationsService {
     private readonly passwords: PasswordHasher,
     private readonly customers: CustomersService,
     private readonly shops: ShopsService,
+    private readonly audit: AuditService,
   ) {
     this.scoped = new TenantRepository(invitations);
   }
@@ -66,16 +71,64 @@ export class InvitationsService {
       acceptedAt: null,
       invitedByUserId: user.userId,
     });
-    const shop = await this.shops.getCurrent(user);
-    // The invitation and its mail are stored together; the background worker sends it.
+    // The invitation, its mail and its audit entry are stored together; the background worker sends the mail.
     await this.dataSource.transaction(async (manager) => {
       await manager.insert(Invitation, invitation);
-      await this.mail.enqueue(manager, `invitation:${invitation.id}`, user.shopId, {
-        to: email,
-        ...MailTemplates.invitation({ inviter: user.name, shopName: shop.name, role: input.role, link: this.acceptLink(token) }),
-      });
+      await this.mailInvitation(manager, user, invitation, token, `invitation:${invitation.id}`);
+      await this.recordInvitation(manager, user, invitation.id, 'invitation.sent', `${email} was invited as ${input.role}.`, null, invitationState(invitation));
     });
     return this.scoped.repository.findOneByOrFail({ id: invitation.id });
+  }
+
+  /** A new link (the old one stops working), valid 7 days from now, e-mailed again. */
+  async resend(user: AuthUser, id: string): Promise<Invitation> {
+    await this.dataSource.transaction(async (manager) => {
+      const invitation = await this.lockPending(manager, user, id);
+      const before = invitationState(invitation);
+      const { token, hash } = newOpaqueToken();
+      invitation.tokenHash = hash;
+      invitation.expiresAt = new Date(Date.now() + INVITATION_TTL_MS);
+      await manager.save(invitation);
+      await this.mailInvitation(manager, user, invitation, token, `invitation:${invitation.id}:${hash.slice(0, 16)}`);
+      await this.recordInvitation(manager, user, invitation.id, 'invitation.resent', `The invitation of ${invitation.email} was sent again with a new link.`, before, invitationState(invitation));
+    });
+    return this.scoped.repository.findOneByOrFail({ id });
+  }
+
+  /** Withdraws an invitation not accepted yet: its link stops working. */
+  async withdraw(user: AuthUser, id: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const invitation = await this.lockPending(manager, user, id);
+      await this.recordInvitation(manager, user, invitation.id, 'invitation.withdrawn', `The invitation of ${invitation.email} (${invitation.role}) was withdrawn.`, invitationState(invitation), null);
+      await manager.delete(Invitation, { id: invitation.id, shopId: user.shopId });
+    });
+  }
+
+  private async lockPending(manager: EntityManager, user: AuthUser, id: string): Promise<Invitation> {
+    const invitation = await manager.findOne(Invitation, { where: { id, shopId: user.shopId }, lock: { mode: 'pessimistic_write' } });
+    if (!invitation) throw InvitationErrors.notFound();
+    if (invitation.acceptedAt) throw InvitationErrors.alreadyAccepted();
+    return invitation;
+  }
+
+  private async mailInvitation(manager: EntityManager, user: AuthUser, invitation: Invitation, token: string, idempotencyKey: string): Promise<void> {
+    const shop = await this.shops.getCurrent(user);
+    await this.mail.enqueue(manager, idempotencyKey, user.shopId, {
+      to: invitation.email,
+      ...MailTemplates.invitation({ inviter: user.name, shopName: shop.name, role: invitation.role, link: this.acceptLink(token) }),
+    });
+  }
+
+  private recordInvitation(
+    manager: EntityManager,
+    user: AuthUser,
+    invitationId: string,
+    action: string,
+    summary: string,
+    before: Record<string, unknown> | null,
+    after: Record<string, unknown> | null,
+  ): Promise<void> {
+    return this.audit.record(manager, { shopId: user.shopId, actor: user, kind: 'membership', action, subjectId: invitationId, summary, before, after });
   }
 
   /** Creates the login and the membership (and links the customer record) in one transaction. */

@@ -76,6 +76,8 @@ export const ROUTE_POLICY: Record<string, Access> = {
   'DELETE /api/memberships/:id': OWNER,
   'GET /api/invitations': OWNER,
   'POST /api/invitations': OWNER,
+  'POST /api/invitations/:id/resend': OWNER,
+  'DELETE /api/invitations/:id': OWNER,
   'GET /api/dev/mail': OWNER,
   'GET /api/audit-events': OWNER,
   'GET /api/jobs': OWNER,

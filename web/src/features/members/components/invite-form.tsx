@@ -29,7 +29,6 @@ export function InviteForm({ customerOptions, customersLoading, onCustomerSearch
       form={form}
       layout="vertical"
       aria-label="Invite a member"
-      initialValues={{ role: 'estimator' satisfies Role }}
       onFinish={(v) =>
         invite.mutate({ email: v.email.trim(), role: v.role, ...(v.role === 'customer' && v.customerId ? { customerId: v.customerId } : {}) })
       }
@@ -45,9 +44,10 @@ export function InviteForm({ customerOptions, customersLoading, onCustomerSearch
       >
         <Input type="email" placeholder="name@example.com" />
       </Form.Item>
-      <Form.Item label="Role" name="role" rules={[{ required: true }]} extra={role ? roleHints[role] : undefined}>
+      <Form.Item label="Role" name="role" rules={[{ required: true, message: 'Choose what this person does in the shop' }]} extra={role ? roleHints[role] : undefined}>
         <Select<Role>
           aria-label="Role"
+          placeholder="Choose a role"
           options={roles.filter((r) => r !== 'owner').map((r) => ({ value: r, label: roleLabels[r] }))}
         />
       </Form.Item>

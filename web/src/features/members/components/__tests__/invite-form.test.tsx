@@ -23,4 +23,11 @@ describe('InviteForm', () => {
     await openCustomerPicker();
     expect(await screen.findByText('No customer found')).toBeInTheDocument();
   });
+
+  it('asks for the role instead of picking one for the owner', async () => {
+    renderWithApp(<InviteForm customerOptions={[]} customersLoading={false} />);
+    await userEvent.type(screen.getByLabelText('Email'), 'wren@example.test');
+    await userEvent.click(screen.getByRole('button', { name: 'Send invitation' }));
+    expect(await screen.findByText('Choose what this person does in the shop')).toBeInTheDocument();
+  });
 });
