@@ -9,6 +9,12 @@ import type { QuoteLine } from '../types';
 import { NumberField } from '@/components/number-field';
 import { ChoiceField } from './quote-fields';
 
+/** Parts are counted whole: 1.5 is refused in words rather than rounded to 2 behind the person's back. */
+const WHOLE_QUANTITY = {
+  validator: (_rule: unknown, value: unknown) =>
+    typeof value !== 'number' || Number.isInteger(value) ? Promise.resolve() : Promise.reject(new Error('Quantity is a whole number of parts (1, 2, 3…)')),
+};
+
 export interface QuoteLineDrawerProps {
   open: boolean;
   kind: QuoteLine['kind'];
@@ -106,7 +112,16 @@ export function QuoteLineDrawer({ open, kind, line, currency, defaultMarkupPerce
                 </Form.Item>
               </Col>
               <Col span={10}>
-                <NumberField label="Quantity" name="quantity" required="Enter how many" example="2" min={1} max={10000} precision={0} />
+                <NumberField
+                  label="Quantity"
+                  name="quantity"
+                  required="Enter how many"
+                  example="2"
+                  min={1}
+                  max={10000}
+                  rangeMessage="Quantity is from 1 to 10,000"
+                  rules={[WHOLE_QUANTITY]}
+                />
               </Col>
             </Row>
             <ChoiceField

@@ -165,6 +165,25 @@ describe('QuoteLineEditor', () => {
     expect((patch.mock.calls[0][1] as PatchBody).lines[3]).toMatchObject({ key: 'line-install', hours: 2.3 });
   });
 
+  it('checks a quantity before sending: whole parts from 1 to 10,000, said beside the field, never rounded', async () => {
+    const patch = vi.spyOn(apiClient, 'patch').mockResolvedValue({ data: quoteStub() });
+    renderEditor();
+    await userEvent.click(screen.getByRole('button', { name: 'Edit Pickup tube and screen' }));
+    const form = await screen.findByRole('form', { name: 'Edit parts line' });
+    const quantity = within(form).getByRole('spinbutton', { name: 'Quantity' });
+
+    fireEvent.input(quantity, { target: { value: '1.5' } });
+    fireEvent.change(quantity, { target: { value: '1.5' } });
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    expect(await within(form).findByText('Quantity is a whole number of parts (1, 2, 3…)')).toBeInTheDocument();
+
+    fireEvent.input(quantity, { target: { value: '-1' } });
+    fireEvent.change(quantity, { target: { value: '-1' } });
+    await userEvent.click(screen.getByRole('button', { name: 'Save line' }));
+    expect(await within(form).findByText('Quantity is from 1 to 10,000')).toBeInTheDocument();
+    expect(patch).not.toHaveBeenCalled();
+  });
+
   it('says what is wrong with hours in words', () => {
     // Common practice (no published source): labor is quoted to a tenth of an hour (6 minutes).
     expect(hoursProblem(2.2)).toBeNull();
