@@ -86,6 +86,12 @@ describe('parts catalog, plans and counter', () => {
     expect(again.status).toBe(409);
   });
 
+  it("the counter's work list names each job's customer and stage, so two trucks of one model read apart and a built job can be set aside", async () => {
+    const listed = await t.http.get('/api/parts-plans').set(...bearer(demo.counter)).expect(200);
+    const project = (await t.http.get(`/api/projects/${ridgeback}`).set(...bearer(demo.counter)).expect(200)).body as { status: string; customer: { name: string } };
+    expect(listed.body.find((plan: { projectId: string }) => plan.projectId === ridgeback)).toMatchObject({ projectStatus: project.status, customerName: project.customer.name });
+  });
+
   it('two clerks reserving the last unit at once: exactly one succeeds, the other gets a 409', async () => {
     const a = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({});
     const b = await t.http.post(`/api/projects/${ridgeback}/parts-plans`).set(...bearer(demo.estimator)).send({});

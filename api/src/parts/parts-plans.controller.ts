@@ -82,6 +82,8 @@ export class PartsPlansController {
       id: p.id,
       projectId: p.projectId,
       projectTitle: p.projectTitle,
+      projectStatus: p.projectStatus,
+      customerName: p.customerName ?? null,
       version: Number(p.version),
       status: p.status,
       objective: p.objective,

@@ -19,6 +19,7 @@ import {
   type PlanObjective,
   type PlanPart,
   type PlanSlot,
+  type ProjectStatus,
 } from '@swapwright/shared';
 import { randomUUID } from 'node:crypto';
 import { DataSource, In, Not } from 'typeorm';
@@ -241,10 +242,11 @@ export class PartsPlansService {
   }
 
   /** The most recent plans of the shop with their project titles, newest first (the counter's work list). */
-  async recent(user: Pick<AuthUser, 'shopId'>): Promise<Array<PartsPlanRecord & { projectTitle: string }>> {
+  async recent(user: Pick<AuthUser, 'shopId'>): Promise<Array<PartsPlanRecord & { projectTitle: string; projectStatus: ProjectStatus; customerName: string | null }>> {
     const rows = await this.dataSource.query(
-      `SELECT p.id, p.projectId, p.version, p.status, p.objective, p.totalCents, p.createdAt, pr.title AS projectTitle
-         FROM parts_plans p JOIN projects pr ON pr.id = p.projectId
+      `SELECT p.id, p.projectId, p.version, p.status, p.objective, p.totalCents, p.createdAt, pr.title AS projectTitle, pr.status AS projectStatus,
+              c.name AS customerName
+         FROM parts_plans p JOIN projects pr ON pr.id = p.projectId LEFT JOIN customers c ON c.id = pr.customerId AND c.shopId = pr.shopId
         WHERE p.shopId = ? AND p.version = (SELECT MAX(version) FROM parts_plans q WHERE q.projectId = p.projectId)
         ORDER BY p.createdAt DESC LIMIT 50`,
       [user.shopId],

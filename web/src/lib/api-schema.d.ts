@@ -4018,6 +4018,12 @@ export interface components {
             id: string;
             projectId: string;
             projectTitle: string;
+            /**
+             * @description The project's stage: a done job's list is kept but no longer worked
+             * @enum {string}
+             */
+            projectStatus: "intake" | "measured" | "fit-checked" | "parts-planned" | "quote-sent" | "approved" | "deposit-paid" | "in-the-bay" | "done";
+            customerName: string | null;
             version: number;
             status: string;
             objective: string;

@@ -2,6 +2,8 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   CHECK_STATUSES,
   COUNTER_STATUSES,
+  PROJECT_STATUSES,
+  type ProjectStatus,
   PART_CATEGORIES,
   PLAN_OBJECTIVES,
   PLAN_SLOTS,
@@ -207,6 +209,8 @@ export class PlanSummaryResponseDto {
   @ApiProperty() id: string;
   @ApiProperty() projectId: string;
   @ApiProperty() projectTitle: string;
+  @ApiProperty({ enum: PROJECT_STATUSES, description: "The project's stage: a done job's list is kept but no longer worked" }) projectStatus: ProjectStatus;
+  @ApiProperty({ type: String, nullable: true }) customerName: string | null;
   @ApiProperty() version: number;
   @ApiProperty() status: string;
   @ApiProperty() objective: string;

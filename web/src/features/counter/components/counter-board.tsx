@@ -6,7 +6,7 @@ import { palette } from '@/config/theme';
 import { formatMoneyCents } from '@/lib/units';
 import { downloadPickList } from '../api/download-pick-list';
 import { type CounterLine, useCounterLines } from '../api/get-counter-lines';
-import { useRecentPartsPlans } from '../api/get-recent-parts-plans';
+import { type PlanSummary, useRecentPartsPlans } from '../api/get-recent-parts-plans';
 import { useIssueCounterLine } from '../api/issue-counter-line';
 import { useIssuePartsPlan } from '../api/issue-parts-plan';
 import { useMarkCounterLine } from '../api/mark-counter-line';
@@ -23,6 +23,12 @@ export type CounterBoardProps = {
 };
 
 /** The counter's job board: each project's latest plan as a matched parts list with stock and bins, reservations and a printable pick list. */
+/** A job in the counter's list: the project, its customer and the plan's version (two trucks of one model read apart). */
+function jobOption(plan: PlanSummary) {
+  const customer = plan.customerName ? ` · ${plan.customerName}` : '';
+  return { value: plan.id, label: `${plan.projectTitle}${customer} · plan v${plan.version}` };
+}
+
 export function CounterBoard({ currency }: CounterBoardProps) {
   const plans = useRecentPartsPlans();
   // The job chosen is in the address (?plan=), so a reload or a link from its work order opens the same list.
@@ -36,7 +42,10 @@ export function CounterBoard({ currency }: CounterBoardProps) {
       },
       { replace: true },
     );
-  const planId = chosen ?? plans.data?.[0]?.id;
+  // Jobs still being worked first; a done job's list stays to look up, under its own heading.
+  const open = (plans.data ?? []).filter((p) => p.projectStatus !== 'done');
+  const done = (plans.data ?? []).filter((p) => p.projectStatus === 'done');
+  const planId = chosen ?? open[0]?.id ?? done[0]?.id;
   const plan = plans.data?.find((p) => p.id === planId);
   const lines = useCounterLines(planId);
   const reserve = useReserveCounterLine();
@@ -141,7 +150,10 @@ export function CounterBoard({ currency }: CounterBoardProps) {
             loading={plans.isLoading}
             value={planId}
             onChange={setChosen}
-            options={(plans.data ?? []).map((p) => ({ value: p.id, label: `${p.projectTitle} · plan v${p.version}` }))}
+            options={[
+              ...(open.length > 0 ? [{ label: 'Jobs in progress', options: open.map(jobOption) }] : []),
+              ...(done.length > 0 ? [{ label: 'Built (done)', options: done.map(jobOption) }] : []),
+            ]}
           />
           <Typography.Text strong className="print-only">
             {plan ? `${plan.projectTitle} · plan v${plan.version}` : ''}

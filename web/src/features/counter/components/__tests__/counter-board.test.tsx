@@ -14,6 +14,8 @@ const PLAN: PlanSummary = {
   id: 'plan-1',
   projectId: 'project-1',
   projectTitle: 'Invented pickup swap',
+  projectStatus: 'approved',
+  customerName: 'Juno Example',
   version: 2,
   status: 'locked',
   objective: 'cost',
@@ -119,6 +121,26 @@ describe('CounterBoard', () => {
     // One line is set aside (the regulator is already issued, the pan not set aside): the header issues it with the rest.
     await userEvent.click(screen.getByRole('button', { name: 'Issue all set aside (1)' }));
     await waitFor(() => expect(post).toHaveBeenCalledWith('/parts-plans/plan-1/issue', {}));
+  });
+
+  it('opens on a job in progress, lists built jobs under their own heading, and opens the job the address names', async () => {
+    setWindowWidth(1440);
+    const built: PlanSummary = { ...PLAN, id: 'plan-0', projectId: 'project-0', projectTitle: 'Invented wagon swap', projectStatus: 'done', customerName: 'Odile Example' };
+    const queryClient = createTestQueryClient();
+    // the built job's list is the newest: still the job in progress opens first
+    queryClient.setQueryData(counterKeys.plans(), [built, PLAN]);
+    queryClient.setQueryData(counterKeys.lines('plan-1'), LINES);
+    queryClient.setQueryData(counterKeys.lines('plan-0'), []);
+    vi.spyOn(apiClient, 'get').mockImplementation(async (url: string) => ({ data: url === '/parts-plans' ? [built, PLAN] : [] }));
+    const { unmount } = renderWithApp(<CounterBoard currency="USD" />, { queryClient });
+    expect(screen.getByRole('combobox', { name: 'Job' }).closest('.ant-select')).toHaveTextContent('Invented pickup swap · Juno Example · plan v2');
+    await userEvent.click(screen.getByRole('combobox', { name: 'Job' }));
+    expect(await screen.findByText('Jobs in progress')).toBeInTheDocument();
+    expect(screen.getByText('Built (done)')).toBeInTheDocument();
+    unmount();
+
+    renderWithApp(<CounterBoard currency="USD" />, { queryClient, route: '/parts-counter?plan=plan-0' });
+    expect(screen.getByRole('combobox', { name: 'Job' }).closest('.ant-select')).toHaveTextContent('Invented wagon swap · Odile Example · plan v2');
   });
 
   it('names the exported pick list after the job', () => {
