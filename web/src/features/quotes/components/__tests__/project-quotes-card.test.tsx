@@ -6,6 +6,7 @@ import { apiClient } from '@/lib/api-client';
 import { renderWithApp } from '@/test/render';
 import type { Quote } from '../../types';
 import { ProjectQuotesCard } from '../project-quotes-card';
+import { SendQuoteConfirm } from '../send-quote-confirm';
 import { QuoteWorkspace } from '../quote-workspace';
 import { LINES, quoteStub } from './quote-stub';
 
@@ -201,6 +202,7 @@ describe('QuoteWorkspace: sending a revision to the customer', () => {
     await userEvent.click(await screen.findByRole('button', { name: 'Send revision 1 to the customer' }));
     expect(await screen.findByTestId('send-quote-confirm')).toHaveTextContent('Marlo Penhallow (marlo@penhallow.test)');
     expect(screen.getByTestId('send-quote-confirm')).toHaveTextContent('total $1,810.71, deposit on approval $543.21');
+    expect(screen.queryByTestId('send-quote-free-lines')).toBeNull();
     expect(post).not.toHaveBeenCalled();
     await userEvent.click(screen.getByRole('button', { name: 'Not yet' }));
     expect(post).not.toHaveBeenCalled();
@@ -208,4 +210,22 @@ describe('QuoteWorkspace: sending a revision to the customer', () => {
     await userEvent.click(await screen.findByRole('button', { name: 'Send' }));
     await waitFor(() => expect(post).toHaveBeenCalledWith('/quotes/quote-7/send', undefined, expect.anything()));
   });
+});
+
+describe('SendQuoteConfirm: lines at nothing', () => {
+  it('names the lines the customer would read at $0.00 before the quote goes', async () => {
+    const quote = quoteStub();
+    const lines = quote.revision.lines.map((line) => (line.key === 'line-install' ? { ...line, hours: 0, lineTotalCents: 0 } : line));
+    render(quoteStub({ lines }));
+    await userEvent.click(screen.getByRole('button', { name: 'Send' }));
+    expect(await screen.findByTestId('send-quote-free-lines')).toHaveTextContent('1 line reads $0.00 to the customer: Install pan and pickup.');
+  });
+
+  function render(quote: ReturnType<typeof quoteStub>) {
+    renderWithApp(
+      <SendQuoteConfirm quote={quote} onConfirm={() => undefined}>
+        <button type="button">Send</button>
+      </SendQuoteConfirm>,
+    );
+  }
 });
