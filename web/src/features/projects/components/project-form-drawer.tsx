@@ -1,5 +1,5 @@
 import { moneySign } from '@swapwright/shared';
-import { Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
+import { App, Button, Col, Drawer, Flex, Form, Input, Radio, Row, Select } from 'antd';
 import { BoundedNumberInput, plainNumberRule } from '@/components/bounded-number-input';
 import { useEffect } from 'react';
 import { FormErrorAlert } from '@/components/form-error-alert';
@@ -72,6 +72,7 @@ export function ProjectFormDrawer({
   noOtherCustomers,
 }: ProjectFormDrawerProps) {
   const [form] = Form.useForm<ProjectFormValues>();
+  const { modal } = App.useApp();
   const drawerSize = useDrawerSize(520);
   const isEdit = Boolean(project);
   const powerUnit = unitSystem === 'in' ? 'hp' : 'kW';
@@ -80,6 +81,18 @@ export function ProjectFormDrawer({
     notifySuccess({ title: isEdit ? 'Project saved' : 'Project opened', description: saved.title });
     onSaved?.(saved);
     onClose();
+  };
+  /** Cancel, Esc and the close button ask before throwing away what was typed. */
+  const requestClose = () => {
+    if (!form.isFieldsTouched()) return onClose();
+    modal.confirm({
+      title: 'Discard what you typed?',
+      content: isEdit ? 'The changes to this project are not saved.' : 'The project is not opened yet.',
+      okText: 'Discard',
+      okButtonProps: { danger: true },
+      cancelText: 'Keep editing',
+      onOk: onClose,
+    });
   };
   const create = useCreateProject({ onSuccess: done });
   const update = useUpdateProject({ onSuccess: done });
@@ -144,13 +157,13 @@ export function ProjectFormDrawer({
   return (
     <Drawer
       open={open}
-      onClose={onClose}
+      onClose={requestClose}
       title={isEdit ? `Edit ${project?.title}` : 'New project'}
       size={drawerSize}
       destroyOnHidden
       footer={
         <Flex justify="flex-end" gap={8}>
-          <Button onClick={onClose}>Cancel</Button>
+          <Button onClick={requestClose}>Cancel</Button>
           <Button type="primary" loading={mutation.isPending} onClick={() => form.submit()}>
             {isEdit ? 'Save project' : 'Open project'}
           </Button>

@@ -129,3 +129,24 @@ describe('ProjectFormDrawer: a customer just added', () => {
     expect(post.mock.calls[0][1]).toMatchObject({ customerId: 'cust-new' });
   });
 });
+
+describe('ProjectFormDrawer: closing', () => {
+  it('closes at once when nothing was typed, and asks before discarding what was', async () => {
+    setWindowWidth(1440);
+    const onClose = vi.fn();
+    renderWithApp(<ProjectFormDrawer open onClose={onClose} customerOptions={[]} noOtherCustomers />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Cancel' }));
+    expect(onClose).toHaveBeenCalledTimes(1);
+
+    await fillTitleAndVehicle();
+    await userEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    expect((await screen.findAllByText('Discard what you typed?')).length).toBeGreaterThan(0);
+    await userEvent.click(screen.getByRole('button', { name: 'Keep editing' }));
+    expect(onClose).toHaveBeenCalledTimes(1);
+    expect(screen.getByLabelText('Project title')).toHaveValue('Own flatbed swap');
+
+    await userEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    await userEvent.click(await screen.findByRole('button', { name: 'Discard' }));
+    await waitFor(() => expect(onClose).toHaveBeenCalledTimes(2));
+  });
+});
