@@ -72,6 +72,7 @@ export * from './dates/calendar-date';
 export * from './quoting/exact-money';
 export * from './quoting/money-format';
 export * from './quoting/quote-money';
+export * from './quoting/rate-words';
 export * from './quoting/quote-status-words';
 export * from './jobs/job-state-words';
 export * from './quoting/line-text';

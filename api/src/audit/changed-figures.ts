@@ -1,4 +1,4 @@
-import { formatMoney } from '@swapwright/shared';
+import { RATE_FIGURE_WORDS } from '@swapwright/shared';
 
 /** The figures a change moves: each named field whose new value differs from the current one (null means none). */
 export interface ChangedFigures {
@@ -7,19 +7,6 @@ export interface ChangedFigures {
   /** "labor rate $135.00 per hour → $142.50 per hour, …" for the audit entry's summary. */
   description: string;
 }
-
-const percent = (value: number) => `${value} %`;
-
-/** How the owner names and reads each rate and term in the audit log. */
-const FIGURE_WORDS: Record<string, { name: string; format: (value: number, currency: string) => string }> = {
-  laborRatePerHour: { name: 'labor rate', format: (value, currency) => `${formatMoney(Math.round(value * 100), currency)} per hour` },
-  taxRatePercent: { name: 'tax on parts', format: percent },
-  shopSuppliesPercent: { name: 'shop supplies', format: percent },
-  laborTaxPercent: { name: 'tax on labor', format: percent },
-  suppliesCapCents: { name: 'shop supplies cap', format: (value, currency) => formatMoney(value, currency) },
-  depositPercent: { name: 'deposit', format: percent },
-  defaultMarkupPercent: { name: 'default markup', format: percent },
-};
 
 const asFigure = (value: unknown): number | null => (value === null || value === undefined ? null : Number(value));
 
@@ -44,10 +31,10 @@ export function changedFigures<F extends string>(
   const moved = Object.keys(after);
   if (moved.length === 0) return null;
   const words = (field: string, value: number | null) =>
-    value === null ? 'none' : FIGURE_WORDS[field] ? FIGURE_WORDS[field].format(value, currency) : String(value);
+    value === null ? 'none' : RATE_FIGURE_WORDS[field] ? RATE_FIGURE_WORDS[field].format(value, currency) : String(value);
   return {
     before,
     after,
-    description: moved.map((field) => `${FIGURE_WORDS[field]?.name ?? field} ${words(field, before[field])} → ${words(field, after[field])}`).join(', '),
+    description: moved.map((field) => `${RATE_FIGURE_WORDS[field]?.name ?? field} ${words(field, before[field])} → ${words(field, after[field])}`).join(', '),
   };
 }

@@ -1,4 +1,4 @@
-import { COUNTER_STATUS_LABELS, formatMoney, JOB_STATE_LABELS, QUOTE_STATUS_LABELS } from '@swapwright/shared';
+import { COUNTER_STATUS_LABELS, formatMoney, JOB_STATE_LABELS, QUOTE_STATUS_LABELS, RATE_FIGURE_WORDS } from '@swapwright/shared';
 import { formatDateTime } from '@/lib/dates';
 
 /** The recorded fields in words, as the owner reads them in the audit log. */
@@ -25,13 +25,6 @@ const FIELD_WORDS: Record<string, string> = {
   reason: 'Reason',
   readings: 'Readings',
   signedOffAt: 'Signed off',
-  laborRatePerHour: 'Labor rate',
-  taxRatePercent: 'Tax on parts',
-  shopSuppliesPercent: 'Shop supplies',
-  laborTaxPercent: 'Tax on labor',
-  suppliesCapCents: 'Shop supplies cap',
-  depositPercent: 'Deposit share',
-  defaultMarkupPercent: 'Default markup',
   lines: 'Lines',
   changes: 'Changes',
 };
@@ -48,6 +41,12 @@ const humanise = (code: string) => {
   return words.charAt(0).toUpperCase() + words.slice(1);
 };
 
+/** A recorded field's name as the owner reads it: the app's own words, else the code made readable. */
+function fieldWords(field: string): string {
+  const rate = RATE_FIGURE_WORDS[field]?.name;
+  return FIELD_WORDS[field] ?? (rate ? rate.charAt(0).toUpperCase() + rate.slice(1) : humanise(field));
+}
+
 /** A state code in the app's own words for the kind of record the action changed. */
 function stateWords(action: string, code: string): string {
   if (action.startsWith('quote.')) return QUOTE_STATUS_LABELS[code as keyof typeof QUOTE_STATUS_LABELS] ?? humanise(code);
@@ -59,9 +58,8 @@ function stateWords(action: string, code: string): string {
 
 function valueWords(action: string, field: string, value: unknown, currency: string): string {
   if (value === null || value === undefined) return '—';
+  if (RATE_FIGURE_WORDS[field] && typeof value === 'number') return RATE_FIGURE_WORDS[field].format(value, currency);
   if (field.endsWith('Cents') && typeof value === 'number') return formatMoney(value, currency);
-  if (field === 'laborRatePerHour' && typeof value === 'number') return `${formatMoney(Math.round(value * 100), currency)} per hour`;
-  if (field.endsWith('Percent') && typeof value === 'number') return `${value.toLocaleString('en-US')} %`;
   if ((field === 'status' || field === 'state') && typeof value === 'string') return stateWords(action, value);
   if (field.endsWith('At') && typeof value === 'string') return formatDateTime(value);
   if (typeof value === 'number') return value.toLocaleString('en-US');
@@ -76,6 +74,6 @@ export function changeWords(action: string, values: Record<string, unknown> | nu
   const currency = typeof values.currency === 'string' ? values.currency : shopCurrency;
   const parts = Object.entries(values)
     .filter(([field]) => !HIDDEN_FIELDS.has(field) && field !== 'currency')
-    .map(([field, value]) => `${FIELD_WORDS[field] ?? humanise(field)}: ${valueWords(action, field, value, currency)}`);
+    .map(([field, value]) => `${fieldWords(field)}: ${valueWords(action, field, value, currency)}`);
   return parts.length > 0 ? parts.join(', ') : '—';
 }
